@@ -1,0 +1,120 @@
+/**
+ * The electrical model: plain readonly records, nets named by strings.
+ * Lengths (W, L) are in micrometres, resistance in ohms, capacitance in farads, voltage in volts.
+ */
+
+export type MosKind = 'nmos' | 'pmos';
+
+export interface MosDevice {
+  readonly kind: MosKind;
+  readonly name: string;
+  readonly gate: string;
+  readonly drain: string;
+  readonly source: string;
+  /** Bulk (body) net; when absent the rule checks assume the conventional rail. */
+  readonly bulk?: string;
+  /** Channel width, µm. */
+  readonly w: number;
+  /** Channel length, µm. */
+  readonly l: number;
+}
+
+export interface ResistorDevice {
+  readonly kind: 'resistor';
+  readonly name: string;
+  readonly a: string;
+  readonly b: string;
+  readonly ohms: number;
+}
+
+export interface CapacitorDevice {
+  readonly kind: 'capacitor';
+  readonly name: string;
+  readonly a: string;
+  readonly b: string;
+  readonly farads: number;
+}
+
+/** A protection diode: kept in the netlist, never conducts in steady state. */
+export interface DiodeDevice {
+  readonly kind: 'diode';
+  readonly name: string;
+  readonly anode: string;
+  readonly cathode: string;
+}
+
+export type Device = MosDevice | ResistorDevice | CapacitorDevice | DiodeDevice;
+export type DeviceKind = Device['kind'];
+
+/**
+ * A rail is a net held at a fixed voltage. A supply without `volts` sits at the technology's VDD;
+ * a ground is always 0 V.
+ */
+export interface Rail {
+  readonly net: string;
+  readonly role: 'supply' | 'ground';
+  readonly volts?: number;
+}
+
+export interface Netlist {
+  readonly name: string;
+  readonly devices: readonly Device[];
+  readonly rails: readonly Rail[];
+  /** Nets driven by input pins, in the order the truth table lists them. */
+  readonly inputs: readonly string[];
+  /** Nets observed as outputs. */
+  readonly outputs: readonly string[];
+}
+
+/** Channel terminals of a device: the two nets its channel (or body) joins, if any. */
+export function channelNets(device: Device): readonly [string, string] | null {
+  switch (device.kind) {
+    case 'nmos':
+    case 'pmos':
+      return [device.drain, device.source];
+    case 'resistor':
+      return [device.a, device.b];
+    case 'capacitor':
+    case 'diode':
+      return null;
+  }
+}
+
+/** Every net a device touches, with the terminal name. */
+export function deviceTerminals(device: Device): readonly { readonly terminal: string; readonly net: string }[] {
+  switch (device.kind) {
+    case 'nmos':
+    case 'pmos': {
+      const t = [
+        { terminal: 'gate', net: device.gate },
+        { terminal: 'drain', net: device.drain },
+        { terminal: 'source', net: device.source },
+      ];
+      return device.bulk === undefined ? t : [...t, { terminal: 'bulk', net: device.bulk }];
+    }
+    case 'resistor':
+    case 'capacitor':
+      return [
+        { terminal: 'a', net: device.a },
+        { terminal: 'b', net: device.b },
+      ];
+    case 'diode':
+      return [
+        { terminal: 'anode', net: device.anode },
+        { terminal: 'cathode', net: device.cathode },
+      ];
+  }
+}
+
+/** All net names in first-appearance order: rails, inputs, outputs, then device terminals. */
+export function netNames(netlist: Netlist): string[] {
+  const seen = new Set<string>();
+  const add = (n: string): void => {
+    seen.add(n);
+  };
+  netlist.rails.forEach((r) => add(r.net));
+  netlist.inputs.forEach(add);
+  netlist.outputs.forEach(add);
+  for (const d of netlist.devices) for (const t of deviceTerminals(d)) add(t.net);
+  return [...seen];
+}

@@ -1,0 +1,60 @@
+/**
+ * Per-design technology settings. Units: volts, ohms, µm, farads, amperes.
+ *
+ * Defaults are the 0.25 µm process of Rabaey, Chandrakasan, Nikolić, "Digital Integrated Circuits:
+ * A Design Perspective", 2nd ed., Prentice Hall 2003 (tables 3.2 and 3.3): VDD 2.5 V, VT0 0.43 V
+ * (NMOS) and −0.4 V (PMOS), k' 115 and 30 µA/V², and an equivalent on-resistance of about 13 kΩ
+ * (NMOS) and 31 kΩ (PMOS) at W/L = 1. These are textbook values recalled from memory, not a foundry's.
+ * The input thresholds 0.35·VDD and 0.65·VDD are the usual low-voltage CMOS input levels of the JEDEC
+ * JESD8 family (from memory). Gate capacitance uses Cox ≈ 6 fF/µm² for tox ≈ 5.7 nm (RCN, from memory);
+ * diffusion capacitance and off-current are round illustrative values (common practice, no source).
+ */
+export interface Technology {
+  /** Where the values come from, shown in the UI and reports. */
+  readonly source: string;
+  readonly vdd: number;
+  /** NMOS on-resistance at W/L = 1, ohms. A device's is rn · L / W. */
+  readonly rn: number;
+  /** PMOS on-resistance at W/L = 1, ohms. */
+  readonly rp: number;
+  readonly vtn: number;
+  /** Magnitude of the PMOS threshold, volts. */
+  readonly vtp: number;
+  /** Highest voltage read as 0. */
+  readonly vil: number;
+  /** Lowest voltage read as 1. */
+  readonly vih: number;
+  /** Gate capacitance per channel area, F/µm². */
+  readonly cgPerArea: number;
+  /** Drain or source diffusion capacitance per µm of width, F/µm. */
+  readonly cdPerWidth: number;
+  /** Off-state (subthreshold) current per µm of width at VDD, A/µm. */
+  readonly ioffPerWidth: number;
+  /** Process transconductance k' = µCox, A/V² (NMOS, PMOS magnitude). */
+  readonly kpn: number;
+  readonly kpp: number;
+}
+
+export const TEXTBOOK_SOURCE =
+  'Rabaey, Chandrakasan, Nikolić, Digital Integrated Circuits, 2nd ed. (2003), 0.25 µm process, tables 3.2–3.3';
+
+export const DEFAULT_TECHNOLOGY: Technology = {
+  source: TEXTBOOK_SOURCE,
+  vdd: 2.5,
+  rn: 13e3,
+  rp: 31e3,
+  vtn: 0.43,
+  vtp: 0.4,
+  vil: 0.35 * 2.5,
+  vih: 0.65 * 2.5,
+  cgPerArea: 6e-15,
+  cdPerWidth: 1e-15,
+  ioffPerWidth: 1e-10,
+  kpn: 115e-6,
+  kpp: 30e-6,
+};
+
+/** A technology at another supply: thresholds follow VDD as fractions 0.35 and 0.65. */
+export function withVdd(tech: Technology, vdd: number): Technology {
+  return { ...tech, vdd, vil: 0.35 * vdd, vih: 0.65 * vdd };
+}
