@@ -1,0 +1,123 @@
+/**
+ * Reading and writing Railwise design files: JSON text → migrated → validated → Design, and back.
+ * Text in, text out: the caller (browser or command line) reads and writes the bytes.
+ */
+import type { z } from 'zod';
+import type { Design } from '../model/design.ts';
+import { CURRENT_DESIGN_VERSION, documentVersion, migrateToCurrent, type RawDocument } from './migrations.ts';
+import { DESIGN_FORMAT_TAG, designFileV1Schema } from './schema.ts';
+
+export { CURRENT_DESIGN_VERSION } from './migrations.ts';
+
+/** A design file that cannot be used. `field` is the path of the offending value ('' for the whole file). */
+export class DesignFileError extends Error {
+  override readonly name = 'DesignFileError';
+  constructor(
+    readonly file: string,
+    readonly field: string,
+    detail: string,
+    /** 1-based line of a JSON syntax error, when known. */
+    readonly line?: number,
+  ) {
+    super(
+      `${file}${line === undefined ? '' : `:${line}`}: ${field === '' ? '' : `field ${field}: `}${detail}`,
+    );
+  }
+}
+
+export function parseDesignFile(text: string, fileName: string): Design {
+  const raw = parseJson(text, fileName);
+  const version = documentVersion(raw);
+  if (version === null) {
+    throw new DesignFileError(
+      fileName,
+      'format',
+      `not a Railwise design file (expected "format": "${DESIGN_FORMAT_TAG}")`,
+    );
+  }
+  if (version > CURRENT_DESIGN_VERSION) {
+    throw new DesignFileError(
+      fileName,
+      'version',
+      `written by a newer Railwise (version ${version}); this build reads up to version ${CURRENT_DESIGN_VERSION}`,
+    );
+  }
+  const result = designFileV1Schema.safeParse(migrateToCurrent(raw, version));
+  if (!result.success) throw schemaError(fileName, raw, version, result.error);
+  const { format: _format, version: _version, ...design } = result.data;
+  return design;
+}
+
+/** Stable key order and two-space indentation, so saved files diff well under version control. */
+export function serializeDesign(design: Design): string {
+  const doc = {
+    format: DESIGN_FORMAT_TAG,
+    version: CURRENT_DESIGN_VERSION,
+    name: design.name,
+    technology: design.technology,
+    netlist: design.netlist,
+    expectations: design.expectations,
+    sequences: design.sequences,
+    ...(design.sheet === undefined ? {} : { sheet: design.sheet }),
+    ...(design.notes === undefined ? {} : { notes: design.notes }),
+  };
+  return `${JSON.stringify(doc, null, 2)}\n`;
+}
+
+function parseJson(text: string, fileName: string): RawDocument {
+  let value: unknown;
+  try {
+    value = JSON.parse(text);
+  } catch (e) {
+    const message = e instanceof Error ? e.message : String(e);
+    throw new DesignFileError(fileName, '', `not valid JSON: ${message}`, jsonErrorLine(text, message));
+  }
+  if (typeof value !== 'object' || value === null || Array.isArray(value)) {
+    throw new DesignFileError(fileName, '', 'a design file holds one JSON object');
+  }
+  return value as RawDocument;
+}
+
+/** Engines word syntax errors differently: some give a character position, some a line. */
+function jsonErrorLine(text: string, message: string): number | undefined {
+  const line = /line (\d+)/.exec(message);
+  if (line) return Number(line[1]);
+  const pos = /position (\d+)/.exec(message);
+  if (!pos) return undefined;
+  return text.slice(0, Number(pos[1])).split('\n').length;
+}
+
+/** Names the first offending field as the file spells it, e.g. `netlist.devices[3].w`, plus the device's name. */
+function schemaError(
+  fileName: string,
+  raw: RawDocument,
+  version: number,
+  error: z.ZodError,
+): DesignFileError {
+  const [first, ...rest] = error.issues;
+  if (first === undefined) return new DesignFileError(fileName, '', 'invalid design');
+  // A migrated bare netlist sits under `netlist`; report paths as the file has them.
+  const path = version === 0 && first.path[0] === 'netlist' ? first.path.slice(1) : first.path;
+  const field = path
+    .map((k, i) => (typeof k === 'number' ? `[${k}]` : i === 0 ? String(k) : `.${String(k)}`))
+    .join('');
+  const named = namedElement(path, raw);
+  const more = rest.length > 0 ? ` (and ${rest.length} more problem${rest.length > 1 ? 's' : ''})` : '';
+  return new DesignFileError(fileName, field, `${first.message}${named}${more}`);
+}
+
+/** ` (in M7)` when the path runs through an array element that has a name. */
+function namedElement(path: readonly PropertyKey[], root: unknown): string {
+  let node: unknown = root;
+  let name = '';
+  for (const key of path) {
+    node =
+      typeof node === 'object' && node !== null ? (node as Record<PropertyKey, unknown>)[key] : undefined;
+    const n =
+      typeof key === 'number' && typeof node === 'object' && node !== null
+        ? (node as { name?: unknown }).name
+        : undefined;
+    if (typeof n === 'string' && n !== '') name = n;
+  }
+  return name === '' ? '' : ` (in ${name})`;
+}

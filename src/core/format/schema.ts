@@ -1,0 +1,132 @@
+/**
+ * The zod schema of the design file, version 1. Units follow the model: W and L in µm, ohms,
+ * farads, volts, amperes. Every object is a plain `z.object`, so unknown keys are dropped on load
+ * rather than rejected: a file written by a newer build still opens, minus what this build cannot
+ * represent.
+ */
+import { z } from 'zod';
+import { DEFAULT_TECHNOLOGY } from '../model/technology.ts';
+
+const netName = z.string().min(1, 'a net name cannot be empty');
+const deviceName = z.string().min(1, 'a device name cannot be empty');
+const positive = z.number().positive();
+
+const mosSchema = z.object({
+  kind: z.enum(['nmos', 'pmos']),
+  name: deviceName,
+  gate: netName,
+  drain: netName,
+  source: netName,
+  bulk: netName.optional(),
+  w: positive,
+  l: positive,
+});
+
+const resistorSchema = z.object({
+  kind: z.literal('resistor'),
+  name: deviceName,
+  a: netName,
+  b: netName,
+  ohms: positive,
+});
+
+const capacitorSchema = z.object({
+  kind: z.literal('capacitor'),
+  name: deviceName,
+  a: netName,
+  b: netName,
+  farads: positive,
+});
+
+const diodeSchema = z.object({
+  kind: z.literal('diode'),
+  name: deviceName,
+  anode: netName,
+  cathode: netName,
+});
+
+export const deviceSchema = z.discriminatedUnion('kind', [
+  mosSchema,
+  resistorSchema,
+  capacitorSchema,
+  diodeSchema,
+]);
+
+export const railSchema = z.object({
+  net: netName,
+  role: z.enum(['supply', 'ground']),
+  volts: z.number().optional(),
+});
+
+export const netlistSchema = z.object({
+  name: z.string(),
+  devices: z.array(deviceSchema),
+  rails: z.array(railSchema),
+  inputs: z.array(netName),
+  outputs: z.array(netName),
+});
+
+/** Each field may be left out of a hand-written file; missing ones take the textbook defaults. */
+export const technologySchema = z.object({
+  source: z.string().default(DEFAULT_TECHNOLOGY.source),
+  vdd: positive.default(DEFAULT_TECHNOLOGY.vdd),
+  rn: positive.default(DEFAULT_TECHNOLOGY.rn),
+  rp: positive.default(DEFAULT_TECHNOLOGY.rp),
+  vtn: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.vtn),
+  vtp: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.vtp),
+  vil: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.vil),
+  vih: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.vih),
+  cgPerArea: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.cgPerArea),
+  cdPerWidth: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.cdPerWidth),
+  ioffPerWidth: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.ioffPerWidth),
+  kpn: positive.default(DEFAULT_TECHNOLOGY.kpn),
+  kpp: positive.default(DEFAULT_TECHNOLOGY.kpp),
+});
+
+/** Hand-written files may use the numbers 0 and 1 for input values. */
+const inputValueSchema = z
+  .union([z.enum(['0', '1', 'X', 'Z']), z.literal(0), z.literal(1)])
+  .transform((v) => (v === 0 ? '0' : v === 1 ? '1' : v));
+
+export const sequenceSchema = z.object({
+  name: z.string(),
+  steps: z.array(z.record(z.string(), inputValueSchema)),
+});
+
+const pointSchema = z.object({ x: z.number(), y: z.number() });
+
+export const sheetPartSchema = z.object({
+  id: z.string().min(1),
+  kind: z.enum(['nmos', 'pmos', 'resistor', 'capacitor', 'vdd', 'gnd', 'input', 'output', 'label']),
+  name: z.string(),
+  x: z.number(),
+  y: z.number(),
+  rotation: z.union([z.literal(0), z.literal(1), z.literal(2), z.literal(3)]),
+  mirror: z.boolean(),
+  w: positive.optional(),
+  l: positive.optional(),
+  ohms: positive.optional(),
+  farads: positive.optional(),
+});
+
+export const sheetSchema = z.object({
+  parts: z.array(sheetPartSchema),
+  wires: z.array(z.object({ id: z.string().min(1), points: z.array(pointSchema) })),
+});
+
+/** The marker that tells a Railwise design file from any other JSON. */
+export const DESIGN_FORMAT_TAG = 'railwise-design';
+
+export const designFileV1Schema = z.object({
+  format: z.literal(DESIGN_FORMAT_TAG),
+  version: z.literal(1),
+  name: z.string(),
+  technology: technologySchema.default(DEFAULT_TECHNOLOGY),
+  netlist: netlistSchema,
+  expectations: z.record(z.string(), z.string()).default({}),
+  sequences: z.array(sequenceSchema).default([]),
+  sheet: sheetSchema.optional(),
+  notes: z.string().optional(),
+});
+
+export type DesignFileV1 = z.infer<typeof designFileV1Schema>;
