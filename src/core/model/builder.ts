@@ -18,9 +18,7 @@ interface MosTerminals {
  * Each call returns a new builder; nothing is mutated.
  */
 export class CircuitBuilder {
-  private constructor(
-    private readonly netlist: Netlist,
-  ) {}
+  private constructor(private readonly netlist: Netlist) {}
 
   static empty(name: string): CircuitBuilder {
     return new CircuitBuilder({ name, devices: [], rails: [], inputs: [], outputs: [] });

@@ -81,7 +81,9 @@ export function channelNets(device: Device): readonly [string, string] | null {
 }
 
 /** Every net a device touches, with the terminal name. */
-export function deviceTerminals(device: Device): readonly { readonly terminal: string; readonly net: string }[] {
+export function deviceTerminals(
+  device: Device,
+): readonly { readonly terminal: string; readonly net: string }[] {
   switch (device.kind) {
     case 'nmos':
     case 'pmos': {

@@ -1,0 +1,94 @@
+import { NMOS, PMOS } from '../compile/compile.ts';
+import type { Frame } from './frame.ts';
+
+/**
+ * Threshold drop (SPEC §3.4) as a bottleneck path search. A high level passed by an NMOS is capped at
+ * Vg − Vtn; a low level passed by a PMOS is floored at Vg + |Vtp|; PMOS (for highs), NMOS (for lows) and
+ * resistors pass levels whole. Each net gets the best level over all conducting paths from the chosen
+ * sources (the widest path: the weakest device on the best path sets it), written to frame.best, and
+ * the element that set the drop to frame.limiter.
+ *
+ * `high` chooses the direction: maximise from sources at or above VDD/2, else minimise from the rest.
+ * Returns false when no chosen source reaches the component.
+ */
+export function bottleneck(frame: Frame, root: number, snapVolts: Float64Array, high: boolean): boolean {
+  const { c, topo, best, limiter, queue, inQueue } = frame;
+  const mid = c.tech.vdd / 2;
+  for (let i = frame.head[root]; i >= 0; i = frame.next[i]) {
+    best[i] = high ? -Infinity : Infinity;
+    limiter[i] = -1;
+  }
+  let qHead = 0;
+  let qTail = 0;
+  const size = queue.length;
+  let reached = false;
+  for (let j = frame.srcHead[root]; j >= 0; j = frame.srcNext[j]) {
+    const vs = frame.sourceEndVolts[j];
+    if (high !== vs >= mid) continue;
+    const e = frame.element(j);
+    const local = topo.elemLocalA[e] >= 0 ? topo.elemLocalA[e] : topo.elemLocalB[e];
+    if (offer(frame, local, passed(frame, e, vs, snapVolts, high), vs, e, high)) {
+      if (!inQueue[local]) {
+        inQueue[local] = 1;
+        queue[qTail] = local;
+        qTail = (qTail + 1) % size;
+      }
+    }
+    reached = true;
+  }
+  while (qHead !== qTail) {
+    const i = queue[qHead];
+    qHead = (qHead + 1) % size;
+    inQueue[i] = 0;
+    const n = frame.net(i);
+    for (let p = c.netChannels.start[n]; p < c.netChannels.start[n + 1]; p++) {
+      const e = c.netChannels.items[p];
+      const j = topo.elemLocal[e];
+      if (!frame.on[j]) continue;
+      const a = topo.elemLocalA[e];
+      const b = topo.elemLocalB[e];
+      if (a < 0 || b < 0) continue;
+      const other = a === i ? b : a;
+      if (offer(frame, other, passed(frame, e, best[i], snapVolts, high), best[i], e, high, limiter[i])) {
+        if (!inQueue[other]) {
+          inQueue[other] = 1;
+          queue[qTail] = other;
+          qTail = (qTail + 1) % size;
+        }
+      }
+    }
+  }
+  return reached;
+}
+
+/** Level after passing `v` through element e (see above). Unknown gate voltages pass the best case. */
+function passed(frame: Frame, e: number, v: number, snapVolts: Float64Array, high: boolean): number {
+  const { c } = frame;
+  const kind = c.chKind[e];
+  if (high && kind === NMOS) {
+    const vg = snapVolts[c.chGate[e]];
+    return Math.min(v, (Number.isNaN(vg) ? c.tech.vdd : vg) - c.tech.vtn);
+  }
+  if (!high && kind === PMOS) {
+    const vg = snapVolts[c.chGate[e]];
+    return Math.max(v, (Number.isNaN(vg) ? 0 : vg) + c.tech.vtp);
+  }
+  return v;
+}
+
+/** Records a better level for local net i; the limiter is e when e itself dropped the level. */
+function offer(
+  frame: Frame,
+  i: number,
+  v: number,
+  vIn: number,
+  e: number,
+  high: boolean,
+  inherited = -1,
+): boolean {
+  const better = high ? v > frame.best[i] + 1e-12 : v < frame.best[i] - 1e-12;
+  if (!better) return false;
+  frame.best[i] = v;
+  frame.limiter[i] = Math.abs(v - vIn) > 1e-12 ? e : inherited;
+  return true;
+}

@@ -1,0 +1,212 @@
+import { NMOS, RESISTOR } from '../compile/compile.ts';
+import type { Frame } from './frame.ts';
+import { classify, FLAG_BOUND, FLAG_MAYBE, LEVEL_1, LEVEL_X, MAYBE, OFF, ON } from './levels.ts';
+import { solveTrial } from './trial.ts';
+
+/**
+ * Exact handling of maybe-conducting devices (SPEC §3.7): a group with up to this many unknowns
+ * (devices whose gate is X, plus inputs driven to X) is solved for every on/off combination;
+ * a net is definite only if it reads the same in all of them. Past the bound the group is set to X.
+ */
+export const MAX_EXACT_UNKNOWNS = 10;
+
+/** Where one evaluation writes its result, indexed by global net / element. */
+export interface EvaluationTarget {
+  readonly volts: Float64Array;
+  readonly driven: Uint8Array;
+  readonly flags: Uint8Array;
+  readonly limiter: Int32Array;
+  readonly chCurrent: Float64Array;
+}
+
+/** Conduction of a channel element from its gate's level in `snapVolts`. */
+export function conductionOf(frame: Frame, e: number, snapVolts: Float64Array): number {
+  const { c } = frame;
+  if (c.chKind[e] === RESISTOR) return ON;
+  const level = classify(snapVolts[c.chGate[e]], c.tech.vil, c.tech.vih);
+  if (level === LEVEL_X) return MAYBE;
+  return (level === LEVEL_1) === (c.chKind[e] === NMOS) ? ON : OFF;
+}
+
+/**
+ * Evaluates CCC k against the previous round's voltages and writes the new state of its nets and
+ * the currents of its elements into `out`.
+ */
+export function evaluateCcc(
+  frame: Frame,
+  k: number,
+  snapVolts: Float64Array,
+  sourceVolts: Float64Array,
+  out: EvaluationTarget,
+): void {
+  frame.select(k);
+  const unknowns = collectUnknowns(frame, snapVolts, sourceVolts);
+  if (unknowns.length === 0) {
+    solveTrial(frame, snapVolts);
+    writeTrial(frame, out);
+    return;
+  }
+  enumerate(frame, unknowns, snapVolts, out);
+}
+
+interface Unknown {
+  /** Local element: a maybe device, or the element tying the group to an X input. */
+  readonly j: number;
+  readonly isSource: boolean;
+}
+
+/** Sets frame.on and frame.sourceEndVolts for the definite part; returns the unknowns. */
+function collectUnknowns(frame: Frame, snapVolts: Float64Array, sourceVolts: Float64Array): Unknown[] {
+  const { topo, c } = frame;
+  const unknowns: Unknown[] = [];
+  for (let j = 0; j < frame.elemCount; j++) {
+    const e = frame.element(j);
+    const conduction = conductionOf(frame, e, snapVolts);
+    frame.on[j] = conduction === OFF ? 0 : 1;
+    if (conduction === MAYBE) unknowns.push({ j, isSource: false });
+    const sourceEnd = topo.elemLocalA[e] < 0 ? c.chA[e] : topo.elemLocalB[e] < 0 ? c.chB[e] : -1;
+    frame.sourceEndVolts[j] = sourceEnd >= 0 ? sourceVolts[sourceEnd] : NaN;
+    if (sourceEnd >= 0 && Number.isNaN(sourceVolts[sourceEnd])) unknowns.push({ j, isSource: true });
+  }
+  return unknowns;
+}
+
+/**
+ * Splits the unknowns by the group (joined by on or maybe elements) they belong to, then steps all
+ * groups through their combinations together: combination i gives group g the low bits of i. Groups
+ * are independent, so each one sees each of its own combinations.
+ */
+function enumerate(frame: Frame, unknowns: Unknown[], snapVolts: Float64Array, out: EvaluationTarget): void {
+  const groupOf = groupsUnderMaybe(frame);
+  const byGroup = new Map<number, Unknown[]>();
+  for (const u of unknowns) {
+    const g = groupOf(u.j);
+    byGroup.set(g, [...(byGroup.get(g) ?? []), u]);
+  }
+  const overBound = new Set<number>();
+  let width = 0;
+  for (const [g, list] of byGroup) {
+    if (list.length > MAX_EXACT_UNKNOWNS) overBound.add(g);
+    else width = Math.max(width, list.length);
+  }
+  const merge = new TrialMerge(frame);
+  for (let combo = 0; combo < 1 << width; combo++) {
+    for (const [g, list] of byGroup) {
+      list.forEach((u, bit) => setUnknown(frame, u, overBound.has(g) ? 0 : (combo >> bit) & 1));
+    }
+    solveTrial(frame, snapVolts);
+    merge.add();
+  }
+  merge.finish(overBound, groupOf);
+  writeTrial(frame, out);
+}
+
+function setUnknown(frame: Frame, u: Unknown, bit: number): void {
+  if (u.isSource) frame.sourceEndVolts[u.j] = bit ? frame.c.tech.vdd : 0;
+  else frame.on[u.j] = bit;
+}
+
+/** Group (root local net) of each local element's channel under "on or maybe" conduction. */
+function groupsUnderMaybe(frame: Frame): (j: number) => number {
+  const { topo, parent } = frame;
+  for (let i = 0; i < frame.netCount; i++) parent[i] = i;
+  for (let j = 0; j < frame.elemCount; j++) {
+    if (!frame.on[j]) continue; // maybe elements are on here
+    const e = frame.element(j);
+    const a = topo.elemLocalA[e];
+    const b = topo.elemLocalB[e];
+    if (a < 0 || b < 0) continue;
+    const ra = frame.root(a);
+    const rb = frame.root(b);
+    if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
+  }
+  const roots = Int32Array.from({ length: frame.netCount }, (_, i) => frame.root(i));
+  return (j) => {
+    const e = frame.element(j);
+    const a = topo.elemLocalA[e];
+    return roots[a >= 0 ? a : topo.elemLocalB[e]];
+  };
+}
+
+/**
+ * Accumulates trials: a net keeps its value when every trial agrees on its level and on whether it
+ * is driven; otherwise it becomes X (flagged maybe). Currents are those of the trial drawing the most.
+ */
+class TrialMerge {
+  private readonly volts: Float64Array;
+  private readonly driven: Uint8Array;
+  private readonly flags: Uint8Array;
+  private readonly limiter: Int32Array;
+  private readonly level: Uint8Array;
+  private readonly agree: Uint8Array;
+  private readonly current: Float64Array;
+  private bestDraw = -1;
+  private trials = 0;
+
+  constructor(private readonly frame: Frame) {
+    this.volts = new Float64Array(frame.netCount);
+    this.driven = new Uint8Array(frame.netCount);
+    this.flags = new Uint8Array(frame.netCount);
+    this.limiter = new Int32Array(frame.netCount);
+    this.level = new Uint8Array(frame.netCount);
+    this.agree = new Uint8Array(frame.netCount).fill(1);
+    this.current = new Float64Array(frame.elemCount);
+  }
+
+  add(): void {
+    const f = this.frame;
+    const { vil, vih } = f.c.tech;
+    for (let i = 0; i < f.netCount; i++) {
+      const level = classify(f.volts[i], vil, vih);
+      if (this.trials === 0) {
+        this.volts[i] = f.volts[i];
+        this.driven[i] = f.driven[i];
+        this.flags[i] = f.flags[i];
+        this.limiter[i] = f.limiter[i];
+        this.level[i] = level;
+      } else if (level !== this.level[i] || f.driven[i] !== this.driven[i]) {
+        this.agree[i] = 0;
+      } else {
+        this.flags[i] |= f.flags[i];
+      }
+    }
+    let draw = 0;
+    for (let j = 0; j < f.elemCount; j++) draw += Math.abs(f.current[j]);
+    if (draw > this.bestDraw) {
+      this.bestDraw = draw;
+      this.current.set(f.current.subarray(0, f.elemCount));
+    }
+    this.trials++;
+  }
+
+  /** Writes the merged result back into the frame's output arrays. */
+  finish(overBound: ReadonlySet<number>, groupOf: (j: number) => number): void {
+    const f = this.frame;
+    const bounded = new Set<number>();
+    for (let j = 0; j < f.elemCount; j++) {
+      if (!overBound.has(groupOf(j))) continue;
+      const e = f.element(j);
+      for (const local of [f.topo.elemLocalA[e], f.topo.elemLocalB[e]]) if (local >= 0) bounded.add(local);
+    }
+    for (let i = 0; i < f.netCount; i++) {
+      const definite = this.agree[i] && !bounded.has(i);
+      const unknown = !definite;
+      f.volts[i] = unknown ? NaN : this.volts[i];
+      f.driven[i] = unknown ? 1 : this.driven[i];
+      f.limiter[i] = unknown ? -1 : this.limiter[i];
+      f.flags[i] = unknown ? FLAG_MAYBE | (bounded.has(i) ? FLAG_BOUND : 0) : this.flags[i];
+    }
+    f.current.set(this.current);
+  }
+}
+
+function writeTrial(frame: Frame, out: EvaluationTarget): void {
+  for (let i = 0; i < frame.netCount; i++) {
+    const n = frame.net(i);
+    out.volts[n] = frame.volts[i];
+    out.driven[n] = frame.driven[i];
+    out.flags[n] = frame.flags[i];
+    out.limiter[n] = frame.limiter[i];
+  }
+  for (let j = 0; j < frame.elemCount; j++) out.chCurrent[frame.element(j)] = frame.current[j];
+}

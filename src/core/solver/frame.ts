@@ -1,0 +1,93 @@
+import type { CompiledNetlist } from '../compile/compile.ts';
+import type { Topology } from './topology.ts';
+
+/**
+ * Scratch space for solving one channel-connected component (CCC) under one on/off assignment of
+ * its elements. Arrays are indexed by local net index (position in the CCC's net list) or local
+ * element index, and sized for the largest CCC so nothing is allocated per vector.
+ */
+export class Frame {
+  // Inputs of a trial.
+  /** Per local element: 1 when it conducts in this trial. */
+  readonly on: Uint8Array;
+  /** Per local element: voltage of its source end in this trial (X inputs are enumerated). */
+  readonly sourceEndVolts: Float64Array;
+  // Outputs of a trial.
+  readonly volts: Float64Array;
+  readonly driven: Uint8Array;
+  readonly flags: Uint8Array;
+  /** Global element that set the threshold drop of a degraded net, -1 otherwise. */
+  readonly limiter: Int32Array;
+  /** Current from A to B per local element, amperes. */
+  readonly current: Float64Array;
+  // Work arrays.
+  readonly parent: Int32Array;
+  readonly best: Float64Array;
+  readonly queue: Int32Array;
+  readonly inQueue: Uint8Array;
+  /** Linked lists of a component's nets and of the elements tying it to sources. */
+  readonly head: Int32Array;
+  readonly next: Int32Array;
+  readonly srcHead: Int32Array;
+  readonly srcNext: Int32Array;
+
+  k = 0;
+  netStart = 0;
+  netCount = 0;
+  elemStart = 0;
+  elemCount = 0;
+
+  constructor(
+    readonly c: CompiledNetlist,
+    readonly topo: Topology,
+  ) {
+    let maxNets = 1;
+    let maxElems = 1;
+    for (let k = 0; k < topo.cccCount; k++) {
+      maxNets = Math.max(maxNets, topo.cccNets.start[k + 1] - topo.cccNets.start[k]);
+      maxElems = Math.max(maxElems, topo.cccElements.start[k + 1] - topo.cccElements.start[k]);
+    }
+    this.on = new Uint8Array(maxElems);
+    this.sourceEndVolts = new Float64Array(maxElems);
+    this.current = new Float64Array(maxElems);
+    this.volts = new Float64Array(maxNets);
+    this.driven = new Uint8Array(maxNets);
+    this.flags = new Uint8Array(maxNets);
+    this.limiter = new Int32Array(maxNets);
+    this.parent = new Int32Array(maxNets);
+    this.best = new Float64Array(maxNets);
+    this.queue = new Int32Array(maxNets + 1);
+    this.inQueue = new Uint8Array(maxNets);
+    this.head = new Int32Array(maxNets);
+    this.next = new Int32Array(maxNets);
+    this.srcHead = new Int32Array(maxNets);
+    this.srcNext = new Int32Array(maxElems);
+  }
+
+  select(k: number): void {
+    this.k = k;
+    this.netStart = this.topo.cccNets.start[k];
+    this.netCount = this.topo.cccNets.start[k + 1] - this.netStart;
+    this.elemStart = this.topo.cccElements.start[k];
+    this.elemCount = this.topo.cccElements.start[k + 1] - this.elemStart;
+  }
+
+  /** Global net of local net i. */
+  net(i: number): number {
+    return this.topo.cccNets.items[this.netStart + i];
+  }
+
+  /** Global element of local element j. */
+  element(j: number): number {
+    return this.topo.cccElements.items[this.elemStart + j];
+  }
+
+  root(i: number): number {
+    const p = this.parent;
+    while (p[i] !== i) {
+      p[i] = p[p[i]];
+      i = p[i];
+    }
+    return i;
+  }
+}

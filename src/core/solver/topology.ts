@@ -1,0 +1,184 @@
+import type { CompiledNetlist } from '../compile/compile.ts';
+import { csr, type Csr } from '../compile/csr.ts';
+
+/**
+ * The static structure the scheduler walks, for one choice of which nets are sources (rails and
+ * driven inputs). Nets joined by any channel element, split at sources, form channel-connected
+ * components (CCCs); every dynamic group the solver ever forms lies inside one CCC. Elements whose two
+ * ends are both sources belong to no CCC and are kept as bridges.
+ */
+export interface Topology {
+  readonly isSource: Uint8Array;
+  /** CCC of each net, -1 for sources. */
+  readonly cccOfNet: Int32Array;
+  /** Position of each net inside its CCC's net list. */
+  readonly localIndex: Int32Array;
+  readonly cccCount: number;
+  readonly cccNets: Csr;
+  /** Channel elements with at least one end in the CCC. */
+  readonly cccElements: Csr;
+  /** Per element: local index of its A and B ends inside its CCC, -1 where that end is a source. */
+  readonly elemLocalA: Int32Array;
+  readonly elemLocalB: Int32Array;
+  /** Per element: its position in its CCC's element list, -1 for bridges. */
+  readonly elemLocal: Int32Array;
+  /** Elements joining two sources directly. */
+  readonly bridges: Int32Array;
+  /** Strongly connected groups of CCCs (feedback), in evaluation order: a group only gates later ones. */
+  readonly sccOrder: Csr;
+  /** CCCs whose elements are gated by a net of this CCC (may include itself). */
+  readonly cccDependents: Csr;
+}
+
+function find(parent: Int32Array, x: number): number {
+  while (parent[x] !== x) {
+    parent[x] = parent[parent[x]];
+    x = parent[x];
+  }
+  return x;
+}
+
+function channelComponents(c: CompiledNetlist, isSource: Uint8Array): Int32Array {
+  const parent = Int32Array.from({ length: c.netCount }, (_, i) => i);
+  for (let e = 0; e < c.chCount; e++) {
+    const a = c.chA[e];
+    const b = c.chB[e];
+    if (isSource[a] || isSource[b]) continue;
+    const ra = find(parent, a);
+    const rb = find(parent, b);
+    // Union towards the smaller index so the numbering never depends on element order.
+    if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
+  }
+  return parent;
+}
+
+export function buildTopology(c: CompiledNetlist, undriven: ReadonlySet<number> = new Set()): Topology {
+  const isSource = new Uint8Array(c.netCount);
+  for (let n = 0; n < c.netCount; n++) if (!Number.isNaN(c.railVolts[n])) isSource[n] = 1;
+  for (const n of c.inputNets) if (!undriven.has(n)) isSource[n] = 1;
+
+  const parent = channelComponents(c, isSource);
+  const cccOfNet = new Int32Array(c.netCount).fill(-1);
+  const localIndex = new Int32Array(c.netCount).fill(-1);
+  const rootToCcc = new Map<number, number>();
+  const netPairs: [number, number][] = [];
+  for (let n = 0; n < c.netCount; n++) {
+    if (isSource[n]) continue;
+    const root = find(parent, n);
+    let id = rootToCcc.get(root);
+    if (id === undefined) {
+      id = rootToCcc.size;
+      rootToCcc.set(root, id);
+    }
+    cccOfNet[n] = id;
+    netPairs.push([id, n]);
+  }
+  const cccCount = rootToCcc.size;
+  const cccNets = csr(cccCount, netPairs);
+  for (let k = 0; k < cccCount; k++) {
+    for (let i = cccNets.start[k]; i < cccNets.start[k + 1]; i++)
+      localIndex[cccNets.items[i]] = i - cccNets.start[k];
+  }
+
+  const elementPairs: [number, number][] = [];
+  const bridges: number[] = [];
+  for (let e = 0; e < c.chCount; e++) {
+    const k = cccOfNet[c.chA[e]] >= 0 ? cccOfNet[c.chA[e]] : cccOfNet[c.chB[e]];
+    if (k >= 0) elementPairs.push([k, e]);
+    else bridges.push(e);
+  }
+  const cccElements = csr(cccCount, elementPairs);
+  const elemLocalA = Int32Array.from(c.chA, (n) => localIndex[n]);
+  const elemLocalB = Int32Array.from(c.chB, (n) => localIndex[n]);
+  const elemLocal = new Int32Array(c.chCount).fill(-1);
+  for (let k = 0; k < cccCount; k++) {
+    for (let i = cccElements.start[k]; i < cccElements.start[k + 1]; i++) {
+      elemLocal[cccElements.items[i]] = i - cccElements.start[k];
+    }
+  }
+
+  const dependents = cccDependencies(c, cccOfNet, cccElements, cccCount);
+  return {
+    isSource,
+    cccOfNet,
+    localIndex,
+    cccCount,
+    cccNets,
+    cccElements,
+    elemLocalA,
+    elemLocalB,
+    elemLocal,
+    bridges: Int32Array.from(bridges),
+    sccOrder: stronglyConnectedOrder(cccCount, dependents),
+    cccDependents: dependents,
+  };
+}
+
+function cccDependencies(c: CompiledNetlist, cccOfNet: Int32Array, elements: Csr, count: number): Csr {
+  const pairs: [number, number][] = [];
+  const seen = new Set<number>();
+  for (let k = 0; k < count; k++) {
+    for (let i = elements.start[k]; i < elements.start[k + 1]; i++) {
+      const g = c.chGate[elements.items[i]];
+      if (g < 0 || cccOfNet[g] < 0) continue;
+      const key = cccOfNet[g] * count + k;
+      if (seen.has(key)) continue;
+      seen.add(key);
+      pairs.push([cccOfNet[g], k]);
+    }
+  }
+  pairs.sort((p, q) => p[0] - q[0] || p[1] - q[1]);
+  return csr(count, pairs);
+}
+
+/**
+ * Tarjan's algorithm (iterative), returning the strongly connected groups in topological order of
+ * the dependency graph: a group's members are gated only by earlier groups or by itself.
+ */
+export function stronglyConnectedOrder(count: number, edges: Csr): Csr {
+  const index = new Int32Array(count).fill(-1);
+  const low = new Int32Array(count);
+  const onStack = new Uint8Array(count);
+  const stack: number[] = [];
+  const groups: number[][] = [];
+  let next = 0;
+  for (let root = 0; root < count; root++) {
+    if (index[root] >= 0) continue;
+    const work: [number, number][] = [[root, edges.start[root]]];
+    index[root] = low[root] = next++;
+    stack.push(root);
+    onStack[root] = 1;
+    while (work.length > 0) {
+      const top = work[work.length - 1];
+      const v = top[0];
+      if (top[1] < edges.start[v + 1]) {
+        const w = edges.items[top[1]++];
+        if (index[w] < 0) {
+          index[w] = low[w] = next++;
+          stack.push(w);
+          onStack[w] = 1;
+          work.push([w, edges.start[w]]);
+        } else if (onStack[w]) low[v] = Math.min(low[v], index[w]);
+        continue;
+      }
+      work.pop();
+      if (work.length > 0) low[work[work.length - 1][0]] = Math.min(low[work[work.length - 1][0]], low[v]);
+      if (low[v] === index[v]) {
+        const group: number[] = [];
+        let w: number;
+        do {
+          w = stack.pop() as number;
+          onStack[w] = 0;
+          group.push(w);
+        } while (w !== v);
+        groups.push(group.sort((a, b) => a - b));
+      }
+    }
+  }
+  // Tarjan emits groups in reverse topological order.
+  groups.reverse();
+  return csr(
+    groups.length,
+    groups.flatMap((g, i) => g.map((k) => [i, k] as [number, number])),
+  );
+}

@@ -1,0 +1,148 @@
+import { bottleneck } from './bottleneck.ts';
+import type { Frame } from './frame.ts';
+import { classify, FLAG_CHARGE_SHARED, FLAG_CONTENTION, FLAG_DEGRADED, LEVEL_X } from './levels.ts';
+import { solveNodal } from './nodal.ts';
+
+/** Smallest capacitance a net is given for charge sharing, so capacitance-free nets still average. */
+const MIN_NET_CAP = 1e-18;
+/** A floating net whose voltage moves by more than this fraction of VDD has visibly shared charge. */
+const CHARGE_SHARE_FRACTION = 0.1;
+
+/**
+ * Solves the selected CCC under one fixed on/off assignment (frame.on, frame.sourceEndVolts):
+ * splits it into groups joined by conducting elements, then per group applies the rule of SPEC §3:
+ * no source → stored charge (shared by capacitance); one source voltage → that voltage less any
+ * threshold drop; sources of several voltages → nodal analysis. Reads stored charge and gate voltages
+ * from `snapVolts` (global, the previous round) and writes the frame's output arrays.
+ */
+export function solveTrial(frame: Frame, snapVolts: Float64Array): void {
+  groupNets(frame);
+  frame.current.fill(0, 0, frame.elemCount);
+  for (let i = 0; i < frame.netCount; i++) {
+    if (frame.parent[i] !== i) continue;
+    let lo = Infinity;
+    let hi = -Infinity;
+    for (let j = frame.srcHead[i]; j >= 0; j = frame.srcNext[j]) {
+      lo = Math.min(lo, frame.sourceEndVolts[j]);
+      hi = Math.max(hi, frame.sourceEndVolts[j]);
+    }
+    if (lo === Infinity) shareCharge(frame, i, snapVolts);
+    else if (hi - lo < 1e-12) driveSingle(frame, i, snapVolts, lo);
+    else driveMixed(frame, i, snapVolts);
+  }
+}
+
+/** Union-find over conducting elements, then per-root lists of nets and of source ties. */
+function groupNets(frame: Frame): void {
+  const { topo, parent } = frame;
+  for (let i = 0; i < frame.netCount; i++) parent[i] = i;
+  for (let j = 0; j < frame.elemCount; j++) {
+    if (!frame.on[j]) continue;
+    const e = frame.element(j);
+    const a = topo.elemLocalA[e];
+    const b = topo.elemLocalB[e];
+    if (a < 0 || b < 0) continue;
+    const ra = frame.root(a);
+    const rb = frame.root(b);
+    if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
+  }
+  for (let i = 0; i < frame.netCount; i++) {
+    parent[i] = frame.root(i);
+    frame.head[i] = -1;
+    frame.srcHead[i] = -1;
+  }
+  for (let i = frame.netCount - 1; i >= 0; i--) {
+    frame.next[i] = frame.head[parent[i]];
+    frame.head[parent[i]] = i;
+  }
+  for (let j = frame.elemCount - 1; j >= 0; j--) {
+    if (!frame.on[j]) continue;
+    const e = frame.element(j);
+    const a = topo.elemLocalA[e];
+    const b = topo.elemLocalB[e];
+    if (a >= 0 && b >= 0) continue;
+    const r = parent[a >= 0 ? a : b];
+    frame.srcNext[j] = frame.srcHead[r];
+    frame.srcHead[r] = j;
+  }
+}
+
+/**
+ * No path to a source (SPEC §3.6): a lone net keeps its charge; joined nets share it,
+ * V = ΣCi·Vi / ΣCi. A member with unknown charge could hold anything from 0 to VDD, so the result is an
+ * interval; it is known when both ends of the interval read as the same level.
+ */
+function shareCharge(frame: Frame, root: number, snapVolts: Float64Array): void {
+  const { c } = frame;
+  let members = 0;
+  let cTotal = 0;
+  let qKnown = 0;
+  let cUnknown = 0;
+  for (let i = frame.head[root]; i >= 0; i = frame.next[i]) {
+    const n = frame.net(i);
+    const cap = Math.max(c.netCap[n], MIN_NET_CAP);
+    const v = snapVolts[n];
+    members++;
+    cTotal += cap;
+    if (Number.isNaN(v)) cUnknown += cap;
+    else qKnown += cap * v;
+  }
+  let shared = qKnown / cTotal;
+  if (cUnknown > 0) {
+    const upper = (qKnown + cUnknown * c.tech.vdd) / cTotal;
+    const same = classify(shared, c.tech.vil, c.tech.vih) === classify(upper, c.tech.vil, c.tech.vih);
+    shared = same && classify(shared, c.tech.vil, c.tech.vih) !== LEVEL_X ? (shared + upper) / 2 : NaN;
+  }
+  for (let i = frame.head[root]; i >= 0; i = frame.next[i]) {
+    const before = snapVolts[frame.net(i)];
+    const v = members === 1 ? before : shared;
+    frame.volts[i] = v;
+    frame.driven[i] = 0;
+    frame.limiter[i] = -1;
+    const moved =
+      !Number.isNaN(before) && (Number.isNaN(v) || Math.abs(v - before) > CHARGE_SHARE_FRACTION * c.tech.vdd);
+    frame.flags[i] = members > 1 && moved ? FLAG_CHARGE_SHARED : 0;
+  }
+}
+
+/** One source voltage (the fast path): every net takes it, less any threshold drop. */
+function driveSingle(frame: Frame, root: number, snapVolts: Float64Array, vs: number): void {
+  bottleneck(frame, root, snapVolts, vs >= frame.c.tech.vdd / 2);
+  for (let i = frame.head[root]; i >= 0; i = frame.next[i]) {
+    const v = frame.best[i];
+    frame.volts[i] = v;
+    frame.driven[i] = 1;
+    frame.flags[i] = Math.abs(v - vs) > 1e-9 ? FLAG_DEGRADED : 0;
+  }
+}
+
+/**
+ * Sources of several voltages: nodal analysis gives the divider voltages and currents; the result is
+ * then clamped by the threshold-drop limits of the high and the low sources (a net reached by the
+ * high side only through NMOS cannot rise above Vg − Vtn). Currents stay those of the resistive model.
+ */
+function driveMixed(frame: Frame, root: number, snapVolts: Float64Array): void {
+  const { c } = frame;
+  solveNodal(frame, root);
+  const resistive = new Map<number, number>();
+  for (let i = frame.head[root]; i >= 0; i = frame.next[i]) resistive.set(i, frame.volts[i]);
+  const highLimit = new Map<number, [number, number]>();
+  if (bottleneck(frame, root, snapVolts, true)) {
+    for (let i = frame.head[root]; i >= 0; i = frame.next[i])
+      highLimit.set(i, [frame.best[i], frame.limiter[i]]);
+  }
+  const hasLow = bottleneck(frame, root, snapVolts, false);
+  for (let i = frame.head[root]; i >= 0; i = frame.next[i]) {
+    let v = resistive.get(i) as number;
+    let limiter = -1;
+    const [cap, capBy] = highLimit.get(i) ?? [Infinity, -1];
+    if (v > cap) [v, limiter] = [cap, capBy];
+    if (hasLow && v < frame.best[i]) [v, limiter] = [frame.best[i], frame.limiter[i]];
+    frame.volts[i] = v;
+    frame.driven[i] = 1;
+    frame.limiter[i] = limiter;
+    let flags = limiter >= 0 ? FLAG_DEGRADED : 0;
+    if (classify(v, c.tech.vil, c.tech.vih) === LEVEL_X) flags |= FLAG_CONTENTION;
+    frame.flags[i] = flags;
+  }
+}
