@@ -1,0 +1,108 @@
+import type { CapacitanceBreakdown } from '../compile/capacitance.ts';
+import type { Netlist } from '../model/netlist.ts';
+import type { Technology } from '../model/technology.ts';
+import {
+  equivalentInverter,
+  inputCapacitance,
+  logicalEffort,
+  parasiticDelay,
+  referenceLength,
+} from './logicalEffort.ts';
+import { delayCapacitances, totalCapacitance } from './nodeCapacitance.ts';
+import { extractStage, type Stage } from './stage.ts';
+import type { OutputSizing, SizingOptions, SizingReport } from './types.ts';
+import { ControlLimitError, worstCase, type WorstCase } from './worstCase.ts';
+
+export { proposeWidths } from './proposeWidths.ts';
+
+export const SIZING_CONVENTION =
+  "Worst case over every assignment of each output stage's gate signals (taken as independent); " +
+  'transistors as their on-resistance R_unit·L/W; g = Cin/Cinv with Cinv the inverter of equal worst-case ' +
+  'drive; parasitic delay in units of p_inv; rise and fall as Elmore time constants (Σ R·C, no 0.69 factor) ' +
+  'with the opposing network open and input pins as ideal sources.';
+
+/**
+ * Sizing from the drawn topology alone (no simulation): for each output, the worst pull-up and
+ * pull-down resistance, the inverter of equal drive, logical effort per input, parasitic delay, and
+ * Elmore estimates of the worst rise and fall into the given load.
+ */
+export function sizingReport(netlist: Netlist, tech: Technology, options: SizingOptions = {}): SizingReport {
+  const load = options.load ?? 0;
+  const caps = delayCapacitances(netlist, tech, options.sharedDiffusion ?? true);
+  const outputs = netlist.outputs.map((o) => sizeOutput(netlist, tech, o, caps, load));
+  const first = outputs[0];
+  return {
+    convention: SIZING_CONVENTION,
+    load,
+    outputs,
+    logicalEffort: first?.logicalEffort ?? {},
+    parasiticDelay: first?.parasiticDelay ?? null,
+    rise: first?.rise ?? null,
+    fall: first?.fall ?? null,
+    notes:
+      outputs.length > 1 ? ['Top-level figures are those of the first output; see outputs for each.'] : [],
+  };
+}
+
+function stageCaps(
+  stage: Stage,
+  caps: ReadonlyMap<string, CapacitanceBreakdown>,
+  load: number,
+): Float64Array {
+  const c = Float64Array.from(stage.nets, (n) => {
+    const b = caps.get(n);
+    return b === undefined ? 0 : totalCapacitance(b);
+  });
+  c[stage.output] += load;
+  return c;
+}
+
+function sizeOutput(
+  netlist: Netlist,
+  tech: Technology,
+  output: string,
+  caps: ReadonlyMap<string, CapacitanceBreakdown>,
+  load: number,
+): OutputSizing {
+  const notes: string[] = [];
+  const stage = extractStage(netlist, tech, output);
+  const c = stageCaps(stage, caps, load);
+  const [up, down] = searchBoth(stage, c, notes);
+  if (stage.nets.some((_, i) => stage.roles[i] === 'both')) {
+    notes.push(
+      `${output} is reached through pass transistors from an input pin; the pin's own driver is not included.`,
+    );
+  }
+  const cin = inputCapacitance(netlist, tech);
+  const l = referenceLength(netlist);
+  const inverter =
+    up && down && l !== null ? equivalentInverter(tech, l, up.drive.ohms, down.drive.ohms) : null;
+  if (inverter === null) notes.push(`${output} lacks a pull-up or a pull-down: no equivalent inverter.`);
+  return {
+    output,
+    pullUp: up?.drive ?? null,
+    pullDown: down?.drive ?? null,
+    equivalentInverter: inverter,
+    inputCapacitance: cin,
+    logicalEffort: inverter ? logicalEffort(cin, inverter) : nullPerInput(cin),
+    parasiticDelay: inverter ? parasiticDelay(caps.get(output)?.diffusion ?? 0, inverter) : null,
+    outputCapacitance: c[stage.output],
+    rise: up?.delay ?? null,
+    fall: down?.delay ?? null,
+    notes,
+  };
+}
+
+function searchBoth(stage: Stage, caps: Float64Array, notes: string[]): [WorstCase | null, WorstCase | null] {
+  try {
+    return [worstCase(stage, 'up', caps), worstCase(stage, 'down', caps)];
+  } catch (error) {
+    if (!(error instanceof ControlLimitError)) throw error;
+    notes.push(error.message);
+    return [null, null];
+  }
+}
+
+function nullPerInput(cin: Readonly<Record<string, number>>): Record<string, null> {
+  return Object.fromEntries(Object.keys(cin).map((k) => [k, null]));
+}
