@@ -1,6 +1,6 @@
 import { capacitanceBreakdown, type CapacitanceBreakdown } from '../compile/capacitance.ts';
 import type { MosDevice, Netlist } from '../model/netlist.ts';
-import { netNames } from '../model/netlist.ts';
+import { deviceTerminals, netNames } from '../model/netlist.ts';
 import type { Technology } from '../model/technology.ts';
 
 /**
@@ -39,7 +39,7 @@ function seriesNodes(netlist: Netlist): Map<string, number[]> {
       if (d.bulk !== undefined) pinned.add(d.bulk);
       for (const net of [d.drain, d.source]) terminals.set(net, [...(terminals.get(net) ?? []), d]);
     } else {
-      for (const t of d.kind === 'diode' ? [d.anode, d.cathode] : [d.a, d.b]) pinned.add(t);
+      for (const t of deviceTerminals(d)) pinned.add(t.net);
     }
   }
   const series = new Map<string, number[]>();
