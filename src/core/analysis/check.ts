@@ -1,0 +1,201 @@
+import { compile, type CompiledNetlist } from '../compile/compile.ts';
+import { evaluateExpression, type ExpectedValue } from '../expect/evaluate.ts';
+import { ExpressionError, parseExpression, type Expr } from '../expect/parse.ts';
+import type { Design, InputValue, InputVector } from '../model/design.ts';
+import type { Netlist } from '../model/netlist.ts';
+import { DEFAULT_TECHNOLOGY, type Technology } from '../model/technology.ts';
+import { levelName } from '../solver/levels.ts';
+import { Simulator, type SolveResult } from '../solver/simulator.ts';
+import type { CheckReport, Finding, FindingKind, Summary, VectorReport } from './report.ts';
+import { structuralFindings } from './rules.ts';
+import { vectorFindings } from './vectorFindings.ts';
+
+/** Exhaustive sweeps stop here by default: 2^16 = 65,536 vectors. */
+export const DEFAULT_MAX_INPUTS = 16;
+
+export interface CheckOptions {
+  readonly technology?: Technology;
+  /** Expected function per output, as expression text. */
+  readonly expectations?: Readonly<Record<string, string>>;
+  /** Report every net's voltage, not just the outputs'. */
+  readonly allNets?: boolean;
+  /** Sweep also leaves each input undriven (Z). */
+  readonly undrivenInputs?: boolean;
+  readonly maxInputs?: number;
+  /** Called with (done, total) during long sweeps; return false to stop early. */
+  readonly onProgress?: (done: number, total: number) => boolean | void;
+}
+
+export class SweepLimitError extends Error {
+  override readonly name = 'SweepLimitError';
+}
+
+export const FINDING_KINDS: readonly FindingKind[] = [
+  'short',
+  'static-current',
+  'floating',
+  'contention',
+  'degraded',
+  'charge-sharing',
+  'no-steady-state',
+  'mismatch',
+  'rule',
+  'limit',
+];
+
+/** Every input combination in truth-table order: the first input is the most significant. */
+export function sweepVectors(
+  inputs: readonly string[],
+  undriven = false,
+  maxInputs = DEFAULT_MAX_INPUTS,
+): InputVector[] {
+  if (inputs.length > maxInputs) {
+    throw new SweepLimitError(
+      `${inputs.length} inputs exceed the exhaustive-sweep limit of ${maxInputs} (${2 ** maxInputs} vectors)`,
+    );
+  }
+  const values: InputValue[] = undriven ? ['0', '1', 'Z'] : ['0', '1'];
+  let vectors: Record<string, InputValue>[] = [{}];
+  for (const name of inputs) vectors = vectors.flatMap((v) => values.map((x) => ({ ...v, [name]: x })));
+  return vectors;
+}
+
+/** `A=1 B=0` */
+export function vectorLabel(v: InputVector, inputs: readonly string[]): string {
+  return inputs.length === 0 ? '(no inputs)' : inputs.map((n) => `${n}=${v[n] ?? 'Z'}`).join(' ');
+}
+
+class Checker {
+  readonly compiled: CompiledNetlist;
+  readonly simulator: Simulator;
+  private readonly expectations: [number, Expr][];
+
+  constructor(
+    readonly netlist: Netlist,
+    readonly options: CheckOptions,
+  ) {
+    this.compiled = compile(netlist, options.technology ?? DEFAULT_TECHNOLOGY);
+    this.simulator = new Simulator(this.compiled);
+    this.expectations = Object.entries(options.expectations ?? {}).map(([output, text]) => {
+      const n = this.compiled.netIndex.get(output);
+      if (n === undefined || !netlist.outputs.includes(output)) {
+        throw new ExpressionError(`'${output}' is not an output`, `${output} = ${text}`, 0);
+      }
+      return [n, parseExpression(text, netlist.inputs)];
+    });
+  }
+
+  vectorReport(r: SolveResult, index: number): VectorReport {
+    const { netlist } = this;
+    const c = this.compiled;
+    const expected = new Map<number, ExpectedValue>(
+      this.expectations.map(([n, e]) => [n, evaluateExpression(e, r.inputs)]),
+    );
+    const voltageNets = this.options.allNets ? c.netNames : netlist.outputs;
+    const volts = (name: string): number | null => {
+      const v = r.volts[c.netIndex.get(name) as number];
+      return Number.isNaN(v) ? null : v;
+    };
+    return {
+      inputs: Object.fromEntries(netlist.inputs.map((n) => [n, r.inputs[n] ?? 'Z'])),
+      outputs: Object.fromEntries(
+        netlist.outputs.map((n) => [n, levelName(r.levels[c.netIndex.get(n) as number])]),
+      ),
+      voltages: Object.fromEntries(voltageNets.map((n) => [n, volts(n)])),
+      supplyCurrent: r.supplyCurrent,
+      staticPower: r.staticPower,
+      currentPaths: r.paths.map((p) => ({
+        chain: p.nets.flatMap((n, i) =>
+          i < p.elements.length
+            ? [c.netNames[n], netlist.devices[c.chDevice[p.elements[i]]].name]
+            : [c.netNames[n]],
+        ),
+        current: p.current,
+      })),
+      findings: vectorFindings(r, index, vectorLabel(r.inputs, netlist.inputs), expected),
+    };
+  }
+
+  report(kind: 'vectors' | 'steps', rows: VectorReport[], notes: string[]): CheckReport {
+    const findings = [...structuralFindings(this.compiled), ...rows.flatMap((v) => v.findings)];
+    return {
+      cell: this.netlist.name,
+      inputs: this.netlist.inputs,
+      outputs: this.netlist.outputs,
+      [kind]: rows,
+      findings,
+      summary: summarize(rows.length, findings),
+      notes,
+    };
+  }
+}
+
+export function summarize(vectors: number, findings: readonly Finding[]): Summary {
+  const counts: Record<string, number> = { vectors, errors: 0, warnings: 0 };
+  for (const k of FINDING_KINDS) counts[k] = 0;
+  for (const f of findings) {
+    counts[f.severity === 'error' ? 'errors' : 'warnings']++;
+    counts[f.kind]++;
+  }
+  return counts as Summary;
+}
+
+/** Checks every input combination, each solved from an unknown state (SPEC §3.9, sweep mode). */
+export function checkSweep(netlist: Netlist, options: CheckOptions = {}): CheckReport {
+  const checker = new Checker(netlist, options);
+  const vectors = sweepVectors(netlist.inputs, options.undrivenInputs, options.maxInputs);
+  const rows: VectorReport[] = [];
+  for (const [i, v] of vectors.entries()) {
+    rows.push(checker.vectorReport(checker.simulator.solveFresh(v), i));
+    if (options.onProgress?.(i + 1, vectors.length) === false) break;
+  }
+  const notes =
+    rows.length < vectors.length ? [`stopped after ${rows.length} of ${vectors.length} vectors`] : [];
+  return checker.report('vectors', rows, notes);
+}
+
+/**
+ * Applies steps in order, carrying stored charge from each to the next (SPEC §3.9, sequence mode).
+ * An input a step does not mention keeps its previous value; before its first mention it is X.
+ */
+export function checkSequence(
+  netlist: Netlist,
+  steps: readonly InputVector[],
+  options: CheckOptions = {},
+): CheckReport {
+  const checker = new Checker(netlist, options);
+  const rows: VectorReport[] = [];
+  let held: Record<string, InputValue> = Object.fromEntries(
+    netlist.inputs.map((n) => [n, 'X' as InputValue]),
+  );
+  let previous: SolveResult | null = null;
+  for (const [i, step] of steps.entries()) {
+    for (const name of Object.keys(step)) {
+      if (!netlist.inputs.includes(name))
+        throw new SequenceError(`step ${i + 1} sets '${name}', which is not an input`);
+    }
+    held = { ...held, ...step };
+    previous = previous ? checker.simulator.solveNext(held, previous) : checker.simulator.solveFresh(held);
+    rows.push(checker.vectorReport(previous, i));
+    if (options.onProgress?.(i + 1, steps.length) === false) break;
+  }
+  return checker.report('steps', rows, []);
+}
+
+export class SequenceError extends Error {
+  override readonly name = 'SequenceError';
+}
+
+/** Checks a design: its sweep with its own technology and expected functions. */
+export function checkDesign(
+  design: Design,
+  options: Omit<CheckOptions, 'technology' | 'expectations'> = {},
+): CheckReport {
+  return checkSweep(design.netlist, {
+    ...options,
+    technology: design.technology,
+    expectations: design.expectations,
+  });
+}
+
+export { ExpressionError };

@@ -1,0 +1,265 @@
+import { RESISTOR } from '../compile/compile.ts';
+import type { ExpectedValue } from '../expect/evaluate.ts';
+import type { PathIndices } from '../solver/currentPaths.ts';
+import {
+  FLAG_BOUND,
+  FLAG_CHARGE_SHARED,
+  FLAG_CONTENTION,
+  FLAG_DEGRADED,
+  FLAG_OSCILLATING,
+  LEVEL_X,
+  LEVEL_Z,
+  levelName,
+  MAYBE,
+} from '../solver/levels.ts';
+import type { SolveResult } from '../solver/simulator.ts';
+import type { Finding, FindingKind, Severity } from './report.ts';
+
+/** Names of a result's nets and devices, for messages. */
+class Namer {
+  constructor(private readonly r: SolveResult) {}
+  net(n: number): string {
+    return this.r.compiled.netNames[n];
+  }
+  element(e: number): string {
+    const c = this.r.compiled;
+    return c.netlist.devices[c.chDevice[e]].name;
+  }
+  chain(p: PathIndices): string[] {
+    return p.nets.flatMap((n, i) =>
+      i < p.elements.length ? [this.net(n), this.element(p.elements[i])] : [this.net(n)],
+    );
+  }
+}
+
+export function formatAmps(a: number): string {
+  const abs = Math.abs(a);
+  if (abs >= 1e-3) return `${(a * 1e3).toPrecision(3)} mA`;
+  if (abs >= 1e-6) return `${(a * 1e6).toPrecision(3)} µA`;
+  return `${(a * 1e9).toPrecision(3)} nA`;
+}
+
+export function formatWatts(w: number): string {
+  const abs = Math.abs(w);
+  if (abs >= 1e-3) return `${(w * 1e3).toPrecision(3)} mW`;
+  if (abs >= 1e-6) return `${(w * 1e6).toPrecision(3)} µW`;
+  return `${(w * 1e9).toPrecision(3)} nW`;
+}
+
+function finding(
+  kind: FindingKind,
+  severity: Severity,
+  vector: number,
+  nets: string[],
+  devices: string[],
+  message: string,
+): Finding {
+  return { kind, severity, vector, nets, devices, path: null, message };
+}
+
+/**
+ * Everything worth warning about in one solved vector (SPEC §4), except structural rules.
+ * `expected` holds each output's expected value for this vector (absent when none is given).
+ */
+export function vectorFindings(
+  r: SolveResult,
+  vector: number,
+  label: string,
+  expected: ReadonlyMap<number, ExpectedValue>,
+): Finding[] {
+  return [
+    ...currentFindings(r, vector, label),
+    ...flaggedFindings(r, vector, label),
+    ...floatingFindings(r, vector, label, expected),
+    ...mismatchFindings(r, vector, label, expected),
+  ];
+}
+
+/**
+ * Static current paths. A path of transistors only that crosses a net at X is a short (error);
+ * any other path is static current (warning: ratioed loads draw it by design).
+ */
+function currentFindings(r: SolveResult, vector: number, label: string): Finding[] {
+  const name = new Namer(r);
+  const c = r.compiled;
+  return r.paths.map((p) => {
+    const chain = name.chain(p);
+    const watts = r.volts[p.nets[0]] * p.current - r.volts[p.nets[p.nets.length - 1]] * p.current;
+    const transistorsOnly = p.elements.every((e) => c.chKind[e] !== RESISTOR);
+    const crossesX = p.nets.some((n) => r.levels[n] === LEVEL_X && !r.topology.isSource[n]);
+    const maybe = p.elements.some((e) => r.conduction[e] === MAYBE)
+      ? ' (possible: a gate on the path is at X)'
+      : '';
+    const short = transistorsOnly && crossesX;
+    const message = `${short ? 'short' : 'static current'} at ${label}: ${chain.join(' → ')}, ${formatAmps(p.current)}, ${formatWatts(watts)}${maybe}`;
+    return {
+      kind: short ? 'short' : 'static-current',
+      severity: short ? 'error' : 'warning',
+      vector,
+      nets: p.nets.map((n) => name.net(n)),
+      devices: p.elements.map((e) => name.element(e)),
+      path: chain,
+      current: p.current,
+      watts,
+      message,
+    };
+  });
+}
+
+/** Nets that feed a gate or are outputs: the ones whose level matters to the cell. */
+function observed(r: SolveResult, n: number): boolean {
+  const c = r.compiled;
+  return c.netGates.start[n + 1] > c.netGates.start[n] || c.outputNets.includes(n);
+}
+
+function flaggedFindings(r: SolveResult, vector: number, label: string): Finding[] {
+  const name = new Namer(r);
+  const c = r.compiled;
+  const out: Finding[] = [];
+  const nets = (flag: number, onlyObserved: boolean): number[] =>
+    Array.from({ length: c.netCount }, (_, n) => n).filter(
+      (n) => (r.flags[n] & flag) !== 0 && !r.topology.isSource[n] && (!onlyObserved || observed(r, n)),
+    );
+  const touching = (list: number[]): string[] => {
+    const devices = new Set<string>();
+    for (const n of list) {
+      for (let p = c.netChannels.start[n]; p < c.netChannels.start[n + 1]; p++) {
+        const e = c.netChannels.items[p];
+        if (r.conduction[e] !== 0) devices.add(name.element(e));
+      }
+    }
+    return [...devices].sort();
+  };
+  for (const n of nets(FLAG_CONTENTION, false)) {
+    const v = r.volts[n];
+    out.push(
+      finding(
+        'contention',
+        'error',
+        vector,
+        [name.net(n)],
+        touching([n]),
+        `contention at ${label}: ${name.net(n)} sits at ${v.toFixed(2)} V, between the input thresholds, fought over by drivers of both levels`,
+      ),
+    );
+  }
+  for (const n of nets(FLAG_DEGRADED, true)) {
+    const by = r.limiter[n] >= 0 ? [name.element(r.limiter[n])] : [];
+    out.push(
+      finding(
+        'degraded',
+        'warning',
+        vector,
+        [name.net(n)],
+        by,
+        `degraded level at ${label}: ${name.net(n)} reaches only ${r.volts[n].toFixed(2)} V (a threshold drop${by.length ? ` through ${by[0]}` : ''})`,
+      ),
+    );
+  }
+  const shared = nets(FLAG_CHARGE_SHARED, false);
+  if (shared.length > 0) {
+    const list = shared.map(
+      (n) => `${name.net(n)} ${Number.isNaN(r.volts[n]) ? 'unknown' : `${r.volts[n].toFixed(2)} V`}`,
+    );
+    out.push(
+      finding(
+        'charge-sharing',
+        'warning',
+        vector,
+        shared.map((n) => name.net(n)),
+        touching(shared),
+        `charge sharing at ${label}: ${list.join(', ')}`,
+      ),
+    );
+  }
+  const racing = nets(FLAG_OSCILLATING, false);
+  if (racing.length > 0) {
+    out.push(
+      finding(
+        'no-steady-state',
+        'error',
+        vector,
+        racing.map((n) => name.net(n)),
+        touching(racing),
+        `no steady state at ${label}: ${racing.map((n) => name.net(n)).join(', ')} kept changing (a race or an oscillator) and are shown as X`,
+      ),
+    );
+  }
+  const bounded = nets(FLAG_BOUND, false);
+  if (bounded.length > 0) {
+    out.push(
+      finding(
+        'limit',
+        'warning',
+        vector,
+        bounded.map((n) => name.net(n)),
+        touching(bounded),
+        `too many devices with gates at X at ${label}: ${bounded.map((n) => name.net(n)).join(', ')} set to X conservatively`,
+      ),
+    );
+  }
+  return out;
+}
+
+/**
+ * Floating nets (SPEC §4): an output is an error unless Z is expected; a gate-feeding net is an
+ * error without known charge and a warning with it (a dynamic node). Diffusion-only internal nodes
+ * (inside transistor stacks) that feed no gate are not reported: they float by design in every
+ * static gate.
+ */
+function floatingFindings(
+  r: SolveResult,
+  vector: number,
+  label: string,
+  expected: ReadonlyMap<number, ExpectedValue>,
+): Finding[] {
+  const name = new Namer(r);
+  const c = r.compiled;
+  const out: Finding[] = [];
+  for (let n = 0; n < c.netCount; n++) {
+    if (r.levels[n] !== LEVEL_Z || !observed(r, n)) continue;
+    const isOutput = c.outputNets.includes(n);
+    if (isOutput && expected.get(n) === 'Z') continue;
+    const known = !Number.isNaN(r.volts[n]);
+    const severity: Severity = isOutput || !known ? 'error' : 'warning';
+    const charge = known ? `holding ${r.volts[n].toFixed(2)} V of stored charge` : 'with no known charge';
+    out.push(
+      finding(
+        'floating',
+        severity,
+        vector,
+        [name.net(n)],
+        [],
+        `floating at ${label}: ${name.net(n)} has no conducting path to any source, ${charge}`,
+      ),
+    );
+  }
+  return out;
+}
+
+function mismatchFindings(
+  r: SolveResult,
+  vector: number,
+  label: string,
+  expected: ReadonlyMap<number, ExpectedValue>,
+): Finding[] {
+  const name = new Namer(r);
+  const out: Finding[] = [];
+  for (const [n, want] of expected) {
+    if (want === 'X') continue;
+    const got = levelName(r.levels[n]);
+    if (got !== want) {
+      out.push(
+        finding(
+          'mismatch',
+          'error',
+          vector,
+          [name.net(n)],
+          [],
+          `mismatch at ${label}: ${name.net(n)} is ${got}, expected ${want}`,
+        ),
+      );
+    }
+  }
+  return out;
+}
