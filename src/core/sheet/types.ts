@@ -2,7 +2,8 @@
  * Sheet geometry: what the editor draws. Coordinates are in grid units (integers); the editor
  * decides the pixel size of one unit. The netlist of a drawn design is derived from this.
  */
-export type PartKind = 'nmos' | 'pmos' | 'resistor' | 'capacitor' | 'vdd' | 'gnd' | 'input' | 'output' | 'label';
+export type PartKind =
+  'nmos' | 'pmos' | 'resistor' | 'capacitor' | 'vdd' | 'gnd' | 'input' | 'output' | 'label';
 
 /** Quarter turns clockwise. */
 export type Rotation = 0 | 1 | 2 | 3;

@@ -1,0 +1,265 @@
+/**
+ * Places a netlist on a sheet the way a designer would sketch it: the pull-up network above the
+ * output row, the pull-down network below, inputs on the left, outputs on the right.
+ *
+ * Devices go in rows by their distance (in channel hops) from their rail, nearest rail outermost;
+ * a device joins the column of the device it stacks on, so series stacks line up. Stacked channel
+ * terminals on the same net are wired; rails sit directly on the pins they feed; every other pin
+ * gets a net label, and equal labels join the net.
+ */
+import type { Device, Netlist } from '../model/netlist.ts';
+import { channelNets } from '../model/netlist.ts';
+import type { PartKind, Point, Rotation, Sheet, SheetPart, SheetWire } from './types.ts';
+import { partSpec } from './parts/index.ts';
+import { pinPositions, turnDirection } from './geometry.ts';
+import { railDistances } from './railDistance.ts';
+
+export interface AutoPlaceOptions {
+  /** Grid units between device columns and between rows. */
+  readonly columnPitch: number;
+  readonly rowPitch: number;
+}
+
+const DEFAULTS: AutoPlaceOptions = { columnPitch: 8, rowPitch: 6 };
+
+interface Slot {
+  readonly device: Device;
+  readonly upper: boolean;
+  readonly row: number;
+  column: number;
+}
+
+/** Upper half: PMOS, and resistors nearer the supply (loads). Lower: NMOS and the rest. */
+function isUpper(
+  d: Device,
+  toSupply: ReadonlyMap<string, number>,
+  toGround: ReadonlyMap<string, number>,
+): boolean {
+  if (d.kind === 'pmos') return true;
+  if (d.kind !== 'resistor') return false;
+  const near = (m: ReadonlyMap<string, number>) => Math.min(m.get(d.a) ?? Infinity, m.get(d.b) ?? Infinity);
+  return near(toSupply) < near(toGround);
+}
+
+function rowOf(d: Device, dist: ReadonlyMap<string, number>, deepest: number): number {
+  const nets = channelNets(d);
+  if (!nets) return deepest;
+  const r = Math.min(dist.get(nets[0]) ?? Infinity, dist.get(nets[1]) ?? Infinity);
+  return Number.isFinite(r) ? r : deepest;
+}
+
+/** Rows counted from the rail; within a row, a device takes the column of one it shares a net with. */
+function assignColumns(slots: Slot[]): void {
+  const rows = [...new Set(slots.map((s) => s.row))].sort((a, b) => a - b);
+  for (const row of rows) {
+    const here = slots.filter((s) => s.row === row);
+    const prev = slots.filter((s) => s.row === row - 1);
+    const used = new Set<number>();
+    for (const slot of here) {
+      const mine: readonly string[] = channelNets(slot.device) ?? [];
+      const below = prev.find(
+        (p) => !used.has(p.column) && (channelNets(p.device) ?? []).some((n) => mine.includes(n)),
+      );
+      let col = below ? below.column : 0;
+      while (used.has(col)) col++;
+      slot.column = col;
+      used.add(col);
+    }
+  }
+}
+
+function slotDevices(netlist: Netlist): Slot[] {
+  const supplies = netlist.rails.filter((r) => r.role === 'supply').map((r) => r.net);
+  const grounds = netlist.rails.filter((r) => r.role === 'ground').map((r) => r.net);
+  const toSupply = railDistances(netlist, supplies);
+  const toGround = railDistances(netlist, grounds);
+  const channel = netlist.devices.filter((d) => channelNets(d) !== null);
+  const deepest = channel.length;
+  const slots: Slot[] = channel.map((device) => {
+    const upper = isUpper(device, toSupply, toGround);
+    return { device, upper, row: rowOf(device, upper ? toSupply : toGround, deepest), column: 0 };
+  });
+  // Compact rows: unreachable devices go one row past the deepest reachable one.
+  for (const upper of [true, false]) {
+    const half = slots.filter((s) => s.upper === upper);
+    const rows = [...new Set(half.map((s) => s.row))].sort((a, b) => a - b);
+    half.forEach((s) => Object.assign(s, { row: rows.indexOf(s.row) }));
+    assignColumns(half);
+  }
+  return slots;
+}
+
+export function autoPlace(netlist: Netlist, options: Partial<AutoPlaceOptions> = {}): Sheet {
+  const o = { ...DEFAULTS, ...options };
+  const slots = slotDevices(netlist);
+  const upRows = Math.max(0, ...slots.filter((s) => s.upper).map((s) => s.row + 1));
+  const lowRows = Math.max(0, ...slots.filter((s) => !s.upper).map((s) => s.row + 1));
+  const builder = new SheetBuilder();
+  const supplies = new Set(netlist.rails.filter((r) => r.role === 'supply').map((r) => r.net));
+  const grounds = new Set(netlist.rails.filter((r) => r.role === 'ground').map((r) => r.net));
+  const distTo = (slot: Slot) => railDistances(netlist, [...(slot.upper ? supplies : grounds)]);
+  const placed = slots.map((slot) => {
+    const y = slot.upper
+      ? -o.rowPitch * (upRows - slot.row) + o.rowPitch / 2
+      : o.rowPitch * (lowRows - slot.row) - o.rowPitch / 2;
+    const x = slot.column * o.columnPitch;
+    return { slot, part: builder.device(slot.device, { x, y: Math.round(y) }, flipFor(slot, distTo(slot))) };
+  });
+  placeCapacitors(
+    netlist,
+    builder,
+    o,
+    placed.length === 0 ? 0 : Math.max(...placed.map((p) => p.part.x)) + o.columnPitch,
+  );
+  builder.connectPins(supplies, grounds);
+  const minX = Math.min(0, ...builder.parts.map((p) => p.x)) - 6;
+  const maxX = Math.max(0, ...builder.parts.map((p) => p.x)) + 6;
+  netlist.inputs.forEach((net, i) =>
+    builder.naming('input', net, { x: minX, y: -Math.floor(netlist.inputs.length / 2) * 3 + i * 3 }),
+  );
+  netlist.outputs.forEach((net, i) => builder.naming('output', net, { x: maxX, y: i * 3 }));
+  return builder.sheet();
+}
+
+/** Vertical flip when the terminal drawn at the bottom is the one nearer the rail above (or vice versa). */
+function flipFor(slot: Slot, dist: ReadonlyMap<string, number>): boolean {
+  const nets = channelNets(slot.device);
+  if (!nets) return false;
+  const spec = partSpec(slot.device.kind as PartKind);
+  const topPin = spec.pins.filter((p) => p.name !== 'gate').sort((a, b) => a.y - b.y)[0]!.name;
+  const [top, bottom] = topPin === 'drain' || topPin === 'a' ? nets : [nets[1], nets[0]];
+  const dt = dist.get(top) ?? Infinity;
+  const db = dist.get(bottom) ?? Infinity;
+  // Upper devices want the rail side on top; lower devices want it at the bottom.
+  return slot.upper ? db < dt : dt < db;
+}
+
+function placeCapacitors(netlist: Netlist, builder: SheetBuilder, o: AutoPlaceOptions, x0: number): void {
+  netlist.devices
+    .filter((d) => d.kind === 'capacitor')
+    .forEach((d, i) => builder.device(d, { x: x0 + i * (o.columnPitch / 2), y: o.rowPitch }, false));
+}
+
+/** Accumulates parts and wires with sequential ids. */
+class SheetBuilder {
+  readonly parts: SheetPart[] = [];
+  private readonly wires: SheetWire[] = [];
+  private readonly deviceParts: { part: SheetPart; device: Device }[] = [];
+
+  private add(
+    kind: PartKind,
+    name: string,
+    at: Point,
+    rotation: Rotation,
+    mirror: boolean,
+    extra: Partial<SheetPart> = {},
+  ): SheetPart {
+    const part: SheetPart = {
+      id: `p${this.parts.length + 1}`,
+      kind,
+      name,
+      x: at.x,
+      y: at.y,
+      rotation,
+      mirror,
+      ...extra,
+    };
+    this.parts.push(part);
+    return part;
+  }
+
+  device(device: Device, at: Point, flip: boolean): SheetPart {
+    const extra = deviceProperties(device);
+    // Mirror then a half turn is a flip top-to-bottom; the gate stays on the left.
+    const part = this.add(device.kind as PartKind, device.name, at, flip ? 2 : 0, flip, extra);
+    this.deviceParts.push({ part, device });
+    return part;
+  }
+
+  naming(kind: PartKind, name: string, at: Point, rotation: Rotation = 0): void {
+    this.add(kind, name, at, rotation, false);
+  }
+
+  /** A straight wire, named by a label at its middle so the net keeps its netlist name. */
+  wire(a: Point, b: Point, net: string): void {
+    this.wires.push({
+      id: `w${this.wires.length + 1}`,
+      points: [
+        { x: a.x, y: a.y },
+        { x: b.x, y: b.y },
+      ],
+    });
+    this.naming('label', net, { x: Math.round((a.x + b.x) / 2), y: Math.round((a.y + b.y) / 2) });
+  }
+
+  /** Wires stacked terminals in one column; rails and labels on every other pin. */
+  connectPins(supplies: ReadonlySet<string>, grounds: ReadonlySet<string>): void {
+    const pins = this.deviceParts.flatMap(({ part, device }) =>
+      pinPositions(part).map((pin) => ({ part, pin, net: terminalNet(device, pin.pin) })),
+    );
+    const wired = new Set<string>();
+    for (const a of pins) {
+      if (a.pin.pin === 'gate' || supplies.has(a.net) || grounds.has(a.net)) continue;
+      const below = pins
+        .filter((b) => b.pin.x === a.pin.x && b.pin.y > a.pin.y && b.pin.pin !== 'gate')
+        .sort((p, q) => p.pin.y - q.pin.y)[0];
+      if (below && below.net === a.net && !wired.has(key(below))) {
+        this.wire(a.pin, below.pin, a.net);
+        wired.add(key(a)).add(key(below));
+      }
+    }
+    for (const p of pins) {
+      if (wired.has(key(p))) continue;
+      const dir = turnDirection(p.part, localDirection(p.part.kind, p.pin.pin));
+      if (supplies.has(p.net)) this.naming('vdd', p.net, p.pin, railRotation(dir, 'up'));
+      else if (grounds.has(p.net)) this.naming('gnd', p.net, p.pin, railRotation(dir, 'down'));
+      else this.naming('label', p.net, p.pin, railRotation(dir, 'right'));
+    }
+  }
+
+  sheet(): Sheet {
+    return { parts: this.parts, wires: this.wires };
+  }
+}
+
+function key(p: { part: SheetPart; pin: { pin: string } }): string {
+  return `${p.part.id}.${p.pin.pin}`;
+}
+
+function deviceProperties(d: Device): Partial<SheetPart> {
+  switch (d.kind) {
+    case 'nmos':
+    case 'pmos':
+      return { w: d.w, l: d.l };
+    case 'resistor':
+      return { ohms: d.ohms };
+    case 'capacitor':
+      return { farads: d.farads };
+    case 'diode':
+      return {};
+  }
+}
+
+function terminalNet(d: Device, pin: string): string {
+  const record = d as unknown as Record<string, string>;
+  return record[pin] ?? '';
+}
+
+/** Unit direction pointing away from the part at a pin, in local units. */
+function localDirection(kind: PartKind, pin: string): Point {
+  const p = partSpec(kind).pins.find((q) => q.name === pin)!;
+  return Math.abs(p.x) >= Math.abs(p.y) ? { x: Math.sign(p.x), y: 0 } : { x: 0, y: Math.sign(p.y) };
+}
+
+/** The rotation that turns a symbol drawn towards `natural` so it points along `dir`. */
+function railRotation(dir: Point, natural: 'up' | 'down' | 'right'): Rotation {
+  const order: Point[] = [
+    { x: 0, y: -1 },
+    { x: 1, y: 0 },
+    { x: 0, y: 1 },
+    { x: -1, y: 0 },
+  ];
+  const start = { up: 0, right: 1, down: 2 }[natural];
+  const target = order.findIndex((d) => d.x === dir.x && d.y === dir.y);
+  return ((((target - start) % 4) + 4) % 4) as Rotation;
+}

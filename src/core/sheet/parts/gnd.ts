@@ -1,0 +1,19 @@
+import type { PartSpec } from './spec.ts';
+
+/** Ground rail: a lead down to three shortening bars. */
+export const GND_SPEC: PartSpec = {
+  kind: 'gnd',
+  title: 'GND rail',
+  namePrefix: 'GND',
+  pins: [{ name: 'net', x: 0, y: 0 }],
+  box: { x0: -1, y0: 0, x1: 1, y1: 1.6 },
+  symbol: [
+    { type: 'line', points: [0, 0, 0, 1] },
+    { type: 'line', points: [-1, 1, 1, 1] },
+    { type: 'line', points: [-0.6, 1.3, 0.6, 1.3] },
+    { type: 'line', points: [-0.2, 1.6, 0.2, 1.6] },
+  ],
+  nameAt: { x: 1.3, y: 1 },
+  defaults: {},
+  role: { type: 'net-name', role: 'ground' },
+};

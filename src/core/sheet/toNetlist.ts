@@ -1,0 +1,161 @@
+/**
+ * Derives the electrical netlist from the drawing. Nets are named, strongest first, by a rail,
+ * an input pin, an output pin, then a net label; unnamed nets get `net1`, `net2`, … in the order
+ * of the parts that touch them. Equal names join nets, so two labels `BL` are one net.
+ */
+import type { Device, Netlist, Rail } from '../model/netlist.ts';
+import type { Sheet, SheetPart } from './types.ts';
+import { partSpec, type NetRole } from './parts/index.ts';
+import { pinKey, sheetConnectivity, UnionFind, wireKey } from './connectivity.ts';
+
+export interface SheetIssue {
+  readonly kind: 'name-conflict' | 'duplicate-device' | 'shorted-pins';
+  readonly parts: readonly string[];
+  readonly message: string;
+}
+
+export interface DerivedNetlist {
+  readonly netlist: Netlist;
+  /** Net of every wire, by wire id. */
+  readonly wireNets: Readonly<Record<string, string>>;
+  /** Net of every pin, keyed `partId.pin`. */
+  readonly pinNets: Readonly<Record<string, string>>;
+  /** Device name of every device part, by part id. */
+  readonly partDevices: Readonly<Record<string, string>>;
+  readonly junctions: readonly { readonly x: number; readonly y: number }[];
+  readonly issues: readonly SheetIssue[];
+}
+
+const ROLE_RANK: Record<NetRole, number> = { supply: 0, ground: 0, input: 1, output: 2, label: 3 };
+
+interface NameClaim {
+  readonly name: string;
+  readonly role: NetRole;
+  readonly partId: string;
+}
+
+function namingRole(part: SheetPart): NetRole | null {
+  const role = partSpec(part.kind).role;
+  return role.type === 'net-name' ? role.role : null;
+}
+
+/** Joins every group that carries the same name: equal labels, pins and rails are one net. */
+function joinEqualNames(sheet: Sheet, groups: UnionFind): void {
+  const firstWithName = new Map<string, string>();
+  for (const part of sheet.parts) {
+    if (namingRole(part) === null || part.name === '') continue;
+    const key = pinKey(part.id, 'net');
+    const first = firstWithName.get(part.name);
+    if (first === undefined) firstWithName.set(part.name, key);
+    else groups.union(first, key);
+  }
+}
+
+function collectClaims(sheet: Sheet, groups: UnionFind): Map<string, NameClaim[]> {
+  const claims = new Map<string, NameClaim[]>();
+  for (const part of sheet.parts) {
+    const role = namingRole(part);
+    if (role === null || part.name === '') continue;
+    const root = groups.find(pinKey(part.id, 'net'));
+    claims.set(root, [...(claims.get(root) ?? []), { name: part.name, role, partId: part.id }]);
+  }
+  return claims;
+}
+
+function pickName(claims: readonly NameClaim[], issues: SheetIssue[]): NameClaim {
+  const sorted = [...claims].sort(
+    (a, b) => ROLE_RANK[a.role] - ROLE_RANK[b.role] || a.name.localeCompare(b.name),
+  );
+  const best = sorted[0]!;
+  const others = [...new Set(sorted.map((c) => c.name))].filter((n) => n !== best.name);
+  if (others.length > 0) {
+    const kind = sorted.some((c) => c.name !== best.name && c.role !== 'label')
+      ? 'shorted-pins'
+      : 'name-conflict';
+    issues.push({
+      kind,
+      parts: sorted.map((c) => c.partId),
+      message: `one net carries the names ${[best.name, ...others].join(', ')}; it is called ${best.name}`,
+    });
+  }
+  return best;
+}
+
+/** Names every group: a function from group root to net name, numbering unnamed nets lazily. */
+function nameGroups(sheet: Sheet, groups: UnionFind, issues: SheetIssue[]): (root: string) => string {
+  const claims = collectClaims(sheet, groups);
+  const names = new Map<string, string>();
+  for (const [root, list] of claims) names.set(root, pickName(list, issues).name);
+  const taken = new Set(names.values());
+  let counter = 0;
+  const nameOf = (root: string): string => {
+    let n = names.get(root);
+    if (n === undefined) {
+      do n = `net${++counter}`;
+      while (taken.has(n));
+      names.set(root, n);
+    }
+    return n;
+  };
+  return nameOf;
+}
+
+function uniqueInOrder(values: readonly string[]): string[] {
+  return [...new Set(values)];
+}
+
+export function sheetToNetlist(sheet: Sheet, name = 'cell'): DerivedNetlist {
+  const issues: SheetIssue[] = [];
+  const { groups, junctions } = sheetConnectivity(sheet);
+  joinEqualNames(sheet, groups);
+  const nameOf = nameGroups(sheet, groups, issues);
+  const pinNets: Record<string, string> = {};
+  const partDevices: Record<string, string> = {};
+  const devices: Device[] = [];
+  const rails: Rail[] = [];
+  const inputs: string[] = [];
+  const outputs: string[] = [];
+  for (const part of sheet.parts) {
+    const spec = partSpec(part.kind);
+    const netOf = (pin: string): string => nameOf(groups.find(pinKey(part.id, pin)));
+    for (const pin of spec.pins) pinNets[`${part.id}.${pin.name}`] = netOf(pin.name);
+    if (spec.role.type === 'device') {
+      devices.push(spec.role.toDevice(part, netOf));
+      partDevices[part.id] = part.name;
+      continue;
+    }
+    const net = netOf('net');
+    if (spec.role.role === 'supply') rails.push({ net, role: 'supply' });
+    if (spec.role.role === 'ground') rails.push({ net, role: 'ground' });
+    if (spec.role.role === 'input') inputs.push(net);
+    if (spec.role.role === 'output') outputs.push(net);
+  }
+  reportDuplicateDevices(sheet, issues);
+  const wireNets: Record<string, string> = {};
+  for (const wire of sheet.wires) wireNets[wire.id] = nameOf(groups.find(wireKey(wire.id)));
+  const railNets = new Set(rails.map((r) => r.net));
+  const netlist: Netlist = {
+    name,
+    devices,
+    rails: rails.filter((r, i) => rails.findIndex((q) => q.net === r.net) === i),
+    inputs: uniqueInOrder(inputs).filter((n) => !railNets.has(n)),
+    outputs: uniqueInOrder(outputs),
+  };
+  return { netlist, wireNets, pinNets, partDevices, junctions, issues };
+}
+
+function reportDuplicateDevices(sheet: Sheet, issues: SheetIssue[]): void {
+  const byName = new Map<string, string[]>();
+  for (const p of sheet.parts) {
+    if (partSpec(p.kind).role.type !== 'device') continue;
+    byName.set(p.name, [...(byName.get(p.name) ?? []), p.id]);
+  }
+  for (const [name, ids] of byName) {
+    if (ids.length > 1)
+      issues.push({
+        kind: 'duplicate-device',
+        parts: ids,
+        message: `${ids.length} devices are named ${name}`,
+      });
+  }
+}

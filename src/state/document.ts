@@ -1,0 +1,75 @@
+/**
+ * The document slice: what the designer edits and what undo restores. The netlist is never
+ * stored here; it is derived from the sheet on every change, so the two cannot disagree.
+ */
+import type { Design, Sequence } from '../core/model/design.ts';
+import type { Technology } from '../core/model/technology.ts';
+import type { Sheet } from '../core/sheet/types.ts';
+import { sheetToNetlist, type SheetIssue } from '../core/sheet/toNetlist.ts';
+import { autoPlace } from '../core/sheet/autoPlace.ts';
+
+export interface SheetDocument {
+  readonly name: string;
+  readonly technology: Technology;
+  readonly expectations: Readonly<Record<string, string>>;
+  readonly sequences: readonly Sequence[];
+  readonly notes?: string;
+  readonly sheet: Sheet;
+}
+
+/** Drawing facts the analysis overlay needs to paint levels onto the sheet. */
+export interface SheetGeometry {
+  /** Net name of every wire, by wire id. */
+  readonly wireNets: Readonly<Record<string, string>>;
+  /** Net name of every part pin, keyed `partId.pin` (pins: gate, drain, source, a, b, net). */
+  readonly pinNets: Readonly<Record<string, string>>;
+  /** Device name of every device part, by part id. */
+  readonly partDevices: Readonly<Record<string, string>>;
+  /** The inverse: part id of every device name. */
+  readonly deviceParts: Readonly<Record<string, string>>;
+  readonly junctions: readonly { readonly x: number; readonly y: number }[];
+}
+
+export interface DerivedDesign {
+  readonly design: Design;
+  readonly geometry: SheetGeometry;
+  readonly issues: readonly SheetIssue[];
+}
+
+export function deriveDesign(doc: SheetDocument): DerivedDesign {
+  const d = sheetToNetlist(doc.sheet, doc.name);
+  const deviceParts: Record<string, string> = {};
+  for (const [partId, device] of Object.entries(d.partDevices)) deviceParts[device] ??= partId;
+  const design: Design = {
+    name: doc.name,
+    technology: doc.technology,
+    netlist: d.netlist,
+    expectations: doc.expectations,
+    sequences: doc.sequences,
+    sheet: doc.sheet,
+    ...(doc.notes === undefined ? {} : { notes: doc.notes }),
+  };
+  return {
+    design,
+    geometry: {
+      wireNets: d.wireNets,
+      pinNets: d.pinNets,
+      partDevices: d.partDevices,
+      deviceParts,
+      junctions: d.junctions,
+    },
+    issues: d.issues,
+  };
+}
+
+/** A design as the editor holds it; a design without a drawing is placed automatically. */
+export function documentFromDesign(design: Design): SheetDocument {
+  return {
+    name: design.name,
+    technology: design.technology,
+    expectations: design.expectations,
+    sequences: design.sequences,
+    ...(design.notes === undefined ? {} : { notes: design.notes }),
+    sheet: design.sheet ?? autoPlace(design.netlist),
+  };
+}

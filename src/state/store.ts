@@ -1,0 +1,277 @@
+/**
+ * The application store: one vanilla zustand store in slices (document, history, selection,
+ * viewport, interaction), a thin React hook, and actions as module functions.
+ *
+ * ─── API for the analysis workspace (src/panels, src/editor/overlay, src/state/simulation) ───
+ *
+ *   import { useStore, store, selectDevices, selectNets, setHighlight, clearHighlight } from '../state/store.ts';
+ *
+ *   useStore(selector)            React hook with a selector, e.g. useStore((s) => s.design).
+ *   store.getState() / store.subscribe(listener)   the vanilla store (workers, tests, non-React code).
+ *
+ *   State fields (read-only outside this module):
+ *     design: Design              the current design; design.netlist is derived from the sheet and
+ *                                 recomputed on every document change (never edit it directly).
+ *     revision: number            +1 on every document change (edit, undo, redo, open, gesture
+ *                                 preview). Tag simulation jobs with it and drop stale results.
+ *     geometry: SheetGeometry     for drawing levels on the sheet:
+ *                                   wireNets   wire id → net name
+ *                                   pinNets    `${partId}.${pin}` → net name (pins: gate, drain,
+ *                                              source, a, b, net)
+ *                                   partDevices  part id → device name;  deviceParts  the inverse
+ *                                   junctions  [{x, y}] grid points of junction dots
+ *     doc.sheet: Sheet            parts and wires in grid units (see src/core/sheet/types.ts);
+ *                                 one grid unit is GRID_PX pixels at scale 1 (src/editor/constants.ts).
+ *     issues: SheetIssue[]        drawing problems found while deriving the netlist (name conflicts…).
+ *     selection.selected          { parts: partId[], wires: wireId[] } chosen on the sheet.
+ *     selection.highlight         { nets: string[], devices: string[] } asked for by the panels.
+ *     viewport                    { x, y, scale }: screen position of grid (0,0), pixels per unit.
+ *
+ *   Actions (plain functions; call from anywhere):
+ *     selectDevices(names)        selects the parts of those devices on the sheet (jump to devices).
+ *     selectNets(names)           selects every wire and part pin on those nets.
+ *     setHighlight({nets, devices})  / clearHighlight()   marks nets and devices without selecting.
+ *     setDesignFields(patch)      changes expectations, sequences, technology, name or notes as one
+ *                                 undoable step (e.g. editing an expected function in a panel).
+ *     revealItems(ids)            pans so the given items are in view.
+ *
+ * Everything that changes the document goes through `commitDoc` (one undo step) or a gesture
+ * (`beginGesture` → `previewDoc`… → `endGesture` | `cancelGesture`).
+ */
+import { createStore } from 'zustand/vanilla';
+import { useStore as useZustand } from 'zustand';
+import type { Design } from '../core/model/design.ts';
+import type { ItemIds } from '../core/sheet/selection.ts';
+import type { SheetIssue } from '../core/sheet/toNetlist.ts';
+import type { Clip } from '../core/sheet/clipboard.ts';
+import type { PartKind, Point } from '../core/sheet/types.ts';
+import { NO_ITEMS } from '../core/sheet/selection.ts';
+import { deriveDesign, documentFromDesign, type SheetDocument, type SheetGeometry } from './document.ts';
+import { EMPTY_HISTORY, recordStep, redoStep, undoStep, type HistoryState } from './history.ts';
+import { EMPTY_SELECTION, pruneSelection, type SelectionState } from './selection.ts';
+import { DEFAULT_VIEWPORT, type Viewport } from './viewport.ts';
+import { DEFAULT_TECHNOLOGY } from '../core/model/technology.ts';
+import { EMPTY_SHEET } from '../core/sheet/edits.ts';
+
+/** The tool in hand: select (and drag, box-select, wire from a pin), place a part, or draw wires. */
+export type Tool =
+  | { readonly mode: 'select' }
+  | { readonly mode: 'place'; readonly kind: PartKind }
+  | { readonly mode: 'wire' };
+
+/** Transient drawing of a gesture in progress: never saved, never undone. */
+export type Gesture =
+  | { readonly type: 'box'; readonly from: Point; readonly to: Point }
+  | { readonly type: 'wiring'; readonly points: readonly Point[]; readonly cursor: Point }
+  | { readonly type: 'ghost'; readonly kind: PartKind; readonly at: Point };
+
+export interface Message {
+  readonly kind: 'error' | 'info';
+  readonly text: string;
+}
+
+export interface RailwiseState {
+  readonly doc: SheetDocument;
+  readonly design: Design;
+  readonly geometry: SheetGeometry;
+  readonly issues: readonly SheetIssue[];
+  readonly revision: number;
+  readonly history: HistoryState;
+  readonly selection: SelectionState;
+  readonly viewport: Viewport;
+  readonly tool: Tool;
+  readonly gesture: Gesture | null;
+  readonly clipboard: Clip | null;
+  readonly message: Message | null;
+  readonly overlay: 'help' | 'about' | null;
+  /** Size of the sheet area in pixels, kept by the canvas for fit-to-view. */
+  readonly screen: { readonly width: number; readonly height: number };
+}
+
+export const BLANK_DOCUMENT: SheetDocument = {
+  name: 'untitled',
+  technology: DEFAULT_TECHNOLOGY,
+  expectations: {},
+  sequences: [],
+  sheet: EMPTY_SHEET,
+};
+
+function initialState(doc: SheetDocument): RailwiseState {
+  const derived = deriveDesign(doc);
+  return {
+    doc,
+    ...derived,
+    revision: 0,
+    history: EMPTY_HISTORY,
+    selection: EMPTY_SELECTION,
+    viewport: DEFAULT_VIEWPORT,
+    tool: { mode: 'select' },
+    gesture: null,
+    clipboard: null,
+    message: null,
+    overlay: null,
+    screen: { width: 800, height: 600 },
+  };
+}
+
+export const store = createStore<RailwiseState>()(() => initialState(BLANK_DOCUMENT));
+
+export function useStore<T>(selector: (s: RailwiseState) => T): T {
+  return useZustand(store, selector);
+}
+
+/** Test helper and "new sheet" without history: starts over from a document. */
+export function resetStore(doc: SheetDocument = BLANK_DOCUMENT): void {
+  store.setState(initialState(doc), true);
+}
+
+/** Swaps in a new document: derives the design, bumps the revision, prunes the selection. */
+function applyDoc(doc: SheetDocument, history: HistoryState): void {
+  const s = store.getState();
+  store.setState({
+    doc,
+    ...deriveDesign(doc),
+    history,
+    revision: s.revision + 1,
+    selection: { ...s.selection, selected: pruneSelection(s.selection.selected, doc.sheet) },
+  });
+}
+
+/** The one way to change the document as a single undo step. Returns false when nothing changed. */
+export function commitDoc(update: (doc: SheetDocument) => SheetDocument): boolean {
+  const s = store.getState();
+  const base = s.history.gestureStart ?? s.doc;
+  const next = update(s.doc);
+  if (next === s.doc && s.history.gestureStart === null) return false;
+  applyDoc(next, recordStep(s.history, base));
+  return true;
+}
+
+export function beginGesture(): void {
+  const s = store.getState();
+  if (s.history.gestureStart === null) store.setState({ history: { ...s.history, gestureStart: s.doc } });
+}
+
+/** Shows a step of a gesture (a drag frame) without recording it. */
+export function previewDoc(doc: SheetDocument): void {
+  applyDoc(doc, store.getState().history);
+}
+
+/** Ends the gesture as one undo step (or none, if the document ended where it began). */
+export function endGesture(): void {
+  const s = store.getState();
+  const start = s.history.gestureStart;
+  if (start === null) return;
+  if (start === s.doc || JSON.stringify(start) === JSON.stringify(s.doc)) {
+    store.setState({ history: { ...s.history, gestureStart: null } });
+    return;
+  }
+  applyDoc(s.doc, recordStep(s.history, start));
+}
+
+/** Escape during a gesture: back to where it began, nothing recorded. */
+export function cancelGesture(): void {
+  const s = store.getState();
+  store.setState({ gesture: null });
+  if (s.history.gestureStart === null) return;
+  applyDoc(s.history.gestureStart, { ...s.history, gestureStart: null });
+}
+
+export function undo(): boolean {
+  const s = store.getState();
+  if (s.history.gestureStart !== null) cancelGesture();
+  const r = undoStep(store.getState().history, store.getState().doc);
+  if (r) applyDoc(r.doc, r.history);
+  return r !== null;
+}
+
+export function redo(): boolean {
+  const s = store.getState();
+  const r = redoStep(s.history, s.doc);
+  if (r) applyDoc(r.doc, r.history);
+  return r !== null;
+}
+
+/** Opens a design (file, starter, import) as one undoable step, so nothing drawn is lost. */
+export function loadDesign(design: Design): void {
+  const doc = documentFromDesign(design);
+  commitDoc(() => doc);
+  store.setState({ selection: EMPTY_SELECTION, gesture: null });
+}
+
+export type DesignFields = Partial<
+  Pick<SheetDocument, 'name' | 'technology' | 'expectations' | 'sequences' | 'notes'>
+>;
+
+export function setDesignFields(patch: DesignFields): void {
+  commitDoc((doc) => ({ ...doc, ...patch }));
+}
+
+export function setSelection(selected: ItemIds): void {
+  const s = store.getState();
+  store.setState({ selection: { ...s.selection, selected } });
+}
+
+export function clearSelection(): void {
+  setSelection(NO_ITEMS);
+}
+
+export function selectDevices(names: readonly string[]): void {
+  const { geometry } = store.getState();
+  const parts = names.flatMap((n) => geometry.deviceParts[n] ?? []);
+  setSelection({ parts, wires: [] });
+}
+
+export function selectNets(names: readonly string[]): void {
+  const { geometry } = store.getState();
+  const nets = new Set(names);
+  const wires = Object.entries(geometry.wireNets).flatMap(([id, net]) => (nets.has(net) ? [id] : []));
+  const parts = Object.entries(geometry.pinNets).flatMap(([key, net]) =>
+    nets.has(net) ? [key.split('.')[0]!] : [],
+  );
+  setSelection({ parts: [...new Set(parts)], wires });
+}
+
+export function setHighlight(h: { nets?: readonly string[]; devices?: readonly string[] }): void {
+  const s = store.getState();
+  store.setState({
+    selection: { ...s.selection, highlight: { nets: h.nets ?? [], devices: h.devices ?? [] } },
+  });
+}
+
+export function clearHighlight(): void {
+  setHighlight({});
+}
+
+export function setViewport(viewport: Viewport): void {
+  store.setState({ viewport });
+}
+
+export function setTool(tool: Tool): void {
+  store.setState({ tool, gesture: null });
+}
+
+export function setGesture(gesture: Gesture | null): void {
+  store.setState({ gesture });
+}
+
+export function showMessage(kind: Message['kind'], text: string): void {
+  store.setState({ message: { kind, text } });
+}
+
+export function dismissMessage(): void {
+  store.setState({ message: null });
+}
+
+export function setOverlay(overlay: RailwiseState['overlay']): void {
+  store.setState({ overlay });
+}
+
+export function setClipboard(clipboard: Clip | null): void {
+  store.setState({ clipboard });
+}
+
+export function setScreen(width: number, height: number): void {
+  const s = store.getState().screen;
+  if (s.width !== width || s.height !== height) store.setState({ screen: { width, height } });
+}
