@@ -39,6 +39,13 @@ export type SortDirection = 'ascending' | 'descending';
 /** 'problems' keeps vectors with any finding; 'errors' only those with an error-severity finding. */
 export type RowFilter = 'all' | 'problems' | 'errors' | FindingKind;
 
+/** How the table is arranged: kept in the simulation slice so it survives re-renders and re-solves. */
+export interface TableView {
+  readonly sort: SortKey;
+  readonly direction: SortDirection;
+  readonly filter: RowFilter;
+}
+
 /** The report's per-vector results: sweep vectors, or sequence steps. */
 export function reportRows(report: CheckReport): VectorReport[] {
   return [...(report.vectors ?? report.steps ?? [])];

@@ -1,0 +1,96 @@
+/**
+ * The solver's typed arrays turned into what the sheet overlay and the net list draw: a state per
+ * net name, an on/off/maybe mark per device, and each static current path as named nets and devices.
+ */
+import type { CompiledNetlist } from '../compile/compile.ts';
+import {
+  FLAG_CHARGE_SHARED,
+  FLAG_CONTENTION,
+  FLAG_DEGRADED,
+  FLAG_MAYBE,
+  FLAG_OSCILLATING,
+  MAYBE,
+  ON,
+  levelName,
+} from '../solver/levels.ts';
+import type { Conduction, NetState } from './visualLanguage.ts';
+
+/** The part of the solver's SolveResult the views read (kept structural so views stay decoupled). */
+export interface SolvedArrays {
+  readonly volts: Float64Array;
+  readonly levels: Uint8Array;
+  readonly flags: Uint8Array;
+  readonly conduction: Uint8Array;
+  readonly paths: readonly {
+    readonly elements: readonly number[];
+    readonly nets: readonly number[];
+    readonly current: number;
+  }[];
+  readonly supplyCurrent: number;
+  readonly staticPower: number;
+}
+
+export interface CurrentTrace {
+  readonly nets: readonly string[];
+  readonly devices: readonly string[];
+  /** Source net, device, net, …, device, sink net. */
+  readonly chain: readonly string[];
+  readonly current: number;
+}
+
+export interface SolvedView {
+  readonly nets: ReadonlyMap<string, NetState>;
+  readonly devices: ReadonlyMap<string, Conduction>;
+  readonly traces: readonly CurrentTrace[];
+  readonly supplyCurrent: number;
+  readonly staticPower: number;
+}
+
+export function netState(result: SolvedArrays, net: number): NetState {
+  const flags = result.flags[net];
+  const volts = result.volts[net];
+  return {
+    level: levelName(result.levels[net]),
+    volts: Number.isNaN(volts) ? null : volts,
+    degraded: (flags & FLAG_DEGRADED) !== 0,
+    contention: (flags & FLAG_CONTENTION) !== 0,
+    chargeShared: (flags & FLAG_CHARGE_SHARED) !== 0,
+    oscillating: (flags & FLAG_OSCILLATING) !== 0,
+    maybe: (flags & FLAG_MAYBE) !== 0,
+  };
+}
+
+function conductionName(code: number): Conduction {
+  return code === ON ? 'on' : code === MAYBE ? 'maybe' : 'off';
+}
+
+function deviceName(compiled: CompiledNetlist, element: number): string {
+  return compiled.netlist.devices[compiled.chDevice[element]].name;
+}
+
+/** Interleaves a path's nets and elements; a path with one net more than elements is the usual case. */
+export function traceOf(compiled: CompiledNetlist, path: SolvedArrays['paths'][number]): CurrentTrace {
+  const nets = path.nets.map((n) => compiled.netNames[n]);
+  const devices = path.elements.map((e) => deviceName(compiled, e));
+  const chain: string[] = [];
+  nets.forEach((net, i) => {
+    chain.push(net);
+    if (i < devices.length) chain.push(devices[i]);
+  });
+  return { nets, devices, chain, current: path.current };
+}
+
+export function solvedView(compiled: CompiledNetlist, result: SolvedArrays): SolvedView {
+  const nets = new Map<string, NetState>();
+  compiled.netNames.forEach((name, i) => nets.set(name, netState(result, i)));
+  const devices = new Map<string, Conduction>();
+  for (let e = 0; e < compiled.chCount; e++)
+    devices.set(deviceName(compiled, e), conductionName(result.conduction[e]));
+  return {
+    nets,
+    devices,
+    traces: result.paths.map((p) => traceOf(compiled, p)),
+    supplyCurrent: result.supplyCurrent,
+    staticPower: result.staticPower,
+  };
+}

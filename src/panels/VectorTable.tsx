@@ -1,0 +1,136 @@
+import type { FindingKind } from '../core/analysis/report.ts';
+import { formatCurrent, formatPower } from '../core/view/format.ts';
+import type { RowFilter, SortDirection, SortKey, TableView, VectorRow } from '../core/view/vectorTable.ts';
+
+interface VectorTableProps {
+  readonly inputs: readonly string[];
+  readonly outputs: readonly string[];
+  /** Already filtered and sorted. */
+  readonly rows: readonly VectorRow[];
+  readonly total: number;
+  readonly counts: ReadonlyMap<FindingKind, number>;
+  readonly view: TableView;
+  readonly selected: number | null;
+  readonly onView: (view: TableView) => void;
+  readonly onSelect: (index: number) => void;
+}
+
+function SortHeader({
+  label,
+  sortKey,
+  view,
+  onView,
+}: { label: string; sortKey: SortKey } & Pick<VectorTableProps, 'view' | 'onView'>) {
+  const active = view.sort === sortKey;
+  const next: SortDirection = active && view.direction === 'ascending' ? 'descending' : 'ascending';
+  const arrow = active ? (view.direction === 'ascending' ? ' ▲' : ' ▼') : '';
+  return (
+    <th aria-sort={active ? view.direction : 'none'}>
+      <button type="button" onClick={() => onView({ ...view, sort: sortKey, direction: next })}>
+        {label}
+        {arrow}
+      </button>
+    </th>
+  );
+}
+
+function FilterChoice({
+  view,
+  onView,
+  counts,
+  total,
+}: Pick<VectorTableProps, 'view' | 'onView' | 'counts' | 'total'>) {
+  return (
+    <label className="rw-filter">
+      Show{' '}
+      <select
+        data-testid="table-filter"
+        value={view.filter}
+        onChange={(e) => onView({ ...view, filter: e.target.value as RowFilter })}
+      >
+        <option value="all">all {total} vectors</option>
+        <option value="problems">problem vectors{counts.size === 0 ? ' (none)' : ''}</option>
+        <option value="errors">vectors with errors</option>
+        {[...counts].map(([kind, n]) => (
+          <option key={kind} value={kind}>
+            {kind} ({n})
+          </option>
+        ))}
+      </select>
+    </label>
+  );
+}
+
+function RowView({
+  row,
+  inputs,
+  outputs,
+  selected,
+  onSelect,
+}: { row: VectorRow; selected: boolean } & Pick<VectorTableProps, 'inputs' | 'outputs' | 'onSelect'>) {
+  return (
+    <tr
+      data-testid={`vector-row-${row.index}`}
+      className={selected ? 'rw-selected' : undefined}
+      aria-selected={selected}
+      onClick={() => onSelect(row.index)}
+    >
+      <td>{row.index}</td>
+      <td className="rw-mono">{inputs.map((n) => row.inputs[n] ?? '·').join('')}</td>
+      {outputs.map((o) => (
+        <td key={o} className={`rw-mono rw-level-${row.outputs[o] ?? 'X'}`}>
+          {row.outputs[o] ?? '?'}
+          {row.mismatched.includes(o) && (
+            <span className="rw-mismatch" title="differs from the expected function">
+              ≠
+            </span>
+          )}
+        </td>
+      ))}
+      <td className="rw-flags">{row.kinds.join(', ')}</td>
+      <td className="rw-num">{row.supplyCurrent === 0 ? '—' : formatCurrent(row.supplyCurrent)}</td>
+      <td className="rw-num">{row.staticPower === 0 ? '—' : formatPower(row.staticPower)}</td>
+    </tr>
+  );
+}
+
+/** Every vector at a glance; click a header to sort, a row to select that vector. */
+export function VectorTable(props: VectorTableProps) {
+  const { inputs, outputs, rows, view, onView, selected, onSelect } = props;
+  return (
+    <div className="rw-table-wrap">
+      <FilterChoice view={view} onView={onView} counts={props.counts} total={props.total} />
+      <table className="rw-vectors" data-testid="vector-table">
+        <thead>
+          <tr>
+            <SortHeader label="#" sortKey="vector" view={view} onView={onView} />
+            <th>{inputs.join(' ')}</th>
+            {outputs.map((o) => (
+              <SortHeader key={o} label={o} sortKey={`output:${o}`} view={view} onView={onView} />
+            ))}
+            <SortHeader label="flags" sortKey="severity" view={view} onView={onView} />
+            <SortHeader label="I supply" sortKey="supplyCurrent" view={view} onView={onView} />
+            <SortHeader label="P static" sortKey="staticPower" view={view} onView={onView} />
+          </tr>
+        </thead>
+        <tbody>
+          {rows.map((row) => (
+            <RowView
+              key={row.index}
+              row={row}
+              inputs={inputs}
+              outputs={outputs}
+              selected={row.index === selected}
+              onSelect={onSelect}
+            />
+          ))}
+        </tbody>
+      </table>
+      {rows.length === 0 && (
+        <p className="rw-clean" data-testid="table-empty">
+          ✓ No vector matches this filter.
+        </p>
+      )}
+    </div>
+  );
+}

@@ -1,0 +1,15 @@
+/**
+ * The analysis worker: sweeps and sequences off the main thread, so the page never freezes. A thin
+ * adapter: all work is in jobs.ts. Cancel is done by the page terminating this worker.
+ */
+import * as Comlink from 'comlink';
+import { runJob } from './jobs.ts';
+import type { AnalysisWorkerApi } from './protocol.ts';
+
+const api: AnalysisWorkerApi = {
+  run(job, onProgress) {
+    return Promise.resolve(runJob(job, onProgress));
+  },
+};
+
+Comlink.expose(api);

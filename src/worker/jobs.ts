@@ -1,0 +1,95 @@
+/**
+ * The work itself, as plain functions over core calls: the worker exposes them, and tests and the
+ * command line can call them directly. Nothing here knows about workers or the page.
+ */
+import { checkSequence, checkSweep, DEFAULT_MAX_INPUTS } from '../core/analysis/check.ts';
+import type { Design, InputValue, InputVector } from '../core/model/design.ts';
+import { expressionProblem } from '../core/view/expectation.ts';
+import { sequenceLevels } from '../core/view/sequenceLevels.ts';
+import type { AnalysisJob, JobProgress, JobResult, SequenceJob, SweepJob } from './protocol.ts';
+
+/** With Z as a third value, 3^10 = 59,049 vectors: about the two-valued limit of 2^16. */
+export const MAX_INPUTS_WITH_UNDRIVEN = 10;
+
+/** Progress messages cross a thread boundary: at most one per this many milliseconds. */
+const PROGRESS_INTERVAL_MS = 50;
+
+/**
+ * Expected functions the sweep can use: those of existing outputs that parse. The rest become notes,
+ * so renaming a pin never takes the whole table away.
+ */
+export function usableExpectations(design: Design): {
+  expectations: Record<string, string>;
+  notes: string[];
+} {
+  const { inputs, outputs } = design.netlist;
+  const expectations: Record<string, string> = {};
+  const notes: string[] = [];
+  for (const [output, text] of Object.entries(design.expectations)) {
+    const problem = outputs.includes(output)
+      ? expressionProblem(text, inputs)
+      : { message: 'not an output', position: 0 };
+    if (problem === null) expectations[output] = text;
+    else notes.push(`expected function of ${output} ignored: ${problem.message}`);
+  }
+  return { expectations, notes };
+}
+
+/**
+ * Steps as the sequence check applies them: an input a step leaves out keeps its value, X before its
+ * first mention (core/analysis/check.ts). Made explicit so the strips and the report see the same steps.
+ */
+export function heldSteps(inputs: readonly string[], steps: readonly InputVector[]): InputVector[] {
+  let held: Record<string, InputValue> = Object.fromEntries(inputs.map((n) => [n, 'X' as InputValue]));
+  return steps.map((step) => {
+    held = { ...held, ...step };
+    return held;
+  });
+}
+
+function throttled(onProgress: (p: JobProgress) => void): (done: number, total: number) => void {
+  let last = -Infinity;
+  return (done, total) => {
+    const now = performance.now();
+    if (done < total && now - last < PROGRESS_INTERVAL_MS) return;
+    last = now;
+    onProgress({ done, total });
+  };
+}
+
+function sweep(job: SweepJob, onProgress: (p: JobProgress) => void): Pick<JobResult, 'report'> {
+  const { expectations, notes } = usableExpectations(job.design);
+  const undriven = job.undrivenInputs === true;
+  const report = checkSweep(job.design.netlist, {
+    technology: job.design.technology,
+    expectations,
+    undrivenInputs: undriven,
+    maxInputs: undriven ? MAX_INPUTS_WITH_UNDRIVEN : DEFAULT_MAX_INPUTS,
+    onProgress: throttled(onProgress),
+  });
+  return { report: { ...report, notes: [...notes, ...report.notes] } };
+}
+
+function sequence(
+  job: SequenceJob,
+  onProgress: (p: JobProgress) => void,
+): Pick<JobResult, 'report' | 'stepLevels'> {
+  const { netlist, technology } = job.design;
+  const { expectations, notes } = usableExpectations(job.design);
+  const steps = heldSteps(netlist.inputs, job.steps);
+  const report = checkSequence(netlist, steps, {
+    technology,
+    expectations,
+    onProgress: throttled(onProgress),
+  });
+  return {
+    report: { ...report, notes: [...notes, ...report.notes] },
+    stepLevels: sequenceLevels(netlist, technology, steps),
+  };
+}
+
+export function runJob(job: AnalysisJob, onProgress: (p: JobProgress) => void = () => {}): JobResult {
+  const started = performance.now();
+  const outcome = job.kind === 'sweep' ? sweep(job, onProgress) : sequence(job, onProgress);
+  return { kind: job.kind, revision: job.revision, ...outcome, elapsedMs: performance.now() - started };
+}
