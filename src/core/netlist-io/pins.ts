@@ -1,0 +1,47 @@
+/**
+ * Naming a cell's input and output pins by hand (the `--inputs`/`--outputs` flags and the
+ * `* railwise: inputs …` directive), over what the importer inferred. Names match nets
+ * case-insensitively, as SPICE does, and come back in the netlist's own spelling.
+ */
+import { netNames, type Netlist } from '../model/netlist.ts';
+
+export class PinError extends Error {
+  override readonly name = 'PinError';
+}
+
+export interface PinChoice {
+  readonly inputs?: readonly string[];
+  readonly outputs?: readonly string[];
+}
+
+/**
+ * Given inputs replace the inferred ones, and the other inferred pins become outputs unless outputs
+ * are given too. Given outputs replace the inferred ones and leave the inputs that remain.
+ */
+export function assignPins(netlist: Netlist, choice: PinChoice): Netlist {
+  if (choice.inputs === undefined && choice.outputs === undefined) return netlist;
+  const inputs = choice.inputs === undefined ? undefined : resolve(netlist, choice.inputs, 'inputs');
+  const outputs = choice.outputs === undefined ? undefined : resolve(netlist, choice.outputs, 'outputs');
+  const both = inputs?.find((n) => outputs?.includes(n));
+  if (both !== undefined) throw new PinError(`${both} is named both as an input and as an output`);
+  const nextInputs = inputs ?? netlist.inputs.filter((n) => !outputs?.includes(n));
+  const nextOutputs =
+    outputs ?? [...netlist.outputs, ...netlist.inputs].filter((n) => !nextInputs.includes(n));
+  return { ...netlist, inputs: nextInputs, outputs: nextOutputs };
+}
+
+function resolve(netlist: Netlist, names: readonly string[], what: 'inputs' | 'outputs'): string[] {
+  const byLower = new Map(netNames(netlist).map((n) => [n.toLowerCase(), n]));
+  const rails = new Set(netlist.rails.map((r) => r.net));
+  const out: string[] = [];
+  for (const name of names) {
+    const net = byLower.get(name.toLowerCase());
+    if (net === undefined) {
+      const ports = [...netlist.inputs, ...netlist.outputs].join(', ') || 'none';
+      throw new PinError(`${what}: cell ${netlist.name} has no net "${name}" (its pins: ${ports})`);
+    }
+    if (rails.has(net)) throw new PinError(`${what}: ${net} is a rail of cell ${netlist.name}, not a pin`);
+    if (!out.includes(net)) out.push(net);
+  }
+  return out;
+}

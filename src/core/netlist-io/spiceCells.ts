@@ -1,0 +1,170 @@
+/**
+ * Turns one flattened cell into a Netlist: which nets are rails (by name or by a `V` line), which
+ * ports are inputs (those that only reach gates) and outputs (the other non-rail ports), and what
+ * the `* railwise:` directives inside the cell add (expected functions, pin directions).
+ */
+import type { Device, Netlist, Rail } from '../model/netlist.ts';
+import type { Body, Directive } from './spiceParse.ts';
+import { flattenCell, type FlatCell, type FlattenContext, type FlatSource } from './spiceFlatten.ts';
+import { SpiceImportError } from './spiceErrors.ts';
+import { assignPins, PinError } from './pins.ts';
+
+export interface ImportedCell {
+  readonly name: string;
+  readonly netlist: Netlist;
+  /** Expected functions from `* railwise: expect Y = …` lines, by output. */
+  readonly expectations: Readonly<Record<string, string>>;
+  readonly notes: readonly string[];
+}
+
+export interface CellContext extends FlattenContext {
+  /** Role of a net by its name, or null. */
+  readonly railRole: (net: string) => Rail['role'] | null;
+}
+
+export interface CellSpec {
+  readonly name: string;
+  readonly body: Body;
+  /** The subcircuit's ports; null for a flat netlist at the top level, which has none. */
+  readonly ports: readonly string[] | null;
+  /** Extra `V` lines that apply (those at the top level of a library). */
+  readonly sharedSources: readonly FlatSource[];
+}
+
+export function buildCell(spec: CellSpec, ctx: CellContext): ImportedCell {
+  const flat = flattenCell(spec.body, spec.ports ?? [], ctx);
+  const rails = cellRails(flat, spec.sharedSources, ctx);
+  const railNets = new Set(rails.map((r) => r.net));
+  const notes = [...flat.notes];
+  const ports = (spec.ports ?? topLevelPorts(flat)).filter((p) => !railNets.has(resolveNet(flat, p)));
+  const pins = inferPins(
+    flat.devices,
+    ports.map((p) => resolveNet(flat, p)),
+    spec.ports === null,
+  );
+  if (spec.ports === null && pins.outputs.length > 0) {
+    notes.push(
+      `a flat netlist has no ports: outputs taken as the nets that reach no gate (${pins.outputs.join(', ')})`,
+    );
+  }
+  const diodes = flat.devices.filter((d) => d.kind === 'diode').map((d) => d.name);
+  if (diodes.length > 0)
+    notes.push(`protection diodes kept, never conducting in steady state: ${diodes.join(', ')}`);
+  let netlist: Netlist = { name: spec.name, devices: flat.devices, rails, ...pins };
+  netlist = applyPinDirectives(netlist, spec.body.directives, ctx.fileName);
+  const expectations = readExpectations(netlist, spec.body.directives, notes);
+  return { name: spec.name, netlist, expectations, notes };
+}
+
+function resolveNet(flat: FlatCell, name: string): string {
+  return flat.nets.find((n) => n.toLowerCase() === name.toLowerCase()) ?? name;
+}
+
+/** Rails in order of first appearance: named rails, then nets a `V` line holds. */
+function cellRails(flat: FlatCell, shared: readonly FlatSource[], ctx: CellContext): Rail[] {
+  const held = new Map<string, Rail>();
+  const inCell = new Map(flat.nets.map((n) => [n.toLowerCase(), n]));
+  for (const s of [...shared, ...flat.sources]) {
+    const rail = sourceRail(s, ctx);
+    const net = inCell.get(rail.net.toLowerCase());
+    if (net !== undefined) held.set(net, { ...rail, net });
+  }
+  const rails: Rail[] = [];
+  for (const net of flat.nets) {
+    const role = ctx.railRole(net);
+    const fromSource = held.get(net);
+    if (fromSource !== undefined) rails.push(fromSource);
+    else if (role !== null) rails.push({ net, role });
+  }
+  return rails;
+}
+
+/** A `V` line from a net to ground makes that net a supply of that voltage (0 V: a ground). */
+function sourceRail(s: FlatSource, ctx: CellContext): Rail {
+  const plusGround = ctx.railRole(s.plus) === 'ground';
+  const minusGround = ctx.railRole(s.minus) === 'ground';
+  if (!plusGround && !minusGround) {
+    throw new SpiceImportError(
+      ctx.fileName,
+      s.line,
+      `${s.name}: a V source must run from a net to ground (${s.plus} to ${s.minus})`,
+    );
+  }
+  const [net, volts] = minusGround ? [s.plus, s.volts] : [s.minus, -s.volts];
+  if (volts < 0)
+    throw new SpiceImportError(
+      ctx.fileName,
+      s.line,
+      `${s.name}: a negative supply (${volts} V) is not supported`,
+    );
+  if (volts > 0 && ctx.railRole(net) === 'ground') {
+    throw new SpiceImportError(
+      ctx.fileName,
+      s.line,
+      `${s.name}: ${net} is a ground by name but this line holds it at ${volts} V`,
+    );
+  }
+  return volts === 0 ? { net, role: 'ground' } : { net, role: 'supply', volts };
+}
+
+/** A flat netlist's candidate pins: the nets of the top level itself, not inside an instance. */
+function topLevelPorts(flat: FlatCell): string[] {
+  return flat.nets.filter((n) => !n.includes('/'));
+}
+
+/**
+ * Inputs are ports that reach gates and no channel (drain, source or resistor end). The rest are
+ * outputs; for a flat netlist, only those that reach no gate (internal nodes cannot be told apart).
+ */
+function inferPins(devices: readonly Device[], ports: readonly string[], flat: boolean) {
+  const gates = new Set<string>();
+  const channels = new Set<string>();
+  for (const d of devices) {
+    if (d.kind === 'nmos' || d.kind === 'pmos') {
+      gates.add(d.gate);
+      channels.add(d.drain).add(d.source);
+    } else if (d.kind === 'resistor') channels.add(d.a).add(d.b);
+  }
+  const inputs = ports.filter((p) => gates.has(p) && !channels.has(p));
+  const outputs = ports.filter((p) => !inputs.includes(p) && (!flat || (channels.has(p) && !gates.has(p))));
+  return { inputs, outputs };
+}
+
+function applyPinDirectives(netlist: Netlist, directives: readonly Directive[], fileName: string): Netlist {
+  let result = netlist;
+  for (const d of directives) {
+    if (d.key !== 'inputs' && d.key !== 'outputs') continue;
+    const names = d.value.split(/[\s,]+/).filter((n) => n !== '');
+    try {
+      result = assignPins(result, d.key === 'inputs' ? { inputs: names } : { outputs: names });
+    } catch (e) {
+      if (e instanceof PinError) throw new SpiceImportError(fileName, d.line, e.message);
+      throw e;
+    }
+  }
+  return result;
+}
+
+const KNOWN_DIRECTIVES = new Set(['expect', 'inputs', 'outputs', 'supply', 'ground']);
+
+function readExpectations(
+  netlist: Netlist,
+  directives: readonly Directive[],
+  notes: string[],
+): Record<string, string> {
+  const expectations: Record<string, string> = {};
+  for (const d of directives) {
+    if (!KNOWN_DIRECTIVES.has(d.key))
+      notes.push(`line ${d.line}: unknown railwise directive "${d.key}" ignored`);
+    if (d.key !== 'expect') continue;
+    const eq = d.value.indexOf('=');
+    const output = d.value.slice(0, Math.max(eq, 0)).trim();
+    if (eq < 0 || output === '') {
+      notes.push(`line ${d.line}: an expect line reads "expect OUTPUT = EXPRESSION"; ignored`);
+      continue;
+    }
+    const net = netlist.outputs.find((o) => o.toLowerCase() === output.toLowerCase()) ?? output;
+    expectations[net] = d.value.slice(eq + 1).trim();
+  }
+  return expectations;
+}

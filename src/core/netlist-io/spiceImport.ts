@@ -1,0 +1,136 @@
+/**
+ * SPICE-compatible netlist import (SPEC §6): a file holds one cell (a flat netlist, or one
+ * subcircuit that the others build up) or a library (several top-level subcircuits that nothing
+ * instantiates, each its own cell). In a library a broken cell is reported apart and never stops
+ * the rest; in a single-cell file the problem throws.
+ */
+import type { Rail } from '../model/netlist.ts';
+import { parseSpice, type Body, type SpiceFile, type Subckt } from './spiceParse.ts';
+import { buildCell, type CellContext, type CellSpec, type ImportedCell } from './spiceCells.ts';
+import type { FlatSource } from './spiceFlatten.ts';
+import { SpiceImportError } from './spiceErrors.ts';
+
+export { SpiceImportError } from './spiceErrors.ts';
+export type { ImportedCell } from './spiceCells.ts';
+
+export interface SpiceImportOptions {
+  /** Extra net names taken as supply rails (libraries use many spellings). */
+  readonly supplyNames?: readonly string[];
+  readonly groundNames?: readonly string[];
+}
+
+export interface FailedCell {
+  readonly name: string;
+  readonly error: SpiceImportError;
+}
+
+export interface SpiceImport {
+  readonly file: string;
+  /** Several top-level subcircuits, each checked as its own cell. */
+  readonly isLibrary: boolean;
+  readonly cells: readonly ImportedCell[];
+  /** Cells of a library that could not be read; empty for a single-cell file (which throws). */
+  readonly failed: readonly FailedCell[];
+  /** File-level notes: ignored commands, a title line, unused subcircuits. */
+  readonly notes: readonly string[];
+}
+
+/** Net names that are rails in every file, compared lower-case with a trailing `!` dropped. */
+const GROUND_NAMES = ['0', 'gnd', 'vss'];
+const SUPPLY_NAMES = ['vdd', 'vcc'];
+
+export function importSpice(text: string, fileName: string, options: SpiceImportOptions = {}): SpiceImport {
+  const file = parseSpice(text, fileName);
+  const ctx = cellContext(file, fileName, options);
+  const shared = topLevelSources(file.top);
+  const notes = [...file.notes];
+  if (file.top.elements.some((e) => e.kind !== 'source')) {
+    const unused = file.subckts.filter(
+      (s) => !instantiated(file.top, s) && !file.subckts.some((o) => instantiated(o, s)),
+    );
+    if (unused.length > 0)
+      notes.push(`subcircuits defined but not used: ${unused.map((s) => s.name).join(', ')}`);
+    const spec: CellSpec = { name: baseName(fileName), body: file.top, ports: null, sharedSources: [] };
+    return { file: fileName, isLibrary: false, cells: [buildCell(spec, ctx)], failed: [], notes };
+  }
+  const roots = file.subckts.filter((s) => !file.subckts.some((o) => o !== s && instantiated(o, s)));
+  if (roots.length === 0) {
+    const line = file.subckts[0]?.line ?? 1;
+    throw new SpiceImportError(
+      fileName,
+      line,
+      'no devices found: the file holds no elements and no .subckt that could be a cell',
+    );
+  }
+  const specs = roots.map((s): CellSpec => ({
+    name: s.name,
+    body: s,
+    ports: s.ports,
+    sharedSources: shared,
+  }));
+  const [only] = specs;
+  if (only !== undefined && specs.length === 1) {
+    const cell = buildCell({ ...only, body: withTopDirectives(only.body, file.top) }, ctx);
+    return { file: fileName, isLibrary: false, cells: [cell], failed: [], notes };
+  }
+  const cells: ImportedCell[] = [];
+  const failed: FailedCell[] = [];
+  for (const spec of specs) {
+    try {
+      cells.push(buildCell(spec, ctx));
+    } catch (e) {
+      if (!(e instanceof SpiceImportError)) throw e;
+      failed.push({ name: spec.name, error: e });
+    }
+  }
+  return { file: fileName, isLibrary: true, cells, failed, notes };
+}
+
+function instantiated(body: Body, sub: Subckt): boolean {
+  const lower = sub.name.toLowerCase();
+  return body.elements.some((e) => e.kind === 'instance' && e.subckt.toLowerCase() === lower);
+}
+
+/** `* railwise: supply …` and `ground …` lines anywhere in the file name rails for all cells. */
+function cellContext(file: SpiceFile, fileName: string, options: SpiceImportOptions): CellContext {
+  const bare = (n: string): string => n.toLowerCase().replace(/!$/, '');
+  const directiveNames = (key: string): string[] =>
+    [file.top, ...file.subckts].flatMap((b) =>
+      b.directives.filter((d) => d.key === key).flatMap((d) => d.value.split(/[\s,]+/)),
+    );
+  const ground = new Set(
+    [...GROUND_NAMES, ...(options.groundNames ?? []), ...directiveNames('ground')].map(bare),
+  );
+  const supply = new Set(
+    [...SUPPLY_NAMES, ...(options.supplyNames ?? []), ...directiveNames('supply')].map(bare),
+  );
+  const railRole = (net: string): Rail['role'] | null => {
+    const b = bare(net);
+    return ground.has(b) ? 'ground' : supply.has(b) ? 'supply' : null;
+  };
+  const globals = new Set([
+    ...file.globals,
+    ...topLevelSources(file.top)
+      .flatMap((s) => [s.plus, s.minus])
+      .map((n) => n.toLowerCase()),
+  ]);
+  const isGlobal = (lower: string): boolean =>
+    railRole(lower) !== null || globals.has(lower) || lower.endsWith('!');
+  return { file, fileName, railRole, isGlobal };
+}
+
+function topLevelSources(top: Body): FlatSource[] {
+  return top.elements.flatMap((e) =>
+    e.kind === 'source' ? [{ name: e.name, line: e.line, plus: e.plus, minus: e.minus, volts: e.volts }] : [],
+  );
+}
+
+/** Directives at the top of a single-subcircuit file (`expect`, `inputs`) belong to its cell. */
+function withTopDirectives(sub: Body, top: Body): Body {
+  return top.directives.length === 0 ? sub : { ...sub, directives: [...top.directives, ...sub.directives] };
+}
+
+function baseName(fileName: string): string {
+  const base = fileName.split(/[\\/]/).pop() ?? fileName;
+  return base.replace(/\.[^.]+$/, '') || 'cell';
+}

@@ -1,0 +1,199 @@
+/**
+ * Reads SPICE text into its structure: the top level, the subcircuits, the model cards and the
+ * `.global` nets. Problems inside one subcircuit are kept on that subcircuit (so one broken cell of a
+ * library never stops the rest); problems with the file's structure throw.
+ */
+import { ContinuationError, logicalLines, tokens, type LogicalLine } from './spiceLines.ts';
+import { ElementError, readElement, type Element } from './spiceElements.ts';
+import { SpiceImportError } from './spiceErrors.ts';
+
+export interface Directive {
+  readonly line: number;
+  /** Lower-case key: expect, inputs, outputs, supply, ground. */
+  readonly key: string;
+  readonly value: string;
+}
+
+export interface Body {
+  readonly elements: Element[];
+  readonly directives: Directive[];
+  /** The first problem found in this body, if any. */
+  error?: SpiceImportError;
+}
+
+export interface Subckt extends Body {
+  readonly name: string;
+  readonly line: number;
+  readonly ports: readonly string[];
+}
+
+export interface ModelCard {
+  /** Lower-case device type as written: nmos, pmos, d, npn… */
+  readonly type: string;
+  readonly line: number;
+}
+
+export interface SpiceFile {
+  readonly top: Body;
+  readonly subckts: Subckt[];
+  /** By lower-case model name. */
+  readonly models: Map<string, ModelCard>;
+  /** Lower-case names declared by `.global`. */
+  readonly globals: Set<string>;
+  readonly notes: string[];
+}
+
+/** Commands that set up an analysis or output; they do not change the network. */
+const ANALYSIS_COMMANDS = new Set([
+  '.option',
+  '.options',
+  '.temp',
+  '.tran',
+  '.dc',
+  '.ac',
+  '.op',
+  '.print',
+  '.plot',
+  '.probe',
+  '.meas',
+  '.measure',
+  '.save',
+  '.ic',
+  '.nodeset',
+  '.param',
+  '.params',
+  '.title',
+  '.width',
+  '.four',
+  '.noise',
+]);
+
+interface ParseState {
+  readonly file: SpiceFile;
+  readonly fileName: string;
+  current: Subckt | null;
+  ended: boolean;
+  inControl: boolean;
+}
+
+export function parseSpice(text: string, fileName: string): SpiceFile {
+  const file: SpiceFile = {
+    top: { elements: [], directives: [] },
+    subckts: [],
+    models: new Map(),
+    globals: new Set(),
+    notes: [],
+  };
+  const state: ParseState = { file, fileName, current: null, ended: false, inControl: false };
+  for (const [index, l] of readLines(text, fileName).entries()) {
+    if (state.ended) break;
+    if (l.kind === 'directive') addDirective(state, l);
+    else if (state.inControl) state.inControl = !/^\.endc\b/i.test(l.text);
+    else if (l.text.startsWith('.')) dotCommand(state, l);
+    else if (index === 0 && l.line === 1 && isTitle(l.text))
+      file.notes.push(`line 1 read as the title: "${l.text}"`);
+    else addElement(state, l);
+  }
+  if (state.current !== null) {
+    throw new SpiceImportError(fileName, state.current.line, `.subckt ${state.current.name} has no .ends`);
+  }
+  return file;
+}
+
+function readLines(text: string, fileName: string): LogicalLine[] {
+  try {
+    return logicalLines(text);
+  } catch (e) {
+    if (e instanceof ContinuationError) throw new SpiceImportError(fileName, e.line, e.message);
+    throw e;
+  }
+}
+
+/** Classic SPICE takes the first line as a title; we do so only when it reads as no element. */
+function isTitle(text: string): boolean {
+  try {
+    readElement(text, 1);
+    return false;
+  } catch {
+    return true;
+  }
+}
+
+function addDirective(state: ParseState, l: LogicalLine): void {
+  const m = /^(\S+)\s*(.*)$/.exec(l.text);
+  const key = (m?.[1] ?? '').toLowerCase();
+  const body = state.current ?? state.file.top;
+  body.directives.push({ line: l.line, key, value: (m?.[2] ?? '').trim() });
+}
+
+function addElement(state: ParseState, l: LogicalLine): void {
+  const body = state.current ?? state.file.top;
+  try {
+    body.elements.push(readElement(l.text, l.line));
+  } catch (e) {
+    if (!(e instanceof ElementError)) throw e;
+    const error = new SpiceImportError(state.fileName, l.line, e.message);
+    // At the top level there is no cell to isolate the problem in: the file is unusable.
+    if (state.current === null) throw error;
+    body.error ??= error;
+  }
+}
+
+function dotCommand(state: ParseState, l: LogicalLine): void {
+  const t = tokens(l.text);
+  const command = (t[0] ?? '').toLowerCase();
+  const fail = (detail: string): never => {
+    throw new SpiceImportError(state.fileName, l.line, detail);
+  };
+  if (command === '.subckt') return openSubckt(state, t, l.line, fail);
+  if (command === '.ends') {
+    if (state.current === null) fail('.ends without a .subckt');
+    state.current = null;
+    return;
+  }
+  if (command === '.model') return addModel(state, t, l.line, fail);
+  if (command === '.global') {
+    t.slice(1).forEach((n) => state.file.globals.add(n.toLowerCase()));
+    return;
+  }
+  if (command === '.end') {
+    state.ended = true;
+    return;
+  }
+  if (command === '.control') {
+    state.inControl = true;
+    state.file.notes.push(`line ${l.line}: .control block skipped`);
+    return;
+  }
+  if (command === '.include' || command === '.inc' || command === '.lib') {
+    fail(`${command} is not supported: paste the included netlist into this file`);
+  }
+  if (ANALYSIS_COMMANDS.has(command)) {
+    state.file.notes.push(`line ${l.line}: ${command} ignored (it does not change the network)`);
+    return;
+  }
+  fail(`${command} is not a command this reader supports`);
+}
+
+function openSubckt(state: ParseState, t: readonly string[], line: number, fail: (d: string) => never): void {
+  if (state.current !== null)
+    fail(`.subckt inside .subckt ${state.current.name} (line ${state.current.line}) is not supported`);
+  const name = t[1];
+  if (name === undefined) fail('.subckt needs a name');
+  const lower = (name as string).toLowerCase();
+  const twin = state.file.subckts.find((s) => s.name.toLowerCase() === lower);
+  if (twin !== undefined) fail(`subcircuit ${name} is already defined on line ${twin.line}`);
+  const rest = t.slice(2).filter((p) => !/^params:$/i.test(p));
+  const ports = rest.filter((p) => !p.includes('='));
+  if (ports.length < rest.length)
+    state.file.notes.push(`line ${line}: parameters of .subckt ${name} ignored`);
+  const sub: Subckt = { name: name as string, line, ports, elements: [], directives: [] };
+  state.file.subckts.push(sub);
+  state.current = sub;
+}
+
+function addModel(state: ParseState, t: readonly string[], line: number, fail: (d: string) => never): void {
+  const [, name, type] = t;
+  if (name === undefined || type === undefined) fail('.model needs a name and a type');
+  state.file.models.set((name as string).toLowerCase(), { type: (type as string).toLowerCase(), line });
+}
