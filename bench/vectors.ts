@@ -33,3 +33,18 @@ export function vectorAt(inputs: readonly string[], index: number): InputVector 
 export function operand(nets: readonly string[], value: number): Record<string, InputValue> {
   return Object.fromEntries(nets.map((n, i) => [n, bit(((value >>> i) & 1) === 1)]));
 }
+
+/**
+ * A closed walk of single-input toggles: from a random vector, flip one random input `steps` times,
+ * then retrace the flips back to the start. Going round it, every step changes exactly one input.
+ */
+export function toggleWalk(inputs: readonly string[], steps: number, seed = 5): InputVector[] {
+  const random = seededRandom(seed);
+  const forward: InputVector[] = randomVectors(inputs, 1, seed + 1);
+  for (let s = 0; s < steps; s++) {
+    const previous = forward[forward.length - 1];
+    const name = inputs[Math.floor(random() * inputs.length)];
+    forward.push({ ...previous, [name]: previous[name] === '1' ? '0' : '1' });
+  }
+  return [...forward, ...forward.slice(1, -1).reverse()];
+}

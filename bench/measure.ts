@@ -1,0 +1,129 @@
+/**
+ * The measurements: each compiles a generated netlist once, warms the solver up, then times it.
+ * Every function returns a CaseResult in the shape the JSON line promises.
+ */
+import { compile, type CompiledNetlist } from '../src/core/compile/compile.ts';
+import type { InputVector } from '../src/core/model/design.ts';
+import type { Netlist } from '../src/core/model/netlist.ts';
+import { DEFAULT_TECHNOLOGY } from '../src/core/model/technology.ts';
+import { LEVEL_X, LEVEL_Z } from '../src/core/solver/levels.ts';
+import { Simulator, type SolveResult } from '../src/core/solver/simulator.ts';
+import { transistorCount } from './generators/index.ts';
+import { now, repeat, secondsSince } from './timing.ts';
+import { randomVectors, vectorAt } from './vectors.ts';
+
+export type CaseKind = 'settle' | 'random' | 'sweep' | 'toggle' | 'edit';
+
+export interface CaseResult {
+  readonly name: string;
+  readonly kind: CaseKind;
+  readonly transistors: number;
+  readonly vectors: number;
+  /** Seconds for all `vectors` (for settle, toggle and edit: the median of one). */
+  readonly seconds: number;
+  readonly nsPerTransistorVector: number;
+  readonly vectorsPerSecond: number;
+  /** Nets whose level was X or Z in the last timed vector: a quick sign the circuit is wired right. */
+  readonly unknownOutputs?: number;
+  /** True when the figure was projected from part of the work (see measureSweep). */
+  readonly extrapolated?: boolean;
+}
+
+export interface Prepared {
+  readonly netlist: Netlist;
+  readonly compiled: CompiledNetlist;
+  readonly simulator: Simulator;
+  readonly transistors: number;
+}
+
+export function prepare(netlist: Netlist): Prepared {
+  const compiled = compile(netlist, DEFAULT_TECHNOLOGY);
+  return { netlist, compiled, simulator: new Simulator(compiled), transistors: transistorCount(netlist) };
+}
+
+function result(name: string, kind: CaseKind, p: Prepared, vectors: number, seconds: number): CaseResult {
+  return {
+    name,
+    kind,
+    transistors: p.transistors,
+    vectors,
+    seconds,
+    nsPerTransistorVector: (seconds * 1e9) / (p.transistors * vectors),
+    vectorsPerSecond: vectors / seconds,
+  };
+}
+
+function countUnknownOutputs(p: Prepared, solved: SolveResult): number {
+  return Array.from(p.compiled.outputNets).filter(
+    (n) => solved.levels[n] === LEVEL_X || solved.levels[n] === LEVEL_Z,
+  ).length;
+}
+
+/** Median time to settle one vector from an unknown state, alternating between two random vectors. */
+export function measureSettle(name: string, p: Prepared, budgetSeconds = 0.3): CaseResult {
+  const vectors = randomVectors(p.netlist.inputs, 2, 7);
+  let i = 0;
+  const sample = repeat(() => p.simulator.solveFresh(vectors[i++ & 1]), { budgetSeconds, maxRuns: 2000 });
+  const unknownOutputs = countUnknownOutputs(p, p.simulator.solveFresh(vectors[0]));
+  return { ...result(name, 'settle', p, 1, sample.median), unknownOutputs };
+}
+
+/** Throughput on a batch of seeded random vectors, each solved from an unknown state. */
+export function measureRandom(name: string, p: Prepared, budgetSeconds = 1): CaseResult {
+  const batch = randomVectors(p.netlist.inputs, 256, 11);
+  const solveBatch = (): void => {
+    for (const v of batch) p.simulator.solveFresh(v);
+  };
+  const sample = repeat(solveBatch, { warmup: 1, budgetSeconds, minRuns: 1, maxRuns: 100 });
+  return result(name, 'random', p, batch.length * sample.runs, sample.total);
+}
+
+/**
+ * Every combination of the inputs, each from an unknown state, building each vector as a caller
+ * would. If the first 1,024 vectors project past `limitSeconds`, the sweep stops there and the
+ * figure is projected (and marked so) rather than holding the whole run hostage.
+ */
+export function measureSweep(name: string, p: Prepared, limitSeconds = 60): CaseResult {
+  const inputs = p.netlist.inputs;
+  const total = 2 ** inputs.length;
+  for (let v = 0; v < Math.min(total, 512); v++) p.simulator.solveFresh(vectorAt(inputs, v * 97));
+  const start = now();
+  for (let v = 0; v < total; v++) {
+    p.simulator.solveFresh(vectorAt(inputs, v));
+    if (v === 1023 && (secondsSince(start) * total) / 1024 > limitSeconds) {
+      const projected = (secondsSince(start) * total) / 1024;
+      return { ...result(name, 'sweep', p, total, projected), extrapolated: true };
+    }
+  }
+  return result(name, 'sweep', p, total, secondsSince(start));
+}
+
+/**
+ * Median time to re-solve after one input changes, carrying the previous state (`solveNext`).
+ * `walk` is a closed cycle of vectors, each differing from the one before (and the last from the
+ * first) in a single input; the timed solves go round it.
+ */
+export function measureToggle(name: string, p: Prepared, walk: readonly InputVector[]): CaseResult {
+  let previous = p.simulator.solveFresh(walk[0]);
+  let i = 1;
+  const sample = repeat(
+    () => {
+      previous = p.simulator.solveNext(walk[i++ % walk.length], previous);
+    },
+    { warmup: 2 * walk.length, budgetSeconds: 0.5, maxRuns: 5000 },
+  );
+  return result(name, 'toggle', p, 1, sample.median);
+}
+
+/** After an edit the app recompiles and solves from scratch: compile + new Simulator + solveFresh. */
+export function measureEdit(name: string, netlist: Netlist, vector: InputVector): CaseResult {
+  let p = prepare(netlist);
+  const sample = repeat(
+    () => {
+      p = prepare(netlist);
+      p.simulator.solveFresh(vector);
+    },
+    { warmup: 3, budgetSeconds: 0.5, maxRuns: 200 },
+  );
+  return result(name, 'edit', p, 1, sample.median);
+}

@@ -1,0 +1,128 @@
+/**
+ * `npm run bench`: times the switch-level solver on generated circuits and prints a table.
+ * `npm run --silent bench -- --json` also prints, as its last line, one JSON object with every figure.
+ * Progress goes to stderr so stdout stays the table and the JSON line.
+ */
+import { compile } from '../src/core/compile/compile.ts';
+import { DEFAULT_TECHNOLOGY } from '../src/core/model/technology.ts';
+import { FAMILIES, MEMORY_SERIES, TOGGLE_BITS, familyNamed, sweepCircuit } from './cases.ts';
+import { floorFrame, floorLoop } from './floor.ts';
+import { rippleAdder } from './generators/index.ts';
+import { measureMemory, withSlopes, type MemoryResult } from './memory.ts';
+import {
+  measureEdit,
+  measureRandom,
+  measureSettle,
+  measureSweep,
+  measureToggle,
+  prepare,
+  type CaseResult,
+} from './measure.ts';
+import { formatNumber, formatTable } from './table.ts';
+import { now, repeat, secondsSince } from './timing.ts';
+import { operand, toggleWalk } from './vectors.ts';
+
+function progress(message: string): void {
+  process.stderr.write(`bench: ${message}\n`);
+}
+
+/** Floor ns per transistor per vector, on the sweep circuit (1,792 transistors). */
+function measureFloor(): number {
+  const frame = floorFrame(compile(sweepCircuit(), DEFAULT_TECHNOLOGY));
+  const vectors = 8192;
+  let sink = 0;
+  const sample = repeat(() => (sink += floorLoop(frame, vectors)), { warmup: 3, budgetSeconds: 0.5 });
+  if (sink === -1) progress('unreachable'); // keeps the checksum alive
+  return (sample.median * 1e9) / (frame.gates.length * vectors);
+}
+
+function settleSeries(): CaseResult[] {
+  return FAMILIES.flatMap((family) =>
+    family.sizes.map((size) => {
+      progress(`settle ${family.name} ${size} ${family.unit}`);
+      return measureSettle(`settle/${family.name}/${size}`, prepare(family.make(size)));
+    }),
+  );
+}
+
+function randomSeries(): CaseResult[] {
+  const largest = FAMILIES.map((f) => ({ name: f.name, netlist: f.make(f.sizes[f.sizes.length - 1]) }));
+  return [...largest, { name: 'adder-bank', netlist: sweepCircuit() }].map(({ name, netlist }) => {
+    progress(`random vectors on ${netlist.name}`);
+    return measureRandom(`random/${name}`, prepare(netlist));
+  });
+}
+
+/** A random walk of toggles, and the worst case: the carry rippling through every bit. */
+function toggleCases(): CaseResult[] {
+  progress(`toggle and edit on a ${TOGGLE_BITS}-bit ripple adder`);
+  const p = prepare(rippleAdder(TOGGLE_BITS));
+  const a = p.netlist.inputs.filter((n) => n.startsWith('A'));
+  const b = p.netlist.inputs.filter((n) => n.startsWith('B'));
+  // A = all ones, B = 0: flipping the carry-in flips every carry and every sum bit.
+  const ripple = { ...operand(a, -1), ...operand(b, 0), CI: '0' } as const;
+  return [
+    measureToggle('toggle/ripple-adder-179/random-input', p, toggleWalk(p.netlist.inputs, 64)),
+    measureToggle('toggle/ripple-adder-179/carry-through-all-bits', p, [ripple, { ...ripple, CI: '1' }]),
+    measureEdit('edit/ripple-adder-179/compile-and-solve', p.netlist, ripple),
+  ];
+}
+
+function memorySeries(): MemoryResult[] {
+  return MEMORY_SERIES.flatMap(({ family, sizes }) =>
+    withSlopes(
+      sizes.map((size) => {
+        progress(`memory ${family} ${size}`);
+        return measureMemory(`memory/${family}/${size}`, () => familyNamed(family).make(size));
+      }),
+    ),
+  );
+}
+
+function printTables(floorNs: number, cases: readonly CaseResult[], memory: readonly MemoryResult[]): void {
+  console.log(`Railwise solver benchmark (Node ${process.version})`);
+  console.log(`floor loop: ${floorNs.toFixed(3)} ns per transistor per vector\n`);
+  const rows = cases.map((c) => [
+    c.name + (c.extrapolated ? ' (projected)' : ''),
+    c.transistors,
+    c.vectors,
+    c.seconds * 1e3,
+    c.vectorsPerSecond,
+    c.nsPerTransistorVector,
+    c.nsPerTransistorVector / floorNs,
+  ]);
+  console.log(
+    formatTable(['case', 'transistors', 'vectors', 'ms', 'vectors/s', 'ns/(T·vec)', '× floor'], rows),
+  );
+  console.log('\nsettle, toggle and edit rows: median ms for one vector; random and sweep rows: total ms.\n');
+  const memRows = memory.map((m) => [
+    m.name,
+    m.transistors,
+    m.bytesPerTransistor,
+    m.heapBytesPerTransistor,
+    m.marginalBytesPerTransistor === undefined ? '' : formatNumber(m.marginalBytesPerTransistor),
+  ]);
+  console.log(formatTable(['memory', 'transistors', 'bytes/T', 'JS-heap bytes/T', 'slope bytes/T'], memRows));
+}
+
+function main(): void {
+  const json = process.argv.includes('--json');
+  const started = now();
+  progress('floor loop');
+  const floorNs = measureFloor();
+  const cases = [...settleSeries(), ...randomSeries()];
+  progress('exhaustive sweep, 65,536 vectors');
+  const sweep = measureSweep('sweep/adder-bank-16-inputs', prepare(sweepCircuit()));
+  cases.push(sweep, ...toggleCases());
+  const memory = memorySeries();
+  printTables(floorNs, cases, memory);
+  const totalSeconds = secondsSince(started);
+  console.log(`\nwhole run: ${totalSeconds.toFixed(1)} s`);
+  if (json) {
+    const withRatio = cases.map((c) => ({ ...c, ratioToFloor: c.nsPerTransistorVector / floorNs }));
+    const summary = { node: process.version, totalSeconds, sweepSeconds: sweep.seconds, memory };
+    console.log(JSON.stringify({ floorNsPerTransistorVector: floorNs, cases: withRatio, ...summary }));
+  }
+}
+
+main();
