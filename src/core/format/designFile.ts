@@ -44,8 +44,16 @@ export function parseDesignFile(text: string, fileName: string): Design {
   }
   const result = designFileV1Schema.safeParse(migrateToCurrent(raw, version));
   if (!result.success) throw schemaError(fileName, raw, version, result.error);
-  const { format: _format, version: _version, ...design } = result.data;
-  return design;
+  const { name, technology, netlist, expectations, sequences, sheet, notes } = result.data;
+  return {
+    name,
+    technology,
+    netlist,
+    expectations,
+    sequences,
+    ...(sheet === undefined ? {} : { sheet }),
+    ...(notes === undefined ? {} : { notes }),
+  };
 }
 
 /** Stable key order and two-space indentation, so saved files diff well under version control. */
