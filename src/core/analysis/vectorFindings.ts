@@ -10,7 +10,6 @@ import {
   LEVEL_X,
   LEVEL_Z,
   levelName,
-  MAYBE,
 } from '../solver/levels.ts';
 import type { SolveResult } from '../solver/simulator.ts';
 import type { Finding, FindingKind, Severity } from './report.ts';
@@ -87,11 +86,8 @@ function currentFindings(r: SolveResult, vector: number, label: string): Finding
     const watts = r.volts[p.nets[0]] * p.current - r.volts[p.nets[p.nets.length - 1]] * p.current;
     const transistorsOnly = p.elements.every((e) => c.chKind[e] !== RESISTOR);
     const crossesX = p.nets.some((n) => r.levels[n] === LEVEL_X && !r.topology.isSource[n]);
-    const maybe = p.elements.some((e) => r.conduction[e] === MAYBE)
-      ? ' (possible: a gate on the path is at X)'
-      : '';
     const short = transistorsOnly && crossesX;
-    const message = `${short ? 'short' : 'static current'} at ${label}: ${chain.join(' → ')}, ${formatAmps(p.current)}, ${formatWatts(watts)}${maybe}`;
+    const message = `${short ? 'short' : 'static current'} at ${label}: ${chain.join(' → ')}, ${formatAmps(p.current)}, ${formatWatts(watts)}`;
     return {
       kind: short ? 'short' : 'static-current',
       severity: short ? 'error' : 'warning',

@@ -130,7 +130,8 @@ function groupsUnderMaybe(frame: Frame): (j: number) => number {
 
 /**
  * Accumulates trials: a net keeps its value when every trial agrees on its level and on whether it
- * is driven; otherwise it becomes X (flagged maybe). Currents are those of the trial drawing the most.
+ * is driven; otherwise it becomes X (flagged maybe). Currents are those of the first trial, where
+ * every maybe device is off: only definitely conducting paths carry reported current.
  */
 class TrialMerge {
   private readonly volts: Float64Array;
@@ -140,7 +141,6 @@ class TrialMerge {
   private readonly level: Uint8Array;
   private readonly agree: Uint8Array;
   private readonly current: Float64Array;
-  private bestDraw = -1;
   private trials = 0;
 
   constructor(private readonly frame: Frame) {
@@ -170,12 +170,7 @@ class TrialMerge {
         this.flags[i] |= f.flags[i];
       }
     }
-    let draw = 0;
-    for (let j = 0; j < f.elemCount; j++) draw += Math.abs(f.current[j]);
-    if (draw > this.bestDraw) {
-      this.bestDraw = draw;
-      this.current.set(f.current.subarray(0, f.elemCount));
-    }
+    if (this.trials === 0) this.current.set(f.current.subarray(0, f.elemCount));
     this.trials++;
   }
 

@@ -3,7 +3,7 @@ import type { InputVector } from '../model/design.ts';
 import { currentPaths, type PathIndices } from './currentPaths.ts';
 import { conductionOf, evaluateCcc } from './evaluate.ts';
 import { Frame } from './frame.ts';
-import { classify, FLAG_OSCILLATING, LEVEL_Z } from './levels.ts';
+import { classify, FLAG_OSCILLATING, LEVEL_Z, ON } from './levels.ts';
 import { buildTopology, type Topology } from './topology.ts';
 
 /**
@@ -199,7 +199,7 @@ export class Simulator {
     const { topology, frame } = p;
     const { volts, driven, chCurrent } = state;
     for (const e of topology.bridges) {
-      const on = conductionOf(frame, e, volts) !== 0;
+      const on = conductionOf(frame, e, volts) === ON;
       const dv = sourceVolts[c.chA[e]] - sourceVolts[c.chB[e]];
       chCurrent[e] = on && Number.isFinite(dv) ? dv / c.chOhms[e] : 0;
     }
