@@ -2,6 +2,7 @@
  * The measurements: each compiles a generated netlist once, warms the solver up, then times it.
  * Every function returns a CaseResult in the shape the JSON line promises.
  */
+import { checkSweep } from '../src/core/analysis/check.ts';
 import { compile, type CompiledNetlist } from '../src/core/compile/compile.ts';
 import type { InputVector } from '../src/core/model/design.ts';
 import type { Netlist } from '../src/core/model/netlist.ts';
@@ -12,7 +13,7 @@ import { transistorCount } from './generators/index.ts';
 import { now, repeat, secondsSince } from './timing.ts';
 import { randomVectors, vectorAt } from './vectors.ts';
 
-export type CaseKind = 'settle' | 'random' | 'sweep' | 'toggle' | 'edit';
+export type CaseKind = 'settle' | 'random' | 'sweep' | 'check-sweep' | 'toggle' | 'edit';
 
 export interface CaseResult {
   readonly name: string;
@@ -126,4 +127,20 @@ export function measureEdit(name: string, netlist: Netlist, vector: InputVector)
     { warmup: 3, budgetSeconds: 0.5, maxRuns: 200 },
   );
   return result(name, 'edit', p, 1, sample.median);
+}
+
+/**
+ * The whole analysis a user runs, `checkSweep`: vectors, solves, findings and the report. Set beside
+ * a solver-only sweep of the same netlist, it shows what the reporting adds.
+ */
+export function measureCheckSweep(name: string, netlist: Netlist): CaseResult {
+  const p = prepare(netlist);
+  let vectors = 0;
+  const sample = repeat(
+    () => {
+      vectors = checkSweep(netlist).summary.vectors;
+    },
+    { warmup: 1, budgetSeconds: 1, minRuns: 1, maxRuns: 3 },
+  );
+  return result(name, 'check-sweep', p, vectors, sample.median);
 }

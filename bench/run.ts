@@ -5,11 +5,12 @@
  */
 import { compile } from '../src/core/compile/compile.ts';
 import { DEFAULT_TECHNOLOGY } from '../src/core/model/technology.ts';
-import { FAMILIES, MEMORY_SERIES, TOGGLE_BITS, familyNamed, sweepCircuit } from './cases.ts';
+import { FAMILIES, MEMORY_SERIES, OVERHEAD_BITS, TOGGLE_BITS, familyNamed, sweepCircuit } from './cases.ts';
 import { floorFrame, floorLoop } from './floor.ts';
 import { rippleAdder } from './generators/index.ts';
 import { measureMemory, withSlopes, type MemoryResult } from './memory.ts';
 import {
+  measureCheckSweep,
   measureEdit,
   measureRandom,
   measureSettle,
@@ -51,6 +52,16 @@ function randomSeries(): CaseResult[] {
     progress(`random vectors on ${netlist.name}`);
     return measureRandom(`random/${name}`, prepare(netlist));
   });
+}
+
+/** The same 13-input sweep solver-only and through checkSweep, to show what the reporting costs. */
+function analysisOverhead(): CaseResult[] {
+  progress(`sweep and checkSweep on a ${OVERHEAD_BITS}-bit ripple adder`);
+  const netlist = rippleAdder(OVERHEAD_BITS);
+  return [
+    measureSweep(`sweep/ripple-adder-${OVERHEAD_BITS}`, prepare(netlist)),
+    measureCheckSweep(`check-sweep/ripple-adder-${OVERHEAD_BITS}`, netlist),
+  ];
 }
 
 /** A random walk of toggles, and the worst case: the carry rippling through every bit. */
@@ -113,7 +124,7 @@ function main(): void {
   const cases = [...settleSeries(), ...randomSeries()];
   progress('exhaustive sweep, 65,536 vectors');
   const sweep = measureSweep('sweep/adder-bank-16-inputs', prepare(sweepCircuit()));
-  cases.push(sweep, ...toggleCases());
+  cases.push(sweep, ...analysisOverhead(), ...toggleCases());
   const memory = memorySeries();
   printTables(floorNs, cases, memory);
   const totalSeconds = secondsSince(started);
