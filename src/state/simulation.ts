@@ -8,6 +8,7 @@ import { createStore } from 'zustand/vanilla';
 import { useStore } from 'zustand';
 import type { Design, InputVector } from '../core/model/design.ts';
 import { LiveSession } from '../core/view/liveSession.ts';
+import { heldSteps } from '../core/view/sequenceEdit.ts';
 import { solvedView, type SolvedView } from '../core/view/solvedView.ts';
 import {
   completeVector,
@@ -94,6 +95,9 @@ export function useSimulation<T>(selector: (state: SimulationState) => T): T {
 
 let session: LiveSession | null = null;
 
+/** Which job of each lane is the current one: a superseded job's late answer is ignored. */
+const currentJob: Record<JobKey, object | null> = { sweep: null, sequence: null };
+
 const set = (patch: Partial<SimulationState>): void => simulationStore.setState(patch);
 const get = (): SimulationState => simulationStore.getState();
 
@@ -124,6 +128,7 @@ function sweepKey(design: Design): string {
 
 let lastLiveKey = '';
 let lastSweepKey = '';
+let lastSequenceKey = '';
 let sweepTimer: ReturnType<typeof setTimeout> | null = null;
 
 /** Waits for edits to pause (a drag changes the revision every frame) before starting a sweep. */
@@ -168,8 +173,14 @@ export function analyseDesign(design: Design, revision: number): void {
   }
   if (analysisChanged) {
     lastSweepKey = sweep;
-    set({ sequence: IDLE_JOB });
     scheduleSweep(design);
+  }
+  const sequence = JSON.stringify([sweep, design.sequences]);
+  if (sequence !== lastSequenceKey) {
+    // A sequence result is for the steps it ran: an edited step or netlist makes it stale.
+    lastSequenceKey = sequence;
+    currentJob.sequence = null;
+    set({ sequence: IDLE_JOB, selectedStep: null });
   }
 }
 
@@ -207,6 +218,7 @@ export function setStripNets(stripNets: readonly string[]): void {
 }
 
 export function selectSequence(sequenceIndex: number): void {
+  currentJob.sequence = null;
   set({ sequenceIndex, sequence: IDLE_JOB, selectedStep: null });
 }
 
@@ -214,7 +226,7 @@ export function selectSequence(sequenceIndex: number): void {
 export function pickStep(step: number, steps: readonly InputVector[]): void {
   const design = get().design;
   if (session === null || design === null || step >= steps.length) return;
-  const upTo = steps.slice(0, step + 1).map((s) => completeVector(design.netlist.inputs, s));
+  const upTo = heldSteps(design.netlist.inputs, steps.slice(0, step + 1));
   try {
     const result = session.replay(upTo);
     if (result !== null)
@@ -225,23 +237,31 @@ export function pickStep(step: number, steps: readonly InputVector[]): void {
   set({ selectedStep: step, selectedRow: null });
 }
 
+function stillCurrent(key: JobKey, token: object, revision: number): boolean {
+  return currentJob[key] === token && get().analysisRevision === revision;
+}
+
 async function runJob(key: JobKey, job: AnalysisJob): Promise<void> {
+  const token = {};
+  currentJob[key] = token;
   const total = jobSize(job);
-  const long = total > PROGRESS_THRESHOLD_VECTORS;
-  set({
-    [key]: { ...IDLE_JOB, status: 'running', revision: job.revision, long, progress: { done: 0, total } },
-  });
+  const running: JobState = {
+    ...IDLE_JOB,
+    status: 'running',
+    revision: job.revision,
+    long: total > PROGRESS_THRESHOLD_VECTORS,
+    progress: { done: 0, total },
+  };
+  set({ [key]: running });
   const onProgress = (progress: JobProgress): void => {
-    const current = get()[key];
-    if (current.revision === job.revision && current.status === 'running')
-      set({ [key]: { ...current, progress } });
+    if (stillCurrent(key, token, job.revision)) set({ [key]: { ...get()[key], progress } });
   };
   try {
     const result = await jobRunner(key).run(job, onProgress);
-    if (get().analysisRevision !== job.revision) return; // a newer edit owns the panel now
-    set({ [key]: { ...get()[key], status: 'done', result, progress: { done: total, total } } });
+    if (!stillCurrent(key, token, job.revision)) return; // a newer job or edit owns the panel now
+    set({ [key]: { ...running, status: 'done', result, progress: { done: total, total } } });
   } catch (error) {
-    if (get()[key].revision !== job.revision) return;
+    if (!stillCurrent(key, token, job.revision)) return;
     const status: JobStatus = error instanceof JobCancelled ? 'cancelled' : 'failed';
     set({ [key]: { ...get()[key], status, error: status === 'failed' ? message(error) : null } });
   }
@@ -269,6 +289,7 @@ export function resetSimulation(): void {
   session = null;
   lastLiveKey = '';
   lastSweepKey = '';
+  lastSequenceKey = '';
   if (sweepTimer !== null) clearTimeout(sweepTimer);
   sweepTimer = null;
   simulationStore.setState(initialState(), true);

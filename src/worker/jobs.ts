@@ -3,7 +3,8 @@
  * command line can call them directly. Nothing here knows about workers or the page.
  */
 import { checkSequence, checkSweep, DEFAULT_MAX_INPUTS } from '../core/analysis/check.ts';
-import type { Design, InputValue, InputVector } from '../core/model/design.ts';
+import type { Design } from '../core/model/design.ts';
+import { heldSteps } from '../core/view/sequenceEdit.ts';
 import { expressionProblem } from '../core/view/expectation.ts';
 import { sequenceLevels } from '../core/view/sequenceLevels.ts';
 import type { AnalysisJob, JobProgress, JobResult, SequenceJob, SweepJob } from './protocol.ts';
@@ -33,18 +34,6 @@ export function usableExpectations(design: Design): {
     else notes.push(`expected function of ${output} ignored: ${problem.message}`);
   }
   return { expectations, notes };
-}
-
-/**
- * Steps as the sequence check applies them: an input a step leaves out keeps its value, X before its
- * first mention (core/analysis/check.ts). Made explicit so the strips and the report see the same steps.
- */
-export function heldSteps(inputs: readonly string[], steps: readonly InputVector[]): InputVector[] {
-  let held: Record<string, InputValue> = Object.fromEntries(inputs.map((n) => [n, 'X' as InputValue]));
-  return steps.map((step) => {
-    held = { ...held, ...step };
-    return held;
-  });
 }
 
 function throttled(onProgress: (p: JobProgress) => void): (done: number, total: number) => void {

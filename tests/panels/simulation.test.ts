@@ -15,7 +15,14 @@ import { setJobRunnerFactory, type JobRunner } from '../../src/worker/runner.ts'
 import { runJob } from '../../src/worker/jobs.ts';
 import { JobCancelled } from '../../src/worker/client.ts';
 import type { AnalysisJob, JobResult } from '../../src/worker/protocol.ts';
-import { design, inverter, nand2, nand2MissingPullUp, nandLatch, resistorLoadInverter } from '../view/circuits.ts';
+import {
+  design,
+  inverter,
+  nand2,
+  nand2MissingPullUp,
+  nandLatch,
+  resistorLoadInverter,
+} from '../view/circuits.ts';
 
 /** Runs jobs in-process but lets the test decide when each one finishes. */
 class HeldRunner implements JobRunner {
@@ -138,7 +145,10 @@ describe('sweep jobs and revisions', () => {
 
   it('runs a sequence in its own lane', async () => {
     analyseDesign(design(nandLatch), 1);
-    const running = runSequence([{ SN: '0', RN: '1' }, { SN: '1', RN: '1' }]);
+    const running = runSequence([
+      { SN: '0', RN: '1' },
+      { SN: '1', RN: '1' },
+    ]);
     await settle();
     await running;
     expect(state().sequence.result?.report.steps?.map((s) => s.outputs.Q)).toEqual(['1', '1']);

@@ -3,7 +3,8 @@ import { SweepLimitError } from '../../src/core/analysis/check.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import { levelAt, levelStrips } from '../../src/core/view/levelStrip.ts';
 import { vectorRows } from '../../src/core/view/vectorTable.ts';
-import { heldSteps, runJob, usableExpectations } from '../../src/worker/jobs.ts';
+import { runJob, usableExpectations } from '../../src/worker/jobs.ts';
+import { heldSteps } from '../../src/core/view/sequenceEdit.ts';
 import { jobSize } from '../../src/worker/protocol.ts';
 import {
   RESISTOR_LOAD_OHMS,

@@ -73,3 +73,15 @@ export function parseSteps(text: string, inputs: readonly string[]): InputVector
 export function formatSteps(steps: readonly InputVector[], inputs: readonly string[]): string {
   return steps.map((s) => inputs.map((n) => `${n}=${s[n] ?? '0'}`).join(' ')).join('; ');
 }
+
+/**
+ * Steps as the sequence check applies them: an input a step leaves out keeps its value, X before its
+ * first mention (core/analysis/check.ts). Made explicit so the strips, the sheet and the report agree.
+ */
+export function heldSteps(inputs: readonly string[], steps: readonly InputVector[]): InputVector[] {
+  let held: Record<string, InputValue> = Object.fromEntries(inputs.map((n) => [n, 'X' as InputValue]));
+  return steps.map((step) => {
+    held = { ...held, ...step };
+    return held;
+  });
+}

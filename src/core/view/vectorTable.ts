@@ -126,3 +126,13 @@ export function kindCounts(rows: readonly VectorRow[]): Map<FindingKind, number>
   for (const row of rows) for (const k of row.kinds) counts.set(k, (counts.get(k) ?? 0) + 1);
   return counts;
 }
+
+/** The row of a report whose inputs equal the vector, or null (e.g. a vector with an X input). */
+export function rowOfVector(
+  report: CheckReport,
+  vector: Readonly<Record<string, InputValue>>,
+): number | null {
+  const rows = reportRows(report);
+  const index = rows.findIndex((r) => report.inputs.every((name) => r.inputs[name] === vector[name]));
+  return index < 0 ? null : index;
+}

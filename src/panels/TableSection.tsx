@@ -1,0 +1,112 @@
+import { useMemo } from 'react';
+import { PROGRESS_THRESHOLD_VECTORS, jobSize } from '../worker/protocol.ts';
+import { arrangeRows, kindCounts, vectorRows } from '../core/view/vectorTable.ts';
+import {
+  AUTO_SWEEP_VECTORS,
+  cancelJob,
+  selectRow,
+  setTableView,
+  startSweep,
+  useSimulation,
+} from '../state/simulation.ts';
+import { JobBar } from './JobBar.tsx';
+import { Section } from './Section.tsx';
+import { VectorTable } from './VectorTable.tsx';
+
+function SweepStatus() {
+  const sweep = useSimulation((s) => s.sweep);
+  const design = useSimulation((s) => s.design);
+  if (design === null) return null;
+  const size = jobSize({ kind: 'sweep', revision: 0, design });
+  if (sweep.status === 'running' && sweep.long) {
+    return (
+      <JobBar
+        label={`Checking ${sweep.progress.total} vectors`}
+        progress={sweep.progress}
+        onCancel={() => cancelJob('sweep')}
+      />
+    );
+  }
+  if (sweep.status === 'running') return <p className="rw-muted">Checking {size} vectors…</p>;
+  const start = (
+    <button type="button" data-testid="sweep-start" onClick={() => void startSweep()}>
+      Check all {size} vectors
+    </button>
+  );
+  switch (sweep.status) {
+    case 'idle':
+      return (
+        <p className="rw-muted">
+          {size > AUTO_SWEEP_VECTORS ? `${size} vectors: checked on request. ` : ''}
+          {start}
+          {size > PROGRESS_THRESHOLD_VECTORS ? ' (runs in the background; you can cancel)' : ''}
+        </p>
+      );
+    case 'cancelled':
+      return (
+        <p className="rw-muted" data-testid="sweep-cancelled">
+          Check cancelled. {start}
+        </p>
+      );
+    case 'failed':
+      return (
+        <p className="rw-error-text" role="alert" data-testid="sweep-error">
+          {sweep.error}
+        </p>
+      );
+    case 'done':
+      return null;
+  }
+}
+
+function SweepTable() {
+  const result = useSimulation((s) => (s.sweep.status === 'done' ? s.sweep.result : null));
+  const view = useSimulation((s) => s.table);
+  const selected = useSimulation((s) => s.selectedRow);
+  const rows = useMemo(() => (result === null ? [] : vectorRows(result.report)), [result]);
+  const shown = useMemo(() => arrangeRows(rows, view), [rows, view]);
+  const counts = useMemo(() => kindCounts(rows), [rows]);
+  if (result === null) return null;
+  const { report } = result;
+  return (
+    <>
+      <p className="rw-figures" data-testid="sweep-summary">
+        {report.summary.vectors} vectors: <strong>{report.summary.errors}</strong> errors,{' '}
+        <strong>{report.summary.warnings}</strong> warnings · {result.elapsedMs.toFixed(0)} ms
+      </p>
+      {report.notes.map((n) => (
+        <p key={n} className="rw-muted">
+          ⓘ {n}
+        </p>
+      ))}
+      <VectorTable
+        inputs={report.inputs}
+        outputs={report.outputs}
+        rows={shown}
+        total={rows.length}
+        counts={counts}
+        view={view}
+        selected={selected}
+        onView={setTableView}
+        onSelect={selectRow}
+      />
+    </>
+  );
+}
+
+/** Every vector: sweep status, the sortable, filterable table; a row click selects that vector. */
+export function TableSection() {
+  const errors = useSimulation((s) =>
+    s.sweep.status === 'done' ? s.sweep.result?.report.summary.errors : undefined,
+  );
+  return (
+    <Section
+      title="Every vector"
+      testId="table-section"
+      badge={errors === undefined ? undefined : errors === 0 ? '✓ clean' : `◆ ${errors}`}
+    >
+      <SweepStatus />
+      <SweepTable />
+    </Section>
+  );
+}

@@ -1,0 +1,94 @@
+// @vitest-environment happy-dom
+import { act } from 'react';
+import { createRoot, type Root } from 'react-dom/client';
+import { afterEach, beforeEach, describe, expect, it } from 'vitest';
+import { AnalysisPanel } from '../../src/panels/AnalysisPanel.tsx';
+import { loadDesign, resetStore, store } from '../../src/state/store.ts';
+import { resetSimulation, SWEEP_DEBOUNCE_MS } from '../../src/state/simulation.ts';
+import { setJobRunnerFactory } from '../../src/worker/runner.ts';
+import { runJob } from '../../src/worker/jobs.ts';
+import { design, nand2MissingPullUp, resistorLoadInverter } from '../view/circuits.ts';
+
+(globalThis as { IS_REACT_ACT_ENVIRONMENT?: boolean }).IS_REACT_ACT_ENVIRONMENT = true;
+
+let root: Root;
+let host: HTMLElement;
+
+const byTestId = (id: string): HTMLElement | null => host.querySelector(`[data-testid="${id}"]`);
+const wait = (ms: number) => new Promise((r) => setTimeout(r, ms));
+
+async function click(el: Element | null): Promise<void> {
+  if (el === null) throw new Error('nothing to click');
+  await act(async () => {
+    (el as HTMLElement).click();
+  });
+}
+
+async function mount(): Promise<void> {
+  host = document.createElement('div');
+  document.body.append(host);
+  root = createRoot(host);
+  await act(async () => root.render(<AnalysisPanel />));
+  // Let the debounced sweep start and its in-process runner answer.
+  await act(async () => wait(SWEEP_DEBOUNCE_MS + 30));
+}
+
+beforeEach(() => {
+  resetStore();
+  resetSimulation();
+  setJobRunnerFactory(() => ({ run: (job) => Promise.resolve(runJob(job)), cancel: () => {} }));
+});
+
+afterEach(async () => {
+  await act(async () => root.unmount());
+  host.remove();
+});
+
+describe('analysis panel', () => {
+  // Resistor-load inverter, A = 1: 2.5 V / (40 kΩ + 3.25 kΩ) = 57.8 µA (Ohm's law with RCN's Rn = 13 kΩ
+  // at W/L = 1, table 3.3, from memory).
+  it('shows the current of the vector that draws it', async () => {
+    loadDesign(design(resistorLoadInverter, { Y: '!A' }));
+    await mount();
+    expect(byTestId('current-paths')?.textContent).toContain('No static current');
+    await click(byTestId('bit-A'));
+    expect(byTestId('supply-current')?.textContent).toBe('57.8 µA');
+    expect(byTestId('current-paths')?.textContent).toContain('VDD → R1 → Y → N1 → GND');
+    expect(byTestId('vector-findings')?.textContent).toContain('static-current');
+  });
+
+  it('filters the table to problem vectors and selects a row', async () => {
+    loadDesign(design(nand2MissingPullUp, { Y: '!(A & B)' }));
+    await mount();
+    const filter = byTestId('table-filter') as HTMLSelectElement;
+    await act(async () => {
+      filter.value = 'problems';
+      filter.dispatchEvent(new Event('change', { bubbles: true }));
+    });
+    const rows = host.querySelectorAll('[data-testid^="vector-row-"]');
+    expect([...rows].map((r) => r.getAttribute('data-testid'))).toEqual(['vector-row-2']);
+    await click(rows[0]);
+    expect(byTestId('bit-A')?.textContent).toContain('1');
+    expect(byTestId('bit-B')?.textContent).toContain('0');
+    expect(byTestId('net-Y')?.textContent).toContain('Z');
+  });
+
+  it('refuses an expected function with a typo, pointing at it, and saves a correct one', async () => {
+    loadDesign(design(nand2MissingPullUp));
+    await mount();
+    const field = byTestId('expect-Y') as HTMLInputElement;
+    const type = async (text: string) =>
+      act(async () => {
+        const setter = Object.getOwnPropertyDescriptor(HTMLInputElement.prototype, 'value')?.set;
+        setter?.call(field, text);
+        field.dispatchEvent(new Event('input', { bubbles: true }));
+        field.dispatchEvent(new KeyboardEvent('keydown', { key: 'Enter', bubbles: true }));
+      });
+    await type('!(A & Bq)');
+    expect(byTestId('expectation-error')?.querySelector('mark')?.textContent).toBe('Bq');
+    expect(store.getState().design.expectations).toEqual({});
+    await type('!(A & B)');
+    expect(byTestId('expectation-error')).toBeNull();
+    expect(store.getState().design.expectations).toEqual({ Y: '!(A & B)' });
+  });
+});
