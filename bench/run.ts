@@ -105,7 +105,12 @@ function printTables(floorNs: number, cases: readonly CaseResult[], memory: read
   console.log(
     formatTable(['case', 'transistors', 'vectors', 'ms', 'vectors/s', 'ns/(T·vec)', '× floor'], rows),
   );
-  console.log('\nsettle, toggle and edit rows: median ms for one vector; random and sweep rows: total ms.\n');
+  console.log('\nsettle, toggle and edit rows: median ms of one vector; random rows: median ms of a batch;');
+  console.log('sweep rows: total ms of wall clock; on a shared machine CPU time is the steadier figure:');
+  for (const c of cases.filter((x) => x.cpuSeconds !== undefined)) {
+    console.log(`  ${c.name}: ${c.seconds.toFixed(2)} s wall, ${(c.cpuSeconds ?? 0).toFixed(2)} s CPU`);
+  }
+  console.log('');
   const memRows = memory.map((m) => [
     m.name,
     m.transistors,
