@@ -7,6 +7,13 @@ import { netNames, type Netlist } from '../model/netlist.ts';
 
 export class PinError extends Error {
   override readonly name = 'PinError';
+  constructor(
+    /** Which list is at fault. */
+    readonly field: 'inputs' | 'outputs',
+    message: string,
+  ) {
+    super(message);
+  }
 }
 
 export interface PinChoice {
@@ -23,7 +30,7 @@ export function assignPins(netlist: Netlist, choice: PinChoice): Netlist {
   const inputs = choice.inputs === undefined ? undefined : resolve(netlist, choice.inputs, 'inputs');
   const outputs = choice.outputs === undefined ? undefined : resolve(netlist, choice.outputs, 'outputs');
   const both = inputs?.find((n) => outputs?.includes(n));
-  if (both !== undefined) throw new PinError(`${both} is named both as an input and as an output`);
+  if (both !== undefined) throw new PinError('outputs', `${both} is named both as an input and as an output`);
   const nextInputs = inputs ?? netlist.inputs.filter((n) => !outputs?.includes(n));
   const nextOutputs =
     outputs ?? [...netlist.outputs, ...netlist.inputs].filter((n) => !nextInputs.includes(n));
@@ -38,9 +45,9 @@ function resolve(netlist: Netlist, names: readonly string[], what: 'inputs' | 'o
     const net = byLower.get(name.toLowerCase());
     if (net === undefined) {
       const ports = [...netlist.inputs, ...netlist.outputs].join(', ') || 'none';
-      throw new PinError(`${what}: cell ${netlist.name} has no net "${name}" (its pins: ${ports})`);
+      throw new PinError(what, `cell ${netlist.name} has no net "${name}" (its pins: ${ports})`);
     }
-    if (rails.has(net)) throw new PinError(`${what}: ${net} is a rail of cell ${netlist.name}, not a pin`);
+    if (rails.has(net)) throw new PinError(what, `${net} is a rail of cell ${netlist.name}, not a pin`);
     if (!out.includes(net)) out.push(net);
   }
   return out;

@@ -138,7 +138,7 @@ function applyPinDirectives(netlist: Netlist, directives: readonly Directive[], 
     try {
       result = assignPins(result, d.key === 'inputs' ? { inputs: names } : { outputs: names });
     } catch (e) {
-      if (e instanceof PinError) throw new SpiceImportError(fileName, d.line, e.message);
+      if (e instanceof PinError) throw new SpiceImportError(fileName, d.line, `${d.key}: ${e.message}`);
       throw e;
     }
   }

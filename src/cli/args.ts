@@ -1,0 +1,187 @@
+/**
+ * Command-line arguments, read with Node's `util.parseArgs` and checked here, so that everything
+ * after this point works on typed values. Every problem is a UsageError naming the flag.
+ */
+import { parseArgs, type ParseArgsConfig } from 'node:util';
+import { spiceValue } from '../core/netlist-io/spiceNumber.ts';
+import { UsageError } from './usage.ts';
+
+/** What picks and shapes one cell; shared by check and export. */
+export interface CellChoice {
+  readonly cell?: string;
+  readonly inputs?: readonly string[];
+  readonly outputs?: readonly string[];
+  readonly expect: Readonly<Record<string, string>>;
+  readonly sequence?: string;
+  readonly vdd?: number;
+  readonly supply: readonly string[];
+  readonly ground: readonly string[];
+}
+
+export interface PowerChoice {
+  readonly freq: number;
+  readonly activity?: 'sequence' | 'random';
+  readonly load: number;
+}
+
+export interface CheckArgs extends CellChoice {
+  readonly files: readonly string[];
+  readonly json: boolean;
+  readonly allNets: boolean;
+  readonly undriven: boolean;
+  readonly power?: PowerChoice;
+  readonly sizing: boolean;
+  readonly jobs?: number;
+  readonly help: boolean;
+}
+
+export type ExportFormat = 'spice' | 'verilog' | 'csv';
+
+export interface ExportArgs extends CellChoice {
+  readonly file: string;
+  readonly to: ExportFormat;
+  readonly help: boolean;
+}
+
+const CELL_OPTIONS = {
+  cell: { type: 'string' },
+  inputs: { type: 'string' },
+  outputs: { type: 'string' },
+  expect: { type: 'string', multiple: true },
+  sequence: { type: 'string' },
+  vdd: { type: 'string' },
+  supply: { type: 'string' },
+  ground: { type: 'string' },
+  help: { type: 'boolean', short: 'h' },
+} as const satisfies ParseArgsConfig['options'];
+
+const CHECK_OPTIONS = {
+  ...CELL_OPTIONS,
+  json: { type: 'boolean' },
+  'all-nets': { type: 'boolean' },
+  undriven: { type: 'boolean' },
+  power: { type: 'boolean' },
+  freq: { type: 'string' },
+  activity: { type: 'string' },
+  load: { type: 'string' },
+  sizing: { type: 'boolean' },
+  jobs: { type: 'string' },
+} as const satisfies ParseArgsConfig['options'];
+
+const EXPORT_OPTIONS = {
+  ...CELL_OPTIONS,
+  to: { type: 'string' },
+} as const satisfies ParseArgsConfig['options'];
+
+/** Default clock for --power: 100 MHz, a round figure (common practice, no source). */
+export const DEFAULT_FREQ = 100e6;
+
+export function parseCheckArgs(argv: readonly string[]): CheckArgs {
+  const { values: v, positionals } = parse(argv, CHECK_OPTIONS);
+  if (!v.help && positionals.length === 0)
+    throw new UsageError('check needs at least one FILE (see railwise check --help)');
+  const powerFlag = v.freq !== undefined || v.activity !== undefined || v.load !== undefined;
+  if (powerFlag && !v.power) throw new UsageError('--freq, --activity and --load go with --power');
+  return {
+    ...cellChoice(v),
+    files: positionals,
+    json: v.json ?? false,
+    allNets: v['all-nets'] ?? false,
+    undriven: v.undriven ?? false,
+    sizing: v.sizing ?? false,
+    help: v.help ?? false,
+    ...(v.power ? { power: powerChoice(v) } : {}),
+    ...(v.jobs === undefined ? {} : { jobs: positiveInteger('--jobs', v.jobs) }),
+  };
+}
+
+export function parseExportArgs(argv: readonly string[]): ExportArgs {
+  const { values: v, positionals } = parse(argv, EXPORT_OPTIONS);
+  const help = v.help ?? false;
+  if (!help && positionals.length !== 1)
+    throw new UsageError('export takes exactly one FILE (see railwise export --help)');
+  if (!help && v.to !== 'spice' && v.to !== 'verilog' && v.to !== 'csv') {
+    throw new UsageError(`--to must be spice, verilog or csv${v.to === undefined ? '' : ` (got "${v.to}")`}`);
+  }
+  return { ...cellChoice(v), file: positionals[0] ?? '', to: (v.to ?? 'spice') as ExportFormat, help };
+}
+
+function parse<T extends NonNullable<ParseArgsConfig['options']>>(argv: readonly string[], options: T) {
+  try {
+    return parseArgs({ args: [...argv], options, allowPositionals: true, strict: true });
+  } catch (e) {
+    throw new UsageError(e instanceof Error ? e.message : String(e));
+  }
+}
+
+interface CellValues {
+  cell?: string;
+  inputs?: string;
+  outputs?: string;
+  expect?: string[];
+  sequence?: string;
+  vdd?: string;
+  supply?: string;
+  ground?: string;
+}
+
+function cellChoice(v: CellValues): CellChoice {
+  return {
+    expect: expectations(v.expect ?? []),
+    supply: list(v.supply),
+    ground: list(v.ground),
+    ...(v.cell === undefined ? {} : { cell: v.cell }),
+    ...(v.inputs === undefined ? {} : { inputs: list(v.inputs) }),
+    ...(v.outputs === undefined ? {} : { outputs: list(v.outputs) }),
+    ...(v.sequence === undefined ? {} : { sequence: v.sequence }),
+    ...(v.vdd === undefined ? {} : { vdd: positiveNumber('--vdd', v.vdd) }),
+  };
+}
+
+function powerChoice(v: { freq?: string; activity?: string; load?: string }): PowerChoice {
+  const activity = v.activity;
+  if (activity !== undefined && activity !== 'sequence' && activity !== 'random') {
+    throw new UsageError(`--activity must be sequence or random (got "${activity}")`);
+  }
+  const load = v.load === undefined ? 0 : spiceValue(v.load);
+  if (load === null || load < 0)
+    throw new UsageError(`--load "${v.load}" is not a capacitance in farads (e.g. 10f)`);
+  return {
+    freq: v.freq === undefined ? DEFAULT_FREQ : positiveNumber('--freq', v.freq),
+    load,
+    ...(activity === undefined ? {} : { activity }),
+  };
+}
+
+/** `--expect "Y = !(A & B)"`, repeatable; the first `=` splits output from expression. */
+function expectations(texts: readonly string[]): Record<string, string> {
+  const out: Record<string, string> = {};
+  for (const text of texts) {
+    const eq = text.indexOf('=');
+    const output = text.slice(0, Math.max(eq, 0)).trim();
+    const expression = text.slice(eq + 1).trim();
+    if (eq < 0 || output === '' || expression === '') {
+      throw new UsageError(`--expect "${text}": write OUTPUT = EXPRESSION, e.g. --expect "Y = !(A & B)"`);
+    }
+    out[output] = expression;
+  }
+  return out;
+}
+
+function list(text: string | undefined): string[] {
+  return text === undefined ? [] : text.split(/[\s,]+/).filter((s) => s !== '');
+}
+
+/** Accepts SPICE-style numbers: `2.5`, `100meg`, `1e8`. */
+function positiveNumber(flag: string, text: string): number {
+  const value = spiceValue(text);
+  if (value === null || !(value > 0)) throw new UsageError(`${flag} "${text}" is not a positive number`);
+  return value;
+}
+
+function positiveInteger(flag: string, text: string): number {
+  const value = Number(text);
+  if (!Number.isInteger(value) || value < 1)
+    throw new UsageError(`${flag} "${text}" is not a whole number of 1 or more`);
+  return value;
+}

@@ -1,0 +1,99 @@
+/**
+ * `railwise check`: load the cells, run them (in worker threads when that pays), print the human
+ * report or JSON, and return the exit status: 0 clean, 1 error findings, 2 something unusable.
+ */
+import type { CheckArgs } from './args.ts';
+import { makeColour } from './colour.ts';
+import { loadCells, type CellFailure } from './loadCells.ts';
+import { runCells } from './parallel.ts';
+import type { CellJson, CellResult, RunOptions } from './runCell.ts';
+import { CAUTION } from './runCell.ts';
+import { formatCell, formatFailure } from './textReport.ts';
+import { EXIT_FINDINGS, EXIT_OK, EXIT_UNUSABLE } from './usage.ts';
+
+export interface Output {
+  readonly out: (text: string) => void;
+  readonly colour: boolean;
+}
+
+export async function checkCommand(args: CheckArgs, io: Output): Promise<number> {
+  const loaded = loadCells(args.files, args);
+  const options: RunOptions = {
+    allNets: args.allNets,
+    undriven: args.undriven,
+    sizing: args.sizing,
+    ...(args.sequence === undefined ? {} : { sequence: args.sequence }),
+    ...(args.power === undefined ? {} : { power: args.power }),
+  };
+  const jobs = loaded.cells.flatMap((c) => ('job' in c ? [c.job] : []));
+  const ran = await runCells(jobs, options, args.jobs);
+  // Keep the cells in file order: failures at load time sit where their cell would.
+  let next = 0;
+  const results: CellResult[] = loaded.cells.map((c) => ('job' in c ? (ran[next++] as CellResult) : c));
+  const status = Math.max(EXIT_OK, ...results.map(exitOf));
+  if (args.json)
+    io.out(JSON.stringify(loaded.asLibrary ? libraryJson(results) : singleJson(results), null, 2));
+  else io.out(humanReport(results, loaded.asLibrary, makeColour(io.colour)));
+  return status;
+}
+
+function exitOf(r: CellResult): number {
+  if ('failure' in r) return EXIT_UNUSABLE;
+  return r.json.summary.errors > 0 ? EXIT_FINDINGS : EXIT_OK;
+}
+
+function failureJson(f: CellFailure): object {
+  return {
+    cell: f.cell,
+    file: f.file,
+    error: {
+      message: f.message,
+      ...(f.line === undefined ? {} : { line: f.line }),
+      ...(f.field === undefined ? {} : { field: f.field }),
+    },
+  };
+}
+
+function singleJson(results: readonly CellResult[]): object {
+  const [only] = results;
+  if (only === undefined) return { error: { message: 'no cells found' } };
+  return 'json' in only ? only.json : failureJson(only.failure);
+}
+
+export function librarySummary(results: readonly CellResult[]): Record<string, number> {
+  const checked = results.flatMap((r) => ('json' in r ? [r.json] : []));
+  return {
+    cells: results.length,
+    passed: checked.filter((j) => j.summary.errors === 0).length,
+    failed: checked.filter((j) => j.summary.errors > 0).length,
+    unusable: results.length - checked.length,
+    errors: sum(checked.map((j) => j.summary.errors)),
+    warnings: sum(checked.map((j) => j.summary.warnings)),
+  };
+}
+
+function libraryJson(results: readonly CellResult[]): object {
+  const cells = results.map((r) => ('json' in r ? r.json : failureJson(r.failure)));
+  return { cells, summary: librarySummary(results), caution: CAUTION };
+}
+
+function humanReport(
+  results: readonly CellResult[],
+  asLibrary: boolean,
+  c: ReturnType<typeof makeColour>,
+): string {
+  const blocks = results.map((r) =>
+    'json' in r ? formatCell(r.json as CellJson, c) : formatFailure(r.failure, c),
+  );
+  const s = librarySummary(results);
+  const total = asLibrary
+    ? [
+        `${s.cells} cells: ${s.passed} pass, ${s.failed} with errors, ${s.unusable} unusable; ${s.errors} errors, ${s.warnings} warnings`,
+      ]
+    : [];
+  return [...blocks, ...total, c.dim(CAUTION)].join('\n\n');
+}
+
+function sum(values: readonly number[]): number {
+  return values.reduce((a, b) => a + (b ?? 0), 0);
+}

@@ -1,0 +1,58 @@
+/**
+ * The `railwise` command. `run` takes the arguments and an output sink and returns the exit status,
+ * so tests can call it directly; bin/railwise.mjs wires it to the process.
+ */
+import { parseCheckArgs, parseExportArgs } from './args.ts';
+import { checkCommand } from './checkCommand.ts';
+import { colourWanted } from './colour.ts';
+import { exportCommand } from './exportCommand.ts';
+import { CHECK_HELP, EXIT_OK, EXIT_UNUSABLE, EXPORT_HELP, MAIN_HELP, UsageError } from './usage.ts';
+
+export interface Io {
+  readonly out: (text: string) => void;
+  readonly err: (text: string) => void;
+  readonly colour: boolean;
+}
+
+export async function run(argv: readonly string[], io: Io = processIo()): Promise<number> {
+  const [command, ...rest] = argv;
+  try {
+    switch (command) {
+      case 'check': {
+        const args = parseCheckArgs(rest);
+        if (args.help) return help(io, CHECK_HELP);
+        return await checkCommand(args, io);
+      }
+      case 'export': {
+        const args = parseExportArgs(rest);
+        if (args.help) return help(io, EXPORT_HELP);
+        return exportCommand(args, io);
+      }
+      case 'help':
+        return help(io, rest[0] === 'check' ? CHECK_HELP : rest[0] === 'export' ? EXPORT_HELP : MAIN_HELP);
+      case undefined:
+      case '--help':
+      case '-h':
+        return help(io, MAIN_HELP);
+      default:
+        throw new UsageError(`unknown command "${command}": use check or export`);
+    }
+  } catch (e) {
+    if (!(e instanceof UsageError)) throw e;
+    io.err(`railwise: ${e.message}\nSee railwise --help.`);
+    return EXIT_UNUSABLE;
+  }
+}
+
+function help(io: Io, text: string): number {
+  io.out(text.trimEnd());
+  return EXIT_OK;
+}
+
+function processIo(): Io {
+  return {
+    out: (text) => void process.stdout.write(`${text}\n`),
+    err: (text) => void process.stderr.write(`${text}\n`),
+    colour: colourWanted(process.stdout.isTTY === true, process.env),
+  };
+}

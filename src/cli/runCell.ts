@@ -1,0 +1,119 @@
+/**
+ * Checks one cell and returns plain data: the single-cell JSON object of SPEC §6, or a failure.
+ * No file access and no printing, so a worker thread can run it as well as the main thread.
+ */
+import { checkSequence, checkSweep, SequenceError, SweepLimitError } from '../core/analysis/check.ts';
+import { parseSequenceText } from '../core/analysis/sequenceText.ts';
+import type { CheckReport, VectorReport } from '../core/analysis/report.ts';
+import { CompileError } from '../core/compile/compile.ts';
+import { ExpressionError } from '../core/expect/parse.ts';
+import type { InputValue, InputVector } from '../core/model/design.ts';
+import { powerReport, PowerOptionsError } from '../core/power/powerReport.ts';
+import type { PowerReport } from '../core/power/types.ts';
+import { sizingReport } from '../core/sizing/sizingReport.ts';
+import type { SizingReport } from '../core/sizing/types.ts';
+import type { PowerChoice } from './args.ts';
+import type { CellFailure, CellJob } from './loadCells.ts';
+
+export interface RunOptions {
+  readonly allNets: boolean;
+  readonly undriven: boolean;
+  /** `--sequence` text: steps instead of the sweep. */
+  readonly sequence?: string;
+  readonly power?: PowerChoice;
+  readonly sizing: boolean;
+}
+
+export const CAUTION =
+  "Switch-level estimates, not sign-off: confirm with circuit simulation and the foundry's rules.";
+
+/** A vector as printed: inputs as the numbers 0 and 1 (X and Z stay strings), per SPEC §6. */
+export interface VectorJson extends Omit<VectorReport, 'inputs'> {
+  readonly inputs: Readonly<Record<string, 0 | 1 | 'X' | 'Z'>>;
+}
+
+export interface CellJson extends Omit<CheckReport, 'vectors' | 'steps'> {
+  readonly file: string;
+  readonly vectors?: readonly VectorJson[];
+  readonly steps?: readonly VectorJson[];
+  readonly technology: { readonly source: string; readonly vdd: number };
+  readonly power?: PowerReport;
+  readonly sizing?: SizingReport;
+  readonly caution: string;
+}
+
+export type CellResult = { readonly json: CellJson } | { readonly failure: CellFailure };
+
+export function runCell(job: CellJob, options: RunOptions): CellResult {
+  try {
+    const steps =
+      options.sequence === undefined ? null : parseSequenceText(options.sequence, job.netlist.inputs);
+    const checkOptions = {
+      technology: job.technology,
+      expectations: job.expectations,
+      allNets: options.allNets,
+      undrivenInputs: options.undriven,
+    };
+    const report =
+      steps === null
+        ? checkSweep(job.netlist, checkOptions)
+        : checkSequence(job.netlist, steps, checkOptions);
+    const power = options.power === undefined ? undefined : cellPower(job, options.power, steps);
+    const sizing = options.sizing
+      ? sizingReport(job.netlist, job.technology, { load: options.power?.load ?? 0 })
+      : undefined;
+    return { json: cellJson(job, report, power, sizing) };
+  } catch (e) {
+    return { failure: { file: job.file, cell: job.cell, ...failureOf(e) } };
+  }
+}
+
+function cellPower(job: CellJob, choice: PowerChoice, steps: readonly InputVector[] | null): PowerReport {
+  const sequence = steps ?? job.designSequence;
+  const activity = choice.activity ?? (sequence === undefined ? 'random' : 'sequence');
+  return powerReport(job.netlist, job.technology, {
+    freq: choice.freq,
+    activity,
+    load: choice.load,
+    ...(sequence === undefined ? {} : { sequence }),
+  });
+}
+
+/** Errors that mean "this cell cannot be checked as asked", each tied to what the user should fix. */
+export function failureOf(e: unknown): { message: string; field?: string } {
+  if (e instanceof ExpressionError) return { message: `expected function: ${e.message}`, field: 'expect' };
+  if (e instanceof SequenceError) return { message: `--sequence: ${e.message}`, field: 'sequence' };
+  if (e instanceof PowerOptionsError) return { message: `--power: ${e.message}`, field: e.field };
+  if (e instanceof SweepLimitError)
+    return { message: `${e.message}; name fewer inputs or give --sequence`, field: 'inputs' };
+  if (e instanceof CompileError) return { message: e.message };
+  const text = e instanceof Error ? (e.stack ?? e.message) : String(e);
+  return { message: `internal error (please report it): ${text}` };
+}
+
+function cellJson(job: CellJob, report: CheckReport, power?: PowerReport, sizing?: SizingReport): CellJson {
+  return {
+    cell: job.cell,
+    file: job.file,
+    inputs: report.inputs,
+    outputs: report.outputs,
+    ...(report.vectors === undefined ? {} : { vectors: report.vectors.map(vectorJson) }),
+    ...(report.steps === undefined ? {} : { steps: report.steps.map(vectorJson) }),
+    findings: report.findings,
+    summary: report.summary,
+    notes: [...job.notes, ...report.notes],
+    technology: { source: job.technology.source, vdd: job.technology.vdd },
+    ...(power === undefined ? {} : { power }),
+    ...(sizing === undefined ? {} : { sizing }),
+    caution: CAUTION,
+  };
+}
+
+function vectorJson(v: VectorReport): VectorJson {
+  const inputs = Object.fromEntries(Object.entries(v.inputs).map(([k, x]) => [k, inputNumber(x)]));
+  return { ...v, inputs };
+}
+
+function inputNumber(x: InputValue): 0 | 1 | 'X' | 'Z' {
+  return x === '0' ? 0 : x === '1' ? 1 : x;
+}

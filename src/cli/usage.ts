@@ -1,0 +1,66 @@
+/** Help texts and the error for unusable arguments (exit status 2). */
+
+export class UsageError extends Error {
+  override readonly name = 'UsageError';
+}
+
+export const EXIT_OK = 0;
+export const EXIT_FINDINGS = 1;
+export const EXIT_UNUSABLE = 2;
+
+export const MAIN_HELP = `railwise: switch-level checks of CMOS cells from the command line
+
+Usage:
+  railwise check FILE... [options]     check cells: levels, current paths, findings
+  railwise export FILE --to FORMAT     write a cell as spice, verilog or csv
+  railwise help [check|export]         show help
+
+FILE is a Railwise design file (.json) or a SPICE-compatible netlist (.sp .spi .cir .net .cdl).
+Exit status: 0 no errors, 1 error findings, 2 unusable input or arguments.
+
+Results are switch-level estimates, not sign-off: confirm with circuit simulation and the foundry's rules.
+`;
+
+export const CHECK_HELP = `railwise check FILE... [options]
+
+Checks every input vector of each cell (or a sequence of vectors) and reports output levels,
+supply-to-ground current paths and findings. A file with several top-level subcircuits that nothing
+instantiates is a library: each subcircuit is checked as its own cell.
+
+Pins and expectations (one cell: a single-cell file, or a library with --cell):
+  --inputs A,B          input pins, in truth-table order (default: ports that only reach gates)
+  --outputs Y           output pins (default: the other ports that are not rails)
+  --expect "Y = EXPR"   expected function, repeatable: ! & | ^ ( ) 0 1, S ? A : B, and Z
+  --sequence "A=0 B=1; A=1"
+                        apply these steps in order, carrying stored charge, instead of the sweep
+  --cell NAME           check only this cell of a library
+
+Circuit:
+  --vdd V               supply voltage (thresholds follow at 0.35 and 0.65 of VDD)
+  --supply NAMES        extra supply rail net names, comma separated
+  --ground NAMES        extra ground rail net names, comma separated
+  --undriven            also leave each input undriven (Z) in the sweep
+
+Report:
+  --json                print one JSON object (a "cells" list for a library)
+  --all-nets            report every net's voltage, not only the outputs'
+  --power               add static and dynamic power
+    --freq F            clock frequency, e.g. 100meg or 1e8 (default 100meg)
+    --activity KIND     sequence or random (default: sequence with --sequence, else random)
+    --load C            load on each output, e.g. 10f (default 0)
+  --sizing              add logical effort, delay estimates and proposed widths
+  --jobs N              worker threads for large libraries (default: one per core when it pays)
+
+Exit status: 0 no error findings, 1 error findings, 2 unusable input or arguments.
+`;
+
+export const EXPORT_HELP = `railwise export FILE --to spice|verilog|csv [options]
+
+Writes one cell to standard output:
+  spice     a .subckt with W and L and level-1 model cards from the technology
+  verilog   structural Verilog with the IEEE Std 1364 switch primitives
+  csv       the truth table (every input vector) per RFC 4180
+
+Options: --cell NAME (a cell of a library), --inputs, --outputs, --expect, --vdd, --supply,
+--ground, --sequence (csv of the steps instead of the sweep), as for check.
+`;
