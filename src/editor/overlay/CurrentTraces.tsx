@@ -1,0 +1,88 @@
+import { Arrow, Group, Label, Line, Tag, Text } from 'react-konva';
+import type { Point } from '../../core/sheet/types.ts';
+import { formatCurrent } from '../../core/view/format.ts';
+
+/** Static current: an ember trace, distinct from every level colour, with arrows and its value. */
+export const TRACE_COLOUR = '#ff5a1f';
+const ARROW_HALF = 0.35;
+
+function arrowsAlong(line: readonly Point[]): number[][] {
+  const arrows: number[][] = [];
+  for (let i = 0; i + 1 < line.length; i++) {
+    const [a, b] = [line[i], line[i + 1]];
+    const length = Math.hypot(b.x - a.x, b.y - a.y);
+    if (length < 1) continue; // too short for an arrow to read
+    const [dx, dy] = [(b.x - a.x) / length, (b.y - a.y) / length];
+    const mid = { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 };
+    arrows.push([
+      mid.x - dx * ARROW_HALF,
+      mid.y - dy * ARROW_HALF,
+      mid.x + dx * ARROW_HALF,
+      mid.y + dy * ARROW_HALF,
+    ]);
+  }
+  return arrows;
+}
+
+interface CurrentTraceProps {
+  /** Polylines in flow order, source to sink. */
+  readonly route: readonly (readonly Point[])[];
+  readonly current: number;
+}
+
+/** One static current path: a soft wide glow, a bright core, flow arrows, and the current written beside it. */
+export function CurrentTrace({ route, current }: CurrentTraceProps) {
+  const flat = (line: readonly Point[]) => line.flatMap((p) => [p.x, p.y]);
+  const firstLeg = route.find((l) => l.length >= 2) ?? route[0];
+  const labelAt = firstLeg === undefined ? null : firstLeg[Math.floor((firstLeg.length - 1) / 2)];
+  return (
+    <Group listening={false}>
+      {route.map((line, i) => (
+        <Line
+          key={`glow-${i}`}
+          points={flat(line)}
+          stroke={TRACE_COLOUR}
+          strokeWidth={0.7}
+          opacity={0.28}
+          lineCap="round"
+          lineJoin="round"
+          shadowColor={TRACE_COLOUR}
+          shadowBlur={12}
+        />
+      ))}
+      {route.map((line, i) => (
+        <Line
+          key={`core-${i}`}
+          points={flat(line)}
+          stroke={TRACE_COLOUR}
+          strokeWidth={0.12}
+          lineCap="round"
+          lineJoin="round"
+        />
+      ))}
+      {route.flatMap(arrowsAlong).map((points, i) => (
+        <Arrow
+          key={`arrow-${i}`}
+          points={points}
+          pointerLength={0.35}
+          pointerWidth={0.4}
+          fill={TRACE_COLOUR}
+          stroke={TRACE_COLOUR}
+          strokeWidth={0.1}
+        />
+      ))}
+      {labelAt !== null && labelAt !== undefined && (
+        <Label x={labelAt.x + 0.5} y={labelAt.y + 0.3}>
+          <Tag fill="#fff7f0" stroke={TRACE_COLOUR} strokeWidth={0.05} cornerRadius={0.15} />
+          <Text
+            text={`⇣ ${formatCurrent(current)}`}
+            fontSize={0.6}
+            padding={0.15}
+            fill="#8a2c06"
+            fontStyle="bold"
+          />
+        </Label>
+      )}
+    </Group>
+  );
+}
