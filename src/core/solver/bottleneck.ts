@@ -76,7 +76,11 @@ function passed(frame: Frame, e: number, v: number, snapVolts: Float64Array, hig
   return v;
 }
 
-/** Records a better level for local net i; the limiter is e when e itself dropped the level. */
+/**
+ * Records a better level for local net i; the limiter is e when e itself dropped the level. Among
+ * equally good paths the limiter with the smallest device name wins, so results never depend on the
+ * order devices are listed in; a changed limiter is propagated like a changed level.
+ */
 function offer(
   frame: Frame,
   i: number,
@@ -86,9 +90,21 @@ function offer(
   high: boolean,
   inherited = -1,
 ): boolean {
+  const limiter = Math.abs(v - vIn) > 1e-12 ? e : inherited;
   const better = high ? v > frame.best[i] + 1e-12 : v < frame.best[i] - 1e-12;
-  if (!better) return false;
-  frame.best[i] = v;
-  frame.limiter[i] = Math.abs(v - vIn) > 1e-12 ? e : inherited;
+  if (better) {
+    frame.best[i] = v;
+    frame.limiter[i] = limiter;
+    return true;
+  }
+  const tie = Math.abs(v - frame.best[i]) <= 1e-12;
+  if (!tie || limiter < 0 || limiter === frame.limiter[i]) return false;
+  if (frame.limiter[i] >= 0 && deviceName(frame, limiter) >= deviceName(frame, frame.limiter[i]))
+    return false;
+  frame.limiter[i] = limiter;
   return true;
+}
+
+function deviceName(frame: Frame, e: number): string {
+  return frame.c.netlist.devices[frame.c.chDevice[e]].name;
 }

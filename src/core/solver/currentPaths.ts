@@ -62,7 +62,7 @@ function walk(
     for (let p = c.netChannels.start[at]; p < c.netChannels.start[at + 1]; p++) {
       const e = c.netChannels.items[p];
       const leaves = (c.chA[e] === at && chCurrent[e] > 0) || (c.chB[e] === at && chCurrent[e] < 0);
-      if (leaves && residual[e] > floor && (bestE < 0 || residual[e] > residual[bestE])) bestE = e;
+      if (leaves && residual[e] > floor && (bestE < 0 || preferred(c, residual, e, bestE))) bestE = e;
     }
     if (bestE < 0) return null;
     at = c.chA[bestE] === at ? c.chB[bestE] : c.chA[bestE];
@@ -75,4 +75,12 @@ function walk(
     }
   }
   return null;
+}
+
+/** More remaining current wins; near-equal branches go by device name, so order never matters. */
+function preferred(c: CompiledNetlist, residual: Float64Array, e: number, than: number): boolean {
+  const scale = Math.max(residual[e], residual[than]);
+  if (Math.abs(residual[e] - residual[than]) > 1e-9 * scale) return residual[e] > residual[than];
+  const name = (x: number): string => c.netlist.devices[c.chDevice[x]].name;
+  return name(e) < name(than);
 }

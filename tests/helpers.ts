@@ -1,0 +1,47 @@
+import { compile } from '../src/core/compile/compile.ts';
+import type { InputVector } from '../src/core/model/design.ts';
+import type { Netlist } from '../src/core/model/netlist.ts';
+import { DEFAULT_TECHNOLOGY, type Technology } from '../src/core/model/technology.ts';
+import { levelName } from '../src/core/solver/levels.ts';
+import { Simulator, type SolveResult } from '../src/core/solver/simulator.ts';
+
+/** A solved vector with lookups by net name. */
+export class Solved {
+  constructor(readonly result: SolveResult) {}
+  private index(net: string): number {
+    const n = this.result.compiled.netIndex.get(net);
+    if (n === undefined) throw new Error(`no net ${net}`);
+    return n;
+  }
+  level(net: string): '0' | '1' | 'X' | 'Z' {
+    return levelName(this.result.levels[this.index(net)]);
+  }
+  volts(net: string): number {
+    return this.result.volts[this.index(net)];
+  }
+  flags(net: string): number {
+    return this.result.flags[this.index(net)];
+  }
+}
+
+export function solve(netlist: Netlist, inputs: InputVector, tech: Technology = DEFAULT_TECHNOLOGY): Solved {
+  return new Solved(new Simulator(compile(netlist, tech)).solveFresh(inputs));
+}
+
+/** Solves steps in order, carrying charge; returns one Solved per step. */
+export function solveSteps(
+  netlist: Netlist,
+  steps: InputVector[],
+  tech: Technology = DEFAULT_TECHNOLOGY,
+): Solved[] {
+  const sim = new Simulator(compile(netlist, tech));
+  const out: Solved[] = [];
+  let previous: SolveResult | null = null;
+  let held: Record<string, string> = {};
+  for (const step of steps) {
+    held = { ...held, ...step };
+    previous = previous ? sim.solveNext(held as InputVector, previous) : sim.solveFresh(held as InputVector);
+    out.push(new Solved(previous));
+  }
+  return out;
+}

@@ -1,0 +1,103 @@
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import { checkSequence, checkSweep } from '../../src/core/analysis/check.ts';
+import type { CheckReport } from '../../src/core/analysis/report.ts';
+import type { Netlist } from '../../src/core/model/netlist.ts';
+import { STARTERS } from '../../src/core/starters/index.ts';
+import { complementaryGate, conducts, randomNetlist, spTree } from './generators.ts';
+
+const INPUTS = ['A', 'B', 'C', 'D'];
+
+describe('complementary static CMOS gates', () => {
+  // A pull-down network and its dual pull-up conduct under complementary conditions, so the output is
+  // always driven by exactly one of them (W&H 4th ed. §1.4, complementary CMOS; common practice).
+  it('never short or float, and compute the complement of the pull-down function', () => {
+    fc.assert(
+      fc.property(spTree(INPUTS), (tree) => {
+        const used = INPUTS.filter((i) => conducts(tree).includes(i));
+        const gate = complementaryGate(tree, used);
+        const report = checkSweep(gate, { expectations: { Y: `!${conducts(tree)}` } });
+        expect(report.summary.short).toBe(0);
+        expect(report.summary.floating).toBe(0);
+        expect(report.summary['static-current']).toBe(0);
+        expect(report.summary.mismatch).toBe(0);
+      }),
+      { numRuns: 150 },
+    );
+  });
+});
+
+/** What a result says, independent of the order anything was listed in. */
+function fingerprint(report: CheckReport): unknown {
+  const rows = report.vectors ?? report.steps ?? [];
+  return {
+    rows: rows.map((v) => ({
+      outputs: v.outputs,
+      voltages: Object.fromEntries(
+        Object.entries(v.voltages).map(([k, x]) => [k, x === null ? null : x.toFixed(9)]),
+      ),
+      current: v.supplyCurrent.toExponential(6),
+    })),
+    findings: report.findings
+      .map((f) => `${f.kind}|${f.vector}|${[...f.nets].sort().join(',')}|${[...f.devices].sort().join(',')}`)
+      .sort(),
+  };
+}
+
+function shuffled(netlist: Netlist, order: number[]): Netlist {
+  const devices = [...netlist.devices];
+  order.forEach((j, i) => {
+    const k = j % devices.length;
+    [devices[i % devices.length], devices[k]] = [devices[k], devices[i % devices.length]];
+  });
+  return { ...netlist, devices, rails: [...netlist.rails].reverse() };
+}
+
+describe('determinism', () => {
+  it('shuffling device and rail order never changes a starter cell result (sweep and sequences)', () => {
+    fc.assert(
+      fc.property(
+        fc.constantFrom(...STARTERS),
+        fc.array(fc.nat(), { minLength: 1, maxLength: 20 }),
+        (starter, order) => {
+          const { netlist, expectations, sequences } = starter.design;
+          const other = shuffled(netlist, order);
+          expect(fingerprint(checkSweep(other, { expectations, allNets: true }))).toEqual(
+            fingerprint(checkSweep(netlist, { expectations, allNets: true })),
+          );
+          for (const s of sequences) {
+            expect(fingerprint(checkSequence(other, s.steps, { allNets: true }))).toEqual(
+              fingerprint(checkSequence(netlist, s.steps, { allNets: true })),
+            );
+          }
+        },
+      ),
+      { numRuns: 60 },
+    );
+  });
+  it('shuffling never changes a random netlist result', () => {
+    fc.assert(
+      fc.property(randomNetlist(), fc.array(fc.nat(), { minLength: 1, maxLength: 12 }), (netlist, order) => {
+        expect(fingerprint(checkSweep(shuffled(netlist, order), { allNets: true }))).toEqual(
+          fingerprint(checkSweep(netlist, { allNets: true })),
+        );
+      }),
+      { numRuns: 200 },
+    );
+  });
+});
+
+describe('robustness', () => {
+  it('random netlists never crash the solver and always give a level per output', () => {
+    fc.assert(
+      fc.property(randomNetlist(), fc.boolean(), (netlist, undriven) => {
+        const report = checkSweep(netlist, { undrivenInputs: undriven });
+        for (const v of report.vectors!) {
+          for (const level of Object.values(v.outputs)) expect(['0', '1', 'X', 'Z']).toContain(level);
+          expect(Number.isFinite(v.supplyCurrent)).toBe(true);
+        }
+      }),
+      { numRuns: 300 },
+    );
+  });
+});
