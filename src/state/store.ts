@@ -33,7 +33,7 @@
  *     setHighlight({nets, devices})  / clearHighlight()   marks nets and devices without selecting.
  *     setDesignFields(patch)      changes expectations, sequences, technology, name or notes as one
  *                                 undoable step (e.g. editing an expected function in a panel).
- *     revealItems(ids)            pans so the given items are in view.
+ *   In src/editor/actions.ts: revealItems({parts, wires}) centres items on screen (jump to them).
  *
  * Everything that changes the document goes through `commitDoc` (one undo step) or a gesture
  * (`beginGesture` → `previewDoc`… → `endGesture` | `cancelGesture`).

@@ -1,0 +1,67 @@
+import { useEffect, useMemo } from 'react';
+import { SheetCanvas } from '../editor/SheetCanvas.tsx';
+import { createEditorController } from '../editor/tools/controller.ts';
+import { fitToView } from '../editor/actions.ts';
+import { AnalysisPanel } from '../panels/AnalysisPanel.tsx';
+import { useStore } from '../state/store.ts';
+import { Toolbar } from './Toolbar.tsx';
+import { PartsShelf } from './PartsShelf.tsx';
+import { StarterShelf } from './StarterShelf.tsx';
+import { PropertiesForm } from './PropertiesForm.tsx';
+import { MessageBar } from './MessageBar.tsx';
+import { HelpOverlay } from './HelpOverlay.tsx';
+import { AboutBox } from './AboutBox.tsx';
+import { handleKey } from './keyboard.ts';
+import { OPEN_ACCEPT, OPEN_INPUT_ID, openFile } from './files.ts';
+import './app.css';
+
+function OpenFileInput() {
+  return (
+    <input
+      id={OPEN_INPUT_ID}
+      data-testid="open-file"
+      type="file"
+      accept={OPEN_ACCEPT}
+      hidden
+      onChange={(e) => {
+        const file = e.target.files?.[0];
+        e.target.value = '';
+        if (file) void openFile(file);
+      }}
+    />
+  );
+}
+
+/** The shell: toolbar on top, shelves and the form on the left, the sheet, the analysis on the right. */
+export function App() {
+  const controller = useMemo(() => createEditorController(), []);
+  const overlay = useStore((s) => s.overlay);
+  useEffect(() => {
+    const onKey = (e: KeyboardEvent) => handleKey(e, controller);
+    window.addEventListener('keydown', onKey);
+    return () => window.removeEventListener('keydown', onKey);
+  }, [controller]);
+  return (
+    <div className="rw-app">
+      <Toolbar />
+      <nav className="rw-left" aria-label="Shelves">
+        <PartsShelf />
+        <PropertiesForm />
+        <StarterShelf />
+      </nav>
+      <main className="rw-centre">
+        <SheetCanvas controller={controller} onFirstLayout={fitToView} />
+        <MessageBar />
+        <footer className="rw-caution-line">
+          Switch-level estimates, not sign-off: confirm with circuit simulation and the foundry's rules.
+        </footer>
+      </main>
+      <div className="rw-right-panel">
+        <AnalysisPanel />
+      </div>
+      <OpenFileInput />
+      {overlay === 'help' ? <HelpOverlay /> : null}
+      {overlay === 'about' ? <AboutBox /> : null}
+    </div>
+  );
+}

@@ -1,0 +1,104 @@
+import { useState } from 'react';
+import type { SheetPart } from '../core/sheet/types.ts';
+import { partSpec } from '../core/sheet/parts/index.ts';
+import { editPart } from '../editor/actions.ts';
+import { setDesignFields, store, useStore } from '../state/store.ts';
+import { engineering } from '../editor/format.ts';
+import { fieldsFor, readField, type FieldKey } from './fieldRules.ts';
+
+function shown(part: SheetPart, key: FieldKey): string {
+  const v = part[key];
+  if (v === undefined) return '';
+  if (key === 'ohms' || key === 'farads') return engineering(v as number);
+  return String(v);
+}
+
+/** One field: applied on Enter or when focus leaves; a bad value stays in the box with its reason. */
+function Field({ part, field }: { part: SheetPart; field: { key: FieldKey; label: string } }) {
+  const [text, setText] = useState(shown(part, field.key));
+  const [error, setError] = useState<string | null>(null);
+  const apply = (): void => {
+    const r = readField(field.key, text, part, store.getState().doc.sheet);
+    if (!r.ok) return setError(r.error);
+    setError(null);
+    if (r.value !== part[field.key]) editPart(part.id, { [field.key]: r.value });
+  };
+  const id = `field-${field.key}`;
+  return (
+    <div className="rw-field">
+      <label htmlFor={id}>{field.label}</label>
+      <input
+        id={id}
+        data-field={field.key}
+        value={text}
+        aria-invalid={error !== null}
+        onChange={(e) => setText(e.target.value)}
+        onBlur={apply}
+        onKeyDown={(e) => {
+          if (e.key === 'Enter') apply();
+          if (e.key === 'Escape') {
+            setText(shown(part, field.key));
+            setError(null);
+          }
+        }}
+      />
+      {error ? (
+        <span className="rw-field-error" role="alert">
+          {error}
+        </span>
+      ) : null}
+    </div>
+  );
+}
+
+function CellNameField() {
+  const name = useStore((s) => s.doc.name);
+  const [text, setText] = useState(name);
+  const apply = () => {
+    const v = text.trim();
+    if (v !== '' && v !== name) setDesignFields({ name: v });
+    else setText(name);
+  };
+  return (
+    <div className="rw-field">
+      <label htmlFor="field-cell">Cell name</label>
+      <input
+        id="field-cell"
+        value={text}
+        onChange={(e) => setText(e.target.value)}
+        onBlur={apply}
+        onKeyDown={(e) => e.key === 'Enter' && apply()}
+      />
+    </div>
+  );
+}
+
+/** The side form: the selected part's properties, or the cell's name when nothing single is selected. */
+export function PropertiesForm() {
+  const selected = useStore((s) => s.selection.selected);
+  const part = useStore((s) =>
+    selected.parts.length === 1 ? s.doc.sheet.parts.find((p) => p.id === selected.parts[0]) : undefined,
+  );
+  const docName = useStore((s) => s.doc.name);
+  const count = selected.parts.length + selected.wires.length;
+  return (
+    <section className="rw-shelf rw-properties" aria-label="Properties">
+      <h2>Properties</h2>
+      {part ? (
+        <form key={`${part.id}:${JSON.stringify(part)}`} onSubmit={(e) => e.preventDefault()}>
+          <p className="rw-kind">{partSpec(part.kind).title}</p>
+          {fieldsFor(part).map((f) => (
+            <Field key={f.key} part={part} field={f} />
+          ))}
+        </form>
+      ) : (
+        <>
+          <CellNameField key={docName} />
+          <p className="rw-hint">
+            {count > 1 ? `${count} items selected.` : 'Select one part to edit its name and size.'}
+          </p>
+        </>
+      )}
+    </section>
+  );
+}

@@ -1,0 +1,211 @@
+/**
+ * Every user action, registered once and dispatched alike from the toolbar, the keyboard and the
+ * help overlay. The key map is Railwise's own: number keys place parts in shelf order, Q turns,
+ * F flips, J joins (wires), V views all; the usual system shortcuts for clipboard and history.
+ */
+import type { PartKind } from '../core/sheet/types.ts';
+import { PART_KINDS, partSpec } from '../core/sheet/parts/index.ts';
+import {
+  copySelection,
+  cutSelection,
+  deleteSelection,
+  duplicateSelection,
+  fitToView,
+  mirrorSelection,
+  nudgeSelection,
+  pasteClipboard,
+  rotateSelection,
+  selectAll,
+  startPlacing,
+  startWiring,
+  zoomBy,
+} from '../editor/actions.ts';
+import { redo, setOverlay, undo } from '../state/store.ts';
+import { exportDesign, newDesign, pickAndOpen, saveDesign, type ExportKind } from './files.ts';
+
+export interface KeyBinding {
+  /** KeyboardEvent.key, compared case-insensitively. */
+  readonly key: string;
+  readonly ctrl?: boolean;
+  readonly shift?: boolean;
+}
+
+export interface Command {
+  readonly id: string;
+  readonly label: string;
+  readonly group: 'Parts' | 'Edit' | 'View' | 'File' | 'Help';
+  readonly keys: readonly KeyBinding[];
+  readonly run: () => void;
+}
+
+function placeCommand(kind: PartKind, index: number): Command {
+  return {
+    id: `place-${kind}`,
+    label: `Place ${partSpec(kind).title}`,
+    group: 'Parts',
+    keys: [{ key: String(index + 1) }],
+    run: () => startPlacing(kind),
+  };
+}
+
+function exportCommand(kind: ExportKind, label: string): Command {
+  return {
+    id: `export-${kind}`,
+    label: `Export ${label}`,
+    group: 'File',
+    keys: [],
+    run: () => void exportDesign(kind),
+  };
+}
+
+export const COMMANDS: readonly Command[] = [
+  ...PART_KINDS.map(placeCommand),
+  {
+    id: 'wire',
+    label: 'Draw a wire (or drag from any pin)',
+    group: 'Parts',
+    keys: [{ key: 'j' }],
+    run: startWiring,
+  },
+  {
+    id: 'rotate',
+    label: 'Turn a quarter clockwise',
+    group: 'Edit',
+    keys: [{ key: 'q' }],
+    run: rotateSelection,
+  },
+  { id: 'mirror', label: 'Flip left–right', group: 'Edit', keys: [{ key: 'f' }], run: mirrorSelection },
+  {
+    id: 'delete',
+    label: 'Delete',
+    group: 'Edit',
+    keys: [{ key: 'Delete' }, { key: 'Backspace' }],
+    run: deleteSelection,
+  },
+  {
+    id: 'duplicate',
+    label: 'Duplicate',
+    group: 'Edit',
+    keys: [{ key: 'd', ctrl: true }],
+    run: duplicateSelection,
+  },
+  { id: 'copy', label: 'Copy', group: 'Edit', keys: [{ key: 'c', ctrl: true }], run: copySelection },
+  { id: 'cut', label: 'Cut', group: 'Edit', keys: [{ key: 'x', ctrl: true }], run: cutSelection },
+  {
+    id: 'paste',
+    label: 'Paste',
+    group: 'Edit',
+    keys: [{ key: 'v', ctrl: true }],
+    run: () => pasteClipboard(),
+  },
+  {
+    id: 'select-all',
+    label: 'Select everything',
+    group: 'Edit',
+    keys: [{ key: 'a', ctrl: true }],
+    run: selectAll,
+  },
+  { id: 'undo', label: 'Undo', group: 'Edit', keys: [{ key: 'z', ctrl: true }], run: () => void undo() },
+  {
+    id: 'redo',
+    label: 'Redo',
+    group: 'Edit',
+    keys: [
+      { key: 'z', ctrl: true, shift: true },
+      { key: 'y', ctrl: true },
+    ],
+    run: () => void redo(),
+  },
+  {
+    id: 'nudge-left',
+    label: 'Nudge left',
+    group: 'Edit',
+    keys: [{ key: 'ArrowLeft' }],
+    run: () => nudgeSelection(-1, 0),
+  },
+  {
+    id: 'nudge-right',
+    label: 'Nudge right',
+    group: 'Edit',
+    keys: [{ key: 'ArrowRight' }],
+    run: () => nudgeSelection(1, 0),
+  },
+  {
+    id: 'nudge-up',
+    label: 'Nudge up',
+    group: 'Edit',
+    keys: [{ key: 'ArrowUp' }],
+    run: () => nudgeSelection(0, -1),
+  },
+  {
+    id: 'nudge-down',
+    label: 'Nudge down',
+    group: 'Edit',
+    keys: [{ key: 'ArrowDown' }],
+    run: () => nudgeSelection(0, 1),
+  },
+  { id: 'fit', label: 'View the whole cell', group: 'View', keys: [{ key: 'v' }], run: fitToView },
+  {
+    id: 'zoom-in',
+    label: 'Zoom in',
+    group: 'View',
+    keys: [{ key: '=' }, { key: '+' }],
+    run: () => zoomBy(1.25),
+  },
+  { id: 'zoom-out', label: 'Zoom out', group: 'View', keys: [{ key: '-' }], run: () => zoomBy(0.8) },
+  { id: 'new', label: 'New empty sheet', group: 'File', keys: [], run: newDesign },
+  {
+    id: 'open',
+    label: 'Open a design or SPICE netlist…',
+    group: 'File',
+    keys: [{ key: 'o', ctrl: true }],
+    run: pickAndOpen,
+  },
+  { id: 'save', label: 'Save design file', group: 'File', keys: [{ key: 's', ctrl: true }], run: saveDesign },
+  exportCommand('spice', 'SPICE netlist'),
+  exportCommand('verilog', 'Verilog (switch primitives)'),
+  exportCommand('csv', 'truth table (CSV)'),
+  exportCommand('svg', 'drawing (SVG)'),
+  exportCommand('png', 'picture (PNG)'),
+  {
+    id: 'help',
+    label: 'Keys and mouse',
+    group: 'Help',
+    keys: [{ key: '?', shift: true }, { key: 'h' }],
+    run: () => setOverlay('help'),
+  },
+  { id: 'about', label: 'About Railwise', group: 'Help', keys: [], run: () => setOverlay('about') },
+];
+
+export function commandById(id: string): Command {
+  const c = COMMANDS.find((x) => x.id === id);
+  if (!c) throw new Error(`no command ${id}`);
+  return c;
+}
+
+/** Human form of a binding: "Ctrl+Shift+Z", "Q", "Del". */
+export function describeKey(k: KeyBinding): string {
+  const names: Record<string, string> = {
+    Delete: 'Del',
+    Backspace: '⌫',
+    ArrowLeft: '←',
+    ArrowRight: '→',
+    ArrowUp: '↑',
+    ArrowDown: '↓',
+  };
+  const key = names[k.key] ?? (k.key.length === 1 ? k.key.toUpperCase() : k.key);
+  return [k.ctrl ? 'Ctrl' : '', k.shift && k.key !== '?' ? 'Shift' : '', key].filter(Boolean).join('+');
+}
+
+/** The command a key event asks for; Ctrl and Cmd are the same, Shift must match where it is named. */
+export function commandForKey(
+  e: Pick<KeyboardEvent, 'key' | 'ctrlKey' | 'metaKey' | 'shiftKey'>,
+): Command | null {
+  const ctrl = e.ctrlKey || e.metaKey;
+  const key = e.key.toLowerCase();
+  const matches = (b: KeyBinding) =>
+    b.key.toLowerCase() === key && !!b.ctrl === ctrl && (b.shift === undefined || b.shift === e.shiftKey);
+  // Prefer a binding that names Shift exactly (Ctrl+Shift+Z over Ctrl+Z).
+  const exact = COMMANDS.find((c) => c.keys.some((b) => matches(b) && b.shift === e.shiftKey));
+  return exact ?? COMMANDS.find((c) => c.keys.some((b) => matches(b) && b.shift !== false)) ?? null;
+}

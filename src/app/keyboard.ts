@@ -1,0 +1,29 @@
+/**
+ * Keyboard dispatch: a key press runs its registered command unless the designer is typing in a
+ * field. Escape first cancels a gesture in progress, then clears the selection or closes a box.
+ */
+import type { EditorController } from '../editor/tools/controller.ts';
+import { clearSelection, setOverlay, store } from '../state/store.ts';
+import { commandForKey } from './commands.ts';
+
+function isTyping(target: EventTarget | null): boolean {
+  return (
+    target instanceof HTMLElement &&
+    (target.isContentEditable || ['INPUT', 'TEXTAREA', 'SELECT'].includes(target.tagName))
+  );
+}
+
+export function handleKey(e: KeyboardEvent, controller: EditorController): void {
+  if (isTyping(e.target) || e.altKey) return;
+  if (e.key === 'Escape') {
+    if (store.getState().overlay !== null) setOverlay(null);
+    else if (!controller.cancel()) clearSelection();
+    e.preventDefault();
+    return;
+  }
+  if (store.getState().overlay !== null) return;
+  const command = commandForKey(e);
+  if (!command) return;
+  e.preventDefault();
+  command.run();
+}

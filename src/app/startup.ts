@@ -1,0 +1,23 @@
+/**
+ * What the page opens on: the autosaved design when there is one, otherwise the demo, a NAND2
+ * from the starter set, so the sheet is never empty.
+ */
+import { starterById, STARTERS } from '../core/starters/index.ts';
+import { documentFromDesign } from '../state/document.ts';
+import { resetStore, showMessage } from '../state/store.ts';
+import { restoreAutosave } from './autosave.ts';
+
+export const DEMO_STARTER = 'nand2';
+
+export function openFirstDesign(storage: Storage = localStorage): void {
+  const restored = restoreAutosave(storage);
+  const design = restored.design ?? (starterById(DEMO_STARTER) ?? STARTERS[0]!).design;
+  resetStore(documentFromDesign(design));
+  if (restored.problem) showMessage('error', restored.problem);
+  else if (!restored.design) {
+    showMessage(
+      'info',
+      'Welcome: this NAND2 is a starter cell. Press H for keys, or pick a part on the left and click the sheet.',
+    );
+  }
+}

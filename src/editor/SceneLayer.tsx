@@ -1,0 +1,61 @@
+import { memo } from 'react';
+import { Circle, Layer, Line } from 'react-konva';
+import type { SheetPart, SheetWire } from '../core/sheet/types.ts';
+import { useStore } from '../state/store.ts';
+import { PART_VIEWS } from './devices/index.ts';
+import { JUNCTION_RADIUS, SHEET_THEME, WIRE_STROKE } from './theme.ts';
+
+const PartNode = memo(function PartNode({ part, color }: { part: SheetPart; color: string }) {
+  const View = PART_VIEWS[part.kind];
+  return <View part={part} color={color} />;
+});
+
+const WireNode = memo(function WireNode({ wire, color }: { wire: SheetWire; color: string }) {
+  return (
+    <Line
+      points={wire.points.flatMap((p) => [p.x, p.y])}
+      stroke={color}
+      strokeWidth={WIRE_STROKE}
+      lineCap="round"
+      lineJoin="round"
+    />
+  );
+});
+
+/**
+ * Devices, wires and junction dots in neutral ink; the selection in the selection colour and the
+ * panels' highlights in theirs. Nothing here listens for events: hit testing is pure geometry.
+ */
+export function SceneLayer() {
+  const sheet = useStore((s) => s.doc.sheet);
+  const junctions = useStore((s) => s.geometry.junctions);
+  const selected = useStore((s) => s.selection.selected);
+  const highlight = useStore((s) => s.selection.highlight);
+  const deviceParts = useStore((s) => s.geometry.deviceParts);
+  const wireNets = useStore((s) => s.geometry.wireNets);
+  const selParts = new Set(selected.parts);
+  const selWires = new Set(selected.wires);
+  const hiParts = new Set(highlight.devices.flatMap((d) => deviceParts[d] ?? []));
+  const hiNets = new Set(highlight.nets);
+  const partColor = (id: string) =>
+    selParts.has(id) ? SHEET_THEME.selected : hiParts.has(id) ? SHEET_THEME.highlight : SHEET_THEME.ink;
+  const wireColor = (id: string) =>
+    selWires.has(id)
+      ? SHEET_THEME.selected
+      : hiNets.has(wireNets[id] ?? '')
+        ? SHEET_THEME.highlight
+        : SHEET_THEME.wire;
+  return (
+    <Layer listening={false}>
+      {sheet.wires.map((w) => (
+        <WireNode key={w.id} wire={w} color={wireColor(w.id)} />
+      ))}
+      {junctions.map((j) => (
+        <Circle key={`${j.x},${j.y}`} x={j.x} y={j.y} radius={JUNCTION_RADIUS} fill={SHEET_THEME.wire} />
+      ))}
+      {sheet.parts.map((p) => (
+        <PartNode key={p.id} part={p} color={partColor(p.id)} />
+      ))}
+    </Layer>
+  );
+}

@@ -1,0 +1,108 @@
+import { useEffect, useMemo, useRef, type RefObject } from 'react';
+import { Stage } from 'react-konva';
+import type Konva from 'konva';
+import type { KonvaEventObject } from 'konva/lib/Node';
+import { setScreen, setViewport, store, useStore } from '../state/store.ts';
+import { screenToSheet, zoomAt } from '../state/viewport.ts';
+import { SimulationOverlay } from './overlay/SimulationOverlay.tsx';
+import { GridLayer } from './GridLayer.tsx';
+import { SceneLayer } from './SceneLayer.tsx';
+import { InteractionLayer } from './InteractionLayer.tsx';
+import { createEditorController, type EditorController } from './tools/controller.ts';
+import type { ToolPointer } from './tools/types.ts';
+import { setStage } from './stageRef.ts';
+import { SHEET_THEME } from './theme.ts';
+
+/** Keeps the store told of the sheet area's size (for fit-to-view and the grid). */
+function useElementSize(ref: RefObject<HTMLDivElement | null>, onFirstLayout?: () => void): void {
+  useEffect(() => {
+    const el = ref.current;
+    if (!el) return;
+    let first = true;
+    const update = () => {
+      setScreen(Math.floor(el.clientWidth), Math.floor(el.clientHeight));
+      if (first && el.clientWidth > 0) {
+        first = false;
+        onFirstLayout?.();
+      }
+    };
+    update();
+    const observer = new ResizeObserver(update);
+    observer.observe(el);
+    return () => observer.disconnect();
+  }, [ref, onFirstLayout]);
+}
+
+function toPointer(stage: Konva.Stage, evt: MouseEvent): ToolPointer | null {
+  const screen = stage.getPointerPosition();
+  if (!screen) return null;
+  return {
+    at: screenToSheet(store.getState().viewport, screen),
+    screen,
+    shift: evt.shiftKey,
+    button: evt.button,
+  };
+}
+
+/** The sheet: a Konva stage scaled so one grid unit is `viewport.scale` pixels. */
+export function SheetCanvas({
+  controller,
+  onFirstLayout,
+}: {
+  controller?: EditorController;
+  onFirstLayout?: () => void;
+}) {
+  const box = useRef<HTMLDivElement>(null);
+  const stageRef = useRef<Konva.Stage>(null);
+  const ctl = useMemo(() => controller ?? createEditorController(), [controller]);
+  const viewport = useStore((s) => s.viewport);
+  const screen = useStore((s) => s.screen);
+  const tool = useStore((s) => s.tool);
+  useElementSize(box, onFirstLayout);
+  useEffect(() => {
+    setStage(stageRef.current);
+    return () => setStage(null);
+  }, []);
+  const route = (fn: (e: ToolPointer) => void) => (e: KonvaEventObject<MouseEvent>) => {
+    const stage = e.target.getStage();
+    const p = stage && toPointer(stage, e.evt);
+    if (p) fn(p);
+  };
+  const onWheel = (e: KonvaEventObject<WheelEvent>) => {
+    e.evt.preventDefault();
+    const p = e.target.getStage()?.getPointerPosition();
+    if (!p) return;
+    // Trackpads send many small deltas; scale the factor by the delta so both feel alike.
+    const factor = Math.exp(-e.evt.deltaY * 0.0015);
+    setViewport(zoomAt(store.getState().viewport, p, factor));
+  };
+  return (
+    <div
+      ref={box}
+      className="sheet-canvas"
+      data-testid="sheet"
+      data-tool={tool.mode}
+      style={{ background: SHEET_THEME.background, cursor: tool.mode === 'select' ? 'default' : 'crosshair' }}
+      onContextMenu={(e) => e.preventDefault()}
+    >
+      <Stage
+        ref={stageRef}
+        width={screen.width}
+        height={screen.height}
+        x={viewport.x}
+        y={viewport.y}
+        scaleX={viewport.scale}
+        scaleY={viewport.scale}
+        onMouseDown={route(ctl.down)}
+        onMouseMove={route(ctl.move)}
+        onMouseUp={route(ctl.up)}
+        onWheel={onWheel}
+      >
+        <GridLayer />
+        <SceneLayer />
+        <SimulationOverlay />
+        <InteractionLayer />
+      </Stage>
+    </div>
+  );
+}

@@ -1,0 +1,135 @@
+/**
+ * Editing actions on the current selection, as plain functions shared by the toolbar, the
+ * keyboard and the tests. Each document change is one undo step (commitDoc).
+ */
+import type { PartKind, Sheet } from '../core/sheet/types.ts';
+import { deleteItems, SheetEditError, updatePart, type PartPatch } from '../core/sheet/edits.ts';
+import { mirrorItems, moveItems, rotateItems } from '../core/sheet/transform.ts';
+import { copyItems, pasteClip } from '../core/sheet/clipboard.ts';
+import { isEmptyItems, type ItemIds } from '../core/sheet/selection.ts';
+import { partBounds, pointsBounds, unionRects, type Rect } from '../core/sheet/geometry.ts';
+import { fitRect, zoomAt } from '../state/viewport.ts';
+import {
+  commitDoc,
+  setClipboard,
+  setSelection,
+  setTool,
+  setViewport,
+  showMessage,
+  store,
+} from '../state/store.ts';
+
+const selected = (): ItemIds => store.getState().selection.selected;
+
+function editSelection(edit: (sheet: Sheet, ids: ItemIds) => Sheet): void {
+  const ids = selected();
+  if (isEmptyItems(ids)) return;
+  commitDoc((doc) => ({ ...doc, sheet: edit(doc.sheet, ids) }));
+}
+
+function currentSheet(): Sheet {
+  return store.getState().doc.sheet;
+}
+
+export function rotateSelection(): void {
+  editSelection(rotateItems);
+}
+
+export function mirrorSelection(): void {
+  editSelection(mirrorItems);
+}
+
+export function deleteSelection(): void {
+  editSelection(deleteItems);
+  setSelection({ parts: [], wires: [] });
+}
+
+export function nudgeSelection(dx: number, dy: number): void {
+  editSelection((sheet, ids) => moveItems(sheet, ids, dx, dy));
+}
+
+export function copySelection(): void {
+  if (!isEmptyItems(selected())) setClipboard(copyItems(currentSheet(), selected()));
+}
+
+export function cutSelection(): void {
+  copySelection();
+  deleteSelection();
+}
+
+/** Pastes the clipboard two grid units down and right of where it was copied, and selects it. */
+export function pasteClipboard(offset = 2): void {
+  const clip = store.getState().clipboard;
+  if (!clip || (clip.parts.length === 0 && clip.wires.length === 0)) return;
+  let pasted: ItemIds = { parts: [], wires: [] };
+  commitDoc((doc) => {
+    const r = pasteClip(doc.sheet, clip, offset, offset);
+    pasted = r.pasted;
+    return { ...doc, sheet: r.sheet };
+  });
+  setSelection(pasted);
+  // A second paste lands further on, not on top of the first.
+  setClipboard(copyItems(currentSheet(), pasted));
+}
+
+export function duplicateSelection(): void {
+  if (isEmptyItems(selected())) return;
+  copySelection();
+  pasteClipboard();
+}
+
+export function selectAll(): void {
+  const sheet = currentSheet();
+  setSelection({ parts: sheet.parts.map((p) => p.id), wires: sheet.wires.map((w) => w.id) });
+}
+
+export function startPlacing(kind: PartKind): void {
+  setTool({ mode: 'place', kind });
+}
+
+export function startWiring(): void {
+  setTool({ mode: 'wire' });
+}
+
+/** Changes part properties from the form; a bad value is a message, and the sheet is unchanged. */
+export function editPart(partId: string, patch: PartPatch): boolean {
+  try {
+    commitDoc((doc) => ({ ...doc, sheet: updatePart(doc.sheet, partId, patch) }));
+    return true;
+  } catch (e) {
+    if (e instanceof SheetEditError) {
+      showMessage('error', e.message);
+      return false;
+    }
+    throw e;
+  }
+}
+
+export function sheetBounds(ids?: ItemIds): Rect | null {
+  const sheet = currentSheet();
+  const parts = ids ? sheet.parts.filter((p) => ids.parts.includes(p.id)) : sheet.parts;
+  const wires = ids ? sheet.wires.filter((w) => ids.wires.includes(w.id)) : sheet.wires;
+  return unionRects([...parts.map(partBounds), ...wires.flatMap((w) => pointsBounds(w.points) ?? [])]);
+}
+
+export function fitToView(): void {
+  const { screen } = store.getState();
+  setViewport(fitRect(sheetBounds(), screen.width, screen.height));
+}
+
+/** Centres the items (zooming out only if they do not fit), for jumps from the panels. */
+export function revealItems(ids: ItemIds): void {
+  const box = sheetBounds(ids);
+  if (!box) return;
+  const { screen, viewport } = store.getState();
+  const fitted = fitRect(box, screen.width, screen.height, 120);
+  const scale = Math.min(fitted.scale, viewport.scale);
+  const cx = (box.x0 + box.x1) / 2;
+  const cy = (box.y0 + box.y1) / 2;
+  setViewport({ scale, x: screen.width / 2 - cx * scale, y: screen.height / 2 - cy * scale });
+}
+
+export function zoomBy(factor: number): void {
+  const { screen, viewport } = store.getState();
+  setViewport(zoomAt(viewport, { x: screen.width / 2, y: screen.height / 2 }, factor));
+}

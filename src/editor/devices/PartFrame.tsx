@@ -1,0 +1,51 @@
+import type { ReactNode } from 'react';
+import { Group, Text } from 'react-konva';
+import type { SheetPart } from '../../core/sheet/types.ts';
+import { partSpec } from '../../core/sheet/parts/index.ts';
+import { toWorld } from '../../core/sheet/geometry.ts';
+import { NAME_SIZE, SHEET_THEME, VALUE_SIZE } from '../theme.ts';
+import { SymbolShapes } from './SymbolShapes.tsx';
+
+export interface PartViewProps {
+  readonly part: SheetPart;
+  readonly color: string;
+}
+
+/**
+ * The common frame of every part view: the symbol turned and mirrored into place, then upright
+ * text (name and an optional value line) at the spec's text anchor.
+ */
+export function PartFrame({
+  part,
+  color,
+  value,
+  children,
+}: PartViewProps & { value?: string; children?: ReactNode }) {
+  const spec = partSpec(part.kind);
+  const at = toWorld(part, spec.nameAt);
+  return (
+    <Group>
+      <Group x={part.x} y={part.y} rotation={part.rotation * 90} scaleX={part.mirror ? -1 : 1}>
+        <SymbolShapes primitives={spec.symbol} color={color} />
+        {children}
+      </Group>
+      <Text
+        x={at.x}
+        y={at.y - NAME_SIZE / 2}
+        text={part.name}
+        fontSize={NAME_SIZE}
+        fill={SHEET_THEME.text}
+        fontStyle="bold"
+      />
+      {value ? (
+        <Text
+          x={at.x}
+          y={at.y + NAME_SIZE * 0.6}
+          text={value}
+          fontSize={VALUE_SIZE}
+          fill={SHEET_THEME.subtleText}
+        />
+      ) : null}
+    </Group>
+  );
+}

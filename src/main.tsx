@@ -1,0 +1,21 @@
+import { StrictMode } from 'react';
+import { createRoot } from 'react-dom/client';
+import { App } from './app/App.tsx';
+import { ErrorBoundary } from './app/ErrorBoundary.tsx';
+import { openFirstDesign } from './app/startup.ts';
+import { startAutosave } from './app/autosave.ts';
+import { installTestApi } from './app/testApi.ts';
+
+openFirstDesign();
+startAutosave();
+installTestApi();
+
+const root = document.getElementById('root');
+if (!root) throw new Error('index.html has no #root element');
+createRoot(root).render(
+  <StrictMode>
+    <ErrorBoundary>
+      <App />
+    </ErrorBoundary>
+  </StrictMode>,
+);
