@@ -4,7 +4,7 @@
  */
 import { readFileSync } from 'node:fs';
 import { DesignFileError, parseDesignFile } from '../core/format/designFile.ts';
-import type { InputVector } from '../core/model/design.ts';
+import type { Sequence } from '../core/model/design.ts';
 import type { Netlist } from '../core/model/netlist.ts';
 import { DEFAULT_TECHNOLOGY, withVdd, type Technology } from '../core/model/technology.ts';
 import { assignPins, PinError } from '../core/netlist-io/pins.ts';
@@ -19,8 +19,8 @@ export interface CellJob {
   readonly netlist: Netlist;
   readonly technology: Technology;
   readonly expectations: Readonly<Record<string, string>>;
-  /** The design's first sequence, used for sequence activity when --sequence is not given. */
-  readonly designSequence?: readonly InputVector[];
+  /** A design file's saved sequences: `--sequence NAME` picks one, and the first drives sequence activity. */
+  readonly sequences: readonly Sequence[];
   readonly notes: readonly string[];
 }
 
@@ -92,15 +92,14 @@ function designFailure(file: string, e: DesignFileError): CellFailure {
 
 function designCell(file: string, text: string, choice: CellChoice): LoadedCell {
   const design = parseDesignFile(text, file);
-  const first = design.sequences[0];
   const job: CellJob = {
     file,
     cell: design.netlist.name || design.name,
     netlist: design.netlist,
     technology: choice.vdd === undefined ? design.technology : withVdd(design.technology, choice.vdd),
     expectations: design.expectations,
+    sequences: design.sequences,
     notes: [],
-    ...(first === undefined ? {} : { designSequence: first.steps }),
   };
   return { job };
 }
@@ -119,6 +118,7 @@ function spiceCells(
       netlist: c.netlist,
       technology,
       expectations: c.expectations,
+      sequences: [],
       notes: [...imported.notes, ...c.notes],
     },
   }));

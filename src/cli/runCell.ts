@@ -46,8 +46,7 @@ export type CellResult = { readonly json: CellJson } | { readonly failure: CellF
 
 export function runCell(job: CellJob, options: RunOptions): CellResult {
   try {
-    const steps =
-      options.sequence === undefined ? null : parseSequenceText(options.sequence, job.netlist.inputs);
+    const steps = options.sequence === undefined ? null : sequenceSteps(job, options.sequence);
     const checkOptions = {
       technology: job.technology,
       expectations: job.expectations,
@@ -68,8 +67,21 @@ export function runCell(job: CellJob, options: RunOptions): CellResult {
   }
 }
 
+/** `--sequence` gives steps (`A=0 B=1; A=1`) or the name of a sequence saved in a design file. */
+function sequenceSteps(job: CellJob, text: string): readonly InputVector[] {
+  if (!text.includes('=')) {
+    const saved = job.sequences.find((s) => s.name.toLowerCase() === text.trim().toLowerCase());
+    if (saved !== undefined) return saved.steps;
+    const names = job.sequences.map((s) => `"${s.name}"`).join(', ') || 'none';
+    throw new SequenceError(
+      `"${text}" is neither steps (A=0 B=1; A=1) nor a saved sequence (saved: ${names})`,
+    );
+  }
+  return parseSequenceText(text, job.netlist.inputs);
+}
+
 function cellPower(job: CellJob, choice: PowerChoice, steps: readonly InputVector[] | null): PowerReport {
-  const sequence = steps ?? job.designSequence;
+  const sequence = steps ?? job.sequences[0]?.steps;
   const activity = choice.activity ?? (sequence === undefined ? 'random' : 'sequence');
   return powerReport(job.netlist, job.technology, {
     freq: choice.freq,

@@ -31,6 +31,13 @@ export function formatFailure(f: CellFailure, c: Colour): string {
 }
 
 function truthTable(json: CellJson, rows: readonly VectorJson[], c: Colour): string[] {
+  if (json.inputs.length === 0 && json.outputs.length === 0) {
+    return [
+      c.dim(
+        `  no input or output pins (${rows.length === 1 ? 'one steady state' : `${rows.length} rows`} checked)`,
+      ),
+    ];
+  }
   const shown =
     rows.length <= MAX_TABLE_ROWS ? rows : rows.filter((r) => r.findings.length > 0).slice(0, MAX_TABLE_ROWS);
   const headers = [...json.inputs, '│', ...json.outputs, '│', 'I(supply)', ' marks'];
@@ -74,7 +81,8 @@ function findingLines(findings: readonly Finding[], c: Colour): string[] {
   for (const f of findings.slice(0, MAX_FINDINGS)) {
     const tag = f.severity === 'error' ? c.error('error  ') : c.warning('warning');
     out.push(`    ${tag} ${f.kind}: ${f.message}`);
-    if (f.path !== null && f.path.length > 0) {
+    // Messages usually spell the path out already; print it apart only when they do not.
+    if (f.path !== null && f.path.length > 0 && !f.message.includes(' → ')) {
       const current = f.current === undefined ? '' : `  ${formatSi(f.current, 'A')}`;
       out.push(`            ${f.path.join(' → ')}${current}`);
     }
