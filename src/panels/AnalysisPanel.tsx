@@ -4,6 +4,7 @@ import { ExpectationSection, RuleSection } from './CellSections.tsx';
 import { SequenceSection } from './SequenceSection.tsx';
 import { TableSection } from './TableSection.tsx';
 import { VectorSection } from './VectorSection.tsx';
+import { PowerSection } from './PowerSection.tsx';
 import './panels.css';
 
 /** Keys that step through vectors: ignored while the designer types in a field. */
@@ -46,6 +47,7 @@ export function AnalysisPanel() {
       <ExpectationSection />
       <RuleSection />
       <SequenceSection />
+      <PowerSection />
     </aside>
   );
 }

@@ -1,8 +1,9 @@
 /**
  * The simulation slice: the selected input vector, the live solve of the sheet for it, and the
- * sweep and sequence jobs run in the worker. Every job result carries the document revision it was
- * computed for; a result for an older revision is dropped, so the panels never show a stale table
- * beside a newer drawing. Actions are module functions, callable from panels, keys and tests alike.
+ * sweep, sequence and power jobs run in the worker. Every job carries the analysis revision it was
+ * computed for (see ./lanes); results for an older revision are dropped, so the panels never show
+ * a stale table beside a newer drawing. Actions are module functions, callable from panels, keys
+ * and tests alike.
  */
 import { createStore } from 'zustand/vanilla';
 import { useStore } from 'zustand';
@@ -16,28 +17,19 @@ import {
   toggleInput as flipInput,
 } from '../core/view/vectorControl.ts';
 import type { TableView } from '../core/view/vectorTable.ts';
+import { Lane } from '../worker/lanes.ts';
 import {
+  IDLE_JOB,
   jobSize,
-  PROGRESS_THRESHOLD_VECTORS,
-  type AnalysisJob,
-  type JobProgress,
+  type CheckResult,
   type JobResult,
+  type JobState,
+  type PowerSettings,
+  type PowerSizingResult,
 } from '../worker/protocol.ts';
-import { jobRunner, type JobLane as JobKey } from '../worker/runner.ts';
-import { JobCancelled } from '../worker/client.ts';
 import { store } from './store.ts';
 
-export type JobStatus = 'idle' | 'running' | 'done' | 'cancelled' | 'failed';
-
-export interface JobState {
-  readonly status: JobStatus;
-  readonly revision: number;
-  readonly progress: JobProgress;
-  /** Past the size threshold: the panel shows a progress bar and a cancel button. */
-  readonly long: boolean;
-  readonly result: JobResult | null;
-  readonly error: string | null;
-}
+export type { JobState, JobStatus } from '../worker/protocol.ts';
 
 export interface SimulationState {
   /** Document revision the slice last saw. */
@@ -48,8 +40,10 @@ export interface SimulationState {
   readonly vector: InputVector;
   readonly live: SolvedView | null;
   readonly liveError: string | null;
-  readonly sweep: JobState;
-  readonly sequence: JobState;
+  readonly sweep: JobState<CheckResult>;
+  readonly sequence: JobState<CheckResult>;
+  readonly power: JobState<PowerSizingResult>;
+  readonly powerSettings: PowerSettings;
   readonly sequenceIndex: number;
   readonly selectedStep: number | null;
   readonly stripNets: readonly string[];
@@ -59,15 +53,10 @@ export interface SimulationState {
 
 /** Sweeps up to this many vectors start by themselves after each edit; larger ones wait for a click. */
 export const AUTO_SWEEP_VECTORS = 1024;
-
-const IDLE_JOB: JobState = {
-  status: 'idle',
-  revision: -1,
-  progress: { done: 0, total: 0 },
-  long: false,
-  result: null,
-  error: null,
-};
+/** Waits for edits to pause (a drag changes the revision every frame) before starting a sweep. */
+export const SWEEP_DEBOUNCE_MS = 120;
+/** 100 MHz and 10 fF per output: round defaults for a first look (common practice, no source). */
+export const DEFAULT_POWER_SETTINGS: PowerSettings = { freq: 100e6, load: 10e-15, activity: 'random' };
 
 function initialState(): SimulationState {
   return {
@@ -79,6 +68,8 @@ function initialState(): SimulationState {
     liveError: null,
     sweep: IDLE_JOB,
     sequence: IDLE_JOB,
+    power: IDLE_JOB,
+    powerSettings: DEFAULT_POWER_SETTINGS,
     sequenceIndex: 0,
     selectedStep: null,
     stripNets: [],
@@ -93,13 +84,41 @@ export function useSimulation<T>(selector: (state: SimulationState) => T): T {
   return useStore(simulationStore, selector);
 }
 
-let session: LiveSession | null = null;
-
-/** Which job of each lane is the current one: a superseded job's late answer is ignored. */
-const currentJob: Record<JobKey, object | null> = { sweep: null, sequence: null };
-
 const set = (patch: Partial<SimulationState>): void => simulationStore.setState(patch);
 const get = (): SimulationState => simulationStore.getState();
+
+function narrow<K extends JobResult['kind']>(kinds: readonly K[]) {
+  return (result: JobResult): Extract<JobResult, { kind: K }> => {
+    if (!(kinds as readonly string[]).includes(result.kind))
+      throw new Error(`unexpected ${result.kind} result`);
+    return result as Extract<JobResult, { kind: K }>;
+  };
+}
+
+const lanes = {
+  sweep: new Lane<CheckResult>('sweep', {
+    publish: (sweep) => set({ sweep }),
+    read: () => get().sweep,
+    revision: () => get().analysisRevision,
+    accept: narrow(['sweep', 'sequence']),
+  }),
+  sequence: new Lane<CheckResult>('sequence', {
+    publish: (sequence) => set({ sequence }),
+    read: () => get().sequence,
+    revision: () => get().analysisRevision,
+    accept: narrow(['sweep', 'sequence']),
+  }),
+  power: new Lane<PowerSizingResult>('power', {
+    publish: (power) => set({ power }),
+    read: () => get().power,
+    revision: () => get().analysisRevision,
+    accept: narrow(['power']),
+  }),
+};
+
+export type LaneName = keyof typeof lanes;
+
+let session: LiveSession | null = null;
 
 function message(error: unknown): string {
   return error instanceof Error ? `${error.name}: ${error.message}` : String(error);
@@ -117,35 +136,9 @@ function solveLive(vector: InputVector, fresh = false): void {
   }
 }
 
-/** What a live solve depends on, and what a sweep depends on; unchanged keys keep their results. */
-function liveKey(design: Design): string {
-  return JSON.stringify([design.netlist, design.technology]);
-}
-
-function sweepKey(design: Design): string {
-  return JSON.stringify([design.netlist, design.technology, design.expectations]);
-}
-
-let lastLiveKey = '';
-let lastSweepKey = '';
-let lastSequenceKey = '';
-let sweepTimer: ReturnType<typeof setTimeout> | null = null;
-
-/** Waits for edits to pause (a drag changes the revision every frame) before starting a sweep. */
-export const SWEEP_DEBOUNCE_MS = 120;
-
-function scheduleSweep(design: Design): void {
-  if (sweepTimer !== null) clearTimeout(sweepTimer);
-  sweepTimer = null;
-  if (jobSize({ kind: 'sweep', revision: 0, design }) > AUTO_SWEEP_VECTORS) {
-    set({ sweep: { ...IDLE_JOB, revision: get().analysisRevision } });
-    return;
-  }
-  sweepTimer = setTimeout(() => {
-    sweepTimer = null;
-    void startSweep();
-  }, SWEEP_DEBOUNCE_MS);
-}
+/** What each part of the slice depends on; an unchanged key keeps its results across revisions. */
+const keys = { live: '', analysis: '', sequence: '', power: '' };
+let autoTimer: ReturnType<typeof setTimeout> | null = null;
 
 function rebuildSession(design: Design): void {
   try {
@@ -154,7 +147,31 @@ function rebuildSession(design: Design): void {
     session = null;
     set({ live: null, liveError: message(error) });
   }
+  set({ selectedRow: null, selectedStep: null });
   solveLive(completeVector(design.netlist.inputs, get().vector));
+}
+
+function currentSteps(): readonly InputVector[] {
+  const { design, sequenceIndex } = get();
+  return design?.sequences[sequenceIndex]?.steps ?? [];
+}
+
+/** Starts the small jobs by themselves once edits pause; big ones wait for the designer's click. */
+function scheduleAutoRun(runSweep: boolean, runPower: boolean): void {
+  if (autoTimer !== null) clearTimeout(autoTimer);
+  autoTimer = setTimeout(() => {
+    autoTimer = null;
+    const design = get().design;
+    const small = design !== null && jobSize({ kind: 'sweep', revision: 0, design }) <= AUTO_SWEEP_VECTORS;
+    if (runSweep && small) void startSweep();
+    if (runPower && small) void startPower();
+  }, SWEEP_DEBOUNCE_MS);
+}
+
+function changed(key: keyof typeof keys, value: string): boolean {
+  if (keys[key] === value) return false;
+  keys[key] = value;
+  return true;
 }
 
 /**
@@ -162,26 +179,20 @@ function rebuildSession(design: Design): void {
  * technology, expected functions) starts a new analysis revision; moving a part does not.
  */
 export function analyseDesign(design: Design, revision: number): void {
-  const live = liveKey(design);
-  const sweep = sweepKey(design);
-  const analysisChanged = sweep !== lastSweepKey;
+  const liveKey = JSON.stringify([design.netlist, design.technology]);
+  const analysisKey = JSON.stringify([liveKey, design.expectations]);
+  const analysisChanged = changed('analysis', analysisKey);
   set({ design, revision, ...(analysisChanged ? { analysisRevision: revision } : {}) });
-  if (live !== lastLiveKey) {
-    lastLiveKey = live;
-    set({ selectedRow: null, selectedStep: null });
-    rebuildSession(design);
+  if (changed('live', liveKey)) rebuildSession(design);
+  if (analysisChanged) lanes.sweep.forget();
+  // A sequence result is for the steps it ran: an edited step or netlist makes it stale.
+  if (changed('sequence', JSON.stringify([analysisKey, design.sequences]))) {
+    lanes.sequence.forget();
+    set({ selectedStep: null });
   }
-  if (analysisChanged) {
-    lastSweepKey = sweep;
-    scheduleSweep(design);
-  }
-  const sequence = JSON.stringify([sweep, design.sequences]);
-  if (sequence !== lastSequenceKey) {
-    // A sequence result is for the steps it ran: an edited step or netlist makes it stale.
-    lastSequenceKey = sequence;
-    currentJob.sequence = null;
-    set({ sequence: IDLE_JOB, selectedStep: null });
-  }
+  const powerChanged = changed('power', JSON.stringify([liveKey, design.sequences, get().powerSettings]));
+  if (powerChanged) lanes.power.forget();
+  if (analysisChanged || powerChanged) scheduleAutoRun(analysisChanged, powerChanged);
 }
 
 export function setVector(vector: InputVector): void {
@@ -202,8 +213,7 @@ export function stepVector(step: 1 | -1): void {
 
 /** A table row click: the sheet shows that vector solved from an unknown state, as the sweep did. */
 export function selectRow(index: number): void {
-  const rows = get().sweep.result?.report.vectors;
-  const row = rows?.[index];
+  const row = get().sweep.result?.report.vectors?.[index];
   if (row === undefined) return;
   solveLive(row.inputs, true);
   set({ selectedRow: index, selectedStep: null });
@@ -218,17 +228,16 @@ export function setStripNets(stripNets: readonly string[]): void {
 }
 
 export function selectSequence(sequenceIndex: number): void {
-  currentJob.sequence = null;
-  set({ sequenceIndex, sequence: IDLE_JOB, selectedStep: null });
+  lanes.sequence.forget();
+  set({ sequenceIndex, selectedStep: null });
 }
 
 /** Shows a sequence step on the sheet: the steps up to it are replayed so stored charge is exact. */
 export function pickStep(step: number, steps: readonly InputVector[]): void {
   const design = get().design;
   if (session === null || design === null || step >= steps.length) return;
-  const upTo = heldSteps(design.netlist.inputs, steps.slice(0, step + 1));
   try {
-    const result = session.replay(upTo);
+    const result = session.replay(heldSteps(design.netlist.inputs, steps.slice(0, step + 1)));
     if (result !== null)
       set({ vector: result.inputs, live: solvedView(session.compiled, result), liveError: null });
   } catch (error) {
@@ -237,61 +246,45 @@ export function pickStep(step: number, steps: readonly InputVector[]): void {
   set({ selectedStep: step, selectedRow: null });
 }
 
-function stillCurrent(key: JobKey, token: object, revision: number): boolean {
-  return currentJob[key] === token && get().analysisRevision === revision;
-}
-
-async function runJob(key: JobKey, job: AnalysisJob): Promise<void> {
-  const token = {};
-  currentJob[key] = token;
-  const total = jobSize(job);
-  const running: JobState = {
-    ...IDLE_JOB,
-    status: 'running',
-    revision: job.revision,
-    long: total > PROGRESS_THRESHOLD_VECTORS,
-    progress: { done: 0, total },
-  };
-  set({ [key]: running });
-  const onProgress = (progress: JobProgress): void => {
-    if (stillCurrent(key, token, job.revision)) set({ [key]: { ...get()[key], progress } });
-  };
-  try {
-    const result = await jobRunner(key).run(job, onProgress);
-    if (!stillCurrent(key, token, job.revision)) return; // a newer job or edit owns the panel now
-    set({ [key]: { ...running, status: 'done', result, progress: { done: total, total } } });
-  } catch (error) {
-    if (!stillCurrent(key, token, job.revision)) return;
-    const status: JobStatus = error instanceof JobCancelled ? 'cancelled' : 'failed';
-    set({ [key]: { ...get()[key], status, error: status === 'failed' ? message(error) : null } });
-  }
-}
-
 export function startSweep(undrivenInputs = false): Promise<void> {
-  const { design, analysisRevision } = get();
-  if (design === null) return Promise.resolve();
-  return runJob('sweep', { kind: 'sweep', revision: analysisRevision, design, undrivenInputs });
+  const { design, analysisRevision: revision } = get();
+  return design === null
+    ? Promise.resolve()
+    : lanes.sweep.run({ kind: 'sweep', revision, design, undrivenInputs });
 }
 
 export function runSequence(steps: readonly InputVector[]): Promise<void> {
-  const { design, analysisRevision } = get();
-  if (design === null) return Promise.resolve();
-  return runJob('sequence', { kind: 'sequence', revision: analysisRevision, design, steps });
+  const { design, analysisRevision: revision } = get();
+  return design === null
+    ? Promise.resolve()
+    : lanes.sequence.run({ kind: 'sequence', revision, design, steps });
 }
 
-/** Cancels whatever the worker is doing; the job's panel shows it as cancelled. */
-export function cancelJob(key: JobKey): void {
-  jobRunner(key).cancel();
+export function startPower(): Promise<void> {
+  const { design, analysisRevision: revision, powerSettings: settings } = get();
+  if (design === null) return Promise.resolve();
+  return lanes.power.run({ kind: 'power', revision, design, settings, steps: currentSteps() });
+}
+
+/** New power settings: the figures are recomputed at once. */
+export function setPowerSettings(powerSettings: PowerSettings): void {
+  set({ powerSettings });
+  const design = get().design;
+  if (design !== null) analyseDesign(design, get().revision);
+}
+
+/** Cancels what a lane's worker is doing; the lane shows it as cancelled. */
+export function cancelJob(lane: LaneName): void {
+  lanes[lane].cancel();
 }
 
 /** Back to a blank slice (tests, or a newly opened design). */
 export function resetSimulation(): void {
   session = null;
-  lastLiveKey = '';
-  lastSweepKey = '';
-  lastSequenceKey = '';
-  if (sweepTimer !== null) clearTimeout(sweepTimer);
-  sweepTimer = null;
+  Object.assign(keys, { live: '', analysis: '', sequence: '', power: '' });
+  if (autoTimer !== null) clearTimeout(autoTimer);
+  autoTimer = null;
+  for (const lane of Object.values(lanes)) lane.forget();
   simulationStore.setState(initialState(), true);
 }
 

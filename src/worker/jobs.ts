@@ -7,7 +7,18 @@ import type { Design } from '../core/model/design.ts';
 import { heldSteps } from '../core/view/sequenceEdit.ts';
 import { expressionProblem } from '../core/view/expectation.ts';
 import { sequenceLevels } from '../core/view/sequenceLevels.ts';
-import type { AnalysisJob, JobProgress, JobResult, SequenceJob, SweepJob } from './protocol.ts';
+import { powerReport } from '../core/power/powerReport.ts';
+import { sizingReport } from '../core/sizing/sizingReport.ts';
+import type {
+  AnalysisJob,
+  CheckResult,
+  JobProgress,
+  JobResult,
+  PowerJob,
+  PowerSizingResult,
+  SequenceJob,
+  SweepJob,
+} from './protocol.ts';
 
 /** With Z as a third value, 3^10 = 59,049 vectors: about the two-valued limit of 2^16. */
 export const MAX_INPUTS_WITH_UNDRIVEN = 10;
@@ -46,7 +57,7 @@ function throttled(onProgress: (p: JobProgress) => void): (done: number, total: 
   };
 }
 
-function sweep(job: SweepJob, onProgress: (p: JobProgress) => void): Pick<JobResult, 'report'> {
+function sweep(job: SweepJob, onProgress: (p: JobProgress) => void): Pick<CheckResult, 'report'> {
   const { expectations, notes } = usableExpectations(job.design);
   const undriven = job.undrivenInputs === true;
   const report = checkSweep(job.design.netlist, {
@@ -62,7 +73,7 @@ function sweep(job: SweepJob, onProgress: (p: JobProgress) => void): Pick<JobRes
 function sequence(
   job: SequenceJob,
   onProgress: (p: JobProgress) => void,
-): Pick<JobResult, 'report' | 'stepLevels'> {
+): Pick<CheckResult, 'report' | 'stepLevels'> {
   const { netlist, technology } = job.design;
   const { expectations, notes } = usableExpectations(job.design);
   const steps = heldSteps(netlist.inputs, job.steps);
@@ -77,8 +88,36 @@ function sequence(
   };
 }
 
+function attempt<T>(errors: string[], what: string, compute: () => T): T | null {
+  try {
+    return compute();
+  } catch (error) {
+    errors.push(`${what}: ${error instanceof Error ? error.message : String(error)}`);
+    return null;
+  }
+}
+
+function powerSizing(job: PowerJob): Pick<PowerSizingResult, 'power' | 'sizing' | 'errors'> {
+  const { netlist, technology } = job.design;
+  const { freq, load, activity } = job.settings;
+  const errors: string[] = [];
+  const sequenceSteps = activity === 'sequence' ? { sequence: heldSteps(netlist.inputs, job.steps) } : {};
+  const power = attempt(errors, 'power', () =>
+    powerReport(netlist, technology, { freq, load, activity, ...sequenceSteps }),
+  );
+  const sizing = attempt(errors, 'sizing', () => sizingReport(netlist, technology, { load }));
+  return { power, sizing, errors };
+}
+
 export function runJob(job: AnalysisJob, onProgress: (p: JobProgress) => void = () => {}): JobResult {
   const started = performance.now();
-  const outcome = job.kind === 'sweep' ? sweep(job, onProgress) : sequence(job, onProgress);
-  return { kind: job.kind, revision: job.revision, ...outcome, elapsedMs: performance.now() - started };
+  const elapsed = (): number => performance.now() - started;
+  switch (job.kind) {
+    case 'sweep':
+      return { kind: 'sweep', revision: job.revision, ...sweep(job, onProgress), elapsedMs: elapsed() };
+    case 'sequence':
+      return { kind: 'sequence', revision: job.revision, ...sequence(job, onProgress), elapsedMs: elapsed() };
+    case 'power':
+      return { kind: 'power', revision: job.revision, ...powerSizing(job), elapsedMs: elapsed() };
+  }
 }

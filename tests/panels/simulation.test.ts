@@ -98,6 +98,7 @@ describe('sweep jobs and revisions', () => {
     analyseDesign(design(nand2MissingPullUp), 1);
     expect(state().sweep.status).toBe('idle');
     await settle();
+    expect(state().power.status).toBe('done');
     expect(state().sweep.status).toBe('done');
     expect(state().sweep.result?.report.vectors?.[2].outputs.Y).toBe('Z');
   });

@@ -3,7 +3,8 @@ import { SweepLimitError } from '../../src/core/analysis/check.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import { levelAt, levelStrips } from '../../src/core/view/levelStrip.ts';
 import { vectorRows } from '../../src/core/view/vectorTable.ts';
-import { runJob, usableExpectations } from '../../src/worker/jobs.ts';
+import { runJob as runAnyJob, usableExpectations } from '../../src/worker/jobs.ts';
+import type { CheckResult, SequenceJob, SweepJob } from '../../src/worker/protocol.ts';
 import { heldSteps } from '../../src/core/view/sequenceEdit.ts';
 import { jobSize } from '../../src/worker/protocol.ts';
 import {
@@ -14,6 +15,13 @@ import {
   nandLatch,
   resistorLoadInverter,
 } from './circuits.ts';
+
+/** The check jobs under test always answer with a check result. */
+function runJob(job: SweepJob | SequenceJob, onProgress?: Parameters<typeof runAnyJob>[1]): CheckResult {
+  const result = runAnyJob(job, onProgress);
+  if (result.kind === 'power') throw new Error('expected a check result');
+  return result;
+}
 
 describe('sweep job', () => {
   // Resistor-load inverter with A = 1: the NMOS acts as its on-resistance Rn·L/W = 13 kΩ · 0.25 = 3.25 kΩ
@@ -95,5 +103,37 @@ describe('sequence job', () => {
     expect([0, 1, 2, 3].map((s) => levelAt(q, s))).toEqual(['1', '1', '0', '0']);
     expect([0, 1, 2, 3].map((s) => levelAt(qn, s))).toEqual(['0', '0', '1', '1']);
     expect(q.runs).toHaveLength(2);
+  });
+});
+
+describe('power job', () => {
+  // Resistor-load inverter: the mean static power over A = 0 (no current) and A = 1 (2.5 V · 57.8 µA)
+  // is half of 145 µW (Ohm's law with RCN's Rn, table 3.3, from memory; vectors equally likely).
+  it('returns power and sizing figures, each on its own', () => {
+    const result = runAnyJob({
+      kind: 'power',
+      revision: 4,
+      design: design(resistorLoadInverter),
+      settings: { freq: 100e6, load: 10e-15, activity: 'random' },
+      steps: [],
+    });
+    if (result.kind !== 'power') throw new Error('expected a power result');
+    expect(result.revision).toBe(4);
+    const dc = 2.5 ** 2 / (RESISTOR_LOAD_OHMS + DEFAULT_TECHNOLOGY.rn * 0.25);
+    expect(result.power?.vectors.map((v) => v.dcWatts)[1]).toBeCloseTo(dc, 8);
+    expect(result.sizing).not.toBeNull();
+  });
+
+  it('reports a refused setting as an error, not a crash', () => {
+    const result = runAnyJob({
+      kind: 'power',
+      revision: 1,
+      design: design(nand2),
+      settings: { freq: -1, load: 0, activity: 'random' },
+      steps: [],
+    });
+    if (result.kind !== 'power') throw new Error('expected a power result');
+    expect(result.power).toBeNull();
+    expect(result.errors[0]).toContain('power');
   });
 });
