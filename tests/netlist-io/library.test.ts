@@ -13,12 +13,19 @@ describe('library import', () => {
   it('checks every top-level subcircuit as a cell and isolates the broken one with its line', () => {
     const lib = importSpice(readFileSync(FIXTURE, 'utf8'), FIXTURE);
     expect(lib.isLibrary).toBe(true);
-    expect(lib.cells.map((c) => c.name)).toEqual(['buoy_inv', 'buoy_nor2', 'buoy_nand2_wrong_expect', 'buoy_fill']);
+    expect(lib.cells.map((c) => c.name)).toEqual([
+      'buoy_inv',
+      'buoy_nor2',
+      'buoy_nand2_wrong_expect',
+      'buoy_fill',
+    ]);
     expect(lib.failed).toHaveLength(1);
     const broken = lib.failed[0];
     expect(broken?.name).toBe('buoy_bandgap_stub');
     expect(broken?.error.line).toBe(9);
-    expect(broken?.error.message).toMatch(/^tests\/cli\/fixtures\/buoy-lib-with-broken-cell\.sp:9: Q1: bipolar/);
+    expect(broken?.error.message).toMatch(
+      /^tests\/cli\/fixtures\/buoy-lib-with-broken-cell\.sp:9: Q1: bipolar/,
+    );
   });
 
   it('reports a cell with no pins (a filler) as a cell with no inputs or outputs', () => {

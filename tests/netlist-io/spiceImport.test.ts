@@ -107,7 +107,9 @@ C2 Y GND 3p
 C3 Y GND 4n
 C4 Y GND 10pF
 .ends`);
-    const values = n.devices.flatMap((d) => (d.kind === 'resistor' ? [d.ohms] : d.kind === 'capacitor' ? [d.farads] : []));
+    const values = n.devices.flatMap((d) =>
+      d.kind === 'resistor' ? [d.ohms] : d.kind === 'capacitor' ? [d.farads] : [],
+    );
     expect(values).toEqual([10e3, 1e6, 1e9, 5e-3, 2e-15, 3e-12, 4e-9, 10e-12]);
   });
 });
@@ -136,10 +138,13 @@ M6 Y A VDD VDD pfet_hv W=1u L=0.25u
   });
 
   it('folds m= into the width (parallel devices) and notes ignored instance parameters', () => {
-    const result = importSpice(`.subckt s A Y VDD GND
+    const result = importSpice(
+      `.subckt s A Y VDD GND
 M1 Y A GND GND nch W=1u L=0.25u m=3 ad=1p as=1p pd=4u
 M2 Y A VDD VDD pch W=2u L=0.25u
-.ends`, FILE);
+.ends`,
+      FILE,
+    );
     const cell = result.cells[0];
     expect(mos(cell?.netlist as Netlist, 'M1').w).toBe(3);
     expect(cell?.notes.join('\n')).toMatch(/ignored: ad, as, pd/);
@@ -161,12 +166,15 @@ CL Y GND 15f
   });
 
   it('keeps D lines as protection diodes and says so', () => {
-    const result = importSpice(`.subckt s A Y VDD GND
+    const result = importSpice(
+      `.subckt s A Y VDD GND
 DP A VDD esd
 DN GND A esd
 M1 Y A GND GND nch W=1u L=0.25u
 M2 Y A VDD VDD pch W=2u L=0.25u
-.ends`, FILE);
+.ends`,
+      FILE,
+    );
     const cell = result.cells[0];
     expect(cell?.netlist.devices).toContainEqual({ kind: 'diode', name: 'DP', anode: 'A', cathode: 'VDD' });
     expect(cell?.notes.join('\n')).toMatch(/protection diodes.*DP, DN/);
@@ -204,14 +212,17 @@ X3 A Y VDD GND mid
   });
 
   it('keeps rail names and .global nets global inside subcircuits', () => {
-    const n = only(`.global vpwr!
+    const n = only(
+      `.global vpwr!
 .subckt leaf A Y
 M1 Y A gnd gnd nch W=1u L=0.25u
 M2 Y A vpwr! vpwr! pch W=1u L=0.25u
 .ends
 .subckt top A Y
 X1 A Y leaf
-.ends`, { supplyNames: ['vpwr'] });
+.ends`,
+      { supplyNames: ['vpwr'] },
+    );
     expect(mos(n, 'X1/M2').source).toBe('vpwr!');
     expect(n.rails).toEqual([
       { net: 'gnd', role: 'ground' },
@@ -236,10 +247,13 @@ M1 Y A 0 0 nch W=1u L=0.25u
   });
 
   it('adds rail names from the options', () => {
-    const n = only(`.subckt s A Y VPWR VGND
+    const n = only(
+      `.subckt s A Y VPWR VGND
 M1 Y A VGND VGND nch W=1u L=0.25u
 M2 Y A VPWR VPWR pch W=1u L=0.25u
-.ends`, { supplyNames: ['vpwr'], groundNames: ['VGND'] });
+.ends`,
+      { supplyNames: ['vpwr'], groundNames: ['VGND'] },
+    );
     expect(n.rails.map((r) => `${r.net}:${r.role}`)).toEqual(['VPWR:supply', 'VGND:ground']);
     expect(n.outputs).toEqual(['Y']);
   });
@@ -259,15 +273,19 @@ M2 Y A VIO VIO pch W=1u L=0.25u
   });
 
   it('applies top-level V lines of a library to every cell', () => {
-    const result = importSpice(`V1 vpwr 0 1.8
+    const result = importSpice(
+      `V1 vpwr 0 1.8
 .subckt a A Y vpwr 0
 M1 Y A 0 0 nch W=1u L=0.25u
 .ends
 .subckt b A Y vpwr 0
 M1 Y A vpwr vpwr pch W=1u L=0.25u
-.ends`, FILE);
+.ends`,
+      FILE,
+    );
     expect(result.isLibrary).toBe(true);
-    for (const cell of result.cells) expect(cell.netlist.rails[0]).toEqual({ net: 'vpwr', role: 'supply', volts: 1.8 });
+    for (const cell of result.cells)
+      expect(cell.netlist.rails[0]).toEqual({ net: 'vpwr', role: 'supply', volts: 1.8 });
   });
 });
 
@@ -296,9 +314,12 @@ MP D ENB Y VDD pch W=1u L=0.25u
   });
 
   it('guesses the outputs of a flat netlist as the nets that reach no gate, with a note', () => {
-    const result = importSpice(`MP Y A vdd vdd pch W=2u L=0.25u
+    const result = importSpice(
+      `MP Y A vdd vdd pch W=2u L=0.25u
 MN Y A 0 0 nch W=1u L=0.25u
-`, 'lamp.sp');
+`,
+      'lamp.sp',
+    );
     const cell = result.cells[0];
     expect(cell?.name).toBe('lamp');
     expect(cell?.netlist).toMatchObject({ inputs: ['A'], outputs: ['Y'] });
@@ -313,17 +334,52 @@ MN Y A 0 0 nch W=1u L=0.25u
 
 describe('errors name the file and the line', () => {
   const cases: readonly [string, string, number, RegExp][] = [
-    ['unsupported element', `.subckt s A Y VDD GND\nM1 Y A GND GND nch W=1u L=0.25u\nQ1 Y A GND npn\n.ends`, 3, /bipolar/],
+    [
+      'unsupported element',
+      `.subckt s A Y VDD GND\nM1 Y A GND GND nch W=1u L=0.25u\nQ1 Y A GND npn\n.ends`,
+      3,
+      /bipolar/,
+    ],
     ['MOS type unknown', `.subckt s A Y VDD GND\nM1 Y A GND GND core W=1u L=0.25u\n.ends`, 2, /nmos or pmos/],
-    ['model of another type', `.model core d\n.subckt s A Y VDD GND\nM1 Y A GND GND core\n.ends`, 3, /d model \(line 1\)/],
+    [
+      'model of another type',
+      `.model core d\n.subckt s A Y VDD GND\nM1 Y A GND GND core\n.ends`,
+      3,
+      /d model \(line 1\)/,
+    ],
     ['MOS line too short', `.subckt s A Y VDD GND\n\nM1 Y A nch\n.ends`, 3, /drain, gate, source/],
     ['width without unit', `.subckt s A Y VDD GND\nM1 Y A GND GND nch W=1 L=0.25u\n.ends`, 2, /write 1u/],
     ['bad resistor value', `.subckt s A Y VDD GND\nR1 A Y ten\n.ends`, 2, /positive resistance/],
-    ['parameter expression', `.subckt s A Y VDD GND\nM1 Y A GND GND nch W={2*wn} L=0.25u\n.ends`, 2, /expressions/],
-    ['time-varying source', `* stimulus\nV1 A 0 PULSE(0 2.5 0 1n 1n 5n 10n)\nM1 Y A 0 0 nch W=1u L=0.25u`, 2, /time-varying/],
-    ['source between two nets', `.subckt s A Y VDD GND\nV1 A Y 1\nM1 Y A GND GND nch W=1u L=0.25u\n.ends`, 2, /to ground/],
-    ['undefined subcircuit', `.subckt s A Y VDD GND\n\nX1 A Y VDD GND nowhere\n.ends`, 3, /nowhere is not defined/],
-    ['port count', `${INVERTER}.subckt s A Y VDD GND\nX1 A Y VDD inv\n.ends`, 7, /3 nets given, subcircuit inv has 4/],
+    [
+      'parameter expression',
+      `.subckt s A Y VDD GND\nM1 Y A GND GND nch W={2*wn} L=0.25u\n.ends`,
+      2,
+      /expressions/,
+    ],
+    [
+      'time-varying source',
+      `* stimulus\nV1 A 0 PULSE(0 2.5 0 1n 1n 5n 10n)\nM1 Y A 0 0 nch W=1u L=0.25u`,
+      2,
+      /time-varying/,
+    ],
+    [
+      'source between two nets',
+      `.subckt s A Y VDD GND\nV1 A Y 1\nM1 Y A GND GND nch W=1u L=0.25u\n.ends`,
+      2,
+      /to ground/,
+    ],
+    [
+      'undefined subcircuit',
+      `.subckt s A Y VDD GND\n\nX1 A Y VDD GND nowhere\n.ends`,
+      3,
+      /nowhere is not defined/,
+    ],
+    [
+      'port count',
+      `${INVERTER}.subckt s A Y VDD GND\nX1 A Y VDD inv\n.ends`,
+      7,
+      /3 nets given, subcircuit inv has 4/,
+    ],
     ['missing .ends', `* cell\n.subckt s A Y VDD GND\nM1 Y A GND GND nch W=1u L=0.25u\n`, 2, /has no .ends/],
     ['stray .ends', `M1 Y A 0 0 nch W=1u L=0.25u\n.ends`, 2, /without a .subckt/],
     ['nested .subckt', `.subckt s A Y VDD GND\n.subckt t A Y\n.ends\n.ends`, 2, /inside .subckt s/],
@@ -331,8 +387,18 @@ describe('errors name the file and the line', () => {
     ['.include', `.include models.lib\n${INVERTER}`, 1, /not supported/],
     ['unknown command', `${INVERTER}.frobnicate`, 6, /not a command/],
     ['continuation first', `+ W=1u\n${INVERTER}`, 1, /continuation/],
-    ['recursion', `.subckt s A Y VDD GND\nX1 A Y VDD GND s\n.ends\n.subckt top A Y VDD GND\nX1 A Y VDD GND s\n.ends`, 2, /instantiates itself/],
-    ['unknown pin in directive', `${INVERTER.replace('.ends', '* railwise: inputs Q\n.ends')}`, 5, /no net "Q"/],
+    [
+      'recursion',
+      `.subckt s A Y VDD GND\nX1 A Y VDD GND s\n.ends\n.subckt top A Y VDD GND\nX1 A Y VDD GND s\n.ends`,
+      2,
+      /instantiates itself/,
+    ],
+    [
+      'unknown pin in directive',
+      `${INVERTER.replace('.ends', '* railwise: inputs Q\n.ends')}`,
+      5,
+      /no net "Q"/,
+    ],
   ];
 
   it.each(cases)('%s', (_what, text, line, message) => {

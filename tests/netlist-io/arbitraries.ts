@@ -1,0 +1,58 @@
+/** fast-check generators of netlists whose names SPICE can carry (no white space, distinct ignoring case). */
+import fc from 'fast-check';
+import type { Device, Netlist, Rail } from '../../src/core/model/netlist.ts';
+
+const SIGNALS = ['A', 'B', 'C', 'EN', 'Y', 'Q', 'QB', 'n1', 'n2', 'mid', 'X1/n3', 'bit_7'];
+const RAIL_CHOICES: readonly Rail[] = [
+  { net: 'VDD', role: 'supply' },
+  { net: 'GND', role: 'ground' },
+  { net: 'VPWR', role: 'supply', volts: 1.8 },
+  { net: 'VGND', role: 'ground' },
+  { net: 'vcc!', role: 'supply' },
+];
+
+const width = fc.double({ min: 0.05, max: 500, noNaN: true, noDefaultInfinity: true });
+const ohms = fc.double({ min: 1, max: 1e9, noNaN: true, noDefaultInfinity: true });
+const farads = fc.double({ min: 1e-18, max: 1e-9, noNaN: true, noDefaultInfinity: true });
+
+function deviceArb(nets: readonly string[], index: number): fc.Arbitrary<Device> {
+  const net = fc.constantFrom(...nets);
+  const mos = fc.record({
+    kind: fc.constantFrom('nmos' as const, 'pmos' as const),
+    gate: net,
+    drain: net,
+    source: net,
+    bulk: net,
+    w: width,
+    l: width,
+  });
+  return fc.oneof(
+    mos.map((m) => ({ ...m, name: `M${index}` })),
+    fc.record({ a: net, b: net, ohms }).map((r) => ({ kind: 'resistor' as const, name: `R${index}`, ...r })),
+    fc
+      .record({ a: net, b: net, farads })
+      .map((c) => ({ kind: 'capacitor' as const, name: `C${index}`, ...c })),
+    fc.record({ anode: net, cathode: net }).map((d) => ({ kind: 'diode' as const, name: `D${index}`, ...d })),
+  );
+}
+
+export const netlistArb: fc.Arbitrary<Netlist> = fc
+  .record({
+    rails: fc
+      .subarray(RAIL_CHOICES.slice(2), { minLength: 0 })
+      .map((extra) => [RAIL_CHOICES[0], RAIL_CHOICES[1], ...extra] as Rail[]),
+    pins: fc.shuffledSubarray(SIGNALS, { minLength: 0, maxLength: 6 }),
+    split: fc.nat(6),
+    deviceCount: fc.integer({ min: 0, max: 12 }),
+  })
+  .chain(({ rails, pins, split, deviceCount }) => {
+    const nets = [...rails.map((r) => r.net), ...SIGNALS];
+    const devices = fc.tuple(...Array.from({ length: deviceCount }, (_, i) => deviceArb(nets, i + 1)));
+    return devices.map((ds) => ({
+      name: 'cell_under_test',
+      devices: ds,
+      rails,
+      inputs: pins.slice(0, split),
+      outputs: pins.slice(split),
+    }));
+  });
