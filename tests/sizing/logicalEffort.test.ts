@@ -1,4 +1,5 @@
 import { describe, expect, it } from 'vitest';
+import { circuit } from '../../src/core/model/builder.ts';
 import { sizingReport } from '../../src/core/sizing/sizingReport.ts';
 import { aoi21, inverter, nand, nor, scaled, UNIT_R, UNIT_RC_TECH } from './cells.ts';
 
@@ -53,6 +54,28 @@ describe('logical effort from the drawn network', () => {
     near(report.logicalEffort.B, 2);
     near(report.logicalEffort.C, 5 / 3);
     near(report.parasiticDelay, 7 / 3);
+  });
+});
+
+describe('rising and falling efforts', () => {
+  it('a book-sized NAND2 has the same effort both ways: 4/3', () => {
+    // Weste & Harris, 4th ed., table 4.2: a gate sized for equal rise and fall has g_u = g_d = g.
+    const out = sizingReport(nand(2), UNIT_RC_TECH).outputs[0];
+    near(out.logicalEffortRise.A, 4 / 3);
+    near(out.logicalEffortFall.A, 4 / 3);
+  });
+
+  it('pseudo-NMOS NOR3 (NMOS 4/3, PMOS load 2/3): g_up 4/3, g_down 4/9, average 8/9', () => {
+    // Weste & Harris, 4th ed., solutions to exercise 9.18: the pull-down keeps the current left after
+    // the always-on load (4/3 − 1/3 of a unit NMOS); the load alone pulls up.
+    let b = circuit('pseudo nor3').rails().input('A', 'B', 'C').output('Y');
+    b = b.pmos('PL', { g: 'GND', d: 'Y', s: 'VDD', w: 2 / 3, l: 1 });
+    for (const x of ['A', 'B', 'C']) b = b.nmos(`N${x}`, { g: x, d: 'Y', s: 'GND', w: 4 / 3, l: 1 });
+    const out = sizingReport(b.build(), UNIT_RC_TECH).outputs[0];
+    near(out.logicalEffortRise.A, 4 / 3);
+    near(out.logicalEffortFall.A, 4 / 9);
+    near(((out.logicalEffortRise.B as number) + (out.logicalEffortFall.B as number)) / 2, 8 / 9);
+    expect(out.notes.join(' ')).toMatch(/ratioed/);
   });
 });
 

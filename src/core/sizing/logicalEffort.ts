@@ -52,3 +52,47 @@ export function logicalEffort(
 export function parasiticDelay(outputDiffusion: number, inverter: EquivalentInverter): number | null {
   return inverter.cdiff > 0 ? outputDiffusion / inverter.cdiff : null;
 }
+
+/** Resistances that set the rising and falling efforts of one output, ohms. */
+export interface EdgeDrive {
+  readonly up: number;
+  readonly down: number;
+  /** An always-on pull-up (a ratioed load) that the pull-down must overcome; null if none. */
+  readonly fightUp: number | null;
+  /** An always-on pull-down that the pull-up must overcome; null if none. */
+  readonly fightDown: number | null;
+}
+
+export interface EdgeEfforts {
+  readonly rise: Record<string, number | null>;
+  readonly fall: Record<string, number | null>;
+}
+
+/**
+ * Logical effort of each transition against the technology's own inverter (PMOS γ = Rp/Rn times
+ * the NMOS): the rising effort compares Cin with the inverter giving the same pull-up current, the
+ * falling one with the inverter giving the same pull-down current, and a ratioed stage's current is
+ * what is left after the always-on load takes its share — the method of Weste & Harris, 4th ed.,
+ * §9.2 for skewed and pseudo-NMOS gates.
+ */
+export function edgeEfforts(
+  cin: Readonly<Record<string, number>>,
+  tech: Technology,
+  l: number,
+  drive: EdgeDrive,
+): EdgeEfforts {
+  const gamma = tech.rp / tech.rn;
+  const net = (own: number, fight: number | null): number => 1 / own - (fight === null ? 0 : 1 / fight);
+  const wp = tech.rp * l * net(drive.up, drive.fightDown);
+  const wn = tech.rn * l * net(drive.down, drive.fightUp);
+  const cinvRise = tech.cgPerArea * l * wp * (1 + 1 / gamma);
+  const cinvFall = tech.cgPerArea * l * wn * (1 + gamma);
+  const ratio = (c: number, cinv: number): number | null => (c > 0 && cinv > 0 ? c / cinv : null);
+  const rise: Record<string, number | null> = {};
+  const fall: Record<string, number | null> = {};
+  for (const [input, c] of Object.entries(cin)) {
+    rise[input] = ratio(c, cinvRise);
+    fall[input] = ratio(c, cinvFall);
+  }
+  return { rise, fall };
+}

@@ -2,6 +2,7 @@ import type { CapacitanceBreakdown } from '../compile/capacitance.ts';
 import type { Netlist } from '../model/netlist.ts';
 import type { Technology } from '../model/technology.ts';
 import {
+  edgeEfforts,
   equivalentInverter,
   inputCapacitance,
   logicalEffort,
@@ -11,7 +12,7 @@ import {
 import { delayCapacitances, totalCapacitance } from './nodeCapacitance.ts';
 import { extractStage, type Stage } from './stage.ts';
 import type { OutputSizing, SizingOptions, SizingReport } from './types.ts';
-import { ControlLimitError, worstCase, type WorstCase } from './worstCase.ts';
+import { alwaysOnOhms, ControlLimitError, worstCase, type WorstCase } from './worstCase.ts';
 
 export { proposeWidths } from './proposeWidths.ts';
 
@@ -68,29 +69,81 @@ function sizeOutput(
   const stage = extractStage(netlist, tech, output);
   const c = stageCaps(stage, caps, load);
   const [up, down] = searchBoth(stage, c, notes);
-  if (stage.nets.some((_, i) => stage.roles[i] === 'both')) {
+  if (stage.roles.includes('both')) {
     notes.push(
       `${output} is reached through pass transistors from an input pin; the pin's own driver is not included.`,
     );
   }
-  const cin = inputCapacitance(netlist, tech);
-  const l = referenceLength(netlist);
-  const inverter =
-    up && down && l !== null ? equivalentInverter(tech, l, up.drive.ohms, down.drive.ohms) : null;
-  if (inverter === null) notes.push(`${output} lacks a pull-up or a pull-down: no equivalent inverter.`);
   return {
     output,
     pullUp: up?.drive ?? null,
     pullDown: down?.drive ?? null,
-    equivalentInverter: inverter,
-    inputCapacitance: cin,
-    logicalEffort: inverter ? logicalEffort(cin, inverter) : nullPerInput(cin),
-    parasiticDelay: inverter ? parasiticDelay(caps.get(output)?.diffusion ?? 0, inverter) : null,
+    ...efforts(netlist, tech, {
+      stage,
+      caps: c,
+      up,
+      down,
+      notes,
+      outputDiffusion: caps.get(output)?.diffusion ?? 0,
+    }),
     outputCapacitance: c[stage.output],
     rise: up?.delay ?? null,
     fall: down?.delay ?? null,
     notes,
   };
+}
+
+interface SearchedStage {
+  readonly stage: Stage;
+  readonly caps: Float64Array;
+  readonly up: WorstCase | null;
+  readonly down: WorstCase | null;
+  readonly notes: string[];
+  /** Diffusion capacitance on the output, farads: the numerator of the parasitic delay. */
+  readonly outputDiffusion: number;
+}
+
+/** The equivalent inverter and every effort figure; nulls when the output lacks a network. */
+function efforts(netlist: Netlist, tech: Technology, s: SearchedStage) {
+  const cin = inputCapacitance(netlist, tech);
+  const l = referenceLength(netlist);
+  const output = s.stage.nets[s.stage.output];
+  if (s.up === null || s.down === null || l === null) {
+    s.notes.push(`${output} lacks a pull-up or a pull-down: no equivalent inverter.`);
+    const none = nullPerInput(cin);
+    return {
+      equivalentInverter: null,
+      inputCapacitance: cin,
+      logicalEffort: none,
+      logicalEffortRise: none,
+      logicalEffortFall: none,
+      parasiticDelay: null,
+    };
+  }
+  const inverter = equivalentInverter(tech, l, s.up.drive.ohms, s.down.drive.ohms);
+  const loads = ratioedLoads(s.stage, s.caps, s.notes);
+  const edges = edgeEfforts(cin, tech, l, { up: s.up.drive.ohms, down: s.down.drive.ohms, ...loads });
+  return {
+    equivalentInverter: inverter,
+    inputCapacitance: cin,
+    logicalEffort: logicalEffort(cin, inverter),
+    logicalEffortRise: edges.rise,
+    logicalEffortFall: edges.fall,
+    parasiticDelay: parasiticDelay(s.outputDiffusion, inverter),
+  };
+}
+
+/** Always-on loads of each direction (ratioed stages), noted when present. */
+function ratioedLoads(stage: Stage, caps: Float64Array, notes: string[]) {
+  const fightUp = alwaysOnOhms(stage, 'up', caps);
+  const fightDown = alwaysOnOhms(stage, 'down', caps);
+  if (fightUp !== null || fightDown !== null) {
+    notes.push(
+      `${stage.nets[stage.output]} is ratioed: an always-on load fights the opposite network. Its rising and ` +
+        'falling efforts count only the current left over; the Elmore estimates ignore the fight.',
+    );
+  }
+  return { fightUp, fightDown };
 }
 
 function searchBoth(stage: Stage, caps: Float64Array, notes: string[]): [WorstCase | null, WorstCase | null] {

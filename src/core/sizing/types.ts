@@ -50,6 +50,12 @@ export interface OutputSizing {
   readonly inputCapacitance: Readonly<Record<string, number>>;
   /** g = Cin / Cinv per input; null for an input that drives no gate (a pass input). */
   readonly logicalEffort: Readonly<Record<string, number | null>>;
+  /**
+   * Effort of the rising and of the falling transition against the technology's own inverter
+   * (null where an input drives no gate or the network cannot overcome a ratioed load).
+   */
+  readonly logicalEffortRise: Readonly<Record<string, number | null>>;
+  readonly logicalEffortFall: Readonly<Record<string, number | null>>;
   /** Output diffusion capacitance over the equivalent inverter's, in units of p_inv. */
   readonly parasiticDelay: number | null;
   /** Capacitance on the output (diffusion, gates, capacitors and the load), farads. */

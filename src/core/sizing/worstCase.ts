@@ -54,3 +54,12 @@ export function worstCase(stage: Stage, direction: Direction, caps: Float64Array
     delay: { seconds: byDelay.e.elmore, path: byDelay.e.path, controls: controlValues(stage, byDelay.code) },
   };
 }
+
+/**
+ * Resistance of the elements that always conduct (resistors, transistors with a gate on the rail
+ * that turns them on) between the output and one direction's sources: a ratioed load. Null if none.
+ */
+export function alwaysOnOhms(stage: Stage, direction: Direction, caps: Float64Array): number | null {
+  const on = stage.elements.map((e) => e.control < 0);
+  return evaluate(stage, on, direction, caps)?.ohms ?? null;
+}
