@@ -7,10 +7,9 @@ import { clearSelection, setOverlay, store } from '../state/store.ts';
 import { commandForKey } from './commands.ts';
 
 function isTyping(target: EventTarget | null): boolean {
-  return (
-    target instanceof HTMLElement &&
-    (target.isContentEditable || ['INPUT', 'TEXTAREA', 'SELECT'].includes(target.tagName))
-  );
+  // Guarded so the headless tests (no DOM) can feed key events too.
+  if (typeof HTMLElement === 'undefined' || !(target instanceof HTMLElement)) return false;
+  return target.isContentEditable || ['INPUT', 'TEXTAREA', 'SELECT'].includes(target.tagName);
 }
 
 export function handleKey(e: KeyboardEvent, controller: EditorController): void {

@@ -1,0 +1,62 @@
+import { describe, expect, it } from 'vitest';
+import { deriveDesign, documentFromDesign } from '../../src/state/document.ts';
+import { parseDesignFile, serializeDesign } from '../../src/core/format/designFile.ts';
+import { STARTERS } from '../../src/core/starters/index.ts';
+import { resetStore, selectDevices, selectNets, store } from '../../src/state/store.ts';
+import { AUTOSAVE_KEY, RESCUE_KEY, restoreAutosave } from '../../src/app/autosave.ts';
+
+/** A Storage in memory, as the browser's would behave. */
+function memoryStorage(): Storage {
+  const data = new Map<string, string>();
+  return {
+    get length() {
+      return data.size;
+    },
+    clear: () => data.clear(),
+    getItem: (k) => data.get(k) ?? null,
+    key: (i) => [...data.keys()][i] ?? null,
+    removeItem: (k) => void data.delete(k),
+    setItem: (k, v) => void data.set(k, String(v)),
+  };
+}
+
+describe('the document and its derived design', () => {
+  const nand2 = STARTERS.find((s) => s.id === 'nand2')!.design;
+
+  it('places a netlist-only design and derives the same netlist back', () => {
+    const doc = documentFromDesign(nand2);
+    expect(doc.sheet.parts.length).toBeGreaterThan(4);
+    expect(deriveDesign(doc).design.netlist).toEqual(nand2.netlist);
+  });
+
+  it('survives saving to a design file and reading it back, drawing included', () => {
+    const { design } = deriveDesign(documentFromDesign(nand2));
+    const again = parseDesignFile(serializeDesign(design), 'nand2.railwise.json');
+    expect(again.sheet).toEqual(design.sheet);
+    expect(deriveDesign(documentFromDesign(again)).design.netlist).toEqual(design.netlist);
+  });
+
+  it('restores an autosaved design, and keeps an unreadable one aside with a reason', () => {
+    const storage = memoryStorage();
+    expect(restoreAutosave(storage)).toEqual({ design: null, problem: null });
+    const { design } = deriveDesign(documentFromDesign(nand2));
+    storage.setItem(AUTOSAVE_KEY, serializeDesign(design));
+    expect(restoreAutosave(storage).design?.sheet).toEqual(design.sheet);
+    storage.setItem(AUTOSAVE_KEY, '{"format": "railwise-design", "version": 1, "name": 3');
+    const bad = restoreAutosave(storage);
+    expect(bad.design).toBeNull();
+    expect(bad.problem).toMatch(/autosave/);
+    expect(storage.getItem(RESCUE_KEY)).toContain('"name": 3');
+  });
+
+  it('selects devices and nets by name for the panels', () => {
+    resetStore(documentFromDesign(nand2));
+    const { geometry } = store.getState();
+    selectDevices(['NA']);
+    expect(store.getState().selection.selected.parts).toEqual([geometry.deviceParts['NA']]);
+    selectNets(['Y']);
+    const wires = store.getState().selection.selected.wires;
+    expect(wires.length).toBeGreaterThan(0);
+    expect(wires.every((w) => geometry.wireNets[w] === 'Y')).toBe(true);
+  });
+});
