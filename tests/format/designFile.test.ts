@@ -1,0 +1,227 @@
+/**
+ * Design file format v1: serialize → parse is the identity, old versions migrate, and every bad
+ * file gets an error naming the file and the field (or the line of a JSON syntax error).
+ */
+import { readFileSync } from 'node:fs';
+import fc from 'fast-check';
+import { describe, expect, it } from 'vitest';
+import {
+  CURRENT_DESIGN_VERSION,
+  DesignFileError,
+  parseDesignFile,
+  serializeDesign,
+} from '../../src/core/format/designFile.ts';
+import { MIGRATIONS } from '../../src/core/format/migrations.ts';
+import type { Design } from '../../src/core/model/design.ts';
+import { circuit } from '../../src/core/model/builder.ts';
+import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
+import type { SheetPart } from '../../src/core/sheet/types.ts';
+import { netlistArb } from '../netlist-io/arbitraries.ts';
+
+const inverter = circuit('inv')
+  .rails()
+  .input('A')
+  .output('Y')
+  .pmos('P1', { g: 'A', d: 'Y', s: 'VDD', w: 2 })
+  .nmos('N1', { g: 'A', d: 'Y', s: 'GND' })
+  .build();
+
+const design: Design = {
+  name: 'Lamp inverter',
+  technology: DEFAULT_TECHNOLOGY,
+  netlist: inverter,
+  expectations: { Y: '!A' },
+  sequences: [{ name: 'toggle', steps: [{ A: '0' }, { A: '1' }] }],
+};
+
+function errorOf(text: string): DesignFileError {
+  try {
+    parseDesignFile(text, 'lamp.railwise.json');
+  } catch (e) {
+    if (e instanceof DesignFileError) return e;
+    throw e;
+  }
+  throw new Error('expected a DesignFileError');
+}
+
+/** The saved JSON, loosely typed so a test can break one field. */
+interface Doc {
+  [key: string]: unknown;
+  netlist: { devices: Record<string, unknown>[]; rails: Record<string, unknown>[] };
+  sequences: { steps: Record<string, unknown>[] }[];
+}
+
+function edited(edit: (doc: Doc) => void): string {
+  const doc = JSON.parse(serializeDesign(design)) as Doc;
+  edit(doc);
+  return JSON.stringify(doc, null, 2);
+}
+
+const partArb: fc.Arbitrary<SheetPart> = fc.record({
+  id: fc.uuid(),
+  kind: fc.constantFrom('nmos', 'pmos', 'resistor', 'capacitor', 'vdd', 'gnd', 'input', 'output', 'label'),
+  name: fc.string(),
+  x: fc.integer({ min: -500, max: 500 }),
+  y: fc.integer({ min: -500, max: 500 }),
+  rotation: fc.constantFrom(0, 1, 2, 3),
+  mirror: fc.boolean(),
+});
+
+const designArb: fc.Arbitrary<Design> = fc.record(
+  {
+    name: fc.string(),
+    technology: fc.constant(DEFAULT_TECHNOLOGY),
+    netlist: netlistArb,
+    expectations: fc.dictionary(fc.string({ minLength: 1 }), fc.string()),
+    sequences: fc.array(
+      fc.record({
+        name: fc.string(),
+        steps: fc.array(fc.dictionary(fc.string({ minLength: 1 }), fc.constantFrom('0', '1', 'X', 'Z'))),
+      }),
+    ),
+    sheet: fc.record({
+      parts: fc.array(partArb, { maxLength: 5 }),
+      wires: fc.array(
+        fc.record({ id: fc.uuid(), points: fc.array(fc.record({ x: fc.integer(), y: fc.integer() })) }),
+        { maxLength: 3 },
+      ),
+    }),
+    notes: fc.string(),
+  },
+  { requiredKeys: ['name', 'technology', 'netlist', 'expectations', 'sequences'] },
+);
+
+describe('design file round trip', () => {
+  it('parse(serialize(design)) is the design', () => {
+    fc.assert(
+      fc.property(designArb, (d) => {
+        expect(parseDesignFile(serializeDesign(d), 'd.json')).toEqual(d);
+      }),
+      { numRuns: 200 },
+    );
+  });
+
+  it('writes the format tag and version first, with two-space indentation', () => {
+    const text = serializeDesign(design);
+    expect(
+      text.startsWith(
+        `{\n  "format": "railwise-design",\n  "version": ${CURRENT_DESIGN_VERSION},\n  "name": "Lamp inverter",`,
+      ),
+    ).toBe(true);
+    expect(text.endsWith('}\n')).toBe(true);
+  });
+
+  it('does not change the design it writes', () => {
+    const before = JSON.stringify(design);
+    serializeDesign(design);
+    expect(JSON.stringify(design)).toBe(before);
+  });
+
+  it('reads the example design files', () => {
+    for (const f of [
+      'public/examples/beacon-sr-latch.railwise.json',
+      'public/examples/lamp-inverter.railwise.json',
+    ]) {
+      expect(parseDesignFile(readFileSync(f, 'utf8'), f).netlist.devices.length).toBeGreaterThan(0);
+    }
+  });
+});
+
+describe('lenient reading of hand-written files', () => {
+  it('fills a missing technology, expectations and sequences with the defaults', () => {
+    const text = JSON.stringify({ format: 'railwise-design', version: 1, name: 'x', netlist: inverter });
+    expect(parseDesignFile(text, 'x.json')).toEqual({
+      name: 'x',
+      technology: DEFAULT_TECHNOLOGY,
+      netlist: inverter,
+      expectations: {},
+      sequences: [],
+    });
+  });
+
+  it('fills single missing technology fields and accepts 0 and 1 as numbers in steps', () => {
+    const text = edited((doc) => {
+      doc['technology'] = { vdd: 1.8 };
+      doc['sequences'] = [{ name: 's', steps: [{ A: 0 }, { A: 1 }] }];
+    });
+    const d = parseDesignFile(text, 'x.json');
+    expect(d.technology).toEqual({ ...DEFAULT_TECHNOLOGY, vdd: 1.8 });
+    expect(d.sequences[0]?.steps).toEqual([{ A: '0' }, { A: '1' }]);
+  });
+});
+
+describe('migrations', () => {
+  it('numbers each migration by the version it starts from', () => {
+    MIGRATIONS.forEach((m, i) => expect(m.from).toBe(i));
+    expect(CURRENT_DESIGN_VERSION).toBe(MIGRATIONS.length);
+  });
+
+  it('reads a bare netlist (version 0) as a netlist-only design', () => {
+    const d = parseDesignFile(JSON.stringify(inverter), 'inv.json');
+    expect(d).toEqual({
+      name: 'inv',
+      technology: DEFAULT_TECHNOLOGY,
+      netlist: inverter,
+      expectations: {},
+      sequences: [],
+    });
+  });
+
+  it('names fields of a bare netlist as that file spells them', () => {
+    const bad = { ...inverter, devices: [inverter.devices[0], { ...inverter.devices[1], l: 0 }] };
+    const e = errorOf(JSON.stringify(bad));
+    expect(e.field).toBe('devices[1].l');
+    expect(e.message).toMatch(/in N1/);
+  });
+});
+
+describe('errors name the file and the field', () => {
+  it('a JSON syntax error gives the line', () => {
+    const text = serializeDesign(design).replace('"w": 2,', '"w": 2');
+    const e = errorOf(text);
+    const line = text.split('\n').findIndex((l) => l.includes('"w": 2')) + 2;
+    expect(e.line).toBe(line);
+    expect(e.message.startsWith(`lamp.railwise.json:${line}: not valid JSON`)).toBe(true);
+  });
+
+  it.each([
+    ['a negative width', (doc: Doc) => (doc.netlist.devices[0].w = -1), 'netlist.devices[0].w', /P1/],
+    [
+      'an unknown device kind',
+      (doc: Doc) => (doc.netlist.devices[1].kind = 'bjt'),
+      'netlist.devices[1].kind',
+      /./,
+    ],
+    ['a bad step value', (doc: Doc) => (doc.sequences[0].steps[1].A = '2'), 'sequences[0].steps[1].A', /./],
+    ['a rail role', (doc: Doc) => (doc.netlist.rails[0].role = 'power'), 'netlist.rails[0].role', /./],
+    [
+      'a sheet rotation',
+      (doc: Doc) =>
+        (doc.sheet = {
+          parts: [{ id: 'p', kind: 'nmos', name: 'N1', x: 0, y: 0, rotation: 5, mirror: false }],
+          wires: [],
+        }),
+      'sheet.parts[0].rotation',
+      /N1/,
+    ],
+    [
+      'an empty net name',
+      (doc: Doc) => (doc.netlist.devices[0].gate = ''),
+      'netlist.devices[0].gate',
+      /empty/,
+    ],
+  ])('%s', (_what, edit, field, detail) => {
+    const e = errorOf(edited(edit));
+    expect(e.field).toBe(field);
+    expect(e.message).toMatch(
+      new RegExp(`^lamp\\.railwise\\.json: field ${field.replace(/[[\].]/g, '\\$&')}: `),
+    );
+    expect(e.message).toMatch(detail);
+  });
+
+  it('a file of another kind, a newer version, and a non-object', () => {
+    expect(errorOf('{"devices": 3, "format": "other"}').field).toBe('format');
+    expect(errorOf(edited((doc) => (doc['version'] = 99))).message).toMatch(/newer Railwise \(version 99\)/);
+    expect(errorOf('[1, 2]').message).toMatch(/one JSON object/);
+  });
+});
