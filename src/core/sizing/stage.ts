@@ -91,7 +91,8 @@ function reach(output: string, all: readonly Channel[], roles: ReadonlyMap<strin
 
 export function extractStage(netlist: Netlist, tech: Technology, output: string): Stage {
   const roles = sourceRoles(netlist);
-  const members = reach(output, channels(netlist, tech), roles);
+  // Sorted by name so ties between equal paths resolve the same way whatever the device order.
+  const members = reach(output, channels(netlist, tech), roles).sort((x, y) => compareNames(x.name, y.name));
   const nets = [output];
   const local = new Map<string, number>([[output, 0]]);
   const at = (n: string): number => {
@@ -101,18 +102,19 @@ export function extractStage(netlist: Netlist, tech: Technology, output: string)
     }
     return local.get(n) as number;
   };
-  const controls: string[] = [];
-  const elements = members.map((ch): StageElement => {
+  const isControl = (ch: Channel): boolean => {
     const constant = ch.gate === null ? undefined : roles.get(ch.gate);
-    const isControl = ch.gate !== null && constant !== 'up' && constant !== 'down';
-    if (isControl && !controls.includes(ch.gate as string)) controls.push(ch.gate as string);
+    return ch.gate !== null && constant !== 'up' && constant !== 'down';
+  };
+  const controls = [...new Set(members.filter(isControl).map((ch) => ch.gate as string))].sort(compareNames);
+  const elements = members.map((ch): StageElement => {
     return {
       name: ch.name,
       kind: ch.kind,
       a: at(ch.a),
       b: at(ch.b),
       ohms: ch.ohms,
-      control: isControl ? controls.indexOf(ch.gate as string) : -1,
+      control: isControl(ch) ? controls.indexOf(ch.gate as string) : -1,
       onWhenHigh: ch.kind !== 'pmos',
     };
   });
@@ -125,4 +127,8 @@ function conductsConstantly(ch: Channel, roles: ReadonlyMap<string, SourceRole>)
   if (ch.gate === null) return true;
   const level = roles.get(ch.gate);
   return ch.kind === 'nmos' ? level === 'up' : level === 'down';
+}
+
+function compareNames(x: string, y: string): number {
+  return x < y ? -1 : x > y ? 1 : 0;
 }
