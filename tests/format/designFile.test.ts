@@ -48,7 +48,7 @@ function errorOf(text: string): DesignFileError {
 interface Doc {
   [key: string]: unknown;
   netlist: { devices: Record<string, unknown>[]; rails: Record<string, unknown>[] };
-  sequences: { steps: Record<string, unknown>[] }[];
+  sequences: { name?: string; steps: Record<string, unknown>[] }[];
 }
 
 function edited(edit: (doc: Doc) => void): string {
@@ -67,16 +67,19 @@ const partArb: fc.Arbitrary<SheetPart> = fc.record({
   mirror: fc.boolean(),
 });
 
+/** Record keys as a user might type them; `__proto__` is dropped by zod's record (a guard against prototype pollution). */
+const keyArb = fc.string({ minLength: 1 }).filter((k) => k !== '__proto__');
+
 const designArb: fc.Arbitrary<Design> = fc.record(
   {
     name: fc.string(),
     technology: fc.constant(DEFAULT_TECHNOLOGY),
     netlist: netlistArb,
-    expectations: fc.dictionary(fc.string({ minLength: 1 }), fc.string()),
+    expectations: fc.dictionary(keyArb, fc.string()),
     sequences: fc.array(
       fc.record({
         name: fc.string(),
-        steps: fc.array(fc.dictionary(fc.string({ minLength: 1 }), fc.constantFrom('0', '1', 'X', 'Z'))),
+        steps: fc.array(fc.dictionary(keyArb, fc.constantFrom('0', '1', 'X', 'Z'))),
       }),
     ),
     sheet: fc.record({
