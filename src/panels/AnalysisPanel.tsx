@@ -39,9 +39,6 @@ export function AnalysisPanel() {
   useVectorKeys();
   return (
     <aside className="rw-analysis" aria-label="Analysis" data-testid="analysis-panel">
-      <p className="rw-caution">
-        Switch-level estimates, not sign-off: confirm with circuit simulation and the foundry&apos;s rules.
-      </p>
       <VectorSection />
       <TableSection />
       <ExpectationSection />

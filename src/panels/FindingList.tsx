@@ -12,7 +12,9 @@ interface FindingListProps {
 /** Errors carry a filled diamond, warnings a hollow triangle: the severity reads without colour. */
 const SEVERITY_GLYPH = { error: '◆', warning: '△' } as const;
 
+/** Path and figures, unless the message already spells out the path. */
 function detail(finding: Finding): string | null {
+  if (finding.path !== null && finding.message.includes(chainText(finding.path))) return null;
   const parts: string[] = [];
   if (finding.path !== null) parts.push(chainText(finding.path));
   if (finding.current !== undefined) parts.push(formatCurrent(finding.current));
@@ -40,7 +42,7 @@ export function FindingList({ findings, onPick, empty, testId }: FindingListProp
                 {SEVERITY_GLYPH[f.severity]}
               </span>
               <span className="rw-kind">{f.rule ?? f.kind}</span>
-              <span className="rw-message">{f.message}</span>
+              <span className="rw-finding-text">{f.message}</span>
               {more !== null && <span className="rw-detail">{more}</span>}
             </button>
           </li>

@@ -1,14 +1,15 @@
 import { useState } from 'react';
 import type { InputVector } from '../core/model/design.ts';
-import { cycledValue } from '../core/view/vectorControl.ts';
 import {
   StepTextError,
   formatSteps,
+  heldSteps,
   insertStep,
   moveStep,
+  nextCellValue,
   parseSteps,
   removeStep,
-  setStepValue,
+  setStepCell,
 } from '../core/view/sequenceEdit.ts';
 
 interface StepEditorProps {
@@ -19,7 +20,15 @@ interface StepEditorProps {
   readonly onPickStep: (step: number) => void;
 }
 
-function StepRow({ index, step, props }: { index: number; step: InputVector; props: StepEditorProps }) {
+interface StepRowProps {
+  readonly index: number;
+  readonly step: InputVector;
+  /** The values in force at this step, held ones included. */
+  readonly held: InputVector;
+  readonly props: StepEditorProps;
+}
+
+function StepRow({ index, step, held, props }: StepRowProps) {
   const { inputs, steps, onChange, selectedStep, onPickStep } = props;
   return (
     <tr className={index === selectedStep ? 'rw-selected' : undefined} data-testid={`step-${index}`}>
@@ -37,12 +46,12 @@ function StepRow({ index, step, props }: { index: number; step: InputVector; pro
         <td key={name}>
           <button
             type="button"
-            className={`rw-bit rw-bit-${step[name] ?? '0'}`}
+            className={`rw-bit rw-bit-${held[name] ?? 'X'}${step[name] === undefined ? ' rw-held' : ''}`}
             data-testid={`step-${index}-${name}`}
-            title="Click to cycle 0 → 1 → Z → X"
-            onClick={() => onChange(setStepValue(steps, index, name, cycledValue(step[name])))}
+            title={`${step[name] === undefined ? 'held from the step before' : 'set here'}; click to cycle held → 0 → 1 → Z → X`}
+            onClick={() => onChange(setStepCell(steps, index, name, nextCellValue(step[name])))}
           >
-            {step[name] ?? '0'}
+            {held[name] ?? 'X'}
           </button>
         </td>
       ))}
@@ -109,10 +118,13 @@ function StepText({ inputs, steps, onChange }: Pick<StepEditorProps, 'inputs' | 
   );
 }
 
-/** A list of steps as a grid of input values; steps can also be typed as `A=0 B=1; A=1`. */
+/**
+ * A list of steps as a grid of input values. A step sets only what it changes; faded cells show the
+ * value held from the step before. Steps can also be typed as `A=0 B=1; A=1`.
+ */
 export function StepEditor(props: StepEditorProps) {
   const { inputs, steps, onChange } = props;
-  const blank: InputVector = Object.fromEntries(inputs.map((n) => [n, '0']));
+  const held = heldSteps(inputs, steps);
   return (
     <div>
       <table className="rw-steps">
@@ -129,14 +141,14 @@ export function StepEditor(props: StepEditorProps) {
         </thead>
         <tbody>
           {steps.map((step, i) => (
-            <StepRow key={i} index={i} step={step} props={props} />
+            <StepRow key={i} index={i} step={step} held={held[i] ?? {}} props={props} />
           ))}
         </tbody>
       </table>
       <button
         type="button"
         data-testid="step-add"
-        onClick={() => onChange(insertStep(steps, steps.length, steps[steps.length - 1] ?? blank))}
+        onClick={() => onChange(insertStep(steps, steps.length, {}))}
       >
         + Add step
       </button>

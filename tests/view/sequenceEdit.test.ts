@@ -1,9 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import {
   StepTextError,
+  heldSteps,
   formatSteps,
   insertStep,
   moveStep,
+  nextCellValue,
+  setStepCell,
   parseSteps,
   removeStep,
   setStepValue,
@@ -12,17 +15,20 @@ import {
 const D_LATCH = ['D', 'CLK'];
 
 describe('step text', () => {
-  it('parses steps and carries unchanged inputs forward', () => {
-    expect(parseSteps('D=1 CLK=1; CLK=0; D=0', D_LATCH)).toEqual([
+  it('parses only what each step changes; held values follow the sequence rule', () => {
+    const steps = parseSteps('D=1 CLK=1; CLK=0; D=0', D_LATCH);
+    expect(steps).toEqual([{ D: '1', CLK: '1' }, { CLK: '0' }, { D: '0' }]);
+    expect(heldSteps(D_LATCH, steps)).toEqual([
       { D: '1', CLK: '1' },
       { D: '1', CLK: '0' },
       { D: '0', CLK: '0' },
     ]);
+    expect(heldSteps(D_LATCH, [{ CLK: '0' }])).toEqual([{ D: 'X', CLK: '0' }]);
   });
 
   it('round-trips through its text form', () => {
-    const steps = parseSteps('D=1 CLK=1; D=0 CLK=0; D=z CLK=x', D_LATCH);
-    expect(formatSteps(steps, D_LATCH)).toBe('D=1 CLK=1; D=0 CLK=0; D=Z CLK=X');
+    const steps = parseSteps('D=1 CLK=1; CLK=0; D=z CLK=x', D_LATCH);
+    expect(formatSteps(steps, D_LATCH)).toBe('D=1 CLK=1; CLK=0; D=Z CLK=X');
     expect(parseSteps(formatSteps(steps, D_LATCH), D_LATCH)).toEqual(steps);
   });
 
@@ -52,5 +58,12 @@ describe('step edits', () => {
     expect(moveStep(steps, 0, 1).map((s) => s.D)).toEqual(['1', '0', 'Z']);
     expect(moveStep(steps, 2, 5).map((s) => s.D)).toEqual(['0', '1', 'Z']);
     expect(steps.map((s) => s.D)).toEqual(['0', '1', 'Z']);
+  });
+
+  it('cycles a cell through held and the four values', () => {
+    const order = [undefined, '0', '1', 'Z', 'X'] as const;
+    expect(order.map(nextCellValue)).toEqual(['0', '1', 'Z', 'X', undefined]);
+    expect(setStepCell([{ D: '1', CLK: '0' }], 0, 'D', undefined)).toEqual([{ CLK: '0' }]);
+    expect(setStepCell([{ CLK: '0' }], 0, 'D', 'Z')).toEqual([{ CLK: '0', D: 'Z' }]);
   });
 });

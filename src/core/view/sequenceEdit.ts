@@ -32,6 +32,26 @@ export function setStepValue(
   return steps.map((s, i) => (i === at ? { ...s, [input]: value } : s));
 }
 
+/** Sets (or, with undefined, clears so it is held from the step before) one input of one step. */
+export function setStepCell(
+  steps: readonly InputVector[],
+  at: number,
+  input: string,
+  value: InputValue | undefined,
+): InputVector[] {
+  if (value !== undefined) return setStepValue(steps, at, input, value);
+  return steps.map((s, i) =>
+    i === at ? Object.fromEntries(Object.entries(s).filter(([n]) => n !== input)) : s,
+  );
+}
+
+/** A step-editor cell cycles held → 0 → 1 → Z → X → held. */
+const CELL_CYCLE: readonly (InputValue | undefined)[] = [undefined, '0', '1', 'Z', 'X'];
+
+export function nextCellValue(value: InputValue | undefined): InputValue | undefined {
+  return CELL_CYCLE[(CELL_CYCLE.indexOf(value) + 1) % CELL_CYCLE.length];
+}
+
 /** Moves step `from` by `offset` places, clamped to the list. */
 export function moveStep(steps: readonly InputVector[], from: number, offset: number): InputVector[] {
   const to = Math.max(0, Math.min(steps.length - 1, from + offset));
@@ -52,26 +72,35 @@ function parseAssignment(token: string, offset: number, inputs: ReadonlySet<stri
   return [name, value as InputValue];
 }
 
-/** Parses the text form; an input a step leaves out keeps its value from the step before (0 at first). */
+/**
+ * Parses the text form. A step lists only what it changes, as the design stores it; an input a step
+ * leaves out keeps its value from the step before (X before its first mention, see heldSteps).
+ */
 export function parseSteps(text: string, inputs: readonly string[]): InputVector[] {
   const known = new Set(inputs);
   const steps: InputVector[] = [];
-  let previous: InputVector = Object.fromEntries(inputs.map((n) => [n, '0']));
   for (const match of text.matchAll(/[^;]+/g)) {
     if (match[0].trim() === '') continue;
-    const step: Record<string, InputValue> = { ...previous };
+    const step: Record<string, InputValue> = {};
     for (const token of match[0].matchAll(/\S+/g)) {
       const [name, value] = parseAssignment(token[0], (match.index ?? 0) + (token.index ?? 0), known);
       step[name] = value;
     }
     steps.push(step);
-    previous = step;
   }
   return steps;
 }
 
+/** The text form of steps: each step's own assignments, in input order. */
 export function formatSteps(steps: readonly InputVector[], inputs: readonly string[]): string {
-  return steps.map((s) => inputs.map((n) => `${n}=${s[n] ?? '0'}`).join(' ')).join('; ');
+  return steps
+    .map((s) =>
+      inputs
+        .filter((n) => s[n] !== undefined)
+        .map((n) => `${n}=${s[n]}`)
+        .join(' '),
+    )
+    .join('; ');
 }
 
 /**

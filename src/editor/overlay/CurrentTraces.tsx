@@ -24,6 +24,22 @@ function arrowsAlong(line: readonly Point[]): number[][] {
   return arrows;
 }
 
+const LABEL_FONT = 0.6;
+
+/** The middle of the longest segment: the calmest place to write the current. */
+function labelAnchor(route: readonly (readonly Point[])[]): Point | null {
+  let best: { at: Point; length: number } | null = null;
+  for (const line of route) {
+    for (let i = 0; i + 1 < line.length; i++) {
+      const [a, b] = [line[i], line[i + 1]];
+      const length = Math.hypot(b.x - a.x, b.y - a.y);
+      if (best === null || length > best.length)
+        best = { at: { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 }, length };
+    }
+  }
+  return best?.at ?? null;
+}
+
 interface CurrentTraceProps {
   /** Polylines in flow order, source to sink. */
   readonly route: readonly (readonly Point[])[];
@@ -33,8 +49,10 @@ interface CurrentTraceProps {
 /** One static current path: a soft wide glow, a bright core, flow arrows, and the current written beside it. */
 export function CurrentTrace({ route, current }: CurrentTraceProps) {
   const flat = (line: readonly Point[]) => line.flatMap((p) => [p.x, p.y]);
-  const firstLeg = route.find((l) => l.length >= 2) ?? route[0];
-  const labelAt = firstLeg === undefined ? null : firstLeg[Math.floor((firstLeg.length - 1) / 2)];
+  const labelAt = labelAnchor(route);
+  const text = `⇣ ${formatCurrent(current)}`;
+  // Written to the left of the trace: device names and values sit to its right.
+  const width = text.length * LABEL_FONT * 0.62 + 0.3;
   return (
     <Group listening={false}>
       {route.map((line, i) => (
@@ -42,8 +60,8 @@ export function CurrentTrace({ route, current }: CurrentTraceProps) {
           key={`glow-${i}`}
           points={flat(line)}
           stroke={TRACE_COLOUR}
-          strokeWidth={0.7}
-          opacity={0.28}
+          strokeWidth={0.5}
+          opacity={0.25}
           lineCap="round"
           lineJoin="round"
           shadowColor={TRACE_COLOUR}
@@ -71,16 +89,10 @@ export function CurrentTrace({ route, current }: CurrentTraceProps) {
           strokeWidth={0.1}
         />
       ))}
-      {labelAt !== null && labelAt !== undefined && (
-        <Label x={labelAt.x + 0.5} y={labelAt.y + 0.3}>
+      {labelAt !== null && (
+        <Label x={labelAt.x - 0.6 - width} y={labelAt.y - LABEL_FONT / 2}>
           <Tag fill="#fff7f0" stroke={TRACE_COLOUR} strokeWidth={0.05} cornerRadius={0.15} />
-          <Text
-            text={`⇣ ${formatCurrent(current)}`}
-            fontSize={0.6}
-            padding={0.15}
-            fill="#8a2c06"
-            fontStyle="bold"
-          />
+          <Text text={text} fontSize={LABEL_FONT} padding={0.15} fill="#8a2c06" fontStyle="bold" />
         </Label>
       )}
     </Group>

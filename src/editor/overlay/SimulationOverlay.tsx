@@ -3,12 +3,16 @@ import { Label, Layer, Tag, Text } from 'react-konva';
 import type { SheetWire } from '../../core/sheet/types.ts';
 import { formatVolts } from '../../core/view/format.ts';
 import { traceRoute } from '../../core/view/traceRoute.ts';
-import { lookOf } from '../../core/view/visualLanguage.ts';
+import { lookOf, type NetState } from '../../core/view/visualLanguage.ts';
+import { partSpec } from '../../core/sheet/parts/index.ts';
 import { useSimulation } from '../../state/simulation.ts';
 import { useStore } from '../../state/store.ts';
 import { CurrentTrace } from './CurrentTraces.tsx';
 import { DeviceMark } from './DeviceMarks.tsx';
 import { NetMark, WireLevel } from './WireLevels.tsx';
+import { PartLevels } from './PinLevels.tsx';
+import type { SolvedView } from '../../core/view/solvedView.ts';
+import type { SheetGeometry } from '../../state/document.ts';
 
 type Hover = { net: string; x: number; y: number } | null;
 
@@ -23,6 +27,18 @@ function firstWires(
     if (net !== undefined && !first.has(net)) first.set(net, w);
   }
   return first;
+}
+
+/** Each pin's net state, by pin name, for one part. */
+function pinStatesOf(
+  partId: string,
+  pins: readonly string[],
+  geometry: SheetGeometry,
+  live: SolvedView,
+): Record<string, NetState | undefined> {
+  return Object.fromEntries(
+    pins.map((pin) => [pin, live.nets.get(geometry.pinNets[`${partId}.${pin}`] ?? '')]),
+  );
 }
 
 function HoverReadout({ hover }: { hover: NonNullable<Hover> }) {
@@ -70,6 +86,19 @@ export function SimulationOverlay() {
           <WireLevel key={w.id} wire={w} net={net} state={state} scale={scale} onHover={setHover} />
         );
       })}
+      {sheet.parts.map((p) => (
+        <PartLevels
+          key={`levels-${p.id}`}
+          part={p}
+          pinStates={pinStatesOf(
+            p.id,
+            partSpec(p.kind).pins.map((q) => q.name),
+            geometry,
+            live,
+          )}
+          scale={scale}
+        />
+      ))}
       {[...marks].map(([net, w]) => {
         const state = live.nets.get(net);
         return state === undefined ? null : <NetMark key={net} wire={w} state={state} />;
