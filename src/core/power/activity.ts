@@ -11,61 +11,72 @@ export const ACTIVITY_CONVENTION =
 export interface ActivityFigures {
   readonly activity: Float64Array;
   readonly swing: Float64Array;
-}
-
-/** 0, 1 or -1 (neither: X, or a floating net with no known charge) per net of one result. */
-function levelsOf(result: SolveResult): Int8Array {
-  const { vil, vih } = result.compiled.tech;
-  return Int8Array.from(result.volts, (v) => {
-    const level = classify(v, vil, vih);
-    return level === LEVEL_0 ? 0 : level === LEVEL_1 ? 1 : -1;
-  });
-}
-
-function swings(results: readonly SolveResult[], levels: readonly Int8Array[], nets: number): Float64Array {
-  const sum = [new Float64Array(nets), new Float64Array(nets)];
-  const count = [new Float64Array(nets), new Float64Array(nets)];
-  results.forEach((r, k) => {
-    for (let n = 0; n < nets; n++) {
-      const level = levels[k][n];
-      if (level < 0) continue;
-      sum[level][n] += r.volts[n];
-      count[level][n] += 1;
-    }
-  });
-  return Float64Array.from({ length: nets }, (_, n) =>
-    count[0][n] > 0 && count[1][n] > 0 ? sum[1][n] / count[1][n] - sum[0][n] / count[0][n] : 0,
-  );
+  /** Nets that were neither 0 nor 1 (X, or floating with no known charge) in some result. */
+  readonly indefinite: readonly number[];
 }
 
 /**
- * Activity with independent, equiprobable inputs over a full sweep: each cycle draws a fresh vector,
- * so P(0→1) = P(0)·P(1). Vectors where a net is X or floating with no known charge count as neither.
+ * Counts levels over solved vectors one at a time, so a 65,536-vector sweep never holds more than
+ * one result. A level is read from the voltage against VIL and VIH; X and unknown count as neither.
  */
-export function randomActivity(sweep: readonly SolveResult[]): ActivityFigures {
-  const nets = sweep[0]?.compiled.netCount ?? 0;
-  const levels = sweep.map(levelsOf);
-  const ones = new Float64Array(nets);
-  const zeros = new Float64Array(nets);
-  for (const l of levels) {
-    for (let n = 0; n < nets; n++) {
-      if (l[n] === 1) ones[n]++;
-      else if (l[n] === 0) zeros[n]++;
-    }
-  }
-  const total = sweep.length;
-  const activity = Float64Array.from({ length: nets }, (_, n) => (zeros[n] / total) * (ones[n] / total));
-  return { activity, swing: swings(sweep, levels, nets) };
-}
+export class ActivityCounter {
+  private readonly zeros: Float64Array;
+  private readonly ones: Float64Array;
+  private readonly rises: Float64Array;
+  private readonly lowVolts: Float64Array;
+  private readonly highVolts: Float64Array;
+  private readonly indefinite: Uint8Array;
+  private previous: Int8Array | null = null;
+  private results = 0;
 
-/** Activity counted over a sequence: 0→1 transitions between consecutive steps per step change. */
-export function sequenceActivity(steps: readonly SolveResult[]): ActivityFigures {
-  const nets = steps[0]?.compiled.netCount ?? 0;
-  const levels = steps.map(levelsOf);
-  const rises = new Float64Array(nets);
-  for (let k = 1; k < levels.length; k++) {
-    for (let n = 0; n < nets; n++) if (levels[k - 1][n] === 0 && levels[k][n] === 1) rises[n]++;
+  constructor(private readonly nets: number) {
+    [this.zeros, this.ones, this.rises, this.lowVolts, this.highVolts] = Array.from(
+      { length: 5 },
+      () => new Float64Array(nets),
+    );
+    this.indefinite = new Uint8Array(nets);
   }
-  const changes = Math.max(1, steps.length - 1);
-  return { activity: rises.map((r) => r / changes), swing: swings(steps, levels, nets) };
+
+  add(result: SolveResult): void {
+    const { vil, vih } = result.compiled.tech;
+    const levels = new Int8Array(this.nets);
+    for (let n = 0; n < this.nets; n++) {
+      const v = result.volts[n];
+      const level = classify(v, vil, vih);
+      levels[n] = level === LEVEL_0 ? 0 : level === LEVEL_1 ? 1 : -1;
+      if (levels[n] === 0) {
+        this.zeros[n]++;
+        this.lowVolts[n] += v;
+      } else if (levels[n] === 1) {
+        this.ones[n]++;
+        this.highVolts[n] += v;
+      } else this.indefinite[n] = 1;
+      if (this.previous?.[n] === 0 && levels[n] === 1) this.rises[n]++;
+    }
+    this.previous = levels;
+    this.results++;
+  }
+
+  /** Independent, equiprobable vectors, a fresh one each cycle: P(0→1) = P(0)·P(1). */
+  random(): ActivityFigures {
+    const total = Math.max(1, this.results);
+    return this.figures((n) => (this.zeros[n] / total) * (this.ones[n] / total));
+  }
+
+  /** Counted over the results in the order added: 0→1 changes per step change. */
+  sequence(): ActivityFigures {
+    const changes = Math.max(1, this.results - 1);
+    return this.figures((n) => this.rises[n] / changes);
+  }
+
+  private figures(activityOf: (net: number) => number): ActivityFigures {
+    const activity = Float64Array.from({ length: this.nets }, (_, n) => activityOf(n));
+    const swing = Float64Array.from({ length: this.nets }, (_, n) =>
+      this.zeros[n] > 0 && this.ones[n] > 0
+        ? this.highVolts[n] / this.ones[n] - this.lowVolts[n] / this.zeros[n]
+        : 0,
+    );
+    const indefinite = [...this.indefinite.keys()].filter((n) => this.indefinite[n] === 1);
+    return { activity, swing, indefinite };
+  }
 }

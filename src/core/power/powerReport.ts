@@ -3,7 +3,7 @@ import { compile, type CompiledNetlist } from '../compile/compile.ts';
 import type { Netlist } from '../model/netlist.ts';
 import type { Technology } from '../model/technology.ts';
 import { Simulator, type SolveResult } from '../solver/simulator.ts';
-import { ACTIVITY_CONVENTION, randomActivity, sequenceActivity, type ActivityFigures } from './activity.ts';
+import { ACTIVITY_CONVENTION, ActivityCounter, type ActivityFigures } from './activity.ts';
 import { switchingEnergy } from './dynamic.ts';
 import { LEAKAGE_MODEL, leakageOf } from './leakage.ts';
 import {
@@ -28,9 +28,9 @@ export function powerReport(netlist: Netlist, tech: Technology, options: PowerOp
   validate(netlist, options);
   const load = options.load ?? 0;
   const compiled = compile(netlist, tech);
-  const results = solveAll(new Simulator(compiled), netlist, options);
-  const figures = options.activity === 'random' ? randomActivity(results) : sequenceActivity(results);
-  const vectors = results.map(vectorPower);
+  const run = solveAll(new Simulator(compiled), netlist, options);
+  const figures = options.activity === 'random' ? run.counter.random() : run.counter.sequence();
+  const { vectors } = run;
   const nets = netPowers(compiled, figures, load, options.freq);
   const averageStaticWatts = vectors.reduce((s, v) => s + v.staticWatts, 0) / Math.max(1, vectors.length);
   const dynamicWatts = sum(nets.filter((n) => !n.isInput).map((n) => n.watts));
@@ -51,7 +51,7 @@ export function powerReport(netlist: Netlist, tech: Technology, options: PowerOp
     activity: Object.fromEntries(nets.map((n) => [n.net, n.activity])),
     capacitance: Object.fromEntries(nets.map((n) => [n.net, n.capacitance.total])),
     nets,
-    notes: notesFor(results, options),
+    notes: notesFor(compiled, run, figures, options),
   };
 }
 
@@ -77,14 +77,30 @@ function validate(netlist: Netlist, options: PowerOptions): void {
   }
 }
 
-function solveAll(sim: Simulator, netlist: Netlist, options: PowerOptions): SolveResult[] {
-  if (options.activity === 'random') return sweepVectors(netlist.inputs).map((v) => sim.solveFresh(v));
-  const results: SolveResult[] = [];
-  for (const step of options.sequence ?? []) {
-    const previous = results[results.length - 1];
-    results.push(previous === undefined ? sim.solveFresh(step) : sim.solveNext(step, previous));
+interface Run {
+  readonly vectors: VectorPower[];
+  readonly counter: ActivityCounter;
+  readonly unsettled: number;
+}
+
+/** Solves each vector (sweep) or step (sequence), keeping only its figures, never all results. */
+function solveAll(sim: Simulator, netlist: Netlist, options: PowerOptions): Run {
+  const run: Run = { vectors: [], counter: new ActivityCounter(sim.compiled.netCount), unsettled: 0 };
+  let unsettled = 0;
+  let previous: SolveResult | null = null;
+  const steps = options.activity === 'random' ? sweepVectors(netlist.inputs) : (options.sequence ?? []);
+  for (const step of steps) {
+    // A sweep starts every vector from an unknown state; a sequence carries stored charge onward.
+    const result: SolveResult =
+      previous === null || options.activity === 'random'
+        ? sim.solveFresh(step)
+        : sim.solveNext(step, previous);
+    run.counter.add(result);
+    run.vectors.push(vectorPower(result));
+    if (!result.settled) unsettled++;
+    previous = result;
   }
-  return results;
+  return { ...run, unsettled };
 }
 
 function vectorPower(result: SolveResult): VectorPower {
@@ -125,11 +141,30 @@ function netPowers(c: CompiledNetlist, figures: ActivityFigures, load: number, f
   });
 }
 
-function notesFor(results: readonly SolveResult[], options: PowerOptions): string[] {
-  const notes: string[] = [];
-  const unsettled = results.filter((r) => !r.settled).length;
-  if (unsettled > 0) notes.push(`${unsettled} vector(s) never settled; their nets count as neither 0 nor 1.`);
-  if (options.activity === 'sequence' && results.length < 2) {
+/** Shown with every report: what the estimate leaves out. */
+export const POWER_OMISSIONS =
+  'Not counted: short-circuit current while inputs switch, glitches, gate and junction leakage.';
+
+function notesFor(c: CompiledNetlist, run: Run, figures: ActivityFigures, options: PowerOptions): string[] {
+  const notes = [POWER_OMISSIONS];
+  if (run.unsettled > 0)
+    notes.push(`${run.unsettled} vector(s) never settled; their nets count as neither 0 nor 1.`);
+  // Outputs and nets feeding gates only: an internal stack node left floating is expected.
+  const outputs = new Set(c.outputNets);
+  const unclear = figures.indefinite
+    .filter((n) => outputs.has(n) || c.netGates.start[n + 1] > c.netGates.start[n])
+    .map((n) => c.netNames[n]);
+  if (unclear.length > 0) {
+    const shown = unclear.slice(0, 8).join(', ') + (unclear.length > 8 ? ', …' : '');
+    notes.push(
+      `Some nets are X or hold unknown charge in some ${options.activity === 'random' ? 'vectors' : 'steps'} ` +
+        `(${shown}); only definite levels count toward their activity.` +
+        (options.activity === 'random'
+          ? ' For a cell with stored state, a sequence gives truer activity.'
+          : ''),
+    );
+  }
+  if (options.activity === 'sequence' && run.vectors.length < 2) {
     notes.push('A one-step sequence has no transitions: activity is zero.');
   }
   return notes;
