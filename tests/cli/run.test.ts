@@ -1,0 +1,200 @@
+/**
+ * The railwise command, called in-process through `run` (fast): argument handling, exit statuses
+ * 0 / 1 / 2 of SPEC §6, the JSON shape, and the exports. bin.test.ts runs the real executable.
+ */
+import { describe, expect, it } from 'vitest';
+import { run } from '../../src/cli/main.ts';
+import { colourWanted, formatSi } from '../../src/cli/colour.ts';
+
+const LIB = 'public/examples/tidewater-cells.sp';
+const BROKEN_LIB = 'tests/cli/fixtures/buoy-lib-with-broken-cell.sp';
+const DIVIDER = 'tests/cli/fixtures/divider.sp';
+
+async function railwise(...argv: string[]): Promise<{ status: number; out: string; err: string }> {
+  let out = '';
+  let err = '';
+  const status = await run(argv, {
+    out: (t) => (out += `${t}\n`),
+    err: (t) => (err += `${t}\n`),
+    colour: false,
+  });
+  return { status, out, err };
+}
+
+async function json(...argv: string[]): Promise<{ status: number; body: Record<string, unknown> }> {
+  const r = await railwise(...argv, '--json');
+  return { status: r.status, body: JSON.parse(r.out) as Record<string, unknown> };
+}
+
+describe('arguments', () => {
+  it('prints help with exit status 0', async () => {
+    for (const argv of [[], ['--help'], ['help', 'check'], ['check', '--help'], ['export', '-h']]) {
+      const r = await railwise(...argv);
+      expect(r.status).toBe(0);
+      expect(r.out).toMatch(/railwise/);
+    }
+  });
+
+  it.each([
+    [['frobnicate'], /unknown command "frobnicate"/],
+    [['check'], /at least one FILE/],
+    [['check', LIB, '--colour'], /--colour/],
+    [['check', LIB, '--expect', 'Y is !A'], /--expect "Y is !A": write OUTPUT = EXPRESSION/],
+    [['check', LIB, '--vdd', 'high'], /--vdd "high" is not a positive number/],
+    [['check', LIB, '--freq', '1meg'], /go with --power/],
+    [['check', LIB, '--power', '--activity', 'bursty'], /--activity must be sequence or random/],
+    [['check', LIB, '--jobs', '0'], /--jobs "0"/],
+    [['check', LIB, '--inputs', 'A'], /apply to one cell: add --cell NAME/],
+    [['check', LIB, '--cell', 'tw_xor'], /--cell tw_xor: no such cell .*tw_inv, tw_nand2/],
+    [['export', LIB, '--to', 'gds'], /--to must be spice, verilog or csv \(got "gds"\)/],
+    [['export', LIB, '--to', 'spice'], /is a library: pick one cell with --cell NAME/],
+  ])('%j is unusable (exit 2) with a message naming the flag', async (argv, message) => {
+    const r = await railwise(...argv);
+    expect(r.status).toBe(2);
+    expect(r.err).toMatch(message);
+  });
+
+  it('names a missing file', async () => {
+    const r = await railwise('check', 'nowhere/cell.sp');
+    expect(r.status).toBe(2);
+    expect(r.out).toMatch(/nowhere\/cell\.sp: cannot read: no such file/);
+  });
+});
+
+describe('check', () => {
+  it('gives the single-cell JSON shape of SPEC §6', async () => {
+    const { status, body } = await json('check', LIB, '--cell', 'tw_nand2');
+    expect(status).toBe(0);
+    expect(body).toMatchObject({ cell: 'tw_nand2', inputs: ['A', 'B'], outputs: ['Y'], findings: [] });
+    const vectors = body['vectors'] as Record<string, unknown>[];
+    // NAND truth table (common practice, no source), outputs at the rails of VDD 2.5 V.
+    expect(vectors.map((v) => [v['inputs'], v['outputs'], v['voltages']])).toEqual([
+      [{ A: 0, B: 0 }, { Y: '1' }, { Y: 2.5 }],
+      [{ A: 0, B: 1 }, { Y: '1' }, { Y: 2.5 }],
+      [{ A: 1, B: 0 }, { Y: '1' }, { Y: 2.5 }],
+      [{ A: 1, B: 1 }, { Y: '0' }, { Y: 0 }],
+    ]);
+    expect(vectors[0]).toHaveProperty('supplyCurrent', 0);
+    expect(vectors[0]).toHaveProperty('findings', []);
+    expect(body['summary']).toMatchObject({ vectors: 4, errors: 0, warnings: 0, contention: 0, mismatch: 0 });
+  });
+
+  it('reports every net with --all-nets and steps with --sequence', async () => {
+    const all = await json('check', LIB, '--cell', 'tw_nand2', '--all-nets');
+    const first = (all.body['vectors'] as { voltages: Record<string, number> }[])[0];
+    expect(Object.keys(first?.voltages ?? {})).toEqual(expect.arrayContaining(['Y', 'n1', 'VDD', 'VSS']));
+    const seq = await json('check', LIB, '--cell', 'tw_inv', '--sequence', 'A=0; A=1; A=0');
+    expect(seq.body).not.toHaveProperty('vectors');
+    const steps = seq.body['steps'] as { outputs: Record<string, string> }[];
+    expect(steps.map((s) => s.outputs['Y'])).toEqual(['1', '0', '1']);
+  });
+
+  it('solves a resistive divider held by a V line: 10 kΩ over 40 kΩ at 5 V gives 4.00 V and 0.1 mA', async () => {
+    // Common practice, no source: V = 5 · 40k / (10k + 40k) = 4 V; I = 5 V / 50 kΩ = 0.1 mA; P = 0.5 mW.
+    const { body } = await json('check', DIVIDER);
+    const [vector] = body['vectors'] as {
+      voltages: Record<string, number>;
+      supplyCurrent: number;
+      staticPower: number;
+    }[];
+    expect(vector?.voltages['out']).toBeCloseTo(4.0, 6);
+    expect(vector?.supplyCurrent).toBeCloseTo(1e-4, 10);
+    expect(vector?.staticPower).toBeCloseTo(5e-4, 10);
+  });
+
+  it('exit status 1 for error findings, with the mismatch named', async () => {
+    const { status, body } = await json('check', LIB, '--cell', 'tw_inv', '--expect', 'Y = A');
+    expect(status).toBe(1);
+    expect(body['summary']).toMatchObject({ errors: 2, mismatch: 2 });
+  });
+
+  it('a bad expected function makes the cell unusable (exit 2), naming it', async () => {
+    const { status, body } = await json('check', LIB, '--cell', 'tw_inv', '--expect', 'Y = !(A');
+    expect(status).toBe(2);
+    expect(body).toMatchObject({ cell: 'tw_inv', error: { field: 'expect' } });
+  });
+
+  it('adds power with --power', async () => {
+    const { body } = await json(
+      'check',
+      LIB,
+      '--cell',
+      'tw_pnor2',
+      '--power',
+      '--freq',
+      '100meg',
+      '--load',
+      '10f',
+    );
+    expect(body['power']).toMatchObject({ frequency: 1e8, load: 1e-14, activitySource: 'random' });
+  });
+
+  it('reports a library: every cell, the broken one with its file and line, and a summary', async () => {
+    const { status, body } = await json('check', BROKEN_LIB);
+    expect(status).toBe(2);
+    const cells = body['cells'] as Record<string, unknown>[];
+    expect(cells.map((c) => c['cell'])).toEqual([
+      'buoy_inv',
+      'buoy_nor2',
+      'buoy_nand2_wrong_expect',
+      'buoy_fill',
+      'buoy_bandgap_stub',
+    ]);
+    expect(cells[4]).toMatchObject({ file: BROKEN_LIB, error: { line: 9 } });
+    expect(body['summary']).toEqual({ cells: 5, passed: 3, failed: 1, unusable: 1, errors: 4, warnings: 0 });
+  });
+
+  it('--cell picks one cell of a library and prints the single-cell object', async () => {
+    const { status, body } = await json('check', BROKEN_LIB, '--cell', 'BUOY_NOR2');
+    expect(status).toBe(0);
+    expect(body).toMatchObject({ cell: 'buoy_nor2', inputs: ['A', 'B'] });
+    expect(body).not.toHaveProperty('cells');
+  });
+
+  it('treats several files as a library', async () => {
+    const { body } = await json('check', DIVIDER, 'public/examples/buffer-x2.sp');
+    expect((body['cells'] as { cell: string }[]).map((c) => c.cell)).toEqual(['divider', 'lamp_buf']);
+  });
+});
+
+describe('human report', () => {
+  it('prints the truth table, findings with their current path, and a summary line', async () => {
+    const r = await railwise('check', LIB, '--cell', 'tw_pnor2');
+    expect(r.status).toBe(0);
+    expect(r.out).toMatch(/A B │ Y │ I\(supply\)/);
+    expect(r.out).toMatch(/0 1 │ 0 │ \d+(\.\d+)? µA +! static-current/);
+    expect(r.out).toContain('VDD → MPL → Y → MN2 → VSS');
+    expect(r.out).toMatch(/pass {2}4 vectors, 0 errors, 4 warnings/);
+    expect(r.out).toMatch(/not sign-off/);
+    expect(r.out.includes('\u001b[')).toBe(false);
+  });
+
+  it('colours only a terminal, and NO_COLOR turns it off (no-color.org)', () => {
+    expect(colourWanted(true, {})).toBe(true);
+    expect(colourWanted(false, {})).toBe(false);
+    expect(colourWanted(true, { NO_COLOR: '1' })).toBe(false);
+    expect(colourWanted(true, { NO_COLOR: '' })).toBe(true);
+  });
+
+  it('writes currents with SI prefixes', () => {
+    expect(formatSi(7.3e-5, 'A')).toBe('73 µA');
+    expect(formatSi(1.234e-3, 'W')).toBe('1.23 mW');
+    expect(formatSi(0, 'A')).toBe('0 A');
+  });
+});
+
+describe('export', () => {
+  it('writes SPICE, Verilog and CSV of one cell', async () => {
+    const spice = await railwise('export', LIB, '--cell', 'tw_inv', '--to', 'spice');
+    expect(spice.status).toBe(0);
+    expect(spice.out).toContain('.subckt tw_inv A Y VDD VSS');
+    const verilog = await railwise('export', LIB, '--cell', 'tw_inv', '--to', 'verilog');
+    expect(verilog.out).toContain('pmos MP1 (Y, VDD, A);');
+    const csv = await railwise('export', LIB, '--cell', 'tw_inv', '--to', 'csv');
+    expect(csv.out.split('\r\n').slice(0, 3)).toEqual([
+      'vector,A,Y,V(Y) [V],supply current [A],static power [W],findings',
+      '0,0,1,2.5,0,0,',
+      '1,1,0,0,0,0,',
+    ]);
+  });
+});
