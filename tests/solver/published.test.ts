@@ -97,14 +97,9 @@ describe('threshold drop through pass devices', () => {
   // |Vtp|, a transmission gate passes both rails. VDD 1.0 V, Vt 0.3 V → 0.70 V and 0.30 V (derived).
   const tech: Technology = { ...DEFAULT_TECHNOLOGY, vdd: 1.0, vtn: 0.3, vtp: 0.3, vil: 0.35, vih: 0.65 };
   const pass = (kind: 'nmos' | 'pmos') =>
-    circuit('pass')
-      .supply('VDD')
-      .ground()
-      .input('D', 'G')
-      .output('Y')
-      [kind]('M', { g: 'G', d: 'D', s: 'Y' })
-      .capacitor('C', 'Y', 'GND', 1e-15)
-      .build();
+    (kind === 'nmos' ? base.nmos('M', pins) : base.pmos('M', pins)).capacitor('C', 'Y', 'GND', 1e-15).build();
+  const base = circuit('pass').supply('VDD').ground().input('D', 'G').output('Y');
+  const pins = { g: 'G', d: 'D', s: 'Y' };
   it('an NMOS-passed 1 is 0.70 V and flagged degraded', () => {
     const r = solve(pass('nmos'), { D: '1', G: '1' }, tech);
     expect(r.volts('Y')).toBeCloseTo(0.7, 9);

@@ -26,10 +26,10 @@ export function currentPaths(
   chCurrent: Float64Array,
   sourceOut: Float64Array,
 ): PathIndices[] {
-  const residual = Float64Array.from(chCurrent, Math.abs);
   let largest = 0;
-  for (let n = 0; n < c.netCount; n++) if (isSource[n]) largest = Math.max(largest, sourceOut[n]);
+  for (let n = 0; n < c.netCount; n++) if (isSource[n] && sourceOut[n] > largest) largest = sourceOut[n];
   if (largest <= 0) return [];
+  const residual = Float64Array.from(chCurrent, Math.abs);
   const floor = largest * RELATIVE_FLOOR;
   const sources: number[] = [];
   for (let n = 0; n < c.netCount; n++) if (isSource[n] && sourceOut[n] > floor) sources.push(n);

@@ -40,13 +40,12 @@ export function evaluateCcc(
   out: EvaluationTarget,
 ): void {
   frame.select(k);
-  const unknowns = collectUnknowns(frame, snapVolts, sourceVolts);
-  if (unknowns.length === 0) {
-    solveTrial(frame, snapVolts);
-    writeTrial(frame, out);
+  if (setConduction(frame, snapVolts, sourceVolts)) {
+    enumerate(frame, collectUnknowns(frame), snapVolts, out);
     return;
   }
-  enumerate(frame, unknowns, snapVolts, out);
+  solveTrial(frame, snapVolts);
+  writeTrial(frame, out);
 }
 
 interface Unknown {
@@ -55,18 +54,47 @@ interface Unknown {
   readonly isSource: boolean;
 }
 
-/** Sets frame.on and frame.sourceEndVolts for the definite part; returns the unknowns. */
-function collectUnknowns(frame: Frame, snapVolts: Float64Array, sourceVolts: Float64Array): Unknown[] {
-  const { topo, c } = frame;
+/**
+ * Sets frame.on (maybe counts as on), frame.maybe and frame.sourceEndVolts for every element of the
+ * selected CCC. Returns true when anything is unknown. This is the hot loop of static CMOS, so it
+ * reads the typed arrays directly.
+ */
+function setConduction(frame: Frame, snapVolts: Float64Array, sourceVolts: Float64Array): boolean {
+  const { topo, c, on, maybe, sourceEndVolts } = frame;
+  const { chKind, chGate, chA, chB } = c;
+  const { vil, vih } = c.tech;
+  const items = topo.cccElements.items;
+  const base = frame.elemStart;
+  let unknown = false;
+  for (let j = 0; j < frame.elemCount; j++) {
+    const e = items[base + j];
+    const kind = chKind[e];
+    let state = ON;
+    if (kind !== RESISTOR) {
+      const vg = snapVolts[chGate[e]];
+      if (vg <= vil) state = kind === NMOS ? OFF : ON;
+      else if (vg >= vih) state = kind === NMOS ? ON : OFF;
+      else state = MAYBE;
+    }
+    on[j] = state === OFF ? 0 : 1;
+    maybe[j] = state === MAYBE ? 1 : 0;
+    const sourceEnd = topo.elemLocalA[e] < 0 ? chA[e] : topo.elemLocalB[e] < 0 ? chB[e] : -1;
+    const vs = sourceEnd >= 0 ? sourceVolts[sourceEnd] : NaN;
+    sourceEndVolts[j] = vs;
+    if (state === MAYBE || (sourceEnd >= 0 && vs !== vs)) unknown = true;
+  }
+  return unknown;
+}
+
+/** The unknowns setConduction found: maybe devices and ties to inputs driven to X. */
+function collectUnknowns(frame: Frame): Unknown[] {
+  const { topo } = frame;
   const unknowns: Unknown[] = [];
   for (let j = 0; j < frame.elemCount; j++) {
     const e = frame.element(j);
-    const conduction = conductionOf(frame, e, snapVolts);
-    frame.on[j] = conduction === OFF ? 0 : 1;
-    if (conduction === MAYBE) unknowns.push({ j, isSource: false });
-    const sourceEnd = topo.elemLocalA[e] < 0 ? c.chA[e] : topo.elemLocalB[e] < 0 ? c.chB[e] : -1;
-    frame.sourceEndVolts[j] = sourceEnd >= 0 ? sourceVolts[sourceEnd] : NaN;
-    if (sourceEnd >= 0 && Number.isNaN(sourceVolts[sourceEnd])) unknowns.push({ j, isSource: true });
+    if (frame.maybe[j]) unknowns.push({ j, isSource: false });
+    const tiedToSource = topo.elemLocalA[e] < 0 || topo.elemLocalB[e] < 0;
+    if (tiedToSource && Number.isNaN(frame.sourceEndVolts[j])) unknowns.push({ j, isSource: true });
   }
   return unknowns;
 }

@@ -10,6 +10,8 @@ export class Frame {
   // Inputs of a trial.
   /** Per local element: 1 when it conducts in this trial. */
   readonly on: Uint8Array;
+  /** Per local element: 1 when its gate is at X (it is also marked on). */
+  readonly maybe: Uint8Array;
   /** Per local element: voltage of its source end in this trial (X inputs are enumerated). */
   readonly sourceEndVolts: Float64Array;
   // Outputs of a trial.
@@ -30,6 +32,8 @@ export class Frame {
   readonly next: Int32Array;
   readonly srcHead: Int32Array;
   readonly srcNext: Int32Array;
+  /** Per component root: bit 1 when a conducting NMOS is inside, bit 2 for a PMOS. */
+  readonly kinds: Uint8Array;
 
   k = 0;
   netStart = 0;
@@ -48,6 +52,7 @@ export class Frame {
       maxElems = Math.max(maxElems, topo.cccElements.start[k + 1] - topo.cccElements.start[k]);
     }
     this.on = new Uint8Array(maxElems);
+    this.maybe = new Uint8Array(maxElems);
     this.sourceEndVolts = new Float64Array(maxElems);
     this.current = new Float64Array(maxElems);
     this.volts = new Float64Array(maxNets);
@@ -62,6 +67,7 @@ export class Frame {
     this.next = new Int32Array(maxNets);
     this.srcHead = new Int32Array(maxNets);
     this.srcNext = new Int32Array(maxElems);
+    this.kinds = new Uint8Array(maxNets);
   }
 
   select(k: number): void {

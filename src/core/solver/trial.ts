@@ -1,7 +1,11 @@
+import { NMOS, PMOS } from '../compile/compile.ts';
 import { bottleneck } from './bottleneck.ts';
 import type { Frame } from './frame.ts';
 import { classify, FLAG_CHARGE_SHARED, FLAG_CONTENTION, FLAG_DEGRADED, LEVEL_X } from './levels.ts';
 import { solveNodal } from './nodal.ts';
+
+const HAS_NMOS = 1;
+const HAS_PMOS = 2;
 
 /** Smallest capacitance a net is given for charge sharing, so capacitance-free nets still average. */
 const MIN_NET_CAP = 1e-18;
@@ -50,18 +54,21 @@ function groupNets(frame: Frame): void {
     parent[i] = frame.root(i);
     frame.head[i] = -1;
     frame.srcHead[i] = -1;
+    frame.kinds[i] = 0;
   }
   for (let i = frame.netCount - 1; i >= 0; i--) {
     frame.next[i] = frame.head[parent[i]];
     frame.head[parent[i]] = i;
   }
+  const kind = frame.c.chKind;
   for (let j = frame.elemCount - 1; j >= 0; j--) {
     if (!frame.on[j]) continue;
     const e = frame.element(j);
     const a = topo.elemLocalA[e];
     const b = topo.elemLocalB[e];
-    if (a >= 0 && b >= 0) continue;
     const r = parent[a >= 0 ? a : b];
+    frame.kinds[r] |= kind[e] === NMOS ? HAS_NMOS : kind[e] === PMOS ? HAS_PMOS : 0;
+    if (a >= 0 && b >= 0) continue;
     frame.srcNext[j] = frame.srcHead[r];
     frame.srcHead[r] = j;
   }
@@ -105,9 +112,23 @@ function shareCharge(frame: Frame, root: number, snapVolts: Float64Array): void 
   }
 }
 
-/** One source voltage (the fast path): every net takes it, less any threshold drop. */
+/**
+ * One source voltage (the fast path): every net takes it, less any threshold drop. Only an NMOS can
+ * drop a high level and only a PMOS a low one, so a pull-up of PMOS devices or a pull-down of NMOS
+ * devices (all of static CMOS) skips the path search.
+ */
 function driveSingle(frame: Frame, root: number, snapVolts: Float64Array, vs: number): void {
-  bottleneck(frame, root, snapVolts, vs >= frame.c.tech.vdd / 2);
+  const high = vs >= frame.c.tech.vdd / 2;
+  if ((frame.kinds[root] & (high ? HAS_NMOS : HAS_PMOS)) === 0) {
+    for (let i = frame.head[root]; i >= 0; i = frame.next[i]) {
+      frame.volts[i] = vs;
+      frame.driven[i] = 1;
+      frame.flags[i] = 0;
+      frame.limiter[i] = -1;
+    }
+    return;
+  }
+  bottleneck(frame, root, snapVolts, high);
   for (let i = frame.head[root]; i >= 0; i = frame.next[i]) {
     const v = frame.best[i];
     frame.volts[i] = v;

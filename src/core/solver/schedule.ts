@@ -1,0 +1,210 @@
+import type { CompiledNetlist } from '../compile/compile.ts';
+import { evaluateCcc, type EvaluationTarget } from './evaluate.ts';
+import { Frame } from './frame.ts';
+import { FLAG_OSCILLATING } from './levels.ts';
+import { buildTopology, type Topology } from './topology.ts';
+
+/**
+ * Feedback bound (SPEC §3.8): a strongly connected group of n components gets 2n + 16 rounds to
+ * settle. Nets still changing then become X (flagged oscillating) and the group gets as many rounds
+ * again to settle around them; if it still has not, all its nets become X.
+ */
+export const SETTLE_ROUNDS_BASE = 16;
+export const SETTLE_ROUNDS_PER_COMPONENT = 2;
+
+/** Mutable per-net and per-element state of one solve. */
+export interface NetState extends EvaluationTarget {
+  readonly volts: Float64Array;
+  readonly driven: Uint8Array;
+  readonly flags: Uint8Array;
+  readonly limiter: Int32Array;
+  readonly chCurrent: Float64Array;
+}
+
+/** Everything the scheduler needs for one topology, built once and reused across vectors. */
+export class Schedule {
+  readonly frame: Frame;
+  private readonly sccOf: Int32Array;
+  private readonly selfDependent: Uint8Array;
+  /** CCC of each channel element, -1 for bridges. */
+  private readonly elemCcc: Int32Array;
+  private readonly next: NetState;
+  /** Nets that are sources in this topology, and elements with at least one end on a source. */
+  readonly sourceNets: Int32Array;
+  readonly sourceTies: Int32Array;
+  private readonly saved: Float64Array;
+  private readonly savedDriven: Uint8Array;
+
+  constructor(
+    readonly c: CompiledNetlist,
+    readonly topology: Topology,
+  ) {
+    this.frame = new Frame(c, topology);
+    const order = topology.sccOrder;
+    this.sccOf = new Int32Array(topology.cccCount);
+    for (let s = 0; s + 1 < order.start.length; s++) {
+      for (let i = order.start[s]; i < order.start[s + 1]; i++) this.sccOf[order.items[i]] = s;
+    }
+    this.selfDependent = new Uint8Array(topology.cccCount);
+    const d = topology.cccDependents;
+    for (let k = 0; k < topology.cccCount; k++) {
+      for (let i = d.start[k]; i < d.start[k + 1]; i++) if (d.items[i] === k) this.selfDependent[k] = 1;
+    }
+    this.elemCcc = Int32Array.from(c.chA, (a, e) =>
+      topology.cccOfNet[a] >= 0 ? topology.cccOfNet[a] : topology.cccOfNet[c.chB[e]],
+    );
+    this.next = {
+      volts: new Float64Array(c.netCount),
+      driven: new Uint8Array(c.netCount),
+      flags: new Uint8Array(c.netCount),
+      limiter: new Int32Array(c.netCount),
+      chCurrent: new Float64Array(c.chCount),
+    };
+    const sources: number[] = [];
+    for (let n = 0; n < c.netCount; n++) if (topology.isSource[n]) sources.push(n);
+    this.sourceNets = Int32Array.from(sources);
+    const ties: number[] = [];
+    for (let e = 0; e < c.chCount; e++)
+      if (topology.isSource[c.chA[e]] || topology.isSource[c.chB[e]]) ties.push(e);
+    this.sourceTies = Int32Array.from(ties);
+    this.saved = new Float64Array(c.netCount);
+    this.savedDriven = new Uint8Array(c.netCount);
+  }
+
+  static build(c: CompiledNetlist, undriven: ReadonlySet<number>): Schedule {
+    return new Schedule(c, buildTopology(c, undriven));
+  }
+
+  /** Marks dirty the components whose elements a net gates or ties to (used for changed sources). */
+  markTouching(dirty: Uint8Array, n: number): void {
+    const { netGates, netChannels } = this.c;
+    for (let p = netGates.start[n]; p < netGates.start[n + 1]; p++)
+      this.mark(dirty, this.elemCcc[netGates.items[p]]);
+    for (let p = netChannels.start[n]; p < netChannels.start[n + 1]; p++)
+      this.mark(dirty, this.elemCcc[netChannels.items[p]]);
+  }
+
+  private mark(dirty: Uint8Array, k: number): void {
+    if (k >= 0) dirty[k] = 1;
+  }
+
+  private markGated(dirty: Uint8Array, n: number): void {
+    const { netGates } = this.c;
+    for (let p = netGates.start[n]; p < netGates.start[n + 1]; p++)
+      this.mark(dirty, this.elemCcc[netGates.items[p]]);
+  }
+
+  /**
+   * Evaluates the dirty components in feedback order. A component is re-evaluated only when a gate
+   * or source it depends on changed; its result is a function of those alone (and, with `fresh`
+   * false, of its own stored charge, which re-evaluation leaves as it is), so skipping it gives the
+   * same answer as evaluating everything. With `fresh`, a re-evaluated component first forgets its
+   * stored charge (sweep mode: every vector starts from an unknown state).
+   */
+  propagate(sourceVolts: Float64Array, state: NetState, dirty: Uint8Array, fresh: boolean): void {
+    const order = this.topology.sccOrder;
+    const { cccNets } = this.topology;
+    for (let s = 0; s + 1 < order.start.length; s++) {
+      const first = order.start[s];
+      const end = order.start[s + 1];
+      let any = false;
+      for (let i = first; i < end; i++) if (dirty[order.items[i]]) any = true;
+      if (!any) continue;
+      for (let i = first; i < end; i++) this.forget(order.items[i], state, fresh);
+      if (end - first === 1 && !this.selfDependent[order.items[first]]) {
+        evaluateCcc(this.frame, order.items[first], state.volts, sourceVolts, state);
+      } else {
+        this.settle(s, Array.from(order.items.subarray(first, end)), sourceVolts, state);
+      }
+      for (let i = first; i < end; i++) {
+        const k = order.items[i];
+        for (let q = cccNets.start[k]; q < cccNets.start[k + 1]; q++) {
+          const n = cccNets.items[q];
+          if (!sameVolts(this.saved[n], state.volts[n]) || this.savedDriven[n] !== state.driven[n])
+            this.markGated(dirty, n);
+        }
+      }
+    }
+  }
+
+  /** Remembers a component's values (to see what changed) and, in fresh mode, clears its charge. */
+  private forget(k: number, state: NetState, fresh: boolean): void {
+    const { cccNets } = this.topology;
+    for (let q = cccNets.start[k]; q < cccNets.start[k + 1]; q++) {
+      const n = cccNets.items[q];
+      this.saved[n] = state.volts[n];
+      this.savedDriven[n] = state.driven[n];
+      if (fresh) {
+        state.volts[n] = NaN;
+        state.driven[n] = 0;
+      }
+    }
+  }
+
+  /**
+   * Jacobi rounds over one feedback group: every dirty component is evaluated against the same
+   * snapshot, then all results are committed at once, so the outcome never depends on the order of
+   * components (a race shows up as a no-steady-state result rather than a winner picked by order).
+   */
+  private settle(s: number, members: number[], sourceVolts: Float64Array, state: NetState): void {
+    const { topology, next } = this;
+    const frozen = new Set<number>();
+    const limit = SETTLE_ROUNDS_BASE + SETTLE_ROUNDS_PER_COMPONENT * members.length;
+    let dirty = new Set(members);
+    for (let round = 1; dirty.size > 0 && round <= 2 * limit; round++) {
+      for (const k of dirty)
+        evaluateCcc(this.frame, k, state.volts, sourceVolts, { ...next, chCurrent: state.chCurrent });
+      const changed = commit(topology, dirty, next, state, frozen);
+      if (round >= limit) for (const n of changed) freezeUnknown(state, frozen, n);
+      dirty = new Set();
+      for (const n of changed) {
+        const k = topology.cccOfNet[n];
+        const d = topology.cccDependents;
+        for (let i = d.start[k]; i < d.start[k + 1]; i++)
+          if (this.sccOf[d.items[i]] === s) dirty.add(d.items[i]);
+      }
+    }
+    if (dirty.size > 0) {
+      for (const k of members) forEachNet(topology, k, (n) => freezeUnknown(state, frozen, n));
+    }
+  }
+}
+
+function forEachNet(topology: Topology, k: number, visit: (n: number) => void): void {
+  for (let i = topology.cccNets.start[k]; i < topology.cccNets.start[k + 1]; i++)
+    visit(topology.cccNets.items[i]);
+}
+
+export function sameVolts(a: number, b: number): boolean {
+  return Number.isNaN(a) ? Number.isNaN(b) : Math.abs(a - b) <= 1e-7;
+}
+
+/** Copies the evaluated components' nets into the live state; returns the nets whose value changed. */
+function commit(
+  topology: Topology,
+  evaluated: Set<number>,
+  next: NetState,
+  state: NetState,
+  frozen: Set<number>,
+): number[] {
+  const changed: number[] = [];
+  for (const k of evaluated) {
+    forEachNet(topology, k, (n) => {
+      if (frozen.has(n)) return;
+      if (!sameVolts(state.volts[n], next.volts[n]) || state.driven[n] !== next.driven[n]) changed.push(n);
+      state.volts[n] = next.volts[n];
+      state.driven[n] = next.driven[n];
+      state.flags[n] = next.flags[n];
+      state.limiter[n] = next.limiter[n];
+    });
+  }
+  return changed;
+}
+
+function freezeUnknown(state: NetState, frozen: Set<number>, n: number): void {
+  frozen.add(n);
+  state.volts[n] = NaN;
+  state.driven[n] = 1;
+  state.flags[n] = FLAG_OSCILLATING;
+  state.limiter[n] = -1;
+}
