@@ -29,7 +29,10 @@ export function pruneSelection(sel: ItemIds, sheet: Sheet): ItemIds {
 export function toggleItems(sel: ItemIds, ids: ItemIds): ItemIds {
   const flip = (have: readonly string[], ids: readonly string[]) => {
     const set = new Set(have);
-    for (const id of ids) set.has(id) ? set.delete(id) : set.add(id);
+    for (const id of ids) {
+      if (set.has(id)) set.delete(id);
+      else set.add(id);
+    }
     return [...set];
   };
   return { parts: flip(sel.parts, ids.parts), wires: flip(sel.wires, ids.wires) };

@@ -32,7 +32,9 @@ export class UnionFind {
     const ra = this.find(a);
     const rb = this.find(b);
     // The smaller key becomes the root so results do not depend on the order of unions.
-    if (ra !== rb) ra < rb ? this.parent.set(rb, ra) : this.parent.set(ra, rb);
+    if (ra === rb) return;
+    if (ra < rb) this.parent.set(rb, ra);
+    else this.parent.set(ra, rb);
   }
 }
 

@@ -6,7 +6,7 @@
 import type { Device, Netlist, Rail } from '../model/netlist.ts';
 import type { Sheet, SheetPart } from './types.ts';
 import { partSpec, type NetRole } from './parts/index.ts';
-import { pinKey, sheetConnectivity, UnionFind, wireKey } from './connectivity.ts';
+import { pinKey, sheetConnectivity, wireKey, type UnionFind } from './connectivity.ts';
 
 export interface SheetIssue {
   readonly kind: 'name-conflict' | 'duplicate-device' | 'shorted-pins';

@@ -1,0 +1,117 @@
+import { expect, type Locator, type Page } from '@playwright/test';
+
+type Point = { x: number; y: number };
+
+/**
+ * The Railwise page as a new user meets it: shelves on the left, the sheet in the middle, the
+ * toolbar on top. Sheet positions are grid points; the test-only window API turns them into
+ * pixels so clicks land where a user would click.
+ */
+export class RailwisePage {
+  readonly sheet: Locator;
+  readonly message: Locator;
+
+  constructor(readonly page: Page) {
+    this.sheet = page.getByTestId('sheet');
+    this.message = page.getByTestId('message');
+  }
+
+  async open(): Promise<void> {
+    await this.page.goto('/');
+    await expect(this.sheet.locator('canvas').first()).toBeVisible();
+    await this.page.waitForFunction(() => window.__railwise !== undefined);
+  }
+
+  toolbarButton(name: string): Locator {
+    return this.page.getByRole('toolbar').getByRole('button', { name, exact: true });
+  }
+
+  async newSheet(): Promise<void> {
+    await this.toolbarButton('New empty sheet').click();
+    await this.dismissMessage();
+  }
+
+  async dismissMessage(): Promise<void> {
+    if (await this.message.isVisible())
+      await this.message.getByRole('button', { name: 'Dismiss message' }).click();
+  }
+
+  async toPage(p: Point): Promise<Point> {
+    return this.page.evaluate((q) => window.__railwise!.toPage(q), p);
+  }
+
+  async clickAt(x: number, y: number): Promise<void> {
+    const p = await this.toPage({ x, y });
+    await this.page.mouse.move(p.x, p.y);
+    await this.page.mouse.click(p.x, p.y);
+  }
+
+  /** A real drag: press, several moves, release. */
+  async dragFrom(from: Point, to: Point): Promise<void> {
+    const a = await this.toPage(from);
+    const b = await this.toPage(to);
+    await this.page.mouse.move(a.x, a.y);
+    await this.page.mouse.down();
+    await this.page.mouse.move(b.x, b.y, { steps: 8 });
+    await this.page.mouse.up();
+  }
+
+  /** A grid point near the lower right of the visible sheet, clear of a fitted cell. */
+  async emptySpot(): Promise<Point> {
+    return this.page.evaluate(() => {
+      const { viewport, screen } = window.__railwise!.state();
+      const x = (screen.width * 0.9 - viewport.x) / viewport.scale;
+      const y = (screen.height * 0.9 - viewport.y) / viewport.scale;
+      return { x: Math.round(x), y: Math.round(y) };
+    });
+  }
+
+  async press(key: string): Promise<void> {
+    await this.page.keyboard.press(key);
+  }
+
+  /** The netlist the app derived from the drawing. */
+  async netlist(): Promise<{
+    devices: Record<string, unknown>[];
+    rails: { net: string; role: string }[];
+    inputs: string[];
+    outputs: string[];
+  }> {
+    return this.page.evaluate(() => JSON.parse(JSON.stringify(window.__railwise!.netlist())));
+  }
+
+  async undoDepth(): Promise<number> {
+    return this.page.evaluate(() => window.__railwise!.state().history.past.length);
+  }
+
+  async partCount(): Promise<number> {
+    return this.page.evaluate(() => window.__railwise!.state().doc.sheet.parts.length);
+  }
+
+  /** Opens a file through the same file input the Open button uses. */
+  async openFile(name: string, text: string): Promise<void> {
+    await this.page
+      .getByTestId('open-file')
+      .setInputFiles({ name, mimeType: 'text/plain', buffer: Buffer.from(text) });
+  }
+
+  async starter(title: string): Promise<void> {
+    await this.page
+      .getByRole('region', { name: 'Starter cells' })
+      .getByRole('button', { name: title, exact: true })
+      .click();
+  }
+
+  /** Waits until the autosave has caught up with the current revision. */
+  async waitForAutosave(): Promise<void> {
+    await this.page.waitForFunction(() => {
+      const api = window.__railwise!;
+      const saved = localStorage.getItem(api.autosaveKey);
+      return (
+        saved !== null &&
+        JSON.parse(saved).netlist !== undefined &&
+        JSON.stringify(JSON.parse(saved).sheet) === JSON.stringify(api.state().doc.sheet)
+      );
+    });
+  }
+}
