@@ -2,7 +2,7 @@ import { renderToStaticMarkup } from 'react-dom/server';
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import { powerReport } from '../../src/core/power/powerReport.ts';
-import { sizingReport } from '../../src/core/sizing/sizingReport.ts';
+import { proposeWidths, sizingReport } from '../../src/core/sizing/sizingReport.ts';
 import { chartGeometry, DEFAULT_FRAME } from '../../src/panels/power/chartGeometry.ts';
 import { PowerSizingPanel } from '../../src/panels/power/PowerSizingPanel.tsx';
 import { nand, UNIT_RC_TECH } from '../sizing/cells.ts';
@@ -50,6 +50,16 @@ describe('PowerSizingPanel', () => {
     // NAND2 sized N 2, P 2: g = 4/3 printed to two decimals (Weste & Harris, 4th ed., table 4.2).
     expect(html).toContain('1.33');
     expect(html).toContain('GND → NB → n1 → NA → Y');
+  });
+
+  it('lists proposed widths when given a proposal', () => {
+    // NAND2 drawn at width 1 against the unit inverter (N 1, P 2): all four become 2 (W&H 4th ed. §4.4).
+    const proposal = proposeWidths(nand(2, 1, 1), UNIT_RC_TECH, { wn: 1, wp: 2 });
+    const withProposal = renderToStaticMarkup(
+      <PowerSizingPanel power={power} sizing={sizing} proposal={proposal} />,
+    );
+    expect(withProposal).toContain('data-testid="width-proposal"');
+    expect(withProposal.match(/<td class="rw-num">2<\/td>/g)).toHaveLength(4);
   });
 
   it('renders without reports, with an error message when given one', () => {

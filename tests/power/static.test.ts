@@ -110,3 +110,25 @@ describe('options are checked and named', () => {
     expect(cell).toEqual(copy);
   });
 });
+
+describe('notes that qualify the figures', () => {
+  it('every report says what it leaves out', () => {
+    const report = powerReport(inverter(), DEFAULT_TECHNOLOGY, random);
+    expect(report.notes.join(' ')).toMatch(/short-circuit/);
+  });
+
+  it('a floating output in some vectors is named; a static gate gets no such note', () => {
+    // A tristate inverter floats its output with EN = 0 (the trade's definition of high-impedance).
+    const tristate = circuit('tristate')
+      .rails()
+      .input('A', 'EN', 'ENb')
+      .output('Y')
+      .pmos('P1', { g: 'A', d: 'p', s: 'VDD' })
+      .pmos('P2', { g: 'ENb', d: 'Y', s: 'p' })
+      .nmos('N2', { g: 'EN', d: 'Y', s: 'n' })
+      .nmos('N1', { g: 'A', d: 'n', s: 'GND' })
+      .build();
+    expect(powerReport(tristate, DEFAULT_TECHNOLOGY, random).notes.join(' ')).toMatch(/\(Y\)/);
+    expect(powerReport(nand(2), DEFAULT_TECHNOLOGY, random).notes.join(' ')).not.toMatch(/definite/);
+  });
+});

@@ -1,6 +1,8 @@
 import { formatPower, engineering } from '../../core/view/format.ts';
 import type { PowerReport } from '../../core/power/types.ts';
+import type { WidthProposal } from '../../core/sizing/proposeWidths.ts';
 import type { SizingReport } from '../../core/sizing/types.ts';
+import { ProposalTable } from './ProposalTable.tsx';
 import { NetCapacitanceTable } from './NetCapacitanceTable.tsx';
 import { SizingFigures } from './SizingFigures.tsx';
 import { StaticPowerChart } from './StaticPowerChart.tsx';
@@ -12,6 +14,8 @@ export interface PowerSizingPanelProps {
   readonly sizing: SizingReport | null;
   /** A message to show in place of the figures, e.g. a rejected option. */
   readonly error?: string | null;
+  /** Widths proposed by `proposeWidths` for a reference inverter's drive, when the designer asked. */
+  readonly proposal?: WidthProposal | null;
 }
 
 function Figure({ label, value }: { readonly label: string; readonly value: string }) {
@@ -54,7 +58,7 @@ function PowerFigures({ power }: { readonly power: PowerReport }) {
  * What the cell costs and how it should be sized: a pure view of a power report and a sizing
  * report. It holds no design state; the workspace computes the reports and passes them in.
  */
-export function PowerSizingPanel({ power, sizing, error = null }: PowerSizingPanelProps) {
+export function PowerSizingPanel({ power, sizing, error = null, proposal = null }: PowerSizingPanelProps) {
   return (
     <div className="rw-power" data-testid="power-sizing-panel">
       {error !== null && (
@@ -74,6 +78,7 @@ export function PowerSizingPanel({ power, sizing, error = null }: PowerSizingPan
           {sizing.outputs.map((o) => (
             <SizingFigures key={o.output} output={o} />
           ))}
+          {proposal !== null && <ProposalTable proposal={proposal} />}
         </>
       )}
       <p className="rw-muted">Switch-level estimates, not sign-off: confirm with circuit simulation.</p>
