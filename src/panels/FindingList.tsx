@@ -37,11 +37,11 @@ export function FindingList({ findings, onPick, empty, testId }: FindingListProp
         const more = detail(f);
         return (
           <li key={`${f.kind}-${i}`}>
-            <button type="button" className={`rw-finding rw-${f.severity}`} onClick={() => onPick(f)}>
+            <button type="button" className={`rw-finding rw-sev-${f.severity}`} onClick={() => onPick(f)}>
               <span className="rw-severity" aria-label={f.severity}>
                 {SEVERITY_GLYPH[f.severity]}
               </span>
-              <span className="rw-kind">{f.rule ?? f.kind}</span>
+              <span className="rw-finding-kind">{f.rule ?? f.kind}</span>
               <span className="rw-finding-text">{f.message}</span>
               {more !== null && <span className="rw-detail">{more}</span>}
             </button>

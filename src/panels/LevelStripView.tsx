@@ -48,7 +48,12 @@ export function LevelStripView({ strips, steps, selectedStep, onPickStep }: Leve
         </g>
       ))}
       {strips.map((strip, row) => (
-        <g key={strip.net} transform={`translate(0 ${row * ROW_HEIGHT})`} data-testid={`strip-${strip.net}`}>
+        <g
+          key={strip.net}
+          transform={`translate(0 ${row * ROW_HEIGHT})`}
+          data-testid={`strip-${strip.net}`}
+          data-levels={strip.runs.flatMap((r) => Array<string>(r.end - r.start).fill(r.level)).join(' ')}
+        >
           <text x={4} y={14} fontSize={11} fontFamily="monospace">
             {strip.net}
           </text>

@@ -6,6 +6,7 @@ import {
   cancelJob,
   selectRow,
   setTableView,
+  setUndrivenInputs,
   startSweep,
   useSimulation,
 } from '../state/simulation.ts';
@@ -16,8 +17,9 @@ import { VectorTable } from './VectorTable.tsx';
 function SweepStatus() {
   const sweep = useSimulation((s) => s.sweep);
   const design = useSimulation((s) => s.design);
+  const undrivenInputs = useSimulation((s) => s.undrivenInputs);
   if (design === null) return null;
-  const size = jobSize({ kind: 'sweep', revision: 0, design });
+  const size = jobSize({ kind: 'sweep', revision: 0, design, undrivenInputs });
   if (sweep.status === 'running' && sweep.long) {
     return (
       <JobBar
@@ -94,6 +96,16 @@ function SweepTable() {
   );
 }
 
+function UndrivenChoice() {
+  const undrivenInputs = useSimulation((s) => s.undrivenInputs);
+  return (
+    <label className="rw-setting" title="Adds Z as a third value of every input: 3^n vectors">
+      <input type="checkbox" checked={undrivenInputs} onChange={(e) => setUndrivenInputs(e.target.checked)} />{' '}
+      also leave each input undriven (Z)
+    </label>
+  );
+}
+
 /** Every vector: sweep status, the sortable, filterable table; a row click selects that vector. */
 export function TableSection() {
   const errors = useSimulation((s) =>
@@ -105,6 +117,7 @@ export function TableSection() {
       testId="table-section"
       badge={errors === undefined ? undefined : errors === 0 ? '✓ clean' : `◆ ${errors}`}
     >
+      <UndrivenChoice />
       <SweepStatus />
       <SweepTable />
     </Section>

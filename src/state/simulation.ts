@@ -49,6 +49,8 @@ export interface SimulationState {
   readonly stripNets: readonly string[];
   readonly table: TableView;
   readonly selectedRow: number | null;
+  /** Sweeps also leave each input undriven (Z), for pins a bus may release. */
+  readonly undrivenInputs: boolean;
 }
 
 /** Sweeps up to this many vectors start by themselves after each edit; larger ones wait for a click. */
@@ -75,6 +77,7 @@ function initialState(): SimulationState {
     stripNets: [],
     table: { sort: 'vector', direction: 'ascending', filter: 'all' },
     selectedRow: null,
+    undrivenInputs: false,
   };
 }
 
@@ -162,7 +165,10 @@ function scheduleAutoRun(runSweep: boolean, runPower: boolean): void {
   autoTimer = setTimeout(() => {
     autoTimer = null;
     const design = get().design;
-    const small = design !== null && jobSize({ kind: 'sweep', revision: 0, design }) <= AUTO_SWEEP_VECTORS;
+    const undrivenInputs = get().undrivenInputs;
+    const small =
+      design !== null &&
+      jobSize({ kind: 'sweep', revision: 0, design, undrivenInputs }) <= AUTO_SWEEP_VECTORS;
     if (runSweep && small) void startSweep();
     if (runPower && small) void startPower();
   }, SWEEP_DEBOUNCE_MS);
@@ -246,8 +252,8 @@ export function pickStep(step: number, steps: readonly InputVector[]): void {
   set({ selectedStep: step, selectedRow: null });
 }
 
-export function startSweep(undrivenInputs = false): Promise<void> {
-  const { design, analysisRevision: revision } = get();
+export function startSweep(): Promise<void> {
+  const { design, analysisRevision: revision, undrivenInputs } = get();
   return design === null
     ? Promise.resolve()
     : lanes.sweep.run({ kind: 'sweep', revision, design, undrivenInputs });
@@ -264,6 +270,13 @@ export function startPower(): Promise<void> {
   const { design, analysisRevision: revision, powerSettings: settings } = get();
   if (design === null) return Promise.resolve();
   return lanes.power.run({ kind: 'power', revision, design, settings, steps: currentSteps() });
+}
+
+/** Whether sweeps also try each input undriven; the table is checked again. */
+export function setUndrivenInputs(undrivenInputs: boolean): void {
+  set({ undrivenInputs });
+  lanes.sweep.forget();
+  scheduleAutoRun(true, false);
 }
 
 /** New power settings: the figures are recomputed at once. */
