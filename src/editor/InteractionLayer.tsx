@@ -43,6 +43,15 @@ export function InteractionLayer() {
           />
         </>
       ) : null}
+      {gesture?.type === 'pin' ? (
+        <Circle
+          x={gesture.at.x}
+          y={gesture.at.y}
+          radius={0.35}
+          stroke={SHEET_THEME.selected}
+          strokeWidth={0.08}
+        />
+      ) : null}
       {gesture?.type === 'ghost' ? <Ghost kind={gesture.kind} x={gesture.at.x} y={gesture.at.y} /> : null}
     </Layer>
   );

@@ -63,7 +63,8 @@ export type Tool =
 export type Gesture =
   | { readonly type: 'box'; readonly from: Point; readonly to: Point }
   | { readonly type: 'wiring'; readonly points: readonly Point[]; readonly cursor: Point }
-  | { readonly type: 'ghost'; readonly kind: PartKind; readonly at: Point };
+  | { readonly type: 'ghost'; readonly kind: PartKind; readonly at: Point }
+  | { readonly type: 'pin'; readonly at: Point };
 
 export interface Message {
   readonly kind: 'error' | 'info';

@@ -213,7 +213,8 @@ class SheetBuilder {
       const dir = turnDirection(p.part, localDirection(p.part.kind, p.pin.pin));
       if (supplies.has(p.net)) this.naming('vdd', p.net, p.pin, railRotation(dir, 'up'));
       else if (grounds.has(p.net)) this.naming('gnd', p.net, p.pin, railRotation(dir, 'down'));
-      else this.naming('label', p.net, p.pin, railRotation(dir, 'right'));
+      // Channel-pin labels point right, never up or down, so stacked labels cannot collide.
+      else this.naming('label', p.net, p.pin, p.pin.pin === 'gate' ? railRotation(dir, 'right') : 0);
     }
   }
 

@@ -7,7 +7,8 @@
 import type { Point } from '../../core/sheet/types.ts';
 import type { ItemIds } from '../../core/sheet/selection.ts';
 import { normalizeRect } from '../../core/sheet/geometry.ts';
-import { buildIndex, hitTest, itemsInRect, type Hit } from '../../core/sheet/hitTest.ts';
+import { hitTest, itemsInRect, type Hit } from '../../core/sheet/hitTest.ts';
+import { indexFor } from './sheetIndex.ts';
 import { moveItems } from '../../core/sheet/transform.ts';
 import { toggleItems } from '../../state/selection.ts';
 import type { SheetDocument } from '../../state/document.ts';
@@ -43,6 +44,16 @@ function isSelected(ids: ItemIds): boolean {
   return ids.parts.every((id) => sel.parts.includes(id)) && ids.wires.every((id) => sel.wires.includes(id));
 }
 
+/** Rings the pin under an idle pointer: the cue that a drag from here draws a wire. */
+function showPinUnder(e: ToolPointer): void {
+  const hit = hitTest(indexFor(store.getState().doc.sheet), e.at);
+  const current = store.getState().gesture;
+  if (hit?.type === 'pin') {
+    if (current?.type !== 'pin' || current.at.x !== hit.at.x || current.at.y !== hit.at.y)
+      setGesture({ type: 'pin', at: hit.at });
+  } else if (current?.type === 'pin') setGesture(null);
+}
+
 export function createSelectTool(startWire: (at: Point) => void): ToolMachine {
   let s: State = { name: 'idle' };
   const pointAt = (e: ToolPointer, hit: Hit | null): void => {
@@ -65,7 +76,8 @@ export function createSelectTool(startWire: (at: Point) => void): ToolMachine {
         s = { name: 'panning', screen: e.screen, origin: { x: viewport.x, y: viewport.y } };
         return;
       }
-      const hit = hitTest(buildIndex(doc.sheet), e.at);
+      const hit = hitTest(indexFor(doc.sheet), e.at);
+      if (store.getState().gesture?.type === 'pin') setGesture(null);
       if (hit?.type === 'pin' && !e.shift) {
         startWire(hit.at);
         return;
@@ -73,6 +85,7 @@ export function createSelectTool(startWire: (at: Point) => void): ToolMachine {
       pointAt(e, hit);
     },
     move(e) {
+      if (s.name === 'idle') return showPinUnder(e);
       if (s.name === 'panning') {
         const v = store.getState().viewport;
         setViewport({

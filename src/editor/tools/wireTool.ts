@@ -5,7 +5,8 @@
  */
 import type { Point } from '../../core/sheet/types.ts';
 import { samePoint, snapPoint } from '../../core/sheet/geometry.ts';
-import { buildIndex, hitTest } from '../../core/sheet/hitTest.ts';
+import { hitTest } from '../../core/sheet/hitTest.ts';
+import { indexFor } from './sheetIndex.ts';
 import { elbowRoute, normalizePath } from '../../core/sheet/routing.ts';
 import { addWire } from '../../core/sheet/edits.ts';
 import { commitDoc, setGesture, store } from '../../state/store.ts';
@@ -30,7 +31,7 @@ function previewPath(s: Extract<State, { name: 'routing' }>, cursor: Point): Poi
 /** Whether a wire ending at p lands on something it connects to. */
 function landsOnConnection(p: Point, start: Point): boolean {
   if (samePoint(p, start)) return false;
-  const hit = hitTest(buildIndex(store.getState().doc.sheet), p, { pinRadius: 0.1, wireRadius: 0.1 });
+  const hit = hitTest(indexFor(store.getState().doc.sheet), p, { pinRadius: 0.1, wireRadius: 0.1 });
   return hit !== null && hit.type !== 'part';
 }
 
