@@ -3,16 +3,18 @@
  * worker's start-up (loading the TypeScript core again takes a few hundred milliseconds); small
  * libraries run on the main thread. Results come back in the order of the jobs.
  */
-import { availableParallelism } from 'node:os';
+import { availableParallelism, loadavg } from 'node:os';
 import { Worker } from 'node:worker_threads';
 import type { CellJob } from './loadCells.ts';
 import { runCell, type CellResult, type RunOptions } from './runCell.ts';
 
 /**
- * Transistor-vectors (devices × vectors summed over cells) below which one thread is faster.
- * Set from a measurement on this project's runner: see DEVELOPERS.md, "Command line".
+ * Transistor-vectors (devices × vectors summed over cells) below which one thread is faster. On the
+ * project's 2-core runner a worker took 1–2 s to start and one thread checked about 0.4 million
+ * transistor-vectors per second, so a second thread repays its start-up only past roughly ten
+ * seconds of work (measurement in DEVELOPERS.md, "Command line").
  */
-export const PARALLEL_WORK_THRESHOLD = 2_000_000;
+export const PARALLEL_WORK_THRESHOLD = 4_000_000;
 
 export function estimatedWork(job: CellJob, options: RunOptions): number {
   const perInput = options.undriven ? 3 : 2;
@@ -27,7 +29,9 @@ export function workerCount(jobs: readonly CellJob[], options: RunOptions, reque
   if (requested !== undefined) return Math.max(1, Math.min(requested, jobs.length));
   const work = jobs.reduce((s, j) => s + estimatedWork(j, options), 0);
   if (jobs.length < 2 || work < PARALLEL_WORK_THRESHOLD) return 1;
-  return Math.min(availableParallelism(), jobs.length);
+  // Cores already busy (a shared CI runner) give a worker nothing to run on.
+  const idle = Math.round(availableParallelism() - (loadavg()[0] ?? 0));
+  return Math.max(1, Math.min(idle, jobs.length));
 }
 
 export async function runCells(
