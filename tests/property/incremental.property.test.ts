@@ -25,7 +25,7 @@ const value = fc.constantFrom<InputValue>('0', '1', '0', '1', 'X', 'Z');
 // exactly what evaluating every component gives.
 describe('incremental re-evaluation', () => {
   const netlists = fc.oneof(fc.constantFrom(...STARTERS.map((s) => s.design.netlist)), randomNetlist());
-  it('sweep mode: a reused simulator matches a new one on every vector', () => {
+  it('sweep mode: a reused (and a recycling) simulator matches a new one on every vector', () => {
     fc.assert(
       fc.property(
         netlists,
@@ -33,9 +33,12 @@ describe('incremental re-evaluation', () => {
         (netlist, rows) => {
           const compiled = compile(netlist, DEFAULT_TECHNOLOGY);
           const reused = new Simulator(compiled);
+          const recycling = new Simulator(compiled);
           for (const row of rows) {
             const v: InputVector = Object.fromEntries(netlist.inputs.map((n, i) => [n, row[i % row.length]]));
-            expect(snapshot(reused.solveFresh(v))).toEqual(snapshot(new Simulator(compiled).solveFresh(v)));
+            const expected = snapshot(new Simulator(compiled).solveFresh(v));
+            expect(snapshot(reused.solveFresh(v))).toEqual(expected);
+            expect(snapshot(recycling.solveFresh(v, { recycle: true }))).toEqual(expected);
           }
         },
       ),

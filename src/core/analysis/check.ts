@@ -146,7 +146,7 @@ export function checkSweep(netlist: Netlist, options: CheckOptions = {}): CheckR
   const vectors = sweepVectors(netlist.inputs, options.undrivenInputs, options.maxInputs);
   const rows: VectorReport[] = [];
   for (const [i, v] of vectors.entries()) {
-    rows.push(checker.vectorReport(checker.simulator.solveFresh(v), i));
+    rows.push(checker.vectorReport(checker.simulator.solveFresh(v, { recycle: true }), i));
     if (options.onProgress?.(i + 1, vectors.length) === false) break;
   }
   const notes =

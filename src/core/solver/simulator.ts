@@ -63,8 +63,12 @@ export class Simulator {
   }
 
   /** Solves from an unknown state: every net starts with unknown charge (sweep mode). */
-  solveFresh(inputs: InputVector): SolveResult {
-    const result = this.run(inputs, this.lastFresh, true);
+  /**
+   * With `recycle`, the arrays of the previous solveFresh result are reused for this one: that result
+   * must not be read afterwards. Sweeps that keep only a report use it to avoid allocating per vector.
+   */
+  solveFresh(inputs: InputVector, options: { readonly recycle?: boolean } = {}): SolveResult {
+    const result = this.run(inputs, this.lastFresh, true, options.recycle === true);
     this.lastFresh = result;
     return result;
   }
@@ -73,7 +77,7 @@ export class Simulator {
   solveNext(inputs: InputVector, previous: SolveResult): SolveResult {
     if (previous.compiled !== this.compiled)
       throw new Error('solveNext: the previous result belongs to another netlist');
-    return this.run(inputs, previous, false);
+    return this.run(inputs, previous, false, false);
   }
 
   private schedule(inputs: InputVector): Schedule {
@@ -102,19 +106,22 @@ export class Simulator {
     return volts;
   }
 
-  private run(inputs: InputVector, base: SolveResult | null, fresh: boolean): SolveResult {
+  private run(inputs: InputVector, base: SolveResult | null, fresh: boolean, recycle: boolean): SolveResult {
     const c = this.compiled;
     const schedule = this.schedule(inputs);
     const { topology } = schedule;
     const sourceVolts = this.sourceVoltages(inputs, topology);
     const dirty = new Uint8Array(topology.cccCount);
     const incremental = base !== null && base.topology === topology && this.options.incremental !== false;
+    const reuse = incremental && recycle;
+    const copy = <T extends Float64Array | Uint8Array | Int32Array>(a: T): T =>
+      reuse ? a : (a.slice() as T);
     const state: NetState = {
-      volts: base ? base.volts.slice() : new Float64Array(c.netCount).fill(NaN),
-      driven: base ? base.driven.slice() : new Uint8Array(c.netCount),
-      flags: incremental ? base.flags.slice() : new Uint8Array(c.netCount),
-      limiter: incremental ? base.limiter.slice() : new Int32Array(c.netCount).fill(-1),
-      chCurrent: incremental ? base.chCurrent.slice() : new Float64Array(c.chCount),
+      volts: base ? copy(base.volts) : new Float64Array(c.netCount).fill(NaN),
+      driven: base ? copy(base.driven) : new Uint8Array(c.netCount),
+      flags: incremental ? copy(base.flags) : new Uint8Array(c.netCount),
+      limiter: incremental ? copy(base.limiter) : new Int32Array(c.netCount).fill(-1),
+      chCurrent: incremental ? copy(base.chCurrent) : new Float64Array(c.chCount),
     };
     if (incremental) {
       for (let n = 0; n < c.netCount; n++) {
@@ -131,14 +138,16 @@ export class Simulator {
       state.flags[n] = 0;
     }
     schedule.propagate(sourceVolts, state, dirty, fresh);
-    return this.finish(inputs, schedule, sourceVolts, state);
+    return this.finish(inputs, schedule, sourceVolts, state, reuse ? base : null);
   }
 
+  /** Derives levels, conduction and source currents; `recycled` lends its arrays for them. */
   private finish(
     inputs: InputVector,
     schedule: Schedule,
     sourceVolts: Float64Array,
     state: NetState,
+    recycled: SolveResult | null,
   ): SolveResult {
     const c = this.compiled;
     const { topology, frame } = schedule;
@@ -149,7 +158,7 @@ export class Simulator {
       chCurrent[e] = on && Number.isFinite(dv) ? dv / c.chOhms[e] : 0;
     }
     const { vil, vih } = c.tech;
-    const levels = new Uint8Array(c.netCount);
+    const levels = recycled ? recycled.levels : new Uint8Array(c.netCount);
     let settled = true;
     for (let n = 0; n < c.netCount; n++) {
       const v = volts[n];
@@ -157,10 +166,12 @@ export class Simulator {
         driven[n] || topology.isSource[n] ? (v <= vil ? LEVEL_0 : v >= vih ? LEVEL_1 : LEVEL_X) : LEVEL_Z;
       if (flags[n] & FLAG_OSCILLATING) settled = false;
     }
-    const sourceOut = new Float64Array(c.netCount);
+    const sourceOut = recycled ? recycled.sourceOut.fill(0) : new Float64Array(c.netCount);
     for (const e of schedule.sourceTies) {
-      if (topology.isSource[c.chA[e]]) sourceOut[c.chA[e]] += chCurrent[e];
-      if (topology.isSource[c.chB[e]]) sourceOut[c.chB[e]] -= chCurrent[e];
+      const i = chCurrent[e];
+      if (i === 0) continue;
+      if (topology.isSource[c.chA[e]]) sourceOut[c.chA[e]] += i;
+      if (topology.isSource[c.chB[e]]) sourceOut[c.chB[e]] -= i;
     }
     let staticPower = 0;
     for (const n of schedule.sourceNets)
@@ -176,7 +187,12 @@ export class Simulator {
       levels,
       flags,
       limiter: state.limiter,
-      conduction: conductionFromLevels(c, levels, volts),
+      conduction: conductionFromLevels(
+        c,
+        levels,
+        volts,
+        recycled ? recycled.conduction : new Uint8Array(c.chCount),
+      ),
       chCurrent,
       sourceOut,
       paths: currentPaths(c, topology.isSource, volts, chCurrent, sourceOut),
@@ -188,8 +204,12 @@ export class Simulator {
 }
 
 /** Conduction of every element from its gate net's level (a floating gate reads its stored charge). */
-function conductionFromLevels(c: CompiledNetlist, levels: Uint8Array, volts: Float64Array): Uint8Array {
-  const conduction = new Uint8Array(c.chCount);
+function conductionFromLevels(
+  c: CompiledNetlist,
+  levels: Uint8Array,
+  volts: Float64Array,
+  conduction: Uint8Array,
+): Uint8Array {
   for (let e = 0; e < c.chCount; e++) {
     if (c.chKind[e] === RESISTOR) {
       conduction[e] = ON;
