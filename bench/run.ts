@@ -27,14 +27,14 @@ function progress(message: string): void {
   process.stderr.write(`bench: ${message}\n`);
 }
 
-/** Floor ns per transistor per vector, on the sweep circuit (1,792 transistors). */
+/** Floor ns per transistor per vector, on the sweep circuit (1,792 transistors); fastest run, like the cases. */
 function measureFloor(): number {
   const frame = floorFrame(compile(sweepCircuit(), DEFAULT_TECHNOLOGY));
   const vectors = 8192;
   let sink = 0;
   const sample = repeat(() => (sink += floorLoop(frame, vectors)), { warmup: 3, budgetSeconds: 0.5 });
   if (sink === -1) progress('unreachable'); // keeps the checksum alive
-  return (sample.median * 1e9) / (frame.gates.length * vectors);
+  return (sample.best * 1e9) / (frame.gates.length * vectors);
 }
 
 function settleSeries(): CaseResult[] {
@@ -105,7 +105,10 @@ function printTables(floorNs: number, cases: readonly CaseResult[], memory: read
   console.log(
     formatTable(['case', 'transistors', 'vectors', 'ms', 'vectors/s', 'ns/(T·vec)', '× floor'], rows),
   );
-  console.log('\nsettle, toggle and edit rows: median ms of one vector; random rows: median ms of a batch;');
+  console.log(
+    '\nsettle, toggle and edit rows: ms for one vector; random rows: ms for a batch; both the fastest',
+  );
+  console.log('of repeated runs, the one least disturbed by other work (medians are in the JSON line);');
   console.log('sweep rows: total ms of wall clock; on a shared machine CPU time is the steadier figure:');
   for (const c of cases.filter((x) => x.cpuSeconds !== undefined)) {
     console.log(`  ${c.name}: ${c.seconds.toFixed(2)} s wall, ${(c.cpuSeconds ?? 0).toFixed(2)} s CPU`);
