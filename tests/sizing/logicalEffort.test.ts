@@ -130,6 +130,13 @@ describe('worst-case drive and the equivalent inverter', () => {
     expect(out.notes.join(' ')).toMatch(/input pin/);
   });
 
+  it('stops at the documented bound of 12 independent gate signals, saying so', () => {
+    const out = sizingReport(nand(13), UNIT_RC_TECH).outputs[0];
+    expect(out.pullDown).toBeNull();
+    expect(out.logicalEffort.A).toBeNull();
+    expect(out.notes.join(' ')).toMatch(/13 gate signals.*12/);
+  });
+
   it('does not change the netlist it is given', () => {
     const cell = nand(3);
     const copy = structuredClone(cell);
