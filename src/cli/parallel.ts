@@ -54,7 +54,11 @@ interface WorkerReply {
   readonly result: CellResult;
 }
 
-function runInWorkers(jobs: readonly CellJob[], options: RunOptions, threads: number): Promise<CellResult[]> {
+export function runInWorkers(
+  jobs: readonly CellJob[],
+  options: RunOptions,
+  threads: number,
+): Promise<CellResult[]> {
   const results: CellResult[] = new Array<CellResult>(jobs.length);
   // Largest first, so one big cell does not start last and hold up the end.
   const order = jobs
