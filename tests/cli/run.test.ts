@@ -129,6 +129,15 @@ describe('check', () => {
     expect(body['power']).toMatchObject({ frequency: 1e8, load: 1e-14, activitySource: 'random' });
   });
 
+  it('adds sizing with --sizing: the NAND2 sized like its 2:1 inverter has g = 4/3 per input', async () => {
+    // Weste & Harris, CMOS VLSI Design, 4th ed., table 4.2 (also Sutherland, Sproull, Harris, Logical
+    // Effort, table 1.1): a two-input NAND has logical effort 4/3 on each input.
+    const { body } = await json('check', LIB, '--cell', 'tw_nand2', '--sizing');
+    const sizing = body['sizing'] as { logicalEffort: Record<string, number> };
+    expect(sizing.logicalEffort['A']).toBeCloseTo(4 / 3, 6);
+    expect(sizing.logicalEffort['B']).toBeCloseTo(4 / 3, 6);
+  });
+
   it('reports a library: every cell, the broken one with its file and line, and a summary', async () => {
     const { status, body } = await json('check', BROKEN_LIB);
     expect(status).toBe(2);
