@@ -20,8 +20,13 @@ export interface Sample {
 }
 
 export interface RepeatOptions {
-  /** Untimed runs first, so the optimiser has compiled the hot paths (default 3). */
+  /**
+   * Untimed runs first, so the optimiser has compiled the hot paths: at least `warmup` runs (default 3)
+   * and at least `warmupSeconds` (default 0.05 s); the first solves of a new circuit can be 10–100
+   * times slower than the steady ones.
+   */
   readonly warmup?: number;
+  readonly warmupSeconds?: number;
   /** Keep running until this much time has been spent timing (default 0.5 s)… */
   readonly budgetSeconds?: number;
   /** …but at least this many runs (default 5) and at most this many (default 10,000). */
@@ -29,10 +34,11 @@ export interface RepeatOptions {
   readonly maxRuns?: number;
 }
 
-/** Times `fn` repeatedly. Each run is timed on its own so the median hides a stray GC pause. */
+/** Times `fn` repeatedly, each run on its own, so stray pauses (collector, other processes) stand apart. */
 export function repeat(fn: () => void, options: RepeatOptions = {}): Sample {
-  const { warmup = 3, budgetSeconds = 0.5, minRuns = 5, maxRuns = 10_000 } = options;
-  for (let i = 0; i < warmup; i++) fn();
+  const { warmup = 3, warmupSeconds = 0.05, budgetSeconds = 0.5, minRuns = 5, maxRuns = 10_000 } = options;
+  const warmStart = now();
+  for (let i = 0; i < warmup || (secondsSince(warmStart) < warmupSeconds && i < maxRuns); i++) fn();
   const times: number[] = [];
   let total = 0;
   while (times.length < minRuns || (total < budgetSeconds && times.length < maxRuns)) {
