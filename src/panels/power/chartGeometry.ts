@@ -36,10 +36,12 @@ export interface ChartFrame {
   readonly height: number;
   /** Left margin for tick labels, pixels. */
   readonly left: number;
+  /** Headroom above the highest tick so its label is not cut, pixels. */
+  readonly top: number;
   readonly maxBars: number;
 }
 
-export const DEFAULT_FRAME: ChartFrame = { width: 300, height: 120, left: 44, maxBars: 64 };
+export const DEFAULT_FRAME: ChartFrame = { width: 300, height: 120, left: 44, top: 6, maxBars: 64 };
 
 function kindOf(v: VectorPower): Bar['kind'] {
   if (v.dcWatts > 0) return 'dc';
@@ -78,7 +80,7 @@ export function chartGeometry(
     if (range === null || watts <= 0) return 0;
     const [lo, hi] = range;
     // At least 2 px, so a value sitting exactly on the lowest decade still shows.
-    return Math.max(2, (frame.height * (Math.log10(watts) - lo)) / (hi - lo));
+    return Math.max(2, ((frame.height - frame.top) * (Math.log10(watts) - lo)) / (hi - lo));
   };
   const bars = shown.map((i, k): Bar => {
     const v = vectors[i];
@@ -98,7 +100,7 @@ export function chartGeometry(
   if (range !== null) {
     const [lo, hi] = range;
     for (let e = lo; e <= hi; e++)
-      ticks.push({ y: frame.height * (1 - (e - lo) / (hi - lo)), watts: 10 ** e });
+      ticks.push({ y: frame.height - ((frame.height - frame.top) * (e - lo)) / (hi - lo), watts: 10 ** e });
   }
   return { bars, ticks, total: vectors.length };
 }
