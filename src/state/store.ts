@@ -12,8 +12,10 @@
  *   State fields (read-only outside this module):
  *     design: Design              the current design; design.netlist is derived from the sheet and
  *                                 recomputed on every document change (never edit it directly).
- *     revision: number            +1 on every document change (edit, undo, redo, open, gesture
- *                                 preview). Tag simulation jobs with it and drop stale results.
+ *     revision: number            +1 on every committed document change (edit, undo, redo, open,
+ *                                 end or cancel of a drag). Tag simulation jobs with it and drop
+ *                                 stale results. During a drag only doc.sheet moves; design and
+ *                                 geometry are re-derived when the drag ends.
  *     geometry: SheetGeometry     for drawing levels on the sheet:
  *                                   wireNets   wire id → net name
  *                                   pinNets    `${partId}.${pin}` → net name (pins: gate, drain,
@@ -153,9 +155,13 @@ export function beginGesture(): void {
   if (s.history.gestureStart === null) store.setState({ history: { ...s.history, gestureStart: s.doc } });
 }
 
-/** Shows a step of a gesture (a drag frame) without recording it. */
+/**
+ * Shows a step of a gesture (a drag frame) without recording it. Only the drawing changes: the
+ * design is re-derived, and the revision bumped, once when the gesture ends, which keeps drags
+ * smooth on large sheets and spares the analysis from solving every frame.
+ */
 export function previewDoc(doc: SheetDocument): void {
-  applyDoc(doc, store.getState().history);
+  store.setState({ doc });
 }
 
 /** Ends the gesture as one undo step (or none, if the document ended where it began). */
@@ -164,7 +170,7 @@ export function endGesture(): void {
   const start = s.history.gestureStart;
   if (start === null) return;
   if (start === s.doc || JSON.stringify(start) === JSON.stringify(s.doc)) {
-    store.setState({ history: { ...s.history, gestureStart: null } });
+    applyDoc(start, { ...s.history, gestureStart: null });
     return;
   }
   applyDoc(s.doc, recordStep(s.history, start));

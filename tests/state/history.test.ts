@@ -85,4 +85,18 @@ describe('undo history', () => {
     setSelection({ parts: [], wires: [] });
     expect(store.getState().revision).toBe(r0 + 3);
   });
+
+  it('re-derives the design once when a drag ends, not on every frame', () => {
+    addNmos(0);
+    const r = store.getState().revision;
+    const start = store.getState().doc;
+    beginGesture();
+    for (let x = 1; x <= 3; x++)
+      previewDoc({ ...start, sheet: { ...start.sheet, parts: [{ ...start.sheet.parts[0]!, x }] } });
+    expect(store.getState().revision).toBe(r);
+    expect(store.getState().doc.sheet.parts[0]!.x).toBe(3);
+    endGesture();
+    expect(store.getState().revision).toBe(r + 1);
+    expect(store.getState().design.sheet?.parts[0]!.x).toBe(3);
+  });
 });

@@ -97,7 +97,9 @@ export function autoPlace(netlist: Netlist, options: Partial<AutoPlaceOptions> =
   const builder = new SheetBuilder();
   const supplies = new Set(netlist.rails.filter((r) => r.role === 'supply').map((r) => r.net));
   const grounds = new Set(netlist.rails.filter((r) => r.role === 'ground').map((r) => r.net));
-  const distTo = (slot: Slot) => railDistances(netlist, [...(slot.upper ? supplies : grounds)]);
+  const toSupply = railDistances(netlist, [...supplies]);
+  const toGround = railDistances(netlist, [...grounds]);
+  const distTo = (slot: Slot) => (slot.upper ? toSupply : toGround);
   const placed = slots.map((slot) => {
     const y = slot.upper
       ? -o.rowPitch * (upRows - slot.row) + o.rowPitch / 2
@@ -198,15 +200,23 @@ class SheetBuilder {
       pinPositions(part).map((pin) => ({ part, pin, net: terminalNet(device, pin.pin) })),
     );
     const wired = new Set<string>();
-    for (const a of pins) {
-      if (a.pin.pin === 'gate' || supplies.has(a.net) || grounds.has(a.net)) continue;
-      const below = pins
-        .filter((b) => b.pin.x === a.pin.x && b.pin.y > a.pin.y && b.pin.pin !== 'gate')
-        .sort((p, q) => p.pin.y - q.pin.y)[0];
-      if (below && below.net === a.net && !wired.has(key(below))) {
+    // Channel pins per column, top to bottom: each pin's neighbour below is the next one.
+    const columns = new Map<number, typeof pins>();
+    for (const p of pins) {
+      if (p.pin.pin === 'gate') continue;
+      const col = columns.get(p.pin.x);
+      if (col) col.push(p);
+      else columns.set(p.pin.x, [p]);
+    }
+    for (const col of columns.values()) {
+      col.sort((p, q) => p.pin.y - q.pin.y);
+      col.forEach((a, i) => {
+        const below = col[i + 1];
+        if (!below || below.net !== a.net || supplies.has(a.net) || grounds.has(a.net)) return;
+        if (below.part === a.part || wired.has(key(a)) || wired.has(key(below))) return;
         this.wire(a.pin, below.pin, a.net);
         wired.add(key(a)).add(key(below));
-      }
+      });
     }
     for (const p of pins) {
       if (wired.has(key(p))) continue;

@@ -14,6 +14,7 @@ import { segmentGridPoints } from './routing.ts';
 
 export class UnionFind {
   private readonly parent = new Map<string, string>();
+  private readonly size = new Map<string, number>();
 
   find(a: string): string {
     let root = a;
@@ -28,13 +29,16 @@ export class UnionFind {
     return root;
   }
 
+  /** Union by size: the smaller tree hangs under the larger, so trees stay shallow. */
   union(a: string, b: string): void {
     const ra = this.find(a);
     const rb = this.find(b);
-    // The smaller key becomes the root so results do not depend on the order of unions.
     if (ra === rb) return;
-    if (ra < rb) this.parent.set(rb, ra);
-    else this.parent.set(ra, rb);
+    const sa = this.size.get(ra) ?? 1;
+    const sb = this.size.get(rb) ?? 1;
+    const [big, small] = sa >= sb ? [ra, rb] : [rb, ra];
+    this.parent.set(small, big);
+    this.size.set(big, sa + sb);
   }
 }
 
@@ -77,7 +81,9 @@ export function sheetConnectivity(sheet: Sheet): SheetConnectivity {
   for (const pin of pins) {
     const k = pointKey(pin);
     groups.find(pinKey(pin.partId, pin.pin));
-    pinsAt.set(k, [...(pinsAt.get(k) ?? []), pin]);
+    const here = pinsAt.get(k);
+    if (here) here.push(pin);
+    else pinsAt.set(k, [pin]);
   }
   for (const wire of sheet.wires) {
     groups.find(wireKey(wire.id));
@@ -90,21 +96,14 @@ export function sheetConnectivity(sheet: Sheet): SheetConnectivity {
     for (const pin of here) groups.union(first, pinKey(pin.partId, pin.pin));
     for (const w of covering.get(k) ?? []) groups.union(first, wireKey(w));
   }
+  // A crossing of two straight wires (four arms, no end or bend there) is not a join.
+  const vertices = new Set(sheet.wires.flatMap((w) => w.points.map(pointKey)));
   const junctions: { x: number; y: number }[] = [];
   for (const [k, n] of arms) {
     const total = n + (pinsAt.get(k)?.length ?? 0);
+    if (total < 3 || !(pinsAt.has(k) || vertices.has(k))) continue;
     const [x, y] = k.split(',').map(Number) as [number, number];
-    if (total >= 3 && (pinsAt.has(k) || isJoin(sheet, k, covering))) junctions.push({ x, y });
+    junctions.push({ x, y });
   }
   return { groups, pins, junctions };
-}
-
-/** A crossing of two straight wires (four arms, no end or bend there) is not a join. */
-function isJoin(sheet: Sheet, k: string, covering: Map<string, Set<string>>): boolean {
-  const ids = covering.get(k) ?? new Set<string>();
-  for (const wire of sheet.wires) {
-    if (!ids.has(wire.id)) continue;
-    if (wire.points.some((p) => pointKey(p) === k)) return true;
-  }
-  return false;
 }

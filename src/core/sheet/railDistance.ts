@@ -11,8 +11,11 @@ export function railDistances(netlist: Netlist, from: readonly string[]): Map<st
   for (const d of netlist.devices) {
     const nets = channelNets(d);
     if (!nets || nets[0] === nets[1]) continue;
-    neighbours.set(nets[0], [...(neighbours.get(nets[0]) ?? []), nets[1]]);
-    neighbours.set(nets[1], [...(neighbours.get(nets[1]) ?? []), nets[0]]);
+    for (const [from, to] of [nets, [nets[1], nets[0]]] as const) {
+      const list = neighbours.get(from);
+      if (list) list.push(to);
+      else neighbours.set(from, [to]);
+    }
   }
   const dist = new Map<string, number>(from.map((n) => [n, 0]));
   let frontier = [...from];

@@ -57,7 +57,10 @@ function collectClaims(sheet: Sheet, groups: UnionFind): Map<string, NameClaim[]
     const role = namingRole(part);
     if (role === null || part.name === '') continue;
     const root = groups.find(pinKey(part.id, 'net'));
-    claims.set(root, [...(claims.get(root) ?? []), { name: part.name, role, partId: part.id }]);
+    const claim = { name: part.name, role, partId: part.id };
+    const list = claims.get(root);
+    if (list) list.push(claim);
+    else claims.set(root, [claim]);
   }
   return claims;
 }
@@ -137,7 +140,7 @@ export function sheetToNetlist(sheet: Sheet, name = 'cell'): DerivedNetlist {
   const netlist: Netlist = {
     name,
     devices,
-    rails: rails.filter((r, i) => rails.findIndex((q) => q.net === r.net) === i),
+    rails: [...new Map(rails.map((r) => [r.net, r])).values()],
     inputs: uniqueInOrder(inputs).filter((n) => !railNets.has(n)),
     outputs: uniqueInOrder(outputs),
   };
@@ -148,7 +151,9 @@ function reportDuplicateDevices(sheet: Sheet, issues: SheetIssue[]): void {
   const byName = new Map<string, string[]>();
   for (const p of sheet.parts) {
     if (partSpec(p.kind).role.type !== 'device') continue;
-    byName.set(p.name, [...(byName.get(p.name) ?? []), p.id]);
+    const ids = byName.get(p.name);
+    if (ids) ids.push(p.id);
+    else byName.set(p.name, [p.id]);
   }
   for (const [name, ids] of byName) {
     if (ids.length > 1)
