@@ -45,9 +45,15 @@ export interface Prepared {
   readonly transistors: number;
 }
 
-export function prepare(netlist: Netlist): Prepared {
+/**
+ * Compiles `netlist` and makes its simulator. By default the simulator is incremental, as the app and
+ * checkSweep use it: a solve re-evaluates only what the changed inputs reach from the previous one.
+ * `incremental: false` makes every solve evaluate the whole circuit.
+ */
+export function prepare(netlist: Netlist, options: { readonly incremental?: boolean } = {}): Prepared {
   const compiled = compile(netlist, DEFAULT_TECHNOLOGY);
-  return { netlist, compiled, simulator: new Simulator(compiled), transistors: transistorCount(netlist) };
+  const simulator = new Simulator(compiled, options);
+  return { netlist, compiled, simulator, transistors: transistorCount(netlist) };
 }
 
 /** A repeated case: the fastest run is the figure, the median rides along. */
@@ -73,7 +79,10 @@ function countUnknownOutputs(p: Prepared, solved: SolveResult): number {
   ).length;
 }
 
-/** Time to settle one vector from an unknown state, alternating between two random vectors. */
+/**
+ * Time to settle one vector from an unknown state, alternating between two random vectors. Pass a
+ * simulator prepared with `incremental: false` to time a whole settle rather than the difference.
+ */
 export function measureSettle(name: string, p: Prepared, budgetSeconds = 0.3): CaseResult {
   const vectors = randomVectors(p.netlist.inputs, 2, 7);
   let i = 0;
@@ -100,7 +109,7 @@ function cpuSeconds(): number {
 
 /**
  * Every combination of the inputs, each from an unknown state, building each vector as a caller
- * would. Wall time is the figure; CPU time rides along because on a shared machine the wall clock
+ * would and letting the solver recycle its result arrays as checkSweep does. Wall time is the figure; CPU time rides along because on a shared machine the wall clock
  * also counts other people's work. If the first 1,024 vectors project past `limitSeconds`, the sweep
  * stops there and the figure is projected (and marked so) rather than holding the whole run hostage.
  */
@@ -112,7 +121,7 @@ export function measureSweep(name: string, p: Prepared, limitSeconds = 60): Case
   const cpuStart = cpuSeconds();
   let done = 0;
   while (done < total) {
-    p.simulator.solveFresh(vectorAt(inputs, done++));
+    p.simulator.solveFresh(vectorAt(inputs, done++), { recycle: true });
     if (done === 1024 && (secondsSince(start) * total) / done > limitSeconds) break;
   }
   const scale = total / done;

@@ -37,11 +37,15 @@ function measureFloor(): number {
   return (sample.best * 1e9) / (frame.gates.length * vectors);
 }
 
+/** Whole settles (incremental off): the cost of one vector with nothing carried over. */
 function settleSeries(): CaseResult[] {
   return FAMILIES.flatMap((family) =>
     family.sizes.map((size) => {
       progress(`settle ${family.name} ${size} ${family.unit}`);
-      return measureSettle(`settle/${family.name}/${size}`, prepare(family.make(size)));
+      return measureSettle(
+        `settle/${family.name}/${size}`,
+        prepare(family.make(size), { incremental: false }),
+      );
     }),
   );
 }
