@@ -74,7 +74,8 @@ function SweepTable() {
     <>
       <p className="rw-figures" data-testid="sweep-summary">
         {report.summary.vectors} vectors: <strong>{report.summary.errors}</strong> errors,{' '}
-        <strong>{report.summary.warnings}</strong> warnings · {result.elapsedMs.toFixed(0)} ms
+        <strong>{report.summary.warnings}</strong> {report.summary.warnings === 1 ? 'warning' : 'warnings'} ·{' '}
+        {result.elapsedMs.toFixed(0)} ms
       </p>
       {report.notes.map((n) => (
         <p key={n} className="rw-muted">

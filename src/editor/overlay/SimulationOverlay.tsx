@@ -1,73 +1,80 @@
-import { useMemo, useState } from 'react';
+import { useEffect, useMemo, useRef, useState } from 'react';
 import { Label, Layer, Tag, Text } from 'react-konva';
-import type { SheetWire } from '../../core/sheet/types.ts';
+import type Konva from 'konva';
+import { buildIndex, hitTest, type Hit } from '../../core/sheet/hitTest.ts';
+import type { Point } from '../../core/sheet/types.ts';
 import { formatVolts } from '../../core/view/format.ts';
+import { overlayPaint } from '../../core/view/overlayPaint.ts';
 import { traceRoute } from '../../core/view/traceRoute.ts';
-import { lookOf, type NetState } from '../../core/view/visualLanguage.ts';
-import { partSpec } from '../../core/sheet/parts/index.ts';
+import { lookOf, type LookName } from '../../core/view/visualLanguage.ts';
 import { useSimulation } from '../../state/simulation.ts';
+import type { SheetGeometry } from '../../state/document.ts';
 import { useStore } from '../../state/store.ts';
 import { CurrentTrace } from './CurrentTraces.tsx';
-import { DeviceMark } from './DeviceMarks.tsx';
-import { NetMark, WireLevel } from './WireLevels.tsx';
-import { PartLevels } from './PinLevels.tsx';
-import type { SolvedView } from '../../core/view/solvedView.ts';
-import type { SheetGeometry } from '../../state/document.ts';
+import { DevicePainter, MarkPainter, StrokePainter } from './Painters.tsx';
 
-type Hover = { net: string; x: number; y: number } | null;
+type Hover = { readonly net: string; readonly at: Point } | null;
 
-/** The first wire of each net: where its level mark is written. */
-function firstWires(
-  wires: readonly SheetWire[],
-  wireNets: Readonly<Record<string, string>>,
-): Map<string, SheetWire> {
-  const first = new Map<string, SheetWire>();
-  for (const w of wires) {
-    const net = wireNets[w.id];
-    if (net !== undefined && !first.has(net)) first.set(net, w);
-  }
-  return first;
+function netOfHit(hit: Hit | null, geometry: SheetGeometry): string | undefined {
+  if (hit === null) return undefined;
+  if (hit.type === 'wire') return geometry.wireNets[hit.wireId];
+  if (hit.type === 'pin') return geometry.pinNets[`${hit.partId}.${hit.pin}`];
+  return geometry.pinNets[`${hit.partId}.net`];
 }
 
-/** Each pin's net state, by pin name, for one part. */
-function pinStatesOf(
-  partId: string,
-  pins: readonly string[],
-  geometry: SheetGeometry,
-  live: SolvedView,
-): Record<string, NetState | undefined> {
-  return Object.fromEntries(
-    pins.map((pin) => [pin, live.nets.get(geometry.pinNets[`${partId}.${pin}`] ?? '')]),
-  );
-}
-
-function HoverReadout({ hover }: { hover: NonNullable<Hover> }) {
-  const state = useSimulation((s) => s.live?.nets.get(hover.net));
-  if (state === undefined) return null;
+/** The estimated voltage of the wire or pin under the pointer, found by pure hit testing. */
+function HoverLayer() {
+  const layer = useRef<Konva.Layer>(null);
+  const sheet = useStore((s) => s.doc.sheet);
+  const geometry = useStore((s) => s.geometry);
+  const index = useMemo(() => buildIndex(sheet), [sheet]);
+  const [hover, setHover] = useState<Hover>(null);
+  const state = useSimulation((s) => (hover === null ? undefined : s.live?.nets.get(hover.net)));
+  useEffect(() => {
+    const stage = layer.current?.getStage();
+    if (!stage) return;
+    const onMove = (): void => {
+      const at = layer.current?.getRelativePointerPosition();
+      const net = at ? netOfHit(hitTest(index, at), geometry) : undefined;
+      setHover(at && net !== undefined ? { net, at } : null);
+    };
+    stage.on('mousemove.rwOverlay', onMove);
+    stage.on('mouseleave.rwOverlay', () => setHover(null));
+    return () => {
+      stage.off('.rwOverlay');
+    };
+  }, [index, geometry]);
   return (
-    <Label x={hover.x + 0.4} y={hover.y - 1.2} listening={false}>
-      <Tag fill="#ffffff" stroke="#2b2d33" strokeWidth={0.04} cornerRadius={0.12} />
-      <Text
-        text={`${hover.net}  ${formatVolts(state.volts)}  ${lookOf(state).description}`}
-        fontSize={0.55}
-        padding={0.2}
-        fill="#2b2d33"
-      />
-    </Label>
+    <Layer ref={layer} listening={false}>
+      {hover !== null && state !== undefined && (
+        <Label x={hover.at.x + 0.5} y={hover.at.y - 1.3}>
+          <Tag fill="#ffffff" stroke="#2b2d33" strokeWidth={0.04} cornerRadius={0.12} />
+          <Text
+            text={`${hover.net}  ${formatVolts(state.volts)}  ${lookOf(state).description}`}
+            fontSize={0.55}
+            padding={0.2}
+            fill="#2b2d33"
+          />
+        </Label>
+      )}
+    </Layer>
   );
 }
 
 /**
- * The simulation drawn over the sheet for the selected vector: every wire in its level's look with a
- * mark, each transistor's on/off/maybe shape, static current paths as glowing traces with arrows and
- * their current, and the estimated voltage of the wire under the pointer.
+ * The simulation drawn over the sheet for the selected vector: every wire and pin lead in its
+ * level's look with a mark, each transistor's on/off/maybe shape, static current paths as glowing
+ * traces with arrows and their current, and the estimated voltage of what is under the pointer.
  */
 export function SimulationOverlay() {
   const live = useSimulation((s) => s.live);
   const sheet = useStore((s) => s.doc.sheet);
   const geometry = useStore((s) => s.geometry);
   const scale = useStore((s) => s.viewport.scale);
-  const [hover, setHover] = useState<Hover>(null);
+  const paint = useMemo(
+    () => (live === null ? null : overlayPaint(sheet, geometry, live.nets, live.devices)),
+    [live, sheet, geometry],
+  );
   const routes = useMemo(
     () =>
       live === null
@@ -75,47 +82,22 @@ export function SimulationOverlay() {
         : live.traces.map((t) => ({ trace: t, route: traceRoute(sheet, geometry, t.chain) })),
     [live, sheet, geometry],
   );
-  const marks = useMemo(() => firstWires(sheet.wires, geometry.wireNets), [sheet, geometry]);
-  if (live === null) return null;
+  if (paint === null) return null;
   return (
-    <Layer>
-      {sheet.wires.map((w) => {
-        const net = geometry.wireNets[w.id];
-        const state = net === undefined ? undefined : live.nets.get(net);
-        return net === undefined || state === undefined ? null : (
-          <WireLevel key={w.id} wire={w} net={net} state={state} scale={scale} onHover={setHover} />
-        );
-      })}
-      {sheet.parts.map((p) => (
-        <PartLevels
-          key={`levels-${p.id}`}
-          part={p}
-          pinStates={pinStatesOf(
-            p.id,
-            partSpec(p.kind).pins.map((q) => q.name),
-            geometry,
-            live,
-          )}
-          scale={scale}
-        />
-      ))}
-      {[...marks].map(([net, w]) => {
-        const state = live.nets.get(net);
-        return state === undefined ? null : <NetMark key={net} wire={w} state={state} />;
-      })}
-      {sheet.parts.map((p) => {
-        const conduction =
-          p.kind === 'nmos' || p.kind === 'pmos'
-            ? live.devices.get(geometry.partDevices[p.id] ?? '')
-            : undefined;
-        return conduction === undefined ? null : <DeviceMark key={p.id} part={p} conduction={conduction} />;
-      })}
-      {routes.map(({ trace, route }, i) =>
-        route === null ? null : (
-          <CurrentTrace key={`${trace.chain.join('>')}-${i}`} route={route} current={trace.current} />
-        ),
-      )}
-      {hover !== null && <HoverReadout hover={hover} />}
-    </Layer>
+    <>
+      <Layer listening={false}>
+        {[...paint.strokes].map(([look, lines]) => (
+          <StrokePainter key={look} look={look as LookName} lines={lines} scale={scale} />
+        ))}
+        <DevicePainter devices={paint.devices} />
+        {routes.map(({ trace, route }, i) =>
+          route === null ? null : (
+            <CurrentTrace key={`${trace.chain.join('>')}-${i}`} route={route} current={trace.current} />
+          ),
+        )}
+        <MarkPainter marks={paint.marks} />
+      </Layer>
+      <HoverLayer />
+    </>
   );
 }
