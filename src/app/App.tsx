@@ -11,6 +11,7 @@ import { PropertiesForm } from './PropertiesForm.tsx';
 import { MessageBar } from './MessageBar.tsx';
 import { HelpOverlay } from './HelpOverlay.tsx';
 import { AboutBox } from './AboutBox.tsx';
+import { CellChooser } from './CellChooser.tsx';
 import { handleKey } from './keyboard.ts';
 import { OPEN_ACCEPT, OPEN_INPUT_ID, openFile } from './files.ts';
 import './app.css';
@@ -62,6 +63,7 @@ export function App() {
       <OpenFileInput />
       {overlay === 'help' ? <HelpOverlay /> : null}
       {overlay === 'about' ? <AboutBox /> : null}
+      <CellChooser />
     </div>
   );
 }

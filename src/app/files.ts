@@ -16,6 +16,7 @@ import { loadDesign, showMessage, store } from '../state/store.ts';
 import { currentStage } from '../editor/stageRef.ts';
 import { fitToView } from '../editor/actions.ts';
 import { downloadText, downloadUrl, safeFileName } from './download.ts';
+import { offerCells } from './cellChoice.ts';
 
 export const DESIGN_EXTENSION = '.railwise.json';
 const SPICE_EXTENSIONS = ['.sp', '.spi', '.cir', '.net', '.cdl', '.spice'];
@@ -29,46 +30,51 @@ export function isSpiceFile(fileName: string): boolean {
   return SPICE_EXTENSIONS.some((ext) => lower.endsWith(ext));
 }
 
-/** Reads a SPICE text into a design: the first cell, with a note naming the others in a library. */
-export function designFromSpice(text: string, fileName: string): { design: Design; note: string | null } {
+export interface SpiceDesigns {
+  /** One design per readable cell, in file order. */
+  readonly designs: readonly Design[];
+  /** Cells of a library that could not be read, each with its reason (file and line). */
+  readonly failed: readonly string[];
+}
+
+/** Reads a SPICE text into designs, one per cell; throws when no cell at all can be read. */
+export function designsFromSpice(text: string, fileName: string): SpiceDesigns {
   const result = importSpice(text, fileName);
-  const cell = result.cells[0];
-  if (!cell) {
+  if (result.cells.length === 0) {
     const first = result.failed[0];
     throw first ? first.error : new SpiceImportError(fileName, 1, 'no cell could be read');
   }
-  const others = result.cells.slice(1).map((c) => c.name);
-  const failed = result.failed.map((f) => `${f.name} (${f.error.message})`);
-  const note =
-    others.length + failed.length === 0
-      ? null
-      : [
-          others.length ? `also in the file: ${others.join(', ')}` : '',
-          failed.length ? `not readable: ${failed.join('; ')}` : '',
-        ]
-          .filter(Boolean)
-          .join('. ');
-  const design: Design = {
+  const designs = result.cells.map((cell): Design => ({
     name: cell.name,
     technology: DEFAULT_TECHNOLOGY,
     netlist: cell.netlist,
     expectations: cell.expectations,
     sequences: [],
-  };
-  return { design, note };
+  }));
+  return { designs, failed: result.failed.map((f) => `${f.name} (${f.error.message})`) };
 }
 
-/** Opens text as a design file or a SPICE netlist. Returns whether the design was replaced. */
+/** Loads one imported cell and says where it came from. */
+export function loadImportedCell(design: Design, fileName: string, failed: readonly string[]): void {
+  loadDesign(design);
+  fitToView();
+  const note = failed.length ? `. Not readable: ${failed.join('; ')}` : '';
+  showMessage('info', `Imported ${design.name} from ${fileName}${note}`);
+}
+
+function openSpice(text: string, fileName: string): void {
+  const { designs, failed } = designsFromSpice(text, fileName);
+  // A library: let the designer pick the cell; nothing changes until they do.
+  if (designs.length > 1) offerCells(fileName, designs, failed);
+  else loadImportedCell(designs[0]!, fileName, failed);
+}
+
+/** Opens text as a design file or a SPICE netlist. Returns false when the file was refused. */
 export function openText(text: string, fileName: string): boolean {
   try {
-    if (isSpiceFile(fileName)) {
-      const { design, note } = designFromSpice(text, fileName);
-      loadDesign(design);
-      showMessage('info', `Imported ${design.name} from ${fileName}${note ? `. ${note}` : ''}`);
-    } else {
-      loadDesign(parseDesignFile(text, fileName));
-      showMessage('info', `Opened ${fileName}`);
-    }
+    if (isSpiceFile(fileName)) return (openSpice(text, fileName), true);
+    loadDesign(parseDesignFile(text, fileName));
+    showMessage('info', `Opened ${fileName}`);
     fitToView();
     return true;
   } catch (e) {

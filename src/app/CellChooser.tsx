@@ -1,0 +1,32 @@
+import { Dialog } from './Dialog.tsx';
+import { closeCellChoice, useCellChoice } from './cellChoice.ts';
+import { loadImportedCell } from './files.ts';
+
+/** Picks one cell of an imported library; closing it leaves the open design as it was. */
+export function CellChooser() {
+  const choice = useCellChoice();
+  if (!choice) return null;
+  return (
+    <Dialog title={`Cells in ${choice.fileName}`} onClose={closeCellChoice}>
+      <p>This file is a library. Pick the cell to open:</p>
+      <ul className="rw-starters">
+        {choice.designs.map((d) => (
+          <li key={d.name}>
+            <button
+              type="button"
+              onClick={() => {
+                closeCellChoice();
+                loadImportedCell(d, choice.fileName, choice.failed);
+              }}
+            >
+              {d.name} — {d.netlist.devices.length} devices, inputs {d.netlist.inputs.join(' ') || 'none'}
+            </button>
+          </li>
+        ))}
+      </ul>
+      {choice.failed.length > 0 ? (
+        <p className="rw-field-error">Not readable: {choice.failed.join('; ')}</p>
+      ) : null}
+    </Dialog>
+  );
+}
