@@ -1,13 +1,8 @@
 /** Worker threads give the same results, in the same order, as the main thread. */
 import { describe, expect, it } from 'vitest';
 import { loadCells, type CellJob } from '../../src/cli/loadCells.ts';
-import {
-  PARALLEL_WORK_THRESHOLD,
-  runCells,
-  runInWorkers,
-  workerCount,
-  type RunOptions,
-} from '../../src/cli/parallel.ts';
+import { PARALLEL_WORK_THRESHOLD, runCells, runInWorkers, workerCount } from '../../src/cli/parallel.ts';
+import type { RunOptions } from '../../src/cli/runCell.ts';
 
 const OPTIONS: RunOptions = { allNets: false, undriven: false, sizing: false };
 
