@@ -40,7 +40,7 @@ function truthTable(json: CellJson, rows: readonly VectorJson[], c: Colour): str
   }
   const shown =
     rows.length <= MAX_TABLE_ROWS ? rows : rows.filter((r) => r.findings.length > 0).slice(0, MAX_TABLE_ROWS);
-  const headers = [...json.inputs, '│', ...json.outputs, '│', 'I(supply)', ' marks'];
+  const headers = [...json.inputs, '│', ...json.outputs, '│', 'I(supply)', 'marks'];
   const widths = headers.map((h) => Math.max(h.length, 1));
   widths[json.inputs.length + json.outputs.length + 2] = Math.max(9, widths.at(-2) ?? 9);
   const pad = (s: string, i: number, raw = s): string =>

@@ -142,6 +142,10 @@ describe('lenient reading of hand-written files', () => {
     });
   });
 
+  it('ignores a byte-order mark', () => {
+    expect(parseDesignFile(`\uFEFF${serializeDesign(design)}`, 'x.json')).toEqual(design);
+  });
+
   it('fills single missing technology fields and accepts 0 and 1 as numbers in steps', () => {
     const text = edited((doc) => {
       doc['technology'] = { vdd: 1.8 };

@@ -77,6 +77,11 @@ MN y a gnd GND Nch W=1u L=0.25u
     expect(result.cells[0]?.name).toBe('inv');
   });
 
+  it('ignores a byte-order mark and Windows line ends', () => {
+    const n = only(`\uFEFF${INVERTER.replace(/\n/g, '\r\n')}`);
+    expect(n.devices.map((d) => d.name)).toEqual(['MP', 'MN']);
+  });
+
   it('skips analysis commands with a note', () => {
     const result = importSpice(`${INVERTER}.option post\n.tran 1p 1n\n.end\n.tran ignored after end`, FILE);
     expect(result.notes.filter((n) => n.includes('ignored'))).toHaveLength(2);
@@ -195,6 +200,13 @@ X2 mid Y VDD GND inv
     expect(n.name).toBe('buf');
     expect(n.devices.map((d) => d.name)).toEqual(['X1/MP', 'X1/MN', 'X2/MP', 'X2/MN']);
     expect(mos(n, 'X2/MN')).toMatchObject({ gate: 'mid', drain: 'Y', source: 'GND' });
+  });
+
+  it('reads the CDL form of an instance, with a / before the subcircuit name', () => {
+    const n = only(
+      `${INVERTER}.subckt buf A Y VDD GND\nX1 A mid VDD GND / inv\nX2 mid Y VDD GND / inv\n.ends`,
+    );
+    expect(n.devices).toHaveLength(4);
   });
 
   it('prefixes internal nets of nested instances with the instance path', () => {

@@ -75,7 +75,7 @@ export function serializeDesign(design: Design): string {
 function parseJson(text: string, fileName: string): RawDocument {
   let value: unknown;
   try {
-    value = JSON.parse(text);
+    value = JSON.parse(text.replace(/^\uFEFF/, ''));
   } catch (e) {
     const message = e instanceof Error ? e.message : String(e);
     throw new DesignFileError(fileName, '', `not valid JSON: ${message}`, jsonErrorLine(text, message));

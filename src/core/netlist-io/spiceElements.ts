@@ -181,7 +181,8 @@ function readSource(name: string, args: readonly string[], text: string, line: n
 }
 
 function readInstance(name: string, args: readonly string[], line: number): InstanceElement {
-  const { positional, params } = splitParams(args);
+  // CDL writes a lone `/` between the nets and the subcircuit name: `X1 A Y / inv`.
+  const { positional, params } = splitParams(args.filter((a) => a !== '/'));
   const subckt = positional[positional.length - 1];
   if (subckt === undefined) throw new ElementError(`${name}: an X line needs its nets and a subcircuit name`);
   return {

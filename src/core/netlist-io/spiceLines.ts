@@ -20,7 +20,8 @@ const INLINE_COMMENT = /(^|\s)[$;].*$/;
 
 export function logicalLines(text: string): LogicalLine[] {
   const out: { line: number; text: string; kind: LogicalLine['kind'] }[] = [];
-  const physical = text.split(/\r\n|\r|\n/);
+  // A byte-order mark, as some editors on Windows write, is not part of the first line.
+  const physical = text.replace(/^\uFEFF/, '').split(/\r\n|\r|\n/);
   physical.forEach((raw, i) => {
     const trimmed = raw.trim();
     const directive = DIRECTIVE.exec(trimmed);
