@@ -86,12 +86,19 @@ function humanReport(
     'json' in r ? formatCell(r.json as CellJson, c) : formatFailure(r.failure, c),
   );
   const s = librarySummary(results);
-  const total = asLibrary
-    ? [
-        `${s.cells} cells: ${s.passed} pass, ${s.failed} with errors, ${s.unusable} unusable; ${s.errors} errors, ${s.warnings} warnings`,
-      ]
-    : [];
+  const total = asLibrary ? [libraryTotals(results, s)] : [];
   return [...blocks, ...total, c.dim(CAUTION)].join('\n\n');
+}
+
+/** The closing lines a CI log is read by: counts, then which cells need attention. */
+function libraryTotals(results: readonly CellResult[], s: Record<string, number>): string {
+  const failing = results.flatMap((r) => ('json' in r && r.json.summary.errors > 0 ? [r.json.cell] : []));
+  const unusable = results.flatMap((r) => ('failure' in r ? [r.failure.cell ?? r.failure.file] : []));
+  return [
+    `${s['cells']} cells: ${s['passed']} pass, ${s['failed']} with errors, ${s['unusable']} unusable; ${s['errors']} errors, ${s['warnings']} warnings`,
+    ...(failing.length > 0 ? [`  with errors: ${failing.join(', ')}`] : []),
+    ...(unusable.length > 0 ? [`  unusable: ${unusable.join(', ')}`] : []),
+  ].join('\n');
 }
 
 function sum(values: readonly number[]): number {
