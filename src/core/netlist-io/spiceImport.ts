@@ -42,7 +42,6 @@ const SUPPLY_NAMES = ['vdd', 'vcc'];
 export function importSpice(text: string, fileName: string, options: SpiceImportOptions = {}): SpiceImport {
   const file = parseSpice(text, fileName);
   const ctx = cellContext(file, fileName, options);
-  const shared = topLevelSources(file.top);
   const notes = [...file.notes];
   if (file.top.elements.some((e) => e.kind !== 'source')) {
     const unused = file.subckts.filter(
@@ -54,13 +53,20 @@ export function importSpice(text: string, fileName: string, options: SpiceImport
     return { file: fileName, isLibrary: false, cells: [buildCell(spec, ctx)], failed: [], notes };
   }
   const roots = file.subckts.filter((s) => !file.subckts.some((o) => o !== s && instantiated(o, s)));
-  if (roots.length === 0) {
-    const line = file.subckts[0]?.line ?? 1;
-    throw new SpiceImportError(
-      fileName,
-      line,
-      'no devices found: the file holds no elements and no .subckt that could be a cell',
-    );
+  const [only] = roots;
+  if (only === undefined) {
+    const detail = 'no devices found: the file holds no elements and no .subckt that could be a cell';
+    throw new SpiceImportError(fileName, file.subckts[0]?.line ?? 1, detail);
+  }
+  const shared = topLevelSources(file.top);
+  if (roots.length === 1) {
+    const spec: CellSpec = {
+      name: only.name,
+      body: withTopDirectives(only, file.top),
+      ports: only.ports,
+      sharedSources: shared,
+    };
+    return { file: fileName, isLibrary: false, cells: [buildCell(spec, ctx)], failed: [], notes };
   }
   const specs = roots.map((s): CellSpec => ({
     name: s.name,
@@ -68,11 +74,14 @@ export function importSpice(text: string, fileName: string, options: SpiceImport
     ports: s.ports,
     sharedSources: shared,
   }));
-  const [only] = specs;
-  if (only !== undefined && specs.length === 1) {
-    const cell = buildCell({ ...only, body: withTopDirectives(only.body, file.top) }, ctx);
-    return { file: fileName, isLibrary: false, cells: [cell], failed: [], notes };
-  }
+  return { file: fileName, isLibrary: true, ...buildEach(specs, ctx), notes };
+}
+
+/** Every cell of a library; one that cannot be built is set aside with its error. */
+function buildEach(
+  specs: readonly CellSpec[],
+  ctx: CellContext,
+): { cells: ImportedCell[]; failed: FailedCell[] } {
   const cells: ImportedCell[] = [];
   const failed: FailedCell[] = [];
   for (const spec of specs) {
@@ -83,7 +92,7 @@ export function importSpice(text: string, fileName: string, options: SpiceImport
       failed.push({ name: spec.name, error: e });
     }
   }
-  return { file: fileName, isLibrary: true, cells, failed, notes };
+  return { cells, failed };
 }
 
 function instantiated(body: Body, sub: Subckt): boolean {
