@@ -4,7 +4,7 @@
  * A stored design that cannot be read is kept aside (never overwritten silently) and reported.
  */
 import type { Design } from '../core/model/design.ts';
-import { DesignFileError, parseDesignFile, serializeDesign } from '../core/format/designFile.ts';
+import { parseDesignFile, serializeDesign } from '../core/format/designFile.ts';
 import { store } from '../state/store.ts';
 
 export const AUTOSAVE_KEY = 'railwise.autosave.v1';
@@ -23,11 +23,11 @@ export function restoreAutosave(storage: Storage = localStorage): RestoreResult 
   try {
     return { design: parseDesignFile(text, 'autosave'), problem: null };
   } catch (e) {
-    if (!(e instanceof DesignFileError)) throw e;
+    const detail = e instanceof Error ? e.message : String(e);
     storage.setItem(RESCUE_KEY, text);
     return {
       design: null,
-      problem: `The autosaved design could not be read (${e.message}); its text is kept under "${RESCUE_KEY}" in this browser's storage.`,
+      problem: `The autosaved design could not be read (${detail}); its text is kept under "${RESCUE_KEY}" in this browser's storage.`,
     };
   }
 }

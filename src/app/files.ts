@@ -78,11 +78,14 @@ export function openText(text: string, fileName: string): boolean {
     fitToView();
     return true;
   } catch (e) {
-    if (e instanceof DesignFileError || e instanceof SpiceImportError) {
-      showMessage('error', `Could not open: ${e.message}. Your design is unchanged.`);
-      return false;
-    }
-    throw e;
+    // Known errors name the file and line or field; anything else is still a message, never a crash.
+    const known = e instanceof DesignFileError || e instanceof SpiceImportError;
+    const detail = e instanceof Error ? e.message : String(e);
+    showMessage(
+      'error',
+      `Could not open${known ? '' : ` ${fileName}`}: ${detail}. Your design is unchanged.`,
+    );
+    return false;
   }
 }
 

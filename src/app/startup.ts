@@ -11,8 +11,18 @@ export const DEMO_STARTER = 'nand2';
 
 export function openFirstDesign(storage: Storage = localStorage): void {
   const restored = restoreAutosave(storage);
-  const design = restored.design ?? (starterById(DEMO_STARTER) ?? STARTERS[0]!).design;
-  resetStore(documentFromDesign(design));
+  const demo = (starterById(DEMO_STARTER) ?? STARTERS[0]!).design;
+  try {
+    resetStore(documentFromDesign(restored.design ?? demo));
+  } catch (e) {
+    // A stored design that cannot even be placed must not keep the page from opening.
+    resetStore(documentFromDesign(demo));
+    showMessage(
+      'error',
+      `The autosaved design could not be shown (${e instanceof Error ? e.message : String(e)}).`,
+    );
+    return;
+  }
   if (restored.problem) showMessage('error', restored.problem);
   else if (!restored.design) {
     showMessage(
