@@ -62,18 +62,20 @@ function instance(d: Device, hops: Hops): string {
 
 function mosInstance(d: MosDevice, name: string, hops: Hops): string {
   const rail = d.kind === 'nmos' ? hops.ground : hops.supply;
-  const toward = (m: ReadonlyMap<string, number>): number =>
-    (m.get(d.drain) ?? Infinity) - (m.get(d.source) ?? Infinity) || 0;
-  // Positive: the source end is nearer, so it is the data input. NaN (both unreachable) counts as a tie.
-  const byRail = toward(rail);
-  const order = Number.isNaN(byRail) || byRail === 0 ? toward(hops.input) : byRail;
+  const order = nearerEnd(d, rail) || nearerEnd(d, hops.input);
   const gate = identifier(d.gate);
-  if (Number.isNaN(order) || order === 0) {
+  if (order === 0) {
     const primitive = d.kind === 'nmos' ? 'tranif1' : 'tranif0';
     return `${primitive} ${name} (${identifier(d.drain)}, ${identifier(d.source)}, ${gate});`;
   }
   const [output, data] = order > 0 ? [d.drain, d.source] : [d.source, d.drain];
   return `${d.kind} ${name} (${identifier(output)}, ${identifier(data)}, ${gate});`;
+}
+
+/** +1 when the source end is nearer (it is the data input), -1 when the drain is, 0 for a tie. */
+function nearerEnd(d: MosDevice, hops: ReadonlyMap<string, number>): number {
+  const far = Number.MAX_SAFE_INTEGER;
+  return Math.sign((hops.get(d.drain) ?? far) - (hops.get(d.source) ?? far));
 }
 
 /** Channel hops to the nearest ground, supply and input pin; a search never passes through a rail or pin. */
