@@ -1,3 +1,4 @@
+import { useMemo, useState } from 'react';
 import type { Finding, VectorReport } from '../core/analysis/report.ts';
 import { formatCurrent, formatPower } from '../core/view/format.ts';
 import { chainText, splitChain } from '../core/view/highlight.ts';
@@ -65,6 +66,28 @@ function VectorFindings() {
   );
 }
 
+/** Every net's level and voltage, built only while unfolded: a big sheet has thousands of nets. */
+function EveryNet() {
+  const live = useSimulation((s) => s.live);
+  const [open, setOpen] = useState(false);
+  const nets = useMemo(
+    () =>
+      live === null || !open
+        ? []
+        : live.netNames.flatMap((n) => {
+            const state = live.net(n);
+            return state === undefined ? [] : [[n, state] as const];
+          }),
+    [live, open],
+  );
+  return (
+    <details className="rw-subsection" onToggle={(e) => setOpen(e.currentTarget.open)}>
+      <summary>Every net ({live?.netNames.length ?? 0})</summary>
+      {open && <NetList nets={nets} onPick={pickNet} />}
+    </details>
+  );
+}
+
 /** The selected vector: its inputs, the sheet's levels, current paths and findings. */
 export function VectorSection() {
   const design = useSimulation((s) => s.design);
@@ -72,7 +95,6 @@ export function VectorSection() {
   const live = useSimulation((s) => s.live);
   const liveError = useSimulation((s) => s.liveError);
   if (design === null) return null;
-  const nets = live === null ? [] : [...live.nets];
   return (
     <Section title="Vector" testId="vector-section">
       <InputStrip inputs={design.netlist.inputs} vector={vector} onToggle={toggleInput} onStep={stepVector} />
@@ -91,10 +113,7 @@ export function VectorSection() {
       <CurrentPaths />
       <h4>Findings</h4>
       <VectorFindings />
-      <details className="rw-subsection">
-        <summary>Every net ({nets.length})</summary>
-        <NetList nets={nets} onPick={pickNet} />
-      </details>
+      <EveryNet />
     </Section>
   );
 }

@@ -70,6 +70,11 @@ describe('analysis panel', () => {
     await click(rows[0]);
     expect(byTestId('bit-A')?.textContent).toContain('1');
     expect(byTestId('bit-B')?.textContent).toContain('0');
+    const everyNet = host.querySelector('details.rw-subsection') as HTMLDetailsElement;
+    await act(async () => {
+      everyNet.open = true;
+      everyNet.dispatchEvent(new Event('toggle'));
+    });
     expect(byTestId('net-Y')?.textContent).toContain('Z');
   });
 

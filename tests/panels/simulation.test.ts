@@ -63,11 +63,11 @@ describe('live solve', () => {
   it('re-solves on a toggle and steps through combinations', () => {
     analyseDesign(design(inverter), 1);
     expect(state().vector).toEqual({ A: '0' });
-    expect(state().live?.nets.get('Y')?.level).toBe('1');
-    expect(state().live?.devices.get('P1')).toBe('on');
-    expect(state().live?.devices.get('N1')).toBe('off');
+    expect(state().live?.net('Y')?.level).toBe('1');
+    expect(state().live?.device('P1')).toBe('on');
+    expect(state().live?.device('N1')).toBe('off');
     toggleInput('A');
-    expect(state().live?.nets.get('Y')?.level).toBe('0');
+    expect(state().live?.net('Y')?.level).toBe('0');
     stepVector(1);
     expect(state().vector).toEqual({ A: '0' });
   });
@@ -88,7 +88,7 @@ describe('live solve', () => {
       { SN: '0', RN: '1' },
       { SN: '1', RN: '1' },
     ]);
-    expect(state().live?.nets.get('Q')?.level).toBe('1');
+    expect(state().live?.net('Q')?.level).toBe('1');
     expect(state().selectedStep).toBe(1);
   });
 });
@@ -140,7 +140,7 @@ describe('sweep jobs and revisions', () => {
     await settle();
     selectRow(3);
     expect(state().vector).toEqual({ A: '1', B: '1' });
-    expect(state().live?.nets.get('Y')?.level).toBe('0');
+    expect(state().live?.net('Y')?.level).toBe('0');
     expect(state().selectedRow).toBe(3);
   });
 

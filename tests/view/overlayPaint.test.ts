@@ -4,7 +4,7 @@ import { sheetToNetlist } from '../../src/core/sheet/toNetlist.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import { LiveSession } from '../../src/core/view/liveSession.ts';
 import { solvedView } from '../../src/core/view/solvedView.ts';
-import { overlayPaint } from '../../src/core/view/overlayPaint.ts';
+import { overlayPaint, paintLayout } from '../../src/core/view/overlayPaint.ts';
 import { inverter, nand2MissingPullUp } from './circuits.ts';
 import type { Netlist } from '../../src/core/model/netlist.ts';
 import type { InputVector } from '../../src/core/model/design.ts';
@@ -15,7 +15,11 @@ function painted(netlist: Netlist, vector: InputVector) {
   const derived = sheetToNetlist(sheet, netlist.name);
   const session = new LiveSession(derived.netlist, DEFAULT_TECHNOLOGY);
   const view = solvedView(session.compiled, session.solve(vector));
-  const paint = overlayPaint(sheet, derived, view.nets, view.devices);
+  const paint = overlayPaint(
+    paintLayout(sheet, derived),
+    (n) => view.net(n),
+    (d) => view.device(d),
+  );
   const pointsOf = (look: string) => (paint.strokes.get(look as never) ?? []).length;
   return { paint, pointsOf, derived, sheet };
 }

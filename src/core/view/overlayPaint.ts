@@ -2,8 +2,11 @@
  * Everything the simulation overlay paints for one vector, as plain numbers grouped by look. The
  * canvas then draws each group in one pass (a few shapes, not one per wire), which keeps a
  * 2,000-device sheet smooth; and what is drawn can be tested without a canvas.
+ *
+ * Two phases: the layout (which segment belongs to which net, where marks go) depends only on the
+ * drawing and is built once per edit; painting a vector then only looks up each net's state.
  */
-import type { Point, Sheet, SheetPart } from '../sheet/types.ts';
+import type { Point, Sheet } from '../sheet/types.ts';
 import { toWorld } from '../sheet/geometry.ts';
 import { pinLeads } from './pinLeads.ts';
 import {
@@ -22,6 +25,21 @@ export interface PaintGeometry {
   readonly partDevices: Readonly<Record<string, string>>;
 }
 
+interface Spot extends Point {
+  readonly name: string;
+}
+
+export interface PaintLayout {
+  /** The nets drawn, each once; segments and marks refer to them by position. */
+  readonly nets: readonly string[];
+  /** Wire polylines and pin leads, each with its net (flat x, y lists in grid units). */
+  readonly segments: readonly { readonly net: number; readonly points: readonly number[] }[];
+  /** Where each net's level mark is written: once on its first wire, and at every naming part. */
+  readonly marks: readonly (Point & { readonly net: number })[];
+  /** Where each transistor's on/off/maybe mark sits, by device name. */
+  readonly devices: readonly Spot[];
+}
+
 export interface PaintedMark {
   readonly x: number;
   readonly y: number;
@@ -37,7 +55,7 @@ export interface PaintedDevice {
 }
 
 export interface OverlayPaint {
-  /** Polylines (flat x, y lists in grid units) per look. */
+  /** Polylines per look. */
   readonly strokes: ReadonlyMap<LookName, readonly (readonly number[])[]>;
   readonly marks: readonly PaintedMark[];
   readonly devices: readonly PaintedDevice[];
@@ -47,74 +65,91 @@ export interface OverlayPaint {
 export const DEVICE_MARK_AT: Point = { x: -1.4, y: -1.35 };
 const NAMING_KINDS: ReadonlySet<string> = new Set(['input', 'output', 'label']);
 
+/** Collects the layout, numbering nets as they are met. */
+class LayoutBuilder {
+  readonly nets: string[] = [];
+  readonly segments: PaintLayout['segments'][number][] = [];
+  readonly marks: PaintLayout['marks'][number][] = [];
+  readonly devices: Spot[] = [];
+  private readonly ids = new Map<string, number>();
+
+  id(net: string): number {
+    let id = this.ids.get(net);
+    if (id === undefined) {
+      id = this.nets.length;
+      this.ids.set(net, id);
+      this.nets.push(net);
+    }
+    return id;
+  }
+}
+
+function layWires(b: LayoutBuilder, sheet: Sheet, geometry: PaintGeometry): void {
+  const marked = new Set<string>();
+  for (const wire of sheet.wires) {
+    const net = geometry.wireNets[wire.id];
+    const [a, c] = wire.points;
+    if (net === undefined || a === undefined) continue;
+    b.segments.push({ net: b.id(net), points: wire.points.flatMap((p) => [p.x, p.y]) });
+    if (marked.has(net)) continue;
+    marked.add(net);
+    const end = c ?? a;
+    b.marks.push({ net: b.id(net), x: (a.x + end.x) / 2 + 0.15, y: (a.y + end.y) / 2 - 0.65 });
+  }
+}
+
+export function paintLayout(sheet: Sheet, geometry: PaintGeometry): PaintLayout {
+  const b = new LayoutBuilder();
+  layWires(b, sheet, geometry);
+  for (const part of sheet.parts) {
+    for (const lead of pinLeads(part)) {
+      const net = geometry.pinNets[`${part.id}.${lead.pin}`];
+      if (net === undefined) continue;
+      b.segments.push({ net: b.id(net), points: [lead.from.x, lead.from.y, lead.to.x, lead.to.y] });
+      if (NAMING_KINDS.has(part.kind))
+        b.marks.push({ net: b.id(net), x: lead.from.x + 0.2, y: lead.from.y + 0.25 });
+    }
+    const device = geometry.partDevices[part.id];
+    if (device !== undefined && (part.kind === 'nmos' || part.kind === 'pmos')) {
+      b.devices.push({ name: device, ...toWorld(part, DEVICE_MARK_AT) });
+    }
+  }
+  return { nets: b.nets, segments: b.segments, marks: b.marks, devices: b.devices };
+}
+
 function markText(state: NetState): string {
   return [lookOf(state).mark, ...problemMarks(state).map((m) => PROBLEM_GLYPHS[m])].join(' ');
 }
 
-function mark(at: Point, state: NetState): PaintedMark {
-  return { x: at.x, y: at.y, text: markText(state), look: lookOf(state).name };
-}
-
-class PaintBuilder {
-  readonly strokes = new Map<LookName, number[][]>();
-  readonly marks: PaintedMark[] = [];
-  readonly devices: PaintedDevice[] = [];
-  private readonly marked = new Set<string>();
-
-  constructor(private readonly nets: ReadonlyMap<string, NetState>) {}
-
-  stroke(net: string | undefined, points: readonly Point[]): NetState | undefined {
-    const state = net === undefined ? undefined : this.nets.get(net);
-    if (state === undefined || points.length < 2) return state;
-    const look = lookOf(state).name;
-    const list = this.strokes.get(look) ?? [];
-    list.push(points.flatMap((p) => [p.x, p.y]));
-    this.strokes.set(look, list);
-    return state;
-  }
-
-  /** One mark per net on the wires; naming parts always carry their own. */
-  markOnce(net: string, at: Point, state: NetState): void {
-    if (this.marked.has(net)) return;
-    this.marked.add(net);
-    this.marks.push(mark(at, state));
-  }
-}
-
-function paintPart(
-  b: PaintBuilder,
-  part: SheetPart,
-  geometry: PaintGeometry,
-  devices: ReadonlyMap<string, Conduction>,
-): void {
-  for (const lead of pinLeads(part)) {
-    const state = b.stroke(geometry.pinNets[`${part.id}.${lead.pin}`], [lead.from, lead.to]);
-    if (state !== undefined && NAMING_KINDS.has(part.kind))
-      b.marks.push(mark({ x: lead.from.x + 0.2, y: lead.from.y + 0.25 }, state));
-  }
-  const conduction =
-    part.kind === 'nmos' || part.kind === 'pmos'
-      ? devices.get(geometry.partDevices[part.id] ?? '')
-      : undefined;
-  if (conduction !== undefined) b.devices.push({ ...toWorld(part, DEVICE_MARK_AT), conduction });
-}
-
+/** One vector's paint: each segment filed under its net's look. Nets without a state are skipped. */
 export function overlayPaint(
-  sheet: Sheet,
-  geometry: PaintGeometry,
-  nets: ReadonlyMap<string, NetState>,
-  devices: ReadonlyMap<string, Conduction>,
+  layout: PaintLayout,
+  net: (name: string) => NetState | undefined,
+  device: (name: string) => Conduction | undefined,
 ): OverlayPaint {
-  const b = new PaintBuilder(nets);
-  for (const wire of sheet.wires) {
-    const net = geometry.wireNets[wire.id];
-    const state = b.stroke(net, wire.points);
-    const [a, c] = wire.points;
-    if (net !== undefined && state !== undefined && a !== undefined) {
-      const end = c ?? a;
-      b.markOnce(net, { x: (a.x + end.x) / 2 + 0.15, y: (a.y + end.y) / 2 - 0.65 }, state);
-    }
+  // Each drawn net's look and mark, worked out once: a net has many segments.
+  const looks = layout.nets.map((name) => {
+    const state = net(name);
+    return state === undefined ? null : { look: lookOf(state).name, text: markText(state) };
+  });
+  const strokes = new Map<LookName, (readonly number[])[]>();
+  for (const segment of layout.segments) {
+    const entry = looks[segment.net];
+    if (entry === null || entry === undefined) continue;
+    let list = strokes.get(entry.look);
+    if (list === undefined) strokes.set(entry.look, (list = []));
+    list.push(segment.points);
   }
-  for (const part of sheet.parts) paintPart(b, part, geometry, devices);
-  return { strokes: b.strokes, marks: b.marks, devices: b.devices };
+  const marks: PaintedMark[] = [];
+  for (const m of layout.marks) {
+    const entry = looks[m.net];
+    if (entry !== null && entry !== undefined)
+      marks.push({ x: m.x, y: m.y, text: entry.text, look: entry.look });
+  }
+  const devices: PaintedDevice[] = [];
+  for (const d of layout.devices) {
+    const conduction = device(d.name);
+    if (conduction !== undefined) devices.push({ x: d.x, y: d.y, conduction });
+  }
+  return { strokes, marks, devices };
 }

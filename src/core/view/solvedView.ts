@@ -38,9 +38,14 @@ export interface CurrentTrace {
   readonly current: number;
 }
 
+/**
+ * The solved state of every net and device, read by name. Built lazily: a toggle on a 5,000-transistor
+ * sheet pays only for the nets the overlay and panels actually read, each once.
+ */
 export interface SolvedView {
-  readonly nets: ReadonlyMap<string, NetState>;
-  readonly devices: ReadonlyMap<string, Conduction>;
+  readonly netNames: readonly string[];
+  net(name: string): NetState | undefined;
+  device(name: string): Conduction | undefined;
   readonly traces: readonly CurrentTrace[];
   readonly supplyCurrent: number;
   readonly staticPower: number;
@@ -80,15 +85,33 @@ export function traceOf(compiled: CompiledNetlist, path: SolvedArrays['paths'][n
   return { nets, devices, chain, current: path.current };
 }
 
+/** Channel element of each device name, built once per compiled netlist (not per vector). */
+const elementIndex = new WeakMap<CompiledNetlist, Map<string, number>>();
+
+function elementsByName(compiled: CompiledNetlist): Map<string, number> {
+  let index = elementIndex.get(compiled);
+  if (index === undefined) {
+    index = new Map(Array.from({ length: compiled.chCount }, (_, e) => [deviceName(compiled, e), e]));
+    elementIndex.set(compiled, index);
+  }
+  return index;
+}
+
 export function solvedView(compiled: CompiledNetlist, result: SolvedArrays): SolvedView {
-  const nets = new Map<string, NetState>();
-  compiled.netNames.forEach((name, i) => nets.set(name, netState(result, i)));
-  const devices = new Map<string, Conduction>();
-  for (let e = 0; e < compiled.chCount; e++)
-    devices.set(deviceName(compiled, e), conductionName(result.conduction[e]));
+  const cache = new Map<number, NetState>();
   return {
-    nets,
-    devices,
+    netNames: compiled.netNames,
+    net(name) {
+      const n = compiled.netIndex.get(name);
+      if (n === undefined) return undefined;
+      let state = cache.get(n);
+      if (state === undefined) cache.set(n, (state = netState(result, n)));
+      return state;
+    },
+    device(name) {
+      const e = elementsByName(compiled).get(name);
+      return e === undefined ? undefined : conductionName(result.conduction[e]);
+    },
     traces: result.paths.map((p) => traceOf(compiled, p)),
     supplyCurrent: result.supplyCurrent,
     staticPower: result.staticPower,

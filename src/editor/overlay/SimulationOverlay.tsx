@@ -4,7 +4,7 @@ import type Konva from 'konva';
 import { buildIndex, hitTest, type Hit } from '../../core/sheet/hitTest.ts';
 import type { Point } from '../../core/sheet/types.ts';
 import { formatVolts } from '../../core/view/format.ts';
-import { overlayPaint } from '../../core/view/overlayPaint.ts';
+import { overlayPaint, paintLayout } from '../../core/view/overlayPaint.ts';
 import { traceRoute } from '../../core/view/traceRoute.ts';
 import { lookOf, type LookName } from '../../core/view/visualLanguage.ts';
 import { useSimulation } from '../../state/simulation.ts';
@@ -29,7 +29,7 @@ function HoverLayer() {
   const geometry = useStore((s) => s.geometry);
   const index = useMemo(() => buildIndex(sheet), [sheet]);
   const [hover, setHover] = useState<Hover>(null);
-  const state = useSimulation((s) => (hover === null ? undefined : s.live?.nets.get(hover.net)));
+  const state = useSimulation((s) => (hover === null ? undefined : s.live?.net(hover.net)));
   useEffect(() => {
     const stage = layer.current?.getStage();
     if (!stage) return;
@@ -71,9 +71,18 @@ export function SimulationOverlay() {
   const sheet = useStore((s) => s.doc.sheet);
   const geometry = useStore((s) => s.geometry);
   const scale = useStore((s) => s.viewport.scale);
+  // The layout follows the drawing; a toggle only re-files segments by look.
+  const layout = useMemo(() => paintLayout(sheet, geometry), [sheet, geometry]);
   const paint = useMemo(
-    () => (live === null ? null : overlayPaint(sheet, geometry, live.nets, live.devices)),
-    [live, sheet, geometry],
+    () =>
+      live === null
+        ? null
+        : overlayPaint(
+            layout,
+            (n) => live.net(n),
+            (d) => live.device(d),
+          ),
+    [live, layout],
   );
   const routes = useMemo(
     () =>
