@@ -125,7 +125,10 @@ function spiceCells(
   const failures: LoadedCell[] = imported.failed.map((f) => ({
     failure: { file, cell: f.name, message: f.error.message, line: f.error.line },
   }));
-  return { cells: [...jobs, ...failures], library: imported.isLibrary };
+  // Report cells in the order the file defines them, broken ones included.
+  const position = (c: LoadedCell): number => imported.order.indexOf(cellName(c) ?? '');
+  const cells = [...jobs, ...failures].sort((a, b) => position(a) - position(b));
+  return { cells, library: imported.isLibrary };
 }
 
 function cellName(c: LoadedCell): string | null {

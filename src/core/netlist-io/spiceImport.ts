@@ -33,6 +33,8 @@ export interface SpiceImport {
   readonly failed: readonly FailedCell[];
   /** File-level notes: ignored commands, a title line, unused subcircuits. */
   readonly notes: readonly string[];
+  /** Names of all cells, read or failed, in the order the file defines them. */
+  readonly order: readonly string[];
 }
 
 /** Net names that are rails in every file, compared lower-case with a trailing `!` dropped. */
@@ -50,7 +52,14 @@ export function importSpice(text: string, fileName: string, options: SpiceImport
     if (unused.length > 0)
       notes.push(`subcircuits defined but not used: ${unused.map((s) => s.name).join(', ')}`);
     const spec: CellSpec = { name: baseName(fileName), body: file.top, ports: null, sharedSources: [] };
-    return { file: fileName, isLibrary: false, cells: [buildCell(spec, ctx)], failed: [], notes };
+    return {
+      file: fileName,
+      isLibrary: false,
+      cells: [buildCell(spec, ctx)],
+      failed: [],
+      notes,
+      order: [spec.name],
+    };
   }
   const roots = file.subckts.filter((s) => !file.subckts.some((o) => o !== s && instantiated(o, s)));
   const [only] = roots;
@@ -66,7 +75,14 @@ export function importSpice(text: string, fileName: string, options: SpiceImport
       ports: only.ports,
       sharedSources: shared,
     };
-    return { file: fileName, isLibrary: false, cells: [buildCell(spec, ctx)], failed: [], notes };
+    return {
+      file: fileName,
+      isLibrary: false,
+      cells: [buildCell(spec, ctx)],
+      failed: [],
+      notes,
+      order: [spec.name],
+    };
   }
   const specs = roots.map((s): CellSpec => ({
     name: s.name,
@@ -74,7 +90,8 @@ export function importSpice(text: string, fileName: string, options: SpiceImport
     ports: s.ports,
     sharedSources: shared,
   }));
-  return { file: fileName, isLibrary: true, ...buildEach(specs, ctx), notes };
+  const order = specs.map((spec) => spec.name);
+  return { file: fileName, isLibrary: true, ...buildEach(specs, ctx), notes, order };
 }
 
 /** Every cell of a library; one that cannot be built is set aside with its error. */
