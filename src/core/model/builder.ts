@@ -11,29 +11,44 @@ interface MosTerminals {
   readonly l?: number;
 }
 
+/** One step of a builder: a persistent list, newest first, so adding is O(1) and never copies. */
+type Entry =
+  | { readonly kind: 'device'; readonly device: Device }
+  | { readonly kind: 'rail'; readonly rail: Rail }
+  | { readonly kind: 'input' | 'output'; readonly nets: readonly string[] };
+
+interface Chain {
+  readonly entry: Entry;
+  readonly previous: Chain | null;
+}
+
 /**
  * A small fluent builder for tests and examples:
  * `circuit('inv').supply('VDD').ground('GND').input('A').output('Y')
  *    .pmos('P1', { g: 'A', d: 'Y', s: 'VDD' }).nmos('N1', { g: 'A', d: 'Y', s: 'GND' }).build()`.
- * Each call returns a new builder; nothing is mutated.
+ * Each call returns a new builder and shares the earlier steps, so a partly built circuit can be
+ * extended in two ways; nothing is mutated and building n devices takes O(n).
  */
 export class CircuitBuilder {
-  private constructor(private readonly netlist: Netlist) {}
+  private constructor(
+    private readonly name: string,
+    private readonly chain: Chain | null,
+  ) {}
 
   static empty(name: string): CircuitBuilder {
-    return new CircuitBuilder({ name, devices: [], rails: [], inputs: [], outputs: [] });
+    return new CircuitBuilder(name, null);
   }
 
-  private with(patch: Partial<Netlist>): CircuitBuilder {
-    return new CircuitBuilder({ ...this.netlist, ...patch });
+  private push(entry: Entry): CircuitBuilder {
+    return new CircuitBuilder(this.name, { entry, previous: this.chain });
   }
 
   private add(device: Device): CircuitBuilder {
-    return this.with({ devices: [...this.netlist.devices, device] });
+    return this.push({ kind: 'device', device });
   }
 
   private rail(rail: Rail): CircuitBuilder {
-    return this.with({ rails: [...this.netlist.rails, rail] });
+    return this.push({ kind: 'rail', rail });
   }
 
   supply(net = 'VDD', volts?: number): CircuitBuilder {
@@ -50,11 +65,11 @@ export class CircuitBuilder {
   }
 
   input(...nets: string[]): CircuitBuilder {
-    return this.with({ inputs: [...this.netlist.inputs, ...nets] });
+    return this.push({ kind: 'input', nets });
   }
 
   output(...nets: string[]): CircuitBuilder {
-    return this.with({ outputs: [...this.netlist.outputs, ...nets] });
+    return this.push({ kind: 'output', nets });
   }
 
   nmos(name: string, t: MosTerminals): CircuitBuilder {
@@ -83,7 +98,19 @@ export class CircuitBuilder {
   }
 
   build(): Netlist {
-    return this.netlist;
+    const entries: Entry[] = [];
+    for (let c = this.chain; c !== null; c = c.previous) entries.push(c.entry);
+    entries.reverse();
+    const devices: Device[] = [];
+    const rails: Rail[] = [];
+    const inputs: string[] = [];
+    const outputs: string[] = [];
+    for (const e of entries) {
+      if (e.kind === 'device') devices.push(e.device);
+      else if (e.kind === 'rail') rails.push(e.rail);
+      else (e.kind === 'input' ? inputs : outputs).push(...e.nets);
+    }
+    return { name: this.name, devices, rails, inputs, outputs };
   }
 }
 
