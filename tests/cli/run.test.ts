@@ -9,6 +9,7 @@ import { colourWanted, formatSi } from '../../src/cli/colour.ts';
 const LIB = 'public/examples/tidewater-cells.sp';
 const BROKEN_LIB = 'tests/cli/fixtures/buoy-lib-with-broken-cell.sp';
 const DIVIDER = 'tests/cli/fixtures/divider.sp';
+const TG = 'tests/cli/fixtures/tg.sp';
 
 async function railwise(...argv: string[]): Promise<{ status: number; out: string; err: string }> {
   let out = '';
@@ -87,6 +88,22 @@ describe('check', () => {
     expect(seq.body).not.toHaveProperty('vectors');
     const steps = seq.body['steps'] as { outputs: Record<string, string> }[];
     expect(steps.map((s) => s.outputs['Y'])).toEqual(['1', '0', '1']);
+  });
+
+  it('--inputs and --outputs override the inferred pins', async () => {
+    const { status, body } = await json('check', TG, '--inputs', 'D,EN,ENB', '--outputs', 'Y');
+    expect(body).toMatchObject({ inputs: ['D', 'EN', 'ENB'], outputs: ['Y'] });
+    // With EN = 1 and ENB = 0 the gate passes D to Y (common practice, no source).
+    const rows = body['vectors'] as { inputs: Record<string, number>; outputs: Record<string, string> }[];
+    const on = rows.filter((r) => r.inputs['EN'] === 1 && r.inputs['ENB'] === 0);
+    expect(on.map((r) => [r.inputs['D'], r.outputs['Y']])).toEqual([
+      [0, '0'],
+      [1, '1'],
+    ]);
+    expect(status).toBe(1); // EN = ENB leaves Y floating or half-passed: error findings
+    const bad = await railwise('check', TG, '--inputs', 'D,EN,Q');
+    expect(bad.status).toBe(2);
+    expect(bad.out).toMatch(/--inputs: cell tg has no net "Q"/);
   });
 
   it('solves a resistive divider held by a V line: 10 kΩ over 40 kΩ at 5 V gives 4.00 V and 0.1 mA', async () => {
