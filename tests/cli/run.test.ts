@@ -106,6 +106,25 @@ describe('check', () => {
     expect(bad.out).toMatch(/--inputs: cell tg has no net "Q"/);
   });
 
+  it('--supply and --ground name rails, and --vdd sets the supply voltage', async () => {
+    const unnamed = await json('check', 'tests/cli/fixtures/inv-vpwr.sp');
+    expect(unnamed.body['outputs']).toEqual(['Y', 'VPWR', 'VGND']);
+    const { status, body } = await json(
+      'check',
+      'tests/cli/fixtures/inv-vpwr.sp',
+      '--supply',
+      'vpwr',
+      '--ground',
+      'VGND',
+      '--vdd',
+      '1.8',
+    );
+    expect(status).toBe(0);
+    expect(body).toMatchObject({ inputs: ['A'], outputs: ['Y'], technology: { vdd: 1.8 } });
+    const rows = body['vectors'] as { voltages: Record<string, number> }[];
+    expect(rows.map((r) => r.voltages['Y'])).toEqual([1.8, 0]);
+  });
+
   it('solves a resistive divider held by a V line: 10 kΩ over 40 kΩ at 5 V gives 4.00 V and 0.1 mA', async () => {
     // Common practice, no source: V = 5 · 40k / (10k + 40k) = 4 V; I = 5 V / 50 kΩ = 0.1 mA; P = 0.5 mW.
     const { body } = await json('check', DIVIDER);
