@@ -9,6 +9,7 @@ import { InputStrip } from './InputStrip.tsx';
 import { NetList } from './NetList.tsx';
 import { pickFinding, pickNet, pickTargets } from './pick.ts';
 import { Section } from './Section.tsx';
+import { Legend } from './Legend.tsx';
 
 /** The report row behind what the sheet shows: the picked sequence step, else the sweep's vector. */
 function shownReport(s: SimulationState): VectorReport | null {
@@ -114,6 +115,7 @@ export function VectorSection() {
       <h4>Findings</h4>
       <VectorFindings />
       <EveryNet />
+      <Legend />
     </Section>
   );
 }

@@ -1,14 +1,26 @@
 /**
- * What a click on a finding, a path or a net does: highlight its nets and devices on the sheet and
- * select the devices so the designer can jump to them. One place, shared by every list.
+ * What a click on a finding, a path or a net does: highlight its nets and devices on the sheet,
+ * select the devices and pan them into view. One place, shared by every list.
  */
 import type { Finding } from '../core/analysis/report.ts';
-import { findingTargets, type HighlightTargets } from '../core/view/highlight.ts';
-import { selectDevices, setHighlight } from '../state/store.ts';
+import { findingTargets, toSheetTargets, type HighlightTargets } from '../core/view/highlight.ts';
+import { revealItems } from '../editor/actions.ts';
+import { selectDevices, setHighlight, store } from '../state/store.ts';
 
 export function pickTargets(targets: HighlightTargets): void {
+  const { geometry } = store.getState();
   setHighlight({ nets: targets.nets, devices: targets.devices });
   if (targets.devices.length > 0) selectDevices(targets.devices);
+  const onSheet = toSheetTargets(targets, {
+    wiresOfNet: (net) => Object.keys(geometry.wireNets).filter((id) => geometry.wireNets[id] === net),
+    partOfDevice: (device) => geometry.deviceParts[device],
+  });
+  // Devices say where a problem is; a net alone (often spread across the cell) is shown by its wires.
+  const reveal =
+    onSheet.partIds.length > 0
+      ? { parts: onSheet.partIds, wires: [] }
+      : { parts: [], wires: onSheet.wireIds };
+  if (reveal.parts.length + reveal.wires.length > 0) revealItems(reveal);
 }
 
 export function pickFinding(finding: Finding): void {

@@ -55,6 +55,12 @@ describe('analysis panel', () => {
     expect(byTestId('supply-current')?.textContent).toBe('57.8 µA');
     expect(byTestId('current-paths')?.textContent).toContain('VDD → R1 → Y → N1 → GND');
     expect(byTestId('vector-findings')?.textContent).toContain('static-current');
+    // A finding jumps to its devices: highlighted and selected on the sheet.
+    await click(byTestId('vector-findings')?.querySelector('button') ?? null);
+    const { selection, geometry } = store.getState();
+    expect([...selection.highlight.devices].sort()).toEqual(['N1', 'R1']);
+    expect(selection.highlight.nets).toEqual(expect.arrayContaining(['VDD', 'Y', 'GND']));
+    expect(selection.selected.parts.map((id) => geometry.partDevices[id]).sort()).toEqual(['N1', 'R1']);
   });
 
   it('filters the table to problem vectors and selects a row', async () => {

@@ -75,6 +75,9 @@ export function lookOf(state: Pick<NetState, 'level' | 'degraded'>): Look {
   }
 }
 
+/** Static current: an ember trace, distinct from every level colour, always with arrows and its value. */
+export const STATIC_CURRENT_COLOUR = '#ff5a1f';
+
 export type ProblemMark = 'floating' | 'contention' | 'degraded' | 'charge-shared' | 'oscillating';
 
 /** Problem badges for a net, most serious first; an empty list for a clean level. */

@@ -1,9 +1,8 @@
 import { Arrow, Group, Label, Line, Tag, Text } from 'react-konva';
 import type { Point } from '../../core/sheet/types.ts';
 import { formatCurrent } from '../../core/view/format.ts';
+import { STATIC_CURRENT_COLOUR as TRACE_COLOUR } from '../../core/view/visualLanguage.ts';
 
-/** Static current: an ember trace, distinct from every level colour, with arrows and its value. */
-export const TRACE_COLOUR = '#ff5a1f';
 const ARROW_HALF = 0.35;
 
 function arrowsAlong(line: readonly Point[]): number[][] {
