@@ -1,9 +1,11 @@
-import { memo } from 'react';
+import { memo, useMemo } from 'react';
 import { Circle, Layer, Line } from 'react-konva';
 import type { SheetPart, SheetWire } from '../core/sheet/types.ts';
 import { useStore } from '../state/store.ts';
 import { PART_VIEWS } from './devices/index.ts';
 import { JUNCTION_RADIUS, SHEET_THEME, WIRE_STROKE } from './theme.ts';
+import { textDetail, visibleItems, visibleRect } from './visible.ts';
+import { TextDetailContext } from './devices/detail.ts';
 
 const PartNode = memo(function PartNode({ part, color }: { part: SheetPart; color: string }) {
   const View = PART_VIEWS[part.kind];
@@ -33,6 +35,9 @@ export function SceneLayer() {
   const highlight = useStore((s) => s.selection.highlight);
   const deviceParts = useStore((s) => s.geometry.deviceParts);
   const wireNets = useStore((s) => s.geometry.wireNets);
+  const viewport = useStore((s) => s.viewport);
+  const screen = useStore((s) => s.screen);
+  const shown = useMemo(() => visibleItems(sheet, visibleRect(viewport, screen)), [sheet, viewport, screen]);
   const selParts = new Set(selected.parts);
   const selWires = new Set(selected.wires);
   const hiParts = new Set(highlight.devices.flatMap((d) => deviceParts[d] ?? []));
@@ -47,15 +52,17 @@ export function SceneLayer() {
         : SHEET_THEME.wire;
   return (
     <Layer listening={false}>
-      {sheet.wires.map((w) => (
-        <WireNode key={w.id} wire={w} color={wireColor(w.id)} />
-      ))}
-      {junctions.map((j) => (
-        <Circle key={`${j.x},${j.y}`} x={j.x} y={j.y} radius={JUNCTION_RADIUS} fill={SHEET_THEME.wire} />
-      ))}
-      {sheet.parts.map((p) => (
-        <PartNode key={p.id} part={p} color={partColor(p.id)} />
-      ))}
+      <TextDetailContext.Provider value={textDetail(viewport.scale)}>
+        {shown.wires.map((w) => (
+          <WireNode key={w.id} wire={w} color={wireColor(w.id)} />
+        ))}
+        {junctions.map((j) => (
+          <Circle key={`${j.x},${j.y}`} x={j.x} y={j.y} radius={JUNCTION_RADIUS} fill={SHEET_THEME.wire} />
+        ))}
+        {shown.parts.map((p) => (
+          <PartNode key={p.id} part={p} color={partColor(p.id)} />
+        ))}
+      </TextDetailContext.Provider>
     </Layer>
   );
 }
