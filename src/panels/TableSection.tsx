@@ -61,6 +61,9 @@ function SweepStatus() {
   }
 }
 
+/** Rows drawn at once: thousands of table rows would stall the page; sorting and filters reach the rest. */
+const ROW_LIMIT = 512;
+
 function SweepTable() {
   const result = useSimulation((s) => (s.sweep.status === 'done' ? s.sweep.result : null));
   const view = useSimulation((s) => s.table);
@@ -85,7 +88,7 @@ function SweepTable() {
       <VectorTable
         inputs={report.inputs}
         outputs={report.outputs}
-        rows={shown}
+        rows={shown.slice(0, ROW_LIMIT)}
         total={rows.length}
         counts={counts}
         view={view}
@@ -93,6 +96,11 @@ function SweepTable() {
         onView={setTableView}
         onSelect={selectRow}
       />
+      {shown.length > ROW_LIMIT && (
+        <p className="rw-muted" data-testid="table-limit">
+          Showing the first {ROW_LIMIT} of {shown.length} rows: sort or filter to bring others up.
+        </p>
+      )}
     </>
   );
 }
