@@ -152,7 +152,8 @@ describe('lenient reading of hand-written files', () => {
       doc['sequences'] = [{ name: 's', steps: [{ A: 0 }, { A: 1 }] }];
     });
     const d = parseDesignFile(text, 'x.json');
-    expect(d.technology).toEqual({ ...DEFAULT_TECHNOLOGY, vdd: 1.8 });
+    // Thresholds follow VDD at 0.35 and 0.65 of it (JEDEC JESD8 family, from memory): 0.63 V and 1.17 V.
+    expect(d.technology).toEqual({ ...DEFAULT_TECHNOLOGY, vdd: 1.8, vil: 0.35 * 1.8, vih: 0.65 * 1.8 });
     expect(d.sequences[0]?.steps).toEqual([{ A: '0' }, { A: '1' }]);
   });
 });

@@ -5,7 +5,7 @@
  * represent.
  */
 import { z } from 'zod';
-import { DEFAULT_TECHNOLOGY } from '../model/technology.ts';
+import { DEFAULT_TECHNOLOGY, withVdd } from '../model/technology.ts';
 
 const netName = z.string().min(1, 'a net name cannot be empty');
 const deviceName = z.string().min(1, 'a device name cannot be empty');
@@ -66,22 +66,32 @@ export const netlistSchema = z.object({
   outputs: z.array(netName),
 });
 
-/** Each field may be left out of a hand-written file; missing ones take the textbook defaults. */
-export const technologySchema = z.object({
-  source: z.string().default(DEFAULT_TECHNOLOGY.source),
-  vdd: positive.default(DEFAULT_TECHNOLOGY.vdd),
-  rn: positive.default(DEFAULT_TECHNOLOGY.rn),
-  rp: positive.default(DEFAULT_TECHNOLOGY.rp),
-  vtn: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.vtn),
-  vtp: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.vtp),
-  vil: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.vil),
-  vih: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.vih),
-  cgPerArea: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.cgPerArea),
-  cdPerWidth: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.cdPerWidth),
-  ioffPerWidth: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.ioffPerWidth),
-  kpn: positive.default(DEFAULT_TECHNOLOGY.kpn),
-  kpp: positive.default(DEFAULT_TECHNOLOGY.kpp),
-});
+/**
+ * Each field may be left out of a hand-written file; missing ones take the textbook defaults, and
+ * missing input thresholds follow the file's VDD at 0.35 and 0.65 of it (as `withVdd` does).
+ */
+export const technologySchema = z
+  .object({
+    source: z.string().default(DEFAULT_TECHNOLOGY.source),
+    vdd: positive.default(DEFAULT_TECHNOLOGY.vdd),
+    rn: positive.default(DEFAULT_TECHNOLOGY.rn),
+    rp: positive.default(DEFAULT_TECHNOLOGY.rp),
+    vtn: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.vtn),
+    vtp: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.vtp),
+    vil: z.number().nonnegative().optional(),
+    vih: z.number().nonnegative().optional(),
+    cgPerArea: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.cgPerArea),
+    cdPerWidth: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.cdPerWidth),
+    ioffPerWidth: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.ioffPerWidth),
+    kpn: positive.default(DEFAULT_TECHNOLOGY.kpn),
+    kpp: positive.default(DEFAULT_TECHNOLOGY.kpp),
+  })
+  .transform(({ vil, vih, ...t }) => {
+    const { vil: lowDefault, vih: highDefault } = withVdd(DEFAULT_TECHNOLOGY, t.vdd);
+    return { ...t, vil: vil ?? lowDefault, vih: vih ?? highDefault };
+  })
+  .refine((t) => t.vil < t.vih, { message: 'vil must be below vih', path: ['vih'] })
+  .refine((t) => t.vih <= t.vdd, { message: 'vih must not exceed vdd', path: ['vih'] });
 
 /** Hand-written files may use the numbers 0 and 1 for input values. */
 const inputValueSchema = z
