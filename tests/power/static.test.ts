@@ -77,6 +77,16 @@ describe('leakage of off transistors', () => {
     near(bothOff?.leakageWatts, (topOff?.leakageWatts ?? 0) / 2);
   });
 
+  it('n off NMOS in series share the supply evenly: 1/n of one device with VDD across it', () => {
+    // Derived from the linear model (equal conductances in series divide VDD evenly); checks the
+    // two-net and the larger-group solves of the undriven stack nodes.
+    const one = powerReport(nand(2, 1, 1), tech, random).vectors[1].leakageWatts; // A = 0, B = 1: NA alone
+    for (const n of [3, 4, 5]) {
+      // Every input 0: the PMOS are all on, the n NMOS all off.
+      near(powerReport(nand(n, 1, 1), tech, random).vectors[0].leakageWatts, one / n);
+    }
+  });
+
   it('static power is the sum of the DC and leakage parts for every vector', () => {
     const report = powerReport(nand(2), tech, random);
     for (const v of report.vectors) expect(v.staticWatts).toBeCloseTo(v.dcWatts + v.leakageWatts, 20);

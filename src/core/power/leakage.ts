@@ -1,7 +1,8 @@
-import { LuDecomposition, Matrix } from 'ml-matrix';
+import type { CompiledNetlist } from '../compile/compile.ts';
 import { NMOS, PMOS } from '../compile/compile.ts';
 import { OFF } from '../solver/levels.ts';
 import type { SolveResult } from '../solver/simulator.ts';
+import { solveFreeNets, type Stamp } from './leakageNetwork.ts';
 
 export const LEAKAGE_MODEL =
   'Each off transistor leaks I = ioffPerWidth · W · V_DS / VDD: linear in width, proportional to its ' +
@@ -16,85 +17,80 @@ export interface Leakage {
 }
 
 /**
- * Subthreshold leakage of one solved vector. An off transistor is a conductance g = ioff·W / VDD.
+ * Subthreshold leakage of solved vectors. An off transistor is a conductance g = ioff·W / VDD.
  * Driven nets keep their solved voltage; nets that are not driven (floating, unknown, between two
- * off transistors) are solved by nodal analysis of the leakage conductances, which gives the stack
- * effect of series off transistors in its linear form (two in series leak half of one; real stacks
- * leak less still, so this overestimates them).
+ * off transistors) are solved from the leakage conductances, which gives the stack effect of series
+ * off transistors in its linear form (two in series leak half of one; real stacks leak less still,
+ * so this overestimates them). Built once per netlist; one pass over the transistors per vector.
  */
-export function leakageOf(result: SolveResult): Leakage {
-  const { compiled: c, conduction } = result;
-  const perVolt = c.tech.ioffPerWidth / c.tech.vdd;
-  const offElements: number[] = [];
-  for (let e = 0; e < c.chCount; e++) {
-    if (conduction[e] === OFF && (c.chKind[e] === NMOS || c.chKind[e] === PMOS)) offElements.push(e);
-  }
-  if (offElements.length === 0 || perVolt === 0) return { current: 0, watts: 0 };
-  const conductance = (e: number): number => {
-    const d = c.netlist.devices[c.chDevice[e]];
-    return d.kind === 'nmos' || d.kind === 'pmos' ? perVolt * d.w : 0;
-  };
-  const volts = settleUndriven(result, offElements, conductance);
-  let watts = 0;
-  for (const e of offElements) {
-    const vds = Math.abs(volts[c.chA[e]] - volts[c.chB[e]]);
-    if (Number.isFinite(vds)) watts += conductance(e) * vds * vds;
-  }
-  return { current: watts / c.tech.vdd, watts };
-}
+export class LeakageEstimator {
+  /** Leakage conductance per channel element, siemens; 0 for resistors. */
+  private readonly conductance: Float64Array;
+  /** Scratch: each undriven net's number within one vector's solve, −1 otherwise. */
+  private readonly localOf: Int32Array;
 
-function isFixed(result: SolveResult, net: number): boolean {
-  return result.driven[net] === 1 && !Number.isNaN(result.volts[net]);
-}
-
-/** Voltages with every undriven net that touches an off transistor solved from the leakage network. */
-function settleUndriven(
-  result: SolveResult,
-  offElements: readonly number[],
-  conductance: (e: number) => number,
-): Float64Array {
-  const { compiled: c } = result;
-  const volts = result.volts.slice();
-  const free = new Map<number, number>();
-  for (const e of offElements) {
-    for (const n of [c.chA[e], c.chB[e]]) if (!isFixed(result, n) && !free.has(n)) free.set(n, free.size);
+  constructor(private readonly compiled: CompiledNetlist) {
+    const perVolt = compiled.tech.ioffPerWidth / compiled.tech.vdd;
+    this.conductance = Float64Array.from({ length: compiled.chCount }, (_, e) => {
+      const d = compiled.netlist.devices[compiled.chDevice[e]];
+      const isMos = compiled.chKind[e] === NMOS || compiled.chKind[e] === PMOS;
+      return isMos && (d.kind === 'nmos' || d.kind === 'pmos') ? perVolt * d.w : 0;
+    });
+    this.localOf = new Int32Array(compiled.netCount).fill(-1);
   }
-  if (free.size === 0) return volts;
-  const g = Matrix.zeros(free.size, free.size);
-  const b = Matrix.zeros(free.size, 1);
-  for (const e of offElements) stampLeakage(g, b, free, volts, c.chA[e], c.chB[e], conductance(e));
-  // Undriven nets joined by a conducting device share one voltage: stamp its on-conductance.
-  for (let e = 0; e < c.chCount; e++) {
-    if (result.conduction[e] === OFF || !free.has(c.chA[e]) || !free.has(c.chB[e])) continue;
-    stampLeakage(g, b, free, volts, c.chA[e], c.chB[e], 1 / c.chOhms[e]);
-  }
-  // A free net tied to nothing fixed would make G singular; a tiny conductance to 0 V keeps the
-  // solve defined and leaves such an island without current.
-  for (let i = 0; i < free.size; i++) g.set(i, i, g.get(i, i) + 1e-30);
-  const x = new LuDecomposition(g).solve(b);
-  for (const [net, p] of free) volts[net] = x.get(p, 0);
-  return volts;
-}
 
-function stampLeakage(
-  g: Matrix,
-  b: Matrix,
-  free: ReadonlyMap<number, number>,
-  volts: Float64Array,
-  a: number,
-  bb: number,
-  conductance: number,
-): void {
-  const pa = free.get(a);
-  const pb = free.get(bb);
-  if (pa !== undefined) g.set(pa, pa, g.get(pa, pa) + conductance);
-  if (pb !== undefined) g.set(pb, pb, g.get(pb, pb) + conductance);
-  if (pa !== undefined && pb !== undefined) {
-    g.set(pa, pb, g.get(pa, pb) - conductance);
-    g.set(pb, pa, g.get(pb, pa) - conductance);
-  } else if (pa !== undefined) {
-    b.set(pa, 0, b.get(pa, 0) + conductance * volts[bb]);
-  } else if (pb !== undefined) {
-    b.set(pb, 0, b.get(pb, 0) + conductance * volts[a]);
+  of(result: SolveResult): Leakage {
+    const c = this.compiled;
+    const { volts, driven, conduction } = result;
+    const fixed = (n: number): boolean => driven[n] === 1 && !Number.isNaN(volts[n]);
+    let watts = 0;
+    const pending: Stamp[] = [];
+    for (let e = 0; e < c.chCount; e++) {
+      const g = this.conductance[e];
+      if (g === 0 || conduction[e] !== OFF) continue;
+      const a = c.chA[e];
+      const b = c.chB[e];
+      if (fixed(a) && fixed(b)) watts += g * (volts[a] - volts[b]) ** 2;
+      else pending.push({ a, b, g });
+    }
+    if (pending.length > 0) watts += this.undrivenWatts(result, pending, fixed);
+    return { current: watts / c.tech.vdd, watts };
+  }
+
+  /** Leakage through off transistors that touch an undriven net, after solving those nets. */
+  private undrivenWatts(
+    result: SolveResult,
+    pending: readonly Stamp[],
+    fixed: (n: number) => boolean,
+  ): number {
+    const c = this.compiled;
+    const free: number[] = [];
+    const mark = (n: number): void => {
+      if (this.localOf[n] < 0 && !fixed(n)) this.localOf[n] = free.push(n) - 1;
+    };
+    for (const s of pending) {
+      mark(s.a);
+      mark(s.b);
+    }
+    // Undriven nets joined by a conducting device share one voltage: stamp its on-conductance too.
+    const stamps = [...pending];
+    for (const n of free) {
+      for (let k = c.netChannels.start[n]; k < c.netChannels.start[n + 1]; k++) {
+        const e = c.netChannels.items[k];
+        const other = c.chA[e] === n ? c.chB[e] : c.chA[e];
+        if (result.conduction[e] !== OFF && other > n && this.localOf[other] >= 0) {
+          stamps.push({ a: n, b: other, g: 1 / c.chOhms[e] });
+        }
+      }
+    }
+    const volts = result.volts.slice();
+    solveFreeNets(stamps, volts, free, this.localOf);
+    for (const n of free) this.localOf[n] = -1;
+    let watts = 0;
+    for (const s of pending) {
+      const vds = volts[s.a] - volts[s.b];
+      if (Number.isFinite(vds)) watts += s.g * vds * vds;
+    }
+    return watts;
   }
 }

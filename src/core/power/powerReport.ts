@@ -5,7 +5,7 @@ import type { Technology } from '../model/technology.ts';
 import { Simulator, type SolveResult } from '../solver/simulator.ts';
 import { ACTIVITY_CONVENTION, ActivityCounter, type ActivityFigures } from './activity.ts';
 import { switchingEnergy } from './dynamic.ts';
-import { LEAKAGE_MODEL, leakageOf } from './leakage.ts';
+import { LEAKAGE_MODEL, LeakageEstimator } from './leakage.ts';
 import {
   PowerOptionsError,
   type NetPower,
@@ -86,6 +86,7 @@ interface Run {
 /** Solves each vector (sweep) or step (sequence), keeping only its figures, never all results. */
 function solveAll(sim: Simulator, netlist: Netlist, options: PowerOptions): Run {
   const run: Run = { vectors: [], counter: new ActivityCounter(sim.compiled.netCount), unsettled: 0 };
+  const leakage = new LeakageEstimator(sim.compiled);
   let unsettled = 0;
   let previous: SolveResult | null = null;
   const steps = options.activity === 'random' ? sweepVectors(netlist.inputs) : (options.sequence ?? []);
@@ -96,15 +97,15 @@ function solveAll(sim: Simulator, netlist: Netlist, options: PowerOptions): Run 
         ? sim.solveFresh(step)
         : sim.solveNext(step, previous);
     run.counter.add(result);
-    run.vectors.push(vectorPower(result));
+    run.vectors.push(vectorPower(result, leakage));
     if (!result.settled) unsettled++;
     previous = result;
   }
   return { ...run, unsettled };
 }
 
-function vectorPower(result: SolveResult): VectorPower {
-  const leak = leakageOf(result);
+function vectorPower(result: SolveResult, leakage: LeakageEstimator): VectorPower {
+  const leak = leakage.of(result);
   const dcWatts = Number.isFinite(result.staticPower) ? result.staticPower : 0;
   return {
     inputs: result.inputs,

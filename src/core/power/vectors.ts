@@ -1,12 +1,15 @@
-import type { InputVector } from '../model/design.ts';
+import type { InputValue, InputVector } from '../model/design.ts';
 
 /**
  * Every 0/1 combination of the inputs in truth-table order: the first input is the most significant
- * bit, so vector k has input i at bit (n − 1 − i) of k.
+ * bit, so vector k has input i at bit (n − 1 − i) of k. A generator, so a 16-input sweep never holds
+ * its 65,536 vectors at once.
  */
-export function sweepVectors(inputs: readonly string[]): InputVector[] {
+export function* sweepVectors(inputs: readonly string[]): Generator<InputVector> {
   const n = inputs.length;
-  return Array.from({ length: 2 ** n }, (_, k) =>
-    Object.fromEntries(inputs.map((name, i) => [name, (k >> (n - 1 - i)) & 1 ? '1' : '0'])),
-  );
+  for (let k = 0; k < 2 ** n; k++) {
+    const vector: Record<string, InputValue> = {};
+    for (let i = 0; i < n; i++) vector[inputs[i]] = (k >> (n - 1 - i)) & 1 ? '1' : '0';
+    yield vector;
+  }
 }
