@@ -168,6 +168,7 @@ class TrialMerge {
   private readonly limiter: Int32Array;
   private readonly level: Uint8Array;
   private readonly agree: Uint8Array;
+  private readonly anyDriven: Uint8Array;
   private readonly current: Float64Array;
   private trials = 0;
 
@@ -178,6 +179,7 @@ class TrialMerge {
     this.limiter = new Int32Array(frame.netCount);
     this.level = new Uint8Array(frame.netCount);
     this.agree = new Uint8Array(frame.netCount).fill(1);
+    this.anyDriven = new Uint8Array(frame.netCount);
     this.current = new Float64Array(frame.elemCount);
   }
 
@@ -186,6 +188,7 @@ class TrialMerge {
     const { vil, vih } = f.c.tech;
     for (let i = 0; i < f.netCount; i++) {
       const level = classify(f.volts[i], vil, vih);
+      this.anyDriven[i] |= f.driven[i];
       if (this.trials === 0) {
         this.volts[i] = f.volts[i];
         this.driven[i] = f.driven[i];
@@ -215,7 +218,8 @@ class TrialMerge {
       const definite = this.agree[i] && !bounded.has(i);
       const unknown = !definite;
       f.volts[i] = unknown ? NaN : this.volts[i];
-      f.driven[i] = unknown ? 1 : this.driven[i];
+      // An unknown net counts as driven when some combination drives it (it reads X, not Z).
+      f.driven[i] = unknown ? this.anyDriven[i] : this.driven[i];
       f.limiter[i] = unknown ? -1 : this.limiter[i];
       f.flags[i] = unknown ? FLAG_MAYBE | (bounded.has(i) ? FLAG_BOUND : 0) : this.flags[i];
     }

@@ -2,6 +2,7 @@ import type { CompiledNetlist } from '../compile/compile.ts';
 import { evaluateCcc, type EvaluationTarget } from './evaluate.ts';
 import { Frame } from './frame.ts';
 import { FLAG_OSCILLATING } from './levels.ts';
+import { OutcomeMemo } from './memo.ts';
 import { buildTopology, type Topology } from './topology.ts';
 
 /**
@@ -32,6 +33,7 @@ export class Schedule {
   /** Nets that are sources in this topology, and elements with at least one end on a source. */
   readonly sourceNets: Int32Array;
   readonly sourceTies: Int32Array;
+  private readonly memo: OutcomeMemo;
   private readonly saved: Float64Array;
   private readonly savedDriven: Uint8Array;
 
@@ -67,6 +69,7 @@ export class Schedule {
     for (let e = 0; e < c.chCount; e++)
       if (topology.isSource[c.chA[e]] || topology.isSource[c.chB[e]]) ties.push(e);
     this.sourceTies = Int32Array.from(ties);
+    this.memo = new OutcomeMemo(c, topology);
     this.saved = new Float64Array(c.netCount);
     this.savedDriven = new Uint8Array(c.netCount);
   }
@@ -112,7 +115,7 @@ export class Schedule {
       if (!any) continue;
       for (let i = first; i < end; i++) this.forget(order.items[i], state, fresh);
       if (end - first === 1 && !this.selfDependent[order.items[first]]) {
-        evaluateCcc(this.frame, order.items[first], state.volts, sourceVolts, state);
+        this.evaluateOne(order.items[first], sourceVolts, state, fresh);
       } else {
         this.settle(s, Array.from(order.items.subarray(first, end)), sourceVolts, state);
       }
@@ -125,6 +128,14 @@ export class Schedule {
         }
       }
     }
+  }
+
+  /** Evaluates one component outside any feedback loop, replaying a memoised outcome when it can. */
+  private evaluateOne(k: number, sourceVolts: Float64Array, state: NetState, fresh: boolean): void {
+    const key = this.memo.key(k, state.volts);
+    if (key >= 0 && this.memo.replay(k, key, fresh, state)) return;
+    evaluateCcc(this.frame, k, state.volts, sourceVolts, state);
+    if (key >= 0) this.memo.store(k, key, fresh, state);
   }
 
   /** Remembers a component's values (to see what changed) and, in fresh mode, clears its charge. */

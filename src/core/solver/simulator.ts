@@ -3,7 +3,19 @@ import type { InputVector } from '../model/design.ts';
 import { currentPaths, type PathIndices } from './currentPaths.ts';
 import { conductionOf } from './evaluate.ts';
 import { NMOS, RESISTOR } from '../compile/compile.ts';
-import { classify, FLAG_OSCILLATING, LEVEL_0, LEVEL_1, LEVEL_X, LEVEL_Z, MAYBE, OFF, ON } from './levels.ts';
+import {
+  classify,
+  FLAG_CHARGE_SHARED,
+  FLAG_MAYBE,
+  FLAG_OSCILLATING,
+  LEVEL_0,
+  LEVEL_1,
+  LEVEL_X,
+  LEVEL_Z,
+  MAYBE,
+  OFF,
+  ON,
+} from './levels.ts';
 import { sameVolts, Schedule, type NetState } from './schedule.ts';
 import type { Topology } from './topology.ts';
 
@@ -123,22 +135,39 @@ export class Simulator {
       limiter: incremental ? copy(base.limiter) : new Int32Array(c.netCount).fill(-1),
       chCurrent: incremental ? copy(base.chCurrent) : new Float64Array(c.chCount),
     };
-    if (incremental) {
-      for (let n = 0; n < c.netCount; n++) {
-        if (topology.isSource[n] && !sameVolts(sourceVolts[n], base.sourceVolts[n]))
-          schedule.markTouching(dirty, n);
-      }
-    } else {
-      dirty.fill(1);
-    }
-    for (let n = 0; n < c.netCount; n++) {
-      if (!topology.isSource[n]) continue;
+    if (incremental) this.markChanged(schedule, base, sourceVolts, dirty, fresh);
+    else dirty.fill(1);
+    for (const n of schedule.sourceNets) {
       state.volts[n] = sourceVolts[n];
       state.driven[n] = 1;
       state.flags[n] = 0;
     }
     schedule.propagate(sourceVolts, state, dirty, fresh);
     return this.finish(inputs, schedule, sourceVolts, state, reuse ? base : null);
+  }
+
+  /**
+   * What an incremental solve must re-evaluate: components touched by a source whose voltage changed
+   * and, when carrying state, those whose last result was an event rather than a state (charge just
+   * shared, a loop that did not settle, a value made unknown by maybe devices), since evaluating them
+   * again from the state they left need not repeat it.
+   */
+  private markChanged(
+    schedule: Schedule,
+    base: SolveResult,
+    sourceVolts: Float64Array,
+    dirty: Uint8Array,
+    fresh: boolean,
+  ): void {
+    for (const n of schedule.sourceNets) {
+      if (!sameVolts(sourceVolts[n], base.sourceVolts[n])) schedule.markTouching(dirty, n);
+    }
+    if (fresh) return;
+    const { cccOfNet } = schedule.topology;
+    for (let n = 0; n < base.flags.length; n++) {
+      if (cccOfNet[n] >= 0 && base.flags[n] & (FLAG_CHARGE_SHARED | FLAG_OSCILLATING | FLAG_MAYBE))
+        dirty[cccOfNet[n]] = 1;
+    }
   }
 
   /** Derives levels, conduction and source currents; `recycled` lends its arrays for them. */
