@@ -77,8 +77,10 @@ export class WorkspacePanel {
 
   /** The level and voltage the net list gives a net for the vector on the sheet. */
   async netRow(net: string): Promise<string> {
-    const list = this.root.getByTestId('vector-section').locator('details.rw-subsection');
+    const list = this.root.getByTestId('every-net');
     if ((await list.getAttribute('open')) === null) await list.locator('summary').click();
-    return (await this.root.getByTestId(`net-${net}`).textContent()) ?? '';
+    const row = this.root.getByTestId(`net-${net}`);
+    await expect(row).toBeVisible();
+    return (await row.textContent()) ?? '';
   }
 }

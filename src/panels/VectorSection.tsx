@@ -82,7 +82,11 @@ function EveryNet() {
     [live, open],
   );
   return (
-    <details className="rw-subsection" onToggle={(e) => setOpen(e.currentTarget.open)}>
+    <details
+      className="rw-subsection"
+      data-testid="every-net"
+      onToggle={(e) => setOpen(e.currentTarget.open)}
+    >
       <summary>Every net ({live?.netNames.length ?? 0})</summary>
       {open && <NetList nets={nets} onPick={pickNet} />}
     </details>

@@ -76,7 +76,7 @@ describe('analysis panel', () => {
     await click(rows[0]);
     expect(byTestId('bit-A')?.textContent).toContain('1');
     expect(byTestId('bit-B')?.textContent).toContain('0');
-    const everyNet = host.querySelector('details.rw-subsection') as HTMLDetailsElement;
+    const everyNet = byTestId('every-net') as HTMLDetailsElement;
     await act(async () => {
       everyNet.open = true;
       everyNet.dispatchEvent(new Event('toggle'));
