@@ -91,11 +91,14 @@ function solveAll(sim: Simulator, netlist: Netlist, options: PowerOptions): Run 
   let previous: SolveResult | null = null;
   const steps = options.activity === 'random' ? sweepVectors(netlist.inputs) : (options.sequence ?? []);
   for (const step of steps) {
-    // A sweep starts every vector from an unknown state; a sequence carries stored charge onward.
+    // A sweep starts every vector from an unknown state and, since each result is read once and
+    // dropped, lets the solver reuse its arrays; a sequence carries stored charge onward.
     const result: SolveResult =
-      previous === null || options.activity === 'random'
-        ? sim.solveFresh(step)
-        : sim.solveNext(step, previous);
+      options.activity === 'random'
+        ? sim.solveFresh(step, { recycle: true })
+        : previous === null
+          ? sim.solveFresh(step)
+          : sim.solveNext(step, previous);
     run.counter.add(result);
     run.vectors.push(vectorPower(result, leakage));
     if (!result.settled) unsettled++;
