@@ -64,16 +64,11 @@ test('edit W in the side form; a bad value is refused with its reason', async ({
   await app.starter('Inverter');
   const before = await app.netlist();
   const nmos = before.devices.find((d) => d.kind === 'nmos')!;
-  // Click the NMOS body on the sheet to select it.
-  const partId = await page.evaluate(
-    (name) => window.__railwise!.state().geometry.deviceParts[name]!,
-    nmos.name as string,
-  );
-  const pos = await page.evaluate(
-    (id) => window.__railwise!.state().doc.sheet.parts.find((p) => p.id === id)!,
-    partId,
-  );
+  // Click the NMOS body on the sheet to select it, then press Enter to reach its name field.
+  const pos = await app.devicePosition(nmos.name as string);
   await app.clickAt(pos.x - 0.5, pos.y + 0.5);
+  await app.press('Enter');
+  await expect(page.getByLabel('Name')).toBeFocused();
   const w = page.getByLabel('W (µm)');
   await w.fill('0');
   await w.press('Enter');

@@ -80,6 +80,15 @@ export class RailwisePage {
     return this.page.evaluate(() => JSON.parse(JSON.stringify(window.__railwise!.netlist())));
   }
 
+  /** Where a device's part sits on the sheet (grid units). */
+  async devicePosition(name: string): Promise<Point> {
+    return this.page.evaluate((device) => {
+      const s = window.__railwise!.state();
+      const part = s.doc.sheet.parts.find((p) => p.id === s.geometry.deviceParts[device])!;
+      return { x: part.x, y: part.y };
+    }, name);
+  }
+
   async undoDepth(): Promise<number> {
     return this.page.evaluate(() => window.__railwise!.state().history.past.length);
   }

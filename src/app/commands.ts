@@ -38,6 +38,14 @@ export interface Command {
   readonly run: () => void;
 }
 
+/** Enter jumps to the side form's first field, so renaming needs no mouse. */
+function focusNameField(): void {
+  if (typeof document === 'undefined') return;
+  const field = document.querySelector<HTMLInputElement>('input[data-field="name"], #field-cell');
+  field?.focus();
+  field?.select();
+}
+
 function placeCommand(kind: PartKind, index: number): Command {
   return {
     id: `place-${kind}`,
@@ -115,6 +123,13 @@ export const COMMANDS: readonly Command[] = [
       { key: 'y', ctrl: true },
     ],
     run: () => void redo(),
+  },
+  {
+    id: 'rename',
+    label: 'Edit the selected part (name field)',
+    group: 'Edit',
+    keys: [{ key: 'Enter' }],
+    run: focusNameField,
   },
   {
     id: 'nudge-left',

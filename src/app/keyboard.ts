@@ -12,8 +12,14 @@ function isTyping(target: EventTarget | null): boolean {
   return target.isContentEditable || ['INPUT', 'TEXTAREA', 'SELECT'].includes(target.tagName);
 }
 
+/** Enter and Space on a focused button belong to the button (keyboard users press them). */
+function isButtonPress(e: KeyboardEvent): boolean {
+  if (typeof HTMLElement === 'undefined' || !(e.target instanceof HTMLElement)) return false;
+  return (e.key === 'Enter' || e.key === ' ') && ['BUTTON', 'A', 'SUMMARY'].includes(e.target.tagName);
+}
+
 export function handleKey(e: KeyboardEvent, controller: EditorController): void {
-  if (isTyping(e.target) || e.altKey) return;
+  if (isTyping(e.target) || isButtonPress(e) || e.altKey) return;
   if (e.key === 'Escape') {
     if (store.getState().overlay !== null) setOverlay(null);
     else if (!controller.cancel()) clearSelection();
