@@ -8,7 +8,7 @@ import { loadCells, type CellFailure } from './loadCells.ts';
 import { runCells } from './parallel.ts';
 import type { CellJson, CellResult, RunOptions } from './runCell.ts';
 import { CAUTION } from './runCell.ts';
-import { formatCell, formatFailure } from './textReport.ts';
+import { count, formatCell, formatFailure } from './textReport.ts';
 import { EXIT_FINDINGS, EXIT_OK, EXIT_UNUSABLE } from './usage.ts';
 
 export interface Output {
@@ -95,7 +95,7 @@ function libraryTotals(results: readonly CellResult[], s: Record<string, number>
   const failing = results.flatMap((r) => ('json' in r && r.json.summary.errors > 0 ? [r.json.cell] : []));
   const unusable = results.flatMap((r) => ('failure' in r ? [r.failure.cell ?? r.failure.file] : []));
   return [
-    `${s['cells']} cells: ${s['passed']} pass, ${s['failed']} with errors, ${s['unusable']} unusable; ${s['errors']} errors, ${s['warnings']} warnings`,
+    `${count(s['cells'] ?? 0, 'cell')}: ${s['passed']} pass, ${s['failed']} with errors, ${s['unusable']} unusable; ${count(s['errors'] ?? 0, 'error')}, ${count(s['warnings'] ?? 0, 'warning')}`,
     ...(failing.length > 0 ? [`  with errors: ${failing.join(', ')}`] : []),
     ...(unusable.length > 0 ? [`  unusable: ${unusable.join(', ')}`] : []),
   ].join('\n');

@@ -13,9 +13,9 @@ const MAX_FINDINGS = 20;
 
 export function formatCell(json: CellJson, c: Colour): string {
   const rows = json.steps ?? json.vectors ?? [];
-  const what = json.steps === undefined ? 'vectors' : 'steps';
+  const what = json.steps === undefined ? 'vector' : 'step';
   const lines = [
-    `${c.bold(json.cell)}  ${c.dim(`${json.file} · ${rows.length} ${what} · VDD ${json.technology.vdd} V`)}`,
+    `${c.bold(json.cell)}  ${c.dim(`${json.file} · ${count(rows.length, what)} · VDD ${json.technology.vdd} V`)}`,
     ...truthTable(json, rows, c),
     ...findingLines(json.findings, c),
     ...json.notes.map((n) => c.dim(`  note: ${n}`)),
@@ -115,6 +115,12 @@ export function summaryLine(json: CellJson, c: Colour): string {
     .filter(([k, n]) => !['vectors', 'errors', 'warnings'].includes(k) && n > 0)
     .map(([k, n]) => `${k} ${n}`);
   const verdict = summary.errors > 0 ? c.error('FAIL') : c.bold('pass');
-  const counts = `${summary.vectors} ${json.steps === undefined ? 'vectors' : 'steps'}, ${summary.errors} errors, ${summary.warnings} warnings`;
+  const what = json.steps === undefined ? 'vector' : 'step';
+  const counts = `${count(summary.vectors, what)}, ${count(summary.errors, 'error')}, ${count(summary.warnings, 'warning')}`;
   return `  ${verdict}  ${counts}${kinds.length > 0 ? ` (${kinds.join(', ')})` : ''}`;
+}
+
+/** `1 error`, `2 errors`. */
+export function count(n: number, noun: string): string {
+  return `${n} ${noun}${n === 1 ? '' : 's'}`;
 }
