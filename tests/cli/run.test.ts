@@ -138,6 +138,20 @@ describe('check', () => {
     expect(vector?.staticPower).toBeCloseTo(5e-4, 10);
   });
 
+  it('gives the static current path of a ratioed NOR with its current', async () => {
+    const { body } = await json('check', LIB, '--cell', 'tw_pnor2');
+    const row = (
+      body['vectors'] as { currentPaths: { chain: string[]; current: number }[]; supplyCurrent: number }[]
+    )[1];
+    // Derived: on-resistance R_unit·L/W with RCN 0.25 µm values (tables 3.2–3.3, from memory):
+    // load PMOS 31 kΩ·0.5/0.5 = 31 kΩ, NMOS 13 kΩ·0.25/1 = 3.25 kΩ; I = 2.5 V / 34.25 kΩ = 73.0 µA.
+    expect(row?.currentPaths).toEqual([
+      { chain: ['VDD', 'MPL', 'Y', 'MN2', 'VSS'], current: expect.any(Number) },
+    ]);
+    expect(row?.currentPaths[0]?.current).toBeCloseTo(2.5 / 34.25e3, 9);
+    expect(row?.supplyCurrent).toBeCloseTo(2.5 / 34.25e3, 9);
+  });
+
   it('exit status 1 for error findings, with the mismatch named', async () => {
     const { status, body } = await json('check', LIB, '--cell', 'tw_inv', '--expect', 'Y = A');
     expect(status).toBe(1);
