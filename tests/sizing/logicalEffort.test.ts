@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { circuit } from '../../src/core/model/builder.ts';
-import { sizingReport } from '../../src/core/sizing/sizingReport.ts';
+import { SizingOptionsError, sizingReport } from '../../src/core/sizing/sizingReport.ts';
 import { aoi21, inverter, nand, nor, scaled, UNIT_R, UNIT_RC_TECH } from './cells.ts';
 
 /** Relative comparison: the figures are ratios of floating-point sums. */
@@ -135,6 +135,10 @@ describe('worst-case drive and the equivalent inverter', () => {
     expect(out.pullDown).toBeNull();
     expect(out.logicalEffort.A).toBeNull();
     expect(out.notes.join(' ')).toMatch(/13 gate signals.*12/);
+  });
+
+  it('rejects a negative load, naming the option', () => {
+    expect(() => sizingReport(nand(2), UNIT_RC_TECH, { load: -1e-15 })).toThrow(SizingOptionsError);
   });
 
   it('does not change the netlist it is given', () => {

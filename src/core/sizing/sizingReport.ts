@@ -16,6 +16,17 @@ import { alwaysOnOhms, ControlLimitError, worstCase, type WorstCase } from './wo
 
 export { proposeWidths } from './proposeWidths.ts';
 
+export class SizingOptionsError extends Error {
+  override readonly name = 'SizingOptionsError';
+  constructor(
+    /** The option at fault: 'load'. */
+    readonly field: string,
+    message: string,
+  ) {
+    super(message);
+  }
+}
+
 export const SIZING_CONVENTION =
   "Worst case over every assignment of each output stage's gate signals (taken as independent); " +
   'transistors as their on-resistance R_unit·L/W; g = Cin/Cinv with Cinv the inverter of equal worst-case ' +
@@ -29,6 +40,9 @@ export const SIZING_CONVENTION =
  */
 export function sizingReport(netlist: Netlist, tech: Technology, options: SizingOptions = {}): SizingReport {
   const load = options.load ?? 0;
+  if (!Number.isFinite(load) || load < 0) {
+    throw new SizingOptionsError('load', `load must be a non-negative number of farads, got ${load}`);
+  }
   const caps = delayCapacitances(netlist, tech, options.sharedDiffusion ?? true);
   const outputs = netlist.outputs.map((o) => sizeOutput(netlist, tech, o, caps, load));
   const first = outputs[0];
