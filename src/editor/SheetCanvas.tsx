@@ -83,6 +83,10 @@ export function SheetCanvas({
       data-testid="sheet"
       data-tool={tool.mode}
       style={{ background: SHEET_THEME.background, cursor: tool.mode === 'select' ? 'default' : 'crosshair' }}
+      // Focusable, and focused on press, so keys act on the sheet rather than the last button.
+      tabIndex={0}
+      aria-label="Sheet"
+      onMouseDown={(e) => e.currentTarget.focus({ preventScroll: true })}
       onContextMenu={(e) => e.preventDefault()}
     >
       <Stage
