@@ -105,7 +105,7 @@ test('a SPICE library offers its cells; the chosen one opens', async ({ page }) 
   expect(buf.outputs).toEqual(['z']);
 });
 
-test('exports download: SVG drawing and SPICE netlist', async ({ page }) => {
+test('exports download: SVG drawing, SPICE netlist and PNG picture', async ({ page }) => {
   const app = new RailwisePage(page);
   await app.open();
   const exportMenu = page.getByRole('combobox', { name: 'Export' });
@@ -116,6 +116,13 @@ test('exports download: SVG drawing and SPICE netlist', async ({ page }) => {
   const spiceDownload = page.waitForEvent('download');
   await exportMenu.selectOption({ label: 'SPICE netlist' });
   expect((await spiceDownload).suggestedFilename()).toMatch(/\.sp$/);
+  const pngDownload = page.waitForEvent('download');
+  await exportMenu.selectOption({ label: 'picture (PNG)' });
+  const png = await pngDownload;
+  expect(png.suggestedFilename()).toMatch(/\.png$/);
+  // The PNG signature (ISO/IEC 15948:2004, clause 5.2, from memory): 89 50 4E 47 0D 0A 1A 0A.
+  const bytes = await (await png.createReadStream()).toArray();
+  expect(Buffer.concat(bytes).subarray(0, 8).toString('hex')).toBe('89504e470d0a1a0a');
 });
 
 test('the key map is in the help overlay and the About box carries the caution', async ({ page }) => {

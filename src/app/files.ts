@@ -12,7 +12,8 @@ import { exportTruthTableCsv } from '../core/netlist-io/csvExport.ts';
 import { checkDesign } from '../core/analysis/check.ts';
 import { sheetToSvg } from '../core/sheet/svg.ts';
 import { EMPTY_SHEET } from '../core/sheet/edits.ts';
-import { loadDesign, showMessage, store } from '../state/store.ts';
+import { flushSync } from 'react-dom';
+import { loadDesign, setViewport, showMessage, store } from '../state/store.ts';
 import { currentStage } from '../editor/stageRef.ts';
 import { fitToView } from '../editor/actions.ts';
 import { downloadText, downloadUrl, safeFileName } from './download.ts';
@@ -147,8 +148,18 @@ export function exportDesign(kind: ExportKind): void {
   }
 }
 
+/**
+ * The whole cell as a picture: the scene draws only what is on screen, so the view is fitted to
+ * the cell (rendered synchronously), captured at twice the screen resolution, then put back.
+ */
 function exportPng(name: string): void {
   const stage = currentStage();
   if (!stage) throw new Error('the sheet is not on screen');
-  downloadUrl(safeFileName(name, '.png'), stage.toDataURL({ pixelRatio: 2, mimeType: 'image/png' }));
+  const before = store.getState().viewport;
+  flushSync(() => fitToView());
+  try {
+    downloadUrl(safeFileName(name, '.png'), stage.toDataURL({ pixelRatio: 2, mimeType: 'image/png' }));
+  } finally {
+    setViewport(before);
+  }
 }
