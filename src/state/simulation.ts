@@ -17,12 +17,11 @@ import {
   toggleInput as flipInput,
 } from '../core/view/vectorControl.ts';
 import type { TableView } from '../core/view/vectorTable.ts';
-import { Lane } from '../worker/lanes.ts';
+import { Lane, acceptKinds } from '../worker/lanes.ts';
 import {
   IDLE_JOB,
   jobSize,
   type CheckResult,
-  type JobResult,
   type JobState,
   type PowerSettings,
   type PowerSizingResult,
@@ -90,32 +89,24 @@ export function useSimulation<T>(selector: (state: SimulationState) => T): T {
 const set = (patch: Partial<SimulationState>): void => simulationStore.setState(patch);
 const get = (): SimulationState => simulationStore.getState();
 
-function narrow<K extends JobResult['kind']>(kinds: readonly K[]) {
-  return (result: JobResult): Extract<JobResult, { kind: K }> => {
-    if (!(kinds as readonly string[]).includes(result.kind))
-      throw new Error(`unexpected ${result.kind} result`);
-    return result as Extract<JobResult, { kind: K }>;
-  };
-}
-
 const lanes = {
   sweep: new Lane<CheckResult>('sweep', {
     publish: (sweep) => set({ sweep }),
     read: () => get().sweep,
     revision: () => get().analysisRevision,
-    accept: narrow(['sweep', 'sequence']),
+    accept: acceptKinds(['sweep', 'sequence']),
   }),
   sequence: new Lane<CheckResult>('sequence', {
     publish: (sequence) => set({ sequence }),
     read: () => get().sequence,
     revision: () => get().analysisRevision,
-    accept: narrow(['sweep', 'sequence']),
+    accept: acceptKinds(['sweep', 'sequence']),
   }),
   power: new Lane<PowerSizingResult>('power', {
     publish: (power) => set({ power }),
     read: () => get().power,
     revision: () => get().analysisRevision,
-    accept: narrow(['power']),
+    accept: acceptKinds(['power']),
   }),
 };
 

@@ -24,6 +24,15 @@ export interface LaneHost<R> {
   readonly accept: (result: JobResult) => R;
 }
 
+/** A lane's `accept` for the given result kinds: anything else is a programming error. */
+export function acceptKinds<K extends JobResult['kind']>(kinds: readonly K[]) {
+  return (result: JobResult): Extract<JobResult, { kind: K }> => {
+    if (!(kinds as readonly string[]).includes(result.kind))
+      throw new Error(`unexpected ${result.kind} result`);
+    return result as Extract<JobResult, { kind: K }>;
+  };
+}
+
 function message(error: unknown): string {
   return error instanceof Error ? `${error.name}: ${error.message}` : String(error);
 }
