@@ -49,9 +49,12 @@ MP2 Y B VDD VDD pch W=2u L=0.25u
 MN1 Y A n GND nch W=2u L=0.25u
 MN2 n B GND GND nch W=2u L=0.25u
 .ends`;
-    const lib = importSpice(text, 'lib.sp');
+    const lib = importSpice(`* railwise: expect Y = A\n${text}`, 'lib.sp');
     expect(lib.isLibrary).toBe(true);
     expect(lib.cells.map((c) => c.name)).toEqual(['buf', 'nand']);
+    // An expected function outside every cell of a library belongs to none of them.
+    expect(lib.cells.every((c) => Object.keys(c.expectations).length === 0)).toBe(true);
+    expect(lib.notes).toEqual(['line 1: a "expect" directive outside any .subckt of a library is ignored']);
   });
 
   it('reads the example library: eight cells, pins and expected functions', () => {

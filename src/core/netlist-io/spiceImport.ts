@@ -45,21 +45,13 @@ export function importSpice(text: string, fileName: string, options: SpiceImport
   const file = parseSpice(text, fileName);
   const ctx = cellContext(file, fileName, options);
   const notes = [...file.notes];
+  const single = (spec: CellSpec): SpiceImport => {
+    const cells = [buildCell(spec, ctx)];
+    return { file: fileName, isLibrary: false, cells, failed: [], notes, order: [spec.name] };
+  };
   if (file.top.elements.some((e) => e.kind !== 'source')) {
-    const unused = file.subckts.filter(
-      (s) => !instantiated(file.top, s) && !file.subckts.some((o) => instantiated(o, s)),
-    );
-    if (unused.length > 0)
-      notes.push(`subcircuits defined but not used: ${unused.map((s) => s.name).join(', ')}`);
-    const spec: CellSpec = { name: baseName(fileName), body: file.top, ports: null, sharedSources: [] };
-    return {
-      file: fileName,
-      isLibrary: false,
-      cells: [buildCell(spec, ctx)],
-      failed: [],
-      notes,
-      order: [spec.name],
-    };
+    notes.push(...unusedNotes(file));
+    return single({ name: baseName(fileName), body: file.top, ports: null, sharedSources: [] });
   }
   const roots = file.subckts.filter((s) => !file.subckts.some((o) => o !== s && instantiated(o, s)));
   const [only] = roots;
@@ -69,21 +61,10 @@ export function importSpice(text: string, fileName: string, options: SpiceImport
   }
   const shared = topLevelSources(file.top);
   if (roots.length === 1) {
-    const spec: CellSpec = {
-      name: only.name,
-      body: withTopDirectives(only, file.top),
-      ports: only.ports,
-      sharedSources: shared,
-    };
-    return {
-      file: fileName,
-      isLibrary: false,
-      cells: [buildCell(spec, ctx)],
-      failed: [],
-      notes,
-      order: [spec.name],
-    };
+    const body = withTopDirectives(only, file.top);
+    return single({ name: only.name, body, ports: only.ports, sharedSources: shared });
   }
+  notes.push(...strayDirectiveNotes(file.top));
   const specs = roots.map((s): CellSpec => ({
     name: s.name,
     body: s,
@@ -92,6 +73,20 @@ export function importSpice(text: string, fileName: string, options: SpiceImport
   }));
   const order = specs.map((spec) => spec.name);
   return { file: fileName, isLibrary: true, ...buildEach(specs, ctx), notes, order };
+}
+
+function unusedNotes(file: SpiceFile): string[] {
+  const used = (s: Subckt): boolean =>
+    instantiated(file.top, s) || file.subckts.some((o) => instantiated(o, s));
+  const unused = file.subckts.filter((s) => !used(s)).map((s) => s.name);
+  return unused.length > 0 ? [`subcircuits defined but not used: ${unused.join(', ')}`] : [];
+}
+
+/** Pin and expect directives at the top of a library belong to no cell. */
+function strayDirectiveNotes(top: Body): string[] {
+  return top.directives
+    .filter((d) => d.key !== 'supply' && d.key !== 'ground')
+    .map((d) => `line ${d.line}: a "${d.key}" directive outside any .subckt of a library is ignored`);
 }
 
 /** Every cell of a library; one that cannot be built is set aside with its error. */
