@@ -1,5 +1,5 @@
 import { memo, useMemo } from 'react';
-import { Circle, Layer, Line } from 'react-konva';
+import { Circle, Layer, Line, Rect } from 'react-konva';
 import type { SheetPart, SheetWire } from '../core/sheet/types.ts';
 import { useStore } from '../state/store.ts';
 import { PART_VIEWS } from './devices/index.ts';
@@ -31,6 +31,7 @@ const WireNode = memo(function WireNode({ wire, color }: { wire: SheetWire; colo
 export function SceneLayer() {
   const sheet = useStore((s) => s.doc.sheet);
   const junctions = useStore((s) => s.geometry.junctions);
+  const openEnds = useStore((s) => s.geometry.openEnds);
   const selected = useStore((s) => s.selection.selected);
   const highlight = useStore((s) => s.selection.highlight);
   const deviceParts = useStore((s) => s.geometry.deviceParts);
@@ -58,6 +59,21 @@ export function SceneLayer() {
         ))}
         {junctions.map((j) => (
           <Circle key={`${j.x},${j.y}`} x={j.x} y={j.y} radius={JUNCTION_RADIUS} fill={SHEET_THEME.wire} />
+        ))}
+        {openEnds.map((j) => (
+          // An unfinished wire end: a small hollow diamond, so it reads without colour.
+          <Rect
+            key={`open:${j.x},${j.y}`}
+            x={j.x}
+            y={j.y}
+            width={0.36}
+            height={0.36}
+            offsetX={0.18}
+            offsetY={0.18}
+            rotation={45}
+            stroke={SHEET_THEME.subtleText}
+            strokeWidth={0.06}
+          />
         ))}
         {shown.parts.map((p) => (
           <PartNode key={p.id} part={p} color={partColor(p.id)} />

@@ -28,6 +28,8 @@ export interface SheetGeometry {
   /** The inverse: part id of every device name. */
   readonly deviceParts: Readonly<Record<string, string>>;
   readonly junctions: readonly { readonly x: number; readonly y: number }[];
+  /** Wire ends that touch nothing, marked on the sheet as unfinished wiring. */
+  readonly openEnds: readonly { readonly x: number; readonly y: number }[];
 }
 
 export interface DerivedDesign {
@@ -57,6 +59,7 @@ export function deriveDesign(doc: SheetDocument): DerivedDesign {
       partDevices: d.partDevices,
       deviceParts,
       junctions: d.junctions,
+      openEnds: d.openEnds,
     },
     issues: d.issues,
   };

@@ -22,6 +22,7 @@
  *                                              source, a, b, net)
  *                                   partDevices  part id → device name;  deviceParts  the inverse
  *                                   junctions  [{x, y}] grid points of junction dots
+ *                                   openEnds   [{x, y}] wire ends that touch nothing
  *     doc.sheet: Sheet            parts and wires in grid units (see src/core/sheet/types.ts);
  *                                 one grid unit is GRID_PX pixels at scale 1 (src/editor/constants.ts).
  *     issues: SheetIssue[]        drawing problems found while deriving the netlist (name conflicts…).

@@ -39,6 +39,26 @@ describe('sheetToNetlist', () => {
     expect(junctions).toHaveLength(2);
   });
 
+  it('marks wire ends that touch nothing, and only those', () => {
+    const sheet = drawnInverter();
+    expect(sheetToNetlist(sheet).openEnds).toEqual([]);
+    const dangling: Sheet = {
+      ...sheet,
+      wires: [
+        ...sheet.wires,
+        {
+          id: 'w9',
+          points: [
+            { x: 4, y: 0 },
+            { x: 4, y: 6 },
+            { x: 9, y: 6 },
+          ],
+        },
+      ],
+    };
+    expect(sheetToNetlist(dangling).openEnds).toEqual([{ x: 9, y: 6 }]);
+  });
+
   it('keeps two wires that only cross apart (no end or bend at the crossing)', () => {
     const sheet: Sheet = {
       parts: [part('a', 'label', 'H', -2, 0), part('b', 'label', 'V', 0, -2)],

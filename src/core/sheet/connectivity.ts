@@ -50,6 +50,8 @@ export interface SheetConnectivity {
   readonly pins: readonly PlacedPin[];
   /** Points where three or more wire ends, segments or pins meet: drawn as junction dots. */
   readonly junctions: readonly { readonly x: number; readonly y: number }[];
+  /** Wire ends that touch nothing (no pin, no other wire): likely unfinished wiring. */
+  readonly openEnds: readonly { readonly x: number; readonly y: number }[];
 }
 
 /** Grid point → wires covering it, and how many segment ends arrive there. */
@@ -105,5 +107,12 @@ export function sheetConnectivity(sheet: Sheet): SheetConnectivity {
     const [x, y] = k.split(',').map(Number) as [number, number];
     junctions.push({ x, y });
   }
-  return { groups, pins, junctions };
+  const openEnds = sheet.wires
+    .flatMap((w) => [w.points[0]!, w.points[w.points.length - 1]!])
+    .filter((p) => {
+      const k = pointKey(p);
+      return arms.get(k) === 1 && !pinsAt.has(k) && (covering.get(k)?.size ?? 0) === 1;
+    })
+    .map((p) => ({ x: p.x, y: p.y }));
+  return { groups, pins, junctions, openEnds };
 }

@@ -23,6 +23,7 @@ export interface DerivedNetlist {
   /** Device name of every device part, by part id. */
   readonly partDevices: Readonly<Record<string, string>>;
   readonly junctions: readonly { readonly x: number; readonly y: number }[];
+  readonly openEnds: readonly { readonly x: number; readonly y: number }[];
   readonly issues: readonly SheetIssue[];
 }
 
@@ -109,7 +110,7 @@ function uniqueInOrder(values: readonly string[]): string[] {
 
 export function sheetToNetlist(sheet: Sheet, name = 'cell'): DerivedNetlist {
   const issues: SheetIssue[] = [];
-  const { groups, junctions } = sheetConnectivity(sheet);
+  const { groups, junctions, openEnds } = sheetConnectivity(sheet);
   joinEqualNames(sheet, groups);
   const nameOf = nameGroups(sheet, groups, issues);
   const pinNets: Record<string, string> = {};
@@ -144,7 +145,7 @@ export function sheetToNetlist(sheet: Sheet, name = 'cell'): DerivedNetlist {
     inputs: uniqueInOrder(inputs).filter((n) => !railNets.has(n)),
     outputs: uniqueInOrder(outputs),
   };
-  return { netlist, wireNets, pinNets, partDevices, junctions, issues };
+  return { netlist, wireNets, pinNets, partDevices, junctions, openEnds, issues };
 }
 
 function reportDuplicateDevices(sheet: Sheet, issues: SheetIssue[]): void {
