@@ -58,6 +58,16 @@ test('the resistor-load inverter: pick the vector that draws current and read it
   await expect(ws.currentPaths).toContainText('→ GND');
   await expect(ws.vectorFindings).toContainText('static-current');
   await page.screenshot({ path: test.info().outputPath('current-path.png') });
+
+  // Double-clicking the A pin on the sheet flips it back: no path, no current.
+  const pin = await page.evaluate(() =>
+    window.__railwise!.state().doc.sheet.parts.find((p) => p.kind === 'input'),
+  );
+  const at = await app.toPage({ x: pin?.x ?? NaN, y: pin?.y ?? NaN });
+  await page.mouse.dblclick(at.x, at.y);
+  await expect(ws.bit('A')).toContainText('0');
+  await expect(ws.supplyCurrent).toHaveText('0 A');
+  await expect(ws.currentPaths).toContainText('No static current');
   expect(errors).toEqual([]);
 });
 

@@ -48,6 +48,7 @@ export function Legend() {
           </li>
         ))}
         <li>Point at a wire to read its estimated voltage.</li>
+        <li>Double-click an input pin, or click its bit above, to flip it; [ and ] step through vectors.</li>
       </ul>
     </details>
   );

@@ -2,12 +2,12 @@ import { useEffect, useMemo, useRef, useState } from 'react';
 import { Label, Layer, Tag, Text } from 'react-konva';
 import type Konva from 'konva';
 import { buildIndex, hitTest, type Hit } from '../../core/sheet/hitTest.ts';
-import type { Point } from '../../core/sheet/types.ts';
+import type { Point, Sheet } from '../../core/sheet/types.ts';
 import { formatVolts } from '../../core/view/format.ts';
 import { overlayPaint, paintLayout } from '../../core/view/overlayPaint.ts';
 import { traceRoute } from '../../core/view/traceRoute.ts';
 import { lookOf, type LookName } from '../../core/view/visualLanguage.ts';
-import { useSimulation } from '../../state/simulation.ts';
+import { toggleInput, useSimulation } from '../../state/simulation.ts';
 import type { SheetGeometry } from '../../state/document.ts';
 import { useStore } from '../../state/store.ts';
 import { CurrentTrace } from './CurrentTraces.tsx';
@@ -22,8 +22,18 @@ function netOfHit(hit: Hit | null, geometry: SheetGeometry): string | undefined 
   return geometry.pinNets[`${hit.partId}.net`];
 }
 
-/** The estimated voltage of the wire or pin under the pointer, found by pure hit testing. */
-function HoverLayer() {
+/** The input pin under the pointer, if any: double-clicking it flips that input. */
+function inputOfHit(hit: Hit | null, sheet: Sheet, geometry: SheetGeometry): string | undefined {
+  if (hit === null || hit.type === 'wire') return undefined;
+  const part = sheet.parts.find((p) => p.id === hit.partId);
+  return part?.kind === 'input' ? geometry.pinNets[`${part.id}.net`] : undefined;
+}
+
+/**
+ * Pointer on the sheet, found by pure hit testing: the estimated voltage of the wire or pin under
+ * it, and a double-click on an input pin flips that input (the same action as its bit in the panel).
+ */
+function PointerLayer() {
   const layer = useRef<Konva.Layer>(null);
   const sheet = useStore((s) => s.doc.sheet);
   const geometry = useStore((s) => s.geometry);
@@ -38,12 +48,18 @@ function HoverLayer() {
       const net = at ? netOfHit(hitTest(index, at), geometry) : undefined;
       setHover(at && net !== undefined ? { net, at } : null);
     };
+    const onDoubleClick = (): void => {
+      const at = layer.current?.getRelativePointerPosition();
+      const input = at ? inputOfHit(hitTest(index, at), sheet, geometry) : undefined;
+      if (input !== undefined) toggleInput(input);
+    };
     stage.on('mousemove.rwOverlay', onMove);
+    stage.on('dblclick.rwOverlay', onDoubleClick);
     stage.on('mouseleave.rwOverlay', () => setHover(null));
     return () => {
       stage.off('.rwOverlay');
     };
-  }, [index, geometry]);
+  }, [index, sheet, geometry]);
   return (
     <Layer ref={layer} listening={false}>
       {hover !== null && state !== undefined && (
@@ -106,7 +122,7 @@ export function SimulationOverlay() {
         )}
         <MarkPainter marks={paint.marks} />
       </Layer>
-      <HoverLayer />
+      <PointerLayer />
     </>
   );
 }
