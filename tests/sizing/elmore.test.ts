@@ -121,3 +121,31 @@ describe('stages that are not plain complementary gates', () => {
     near(out.fall?.seconds, UNIT_R * 10e-15);
   });
 });
+
+describe('transmission gates switch both devices together', () => {
+  // A transmission gate's select and its local complement always differ, so both devices conduct
+  // together and the pass resistance is Rn ∥ Rp (Weste & Harris, 4th ed., ch. 1, transmission gate;
+  // common practice). With the complement on its own pin, the worst case is one device alone.
+  const tg = (localInverter: boolean): Netlist => {
+    let b = circuit('tg').rails().input('D', 'S').output('Y');
+    if (localInverter) {
+      b = b
+        .pmos('PI', { g: 'S', d: 'Sb', s: 'VDD', w: 2, l: 1 })
+        .nmos('NI', { g: 'S', d: 'Sb', s: 'GND', w: 1, l: 1 });
+    } else b = b.input('Sb');
+    return b
+      .nmos('NT', { g: 'S', d: 'D', s: 'Y', w: 1, l: 1 })
+      .pmos('PT', { g: 'Sb', d: 'D', s: 'Y', w: 2, l: 1 })
+      .build();
+  };
+
+  it('with a local inverter on the select: Rn ∥ Rp', () => {
+    const out = sizingReport(tg(true), IDEAL).outputs[0];
+    near(out.pullUp?.ohms, UNIT_R / 2); // R ∥ 2R/2 = R/2
+    expect(out.pullUp?.controls).toEqual({ S: '1', Sb: '0' });
+  });
+
+  it('with the complement on its own pin: one device alone, R', () => {
+    near(sizingReport(tg(false), IDEAL).outputs[0].pullUp?.ohms, UNIT_R);
+  });
+});

@@ -28,7 +28,8 @@ export class SizingOptionsError extends Error {
 }
 
 export const SIZING_CONVENTION =
-  "Worst case over every assignment of each output stage's gate signals (taken as independent); " +
+  "Worst case over every assignment of each output stage's gate signals (independent, except that a " +
+  "local inverter's output is the complement of its input); " +
   'transistors as their on-resistance R_unit·L/W; g = Cin/Cinv with Cinv the inverter of equal worst-case ' +
   'drive; parasitic delay in units of p_inv; rise and fall as Elmore time constants (Σ R·C, no 0.69 factor) ' +
   'with the opposing network open and input pins as ideal sources.';

@@ -29,8 +29,14 @@ export interface Stage {
   readonly nets: readonly string[];
   readonly roles: readonly SourceRole[];
   readonly elements: readonly StageElement[];
-  /** Gate nets, each treated as an independent signal (conservative for internally derived ones). */
+  /** Gate nets: each an independent signal unless it is a local inverter's output (below). */
   readonly controls: readonly string[];
+  /**
+   * Per control, the index of the control it is the complement of (its net is driven only by a plain
+   * inverter from that control), or −1. Such pairs never take equal values in the worst-case search,
+   * so a transmission gate's two devices switch together as they do in the cell.
+   */
+  readonly complementOf: readonly number[];
 }
 
 interface Channel {
@@ -42,7 +48,10 @@ interface Channel {
   readonly gate: string | null;
 }
 
-function channels(netlist: Netlist, tech: Technology): Channel[] {
+/** Resistances do not matter where only connections are read. */
+const DEFAULT_UNITS = { rn: 1, rp: 1 };
+
+function channels(netlist: Netlist, tech: Pick<Technology, 'rn' | 'rp'>): Channel[] {
   const out: Channel[] = [];
   for (const d of netlist.devices) {
     if (d.kind === 'nmos' || d.kind === 'pmos') {
@@ -120,7 +129,42 @@ export function extractStage(netlist: Netlist, tech: Technology, output: string)
   });
   // A transistor whose gate sits on a rail that turns it off never conducts: drop it.
   const live = elements.filter((e, i) => e.control >= 0 || conductsConstantly(members[i], roles));
-  return { output: 0, nets, roles: nets.map((n) => roles.get(n) ?? 'none'), elements: live, controls };
+  const inverters = inverterInputs(netlist);
+  const complementOf = controls.map((net) => controls.indexOf(inverters.get(net) ?? ''));
+  return {
+    output: 0,
+    nets,
+    roles: nets.map((n) => roles.get(n) ?? 'none'),
+    elements: live,
+    controls,
+    complementOf,
+  };
+}
+
+/**
+ * Nets driven by nothing but a plain inverter, mapped to that inverter's input: exactly one PMOS to
+ * a supply and one NMOS to a ground on the net's channel side, sharing one gate.
+ */
+export function inverterInputs(netlist: Netlist): Map<string, string> {
+  const roles = sourceRoles(netlist);
+  const byNet = new Map<string, Channel[]>();
+  for (const ch of channels(netlist, DEFAULT_UNITS)) {
+    for (const n of ch.a === ch.b ? [ch.a] : [ch.a, ch.b]) {
+      const list = byNet.get(n);
+      if (list === undefined) byNet.set(n, [ch]);
+      else list.push(ch);
+    }
+  }
+  const result = new Map<string, string>();
+  for (const [net, chs] of byNet) {
+    if (roles.has(net) || chs.length !== 2) continue;
+    const p = chs.find((ch) => ch.kind === 'pmos');
+    const n = chs.find((ch) => ch.kind === 'nmos');
+    if (!p || !n || p.gate !== n.gate || p.gate === null || p.gate === net) continue;
+    const far = (ch: Channel): SourceRole | undefined => roles.get(ch.a === net ? ch.b : ch.a);
+    if (far(p) === 'up' && far(n) === 'down') result.set(net, p.gate);
+  }
+  return result;
 }
 
 function conductsConstantly(ch: Channel, roles: ReadonlyMap<string, SourceRole>): boolean {

@@ -25,13 +25,18 @@ function controlValues(stage: Stage, code: number): Record<string, ControlValue>
   return values;
 }
 
+/** False when a local inverter's output would equal its input: a state the cell never reaches. */
+function consistent(stage: Stage, code: number): boolean {
+  return stage.complementOf.every((k, j) => k < 0 || ((code >> j) & 1) !== ((code >> k) & 1));
+}
+
 function conducting(stage: Stage, code: number): boolean[] {
   return stage.elements.map((e) => e.control < 0 || ((code >> e.control) & 1) === (e.onWhenHigh ? 1 : 0));
 }
 
 /**
- * The worst case of one direction over every assignment of the stage's gate signals, each treated
- * as independent. Null when no assignment connects the output to a source of that direction.
+ * The worst case of one direction over every assignment of the stage's gate signals, independent
+ * except for local inverter pairs. Null when no assignment connects the output to a source of that direction.
  * Ties keep the first configuration in counting order, so the result is deterministic.
  */
 export function worstCase(stage: Stage, direction: Direction, caps: Float64Array): WorstCase | null {
@@ -43,6 +48,7 @@ export function worstCase(stage: Stage, direction: Direction, caps: Float64Array
   let byOhms: { e: Evaluation; code: number } | null = null;
   let byDelay: { e: Evaluation; code: number } | null = null;
   for (let code = 0; code < 1 << stage.controls.length; code++) {
+    if (!consistent(stage, code)) continue;
     const e = evaluate(stage, conducting(stage, code), direction, caps);
     if (e === null) continue;
     if (byOhms === null || e.ohms > byOhms.e.ohms * (1 + 1e-9)) byOhms = { e, code };
