@@ -84,4 +84,27 @@ describe('drawing an inverter with the headless editor', () => {
     expect(ed.state().design.netlist.devices[0]).toMatchObject({ drain: 'net1' });
     expect(ed.state().geometry.pinNets['p2.net']).toBe('net1');
   });
+
+  it('pressing on an open wire end carries the wire on from there', () => {
+    const ed = headlessEditor();
+    ed.key('9');
+    ed.click(8, 0);
+    ed.key('j');
+    ed.click(0, 0); // start on empty sheet
+    ed.click(4, 0); // a bend…
+    ed.key('Escape'); // …then give up: nothing drawn
+    expect(ed.state().doc.sheet.wires).toHaveLength(0);
+    ed.key('j');
+    ed.click(0, 0);
+    ed.click(4, 0);
+    ed.click(4, 0); // a second click on the same point ends the wire there
+    expect(ed.state().geometry.openEnds).toEqual([
+      { x: 0, y: 0 },
+      { x: 4, y: 0 },
+    ]);
+    ed.drag({ x: 4, y: 0 }, { x: 8, y: 0 }); // from the open end to the label's pin
+    expect(ed.state().doc.sheet.wires).toHaveLength(2);
+    expect(ed.state().geometry.openEnds).toEqual([{ x: 0, y: 0 }]);
+    expect(ed.state().geometry.wireNets).toEqual({ w1: 'net1', w2: 'net1' });
+  });
 });

@@ -44,6 +44,12 @@ function isSelected(ids: ItemIds): boolean {
   return ids.parts.every((id) => sel.parts.includes(id)) && ids.wires.every((id) => sel.wires.includes(id));
 }
 
+/** An unfinished wire end within reach: pressing there carries the wire on. */
+function openEndNear(p: Point): Point | null {
+  const ends = store.getState().geometry.openEnds;
+  return ends.find((q) => Math.hypot(q.x - p.x, q.y - p.y) <= 0.45) ?? null;
+}
+
 /** Rings the pin under an idle pointer: the cue that a drag from here draws a wire. */
 function showPinUnder(e: ToolPointer): void {
   const hit = hitTest(indexFor(store.getState().doc.sheet), e.at);
@@ -80,6 +86,11 @@ export function createSelectTool(startWire: (at: Point) => void): ToolMachine {
       if (store.getState().gesture?.type === 'pin') setGesture(null);
       if (hit?.type === 'pin' && !e.shift) {
         startWire(hit.at);
+        return;
+      }
+      const end = openEndNear(e.at);
+      if (end && !e.shift) {
+        startWire(end);
         return;
       }
       pointAt(e, hit);
