@@ -111,22 +111,17 @@ export function extractStage(netlist: Netlist, tech: Technology, output: string)
     }
     return local.get(n) as number;
   };
-  const isControl = (ch: Channel): boolean => {
-    const constant = ch.gate === null ? undefined : roles.get(ch.gate);
-    return ch.gate !== null && constant !== 'up' && constant !== 'down';
-  };
+  const isControl = (ch: Channel): boolean => ch.gate !== null && !isRail(roles.get(ch.gate));
   const controls = [...new Set(members.filter(isControl).map((ch) => ch.gate as string))].sort(compareNames);
-  const elements = members.map((ch): StageElement => {
-    return {
-      name: ch.name,
-      kind: ch.kind,
-      a: at(ch.a),
-      b: at(ch.b),
-      ohms: ch.ohms,
-      control: isControl(ch) ? controls.indexOf(ch.gate as string) : -1,
-      onWhenHigh: ch.kind !== 'pmos',
-    };
-  });
+  const elements = members.map((ch): StageElement => ({
+    name: ch.name,
+    kind: ch.kind,
+    a: at(ch.a),
+    b: at(ch.b),
+    ohms: ch.ohms,
+    control: isControl(ch) ? controls.indexOf(ch.gate as string) : -1,
+    onWhenHigh: ch.kind !== 'pmos',
+  }));
   // A transistor whose gate sits on a rail that turns it off never conducts: drop it.
   const live = elements.filter((e, i) => e.control >= 0 || conductsConstantly(members[i], roles));
   const inverters = inverterInputs(netlist);
@@ -171,6 +166,10 @@ function conductsConstantly(ch: Channel, roles: ReadonlyMap<string, SourceRole>)
   if (ch.gate === null) return true;
   const level = roles.get(ch.gate);
   return ch.kind === 'nmos' ? level === 'up' : level === 'down';
+}
+
+function isRail(role: SourceRole | undefined): boolean {
+  return role === 'up' || role === 'down';
 }
 
 function compareNames(x: string, y: string): number {

@@ -19,6 +19,32 @@ function Breakdown({ net }: { readonly net: NetPower }) {
   );
 }
 
+interface NetRowProps {
+  readonly net: NetPower;
+  readonly highlighted: boolean;
+  readonly onShow: (net: string | null) => void;
+}
+
+function NetRow({ net, highlighted, onShow }: NetRowProps) {
+  return (
+    <tr
+      tabIndex={0}
+      className={highlighted ? 'rw-selected' : undefined}
+      onMouseEnter={() => onShow(net.net)}
+      onFocus={() => onShow(net.net)}
+      onBlur={() => onShow(null)}
+    >
+      <th scope="row" className="rw-mono">
+        {net.net}
+        {net.isInput ? ' (pin)' : ''}
+      </th>
+      <td className="rw-num">{engineering(net.capacitance.total, 'F')}</td>
+      <td className="rw-num">{net.activity.toFixed(4)}</td>
+      <td className="rw-num">{formatPower(net.watts)}</td>
+    </tr>
+  );
+}
+
 /**
  * Switched capacitance, activity and power per net. Pointing at (or focusing) a row shows what its
  * capacitance is made of; the highlighted row is view state only, never part of the design.
@@ -39,22 +65,7 @@ export function NetCapacitanceTable({ nets }: { readonly nets: readonly NetPower
         </thead>
         <tbody onMouseLeave={() => setShown(null)}>
           {nets.map((n) => (
-            <tr
-              key={n.net}
-              tabIndex={0}
-              className={n.net === shown ? 'rw-selected' : undefined}
-              onMouseEnter={() => setShown(n.net)}
-              onFocus={() => setShown(n.net)}
-              onBlur={() => setShown(null)}
-            >
-              <th scope="row" className="rw-mono">
-                {n.net}
-                {n.isInput ? ' (pin)' : ''}
-              </th>
-              <td className="rw-num">{engineering(n.capacitance.total, 'F')}</td>
-              <td className="rw-num">{n.activity.toFixed(4)}</td>
-              <td className="rw-num">{formatPower(n.watts)}</td>
-            </tr>
+            <NetRow key={n.net} net={n} highlighted={n.net === shown} onShow={setShown} />
           ))}
         </tbody>
       </table>

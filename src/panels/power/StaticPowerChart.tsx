@@ -1,6 +1,6 @@
 import { formatPower } from '../../core/view/format.ts';
 import type { VectorPower } from '../../core/power/types.ts';
-import { chartGeometry, DEFAULT_FRAME } from './chartGeometry.ts';
+import { chartGeometry, DEFAULT_FRAME, type Bar, type Tick } from './chartGeometry.ts';
 
 interface StaticPowerChartProps {
   readonly vectors: readonly VectorPower[];
@@ -9,7 +9,76 @@ interface StaticPowerChartProps {
   readonly unit: 'vector' | 'step';
 }
 
+/** Height of the band under the plot for the vector labels, pixels. */
 const AXIS = 14;
+/** Labels under the bars only while they fit. */
+const MAX_LABELLED_BARS = 16;
+
+function HatchPattern() {
+  return (
+    <defs>
+      <pattern
+        id="rw-leak-hatch"
+        width="4"
+        height="4"
+        patternUnits="userSpaceOnUse"
+        patternTransform="rotate(45)"
+      >
+        <rect width="4" height="4" className="rw-bar-leak-bg" />
+        <line x1="0" y1="0" x2="0" y2="4" className="rw-bar-leak-line" />
+      </pattern>
+    </defs>
+  );
+}
+
+function TickLine({ tick }: { readonly tick: Tick }) {
+  const { left, width } = DEFAULT_FRAME;
+  return (
+    <g>
+      <line x1={left} x2={width} y1={tick.y} y2={tick.y} className="rw-chart-grid" />
+      <text x={left - 3} y={tick.y + 3} textAnchor="end" className="rw-chart-tick">
+        {formatPower(tick.watts)}
+      </text>
+    </g>
+  );
+}
+
+function BarMark({
+  bar,
+  unit,
+  labelled,
+}: {
+  readonly bar: Bar;
+  readonly unit: string;
+  readonly labelled: boolean;
+}) {
+  const dc = bar.kind === 'dc';
+  const what = dc ? 'through a conducting path' : 'leakage only';
+  return (
+    <g>
+      <rect
+        x={bar.x}
+        y={bar.y}
+        width={bar.width}
+        height={bar.height}
+        className={dc ? 'rw-bar-dc' : 'rw-bar-leak'}
+        fill={dc ? undefined : 'url(#rw-leak-hatch)'}
+      >
+        <title>{`${unit} ${bar.index} (${bar.label}): ${formatPower(bar.watts)}, ${what}`}</title>
+      </rect>
+      {labelled && (
+        <text
+          x={bar.x + bar.width / 2}
+          y={DEFAULT_FRAME.height + AXIS - 3}
+          textAnchor="middle"
+          className="rw-chart-tick rw-mono"
+        >
+          {bar.label}
+        </text>
+      )}
+    </g>
+  );
+}
 
 /**
  * Static power per vector as bars on a logarithmic scale, in plain SVG. A bar through a conducting
@@ -18,7 +87,7 @@ const AXIS = 14;
 export function StaticPowerChart({ vectors, inputs, unit }: StaticPowerChartProps) {
   const { bars, ticks, total } = chartGeometry(vectors, inputs);
   if (ticks.length === 0) return <p className="rw-muted">No static power in any {unit}.</p>;
-  const { width, height, left } = DEFAULT_FRAME;
+  const { width, height } = DEFAULT_FRAME;
   return (
     <figure className="rw-power-chart" data-testid="static-power-chart">
       <svg
@@ -26,49 +95,12 @@ export function StaticPowerChart({ vectors, inputs, unit }: StaticPowerChartProp
         role="img"
         aria-label={`Static power per ${unit}, log scale`}
       >
-        <defs>
-          <pattern
-            id="rw-leak-hatch"
-            width="4"
-            height="4"
-            patternUnits="userSpaceOnUse"
-            patternTransform="rotate(45)"
-          >
-            <rect width="4" height="4" className="rw-bar-leak-bg" />
-            <line x1="0" y1="0" x2="0" y2="4" className="rw-bar-leak-line" />
-          </pattern>
-        </defs>
+        <HatchPattern />
         {ticks.map((t) => (
-          <g key={t.watts}>
-            <line x1={left} x2={width} y1={t.y} y2={t.y} className="rw-chart-grid" />
-            <text x={left - 3} y={t.y + 3} textAnchor="end" className="rw-chart-tick">
-              {formatPower(t.watts)}
-            </text>
-          </g>
+          <TickLine key={t.watts} tick={t} />
         ))}
         {bars.map((b) => (
-          <g key={b.index}>
-            <rect
-              x={b.x}
-              y={b.y}
-              width={b.width}
-              height={b.height}
-              className={b.kind === 'dc' ? 'rw-bar-dc' : 'rw-bar-leak'}
-              fill={b.kind === 'dc' ? undefined : 'url(#rw-leak-hatch)'}
-            >
-              <title>{`${unit} ${b.index} (${b.label}): ${formatPower(b.watts)}${b.kind === 'dc' ? ', through a conducting path' : ', leakage only'}`}</title>
-            </rect>
-            {bars.length <= 16 && (
-              <text
-                x={b.x + b.width / 2}
-                y={height + AXIS - 3}
-                textAnchor="middle"
-                className="rw-chart-tick rw-mono"
-              >
-                {b.label}
-              </text>
-            )}
-          </g>
+          <BarMark key={b.index} bar={b} unit={unit} labelled={bars.length <= MAX_LABELLED_BARS} />
         ))}
       </svg>
       <figcaption className="rw-muted">
