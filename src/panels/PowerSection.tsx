@@ -1,6 +1,7 @@
 import { useState } from 'react';
 import { engineering } from '../core/view/format.ts';
-import { setPowerSettings, startPower, useSimulation } from '../state/simulation.ts';
+import { cancelJob, setPowerSettings, startPower, useSimulation } from '../state/simulation.ts';
+import { JobBar } from './JobBar.tsx';
 import type { PowerSettings } from '../worker/protocol.ts';
 import { PowerSizingPanel } from './power/PowerSizingPanel.tsx';
 import { Section } from './Section.tsx';
@@ -94,12 +95,18 @@ export function PowerSection() {
       badge={result?.power ? engineering(result.power.totalWatts, 'W') : undefined}
     >
       <Settings settings={settings} hasSequence={hasSequence} />
-      {job.status === 'idle' && (
+      {(job.status === 'idle' || job.status === 'cancelled') && (
         <button type="button" onClick={() => void startPower()}>
           Compute power and sizing
         </button>
       )}
-      {job.status === 'running' && <p className="rw-muted">Computing…</p>}
+      {job.status === 'running' &&
+        (job.long ? (
+          <JobBar label="Computing power" progress={job.progress} onCancel={() => cancelJob('power')} />
+        ) : (
+          <p className="rw-muted">Computing…</p>
+        ))}
+      {job.status === 'cancelled' && <p className="rw-muted">Cancelled.</p>}
       <PowerSizingPanel power={result?.power ?? null} sizing={result?.sizing ?? null} error={error} />
     </Section>
   );

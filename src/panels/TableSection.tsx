@@ -1,5 +1,6 @@
 import { useMemo } from 'react';
-import { PROGRESS_THRESHOLD_VECTORS, jobSize } from '../worker/protocol.ts';
+import { MAX_INPUTS_WITH_UNDRIVEN, PROGRESS_THRESHOLD_VECTORS, jobSize } from '../worker/protocol.ts';
+import { DEFAULT_MAX_INPUTS } from '../core/analysis/check.ts';
 import { arrangeRows, kindCounts, vectorRows } from '../core/view/vectorTable.ts';
 import {
   AUTO_SWEEP_VECTORS,
@@ -20,6 +21,15 @@ function SweepStatus() {
   const undrivenInputs = useSimulation((s) => s.undrivenInputs);
   if (design === null) return null;
   const size = jobSize({ kind: 'sweep', revision: 0, design, undrivenInputs });
+  const limit = undrivenInputs ? MAX_INPUTS_WITH_UNDRIVEN : DEFAULT_MAX_INPUTS;
+  if (design.netlist.inputs.length > limit) {
+    return (
+      <p className="rw-muted" data-testid="sweep-limit">
+        {design.netlist.inputs.length} inputs: more than the {limit} an exhaustive check allows. Check the
+        cell with sequences, or split it.
+      </p>
+    );
+  }
   if (sweep.status === 'running' && sweep.long) {
     return (
       <JobBar

@@ -9,6 +9,7 @@ import { expressionProblem } from '../core/view/expectation.ts';
 import { sequenceLevels } from '../core/view/sequenceLevels.ts';
 import { powerReport } from '../core/power/powerReport.ts';
 import { sizingReport } from '../core/sizing/sizingReport.ts';
+import { MAX_INPUTS_WITH_UNDRIVEN } from './protocol.ts';
 import type {
   AnalysisJob,
   CheckResult,
@@ -19,9 +20,6 @@ import type {
   SequenceJob,
   SweepJob,
 } from './protocol.ts';
-
-/** With Z as a third value, 3^10 = 59,049 vectors: about the two-valued limit of 2^16. */
-export const MAX_INPUTS_WITH_UNDRIVEN = 10;
 
 /** Progress messages cross a thread boundary: at most one per this many milliseconds. */
 const PROGRESS_INTERVAL_MS = 50;

@@ -97,6 +97,9 @@ export interface AnalysisWorkerApi {
   run(job: AnalysisJob, onProgress: (progress: JobProgress) => void): Promise<JobResult>;
 }
 
+/** With Z as a third value, 3^10 = 59,049 vectors: about the two-valued limit of 2^16. */
+export const MAX_INPUTS_WITH_UNDRIVEN = 10;
+
 /** Sweeps with more vectors than this show a progress bar and a cancel button. */
 export const PROGRESS_THRESHOLD_VECTORS = 4096;
 
