@@ -119,7 +119,11 @@ export function autoPlace(netlist: Netlist, options: Partial<AutoPlaceOptions> =
   netlist.inputs.forEach((net, i) =>
     builder.naming('input', net, { x: minX, y: -Math.floor(netlist.inputs.length / 2) * 3 + i * 3 }),
   );
-  netlist.outputs.forEach((net, i) => builder.naming('output', net, { x: maxX, y: i * 3 }));
+  netlist.outputs.forEach((net, i) => {
+    const at = { x: maxX, y: i * 3 };
+    builder.naming('output', net, at);
+    builder.wireToOutput(net, at);
+  });
   return builder.sheet();
 }
 
@@ -226,6 +230,25 @@ class SheetBuilder {
       // Channel-pin labels point right, never up or down, so stacked labels cannot collide.
       else this.naming('label', p.net, p.pin, p.pin.pin === 'gate' ? railRotation(dir, 'right') : 0);
     }
+  }
+
+  /**
+   * Draws the output pin's wire when a label of its net sits on the pin's row with a clear run to
+   * it (no other pin on the way, which would join a foreign net); otherwise the name joins them.
+   */
+  wireToOutput(net: string, at: Point): void {
+    const start = this.parts
+      .filter((p) => p.kind === 'label' && p.name === net && p.y === at.y && p.x < at.x)
+      .sort((a, b) => b.x - a.x)[0];
+    if (!start) return;
+    const blocked = this.parts.some(
+      (part) =>
+        part !== start && pinPositions(part).some((q) => q.y === at.y && q.x >= start.x && q.x < at.x),
+    );
+    if (blocked) return;
+    this.wires.push({ id: `w${this.wires.length + 1}`, points: [{ x: start.x, y: at.y }, at] });
+    // The label turns to the left so its text does not sit on the new wire.
+    this.parts[this.parts.indexOf(start)] = { ...start, rotation: 2 };
   }
 
   sheet(): Sheet {
