@@ -31,6 +31,8 @@ export interface CheckArgs extends CellChoice {
   readonly undriven: boolean;
   readonly power?: PowerChoice;
   readonly sizing: boolean;
+  /** Output load in farads for --power and --sizing (0 when not given). */
+  readonly load: number;
   readonly jobs?: number;
   readonly help: boolean;
 }
@@ -80,8 +82,10 @@ export function parseCheckArgs(argv: readonly string[]): CheckArgs {
   const { values: v, positionals } = parse(argv, CHECK_OPTIONS);
   if (!v.help && positionals.length === 0)
     throw new UsageError('check needs at least one FILE (see railwise check --help)');
-  const powerFlag = v.freq !== undefined || v.activity !== undefined || v.load !== undefined;
-  if (powerFlag && !v.power) throw new UsageError('--freq, --activity and --load go with --power');
+  const powerFlag = v.freq !== undefined || v.activity !== undefined;
+  if (powerFlag && !v.power) throw new UsageError('--freq and --activity go with --power');
+  if (v.load !== undefined && !v.power && !v.sizing)
+    throw new UsageError('--load goes with --power or --sizing');
   return {
     ...cellChoice(v),
     files: positionals,
@@ -89,6 +93,7 @@ export function parseCheckArgs(argv: readonly string[]): CheckArgs {
     allNets: v['all-nets'] ?? false,
     undriven: v.undriven ?? false,
     sizing: v.sizing ?? false,
+    load: loadValue(v.load),
     help: v.help ?? false,
     ...(v.power ? { power: powerChoice(v) } : {}),
     ...(v.jobs === undefined ? {} : { jobs: positiveInteger('--jobs', v.jobs) }),
@@ -143,12 +148,9 @@ function powerChoice(v: { freq?: string; activity?: string; load?: string }): Po
   if (activity !== undefined && activity !== 'sequence' && activity !== 'random') {
     throw new UsageError(`--activity must be sequence or random (got "${activity}")`);
   }
-  const load = v.load === undefined ? 0 : spiceValue(v.load);
-  if (load === null || load < 0)
-    throw new UsageError(`--load "${v.load}" is not a capacitance in farads (e.g. 10f)`);
   return {
-    freq: v.freq === undefined ? DEFAULT_FREQ : positiveNumber('--freq', v.freq),
-    load,
+    freq: v.freq === undefined ? DEFAULT_FREQ : frequency(v.freq),
+    load: loadValue(v.load),
     ...(activity === undefined ? {} : { activity }),
   };
 }
@@ -170,6 +172,27 @@ function expectations(texts: readonly string[]): Record<string, string> {
 
 function list(text: string | undefined): string[] {
   return text === undefined ? [] : text.split(/[\s,]+/).filter((s) => s !== '');
+}
+
+function loadValue(text: string | undefined): number {
+  const load = text === undefined ? 0 : spiceValue(text);
+  if (load === null || load < 0)
+    throw new UsageError(`--load "${text}" is not a capacitance in farads (e.g. 10f)`);
+  return load;
+}
+
+/**
+ * A clock frequency. With a hertz unit the prefix is read as people write clocks (`100MHz`, `1.2GHz`,
+ * `500kHz`: M is mega, any case); without one, as a SPICE number (`100meg`, `1e8`).
+ */
+export function frequency(text: string): number {
+  const hz = /^\s*([0-9]*\.?[0-9]+(?:e[+-]?[0-9]+)?)\s*([kmg]?)hz\s*$/i.exec(text);
+  if (hz) {
+    const scale = { '': 1, k: 1e3, m: 1e6, g: 1e9 }[hz[2].toLowerCase() as '' | 'k' | 'm' | 'g'];
+    const value = Number(hz[1]) * scale;
+    if (value > 0) return value;
+  }
+  return positiveNumber('--freq', text);
 }
 
 /** Accepts SPICE-style numbers: `2.5`, `100meg`, `1e8`. */

@@ -22,6 +22,7 @@ export async function checkCommand(args: CheckArgs, io: Output): Promise<number>
     allNets: args.allNets,
     undriven: args.undriven,
     sizing: args.sizing,
+    load: args.load,
     ...(args.sequence === undefined ? {} : { sequence: args.sequence }),
     ...(args.power === undefined ? {} : { power: args.power }),
   };

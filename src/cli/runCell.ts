@@ -22,6 +22,8 @@ export interface RunOptions {
   readonly sequence?: string;
   readonly power?: PowerChoice;
   readonly sizing: boolean;
+  /** Output load for sizing, farads. */
+  readonly load: number;
 }
 
 export const CAUTION =
@@ -59,7 +61,7 @@ export function runCell(job: CellJob, options: RunOptions): CellResult {
         : checkSequence(job.netlist, steps, checkOptions);
     const power = options.power === undefined ? undefined : cellPower(job, options.power, steps);
     const sizing = options.sizing
-      ? sizingReport(job.netlist, job.technology, { load: options.power?.load ?? 0 })
+      ? sizingReport(job.netlist, job.technology, { load: options.load })
       : undefined;
     return { json: cellJson(job, report, power, sizing) };
   } catch (e) {

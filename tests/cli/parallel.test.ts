@@ -4,7 +4,7 @@ import { loadCells, type CellJob } from '../../src/cli/loadCells.ts';
 import { PARALLEL_WORK_THRESHOLD, runCells, runInWorkers, workerCount } from '../../src/cli/parallel.ts';
 import type { RunOptions } from '../../src/cli/runCell.ts';
 
-const OPTIONS: RunOptions = { allNets: false, undriven: false, sizing: false };
+const OPTIONS: RunOptions = { allNets: false, undriven: false, sizing: false, load: 0 };
 
 function jobs(): CellJob[] {
   const loaded = loadCells(['public/examples/tidewater-cells.sp'], { expect: {}, supply: [], ground: [] });

@@ -42,7 +42,7 @@ describe('arguments', () => {
     [['check', LIB, '--colour'], /--colour/],
     [['check', LIB, '--expect', 'Y is !A'], /--expect "Y is !A": write OUTPUT = EXPRESSION/],
     [['check', LIB, '--vdd', 'high'], /--vdd "high" is not a positive number/],
-    [['check', LIB, '--freq', '1meg'], /go with --power/],
+    [['check', LIB, '--freq', '1meg'], /--freq and --activity go with --power/],
     [['check', LIB, '--power', '--activity', 'bursty'], /--activity must be sequence or random/],
     [['check', LIB, '--jobs', '0'], /--jobs "0"/],
     [['check', LIB, '--inputs', 'A'], /apply to one cell: add --cell NAME/],
