@@ -45,7 +45,7 @@ Report:
   --json                print one JSON object (a "cells" list for a library)
   --all-nets            report every net's voltage, not only the outputs'
   --power               add static and dynamic power
-    --freq F            clock frequency, e.g. 100meg or 1e8 (default 100meg)
+    --freq F            clock frequency, e.g. 100MHz, 100meg or 1e8 (default 100MHz)
     --activity KIND     sequence or random (default: sequence with --sequence, else random)
     --load C            load on each output, e.g. 10f (default 0)
   --sizing              add logical effort, delay estimates and proposed widths
