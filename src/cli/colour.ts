@@ -34,22 +34,5 @@ export function colourWanted(isTty: boolean, env: Readonly<Record<string, string
   return isTty && (env['NO_COLOR'] ?? '') === '';
 }
 
-/** Engineering notation with an SI prefix: 1.23e-3 A → "1.23 mA". */
-export function formatSi(value: number, unit: string): string {
-  if (value === 0 || !Number.isFinite(value)) return `${value} ${unit}`;
-  const prefixes: readonly [number, string][] = [
-    [1e9, 'G'],
-    [1e6, 'M'],
-    [1e3, 'k'],
-    [1, ''],
-    [1e-3, 'm'],
-    [1e-6, 'µ'],
-    [1e-9, 'n'],
-    [1e-12, 'p'],
-    [1e-15, 'f'],
-    [1e-18, 'a'],
-  ];
-  const abs = Math.abs(value);
-  const [scale, prefix] = prefixes.find(([s]) => abs >= s) ?? [1e-18, 'a'];
-  return `${Number((value / scale).toPrecision(3))} ${prefix}${unit}`;
-}
+/** Engineering notation with an SI prefix: 1.23e-3 A → "1.23 mA" (the panels' formatter). */
+export { engineering as formatSi } from '../core/view/format.ts';

@@ -12,6 +12,7 @@ import {
   levelName,
 } from '../solver/levels.ts';
 import type { SolveResult } from '../solver/simulator.ts';
+import { engineering } from '../view/format.ts';
 import type { Finding, FindingKind, Severity } from './report.ts';
 
 /** Names of a result's nets and devices, for messages. */
@@ -29,20 +30,6 @@ class Namer {
       i < p.elements.length ? [this.net(n), this.element(p.elements[i])] : [this.net(n)],
     );
   }
-}
-
-export function formatAmps(a: number): string {
-  const abs = Math.abs(a);
-  if (abs >= 1e-3) return `${(a * 1e3).toPrecision(3)} mA`;
-  if (abs >= 1e-6) return `${(a * 1e6).toPrecision(3)} µA`;
-  return `${(a * 1e9).toPrecision(3)} nA`;
-}
-
-export function formatWatts(w: number): string {
-  const abs = Math.abs(w);
-  if (abs >= 1e-3) return `${(w * 1e3).toPrecision(3)} mW`;
-  if (abs >= 1e-6) return `${(w * 1e6).toPrecision(3)} µW`;
-  return `${(w * 1e9).toPrecision(3)} nW`;
 }
 
 function finding(
@@ -87,7 +74,7 @@ function currentFindings(r: SolveResult, vector: number, label: string): Finding
     const transistorsOnly = p.elements.every((e) => c.chKind[e] !== RESISTOR);
     const crossesX = p.nets.some((n) => r.levels[n] === LEVEL_X && !r.topology.isSource[n]);
     const short = transistorsOnly && crossesX;
-    const message = `${short ? 'short' : 'static current'} at ${label}: ${chain.join(' → ')}, ${formatAmps(p.current)}, ${formatWatts(watts)}`;
+    const message = `${short ? 'short' : 'static current'} at ${label}: ${chain.join(' → ')}, ${engineering(p.current, 'A')}, ${engineering(watts, 'W')}`;
     return {
       kind: short ? 'short' : 'static-current',
       severity: short ? 'error' : 'warning',
