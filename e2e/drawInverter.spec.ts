@@ -58,7 +58,7 @@ test('draw an inverter, check the derived netlist, undo and redo it all', async 
   expect(errors).toEqual([]);
 });
 
-test('edit W in the side form; a bad value is refused with its reason', async ({ page }) => {
+test('edit W and the name in the side form; a bad value is refused with its reason', async ({ page }) => {
   const app = new RailwisePage(page);
   await app.open();
   await app.starter('Inverter');
@@ -77,4 +77,13 @@ test('edit W in the side form; a bad value is refused with its reason', async ({
   await w.fill('3');
   await w.press('Enter');
   await expect.poll(async () => (await app.netlist()).devices.find((d) => d.name === nmos.name)!.w).toBe(3);
+
+  // Double-click the part: its name opens for editing; the new name reaches the netlist.
+  const at = await app.toPage({ x: pos.x - 0.5, y: pos.y + 0.5 });
+  await page.mouse.dblclick(at.x, at.y);
+  const name = page.getByLabel('Name');
+  await expect(name).toBeFocused();
+  await name.fill('NPULL');
+  await name.press('Enter');
+  await expect.poll(async () => (await app.netlist()).devices.map((d) => d.name)).toContain('NPULL');
 });

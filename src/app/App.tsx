@@ -13,6 +13,7 @@ import { HelpOverlay } from './HelpOverlay.tsx';
 import { AboutBox } from './AboutBox.tsx';
 import { CellChooser } from './CellChooser.tsx';
 import { handleKey } from './keyboard.ts';
+import { commandById } from './commands.ts';
 import { OPEN_ACCEPT, OPEN_INPUT_ID, openFile } from './files.ts';
 import './app.css';
 
@@ -51,7 +52,11 @@ export function App() {
         <StarterShelf />
       </nav>
       <main className="rw-centre">
-        <SheetCanvas controller={controller} onFirstLayout={fitToView} />
+        <SheetCanvas
+          controller={controller}
+          onFirstLayout={fitToView}
+          onPartDoubleClick={commandById('rename').run}
+        />
         <MessageBar />
         <footer className="rw-caution-line">
           Switch-level estimates, not sign-off: confirm with circuit simulation and the foundry's rules.

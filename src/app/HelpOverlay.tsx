@@ -10,7 +10,7 @@ const MOUSE: readonly [string, string][] = [
   ['Drag a selected part', 'move it; wires follow'],
   ['Drag on empty sheet', 'select everything inside the box'],
   ['Drag from a pin', 'draw a wire; release on a pin, or click to bend, then click a pin or wire'],
-  ['Double-click', 'end a wire where it is'],
+  ['Double-click', 'end a wire where it is; on a part, edit its name'],
   ['Wheel', 'zoom around the pointer'],
   ['Right or middle drag', 'pan the sheet'],
   ['Esc', 'cancel the wire, drag or placement in progress; else clear the selection'],

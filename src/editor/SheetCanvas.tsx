@@ -48,9 +48,12 @@ function toPointer(stage: Konva.Stage, evt: MouseEvent): ToolPointer | null {
 export function SheetCanvas({
   controller,
   onFirstLayout,
+  onPartDoubleClick,
 }: {
   controller?: EditorController;
   onFirstLayout?: () => void;
+  /** A double click that leaves exactly one part selected (the shell opens its name for editing). */
+  onPartDoubleClick?: () => void;
 }) {
   const box = useRef<HTMLDivElement>(null);
   const stageRef = useRef<Konva.Stage>(null);
@@ -101,6 +104,10 @@ export function SheetCanvas({
         onMouseMove={route(ctl.move)}
         onMouseUp={route(ctl.up)}
         onWheel={onWheel}
+        onDblClick={() => {
+          const { tool, selection } = store.getState();
+          if (tool.mode === 'select' && selection.selected.parts.length === 1) onPartDoubleClick?.();
+        }}
       >
         <GridLayer />
         <SceneLayer />

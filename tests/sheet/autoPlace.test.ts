@@ -58,6 +58,15 @@ describe('auto-placement of a netlist', () => {
     );
   });
 
+  it('wires the output pin to its net when the row is clear', () => {
+    const nand2 = STARTERS.find((s) => s.id === 'nand2')!.design.netlist;
+    const sheet = autoPlace(nand2);
+    const out = sheet.parts.find((p) => p.kind === 'output')!;
+    const wire = sheet.wires.find((w) => w.points.some((p) => p.x === out.x && p.y === out.y));
+    expect(wire).toBeDefined();
+    expect(sheetToNetlist(sheet).wireNets[wire!.id]).toBe('Y');
+  });
+
   it('never overlaps two device bodies', () => {
     for (const s of STARTERS) {
       const boxes = autoPlace(s.design.netlist)
