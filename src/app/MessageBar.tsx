@@ -1,5 +1,8 @@
 import { dismissMessage, useStore } from '../state/store.ts';
 
+/** Drawing problems shown at once; more would hide the sheet. */
+const MAX_ISSUES = 3;
+
 /** The latest message: errors stay until dismissed, and say what was left unchanged. */
 export function MessageBar() {
   const message = useStore((s) => s.message);
@@ -18,11 +21,14 @@ export function MessageBar() {
           </button>
         </div>
       ) : null}
-      {issues.map((i, k) => (
+      {issues.slice(0, MAX_ISSUES).map((i, k) => (
         <div key={k} className="rw-message rw-warning" data-testid="sheet-issue">
           Sheet: {i.message}
         </div>
       ))}
+      {issues.length > MAX_ISSUES ? (
+        <div className="rw-message rw-warning">…and {issues.length - MAX_ISSUES} more drawing problems.</div>
+      ) : null}
     </div>
   );
 }
