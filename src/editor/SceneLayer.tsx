@@ -6,6 +6,10 @@ import { PART_VIEWS } from './devices/index.ts';
 import { JUNCTION_RADIUS, SHEET_THEME, WIRE_STROKE } from './theme.ts';
 import { textDetail, visibleItems, visibleRect } from './visible.ts';
 import { TextDetailContext } from './devices/detail.ts';
+import { sheetConnectivity } from '../core/sheet/connectivity.ts';
+
+/** Parts up to which junction dots follow a drag frame by frame (a few ms per frame at most). */
+const LIVE_DOTS_LIMIT = 400;
 
 const PartNode = memo(function PartNode({ part, color }: { part: SheetPart; color: string }) {
   const View = PART_VIEWS[part.kind];
@@ -30,8 +34,14 @@ const WireNode = memo(function WireNode({ wire, color }: { wire: SheetWire; colo
  */
 export function SceneLayer() {
   const sheet = useStore((s) => s.doc.sheet);
-  const junctions = useStore((s) => s.geometry.junctions);
-  const openEnds = useStore((s) => s.geometry.openEnds);
+  const derivedSheet = useStore((s) => s.design.sheet);
+  const derived = useStore((s) => s.geometry);
+  // During a drag the design is derived only at the end; small sheets get live dots meanwhile.
+  const { junctions, openEnds } = useMemo(
+    () =>
+      sheet !== derivedSheet && sheet.parts.length <= LIVE_DOTS_LIMIT ? sheetConnectivity(sheet) : derived,
+    [sheet, derivedSheet, derived],
+  );
   const selected = useStore((s) => s.selection.selected);
   const highlight = useStore((s) => s.selection.highlight);
   const deviceParts = useStore((s) => s.geometry.deviceParts);
