@@ -5,7 +5,8 @@ import { isOrthogonalPath } from '../../src/core/sheet/routing.ts';
 import { sheetToNetlist } from '../../src/core/sheet/toNetlist.ts';
 import { pinPositions } from '../../src/core/sheet/geometry.ts';
 import type { Point } from '../../src/core/sheet/types.ts';
-import { drawnInverter } from './fixtures.ts';
+import type { Sheet } from '../../src/core/sheet/types.ts';
+import { drawnInverter, part } from './fixtures.ts';
 
 describe('moving, turning and flipping with wires that follow', () => {
   it('moves a part and drags the ends of its wires along, orthogonally', () => {
@@ -94,5 +95,36 @@ describe('moving, turning and flipping with wires that follow', () => {
         expect(out.some((p) => p.x === newFirst.x && p.y === newFirst.y)).toBe(true);
       }),
     );
+  });
+});
+
+describe('parts attached by touching pins', () => {
+  it('a rail and a label sitting on a moved device pin travel with it, and the netlist holds', () => {
+    const sheet: Sheet = {
+      parts: [
+        part('n', 'nmos', 'N1', 0, 0),
+        part('g', 'gnd', 'GND', 0, 2),
+        part('l', 'label', 'IN', -2, 0, { rotation: 2 }),
+      ],
+      wires: [],
+    };
+    const moved = moveItems(sheet, { parts: ['n'], wires: [] }, 5, 3);
+    expect(moved.parts.map((p) => [p.id, p.x, p.y])).toEqual([
+      ['n', 5, 3],
+      ['g', 5, 5],
+      ['l', 3, 3],
+    ]);
+    expect(sheetToNetlist(moved).netlist).toEqual(sheetToNetlist(sheet).netlist);
+    const turned = rotateItems(sheet, { parts: ['n'], wires: [] });
+    expect(sheetToNetlist(turned).netlist).toEqual(sheetToNetlist(sheet).netlist);
+  });
+
+  it('moving a label alone leaves the device where it is', () => {
+    const sheet: Sheet = {
+      parts: [part('n', 'nmos', 'N1', 0, 0), part('l', 'label', 'IN', -2, 0)],
+      wires: [],
+    };
+    const moved = moveItems(sheet, { parts: ['l'], wires: [] }, 0, 4);
+    expect(moved.parts[0]).toEqual(sheet.parts[0]);
   });
 });

@@ -1,11 +1,14 @@
 /**
  * Moving, rotating and mirroring a selection. Wires that are not selected but end on a moved pin
- * (or on the end of a moved wire) follow: their end moves and the path stays orthogonal.
+ * (or on the end of a moved wire) follow: their end moves and the path stays orthogonal. Rails,
+ * pins and labels sitting directly on a moved part's pin travel with it, so a move never silently
+ * cuts a connection made by touching pins.
  */
 import type { Point, Sheet, SheetPart, SheetWire } from './types.ts';
 import type { ItemIds } from './selection.ts';
 import { nextRotation, partBounds, pinPositions, pointKey, pointsBounds, unionRects } from './geometry.ts';
 import { normalizePath } from './routing.ts';
+import { isDevicePart } from './parts/index.ts';
 
 type PointMap = (p: Point) => Point;
 
@@ -16,7 +19,7 @@ function transformItems(
   mapPart: (p: SheetPart) => SheetPart,
   mapPoint: PointMap,
 ): Sheet {
-  const partSet = new Set(ids.parts);
+  const partSet = withAttachedNames(sheet, ids.parts);
   const wireSet = new Set(ids.wires);
   const moves = new Map<string, Point>();
   const parts = sheet.parts.map((part) => {
@@ -33,6 +36,19 @@ function transformItems(
     return { ...wire, points };
   });
   return { parts, wires: wires.map((w) => (wireSet.has(w.id) ? w : followEnds(w, moves))) };
+}
+
+/** The selected parts plus every single-pin naming part whose pin sits on one of their pins. */
+function withAttachedNames(sheet: Sheet, selected: readonly string[]): Set<string> {
+  const set = new Set(selected);
+  const pins = new Set(
+    sheet.parts.filter((p) => set.has(p.id)).flatMap((p) => pinPositions(p).map(pointKey)),
+  );
+  for (const part of sheet.parts) {
+    if (set.has(part.id) || isDevicePart(part.kind)) continue;
+    if (pinPositions(part).some((pin) => pins.has(pointKey(pin)))) set.add(part.id);
+  }
+  return set;
 }
 
 /** Moves the ends of a wire that sit on moved points, keeping every segment orthogonal. */
@@ -80,7 +96,7 @@ export function moveItems(sheet: Sheet, ids: ItemIds, dx: number, dy: number): S
 
 /** Centre of the selection, on the grid, so that turned parts stay on the grid. */
 export function selectionPivot(sheet: Sheet, ids: ItemIds): Point | null {
-  const partSet = new Set(ids.parts);
+  const partSet = withAttachedNames(sheet, ids.parts);
   const wireSet = new Set(ids.wires);
   const parts = sheet.parts.filter((p) => partSet.has(p.id));
   if (parts.length === 1 && ids.wires.length === 0) return { x: parts[0]!.x, y: parts[0]!.y };
