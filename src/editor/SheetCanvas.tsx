@@ -11,6 +11,8 @@ import { InteractionLayer } from './InteractionLayer.tsx';
 import { createEditorController, type EditorController } from './tools/controller.ts';
 import type { ToolPointer } from './tools/types.ts';
 import { setStage } from './stageRef.ts';
+import { hitTest } from '../core/sheet/hitTest.ts';
+import { indexFor } from './tools/sheetIndex.ts';
 import { SHEET_THEME } from './theme.ts';
 
 /** Keeps the store told of the sheet area's size (for fit-to-view and the grid). */
@@ -91,6 +93,20 @@ export function SheetCanvas({
       aria-label="Sheet"
       onMouseDown={(e) => e.currentTarget.focus({ preventScroll: true })}
       onContextMenu={(e) => e.preventDefault()}
+      // The browser's double click (same spot, not just two quick clicks anywhere) on a selected part.
+      onDoubleClick={(e) => {
+        const rect = e.currentTarget.getBoundingClientRect();
+        const s = store.getState();
+        const at = screenToSheet(s.viewport, { x: e.clientX - rect.left, y: e.clientY - rect.top });
+        const hit = hitTest(indexFor(s.doc.sheet), at);
+        if (
+          s.tool.mode === 'select' &&
+          hit?.type === 'part' &&
+          s.selection.selected.parts.includes(hit.partId)
+        ) {
+          onPartDoubleClick?.();
+        }
+      }}
     >
       <Stage
         ref={stageRef}
@@ -104,10 +120,6 @@ export function SheetCanvas({
         onMouseMove={route(ctl.move)}
         onMouseUp={route(ctl.up)}
         onWheel={onWheel}
-        onDblClick={() => {
-          const { tool, selection } = store.getState();
-          if (tool.mode === 'select' && selection.selected.parts.length === 1) onPartDoubleClick?.();
-        }}
       >
         <GridLayer />
         <SceneLayer />
