@@ -2,7 +2,7 @@ import { COMMANDS, describeKey, type Command } from './commands.ts';
 import { setOverlay } from '../state/store.ts';
 import { Dialog } from './Dialog.tsx';
 
-const GROUPS: Command['group'][] = ['Parts', 'Edit', 'View', 'File', 'Help'];
+const GROUPS: Command['group'][] = ['Parts', 'Edit', 'View', 'Analysis', 'File', 'Help'];
 
 const MOUSE: readonly [string, string][] = [
   ['Click', 'select a part or wire'],

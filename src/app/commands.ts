@@ -20,6 +20,7 @@ import {
   startWiring,
   zoomBy,
 } from '../editor/actions.ts';
+import { stepVector } from '../state/simulation.ts';
 import { redo, setOverlay, undo } from '../state/store.ts';
 import { exportDesign, newDesign, pickAndOpen, saveDesign, type ExportKind } from './files.ts';
 
@@ -33,7 +34,7 @@ export interface KeyBinding {
 export interface Command {
   readonly id: string;
   readonly label: string;
-  readonly group: 'Parts' | 'Edit' | 'View' | 'File' | 'Help';
+  readonly group: 'Parts' | 'Edit' | 'View' | 'Analysis' | 'File' | 'Help';
   readonly keys: readonly KeyBinding[];
   readonly run: () => void;
 }
@@ -68,6 +69,20 @@ function exportCommand(kind: ExportKind, label: string): Command {
 
 export const COMMANDS: readonly Command[] = [
   ...PART_KINDS.map(placeCommand),
+  {
+    id: 'vector-previous',
+    label: 'Previous input vector',
+    group: 'Analysis',
+    keys: [{ key: '[' }],
+    run: () => stepVector(-1),
+  },
+  {
+    id: 'vector-next',
+    label: 'Next input vector',
+    group: 'Analysis',
+    keys: [{ key: ']' }],
+    run: () => stepVector(1),
+  },
   {
     id: 'wire',
     label: 'Draw a wire (or drag from any pin)',
