@@ -59,6 +59,8 @@ describe('floating', () => {
     const f = report.findings.filter((x) => x.kind === 'floating');
     expect(f.map((x) => x.vector)).toEqual([0, 2]);
     expect(f.every((x) => x.severity === 'error' && x.nets[0] === 'Y')).toBe(true);
+    // It names the devices that could drive Y, all off: the enable pair of the stack.
+    expect(f[0].devices).toEqual(['NEN', 'PEN']);
   });
   it('is not reported where the expected value is Z', () => {
     expect(checkSweep(tristate.netlist, { expectations: tristate.expectations }).summary.floating).toBe(0);
@@ -177,6 +179,8 @@ describe('mismatch', () => {
   it('every differing vector is reported', () => {
     const report = checkSweep(nand.netlist, { expectations: { Y: 'A & B' } });
     expect(report.findings.filter((f) => f.kind === 'mismatch').map((f) => f.vector)).toEqual([0, 1, 2, 3]);
+    // Vector 0 (A = B = 0): Y is driven high by both PMOS, which the finding names.
+    expect(report.findings.find((f) => f.kind === 'mismatch')?.devices).toEqual(['PA', 'PB']);
   });
   it('the right function gives none', () => {
     expect(checkSweep(nand.netlist, { expectations: nand.expectations }).summary.mismatch).toBe(0);

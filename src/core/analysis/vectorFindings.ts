@@ -89,6 +89,20 @@ function currentFindings(r: SolveResult, vector: number, label: string): Finding
   });
 }
 
+/** Devices whose channel ends on any of the nets, sorted by name; only conducting ones if asked. */
+function channelDevices(r: SolveResult, nets: readonly number[], conductingOnly: boolean): string[] {
+  const c = r.compiled;
+  const name = new Namer(r);
+  const devices = new Set<string>();
+  for (const n of nets) {
+    for (let p = c.netChannels.start[n]; p < c.netChannels.start[n + 1]; p++) {
+      const e = c.netChannels.items[p];
+      if (!conductingOnly || r.conduction[e] !== 0) devices.add(name.element(e));
+    }
+  }
+  return [...devices].sort();
+}
+
 /** Nets that feed a gate or are outputs: the ones whose level matters to the cell. */
 function observed(r: SolveResult, n: number): boolean {
   const c = r.compiled;
@@ -103,16 +117,7 @@ function flaggedFindings(r: SolveResult, vector: number, label: string): Finding
     Array.from({ length: c.netCount }, (_, n) => n).filter(
       (n) => (r.flags[n] & flag) !== 0 && !r.topology.isSource[n] && (!onlyObserved || observed(r, n)),
     );
-  const touching = (list: number[]): string[] => {
-    const devices = new Set<string>();
-    for (const n of list) {
-      for (let p = c.netChannels.start[n]; p < c.netChannels.start[n + 1]; p++) {
-        const e = c.netChannels.items[p];
-        if (r.conduction[e] !== 0) devices.add(name.element(e));
-      }
-    }
-    return [...devices].sort();
-  };
+  const touching = (list: number[]): string[] => channelDevices(r, list, true);
   for (const n of nets(FLAG_CONTENTION, false)) {
     const v = r.volts[n];
     out.push(
@@ -185,7 +190,7 @@ function flaggedFindings(r: SolveResult, vector: number, label: string): Finding
 }
 
 /**
- * Floating nets (SPEC §4): an output is an error unless Z is expected; a gate-feeding net is an
+ * Floating nets (SPEC §4), naming the (all off) devices whose channels end on them: an output is an error unless Z is expected; a gate-feeding net is an
  * error without known charge and a warning with it (a dynamic node). Diffusion-only internal nodes
  * (inside transistor stacks) that feed no gate are not reported: they float by design in every
  * static gate.
@@ -212,7 +217,7 @@ function floatingFindings(
         severity,
         vector,
         [name.net(n)],
-        [],
+        channelDevices(r, [n], false),
         `floating at ${label}: ${name.net(n)} has no conducting path to any source, ${charge}`,
       ),
     );
@@ -238,7 +243,7 @@ function mismatchFindings(
           'error',
           vector,
           [name.net(n)],
-          [],
+          channelDevices(r, [n], true),
           `mismatch at ${label}: ${name.net(n)} is ${got}, expected ${want}`,
         ),
       );
