@@ -1,7 +1,7 @@
 import { useEffect, useMemo, useRef, useState } from 'react';
 import { Label, Layer, Tag, Text } from 'react-konva';
 import type Konva from 'konva';
-import { buildIndex, hitTest, type Hit } from '../../core/sheet/hitTest.ts';
+import { hitTest, type Hit } from '../../core/sheet/hitTest.ts';
 import type { Point, Sheet } from '../../core/sheet/types.ts';
 import { formatVolts } from '../../core/view/format.ts';
 import { overlayPaint, paintLayout } from '../../core/view/overlayPaint.ts';
@@ -10,6 +10,7 @@ import { lookOf, type LookName } from '../../core/view/visualLanguage.ts';
 import { toggleInput, useSimulation } from '../../state/simulation.ts';
 import type { SheetGeometry } from '../../state/document.ts';
 import { useStore } from '../../state/store.ts';
+import { indexFor } from '../tools/sheetIndex.ts';
 import { CurrentTrace } from './CurrentTraces.tsx';
 import { DevicePainter, MarkPainter, StrokePainter } from './Painters.tsx';
 
@@ -37,7 +38,7 @@ function PointerLayer() {
   const layer = useRef<Konva.Layer>(null);
   const sheet = useStore((s) => s.doc.sheet);
   const geometry = useStore((s) => s.geometry);
-  const index = useMemo(() => buildIndex(sheet), [sheet]);
+  const index = indexFor(sheet); // the editor's cached index of this very sheet
   const [hover, setHover] = useState<Hover>(null);
   const state = useSimulation((s) => (hover === null ? undefined : s.live?.net(hover.net)));
   useEffect(() => {
@@ -87,11 +88,14 @@ export function SimulationOverlay() {
   const sheet = useStore((s) => s.doc.sheet);
   const geometry = useStore((s) => s.geometry);
   const scale = useStore((s) => s.viewport.scale);
+  // While a drag is in progress the levels are stale until it ends (the design is re-derived then),
+  // so the overlay steps aside rather than re-laying every wire on every frame.
+  const dragging = useStore((s) => s.history.gestureStart !== null);
   // The layout follows the drawing; a toggle only re-files segments by look.
-  const layout = useMemo(() => paintLayout(sheet, geometry), [sheet, geometry]);
+  const layout = useMemo(() => (dragging ? null : paintLayout(sheet, geometry)), [dragging, sheet, geometry]);
   const paint = useMemo(
     () =>
-      live === null
+      live === null || layout === null
         ? null
         : overlayPaint(
             layout,
@@ -102,10 +106,10 @@ export function SimulationOverlay() {
   );
   const routes = useMemo(
     () =>
-      live === null
+      live === null || dragging
         ? []
         : live.traces.map((t) => ({ trace: t, route: traceRoute(sheet, geometry, t.chain) })),
-    [live, sheet, geometry],
+    [live, dragging, sheet, geometry],
   );
   if (paint === null) return null;
   return (
