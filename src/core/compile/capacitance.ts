@@ -18,6 +18,22 @@ export function capacitanceBreakdown(
   tech: Technology,
   netIndex: ReadonlyMap<string, number>,
 ): CapacitanceBreakdown[] {
+  const { gate, diffusion, explicit } = capacitanceParts(netlist, tech, netIndex);
+  return Array.from(gate, (g, i) => ({ gate: g, diffusion: diffusion[i], explicit: explicit[i] }));
+}
+
+/** Each net's total capacitance to ground, farads. */
+export function netCapacitances(
+  netlist: Netlist,
+  tech: Technology,
+  netIndex: ReadonlyMap<string, number>,
+): Float64Array {
+  const { gate, diffusion, explicit } = capacitanceParts(netlist, tech, netIndex);
+  for (let i = 0; i < gate.length; i++) gate[i] += diffusion[i] + explicit[i];
+  return gate;
+}
+
+function capacitanceParts(netlist: Netlist, tech: Technology, netIndex: ReadonlyMap<string, number>) {
   const gate = new Float64Array(netIndex.size);
   const diffusion = new Float64Array(netIndex.size);
   const explicit = new Float64Array(netIndex.size);
@@ -39,16 +55,5 @@ export function capacitanceBreakdown(
         break;
     }
   }
-  return Array.from(gate, (g, i) => ({ gate: g, diffusion: diffusion[i], explicit: explicit[i] }));
-}
-
-export function netCapacitances(
-  netlist: Netlist,
-  tech: Technology,
-  netIndex: ReadonlyMap<string, number>,
-): Float64Array {
-  return Float64Array.from(
-    capacitanceBreakdown(netlist, tech, netIndex),
-    (b) => b.gate + b.diffusion + b.explicit,
-  );
+  return { gate, diffusion, explicit };
 }

@@ -2,7 +2,7 @@ import type { Netlist } from '../model/netlist.ts';
 import { netNames } from '../model/netlist.ts';
 import type { Technology } from '../model/technology.ts';
 import { netCapacitances } from './capacitance.ts';
-import { csr, type Csr } from './csr.ts';
+import { csrFrom, type Csr } from './csr.ts';
 
 /** Channel element kinds in the compiled form. */
 export const NMOS = 0;
@@ -91,12 +91,23 @@ export function compile(netlist: Netlist, tech: Technology): CompiledNetlist {
     }
   });
 
-  const channelPairs: [number, number][] = [];
-  const gatePairs: [number, number][] = [];
+  // Adjacency lists: each element under both channel ends (once if they are the same net), and
+  // under its gate.
+  const channelRows: number[] = [];
+  const channelItems: number[] = [];
+  const gateRows: number[] = [];
+  const gateItems: number[] = [];
   for (let c = 0; c < chCount; c++) {
-    channelPairs.push([chA[c], c]);
-    if (chB[c] !== chA[c]) channelPairs.push([chB[c], c]);
-    if (chGate[c] >= 0) gatePairs.push([chGate[c], c]);
+    channelRows.push(chA[c]);
+    channelItems.push(c);
+    if (chB[c] !== chA[c]) {
+      channelRows.push(chB[c]);
+      channelItems.push(c);
+    }
+    if (chGate[c] >= 0) {
+      gateRows.push(chGate[c]);
+      gateItems.push(c);
+    }
   }
 
   return {
@@ -115,8 +126,8 @@ export function compile(netlist: Netlist, tech: Technology): CompiledNetlist {
     chB,
     chOhms,
     chDevice,
-    netChannels: csr(netCount, channelPairs),
-    netGates: csr(netCount, gatePairs),
+    netChannels: csrFrom(netCount, channelRows, channelItems),
+    netGates: csrFrom(netCount, gateRows, gateItems),
     netCap: netCapacitances(netlist, tech, netIndex),
   };
 }

@@ -110,13 +110,26 @@ export function deviceTerminals(
 
 /** All net names in first-appearance order: rails, inputs, outputs, then device terminals. */
 export function netNames(netlist: Netlist): string[] {
+  // Runs on every edit of big sheets: no per-terminal objects, one Set.
   const seen = new Set<string>();
-  const add = (n: string): void => {
-    seen.add(n);
-  };
-  netlist.rails.forEach((r) => add(r.net));
-  netlist.inputs.forEach(add);
-  netlist.outputs.forEach(add);
-  for (const d of netlist.devices) for (const t of deviceTerminals(d)) add(t.net);
+  for (const r of netlist.rails) seen.add(r.net);
+  for (const n of netlist.inputs) seen.add(n);
+  for (const n of netlist.outputs) seen.add(n);
+  for (const d of netlist.devices) {
+    switch (d.kind) {
+      case 'nmos':
+      case 'pmos':
+        seen.add(d.gate).add(d.drain).add(d.source);
+        if (d.bulk !== undefined) seen.add(d.bulk);
+        break;
+      case 'resistor':
+      case 'capacitor':
+        seen.add(d.a).add(d.b);
+        break;
+      case 'diode':
+        seen.add(d.anode).add(d.cathode);
+        break;
+    }
+  }
   return [...seen];
 }

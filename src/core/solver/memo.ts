@@ -1,5 +1,5 @@
 import type { CompiledNetlist } from '../compile/compile.ts';
-import { csr, type Csr } from '../compile/csr.ts';
+import { csrFrom, type Csr } from '../compile/csr.ts';
 import type { NetState } from './schedule.ts';
 import type { Topology } from './topology.ts';
 
@@ -8,12 +8,12 @@ const MAX_KEY_NETS = 16;
 /** Outcomes kept per component; past it the component is evaluated as usual. */
 const MAX_ENTRIES = 256;
 
+/**
+ * One component's outcome, packed in a single array to keep memory and allocation low: for n nets
+ * and m elements, volts[0..n), driven[n..2n), flags[2n..3n), limiter[3n..4n), then m currents.
+ */
 interface Outcome {
-  readonly volts: Float64Array;
-  readonly driven: Uint8Array;
-  readonly flags: Uint8Array;
-  readonly limiter: Int32Array;
-  readonly current: Float64Array;
+  readonly data: Float64Array;
   /** Some net floated: the outcome holds for unknown stored charge (sweep mode) only. */
   readonly floats: boolean;
 }
@@ -34,18 +34,33 @@ export class OutcomeMemo {
     private readonly c: CompiledNetlist,
     private readonly topology: Topology,
   ) {
-    const pairs: [number, number][] = [];
+    // Per component, its distinct gate nets and tied source nets in first-seen order; a component
+    // with too many gets the single entry -1 (never memoised).
+    const rows: number[] = [];
+    const items: number[] = [];
+    const seenFor = new Int32Array(c.netCount).fill(-1);
+    const { cccElements } = topology;
     for (let k = 0; k < topology.cccCount; k++) {
-      const nets = new Set<number>();
-      for (let i = topology.cccElements.start[k]; i < topology.cccElements.start[k + 1]; i++) {
-        const e = topology.cccElements.items[i];
-        if (c.chGate[e] >= 0) nets.add(c.chGate[e]);
-        for (const end of [c.chA[e], c.chB[e]]) if (topology.isSource[end]) nets.add(end);
+      const first = items.length;
+      const add = (n: number): void => {
+        if (seenFor[n] === k) return;
+        seenFor[n] = k;
+        rows.push(k);
+        items.push(n);
+      };
+      for (let i = cccElements.start[k]; i < cccElements.start[k + 1]; i++) {
+        const e = cccElements.items[i];
+        if (c.chGate[e] >= 0) add(c.chGate[e]);
+        if (topology.isSource[c.chA[e]]) add(c.chA[e]);
+        if (topology.isSource[c.chB[e]]) add(c.chB[e]);
       }
-      if (nets.size <= MAX_KEY_NETS) for (const n of [...nets].sort((a, b) => a - b)) pairs.push([k, n]);
-      else pairs.push([k, -1]);
+      if (items.length - first > MAX_KEY_NETS) {
+        rows.length = items.length = first;
+        rows.push(k);
+        items.push(-1);
+      }
     }
-    this.keyNets = csr(topology.cccCount, pairs);
+    this.keyNets = csrFrom(topology.cccCount, rows, items);
     this.tables = new Array(topology.cccCount);
   }
 
@@ -70,16 +85,18 @@ export class OutcomeMemo {
     if (!outcome || (outcome.floats && !fresh)) return false;
     const { cccNets, cccElements } = this.topology;
     const n0 = cccNets.start[k];
-    for (let i = n0; i < cccNets.start[k + 1]; i++) {
-      const n = cccNets.items[i];
-      state.volts[n] = outcome.volts[i - n0];
-      state.driven[n] = outcome.driven[i - n0];
-      state.flags[n] = outcome.flags[i - n0];
-      state.limiter[n] = outcome.limiter[i - n0];
+    const count = cccNets.start[k + 1] - n0;
+    const { data } = outcome;
+    for (let i = 0; i < count; i++) {
+      const n = cccNets.items[n0 + i];
+      state.volts[n] = data[i];
+      state.driven[n] = data[count + i];
+      state.flags[n] = data[2 * count + i];
+      state.limiter[n] = data[3 * count + i];
     }
     const e0 = cccElements.start[k];
-    for (let i = e0; i < cccElements.start[k + 1]; i++)
-      state.chCurrent[cccElements.items[i]] = outcome.current[i - e0];
+    const elements = cccElements.start[k + 1] - e0;
+    for (let j = 0; j < elements; j++) state.chCurrent[cccElements.items[e0 + j]] = data[4 * count + j];
     return true;
   }
 
@@ -88,17 +105,22 @@ export class OutcomeMemo {
     const table = (this.tables[k] ??= new Map());
     if (table.size >= MAX_ENTRIES) return;
     const { cccNets, cccElements } = this.topology;
-    const nets = cccNets.items.subarray(cccNets.start[k], cccNets.start[k + 1]);
-    const elements = cccElements.items.subarray(cccElements.start[k], cccElements.start[k + 1]);
-    const floats = nets.some((n) => state.driven[n] === 0);
+    const n0 = cccNets.start[k];
+    const count = cccNets.start[k + 1] - n0;
+    const e0 = cccElements.start[k];
+    const elements = cccElements.start[k + 1] - e0;
+    let floats = false;
+    const data = new Float64Array(4 * count + elements);
+    for (let i = 0; i < count; i++) {
+      const n = cccNets.items[n0 + i];
+      data[i] = state.volts[n];
+      data[count + i] = state.driven[n];
+      data[2 * count + i] = state.flags[n];
+      data[3 * count + i] = state.limiter[n];
+      if (state.driven[n] === 0) floats = true;
+    }
     if (floats && !fresh) return;
-    table.set(key, {
-      volts: Float64Array.from(nets, (n) => state.volts[n]),
-      driven: Uint8Array.from(nets, (n) => state.driven[n]),
-      flags: Uint8Array.from(nets, (n) => state.flags[n]),
-      limiter: Int32Array.from(nets, (n) => state.limiter[n]),
-      current: Float64Array.from(elements, (e) => state.chCurrent[e]),
-      floats,
-    });
+    for (let j = 0; j < elements; j++) data[4 * count + j] = state.chCurrent[cccElements.items[e0 + j]];
+    table.set(key, { data, floats });
   }
 }

@@ -52,9 +52,11 @@ export class Schedule {
     for (let k = 0; k < topology.cccCount; k++) {
       for (let i = d.start[k]; i < d.start[k + 1]; i++) if (d.items[i] === k) this.selfDependent[k] = 1;
     }
-    this.elemCcc = Int32Array.from(c.chA, (a, e) =>
-      topology.cccOfNet[a] >= 0 ? topology.cccOfNet[a] : topology.cccOfNet[c.chB[e]],
-    );
+    this.elemCcc = new Int32Array(c.chCount);
+    for (let e = 0; e < c.chCount; e++) {
+      const a = topology.cccOfNet[c.chA[e]];
+      this.elemCcc[e] = a >= 0 ? a : topology.cccOfNet[c.chB[e]];
+    }
     this.next = {
       volts: new Float64Array(c.netCount),
       driven: new Uint8Array(c.netCount),

@@ -1,5 +1,5 @@
 import type { CompiledNetlist } from '../compile/compile.ts';
-import { csr, type Csr } from '../compile/csr.ts';
+import { csr, csrFrom, type Csr } from '../compile/csr.ts';
 
 /**
  * The static structure the scheduler walks, for one choice of which nets are sources (rails and
@@ -61,7 +61,8 @@ export function buildTopology(c: CompiledNetlist, undriven: ReadonlySet<number> 
   const cccOfNet = new Int32Array(c.netCount).fill(-1);
   const localIndex = new Int32Array(c.netCount).fill(-1);
   const rootToCcc = new Map<number, number>();
-  const netPairs: [number, number][] = [];
+  const netRows: number[] = [];
+  const netItems: number[] = [];
   for (let n = 0; n < c.netCount; n++) {
     if (isSource[n]) continue;
     const root = find(parent, n);
@@ -71,23 +72,27 @@ export function buildTopology(c: CompiledNetlist, undriven: ReadonlySet<number> 
       rootToCcc.set(root, id);
     }
     cccOfNet[n] = id;
-    netPairs.push([id, n]);
+    netRows.push(id);
+    netItems.push(n);
   }
   const cccCount = rootToCcc.size;
-  const cccNets = csr(cccCount, netPairs);
+  const cccNets = csrFrom(cccCount, netRows, netItems);
   for (let k = 0; k < cccCount; k++) {
     for (let i = cccNets.start[k]; i < cccNets.start[k + 1]; i++)
       localIndex[cccNets.items[i]] = i - cccNets.start[k];
   }
 
-  const elementPairs: [number, number][] = [];
+  const elementRows: number[] = [];
+  const elementItems: number[] = [];
   const bridges: number[] = [];
   for (let e = 0; e < c.chCount; e++) {
     const k = cccOfNet[c.chA[e]] >= 0 ? cccOfNet[c.chA[e]] : cccOfNet[c.chB[e]];
-    if (k >= 0) elementPairs.push([k, e]);
-    else bridges.push(e);
+    if (k >= 0) {
+      elementRows.push(k);
+      elementItems.push(e);
+    } else bridges.push(e);
   }
-  const cccElements = csr(cccCount, elementPairs);
+  const cccElements = csrFrom(cccCount, elementRows, elementItems);
   const elemLocalA = Int32Array.from(c.chA, (n) => localIndex[n]);
   const elemLocalB = Int32Array.from(c.chB, (n) => localIndex[n]);
   const elemLocal = new Int32Array(c.chCount).fill(-1);
@@ -115,20 +120,21 @@ export function buildTopology(c: CompiledNetlist, undriven: ReadonlySet<number> 
 }
 
 function cccDependencies(c: CompiledNetlist, cccOfNet: Int32Array, elements: Csr, count: number): Csr {
-  const pairs: [number, number][] = [];
-  const seen = new Set<number>();
+  const rows: number[] = [];
+  const items: number[] = [];
+  // lastFor[j] === k when "j gates k" is already listed; k rises, so each row's items come sorted.
+  const lastFor = new Int32Array(count).fill(-1);
   for (let k = 0; k < count; k++) {
     for (let i = elements.start[k]; i < elements.start[k + 1]; i++) {
       const g = c.chGate[elements.items[i]];
-      if (g < 0 || cccOfNet[g] < 0) continue;
-      const key = cccOfNet[g] * count + k;
-      if (seen.has(key)) continue;
-      seen.add(key);
-      pairs.push([cccOfNet[g], k]);
+      const j = g < 0 ? -1 : cccOfNet[g];
+      if (j < 0 || lastFor[j] === k) continue;
+      lastFor[j] = k;
+      rows.push(j);
+      items.push(k);
     }
   }
-  pairs.sort((p, q) => p[0] - q[0] || p[1] - q[1]);
-  return csr(count, pairs);
+  return csrFrom(count, rows, items);
 }
 
 /**
