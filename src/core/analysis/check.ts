@@ -9,9 +9,9 @@ import { Simulator, type SolveResult } from '../solver/simulator.ts';
 import type { CheckReport, Finding, FindingKind, Summary, VectorReport } from './report.ts';
 import { structuralFindings } from './rules.ts';
 import { vectorFindings } from './vectorFindings.ts';
+import { checkSweepLimit, sweepSize, sweepVectors } from './vectors.ts';
 
-/** Exhaustive sweeps stop here by default: 2^16 = 65,536 vectors. */
-export const DEFAULT_MAX_INPUTS = 16;
+export { DEFAULT_MAX_INPUTS, SweepLimitError, sweepVectors } from './vectors.ts';
 
 export interface CheckOptions {
   readonly technology?: Technology;
@@ -26,10 +26,6 @@ export interface CheckOptions {
   readonly onProgress?: (done: number, total: number) => boolean | void;
 }
 
-export class SweepLimitError extends Error {
-  override readonly name = 'SweepLimitError';
-}
-
 export const FINDING_KINDS: readonly FindingKind[] = [
   'short',
   'static-current',
@@ -42,23 +38,6 @@ export const FINDING_KINDS: readonly FindingKind[] = [
   'rule',
   'limit',
 ];
-
-/** Every input combination in truth-table order: the first input is the most significant. */
-export function sweepVectors(
-  inputs: readonly string[],
-  undriven = false,
-  maxInputs = DEFAULT_MAX_INPUTS,
-): InputVector[] {
-  if (inputs.length > maxInputs) {
-    throw new SweepLimitError(
-      `${inputs.length} inputs exceed the exhaustive-sweep limit of ${maxInputs} (${2 ** maxInputs} vectors)`,
-    );
-  }
-  const values: InputValue[] = undriven ? ['0', '1', 'Z'] : ['0', '1'];
-  let vectors: Record<string, InputValue>[] = [{}];
-  for (const name of inputs) vectors = vectors.flatMap((v) => values.map((x) => ({ ...v, [name]: x })));
-  return vectors;
-}
 
 /** `A=1 B=0` */
 export function vectorLabel(v: InputVector, inputs: readonly string[]): string {
@@ -97,7 +76,7 @@ class Checker {
       return Number.isNaN(v) ? null : v;
     };
     return {
-      inputs: Object.fromEntries(netlist.inputs.map((n) => [n, r.inputs[n] ?? 'Z'])),
+      inputs: this.allInputs(r.inputs),
       outputs: Object.fromEntries(
         netlist.outputs.map((n) => [n, levelName(r.levels[c.netIndex.get(n) as number])]),
       ),
@@ -112,8 +91,15 @@ class Checker {
         ),
         current: p.current,
       })),
-      findings: vectorFindings(r, index, vectorLabel(r.inputs, netlist.inputs), expected),
+      findings: vectorFindings(r, index, () => vectorLabel(r.inputs, netlist.inputs), expected),
     };
+  }
+
+  /** The vector as given when it names every input (sweeps do), else completed with Z. */
+  private allInputs(v: InputVector): InputVector {
+    return this.netlist.inputs.every((n) => n in v)
+      ? v
+      : Object.fromEntries(this.netlist.inputs.map((n) => [n, v[n] ?? 'Z']));
   }
 
   report(kind: 'vectors' | 'steps', rows: VectorReport[], notes: string[]): CheckReport {
@@ -143,14 +129,14 @@ export function summarize(vectors: number, findings: readonly Finding[]): Summar
 /** Checks every input combination, each solved from an unknown state (SPEC §3.9, sweep mode). */
 export function checkSweep(netlist: Netlist, options: CheckOptions = {}): CheckReport {
   const checker = new Checker(netlist, options);
-  const vectors = sweepVectors(netlist.inputs, options.undrivenInputs, options.maxInputs);
+  checkSweepLimit(netlist.inputs, options.maxInputs);
+  const total = sweepSize(netlist.inputs, options.undrivenInputs);
   const rows: VectorReport[] = [];
-  for (const [i, v] of vectors.entries()) {
-    rows.push(checker.vectorReport(checker.simulator.solveFresh(v, { recycle: true }), i));
-    if (options.onProgress?.(i + 1, vectors.length) === false) break;
+  for (const v of sweepVectors(netlist.inputs, options.undrivenInputs)) {
+    rows.push(checker.vectorReport(checker.simulator.solveFresh(v, { recycle: true }), rows.length));
+    if (options.onProgress?.(rows.length, total) === false) break;
   }
-  const notes =
-    rows.length < vectors.length ? [`stopped after ${rows.length} of ${vectors.length} vectors`] : [];
+  const notes = rows.length < total ? [`stopped after ${rows.length} of ${total} vectors`] : [];
   return checker.report('vectors', rows, notes);
 }
 

@@ -50,9 +50,12 @@ function finding(
 export function vectorFindings(
   r: SolveResult,
   vector: number,
-  label: string,
+  labelOf: () => string,
   expected: ReadonlyMap<number, ExpectedValue>,
 ): Finding[] {
+  // The label is only needed when there is something to report, which most vectors do not have.
+  let cached: string | null = null;
+  const label = (): string => (cached ??= labelOf());
   return [
     ...currentFindings(r, vector, label),
     ...flaggedFindings(r, vector, label),
@@ -65,7 +68,7 @@ export function vectorFindings(
  * Static current paths. A path of transistors only that crosses a net at X is a short (error);
  * any other path is static current (warning: ratioed loads draw it by design).
  */
-function currentFindings(r: SolveResult, vector: number, label: string): Finding[] {
+function currentFindings(r: SolveResult, vector: number, label: () => string): Finding[] {
   const name = new Namer(r);
   const c = r.compiled;
   return r.paths.map((p) => {
@@ -74,7 +77,7 @@ function currentFindings(r: SolveResult, vector: number, label: string): Finding
     const transistorsOnly = p.elements.every((e) => c.chKind[e] !== RESISTOR);
     const crossesX = p.nets.some((n) => r.levels[n] === LEVEL_X && !r.topology.isSource[n]);
     const short = transistorsOnly && crossesX;
-    const message = `${short ? 'short' : 'static current'} at ${label}: ${chain.join(' → ')}, ${engineering(p.current, 'A')}, ${engineering(watts, 'W')}`;
+    const message = `${short ? 'short' : 'static current'} at ${label()}: ${chain.join(' → ')}, ${engineering(p.current, 'A')}, ${engineering(watts, 'W')}`;
     return {
       kind: short ? 'short' : 'static-current',
       severity: short ? 'error' : 'warning',
@@ -109,14 +112,15 @@ function observed(r: SolveResult, n: number): boolean {
   return c.netGates.start[n + 1] > c.netGates.start[n] || c.outputNets.includes(n);
 }
 
-function flaggedFindings(r: SolveResult, vector: number, label: string): Finding[] {
+function flaggedFindings(r: SolveResult, vector: number, label: () => string): Finding[] {
   const name = new Namer(r);
   const c = r.compiled;
   const out: Finding[] = [];
+  // One pass over the nets; most vectors flag none, so this is the whole cost of a clean vector.
+  const flagged: number[] = [];
+  for (let n = 0; n < c.netCount; n++) if (r.flags[n] !== 0 && !r.topology.isSource[n]) flagged.push(n);
   const nets = (flag: number, onlyObserved: boolean): number[] =>
-    Array.from({ length: c.netCount }, (_, n) => n).filter(
-      (n) => (r.flags[n] & flag) !== 0 && !r.topology.isSource[n] && (!onlyObserved || observed(r, n)),
-    );
+    flagged.filter((n) => (r.flags[n] & flag) !== 0 && (!onlyObserved || observed(r, n)));
   const touching = (list: number[]): string[] => channelDevices(r, list, true);
   for (const n of nets(FLAG_CONTENTION, false)) {
     const v = r.volts[n];
@@ -127,7 +131,7 @@ function flaggedFindings(r: SolveResult, vector: number, label: string): Finding
         vector,
         [name.net(n)],
         touching([n]),
-        `contention at ${label}: ${name.net(n)} sits at ${v.toFixed(2)} V, between the input thresholds, fought over by drivers of both levels`,
+        `contention at ${label()}: ${name.net(n)} sits at ${v.toFixed(2)} V, between the input thresholds, fought over by drivers of both levels`,
       ),
     );
   }
@@ -140,7 +144,7 @@ function flaggedFindings(r: SolveResult, vector: number, label: string): Finding
         vector,
         [name.net(n)],
         by,
-        `degraded level at ${label}: ${name.net(n)} reaches only ${r.volts[n].toFixed(2)} V (a threshold drop${by.length ? ` through ${by[0]}` : ''})`,
+        `degraded level at ${label()}: ${name.net(n)} reaches only ${r.volts[n].toFixed(2)} V (a threshold drop${by.length ? ` through ${by[0]}` : ''})`,
       ),
     );
   }
@@ -156,7 +160,7 @@ function flaggedFindings(r: SolveResult, vector: number, label: string): Finding
         vector,
         shared.map((n) => name.net(n)),
         touching(shared),
-        `charge sharing at ${label}: ${list.join(', ')}`,
+        `charge sharing at ${label()}: ${list.join(', ')}`,
       ),
     );
   }
@@ -169,7 +173,7 @@ function flaggedFindings(r: SolveResult, vector: number, label: string): Finding
         vector,
         racing.map((n) => name.net(n)),
         touching(racing),
-        `no steady state at ${label}: ${racing.map((n) => name.net(n)).join(', ')} kept changing (a race or an oscillator) and are shown as X`,
+        `no steady state at ${label()}: ${racing.map((n) => name.net(n)).join(', ')} kept changing (a race or an oscillator) and are shown as X`,
       ),
     );
   }
@@ -182,7 +186,7 @@ function flaggedFindings(r: SolveResult, vector: number, label: string): Finding
         vector,
         bounded.map((n) => name.net(n)),
         touching(bounded),
-        `too many devices with gates at X at ${label}: ${bounded.map((n) => name.net(n)).join(', ')} set to X conservatively`,
+        `too many devices with gates at X at ${label()}: ${bounded.map((n) => name.net(n)).join(', ')} set to X conservatively`,
       ),
     );
   }
@@ -198,14 +202,14 @@ function flaggedFindings(r: SolveResult, vector: number, label: string): Finding
 function floatingFindings(
   r: SolveResult,
   vector: number,
-  label: string,
+  label: () => string,
   expected: ReadonlyMap<number, ExpectedValue>,
 ): Finding[] {
   const name = new Namer(r);
   const c = r.compiled;
   const out: Finding[] = [];
   for (let n = 0; n < c.netCount; n++) {
-    if (r.levels[n] !== LEVEL_Z || !observed(r, n)) continue;
+    if (r.levels[n] !== LEVEL_Z || r.topology.isSource[n] || !observed(r, n)) continue;
     const isOutput = c.outputNets.includes(n);
     if (isOutput && expected.get(n) === 'Z') continue;
     const known = !Number.isNaN(r.volts[n]);
@@ -218,7 +222,7 @@ function floatingFindings(
         vector,
         [name.net(n)],
         channelDevices(r, [n], false),
-        `floating at ${label}: ${name.net(n)} has no conducting path to any source, ${charge}`,
+        `floating at ${label()}: ${name.net(n)} has no conducting path to any source, ${charge}`,
       ),
     );
   }
@@ -228,7 +232,7 @@ function floatingFindings(
 function mismatchFindings(
   r: SolveResult,
   vector: number,
-  label: string,
+  label: () => string,
   expected: ReadonlyMap<number, ExpectedValue>,
 ): Finding[] {
   const name = new Namer(r);
@@ -244,7 +248,7 @@ function mismatchFindings(
           vector,
           [name.net(n)],
           channelDevices(r, [n], true),
-          `mismatch at ${label}: ${name.net(n)} is ${got}, expected ${want}`,
+          `mismatch at ${label()}: ${name.net(n)} is ${got}, expected ${want}`,
         ),
       );
     }

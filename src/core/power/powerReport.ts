@@ -13,12 +13,12 @@ import {
   type PowerReport,
   type VectorPower,
 } from './types.ts';
-import { sweepVectors } from './vectors.ts';
+import { DEFAULT_MAX_INPUTS, sweepVectors } from '../analysis/vectors.ts';
 
 export { PowerOptionsError } from './types.ts';
 
-/** Inputs beyond which the sweep behind random activity is refused (2^16 = 65,536 vectors). */
-export const DEFAULT_MAX_INPUTS = 16;
+/** Inputs beyond which the sweep behind random activity is refused: the checker's own limit. */
+export { DEFAULT_MAX_INPUTS };
 
 /**
  * What the cell burns: static power per vector (DC paths from the solver plus leakage of the off
