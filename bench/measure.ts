@@ -57,7 +57,13 @@ export function prepare(netlist: Netlist, options: { readonly incremental?: bool
 }
 
 /** A repeated case: the fastest run is the figure, the median rides along. */
-function timed(name: string, kind: CaseKind, p: Prepared, vectors: number, sample: Sample): CaseResult {
+export function timed(
+  name: string,
+  kind: CaseKind,
+  p: Prepared,
+  vectors: number,
+  sample: Sample,
+): CaseResult {
   return { ...result(name, kind, p, vectors, sample.best), medianSeconds: sample.median, runs: sample.runs };
 }
 

@@ -7,6 +7,7 @@ import { compile } from '../src/core/compile/compile.ts';
 import { DEFAULT_TECHNOLOGY } from '../src/core/model/technology.ts';
 import { FAMILIES, MEMORY_SERIES, OVERHEAD_BITS, TOGGLE_BITS, familyNamed, sweepCircuit } from './cases.ts';
 import { floorFrame, floorLoop } from './floor.ts';
+import { measureToggleWithPaint } from './screen.ts';
 import { rippleAdder } from './generators/index.ts';
 import { measureMemory, withSlopes, type MemoryResult } from './memory.ts';
 import {
@@ -80,6 +81,11 @@ function toggleCases(): CaseResult[] {
   return [
     measureToggle('toggle/ripple-adder-179/random-input', p, toggleWalk(p.netlist.inputs, 64)),
     measureToggle('toggle/ripple-adder-179/carry-through-all-bits', p, [ripple, { ...ripple, CI: '1' }]),
+    measureToggleWithPaint(
+      'toggle+paint/ripple-adder-179/random-input',
+      p.netlist,
+      toggleWalk(p.netlist.inputs, 64),
+    ),
     measureEdit('edit/ripple-adder-179/compile-and-solve', p.netlist, ripple),
   ];
 }
