@@ -21,9 +21,18 @@ export default tseslint.config(
         'error',
         {
           patterns: [
-            { group: ['react', 'react-dom', 'konva', 'react-konva', 'zustand', 'zustand/*'], message: 'src/core stays free of UI libraries.' },
-            { group: ['node:*', 'fs', 'path', 'child_process'], message: 'src/core runs in the browser too: no Node modules.' },
-            { group: ['../editor/*', '../panels/*', '../state/*', '../worker/*', '../cli/*'], message: 'src/core imports nothing above it.' },
+            {
+              group: ['react', 'react-dom', 'konva', 'react-konva', 'zustand', 'zustand/*'],
+              message: 'src/core stays free of UI libraries.',
+            },
+            {
+              group: ['node:*', 'fs', 'path', 'child_process'],
+              message: 'src/core runs in the browser too: no Node modules.',
+            },
+            {
+              group: ['../editor/*', '../panels/*', '../state/*', '../worker/*', '../cli/*'],
+              message: 'src/core imports nothing above it.',
+            },
           ],
         },
       ],

@@ -23,7 +23,9 @@ function ensureChromium() {
   if (existsSync(CHROMIUM)) return true;
   const root = typeof process.getuid === 'function' && process.getuid() === 0;
   if (!root) {
-    console.error(`Chromium is missing at ${CHROMIUM}; install Debian's package: apt-get install -y chromium`);
+    console.error(
+      `Chromium is missing at ${CHROMIUM}; install Debian's package: apt-get install -y chromium`,
+    );
     return false;
   }
   console.log('Installing Debian chromium for the browser tests…');
@@ -36,7 +38,13 @@ let failed = 0;
 let broken = false;
 
 rmSync('.vitest.json', { force: true });
-const unitStatus = run('npx', ['vitest', 'run', '--reporter=default', '--reporter=json', '--outputFile=.vitest.json']);
+const unitStatus = run('npx', [
+  'vitest',
+  'run',
+  '--reporter=default',
+  '--reporter=json',
+  '--outputFile=.vitest.json',
+]);
 const unit = readJson('.vitest.json');
 if (unit) {
   passed += unit.numPassedTests;
@@ -52,7 +60,9 @@ if (specs.length > 0) {
     broken = true;
   } else {
     rmSync('.pw.json', { force: true });
-    const e2eStatus = run('npx', ['playwright', 'test', '--reporter=list,json'], { PLAYWRIGHT_JSON_OUTPUT_NAME: '.pw.json' });
+    const e2eStatus = run('npx', ['playwright', 'test', '--reporter=list,json'], {
+      PLAYWRIGHT_JSON_OUTPUT_NAME: '.pw.json',
+    });
     const e2e = readJson('.pw.json');
     if (e2e) {
       passed += e2e.stats.expected;
