@@ -194,8 +194,9 @@ function flaggedFindings(r: SolveResult, vector: number, label: () => string): F
 }
 
 /**
- * Floating nets (SPEC §4), naming the (all off) devices whose channels end on them: an output is an error unless Z is expected; a gate-feeding net is an
- * error without known charge and a warning with it (a dynamic node). Diffusion-only internal nodes
+ * Floating nets (SPEC §4), naming the (all off) devices whose channels end on them: an output is an
+ * error unless Z is expected; a gate-feeding net is an error without known charge and a warning with
+ * it (a dynamic node). Diffusion-only internal nodes
  * (inside transistor stacks) that feed no gate are not reported: they float by design in every
  * static gate.
  */

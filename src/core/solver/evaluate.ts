@@ -136,18 +136,8 @@ function setUnknown(frame: Frame, u: Unknown, bit: number): void {
 
 /** Group (root local net) of each local element's channel under "on or maybe" conduction. */
 function groupsUnderMaybe(frame: Frame): (j: number) => number {
-  const { topo, parent } = frame;
-  for (let i = 0; i < frame.netCount; i++) parent[i] = i;
-  for (let j = 0; j < frame.elemCount; j++) {
-    if (!frame.on[j]) continue; // maybe elements are on here
-    const e = frame.element(j);
-    const a = topo.elemLocalA[e];
-    const b = topo.elemLocalB[e];
-    if (a < 0 || b < 0) continue;
-    const ra = frame.root(a);
-    const rb = frame.root(b);
-    if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
-  }
+  const { topo } = frame;
+  frame.unionConducting(); // maybe elements are on here
   const roots = Int32Array.from({ length: frame.netCount }, (_, i) => frame.root(i));
   return (j) => {
     const e = frame.element(j);

@@ -88,6 +88,23 @@ export class Frame {
     return this.topo.cccElements.items[this.elemStart + j];
   }
 
+  /** Union-find over the selected CCC: nets joined by elements marked on (maybe counts as on). */
+  unionConducting(): void {
+    const { topo, parent } = this;
+    for (let i = 0; i < this.netCount; i++) parent[i] = i;
+    for (let j = 0; j < this.elemCount; j++) {
+      if (!this.on[j]) continue;
+      const e = this.element(j);
+      const a = topo.elemLocalA[e];
+      const b = topo.elemLocalB[e];
+      if (a < 0 || b < 0) continue;
+      const ra = this.root(a);
+      const rb = this.root(b);
+      // Union towards the smaller index: the grouping never depends on element order.
+      if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
+    }
+  }
+
   root(i: number): number {
     const p = this.parent;
     while (p[i] !== i) {

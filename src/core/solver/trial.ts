@@ -39,17 +39,7 @@ export function solveTrial(frame: Frame, snapVolts: Float64Array): void {
 /** Union-find over conducting elements, then per-root lists of nets and of source ties. */
 function groupNets(frame: Frame): void {
   const { topo, parent } = frame;
-  for (let i = 0; i < frame.netCount; i++) parent[i] = i;
-  for (let j = 0; j < frame.elemCount; j++) {
-    if (!frame.on[j]) continue;
-    const e = frame.element(j);
-    const a = topo.elemLocalA[e];
-    const b = topo.elemLocalB[e];
-    if (a < 0 || b < 0) continue;
-    const ra = frame.root(a);
-    const rb = frame.root(b);
-    if (ra !== rb) parent[Math.max(ra, rb)] = Math.min(ra, rb);
-  }
+  frame.unionConducting();
   for (let i = 0; i < frame.netCount; i++) {
     parent[i] = frame.root(i);
     frame.head[i] = -1;
