@@ -106,29 +106,38 @@ export class Schedule {
    * same answer as evaluating everything. With `fresh`, a re-evaluated component first forgets its
    * stored charge (sweep mode: every vector starts from an unknown state).
    */
-  propagate(sourceVolts: Float64Array, state: NetState, dirty: Uint8Array, fresh: boolean): void {
+  propagate(sourceVolts: Float64Array, state: NetState, dirty: Uint8Array | 'all', fresh: boolean): void {
     const order = this.topology.sccOrder;
-    const { cccNets } = this.topology;
+    // With everything dirty there is nothing to track: every component is evaluated in order, and
+    // the caller starts fresh solves from unknown charge already.
+    const tracked = dirty !== 'all';
     for (let s = 0; s + 1 < order.start.length; s++) {
       const first = order.start[s];
       const end = order.start[s + 1];
-      let any = false;
-      for (let i = first; i < end; i++) if (dirty[order.items[i]]) any = true;
-      if (!any) continue;
-      for (let i = first; i < end; i++) this.forget(order.items[i], state, fresh);
+      if (tracked && !this.anyDirty(dirty, first, end)) continue;
+      if (tracked) for (let i = first; i < end; i++) this.forget(order.items[i], state, fresh);
       if (end - first === 1 && !this.selfDependent[order.items[first]]) {
         this.evaluateOne(order.items[first], sourceVolts, state, fresh);
       } else {
         this.settle(s, Array.from(order.items.subarray(first, end)), sourceVolts, state);
       }
-      for (let i = first; i < end; i++) {
-        const k = order.items[i];
-        for (let q = cccNets.start[k]; q < cccNets.start[k + 1]; q++) {
-          const n = cccNets.items[q];
-          if (!sameVolts(this.saved[n], state.volts[n]) || this.savedDriven[n] !== state.driven[n])
-            this.markGated(dirty, n);
-        }
-      }
+      if (tracked) for (let i = first; i < end; i++) this.markChangedNets(order.items[i], state, dirty);
+    }
+  }
+
+  private anyDirty(dirty: Uint8Array, first: number, end: number): boolean {
+    const items = this.topology.sccOrder.items;
+    for (let i = first; i < end; i++) if (dirty[items[i]]) return true;
+    return false;
+  }
+
+  /** Marks dirty what component k's changed nets gate. */
+  private markChangedNets(k: number, state: NetState, dirty: Uint8Array): void {
+    const { cccNets } = this.topology;
+    for (let q = cccNets.start[k]; q < cccNets.start[k + 1]; q++) {
+      const n = cccNets.items[q];
+      if (!sameVolts(this.saved[n], state.volts[n]) || this.savedDriven[n] !== state.driven[n])
+        this.markGated(dirty, n);
     }
   }
 

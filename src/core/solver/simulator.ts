@@ -93,7 +93,11 @@ export class Simulator {
   }
 
   private schedule(inputs: InputVector): Schedule {
-    const undriven = this.compiled.netlist.inputs.filter((name) => (inputs[name] ?? 'Z') === 'Z');
+    const names = this.compiled.netlist.inputs;
+    // Nearly every vector drives all inputs: find that out without building the key.
+    let anyUndriven = false;
+    for (const name of names) if ((inputs[name] ?? 'Z') === 'Z') anyUndriven = true;
+    const undriven = anyUndriven ? names.filter((name) => (inputs[name] ?? 'Z') === 'Z') : [];
     const key = undriven.join('\u0000');
     let s = this.schedules.get(key);
     if (!s) {
@@ -123,20 +127,25 @@ export class Simulator {
     const schedule = this.schedule(inputs);
     const { topology } = schedule;
     const sourceVolts = this.sourceVoltages(inputs, topology);
-    const dirty = new Uint8Array(topology.cccCount);
     const incremental = base !== null && base.topology === topology && this.options.incremental !== false;
     const reuse = incremental && recycle;
     const copy = <T extends Float64Array | Uint8Array | Int32Array>(a: T): T =>
       reuse ? a : (a.slice() as T);
+    // Charge is carried from the base when it is incremental or when a sequence continues from it;
+    // a full fresh solve starts from unknown charge everywhere.
+    const carry = base !== null && (incremental || !fresh);
     const state: NetState = {
-      volts: base ? copy(base.volts) : new Float64Array(c.netCount).fill(NaN),
-      driven: base ? copy(base.driven) : new Uint8Array(c.netCount),
+      volts: carry ? copy(base.volts) : new Float64Array(c.netCount).fill(NaN),
+      driven: carry ? copy(base.driven) : new Uint8Array(c.netCount),
       flags: incremental ? copy(base.flags) : new Uint8Array(c.netCount),
       limiter: incremental ? copy(base.limiter) : new Int32Array(c.netCount).fill(-1),
       chCurrent: incremental ? copy(base.chCurrent) : new Float64Array(c.chCount),
     };
-    if (incremental) this.markChanged(schedule, base, sourceVolts, dirty, fresh);
-    else dirty.fill(1);
+    let dirty: Uint8Array | 'all' = 'all';
+    if (incremental) {
+      dirty = new Uint8Array(topology.cccCount);
+      this.markChanged(schedule, base, sourceVolts, dirty, fresh);
+    }
     for (const n of schedule.sourceNets) {
       state.volts[n] = sourceVolts[n];
       state.driven[n] = 1;
