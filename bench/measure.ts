@@ -92,7 +92,10 @@ function countUnknownOutputs(p: Prepared, solved: SolveResult): number {
 export function measureSettle(name: string, p: Prepared, budgetSeconds = 0.3): CaseResult {
   const vectors = randomVectors(p.netlist.inputs, 2, 7);
   let i = 0;
-  const sample = repeat(() => p.simulator.solveFresh(vectors[i++ & 1]), { budgetSeconds, maxRuns: 2000 });
+  const sample = repeat(() => p.simulator.solveFresh(vectors[i++ & 1], { recycle: true }), {
+    budgetSeconds,
+    maxRuns: 2000,
+  });
   const unknownOutputs = countUnknownOutputs(p, p.simulator.solveFresh(vectors[0]));
   return { ...timed(name, 'settle', p, 1, sample), unknownOutputs };
 }
@@ -104,7 +107,7 @@ export function measureSettle(name: string, p: Prepared, budgetSeconds = 0.3): C
 export function measureRandom(name: string, p: Prepared, budgetSeconds = 1): CaseResult {
   const batch = randomVectors(p.netlist.inputs, 32, 11);
   const solveBatch = (): void => {
-    for (const v of batch) p.simulator.solveFresh(v);
+    for (const v of batch) p.simulator.solveFresh(v, { recycle: true });
   };
   const sample = repeat(solveBatch, { warmup: 2, budgetSeconds, minRuns: 5, maxRuns: 1000 });
   return timed(name, 'random', p, batch.length, sample);

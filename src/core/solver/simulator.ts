@@ -127,19 +127,27 @@ export class Simulator {
     const schedule = this.schedule(inputs);
     const { topology } = schedule;
     const sourceVolts = this.sourceVoltages(inputs, topology);
-    const incremental = base !== null && base.topology === topology && this.options.incremental !== false;
-    const reuse = incremental && recycle;
+    const sameTopology = base !== null && base.topology === topology;
+    const incremental = sameTopology && this.options.incremental !== false;
+    const reuse = sameTopology && recycle;
     const copy = <T extends Float64Array | Uint8Array | Int32Array>(a: T): T =>
       reuse ? a : (a.slice() as T);
     // Charge is carried from the base when it is incremental or when a sequence continues from it;
     // a full fresh solve starts from unknown charge everywhere.
     const carry = base !== null && (incremental || !fresh);
+    const blank = <T extends Float64Array | Uint8Array | Int32Array>(
+      old: T | undefined,
+      make: () => T,
+      value: number,
+    ): T => (reuse && old !== undefined ? old : make()).fill(value) as T;
     const state: NetState = {
-      volts: carry ? copy(base.volts) : new Float64Array(c.netCount).fill(NaN),
-      driven: carry ? copy(base.driven) : new Uint8Array(c.netCount),
-      flags: incremental ? copy(base.flags) : new Uint8Array(c.netCount),
-      limiter: incremental ? copy(base.limiter) : new Int32Array(c.netCount).fill(-1),
-      chCurrent: incremental ? copy(base.chCurrent) : new Float64Array(c.chCount),
+      volts: carry ? copy(base.volts) : blank(base?.volts, () => new Float64Array(c.netCount), NaN),
+      driven: carry ? copy(base.driven) : blank(base?.driven, () => new Uint8Array(c.netCount), 0),
+      flags: incremental ? copy(base.flags) : blank(base?.flags, () => new Uint8Array(c.netCount), 0),
+      limiter: incremental ? copy(base.limiter) : blank(base?.limiter, () => new Int32Array(c.netCount), -1),
+      chCurrent: incremental
+        ? copy(base.chCurrent)
+        : blank(base?.chCurrent, () => new Float64Array(c.chCount), 0),
     };
     let dirty: Uint8Array | 'all' = 'all';
     if (incremental) {
