@@ -22,17 +22,17 @@ const MAX_PATHS_PER_SOURCE = 8;
 export function currentPaths(
   c: CompiledNetlist,
   isSource: Uint8Array,
+  sourceNets: Int32Array,
   volts: Float64Array,
   chCurrent: Float64Array,
   sourceOut: Float64Array,
 ): PathIndices[] {
   let largest = 0;
-  for (let n = 0; n < c.netCount; n++) if (isSource[n] && sourceOut[n] > largest) largest = sourceOut[n];
+  for (const n of sourceNets) if (sourceOut[n] > largest) largest = sourceOut[n];
   if (largest <= 0) return [];
   const residual = Float64Array.from(chCurrent, Math.abs);
   const floor = largest * RELATIVE_FLOOR;
-  const sources: number[] = [];
-  for (let n = 0; n < c.netCount; n++) if (isSource[n] && sourceOut[n] > floor) sources.push(n);
+  const sources = Array.from(sourceNets).filter((n) => sourceOut[n] > floor);
   sources.sort((a, b) => volts[b] - volts[a] || c.netNames[a].localeCompare(c.netNames[b]));
   const paths: PathIndices[] = [];
   for (const s of sources) {

@@ -212,7 +212,9 @@ export class Simulator {
         driven[n] || topology.isSource[n] ? (v <= vil ? LEVEL_0 : v >= vih ? LEVEL_1 : LEVEL_X) : LEVEL_Z;
       if (flags[n] & FLAG_OSCILLATING) settled = false;
     }
-    const sourceOut = recycled ? recycled.sourceOut.fill(0) : new Float64Array(c.netCount);
+    // Only source nets ever hold a current, so a recycled array needs only those cleared.
+    const sourceOut = recycled ? recycled.sourceOut : new Float64Array(c.netCount);
+    if (recycled) for (const n of schedule.sourceNets) sourceOut[n] = 0;
     for (const e of schedule.sourceTies) {
       const i = chCurrent[e];
       if (i === 0) continue;
@@ -241,7 +243,7 @@ export class Simulator {
       ),
       chCurrent,
       sourceOut,
-      paths: currentPaths(c, topology.isSource, volts, chCurrent, sourceOut),
+      paths: currentPaths(c, topology.isSource, schedule.sourceNets, volts, chCurrent, sourceOut),
       supplyCurrent,
       staticPower,
       settled,
