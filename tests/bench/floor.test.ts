@@ -1,3 +1,4 @@
+// Unit tests of our own plumbing: they check behaviour, not published values, so no source applies.
 import { describe, expect, it } from 'vitest';
 import { compile } from '../../src/core/compile/compile.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';

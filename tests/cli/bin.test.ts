@@ -1,3 +1,4 @@
+// Behaviour of our own command, not published values: no source applies.
 /**
  * The real executable, as a user or CI runs it: `node bin/railwise.mjs …` in a child process.
  * Few cases, since each run starts Node and tsx (about a second).

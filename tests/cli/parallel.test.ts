@@ -1,3 +1,4 @@
+// Behaviour of our own command, not published values: no source applies.
 /** Worker threads give the same results, in the same order, as the main thread. */
 import { describe, expect, it } from 'vitest';
 import { loadCells, type CellJob } from '../../src/cli/loadCells.ts';
