@@ -3,10 +3,12 @@ import { createRoot } from 'react-dom/client';
 import { App } from './app/App.tsx';
 import { ErrorBoundary } from './app/ErrorBoundary.tsx';
 import { openFirstDesign } from './app/startup.ts';
+import { openSharedLink } from './app/shareLink.ts';
 import { startAutosave } from './app/autosave.ts';
 import { installTestApi } from './app/testApi.ts';
 
 openFirstDesign();
+void openSharedLink();
 startAutosave();
 installTestApi();
 

@@ -16,8 +16,9 @@ export class RailwisePage {
     this.message = page.getByTestId('message');
   }
 
-  async open(): Promise<void> {
-    await this.page.goto('/');
+  /** Opens the app, at `path` (e.g. a share link's fragment) when given. */
+  async open(path = '/'): Promise<void> {
+    await this.page.goto(path);
     await expect(this.sheet.locator('canvas').first()).toBeVisible();
     await this.page.waitForFunction(() => window.__railwise !== undefined);
   }

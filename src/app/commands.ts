@@ -23,6 +23,7 @@ import {
 import { stepVector } from '../state/simulation.ts';
 import { redo, setOverlay, undo } from '../state/store.ts';
 import { exportDesign, newDesign, pickAndOpen, saveDesign, type ExportKind } from './files.ts';
+import { shareCurrentDesign } from './shareLink.ts';
 
 export interface KeyBinding {
   /** KeyboardEvent.key, compared case-insensitively. */
@@ -192,6 +193,13 @@ export const COMMANDS: readonly Command[] = [
     run: pickAndOpen,
   },
   { id: 'save', label: 'Save design file', group: 'File', keys: [{ key: 's', ctrl: true }], run: saveDesign },
+  {
+    id: 'share-link',
+    label: 'Share a link to this design',
+    group: 'File',
+    keys: [],
+    run: () => void shareCurrentDesign(),
+  },
   exportCommand('spice', 'SPICE netlist'),
   exportCommand('verilog', 'Verilog (switch primitives)'),
   exportCommand('csv', 'truth table (CSV)'),
