@@ -3,19 +3,11 @@ import type { SheetPart } from '../core/sheet/types.ts';
 import { partSpec } from '../core/sheet/parts/index.ts';
 import { editPart } from '../editor/actions.ts';
 import { setDesignFields, store, useStore } from '../state/store.ts';
-import { engineering } from '../editor/format.ts';
-import { fieldsFor, readField, type FieldKey } from './fieldRules.ts';
-
-function shown(part: SheetPart, key: FieldKey): string {
-  const v = part[key];
-  if (v === undefined) return '';
-  if (key === 'ohms' || key === 'farads') return engineering(v as number);
-  return String(v);
-}
+import { fieldsFor, fieldText, readField, type FieldKey } from './fieldRules.ts';
 
 /** One field: applied on Enter or when focus leaves; a bad value stays in the box with its reason. */
 function Field({ part, field }: { part: SheetPart; field: { key: FieldKey; label: string } }) {
-  const [text, setText] = useState(shown(part, field.key));
+  const [text, setText] = useState(fieldText(part, field.key));
   const [error, setError] = useState<string | null>(null);
   const apply = (): void => {
     const r = readField(field.key, text, part, store.getState().doc.sheet);
@@ -37,7 +29,7 @@ function Field({ part, field }: { part: SheetPart; field: { key: FieldKey; label
         onKeyDown={(e) => {
           if (e.key === 'Enter') apply();
           if (e.key === 'Escape') {
-            setText(shown(part, field.key));
+            setText(fieldText(part, field.key));
             setError(null);
           }
         }}

@@ -5,7 +5,7 @@
 import type { SheetPart, Sheet } from '../core/sheet/types.ts';
 import { isDevicePart } from '../core/sheet/parts/index.ts';
 import { NET_NAME_PATTERN } from '../core/sheet/naming.ts';
-import { spiceValue } from '../core/netlist-io/spiceNumber.ts';
+import { formatSpiceNumber, spiceValue } from '../core/netlist-io/spiceNumber.ts';
 
 export type FieldKey = 'name' | 'w' | 'l' | 'ohms' | 'farads';
 
@@ -66,4 +66,16 @@ export function fieldsFor(part: SheetPart): { key: FieldKey; label: string }[] {
     default:
       return [name];
   }
+}
+
+/**
+ * The text a field shows for a part. Ohms and farads are written as SPICE numbers that read back to
+ * exactly the same value (`1meg`, not `1M`, which reads as milli), so leaving a field untouched never
+ * changes the part.
+ */
+export function fieldText(part: SheetPart, key: FieldKey): string {
+  const v = part[key];
+  if (v === undefined) return '';
+  if (key === 'ohms' || key === 'farads') return formatSpiceNumber(v as number);
+  return String(v);
 }

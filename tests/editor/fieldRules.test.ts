@@ -1,5 +1,6 @@
+// SPICE scale factors (k = 1e3, meg = 1e6, m = 1e-3, f = 1e-15): common practice, no source.
 import { describe, expect, it } from 'vitest';
-import { readField, fieldsFor } from '../../src/app/fieldRules.ts';
+import { fieldText, readField, fieldsFor } from '../../src/app/fieldRules.ts';
 import { drawnInverter, part } from '../sheet/fixtures.ts';
 
 describe('properties form rules', () => {
@@ -40,5 +41,15 @@ describe('properties form rules', () => {
   it('shows the fields each kind has', () => {
     expect(fieldsFor(n1).map((f) => f.key)).toEqual(['name', 'w', 'l']);
     expect(fieldsFor(part('g', 'gnd', 'GND', 0, 0)).map((f) => f.key)).toEqual(['name']);
+  });
+
+  it('shows values that read back unchanged, so leaving a field untouched never edits the part', () => {
+    for (const ohms of [1e6, 4712.3, 20e3, 0.5]) {
+      const r = { ...part('r', 'resistor', 'R1', 0, 0), ohms };
+      expect(readField('ohms', fieldText(r, 'ohms'), r, sheet)).toEqual({ ok: true, value: ohms });
+    }
+    const c = { ...part('c', 'capacitor', 'C1', 0, 0), farads: 12.5e-15 };
+    expect(fieldText(c, 'farads')).toBe('12.5f');
+    expect(readField('farads', fieldText(c, 'farads'), c, sheet)).toEqual({ ok: true, value: 12.5e-15 });
   });
 });

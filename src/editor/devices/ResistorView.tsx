@@ -1,4 +1,4 @@
-import { engineering } from '../format.ts';
+import { engineering } from '../../core/view/format.ts';
 import { PartFrame, type PartViewProps } from './PartFrame.tsx';
 
 export function ResistorView({ part, color }: PartViewProps) {
