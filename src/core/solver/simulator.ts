@@ -2,9 +2,7 @@ import type { CompiledNetlist } from '../compile/compile.ts';
 import type { InputVector } from '../model/design.ts';
 import { currentPaths, type PathIndices } from './currentPaths.ts';
 import { conductionOf } from './evaluate.ts';
-import { NMOS, RESISTOR } from '../compile/compile.ts';
 import {
-  classify,
   FLAG_CHARGE_SHARED,
   FLAG_MAYBE,
   FLAG_OSCILLATING,
@@ -12,8 +10,6 @@ import {
   LEVEL_1,
   LEVEL_X,
   LEVEL_Z,
-  MAYBE,
-  OFF,
   ON,
 } from './levels.ts';
 import { sameVolts, Schedule, type NetState } from './schedule.ts';
@@ -187,6 +183,12 @@ export class Simulator {
     }
   }
 
+  /** Conduction of every element from its gate's voltage (a floating gate reads its stored charge). */
+  private conductionAll(frame: Schedule['frame'], volts: Float64Array, into: Uint8Array): Uint8Array {
+    for (let e = 0; e < into.length; e++) into[e] = conductionOf(frame, e, volts);
+    return into;
+  }
+
   /** Derives levels, conduction and source currents; `recycled` lends its arrays for them. */
   private finish(
     inputs: InputVector,
@@ -235,9 +237,8 @@ export class Simulator {
       levels,
       flags,
       limiter: state.limiter,
-      conduction: conductionFromLevels(
-        c,
-        levels,
+      conduction: this.conductionAll(
+        frame,
         volts,
         recycled ? recycled.conduction : new Uint8Array(c.chCount),
       ),
@@ -249,23 +250,4 @@ export class Simulator {
       settled,
     };
   }
-}
-
-/** Conduction of every element from its gate net's level (a floating gate reads its stored charge). */
-function conductionFromLevels(
-  c: CompiledNetlist,
-  levels: Uint8Array,
-  volts: Float64Array,
-  conduction: Uint8Array,
-): Uint8Array {
-  for (let e = 0; e < c.chCount; e++) {
-    if (c.chKind[e] === RESISTOR) {
-      conduction[e] = ON;
-      continue;
-    }
-    const g = levels[c.chGate[e]];
-    const level = g === LEVEL_Z ? classify(volts[c.chGate[e]], c.tech.vil, c.tech.vih) : g;
-    conduction[e] = level === LEVEL_X ? MAYBE : (level === LEVEL_1) === (c.chKind[e] === NMOS) ? ON : OFF;
-  }
-  return conduction;
 }
