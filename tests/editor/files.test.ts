@@ -1,3 +1,4 @@
+// Behaviour of our own file handling, not published values: no source applies.
 import { beforeEach, describe, expect, it } from 'vitest';
 import { designsFromSpice, openText } from '../../src/app/files.ts';
 import { cellChoice } from '../../src/app/cellChoice.ts';

@@ -1,3 +1,4 @@
+// Geometry of our own viewport culling, not published values: no source applies.
 import { describe, expect, it } from 'vitest';
 import { textDetail, visibleItems, visibleRect } from '../../src/editor/visible.ts';
 import { drawnInverter, part } from '../sheet/fixtures.ts';

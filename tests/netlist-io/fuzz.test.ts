@@ -1,3 +1,4 @@
+// Robustness only, no published values: no source applies.
 /**
  * SPEC §11: a pathological netlist never crashes the importer. Random lines built from SPICE-like
  * tokens either import or throw SpiceImportError with a line inside the file; nothing else escapes.
