@@ -1,6 +1,6 @@
 import { NMOS, RESISTOR } from '../compile/compile.ts';
 import type { Frame } from './frame.ts';
-import { classify, FLAG_BOUND, FLAG_MAYBE, LEVEL_1, LEVEL_X, MAYBE, OFF, ON } from './levels.ts';
+import { classify, FLAG_BOUND, FLAG_MAYBE, MAYBE, OFF, ON } from './levels.ts';
 import { solveTrial } from './trial.ts';
 
 /**
@@ -19,13 +19,23 @@ export interface EvaluationTarget {
   readonly chCurrent: Float64Array;
 }
 
-/** Conduction of a channel element from its gate's level in `snapVolts`. */
+/**
+ * The conduction rule (SPEC §3.1), in one place: a resistor always conducts; an NMOS conducts when its
+ * gate reads 1 and a PMOS when it reads 0; a gate between the thresholds (or unknown, NaN) makes the
+ * device maybe-conducting. Small enough for the engine to inline into the hot loops that call it.
+ */
+export function conductionFor(kind: number, gateVolts: number, vil: number, vih: number): number {
+  if (kind === RESISTOR) return ON;
+  if (gateVolts <= vil) return kind === NMOS ? OFF : ON;
+  if (gateVolts >= vih) return kind === NMOS ? ON : OFF;
+  return MAYBE;
+}
+
+/** Conduction of a channel element from its gate's voltage in `snapVolts`. */
 export function conductionOf(frame: Frame, e: number, snapVolts: Float64Array): number {
   const { c } = frame;
-  if (c.chKind[e] === RESISTOR) return ON;
-  const level = classify(snapVolts[c.chGate[e]], c.tech.vil, c.tech.vih);
-  if (level === LEVEL_X) return MAYBE;
-  return (level === LEVEL_1) === (c.chKind[e] === NMOS) ? ON : OFF;
+  const gate = c.chGate[e];
+  return conductionFor(c.chKind[e], gate >= 0 ? snapVolts[gate] : NaN, c.tech.vil, c.tech.vih);
 }
 
 /**
@@ -68,14 +78,8 @@ function setConduction(frame: Frame, snapVolts: Float64Array, sourceVolts: Float
   let unknown = false;
   for (let j = 0; j < frame.elemCount; j++) {
     const e = items[base + j];
-    const kind = chKind[e];
-    let state = ON;
-    if (kind !== RESISTOR) {
-      const vg = snapVolts[chGate[e]];
-      if (vg <= vil) state = kind === NMOS ? OFF : ON;
-      else if (vg >= vih) state = kind === NMOS ? ON : OFF;
-      else state = MAYBE;
-    }
+    const gate = chGate[e];
+    const state = conductionFor(chKind[e], gate >= 0 ? snapVolts[gate] : NaN, vil, vih);
     on[j] = state === OFF ? 0 : 1;
     maybe[j] = state === MAYBE ? 1 : 0;
     const sourceEnd = topo.elemLocalA[e] < 0 ? chA[e] : topo.elemLocalB[e] < 0 ? chB[e] : -1;

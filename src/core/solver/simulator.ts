@@ -1,7 +1,7 @@
 import type { CompiledNetlist } from '../compile/compile.ts';
 import type { InputVector } from '../model/design.ts';
 import { currentPaths, type PathIndices } from './currentPaths.ts';
-import { conductionOf } from './evaluate.ts';
+import { conductionFor, conductionOf } from './evaluate.ts';
 import {
   FLAG_CHARGE_SHARED,
   FLAG_MAYBE,
@@ -184,8 +184,12 @@ export class Simulator {
   }
 
   /** Conduction of every element from its gate's voltage (a floating gate reads its stored charge). */
-  private conductionAll(frame: Schedule['frame'], volts: Float64Array, into: Uint8Array): Uint8Array {
-    for (let e = 0; e < into.length; e++) into[e] = conductionOf(frame, e, volts);
+  private conductionAll(volts: Float64Array, into: Uint8Array): Uint8Array {
+    const { chKind, chGate, tech } = this.compiled;
+    for (let e = 0; e < into.length; e++) {
+      const gate = chGate[e];
+      into[e] = conductionFor(chKind[e], gate >= 0 ? volts[gate] : NaN, tech.vil, tech.vih);
+    }
     return into;
   }
 
@@ -237,11 +241,7 @@ export class Simulator {
       levels,
       flags,
       limiter: state.limiter,
-      conduction: this.conductionAll(
-        frame,
-        volts,
-        recycled ? recycled.conduction : new Uint8Array(c.chCount),
-      ),
+      conduction: this.conductionAll(volts, recycled ? recycled.conduction : new Uint8Array(c.chCount)),
       chCurrent,
       sourceOut,
       paths: currentPaths(c, topology.isSource, schedule.sourceNets, volts, chCurrent, sourceOut),
