@@ -1,8 +1,9 @@
 import { defineConfig, devices } from '@playwright/test';
 
-// E2E_DEV=1 runs against the vite dev server instead of the built app.
+// E2E_DEV=1 runs against the vite dev server instead of the built app. E2E_PORT picks another port,
+// so that two checkouts can run their end-to-end suites side by side.
 const DEV = !!process.env.E2E_DEV;
-const PORT = DEV ? 5173 : 4173;
+const PORT = Number(process.env.E2E_PORT ?? (DEV ? 5173 : 4173));
 
 export default defineConfig({
   testDir: './e2e',
