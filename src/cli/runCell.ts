@@ -1,5 +1,5 @@
 /**
- * Checks one cell and returns plain data: the single-cell JSON object of SPEC §6, or a failure.
+ * Checks one cell and returns plain data: the single-cell JSON object of docs/semantics.md §5, or a failure.
  * No file access and no printing, so a worker thread can run it as well as the main thread.
  */
 import { checkSequence, checkSweep, SequenceError, SweepLimitError } from '../core/analysis/check.ts';
@@ -29,7 +29,7 @@ export interface RunOptions {
 export const CAUTION =
   "Switch-level estimates, not sign-off: confirm with circuit simulation and the foundry's rules.";
 
-/** A vector as printed: inputs as the numbers 0 and 1 (X and Z stay strings), per SPEC §6. */
+/** A vector as printed: inputs as the numbers 0 and 1 (X and Z stay strings), per docs/semantics.md §5. */
 export interface VectorJson extends Omit<VectorReport, 'inputs'> {
   readonly inputs: Readonly<Record<string, 0 | 1 | 'X' | 'Z'>>;
 }

@@ -34,7 +34,7 @@ describe('bin/railwise.mjs', () => {
     expect(r.stdout).toMatch(/8 cells: 8 pass, 0 with errors, 0 unusable/);
   });
 
-  it('exit status 1 and the SPEC §6 JSON for a cell with error findings', () => {
+  it('exit status 1 and the docs/semantics.md §5 JSON for a cell with error findings', () => {
     const r = railwise('check', 'public/examples/nand2-miswired.sp', '--json');
     expect(r.status).toBe(1);
     const body = JSON.parse(r.stdout) as Record<string, unknown>;

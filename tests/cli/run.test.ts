@@ -1,6 +1,6 @@
 /**
  * The railwise command, called in-process through `run` (fast): argument handling, exit statuses
- * 0 / 1 / 2 of SPEC §6, the JSON shape, and the exports. bin.test.ts runs the real executable.
+ * 0 / 1 / 2 of docs/semantics.md §5, the JSON shape, and the exports. bin.test.ts runs the real executable.
  */
 import { describe, expect, it } from 'vitest';
 import { run } from '../../src/cli/main.ts';
@@ -63,7 +63,7 @@ describe('arguments', () => {
 });
 
 describe('check', () => {
-  it('gives the single-cell JSON shape of SPEC §6', async () => {
+  it('gives the single-cell JSON shape of docs/semantics.md §5', async () => {
     const { status, body } = await json('check', LIB, '--cell', 'tw_nand2');
     expect(status).toBe(0);
     expect(body).toMatchObject({ cell: 'tw_nand2', inputs: ['A', 'B'], outputs: ['Y'], findings: [] });

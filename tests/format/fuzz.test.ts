@@ -1,5 +1,5 @@
 // Robustness only, no published values: no source applies.
-/** SPEC §11: any text, or any JSON value, either loads or throws DesignFileError; nothing else escapes. */
+/** docs/semantics.md §8: any text, or any JSON value, either loads or throws DesignFileError; nothing else escapes. */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { DesignFileError, parseDesignFile } from '../../src/core/format/designFile.ts';

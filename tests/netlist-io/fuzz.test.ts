@@ -1,6 +1,6 @@
 // Robustness only, no published values: no source applies.
 /**
- * SPEC §11: a pathological netlist never crashes the importer. Random lines built from SPICE-like
+ * docs/semantics.md §8: a pathological netlist never crashes the importer. Random lines built from SPICE-like
  * tokens either import or throw SpiceImportError with a line inside the file; nothing else escapes.
  */
 import fc from 'fast-check';

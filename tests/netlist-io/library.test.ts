@@ -1,5 +1,5 @@
 /**
- * Libraries (SPEC §6): a file whose top level holds several subcircuits that no other instantiates
+ * Libraries (docs/semantics.md §6): a file whose top level holds several subcircuits that no other instantiates
  * is a library, each subcircuit its own cell, and one broken cell never stops the rest.
  */
 import { readFileSync } from 'node:fs';

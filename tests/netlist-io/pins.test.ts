@@ -1,4 +1,4 @@
-/** Naming pins over what the importer inferred (SPEC §6: "flags override"). */
+/** Naming pins over what the importer inferred (docs/semantics.md §6: "flags override"). */
 import { describe, expect, it } from 'vitest';
 import { circuit } from '../../src/core/model/builder.ts';
 import { assignPins, PinError } from '../../src/core/netlist-io/pins.ts';

@@ -1,5 +1,5 @@
 /**
- * SPEC §11: import → export → import is the identity on the netlist. Checked on random netlists
+ * docs/semantics.md §8: import → export → import is the identity on the netlist. Checked on random netlists
  * (every device kind, unusual rail names, rails at their own voltage, widths with many digits).
  */
 import fc from 'fast-check';

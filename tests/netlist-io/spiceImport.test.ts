@@ -1,5 +1,5 @@
 /**
- * The SPICE-compatible importer against every rule of SPEC §6. The netlist conventions checked here
+ * The SPICE-compatible importer against every rule of docs/semantics.md §6. The netlist conventions checked here
  * (comment and continuation lines, scale suffixes, element letters, node 0 as ground, `.subckt`
  * ports) are those of Berkeley SPICE as the trade uses them (SPICE3 user's manual, "general
  * structure and conventions"; from memory) unless marked as our own.

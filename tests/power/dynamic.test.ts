@@ -14,12 +14,12 @@ const IDEAL_18 = { ...withVdd(UNIT_RC_TECH, 1.8), cgPerArea: 0, cdPerWidth: 0, i
 
 describe('switching energy and power arithmetic', () => {
   it('100 fF at 1.8 V draws C·VDD² = 324 fJ from the supply per 0→1 transition', () => {
-    // Weste & Harris, 4th ed., ch. 5 (reference-values §4, derived): 100e-15 · 1.8² = 324e-15 J.
+    // Weste & Harris, 4th ed., ch. 5 (derived from E = C·VDD²): 100e-15 · 1.8² = 324e-15 J.
     near(switchingEnergy(100e-15, 1.8), 324e-15);
   });
 
   it('α 0.25, C 100 fF, 1.8 V, 500 MHz gives 40.5 µW', () => {
-    // P = α·C·VDD²·f = 0.25 · 100e-15 · 3.24 · 500e6 (reference-values §4, derived).
+    // P = α·C·VDD²·f = 0.25 · 100e-15 · 3.24 · 500e6 (W&H 4th ed. ch. 5, derived).
     near(dynamicPower(0.25, 100e-15, 1.8, 500e6), 40.5e-6);
   });
 });
@@ -67,7 +67,7 @@ describe('activity counted over a sequence', () => {
 
   it('a level passed through an NMOS swings only to VDD − Vtn, so it draws C·VDD·(VDD − Vtn)', () => {
     // Weste & Harris, 4th ed., ch. 5: energy per transition C·VDD·V_swing (from memory); the
-    // NMOS-passed high is VDD − Vtn (reference-values §2, without body effect).
+    // NMOS-passed high is VDD − Vtn (W&H 4th ed. ch. 1, pass transistors, without body effect).
     const pass = circuit('nmos pass')
       .rails()
       .input('D', 'G')

@@ -13,7 +13,7 @@ const random = { freq: 1e6, activity: 'random' } as const;
 
 describe('static power through conducting paths', () => {
   it('a 10 kΩ pull-up to 5 V into 40 kΩ draws 0.1 mA and 0.5 mW', () => {
-    // Resistive divider, Ohm's law (common practice, no source; reference-values §2).
+    // Resistive divider, Ohm's law (common practice, no source).
     const divider = circuit('divider')
       .supply('VDD', 5)
       .ground()
@@ -28,7 +28,7 @@ describe('static power through conducting paths', () => {
   });
 
   it('a resistor-load inverter burns VDD²/(R_L + R_on) with its input high and nothing with it low', () => {
-    // Static power = VDD · I (reference-values §4); I by Ohm's law through the load and the NMOS.
+    // Static power = VDD · I (Weste & Harris, 4th ed., ch. 5, static power); I by Ohm's law through the load and the NMOS.
     const rload = circuit('rload')
       .rails()
       .input('A')

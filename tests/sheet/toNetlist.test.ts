@@ -121,7 +121,7 @@ describe('sheetToNetlist', () => {
     ]);
   });
 
-  it('gives the same netlist whatever the order of parts and wires (SPEC §11 determinism)', () => {
+  it('gives the same netlist whatever the order of parts and wires (docs/semantics.md §8 determinism)', () => {
     const sheet = drawnInverter();
     const shuffled: Sheet = { parts: [...sheet.parts].reverse(), wires: [...sheet.wires].reverse() };
     const a = sheetToNetlist(sheet).netlist;

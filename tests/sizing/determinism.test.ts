@@ -20,7 +20,7 @@ function permuted(netlist: Netlist, order: readonly number[]): Netlist {
   return { ...netlist, devices: keyed.sort((a, b) => a.key - b.key).map((k) => k.d) };
 }
 
-describe('results do not depend on the order devices are listed in (SPEC §11)', () => {
+describe('results do not depend on the order devices are listed in (docs/semantics.md §8)', () => {
   const cells = [nand(3), nor(2), aoi21(1.5)];
   const orders = fc.array(fc.integer({ min: 0, max: 50 }), { minLength: 1, maxLength: 8 });
 

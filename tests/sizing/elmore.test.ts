@@ -36,7 +36,7 @@ describe('Elmore delay of resistor networks', () => {
   });
 
   it('an N-segment RC ladder of total R and C gives RC(N+1)/(2N), tending to RC/2', () => {
-    // Rabaey, Chandrakasan, Nikolić, 2nd ed., distributed RC line (reference-values §5).
+    // Rabaey, Chandrakasan, Nikolić, 2nd ed., distributed RC line (section on the Elmore delay of an RC chain).
     const n = 10;
     let b = circuit('ladder').rails().output(`x${n}`);
     for (let i = 1; i <= n; i++) {

@@ -81,7 +81,7 @@ describe('rising and falling efforts', () => {
 
 describe('parasitic delay in units of p_inv', () => {
   // Inverter 1, NAND n: n, NOR n: n with the book sizing (Weste & Harris, 4th ed., §4.4, parasitic
-  // delay of common gates; reference-values §5).
+  // delay of common gates).
   const cases = [
     { name: 'inverter', cell: inverter(), p: 1 },
     { name: 'NAND2', cell: nand(2), p: 2 },

@@ -22,7 +22,7 @@ const addNmos = (x: number) =>
 describe('undo history', () => {
   beforeEach(() => resetStore(BLANK_DOCUMENT));
 
-  it('keeps at least 100 steps (SPEC §11) and undoes them all in order', () => {
+  it('keeps at least 100 steps (docs/semantics.md §8) and undoes them all in order', () => {
     for (let i = 0; i < 120; i++) addNmos(i * 4);
     for (let i = 119; i >= 0; i--) {
       expect(store.getState().doc.sheet.parts).toHaveLength(i + 1);

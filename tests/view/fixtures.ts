@@ -1,4 +1,4 @@
-/** Hand-written reports in the SPEC §6 shape, with values a reader can re-derive. */
+/** Hand-written reports in the docs/semantics.md §5 shape, with values a reader can re-derive. */
 import type { CheckReport, Finding, Level, VectorReport } from '../../src/core/analysis/report.ts';
 import type { InputValue } from '../../src/core/model/design.ts';
 
@@ -36,7 +36,7 @@ export function report(vectors: VectorReport[], inputs: string[], outputs: strin
 }
 
 /**
- * Pseudo-NMOS inverter, output low (reference-values.md §2 [derived]; RCN 0.25 µm values, from memory):
+ * Pseudo-NMOS inverter, output low (square law, derived; RCN 2nd ed. 0.25 µm values, from memory):
  * VDD 2.5 V, |Vtp| 0.4 V, k'n 115 µA/V², (W/L)n 1.5 and kn/kp = 9, so the saturated PMOS load carries
  * I = ½·kp·(VDD − |Vtp|)² = ½·(115e-6·1.5/9)·2.1² ≈ 42.3 µA and the cell burns VDD·I ≈ 106 µW.
  */

@@ -3,7 +3,7 @@ import { chainText, findingTargets, splitChain, toSheetTargets } from '../../src
 import { pseudoNmosInverter } from './fixtures.ts';
 
 describe('finding highlights', () => {
-  // report.ts (SPEC §4, §6): a current path runs source to ground, nets and devices alternating.
+  // report.ts (docs/semantics.md §3, §5): a current path runs source to ground, nets and devices alternating.
   it('splits a chain into nets and devices', () => {
     expect(splitChain(['VDD', 'P1', 'Y', 'N1', 'GND'])).toEqual({
       nets: ['VDD', 'Y', 'GND'],

@@ -10,7 +10,7 @@ describe('vector table rows', () => {
     const [high, low] = rows;
     expect(high.kinds).toEqual([]);
     expect(low.kinds).toEqual(['static-current']);
-    // 42.3 µA and 106 µW: reference-values.md §2, pseudo-NMOS example [derived].
+    // 42.3 µA and 106 µW: square-law pseudo-NMOS load, derived in fixtures.ts.
     expect(formatCurrent(low.supplyCurrent)).toBe('42.3 µA');
     expect(formatPower(low.staticPower)).toBe('106 µW');
     expect(low.warnings).toBe(1);

@@ -126,7 +126,7 @@ export function summarize(vectors: number, findings: readonly Finding[]): Summar
   return counts as Summary;
 }
 
-/** Checks every input combination, each solved from an unknown state (SPEC §3.9, sweep mode). */
+/** Checks every input combination, each solved from an unknown state (docs/semantics.md §2.9, sweep mode). */
 export function checkSweep(netlist: Netlist, options: CheckOptions = {}): CheckReport {
   const checker = new Checker(netlist, options);
   checkSweepLimit(netlist.inputs, options.maxInputs);
@@ -141,7 +141,7 @@ export function checkSweep(netlist: Netlist, options: CheckOptions = {}): CheckR
 }
 
 /**
- * Applies steps in order, carrying stored charge from each to the next (SPEC §3.9, sequence mode).
+ * Applies steps in order, carrying stored charge from each to the next (docs/semantics.md §2.9, sequence mode).
  * An input a step does not mention keeps its previous value; before its first mention it is X.
  */
 export function checkSequence(

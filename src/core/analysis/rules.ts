@@ -7,7 +7,7 @@ function rule(rule: string, severity: Severity, nets: string[], devices: string[
 }
 
 /**
- * Structural checks (SPEC §4 "rule"): they read the netlist only, not any vector. Bulk rules follow
+ * Structural checks (docs/semantics.md §3 "rule"): they read the netlist only, not any vector. Bulk rules follow
  * common practice (no source): an NMOS body belongs at ground and a PMOS body at the supply; a body
  * tied to the opposite rail forward-biases a junction (error); tied anywhere else it adds body effect
  * and latch-up risk (warning).

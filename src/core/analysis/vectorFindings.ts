@@ -44,7 +44,7 @@ function finding(
 }
 
 /**
- * Everything worth warning about in one solved vector (SPEC §4), except structural rules.
+ * Everything worth warning about in one solved vector (docs/semantics.md §3), except structural rules.
  * `expected` holds each output's expected value for this vector (absent when none is given).
  */
 export function vectorFindings(
@@ -194,7 +194,7 @@ function flaggedFindings(r: SolveResult, vector: number, label: () => string): F
 }
 
 /**
- * Floating nets (SPEC §4), naming the (all off) devices whose channels end on them: an output is an
+ * Floating nets (docs/semantics.md §3), naming the (all off) devices whose channels end on them: an output is an
  * error unless Z is expected; a gate-feeding net is an error without known charge and a warning with
  * it (a dynamic node). Diffusion-only internal nodes
  * (inside transistor stacks) that feed no gate are not reported: they float by design in every

@@ -1,5 +1,5 @@
 /**
- * Expected functions (SPEC §5): `!` `&` `|` `^`, parentheses, constants 0 and 1, `S ? A : B`, and `Z`
+ * Expected functions (docs/semantics.md §4): `!` `&` `|` `^`, parentheses, constants 0 and 1, `S ? A : B`, and `Z`
  * as a result (tristate outputs). Precedence from loosest: `?:` (right-associative), `|`, `^`, `&`, `!`.
  */
 export type Expr =

@@ -1,5 +1,5 @@
 /**
- * SPICE-compatible netlist import (SPEC §6): a file holds one cell (a flat netlist, or one
+ * SPICE-compatible netlist import (docs/semantics.md §6): a file holds one cell (a flat netlist, or one
  * subcircuit that the others build up) or a library (several top-level subcircuits that nothing
  * instantiates, each its own cell). In a library a broken cell is reported apart and never stops
  * the rest; in a single-cell file the problem throws.

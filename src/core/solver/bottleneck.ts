@@ -2,7 +2,7 @@ import { NMOS, PMOS } from '../compile/compile.ts';
 import type { Frame } from './frame.ts';
 
 /**
- * Threshold drop (SPEC §3.4) as a bottleneck path search. A high level passed by an NMOS is capped at
+ * Threshold drop (docs/semantics.md §2.4) as a bottleneck path search. A high level passed by an NMOS is capped at
  * Vg − Vtn; a low level passed by a PMOS is floored at Vg + |Vtp|; PMOS (for highs), NMOS (for lows) and
  * resistors pass levels whole. Each net gets the best level over all conducting paths from the chosen
  * sources (the widest path: the weakest device on the best path sets it), written to frame.best, and

@@ -4,7 +4,7 @@ import { classify, FLAG_BOUND, FLAG_MAYBE, MAYBE, OFF, ON } from './levels.ts';
 import { solveTrial } from './trial.ts';
 
 /**
- * Exact handling of maybe-conducting devices (SPEC §3.7): a group with up to this many unknowns
+ * Exact handling of maybe-conducting devices (docs/semantics.md §2.7): a group with up to this many unknowns
  * (devices whose gate is X, plus inputs driven to X) is solved for every on/off combination;
  * a net is definite only if it reads the same in all of them. Past the bound the group is set to X.
  */
@@ -20,7 +20,7 @@ export interface EvaluationTarget {
 }
 
 /**
- * The conduction rule (SPEC §3.1), in one place: a resistor always conducts; an NMOS conducts when its
+ * The conduction rule (docs/semantics.md §2.1), in one place: a resistor always conducts; an NMOS conducts when its
  * gate reads 1 and a PMOS when it reads 0; a gate between the thresholds (or unknown, NaN) makes the
  * device maybe-conducting. Small enough for the engine to inline into the hot loops that call it.
  */

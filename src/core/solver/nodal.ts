@@ -2,7 +2,7 @@ import { Matrix, solve } from 'ml-matrix';
 import type { Frame } from './frame.ts';
 
 /**
- * Nodal analysis of one component whose sources sit at different voltages (SPEC §3.3): every
+ * Nodal analysis of one component whose sources sit at different voltages (docs/semantics.md §2.3): every
  * conducting element is its on-resistance, sources are fixed voltages, and Kirchhoff's current law at
  * each net gives G·v = b. Writes frame.volts for the component's nets and frame.current (A→B) for its
  * conducting elements. A single unknown is solved directly; larger systems go to ml-matrix's LU solve.

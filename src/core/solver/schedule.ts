@@ -6,7 +6,7 @@ import { OutcomeMemo } from './memo.ts';
 import { buildTopology, type Topology } from './topology.ts';
 
 /**
- * Feedback bound (SPEC §3.8): a strongly connected group of n components gets 2n + 16 rounds to
+ * Feedback bound (docs/semantics.md §2.8): a strongly connected group of n components gets 2n + 16 rounds to
  * settle. Nets still changing then become X (flagged oscillating) and the group gets as many rounds
  * again to settle around them; if it still has not, all its nets become X.
  */

@@ -14,7 +14,7 @@ const CHARGE_SHARE_FRACTION = 0.1;
 
 /**
  * Solves the selected CCC under one fixed on/off assignment (frame.on, frame.sourceEndVolts):
- * splits it into groups joined by conducting elements, then per group applies the rule of SPEC §3:
+ * splits it into groups joined by conducting elements, then per group applies the rule of docs/semantics.md §2:
  * no source → stored charge (shared by capacitance); one source voltage → that voltage less any
  * threshold drop; sources of several voltages → nodal analysis. Reads stored charge and gate voltages
  * from `snapVolts` (global, the previous round) and writes the frame's output arrays.
@@ -65,7 +65,7 @@ function groupNets(frame: Frame): void {
 }
 
 /**
- * No path to a source (SPEC §3.6): a lone net keeps its charge; joined nets share it,
+ * No path to a source (docs/semantics.md §2.6): a lone net keeps its charge; joined nets share it,
  * V = ΣCi·Vi / ΣCi. A member with unknown charge could hold anything from 0 to VDD, so the result is an
  * interval; it is known when both ends of the interval read as the same level.
  */

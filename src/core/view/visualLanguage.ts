@@ -1,5 +1,5 @@
 /**
- * Railwise's visual language for levels on the sheet and in the strips (SPEC §7). Never colour alone:
+ * Railwise's visual language for levels on the sheet and in the strips (docs/semantics.md §9). Never colour alone:
  * each look also has a dash pattern and a text mark, so it reads in greyscale and for colour-blind users.
  */
 import type { Level } from '../analysis/report.ts';
