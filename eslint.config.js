@@ -1,6 +1,7 @@
 import js from '@eslint/js';
 import tseslint from 'typescript-eslint';
 import globals from 'globals';
+import { layersRule } from './eslint.layers.js';
 
 export default tseslint.config(
   { ignores: ['dist', 'node_modules', 'test-results', 'playwright-report'] },
@@ -12,6 +13,11 @@ export default tseslint.config(
       '@typescript-eslint/consistent-type-imports': 'error',
       '@typescript-eslint/no-unused-vars': ['error', { argsIgnorePattern: '^_' }],
     },
+  },
+  {
+    files: ['src/**/*.{ts,tsx}'],
+    plugins: { railwise: { rules: { layers: layersRule } } },
+    rules: { 'railwise/layers': 'error' },
   },
   {
     // The core is pure: no React, no DOM, no UI state, no filesystem.
@@ -28,10 +34,6 @@ export default tseslint.config(
             {
               group: ['node:*', 'fs', 'path', 'child_process'],
               message: 'src/core runs in the browser too: no Node modules.',
-            },
-            {
-              group: ['../editor/*', '../panels/*', '../state/*', '../worker/*', '../cli/*'],
-              message: 'src/core imports nothing above it.',
             },
           ],
         },
