@@ -4,7 +4,7 @@ import globals from 'globals';
 import { layersRule } from './eslint.layers.js';
 
 export default tseslint.config(
-  { ignores: ['dist', 'node_modules', 'test-results', 'playwright-report'] },
+  { ignores: ['dist', 'dist-cli', '.dist-cli-*', 'node_modules', 'test-results', 'playwright-report'] },
   js.configs.recommended,
   ...tseslint.configs.recommended,
   {

@@ -4,6 +4,7 @@ import react from '@vitejs/plugin-react';
 export default defineConfig({
   plugins: [react()],
   test: {
+    globalSetup: ['tests/globalSetup.ts'],
     projects: [
       {
         extends: true,
