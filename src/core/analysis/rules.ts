@@ -6,6 +6,9 @@ function rule(rule: string, severity: Severity, nets: string[], devices: string[
   return { kind: 'rule', severity, vector: null, nets, devices, path: null, rule, message };
 }
 
+/** Terminals through which a device can drive the net they sit on (a gate only listens). */
+const DRIVER_TERMINALS: ReadonlySet<string> = new Set(['drain', 'source', 'a', 'b', 'anode', 'cathode']);
+
 /**
  * Structural checks (docs/semantics.md §3 "rule"): they read the netlist only, not any vector. Bulk rules follow
  * common practice (no source): an NMOS body belongs at ground and a PMOS body at the supply; a body
@@ -15,20 +18,31 @@ function rule(rule: string, severity: Severity, nets: string[], devices: string[
 export function structuralFindings(c: CompiledNetlist): Finding[] {
   const { netlist } = c;
   const findings: Finding[] = [];
+  // One pass over the terminals, appending in place: rail nets touch nearly every transistor, so
+  // nothing here may copy a net's list per terminal (that was quadratic in the cell's size).
   const touches = new Map<string, { device: string; terminal: string }[]>();
+  const drivenBy = new Map<string, number>();
   for (const d of netlist.devices) {
-    for (const t of deviceTerminals(d))
-      touches.set(t.net, [...(touches.get(t.net) ?? []), { device: d.name, terminal: t.terminal }]);
+    for (const t of deviceTerminals(d)) {
+      const list = touches.get(t.net);
+      if (list) list.push({ device: d.name, terminal: t.terminal });
+      else touches.set(t.net, [{ device: d.name, terminal: t.terminal }]);
+      if (DRIVER_TERMINALS.has(t.terminal)) drivenBy.set(t.net, (drivenBy.get(t.net) ?? 0) + 1);
+    }
   }
   const railRole = new Map<string, Set<string>>();
   for (const r of netlist.rails) {
     const v = r.role === 'ground' ? 0 : (r.volts ?? c.tech.vdd);
-    railRole.set(r.net, new Set([...(railRole.get(r.net) ?? []), `${r.role}@${v}`]));
+    const roles = railRole.get(r.net) ?? new Set<string>();
+    roles.add(`${r.role}@${v}`);
+    railRole.set(r.net, roles);
   }
+  const inputs = new Set(netlist.inputs);
+  const pins = new Set([...netlist.inputs, ...netlist.outputs]);
+  const railNets = { supply: new Set<string>(), ground: new Set<string>() };
+  for (const r of netlist.rails) railNets[r.role].add(r.net);
   const isRail = (net: string): boolean => railRole.has(net);
-  const isPin = (net: string): boolean => netlist.inputs.includes(net) || netlist.outputs.includes(net);
-  const railOf = (net: string, role: 'supply' | 'ground'): boolean =>
-    netlist.rails.some((r) => r.net === net && r.role === role);
+  const railOf = (net: string, role: 'supply' | 'ground'): boolean => railNets[role].has(net);
 
   const names = new Map<string, number>();
   for (const d of netlist.devices) names.set(d.name, (names.get(d.name) ?? 0) + 1);
@@ -42,11 +56,9 @@ export function structuralFindings(c: CompiledNetlist): Finding[] {
         rule('rails-joined', 'error', [net], [], `rails of different voltage are joined on net ${net}`),
       );
   }
-  const driverTerminals = new Set(['drain', 'source', 'a', 'b', 'anode', 'cathode']);
   for (const d of netlist.devices) {
     if (d.kind !== 'nmos' && d.kind !== 'pmos') continue;
-    const drivers = (touches.get(d.gate) ?? []).filter((t) => driverTerminals.has(t.terminal));
-    if (!isRail(d.gate) && !netlist.inputs.includes(d.gate) && drivers.length === 0) {
+    if (!isRail(d.gate) && !inputs.has(d.gate) && !drivenBy.has(d.gate)) {
       findings.push(
         rule(
           'gate-undriven',
@@ -75,7 +87,7 @@ export function structuralFindings(c: CompiledNetlist): Finding[] {
       findings.push(rule('pin-unconnected', 'error', [pin], [], `pin ${pin} is connected to nothing`));
   }
   for (const [net, list] of touches) {
-    if (list.length === 1 && !isRail(net) && !isPin(net)) {
+    if (list.length === 1 && !isRail(net) && !pins.has(net)) {
       findings.push(
         rule(
           'dangling-net',
