@@ -3,17 +3,17 @@ import type { SheetPart } from '../core/sheet/types.ts';
 import { partSpec } from '../core/sheet/parts/index.ts';
 import { editPart } from '../editor/actions.ts';
 import { setDesignFields, store, useStore } from '../state/store.ts';
-import { fieldsFor, fieldText, readField, type FieldKey } from './fieldRules.ts';
+import { fieldPatch, fieldsFor, fieldText, fieldValue, readField, type FormField } from './fieldRules.ts';
 
 /** One field: applied on Enter or when focus leaves; a bad value stays in the box with its reason. */
-function Field({ part, field }: { part: SheetPart; field: { key: FieldKey; label: string } }) {
+function Field({ part, field }: { part: SheetPart; field: FormField }) {
   const [text, setText] = useState(fieldText(part, field.key));
   const [error, setError] = useState<string | null>(null);
   const apply = (): void => {
     const r = readField(field.key, text, part, store.getState().doc.sheet);
     if (!r.ok) return setError(r.error);
     setError(null);
-    if (r.value !== part[field.key]) editPart(part.id, { [field.key]: r.value });
+    if (r.value !== fieldValue(part, field.key)) editPart(part.id, fieldPatch(field.key, r.value));
   };
   const id = `field-${field.key}`;
   return (
@@ -65,6 +65,13 @@ function CellNameField() {
   );
 }
 
+/** The kind and, when it has one, the size as the sheet labels it: "Resistor · 10 kΩ". */
+function kindLine(part: SheetPart): string {
+  const spec = partSpec(part.kind);
+  const value = spec.valueLabel(part);
+  return value === '' ? spec.title : `${spec.title} · ${value}`;
+}
+
 /** The side form: the selected part's properties, or the cell's name when nothing single is selected. */
 export function PropertiesForm() {
   const selected = useStore((s) => s.selection.selected);
@@ -78,7 +85,7 @@ export function PropertiesForm() {
       <h2>Properties</h2>
       {part ? (
         <form key={`${part.id}:${JSON.stringify(part)}`} onSubmit={(e) => e.preventDefault()}>
-          <p className="rw-kind">{partSpec(part.kind).title}</p>
+          <p className="rw-kind">{kindLine(part)}</p>
           {fieldsFor(part).map((f) => (
             <Field key={f.key} part={part} field={f} />
           ))}

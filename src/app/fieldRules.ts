@@ -1,13 +1,20 @@
 /**
  * What the properties form accepts: each field's text is read into a value or an error message.
- * Pure, so the rules are tested without a page.
+ * The fields, their units and their checks come from the part's spec; only the name rule (unique
+ * device names, net-name spelling) is the form's own. Pure, so the rules are tested without a page.
  */
 import type { SheetPart, Sheet } from '../core/sheet/types.ts';
-import { isDevicePart } from '../core/sheet/parts/index.ts';
+import { isDevicePart, partProp, partSpec, type PartPropKey } from '../core/sheet/parts/index.ts';
+import type { PartPatch } from '../core/sheet/edits.ts';
 import { NET_NAME_PATTERN } from '../core/sheet/naming.ts';
-import { formatSpiceNumber, spiceValue } from '../core/netlist-io/spiceNumber.ts';
 
-export type FieldKey = 'name' | 'w' | 'l' | 'ohms' | 'farads';
+export type FieldKey = 'name' | PartPropKey;
+
+export interface FormField {
+  readonly key: FieldKey;
+  /** With its unit: "W (µm)". */
+  readonly label: string;
+}
 
 export type FieldResult =
   { readonly ok: true; readonly value: string | number } | { readonly ok: false; readonly error: string };
@@ -30,52 +37,44 @@ function readName(text: string, part: SheetPart, sheet: Sheet): FieldResult {
     : { ok: false, error: 'a net name starts with a letter or _, no spaces' };
 }
 
-/** A positive number; W and L are in µm (plain numbers), ohms and farads take SI suffixes (10k, 5f). */
-function readPositive(text: string, key: Exclude<FieldKey, 'name'>): FieldResult {
-  const value = key === 'w' || key === 'l' ? Number(text.trim()) : spiceValue(text);
-  if (value === null || !Number.isFinite(value) || text.trim() === '') {
-    return {
-      ok: false,
-      error:
-        key === 'w' || key === 'l'
-          ? 'a number of µm, e.g. 0.5'
-          : 'a number, with a suffix if you like (10k, 4.7p)',
-    };
-  }
-  if (value <= 0) return { ok: false, error: 'must be more than zero' };
-  if ((key === 'w' || key === 'l') && value < 0.01)
-    return { ok: false, error: 'below 0.01 µm is not a transistor' };
-  return { ok: true, value };
+function fieldSpec(part: SheetPart, key: PartPropKey) {
+  return partSpec(part.kind).fields.find((f) => f.key === key);
 }
 
 export function readField(key: FieldKey, text: string, part: SheetPart, sheet: Sheet): FieldResult {
-  return key === 'name' ? readName(text, part, sheet) : readPositive(text, key);
+  if (key === 'name') return readName(text, part, sheet);
+  const field = fieldSpec(part, key);
+  return field
+    ? field.quantity.read(text)
+    : { ok: false, error: `a ${partSpec(part.kind).title} has no ${key}` };
 }
 
-/** The fields a part kind shows, with their labels. */
-export function fieldsFor(part: SheetPart): { key: FieldKey; label: string }[] {
-  const name = { key: 'name' as const, label: isDevicePart(part.kind) ? 'Name' : 'Net name' };
-  switch (part.kind) {
-    case 'nmos':
-    case 'pmos':
-      return [name, { key: 'w', label: 'W (µm)' }, { key: 'l', label: 'L (µm)' }];
-    case 'resistor':
-      return [name, { key: 'ohms', label: 'Resistance (Ω)' }];
-    case 'capacitor':
-      return [name, { key: 'farads', label: 'Capacitance (F)' }];
-    default:
-      return [name];
-  }
+/** The fields a part kind shows, with their labels: the name, then the spec's fields in order. */
+export function fieldsFor(part: SheetPart): FormField[] {
+  return [
+    { key: 'name', label: isDevicePart(part.kind) ? 'Name' : 'Net name' },
+    ...partSpec(part.kind).fields.map((f) => ({ key: f.key, label: `${f.label} (${f.quantity.unit})` })),
+  ];
+}
+
+/** The part's current value of a field. */
+export function fieldValue(part: SheetPart, key: FieldKey): string | number | undefined {
+  return key === 'name' ? part.name : partProp(part, key);
 }
 
 /**
- * The text a field shows for a part. Ohms and farads are written as SPICE numbers that read back to
- * exactly the same value (`1meg`, not `1M`, which reads as milli), so leaving a field untouched never
- * changes the part.
+ * The text a field shows for a part, as its quantity writes it: ohms and farads as SPICE numbers
+ * that read back to exactly the same value (`1meg`, not `1M`, which reads as milli), so leaving a
+ * field untouched never changes the part.
  */
 export function fieldText(part: SheetPart, key: FieldKey): string {
-  const v = part[key];
-  if (v === undefined) return '';
-  if (key === 'ohms' || key === 'farads') return formatSpiceNumber(v as number);
-  return String(v);
+  const value = fieldValue(part, key);
+  if (value === undefined || typeof value === 'string') return value ?? '';
+  const field = key === 'name' ? undefined : fieldSpec(part, key);
+  return field ? field.quantity.editText(value) : String(value);
+}
+
+/** The edit that sets one field. */
+export function fieldPatch(key: FieldKey, value: string | number): PartPatch {
+  return key === 'name' ? { name: String(value) } : { [key]: Number(value) };
 }

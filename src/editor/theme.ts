@@ -17,9 +17,10 @@ export const SHEET_THEME = {
   subtleText: '#6b7280',
 } as const;
 
-/** Stroke widths and text sizes in grid units (the stage is scaled so one unit is `scale` px). */
+/**
+ * Stroke widths in grid units (the stage is scaled so one unit is `scale` px). Text sizes belong to
+ * the part specs (`TEXT_SIZE` in `core/sheet/parts/text.ts`), shared with the SVG export.
+ */
 export const STROKE = 0.09;
 export const WIRE_STROKE = 0.1;
-export const NAME_SIZE = 0.75;
-export const VALUE_SIZE = 0.6;
 export const JUNCTION_RADIUS = 0.2;

@@ -16,6 +16,7 @@ import type { Design } from '../../src/core/model/design.ts';
 import { circuit } from '../../src/core/model/builder.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import type { SheetPart } from '../../src/core/sheet/types.ts';
+import { makeSheetPart, PART_KINDS } from '../../src/core/sheet/parts/index.ts';
 import { netlistArb } from '../netlist-io/arbitraries.ts';
 
 const inverter = circuit('inv')
@@ -57,15 +58,21 @@ function edited(edit: (doc: Doc) => void): string {
   return JSON.stringify(doc, null, 2);
 }
 
-const partArb: fc.Arbitrary<SheetPart> = fc.record({
-  id: fc.uuid(),
-  kind: fc.constantFrom('nmos', 'pmos', 'resistor', 'capacitor', 'vdd', 'gnd', 'input', 'output', 'label'),
-  name: fc.string(),
-  x: fc.integer({ min: -500, max: 500 }),
-  y: fc.integer({ min: -500, max: 500 }),
-  rotation: fc.constantFrom(0, 1, 2, 3),
-  mirror: fc.boolean(),
-});
+const sizeArb = fc.double({ min: 1e-15, max: 1e9, noNaN: true });
+
+/** Any kind of part, with whichever sizes its kind has. */
+const partArb: fc.Arbitrary<SheetPart> = fc
+  .record({
+    id: fc.uuid(),
+    kind: fc.constantFrom(...PART_KINDS),
+    name: fc.string(),
+    x: fc.integer({ min: -500, max: 500 }),
+    y: fc.integer({ min: -500, max: 500 }),
+    rotation: fc.constantFrom(0 as const, 1 as const, 2 as const, 3 as const),
+    mirror: fc.boolean(),
+    sizes: fc.record({ w: sizeArb, l: sizeArb, ohms: sizeArb, farads: sizeArb }),
+  })
+  .map(({ kind, sizes, ...placement }) => makeSheetPart(kind, placement, sizes));
 
 /** Record keys as a user might type them; `__proto__` is dropped by zod's record (a guard against prototype pollution). */
 const keyArb = fc.string({ minLength: 1 }).filter((k) => k !== '__proto__');

@@ -2,17 +2,20 @@
  * Hand-drawn sheets for the tests, placed as a designer would draw them on the grid.
  * Coordinates follow the part specs: MOS gate at (-2,0), upper channel pin (0,-2), lower (0,2).
  */
-import type { Sheet, SheetPart } from '../../src/core/sheet/types.ts';
+import type { PartPlacement, Sheet, SheetPart } from '../../src/core/sheet/types.ts';
+import { makeSheetPart, type PartProps } from '../../src/core/sheet/parts/index.ts';
 
+/** A part at (x, y), unturned unless `extra` says otherwise; missing sizes take the kind's defaults. */
 export function part(
   id: string,
   kind: SheetPart['kind'],
   name: string,
   x: number,
   y: number,
-  extra: Partial<SheetPart> = {},
+  extra: Partial<Pick<PartPlacement, 'rotation' | 'mirror'>> & PartProps = {},
 ): SheetPart {
-  return { id, kind, name, x, y, rotation: 0, mirror: false, ...extra };
+  const { rotation = 0, mirror = false, ...props } = extra;
+  return makeSheetPart(kind, { id, name, x, y, rotation, mirror }, props);
 }
 
 /**

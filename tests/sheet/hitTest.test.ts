@@ -1,6 +1,6 @@
 import { describe, expect, it } from 'vitest';
 import { buildIndex, hitTest, itemsInRect } from '../../src/core/sheet/hitTest.ts';
-import { drawnInverter } from './fixtures.ts';
+import { drawnInverter, part } from './fixtures.ts';
 
 describe('hit testing without a canvas', () => {
   const sheet = drawnInverter();
@@ -27,7 +27,7 @@ describe('hit testing without a canvas', () => {
 
   it('works far from the origin (negative buckets)', () => {
     const far = buildIndex({
-      parts: [{ id: 'q', kind: 'nmos', name: 'N9', x: -100, y: -57, rotation: 0, mirror: false }],
+      parts: [part('q', 'nmos', 'N9', -100, -57)],
       wires: [],
     });
     expect(hitTest(far, { x: -100.2, y: -57 })).toEqual({ type: 'part', partId: 'q' });

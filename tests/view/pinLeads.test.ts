@@ -1,8 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { LEAD_LENGTH, pinLeads } from '../../src/core/view/pinLeads.ts';
-import type { SheetPart } from '../../src/core/sheet/types.ts';
+import { part } from '../sheet/fixtures.ts';
 
-const nmos: SheetPart = { id: 'p1', kind: 'nmos', name: 'N1', x: 10, y: 20, rotation: 0, mirror: false };
+const nmos = part('p1', 'nmos', 'N1', 10, 20);
 
 describe('pin leads', () => {
   it('runs from each MOS pin toward the body by the lead length', () => {

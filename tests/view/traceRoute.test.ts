@@ -1,25 +1,8 @@
 import { describe, expect, it } from 'vitest';
 import { traceRoute } from '../../src/core/view/traceRoute.ts';
-import type { Sheet, SheetPart } from '../../src/core/sheet/types.ts';
+import type { Sheet } from '../../src/core/sheet/types.ts';
 import { sheetToNetlist } from '../../src/core/sheet/toNetlist.ts';
-
-const part = (
-  id: string,
-  kind: SheetPart['kind'],
-  name: string,
-  x: number,
-  y: number,
-  extra: Partial<SheetPart> = {},
-): SheetPart => ({
-  id,
-  kind,
-  name,
-  x,
-  y,
-  rotation: 0,
-  mirror: false,
-  ...extra,
-});
+import { part } from '../sheet/fixtures.ts';
 
 /**
  * A resistor-load inverter drawn by hand in one column: VDD, R1, N1, GND, with A to the left and the

@@ -6,6 +6,7 @@
  */
 import { z } from 'zod';
 import { DEFAULT_TECHNOLOGY, withVdd } from '../model/technology.ts';
+import { sheetPartSchema } from './sheetPartSchema.ts';
 
 const netName = z.string().min(1, 'a net name cannot be empty');
 const deviceName = z.string().min(1, 'a device name cannot be empty');
@@ -104,20 +105,6 @@ export const sequenceSchema = z.object({
 });
 
 const pointSchema = z.object({ x: z.number(), y: z.number() });
-
-export const sheetPartSchema = z.object({
-  id: z.string().min(1),
-  kind: z.enum(['nmos', 'pmos', 'resistor', 'capacitor', 'vdd', 'gnd', 'input', 'output', 'label']),
-  name: z.string(),
-  x: z.number(),
-  y: z.number(),
-  rotation: z.union([z.literal(0), z.literal(1), z.literal(2), z.literal(3)]),
-  mirror: z.boolean(),
-  w: positive.optional(),
-  l: positive.optional(),
-  ohms: positive.optional(),
-  farads: positive.optional(),
-});
 
 export const sheetSchema = z.object({
   parts: z.array(sheetPartSchema),

@@ -8,9 +8,9 @@
  * gets a net label, and equal labels join the net.
  */
 import type { Device, Netlist } from '../model/netlist.ts';
-import { channelNets } from '../model/netlist.ts';
+import { channelNets, deviceTerminals } from '../model/netlist.ts';
 import type { PartKind, Point, Rotation, Sheet, SheetPart, SheetWire } from './types.ts';
-import { partSpec } from './parts/index.ts';
+import { makeSheetPart, partForDevice, partKindForDevice, partSpec } from './parts/index.ts';
 import { pinPositions, turnDirection } from './geometry.ts';
 import { railDistances } from './railDistance.ts';
 
@@ -68,11 +68,11 @@ function assignColumns(slots: Slot[]): void {
   }
 }
 
-function slotDevices(netlist: Netlist): Slot[] {
-  const supplies = netlist.rails.filter((r) => r.role === 'supply').map((r) => r.net);
-  const grounds = netlist.rails.filter((r) => r.role === 'ground').map((r) => r.net);
-  const toSupply = railDistances(netlist, supplies);
-  const toGround = railDistances(netlist, grounds);
+function slotDevices(
+  netlist: Netlist,
+  toSupply: ReadonlyMap<string, number>,
+  toGround: ReadonlyMap<string, number>,
+): Slot[] {
   const channel = netlist.devices.filter((d) => channelNets(d) !== null);
   const deepest = channel.length;
   const slots: Slot[] = channel.map((device) => {
@@ -91,28 +91,11 @@ function slotDevices(netlist: Netlist): Slot[] {
 
 export function autoPlace(netlist: Netlist, options: Partial<AutoPlaceOptions> = {}): Sheet {
   const o = { ...DEFAULTS, ...options };
-  const slots = slotDevices(netlist);
-  const upRows = Math.max(0, ...slots.filter((s) => s.upper).map((s) => s.row + 1));
-  const lowRows = Math.max(0, ...slots.filter((s) => !s.upper).map((s) => s.row + 1));
   const builder = new SheetBuilder();
   const supplies = new Set(netlist.rails.filter((r) => r.role === 'supply').map((r) => r.net));
   const grounds = new Set(netlist.rails.filter((r) => r.role === 'ground').map((r) => r.net));
-  const toSupply = railDistances(netlist, [...supplies]);
-  const toGround = railDistances(netlist, [...grounds]);
-  const distTo = (slot: Slot) => (slot.upper ? toSupply : toGround);
-  const placed = slots.map((slot) => {
-    const y = slot.upper
-      ? -o.rowPitch * (upRows - slot.row) + o.rowPitch / 2
-      : o.rowPitch * (lowRows - slot.row) - o.rowPitch / 2;
-    const x = slot.column * o.columnPitch;
-    return { slot, part: builder.device(slot.device, { x, y: Math.round(y) }, flipFor(slot, distTo(slot))) };
-  });
-  placeCapacitors(
-    netlist,
-    builder,
-    o,
-    placed.length === 0 ? 0 : Math.max(...placed.map((p) => p.part.x)) + o.columnPitch,
-  );
+  const columns = placeChannelDevices(netlist, builder, o, supplies, grounds);
+  placeTwoTerminalLoads(netlist, builder, o, columns * o.columnPitch);
   builder.connectPins(supplies, grounds);
   const minX = Math.min(0, ...builder.parts.map((p) => p.x)) - 6;
   const maxX = Math.max(0, ...builder.parts.map((p) => p.x)) + 6;
@@ -127,12 +110,37 @@ export function autoPlace(netlist: Netlist, options: Partial<AutoPlaceOptions> =
   return builder.sheet();
 }
 
+/** Transistors and resistors in their rows and columns; returns the number of columns used. */
+function placeChannelDevices(
+  netlist: Netlist,
+  builder: SheetBuilder,
+  o: AutoPlaceOptions,
+  supplies: ReadonlySet<string>,
+  grounds: ReadonlySet<string>,
+): number {
+  const toSupply = railDistances(netlist, [...supplies]);
+  const toGround = railDistances(netlist, [...grounds]);
+  const slots = slotDevices(netlist, toSupply, toGround);
+  const upRows = Math.max(0, ...slots.filter((s) => s.upper).map((s) => s.row + 1));
+  const lowRows = Math.max(0, ...slots.filter((s) => !s.upper).map((s) => s.row + 1));
+  for (const slot of slots) {
+    const y = slot.upper
+      ? -o.rowPitch * (upRows - slot.row) + o.rowPitch / 2
+      : o.rowPitch * (lowRows - slot.row) - o.rowPitch / 2;
+    const at = { x: slot.column * o.columnPitch, y: Math.round(y) };
+    builder.device(slot.device, at, flipFor(slot, slot.upper ? toSupply : toGround));
+  }
+  return slots.length === 0 ? 0 : Math.max(...slots.map((s) => s.column)) + 1;
+}
+
 /** Vertical flip when the terminal drawn at the bottom is the one nearer the rail above (or vice versa). */
 function flipFor(slot: Slot, dist: ReadonlyMap<string, number>): boolean {
   const nets = channelNets(slot.device);
-  if (!nets) return false;
-  const spec = partSpec(slot.device.kind as PartKind);
-  const topPin = spec.pins.filter((p) => p.name !== 'gate').sort((a, b) => a.y - b.y)[0]!.name;
+  const kind = partKindForDevice(slot.device);
+  if (!nets || kind === null) return false;
+  const topPin = partSpec(kind)
+    .pins.filter((p) => p.name !== 'gate')
+    .sort((a, b) => a.y - b.y)[0]!.name;
   const [top, bottom] = topPin === 'drain' || topPin === 'a' ? nets : [nets[1], nets[0]];
   const dt = dist.get(top) ?? Infinity;
   const db = dist.get(bottom) ?? Infinity;
@@ -140,9 +148,15 @@ function flipFor(slot: Slot, dist: ReadonlyMap<string, number>): boolean {
   return slot.upper ? db < dt : dt < db;
 }
 
-function placeCapacitors(netlist: Netlist, builder: SheetBuilder, o: AutoPlaceOptions, x0: number): void {
+/** Devices with no channel (capacitors, diodes) stand in a row right of the transistors. */
+function placeTwoTerminalLoads(
+  netlist: Netlist,
+  builder: SheetBuilder,
+  o: AutoPlaceOptions,
+  x0: number,
+): void {
   netlist.devices
-    .filter((d) => d.kind === 'capacitor')
+    .filter((d) => channelNets(d) === null)
     .forEach((d, i) => builder.device(d, { x: x0 + i * (o.columnPitch / 2), y: o.rowPitch }, false));
 }
 
@@ -152,38 +166,21 @@ class SheetBuilder {
   private readonly wires: SheetWire[] = [];
   private readonly deviceParts: { part: SheetPart; device: Device }[] = [];
 
-  private add(
-    kind: PartKind,
-    name: string,
-    at: Point,
-    rotation: Rotation,
-    mirror: boolean,
-    extra: Partial<SheetPart> = {},
-  ): SheetPart {
-    const part: SheetPart = {
-      id: `p${this.parts.length + 1}`,
-      kind,
-      name,
-      x: at.x,
-      y: at.y,
-      rotation,
-      mirror,
-      ...extra,
-    };
-    this.parts.push(part);
-    return part;
+  private nextPlacement(at: Point, rotation: Rotation, mirror: boolean) {
+    return { id: `p${this.parts.length + 1}`, x: at.x, y: at.y, rotation, mirror };
   }
 
-  device(device: Device, at: Point, flip: boolean): SheetPart {
-    const extra = deviceProperties(device);
+  /** Places the device's part; a device no part kind draws is left off the sheet. */
+  device(device: Device, at: Point, flip: boolean): void {
     // Mirror then a half turn is a flip top-to-bottom; the gate stays on the left.
-    const part = this.add(device.kind as PartKind, device.name, at, flip ? 2 : 0, flip, extra);
+    const part = partForDevice(device, this.nextPlacement(at, flip ? 2 : 0, flip));
+    if (part === null) return;
+    this.parts.push(part);
     this.deviceParts.push({ part, device });
-    return part;
   }
 
   naming(kind: PartKind, name: string, at: Point, rotation: Rotation = 0): void {
-    this.add(kind, name, at, rotation, false);
+    this.parts.push(makeSheetPart(kind, { ...this.nextPlacement(at, rotation, false), name }));
   }
 
   /** A straight wire, named by a label at its middle so the net keeps its netlist name. */
@@ -260,23 +257,8 @@ function key(p: { part: SheetPart; pin: { pin: string } }): string {
   return `${p.part.id}.${p.pin.pin}`;
 }
 
-function deviceProperties(d: Device): Partial<SheetPart> {
-  switch (d.kind) {
-    case 'nmos':
-    case 'pmos':
-      return { w: d.w, l: d.l };
-    case 'resistor':
-      return { ohms: d.ohms };
-    case 'capacitor':
-      return { farads: d.farads };
-    case 'diode':
-      return {};
-  }
-}
-
 function terminalNet(d: Device, pin: string): string {
-  const record = d as unknown as Record<string, string>;
-  return record[pin] ?? '';
+  return deviceTerminals(d).find((t) => t.terminal === pin)?.net ?? '';
 }
 
 /** Unit direction pointing away from the part at a pin, in local units. */

@@ -4,7 +4,7 @@
  */
 import type { PartKind, Point, Rotation, Sheet, SheetPart, SheetWire } from './types.ts';
 import type { ItemIds } from './selection.ts';
-import { partSpec } from './parts/index.ts';
+import { makeSheetPart, partSpec, type PartProps } from './parts/index.ts';
 import { nextPartId, nextPartName, nextWireId } from './naming.ts';
 import { isOrthogonalPath, normalizePath } from './routing.ts';
 
@@ -25,16 +25,14 @@ export interface NewPart {
 
 /** A new part with the kind's default properties, a fresh id and name. */
 export function makePart(sheet: Sheet, args: NewPart): SheetPart {
-  return {
+  return makeSheetPart(args.kind, {
     id: nextPartId(sheet),
-    kind: args.kind,
     name: args.name ?? nextPartName(sheet, args.kind),
     x: Math.round(args.at.x),
     y: Math.round(args.at.y),
     rotation: args.rotation ?? 0,
     mirror: args.mirror ?? false,
-    ...partSpec(args.kind).defaults,
-  };
+  });
 }
 
 export function addPart(sheet: Sheet, args: NewPart): Sheet {
@@ -59,17 +57,29 @@ export function deleteItems(sheet: Sheet, ids: ItemIds): Sheet {
   };
 }
 
-export type PartPatch = Partial<Pick<SheetPart, 'name' | 'w' | 'l' | 'ohms' | 'farads'>>;
+/** A new name and/or new property values; each property must be one the part's kind has. */
+export type PartPatch = { readonly name?: string } & PartProps;
 
 /** Changes a part's properties; values are checked so the sheet never holds a broken part. */
 export function updatePart(sheet: Sheet, partId: string, patch: PartPatch): Sheet {
-  if (!sheet.parts.some((p) => p.id === partId)) throw new SheetEditError(`no part ${partId}`);
-  for (const key of ['w', 'l', 'ohms', 'farads'] as const) {
-    const v = patch[key];
-    if (v !== undefined && !(Number.isFinite(v) && v > 0))
-      throw new SheetEditError(`${key} must be a positive number`);
+  const part = sheet.parts.find((p) => p.id === partId);
+  if (part === undefined) throw new SheetEditError(`no part ${partId}`);
+  const { name, ...values } = patch;
+  if (name !== undefined && name.trim() === '') throw new SheetEditError('a name cannot be empty');
+  const spec = partSpec(part.kind);
+  for (const [key, value] of Object.entries(values)) {
+    const field = spec.fields.find((f) => f.key === key);
+    if (field === undefined) throw new SheetEditError(`a ${spec.title} has no ${key}`);
+    const problem = value === undefined ? null : field.quantity.check(value);
+    if (problem !== null) throw new SheetEditError(`${field.label} ${problem}`);
   }
-  if (patch.name !== undefined && patch.name.trim() === '')
-    throw new SheetEditError('a name cannot be empty');
-  return { ...sheet, parts: sheet.parts.map((p) => (p.id === partId ? { ...p, ...patch } : p)) };
+  const next = makeSheetPart(
+    part.kind,
+    { ...part, ...(name === undefined ? {} : { name }) },
+    {
+      ...part,
+      ...values,
+    },
+  );
+  return { ...sheet, parts: sheet.parts.map((p) => (p.id === partId ? next : p)) };
 }

@@ -4,6 +4,9 @@
  */
 import type { Point, Rotation, SheetPart } from './types.ts';
 import { partSpec } from './parts/index.ts';
+import { toWorld } from './placement.ts';
+
+export { toWorld, turnDirection, type Placement } from './placement.ts';
 
 export interface Rect {
   readonly x0: number;
@@ -17,27 +20,6 @@ export interface PlacedPin {
   readonly pin: string;
   readonly x: number;
   readonly y: number;
-}
-
-type Placement = Pick<SheetPart, 'x' | 'y' | 'rotation' | 'mirror'>;
-
-/** Local → world: mirror across the vertical axis first, then quarter turns clockwise, then move. */
-export function toWorld(place: Placement, p: Point): Point {
-  let x = place.mirror ? -p.x : p.x;
-  let y = p.y;
-  for (let i = 0; i < place.rotation; i++) {
-    // One clockwise quarter turn with y down: right becomes down.
-    const t = x;
-    x = -y;
-    y = t;
-  }
-  // `+ 0` turns -0 into 0 so equal points print and compare alike.
-  return { x: x + place.x + 0, y: y + place.y + 0 };
-}
-
-/** Direction (unit vector) of a local direction after placement, without the translation. */
-export function turnDirection(place: Pick<SheetPart, 'rotation' | 'mirror'>, d: Point): Point {
-  return toWorld({ x: 0, y: 0, rotation: place.rotation, mirror: place.mirror }, d);
 }
 
 export function pinPositions(part: SheetPart): PlacedPin[] {

@@ -3,7 +3,7 @@
  * the same sheet always yields the same next id.
  */
 import type { PartKind, Sheet } from './types.ts';
-import { isDevicePart, partSpec } from './parts/index.ts';
+import { partSpec } from './parts/index.ts';
 
 function maxSuffix(values: Iterable<string>, prefix: string): number {
   let max = 0;
@@ -39,22 +39,28 @@ export function nextWireId(sheet: Sheet, offset = 0): string {
 }
 
 /**
- * The name a new part of this kind gets: devices are numbered per prefix (N1, N2, …); rails take
- * the trade's names; pins and labels take the next unused letter or numbered name.
+ * The name a new part of this kind gets, by its spec's naming rule: devices are numbered per
+ * prefix (N1, N2, …); rails take their one name; pins and labels take the next unused letter, then
+ * numbered names.
  */
 export function nextPartName(sheet: Sheet, kind: PartKind, offset = 0): string {
-  const spec = partSpec(kind);
+  const naming = partSpec(kind).naming;
   const names = sheet.parts.map((p) => p.name);
-  if (isDevicePart(kind)) return `${spec.namePrefix}${maxSuffix(names, spec.namePrefix) + 1 + offset}`;
-  if (kind === 'vdd' || kind === 'gnd') return spec.namePrefix;
-  const used = new Set(names);
-  const letters = kind === 'input' ? 'ABCDEFGHJKLMSTUVW' : kind === 'output' ? 'YZQOUTVW' : '';
-  let skipped = 0;
-  for (const letter of letters) {
-    if (used.has(letter)) continue;
-    if (skipped++ === offset) return letter;
+  switch (naming.type) {
+    case 'fixed':
+      return naming.name;
+    case 'numbered':
+      return `${naming.prefix}${maxSuffix(names, naming.prefix) + 1 + offset}`;
+    case 'letters': {
+      const used = new Set(names);
+      let skipped = 0;
+      for (const letter of naming.letters) {
+        if (used.has(letter)) continue;
+        if (skipped++ === offset) return letter;
+      }
+      return `${naming.prefix}${maxSuffix(names, naming.prefix) + 1 + offset}`;
+    }
   }
-  return `${spec.namePrefix}${maxSuffix(names, spec.namePrefix) + 1 + offset}`;
 }
 
 /** Net names that users may type: letters, digits, `_ . [ ] < > : / -`, starting with a letter or `_`. */

@@ -3,8 +3,9 @@
  * editor draws, wires, junction dots and upright text. Neutral ink only: levels are not exported.
  */
 import type { Sheet, SheetPart } from './types.ts';
-import { partSpec, type Primitive } from './parts/index.ts';
-import { partBounds, pointsBounds, toWorld, turnDirection, unionRects } from './geometry.ts';
+import { partSpec, type PartText, type Primitive } from './parts/index.ts';
+import { TEXT_SIZE } from './parts/text.ts';
+import { partBounds, pointsBounds, toWorld, unionRects } from './geometry.ts';
 import { sheetConnectivity } from './connectivity.ts';
 
 export interface SvgOptions {
@@ -47,35 +48,25 @@ function primitiveSvg(part: SheetPart, p: Primitive): string {
   }
 }
 
-function partText(part: SheetPart): string {
-  const spec = partSpec(part.kind);
-  if (part.kind === 'label') {
-    const dir = turnDirection(part, { x: 1, y: 0 });
-    const tip = toWorld(part, { x: 1.4, y: 0 });
-    const anchor = dir.x < 0 ? 'end' : dir.x > 0 ? 'start' : 'middle';
-    const dy = dir.y < 0 ? -0.2 : dir.y > 0 ? 0.8 : 0.3;
-    return `<text x="${n(tip.x)}" y="${n(tip.y + dy)}" text-anchor="${anchor}" font-style="italic">${escapeXml(part.name)}</text>`;
-  }
-  const at = toWorld(part, spec.nameAt);
-  const value = partValue(part);
-  const name = `<text x="${n(at.x)}" y="${n(at.y + 0.3)}" font-weight="bold">${escapeXml(part.name)}</text>`;
-  return value
-    ? `${name}<text x="${n(at.x)}" y="${n(at.y + 1.1)}" font-size="0.6">${escapeXml(value)}</text>`
-    : name;
-}
+const TEXT_LOOK: Readonly<Record<PartText['style'], string>> = {
+  name: ' font-weight="bold"',
+  value: '',
+  net: ' font-style="italic"',
+};
 
-function partValue(part: SheetPart): string {
-  switch (part.kind) {
-    case 'nmos':
-    case 'pmos':
-      return `${part.w ?? ''}/${part.l ?? ''}`;
-    case 'resistor':
-      return part.ohms === undefined ? '' : `${part.ohms} Ω`;
-    case 'capacitor':
-      return part.farads === undefined ? '' : `${part.farads} F`;
-    default:
-      return '';
-  }
+/**
+ * A part's text as its spec lays it out for the canvas. SVG places text by its baseline, which sits
+ * about 0.35 of the font size below the middle of the line.
+ */
+function partTexts(part: SheetPart): string {
+  return partSpec(part.kind)
+    .texts(part)
+    .map((t) => {
+      const size = TEXT_SIZE[t.style];
+      const anchor = t.align === 'start' ? '' : ` text-anchor="${t.align}"`;
+      return `<text x="${n(t.x)}" y="${n(t.y + size * 0.35)}" font-size="${size}"${anchor}${TEXT_LOOK[t.style]}>${escapeXml(t.text)}</text>`;
+    })
+    .join('');
 }
 
 export function sheetToSvg(sheet: Sheet, options: Partial<SvgOptions> = {}): string {
@@ -105,7 +96,7 @@ export function sheetToSvg(sheet: Sheet, options: Partial<SvgOptions> = {}): str
         .symbol.map((p) => primitiveSvg(part, p))
         .join('')}</g>`,
   );
-  const texts = sheet.parts.map(partText);
+  const texts = sheet.parts.map(partTexts);
   return [
     '<?xml version="1.0" encoding="UTF-8"?>',
     `<svg xmlns="http://www.w3.org/2000/svg" width="${n(w * o.scale)}" height="${n(h * o.scale)}" viewBox="${n(x0)} ${n(y0)} ${n(w)} ${n(h)}">`,
@@ -115,7 +106,7 @@ export function sheetToSvg(sheet: Sheet, options: Partial<SvgOptions> = {}): str
     ...dots,
     ...symbols,
     '</g>',
-    `<g fill="${o.ink}" font-family="sans-serif" font-size="0.75">`,
+    `<g fill="${o.ink}" font-family="sans-serif">`,
     ...texts,
     '</g>',
     '</svg>',

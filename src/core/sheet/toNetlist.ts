@@ -5,7 +5,7 @@
  */
 import type { Device, Netlist, Rail } from '../model/netlist.ts';
 import type { Sheet, SheetPart } from './types.ts';
-import { partSpec, type NetRole } from './parts/index.ts';
+import { isDevicePart, partSpec, type NetRole } from './parts/index.ts';
 import { pinKey, sheetConnectivity, wireKey, type UnionFind } from './connectivity.ts';
 
 export interface SheetIssue {
@@ -108,6 +108,37 @@ function uniqueInOrder(values: readonly string[]): string[] {
   return [...new Set(values)];
 }
 
+/** What the parts contribute, in sheet order: devices, rails and pins. */
+interface Contributions {
+  readonly devices: Device[];
+  readonly rails: Rail[];
+  readonly inputs: string[];
+  readonly outputs: string[];
+}
+
+function contribute(part: SheetPart, netOf: (pin: string) => string, into: Contributions): void {
+  const role = partSpec(part.kind).role;
+  if (role.type === 'device') {
+    into.devices.push(role.toDevice(part, netOf));
+    return;
+  }
+  const net = netOf('net');
+  switch (role.role) {
+    case 'supply':
+    case 'ground':
+      into.rails.push({ net, role: role.role });
+      break;
+    case 'input':
+      into.inputs.push(net);
+      break;
+    case 'output':
+      into.outputs.push(net);
+      break;
+    case 'label':
+      break;
+  }
+}
+
 export function sheetToNetlist(sheet: Sheet, name = 'cell'): DerivedNetlist {
   const issues: SheetIssue[] = [];
   const { groups, junctions, openEnds } = sheetConnectivity(sheet);
@@ -115,35 +146,23 @@ export function sheetToNetlist(sheet: Sheet, name = 'cell'): DerivedNetlist {
   const nameOf = nameGroups(sheet, groups, issues);
   const pinNets: Record<string, string> = {};
   const partDevices: Record<string, string> = {};
-  const devices: Device[] = [];
-  const rails: Rail[] = [];
-  const inputs: string[] = [];
-  const outputs: string[] = [];
+  const found: Contributions = { devices: [], rails: [], inputs: [], outputs: [] };
   for (const part of sheet.parts) {
-    const spec = partSpec(part.kind);
     const netOf = (pin: string): string => nameOf(groups.find(pinKey(part.id, pin)));
-    for (const pin of spec.pins) pinNets[`${part.id}.${pin.name}`] = netOf(pin.name);
-    if (spec.role.type === 'device') {
-      devices.push(spec.role.toDevice(part, netOf));
-      partDevices[part.id] = part.name;
-      continue;
-    }
-    const net = netOf('net');
-    if (spec.role.role === 'supply') rails.push({ net, role: 'supply' });
-    if (spec.role.role === 'ground') rails.push({ net, role: 'ground' });
-    if (spec.role.role === 'input') inputs.push(net);
-    if (spec.role.role === 'output') outputs.push(net);
+    for (const pin of partSpec(part.kind).pins) pinNets[`${part.id}.${pin.name}`] = netOf(pin.name);
+    if (isDevicePart(part.kind)) partDevices[part.id] = part.name;
+    contribute(part, netOf, found);
   }
   reportDuplicateDevices(sheet, issues);
   const wireNets: Record<string, string> = {};
   for (const wire of sheet.wires) wireNets[wire.id] = nameOf(groups.find(wireKey(wire.id)));
-  const railNets = new Set(rails.map((r) => r.net));
+  const railNets = new Set(found.rails.map((r) => r.net));
   const netlist: Netlist = {
     name,
-    devices,
-    rails: [...new Map(rails.map((r) => [r.net, r])).values()],
-    inputs: uniqueInOrder(inputs).filter((n) => !railNets.has(n)),
-    outputs: uniqueInOrder(outputs),
+    devices: found.devices,
+    rails: [...new Map(found.rails.map((r) => [r.net, r])).values()],
+    inputs: uniqueInOrder(found.inputs).filter((n) => !railNets.has(n)),
+    outputs: uniqueInOrder(found.outputs),
   };
   return { netlist, wireNets, pinNets, partDevices, junctions, openEnds, issues };
 }
@@ -151,7 +170,7 @@ export function sheetToNetlist(sheet: Sheet, name = 'cell'): DerivedNetlist {
 function reportDuplicateDevices(sheet: Sheet, issues: SheetIssue[]): void {
   const byName = new Map<string, string[]>();
   for (const p of sheet.parts) {
-    if (partSpec(p.kind).role.type !== 'device') continue;
+    if (!isDevicePart(p.kind)) continue;
     const ids = byName.get(p.name);
     if (ids) ids.push(p.id);
     else byName.set(p.name, [p.id]);

@@ -1,25 +1,22 @@
-/** The registry of part views, keyed like the core part specs. Views only draw. */
+/**
+ * The registry of part views, keyed like the core part specs. Views only draw. Every kind names
+ * its view here; `SymbolView` draws any kind from its spec (symbol and text), so a kind needs a
+ * view of its own only to draw something its spec cannot describe.
+ */
 import type { ComponentType } from 'react';
 import type { PartKind } from '../../core/sheet/types.ts';
-import type { PartViewProps } from './PartFrame.tsx';
-import { NmosView } from './NmosView.tsx';
-import { PmosView } from './PmosView.tsx';
-import { ResistorView } from './ResistorView.tsx';
-import { CapacitorView } from './CapacitorView.tsx';
-import { RailView } from './RailView.tsx';
-import { PinView } from './PinView.tsx';
-import { NetLabelView } from './NetLabelView.tsx';
+import { SymbolView, type PartViewProps } from './SymbolView.tsx';
 
-export type { PartViewProps } from './PartFrame.tsx';
+export type { PartViewProps } from './SymbolView.tsx';
 
 export const PART_VIEWS: Readonly<Record<PartKind, ComponentType<PartViewProps>>> = {
-  nmos: NmosView,
-  pmos: PmosView,
-  resistor: ResistorView,
-  capacitor: CapacitorView,
-  vdd: RailView,
-  gnd: RailView,
-  input: PinView,
-  output: PinView,
-  label: NetLabelView,
+  nmos: SymbolView,
+  pmos: SymbolView,
+  resistor: SymbolView,
+  capacitor: SymbolView,
+  vdd: SymbolView,
+  gnd: SymbolView,
+  input: SymbolView,
+  output: SymbolView,
+  label: SymbolView,
 };

@@ -1,10 +1,12 @@
-import type { PartSpec } from './spec.ts';
+import type { NamingPart, PartSpec } from './spec.ts';
+import { nameAndValue, noValue } from './text.ts';
 
 /** Ground rail: a lead down to three shortening bars. */
-export const GND_SPEC: PartSpec = {
+export const GND_SPEC: PartSpec<NamingPart<'gnd'>> = {
   kind: 'gnd',
   title: 'GND rail',
-  namePrefix: 'GND',
+  searchWords: 'ground vss rail',
+  naming: { type: 'fixed', name: 'GND' },
   pins: [{ name: 'net', x: 0, y: 0 }],
   box: { x0: -1, y0: 0, x1: 1, y1: 1.6 },
   symbol: [
@@ -13,7 +15,9 @@ export const GND_SPEC: PartSpec = {
     { type: 'line', points: [-0.6, 1.3, 0.6, 1.3] },
     { type: 'line', points: [-0.2, 1.6, 0.2, 1.6] },
   ],
-  nameAt: { x: 1.3, y: 1 },
+  fields: [],
   defaults: {},
+  valueLabel: noValue,
+  texts: nameAndValue({ x: 1.3, y: 1 }, noValue),
   role: { type: 'net-name', role: 'ground' },
 };
