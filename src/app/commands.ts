@@ -1,7 +1,8 @@
 /**
  * Every user action, registered once and dispatched alike from the toolbar, the keyboard and the
- * help overlay. The key map is Railwise's own: number keys place parts in shelf order, Q turns,
- * F flips, J joins (wires), V views all; the usual system shortcuts for clipboard and history.
+ * help overlay. The key map is Railwise's own: / finds any part by name, number keys place the
+ * first nine in shelf order, Q turns, F flips, J joins (wires), V views all; the usual system
+ * shortcuts for clipboard and history.
  */
 import type { PartKind } from '../core/sheet/types.ts';
 import { PART_KINDS, partSpec } from '../core/sheet/parts/index.ts';
@@ -48,12 +49,27 @@ function focusNameField(): void {
   field?.select();
 }
 
-function placeCommand(kind: PartKind, index: number): Command {
+/** The search box of the parts shelf, which `/` focuses. */
+export const PART_SEARCH_ID = 'part-search';
+
+function focusPartSearch(): void {
+  if (typeof document === 'undefined') return;
+  document.getElementById(PART_SEARCH_ID)?.focus();
+}
+
+/** The number keys place the first nine kinds in shelf order; every kind is found by the search. */
+export function placeKeyOf(kind: PartKind): string | null {
+  const index = PART_KINDS.indexOf(kind);
+  return index >= 0 && index < 9 ? String(index + 1) : null;
+}
+
+function placeCommand(kind: PartKind): Command {
+  const key = placeKeyOf(kind);
   return {
     id: `place-${kind}`,
     label: `Place ${partSpec(kind).title}`,
     group: 'Parts',
-    keys: [{ key: String(index + 1) }],
+    keys: key === null ? [] : [{ key }],
     run: () => startPlacing(kind),
   };
 }
@@ -69,6 +85,13 @@ function exportCommand(kind: ExportKind, label: string): Command {
 }
 
 export const COMMANDS: readonly Command[] = [
+  {
+    id: 'find-part',
+    label: 'Find any part by name: type, then Enter to place it',
+    group: 'Parts',
+    keys: [{ key: '/' }],
+    run: focusPartSearch,
+  },
   ...PART_KINDS.map(placeCommand),
   {
     id: 'vector-previous',

@@ -5,7 +5,8 @@ import { BLANK_DOCUMENT, loadDesign, setSelection } from '../../src/state/store.
 import { STARTERS } from '../../src/core/starters/index.ts';
 import { editPart } from '../../src/editor/actions.ts';
 import { sheetToNetlist } from '../../src/core/sheet/toNetlist.ts';
-import { COMMANDS, commandForKey } from '../../src/app/commands.ts';
+import { COMMANDS, commandForKey, placeKeyOf } from '../../src/app/commands.ts';
+import { PART_KINDS } from '../../src/core/sheet/parts/index.ts';
 import { drawnInverter } from '../sheet/fixtures.ts';
 
 /** Each command test ends by undoing (back to before) and redoing (back to after). */
@@ -168,6 +169,14 @@ describe('the key map', () => {
       'fit',
       'help',
     ]);
+  });
+
+  it('finds any part with /, and has a place command for every kind, numbered for the first nine', () => {
+    expect(key('/')).toBe('find-part');
+    const place = COMMANDS.filter((c) => c.id.startsWith('place-'));
+    expect(place.map((c) => c.id)).toEqual(PART_KINDS.map((k) => `place-${k}`));
+    place.forEach((c, i) => expect(c.keys).toEqual(i < 9 ? [{ key: String(i + 1) }] : []));
+    expect(PART_KINDS.map(placeKeyOf).filter((k) => k !== null)).toHaveLength(Math.min(9, PART_KINDS.length));
   });
 
   it('tells Ctrl+Z from Ctrl+Shift+Z and V from Ctrl+V', () => {
