@@ -71,6 +71,14 @@ export class RailwisePage {
     await this.page.keyboard.press(key);
   }
 
+  /** Finds a part kind by name the way a user does: `/`, type, Enter; then a click places it. */
+  async findPart(text: string): Promise<void> {
+    await this.press('/');
+    await expect(this.page.getByRole('searchbox', { name: 'Find a part' })).toBeFocused();
+    await this.page.keyboard.type(text);
+    await this.press('Enter');
+  }
+
   /** The netlist the app derived from the drawing. */
   async netlist(): Promise<{
     devices: Record<string, unknown>[];

@@ -19,4 +19,5 @@ export const PART_VIEWS: Readonly<Record<PartKind, ComponentType<PartViewProps>>
   input: SymbolView,
   output: SymbolView,
   label: SymbolView,
+  diode: SymbolView,
 };

@@ -15,6 +15,7 @@ import { GND_SPEC } from './gnd.ts';
 import { INPUT_SPEC } from './input.ts';
 import { OUTPUT_SPEC } from './output.ts';
 import { LABEL_SPEC } from './label.ts';
+import { DIODE_SPEC } from './diode.ts';
 
 export type * from './spec.ts';
 export type { Quantity, ReadResult } from './quantities.ts';
@@ -29,6 +30,7 @@ const SPECS = [
   INPUT_SPEC,
   OUTPUT_SPEC,
   LABEL_SPEC,
+  DIODE_SPEC,
 ] as const;
 
 type PartOfSpec<S> = S extends PartSpec<infer P> ? P : never;
