@@ -1,7 +1,7 @@
 /**
  * The diode on the sheet, from its spec to the solver. A protection diode sits reverse-biased in
  * normal operation and carries no steady-state current (common practice, no source); the
- * switch-level model goes further and never lets a diode conduct (docs/semantics.md), so a diode
+ * switch-level model goes further and never lets a diode conduct (docs/semantics.md §1), so a diode
  * drawn forward-biased joins nothing either. Nets and device names are our own.
  */
 import { describe, expect, it } from 'vitest';

@@ -11,7 +11,7 @@ export interface DiodePart extends PartPlacement {
 /**
  * A protection diode: anode on top, cathode below, drawn as the trade draws a diode, a triangle
  * pointing along forward current to a bar at the cathode (hollow here, the bar a little wider than
- * the triangle). It never conducts in steady state (docs/semantics.md); it is kept so the netlist
+ * the triangle). It never conducts in steady state (docs/semantics.md §1); it is kept so the netlist
  * and its exports stay whole.
  */
 export const DIODE_SPEC: PartSpec<DiodePart> = {
