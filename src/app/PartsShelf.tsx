@@ -11,8 +11,11 @@ function hintFor(kind: PartKind): string {
   return `${partSpec(kind).title}: ${how}, then click the sheet (Shift-click to keep placing)`;
 }
 
-/** Enter places the highlighted match, arrows move the highlight, Escape gives the keys back. */
-function useSearchKeys(matches: readonly PartKind[], clear: () => void) {
+/**
+ * Enter places the highlighted match (nothing while the box is empty), arrows move the highlight,
+ * and Enter or Escape clears the box and gives the keys back to the sheet.
+ */
+function useSearchKeys(query: string, matches: readonly PartKind[], clear: () => void) {
   const [chosen, setChosen] = useState(0);
   const onKeyDown = (e: KeyboardEvent<HTMLInputElement>): void => {
     const step = e.key === 'ArrowDown' ? 1 : e.key === 'ArrowUp' ? -1 : 0;
@@ -21,7 +24,7 @@ function useSearchKeys(matches: readonly PartKind[], clear: () => void) {
       setChosen((i) => (i + step + matches.length) % matches.length);
     }
     if (e.key !== 'Enter' && e.key !== 'Escape') return;
-    const kind = matches[Math.min(chosen, matches.length - 1)];
+    const kind = query.trim() === '' ? undefined : matches[Math.min(chosen, matches.length - 1)];
     if (e.key === 'Enter' && kind !== undefined) startPlacing(kind);
     clear();
     setChosen(0);
@@ -39,7 +42,7 @@ export function PartsShelf() {
   const tool = useStore((s) => s.tool);
   const [query, setQuery] = useState('');
   const matches = query.trim() === '' ? PART_KINDS : findPartKinds(query);
-  const search = useSearchKeys(matches, () => setQuery(''));
+  const search = useSearchKeys(query, matches, () => setQuery(''));
   return (
     <section className="rw-shelf" aria-label="Parts">
       <h2>Parts</h2>
