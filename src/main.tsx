@@ -6,8 +6,10 @@ import { openFirstDesign } from './app/startup.ts';
 import { openSharedLink } from './app/shareLink.ts';
 import { startAutosave } from './app/autosave.ts';
 import { installTestApi } from './app/testApi.ts';
+import { startAnalysis } from './state/analysis.ts';
 
 openFirstDesign();
+startAnalysis();
 void openSharedLink();
 startAutosave();
 installTestApi();

@@ -1,3 +1,4 @@
+import { CAUTION } from '../core/caution.ts';
 import { setOverlay, useStore } from '../state/store.ts';
 import { Dialog } from './Dialog.tsx';
 
@@ -13,9 +14,7 @@ export function AboutBox() {
           fought-over nets, threshold drops, static current paths, power and sizing.
         </p>
         <p className="rw-caution" role="note">
-          <strong>Caution:</strong> these results are switch-level estimates, not sign-off. Confirm every cell
-          with circuit simulation, the foundry's design rules, and its ESD and latch-up guidelines before
-          layout is released.
+          <strong>Caution:</strong> {CAUTION}
         </p>
         <p>
           Default process values: {source}. Change them per design; they are recalled textbook figures, not a

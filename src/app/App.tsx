@@ -1,7 +1,8 @@
 import { useEffect, useMemo } from 'react';
+import { CAUTION } from '../core/caution.ts';
 import { SheetCanvas } from '../editor/SheetCanvas.tsx';
 import { createEditorController } from '../editor/tools/controller.ts';
-import { fitToView } from '../editor/actions.ts';
+import { fitToView } from '../state/view.ts';
 import { AnalysisPanel } from '../panels/AnalysisPanel.tsx';
 import { useStore } from '../state/store.ts';
 import { Toolbar } from './Toolbar.tsx';
@@ -58,9 +59,7 @@ export function App() {
           onPartDoubleClick={commandById('rename').run}
         />
         <MessageBar />
-        <footer className="rw-caution-line">
-          Switch-level estimates, not sign-off: confirm with circuit simulation and the foundry's rules.
-        </footer>
+        <footer className="rw-caution-line">{CAUTION}</footer>
       </main>
       <div className="rw-right-panel">
         <AnalysisPanel />

@@ -1,10 +1,10 @@
 import { Dialog } from './Dialog.tsx';
-import { closeCellChoice, useCellChoice } from './cellChoice.ts';
+import { closeCellChoice, useStore } from '../state/store.ts';
 import { loadImportedCell } from './files.ts';
 
 /** Picks one cell of an imported library; closing it leaves the open design as it was. */
 export function CellChooser() {
-  const choice = useCellChoice();
+  const choice = useStore((s) => s.cellChoice);
   if (!choice) return null;
   return (
     <Dialog title={`Cells in ${choice.fileName}`} onClose={closeCellChoice}>

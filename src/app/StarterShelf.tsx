@@ -1,6 +1,6 @@
 import { STARTERS } from '../core/starters/index.ts';
 import { loadDesign, showMessage } from '../state/store.ts';
-import { fitToView } from '../editor/actions.ts';
+import { fitToView } from '../state/view.ts';
 
 /** The starter cells: each opens as an undoable step, placed automatically. */
 export function StarterShelf() {

@@ -11,7 +11,6 @@ import {
   cutSelection,
   deleteSelection,
   duplicateSelection,
-  fitToView,
   mirrorSelection,
   nudgeSelection,
   pasteClipboard,
@@ -19,10 +18,10 @@ import {
   selectAll,
   startPlacing,
   startWiring,
-  zoomBy,
 } from '../editor/actions.ts';
 import { stepVector } from '../state/simulation.ts';
 import { redo, setOverlay, undo } from '../state/store.ts';
+import { fitToView, zoomBy } from '../state/view.ts';
 import { exportDesign, newDesign, pickAndOpen, saveDesign, type ExportKind } from './files.ts';
 import { shareCurrentDesign } from './shareLink.ts';
 

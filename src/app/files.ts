@@ -13,11 +13,10 @@ import { checkDesign } from '../core/analysis/check.ts';
 import { sheetToSvg } from '../core/sheet/svg.ts';
 import { EMPTY_SHEET } from '../core/sheet/edits.ts';
 import { flushSync } from 'react-dom';
-import { loadDesign, setViewport, showMessage, store } from '../state/store.ts';
+import { loadDesign, offerCells, setViewport, showMessage, store } from '../state/store.ts';
 import { currentStage } from '../editor/stageRef.ts';
-import { fitToView } from '../editor/actions.ts';
+import { fitToView } from '../state/view.ts';
 import { downloadText, downloadUrl, safeFileName } from './download.ts';
-import { offerCells } from './cellChoice.ts';
 
 export const DESIGN_EXTENSION = '.railwise.json';
 const SPICE_EXTENSIONS = ['.sp', '.spi', '.cir', '.net', '.cdl', '.spice'];

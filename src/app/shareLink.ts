@@ -6,7 +6,7 @@
  */
 import type { Design } from '../core/model/design.ts';
 import { parseDesignFile, serializeDesign } from '../core/format/designFile.ts';
-import { fitToView } from '../editor/actions.ts';
+import { fitToView } from '../state/view.ts';
 import { loadDesign, showMessage, store } from '../state/store.ts';
 
 export const LINK_PREFIX = '#design=';

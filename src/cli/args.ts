@@ -4,6 +4,7 @@
  */
 import { parseArgs, type ParseArgsConfig } from 'node:util';
 import { spiceValue } from '../core/netlist-io/spiceNumber.ts';
+import type { PowerSettings } from '../core/power/settings.ts';
 import { UsageError } from './usage.ts';
 
 /** What picks and shapes one cell; shared by check and export. */
@@ -18,21 +19,16 @@ export interface CellChoice {
   readonly ground: readonly string[];
 }
 
-export interface PowerChoice {
-  readonly freq: number;
-  readonly activity?: 'sequence' | 'random';
-  readonly load: number;
-}
-
 export interface CheckArgs extends CellChoice {
   readonly files: readonly string[];
   readonly json: boolean;
   readonly allNets: boolean;
   readonly undriven: boolean;
-  readonly power?: PowerChoice;
+  /** The power settings given on the command line; the rest take the core's defaults. */
+  readonly power?: Partial<PowerSettings>;
   readonly sizing: boolean;
-  /** Output load in farads for --power and --sizing (0 when not given). */
-  readonly load: number;
+  /** Output load in farads for --power and --sizing, when given (else the core's default). */
+  readonly load?: number;
   readonly jobs?: number;
   readonly help: boolean;
 }
@@ -75,9 +71,6 @@ const EXPORT_OPTIONS = {
   to: { type: 'string' },
 } as const satisfies ParseArgsConfig['options'];
 
-/** Default clock for --power: 100 MHz, a round figure (common practice, no source). */
-export const DEFAULT_FREQ = 100e6;
-
 export function parseCheckArgs(argv: readonly string[]): CheckArgs {
   const { values: v, positionals } = parse(argv, CHECK_OPTIONS);
   if (!v.help && positionals.length === 0)
@@ -93,8 +86,8 @@ export function parseCheckArgs(argv: readonly string[]): CheckArgs {
     allNets: v['all-nets'] ?? false,
     undriven: v.undriven ?? false,
     sizing: v.sizing ?? false,
-    load: loadValue(v.load),
     help: v.help ?? false,
+    ...(v.load === undefined ? {} : { load: loadValue(v.load) }),
     ...(v.power ? { power: powerChoice(v) } : {}),
     ...(v.jobs === undefined ? {} : { jobs: positiveInteger('--jobs', v.jobs) }),
   };
@@ -143,14 +136,14 @@ function cellChoice(v: CellValues): CellChoice {
   };
 }
 
-function powerChoice(v: { freq?: string; activity?: string; load?: string }): PowerChoice {
+function powerChoice(v: { freq?: string; activity?: string; load?: string }): Partial<PowerSettings> {
   const activity = v.activity;
   if (activity !== undefined && activity !== 'sequence' && activity !== 'random') {
     throw new UsageError(`--activity must be sequence or random (got "${activity}")`);
   }
   return {
-    freq: v.freq === undefined ? DEFAULT_FREQ : frequency(v.freq),
-    load: loadValue(v.load),
+    ...(v.freq === undefined ? {} : { frequency: frequency(v.freq) }),
+    ...(v.load === undefined ? {} : { load: loadValue(v.load) }),
     ...(activity === undefined ? {} : { activity }),
   };
 }
@@ -174,8 +167,8 @@ function list(text: string | undefined): string[] {
   return text === undefined ? [] : text.split(/[\s,]+/).filter((s) => s !== '');
 }
 
-function loadValue(text: string | undefined): number {
-  const load = text === undefined ? 0 : spiceValue(text);
+function loadValue(text: string): number {
+  const load = spiceValue(text);
   if (load === null || load < 0)
     throw new UsageError(`--load "${text}" is not a capacitance in farads (e.g. 10f)`);
   return load;

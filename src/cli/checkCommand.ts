@@ -2,12 +2,13 @@
  * `railwise check`: load the cells, run them (in worker threads when that pays), print the human
  * report or JSON, and return the exit status: 0 clean, 1 error findings, 2 something unusable.
  */
+import { DEFAULT_POWER_SETTINGS } from '../core/power/settings.ts';
 import type { CheckArgs } from './args.ts';
 import { makeColour } from './colour.ts';
 import { loadCells, type CellFailure } from './loadCells.ts';
 import { runCells } from './parallel.ts';
 import type { CellJson, CellResult, RunOptions } from './runCell.ts';
-import { CAUTION } from './runCell.ts';
+import { CAUTION } from '../core/caution.ts';
 import { count, formatCell, formatFailure } from './textReport.ts';
 import { EXIT_FINDINGS, EXIT_OK, EXIT_UNUSABLE } from './usage.ts';
 
@@ -22,7 +23,7 @@ export async function checkCommand(args: CheckArgs, io: Output): Promise<number>
     allNets: args.allNets,
     undriven: args.undriven,
     sizing: args.sizing,
-    load: args.load,
+    load: args.load ?? DEFAULT_POWER_SETTINGS.load,
     ...(args.sequence === undefined ? {} : { sequence: args.sequence }),
     ...(args.power === undefined ? {} : { power: args.power }),
   };

@@ -1,12 +1,11 @@
 /** `railwise export FILE --to spice|verilog|csv`: one cell to standard output. */
 import { checkSequence, checkSweep } from '../core/analysis/check.ts';
-import { parseSequenceText } from '../core/analysis/sequenceText.ts';
 import { exportTruthTableCsv } from '../core/netlist-io/csvExport.ts';
 import { exportSpice } from '../core/netlist-io/spiceExport.ts';
 import { exportVerilog } from '../core/netlist-io/verilogExport.ts';
 import type { ExportArgs } from './args.ts';
 import { loadCells, type CellJob } from './loadCells.ts';
-import { failureOf } from './runCell.ts';
+import { failureOf, sequenceSteps } from './runCell.ts';
 import { EXIT_OK, EXIT_UNUSABLE, UsageError } from './usage.ts';
 
 export interface ExportOutput {
@@ -46,7 +45,7 @@ function exported(job: CellJob, args: ExportArgs): string {
       const report =
         args.sequence === undefined
           ? checkSweep(job.netlist, options)
-          : checkSequence(job.netlist, parseSequenceText(args.sequence, job.netlist.inputs), options);
+          : checkSequence(job.netlist, sequenceSteps(job, args.sequence), options);
       return exportTruthTableCsv(report);
     }
   }

@@ -2,17 +2,19 @@
  * Checks one cell and returns plain data: the single-cell JSON object of docs/semantics.md §5, or a failure.
  * No file access and no printing, so a worker thread can run it as well as the main thread.
  */
-import { checkSequence, checkSweep, SequenceError, SweepLimitError } from '../core/analysis/check.ts';
+import { SequenceError, SweepLimitError } from '../core/analysis/check.ts';
 import { parseSequenceText } from '../core/analysis/sequenceText.ts';
 import type { CheckReport, VectorReport } from '../core/analysis/report.ts';
+import { CAUTION } from '../core/caution.ts';
 import { CompileError } from '../core/compile/compile.ts';
 import { ExpressionError } from '../core/expect/parse.ts';
 import type { InputValue, InputVector } from '../core/model/design.ts';
-import { powerReport, PowerOptionsError } from '../core/power/powerReport.ts';
+import { analyseCell, type PowerRequest } from '../core/power/cellAnalysis.ts';
+import { powerFromCounts } from '../core/power/powerReport.ts';
+import { DEFAULT_POWER_SETTINGS, PowerOptionsError, type PowerSettings } from '../core/power/settings.ts';
 import type { PowerReport } from '../core/power/types.ts';
 import { sizingReport } from '../core/sizing/sizingReport.ts';
 import type { SizingReport } from '../core/sizing/types.ts';
-import type { PowerChoice } from './args.ts';
 import type { CellFailure, CellJob } from './loadCells.ts';
 
 export interface RunOptions {
@@ -20,14 +22,12 @@ export interface RunOptions {
   readonly undriven: boolean;
   /** `--sequence` text: steps instead of the sweep. */
   readonly sequence?: string;
-  readonly power?: PowerChoice;
+  /** Power settings given on the command line; the rest are the core's defaults. */
+  readonly power?: Partial<PowerSettings>;
   readonly sizing: boolean;
   /** Output load for sizing, farads. */
   readonly load: number;
 }
-
-export const CAUTION =
-  "Switch-level estimates, not sign-off: confirm with circuit simulation and the foundry's rules.";
 
 /** A vector as printed: inputs as the numbers 0 and 1 (X and Z stay strings), per docs/semantics.md §5. */
 export interface VectorJson extends Omit<VectorReport, 'inputs'> {
@@ -48,32 +48,35 @@ export type CellResult = { readonly json: CellJson } | { readonly failure: CellF
 
 export function runCell(job: CellJob, options: RunOptions): CellResult {
   try {
-    const steps = options.sequence === undefined ? null : sequenceSteps(job, options.sequence);
-    const checkOptions = {
+    const steps = options.sequence === undefined ? undefined : sequenceSteps(job, options.sequence);
+    const power = options.power === undefined ? undefined : powerSettings(job, options.power, steps);
+    const { report, power: counts } = analyseCell(job.netlist, {
       technology: job.technology,
       expectations: job.expectations,
       allNets: options.allNets,
       undrivenInputs: options.undriven,
-    };
-    const report =
-      steps === null
-        ? checkSweep(job.netlist, checkOptions)
-        : checkSequence(job.netlist, steps, checkOptions);
-    const power = options.power === undefined ? undefined : cellPower(job, options.power, steps);
+      ...(steps === undefined ? {} : { steps }),
+      ...(power === undefined ? {} : { power: power.request }),
+    });
     const sizing = options.sizing
       ? sizingReport(job.netlist, job.technology, { load: options.load })
       : undefined;
-    return { json: cellJson(job, report, power, sizing) };
+    const powerJson =
+      counts === null || power === undefined ? undefined : powerFromCounts(counts, power.settings);
+    return { json: cellJson(job, report, powerJson, sizing) };
   } catch (e) {
     return { failure: { file: job.file, cell: job.cell, ...failureOf(e) } };
   }
 }
 
-/** `--sequence` gives steps (`A=0 B=1; A=1`) or the name of a sequence saved in a design file. */
-function sequenceSteps(job: CellJob, text: string): readonly InputVector[] {
-  if (!text.includes('=')) {
-    const saved = job.sequences.find((s) => s.name.toLowerCase() === text.trim().toLowerCase());
-    if (saved !== undefined) return saved.steps;
+/**
+ * `--sequence` gives steps (docs/semantics.md §5) or the name of a sequence saved in a design file;
+ * a saved name wins over text that happens to read as steps.
+ */
+export function sequenceSteps(job: CellJob, text: string): readonly InputVector[] {
+  const saved = job.sequences.find((s) => s.name.toLowerCase() === text.trim().toLowerCase());
+  if (saved !== undefined) return saved.steps;
+  if (!text.includes('=') && text.trim() !== '-') {
     const names = job.sequences.map((s) => `"${s.name}"`).join(', ') || 'none';
     throw new SequenceError(
       `"${text}" is neither steps (A=0 B=1; A=1) nor a saved sequence (saved: ${names})`,
@@ -82,15 +85,16 @@ function sequenceSteps(job: CellJob, text: string): readonly InputVector[] {
   return parseSequenceText(text, job.netlist.inputs);
 }
 
-function cellPower(job: CellJob, choice: PowerChoice, steps: readonly InputVector[] | null): PowerReport {
+/** Settings as given, else the core's defaults; activity follows the sequence when there is one. */
+function powerSettings(
+  job: CellJob,
+  given: Partial<PowerSettings>,
+  steps: readonly InputVector[] | undefined,
+): { settings: PowerSettings; request: PowerRequest } {
   const sequence = steps ?? job.sequences[0]?.steps;
-  const activity = choice.activity ?? (sequence === undefined ? 'random' : 'sequence');
-  return powerReport(job.netlist, job.technology, {
-    freq: choice.freq,
-    activity,
-    load: choice.load,
-    ...(sequence === undefined ? {} : { sequence }),
-  });
+  const activity = given.activity ?? (sequence === undefined ? 'random' : 'sequence');
+  const settings = { ...DEFAULT_POWER_SETTINGS, ...given, activity };
+  return { settings, request: { activity, ...(sequence === undefined ? {} : { sequence }) } };
 }
 
 /** Errors that mean "this cell cannot be checked as asked", each tied to what the user should fix. */

@@ -97,14 +97,16 @@ function extraLines(json: CellJson): string[] {
   if (json.power !== undefined) {
     const p = json.power;
     out.push(
-      `  power: static ${formatSi(p.averageStaticWatts, 'W')} average, dynamic ${formatSi(p.dynamicWatts, 'W')} at ${formatSi(p.frequency, 'Hz')} (${p.activitySource} activity), total ${formatSi(p.totalWatts, 'W')}`,
+      `  power: static ${formatSi(p.averageStaticWatts, 'W')} average, dynamic ${formatSi(p.dynamicWatts, 'W')} at ${formatSi(p.frequency, 'Hz')} and ${formatSi(p.load, 'F')} per output (${p.activitySource} activity), total ${formatSi(p.totalWatts, 'W')}`,
     );
   }
   if (json.sizing !== undefined) {
     const s = json.sizing;
     const g = Object.entries(s.logicalEffort).map(([k, v]) => `${k} ${v === null ? '–' : v.toFixed(2)}`);
     const p = s.parasiticDelay === null ? '–' : s.parasiticDelay.toFixed(2);
-    out.push(`  sizing: logical effort ${g.join(', ') || '–'}; parasitic delay ${p}`);
+    out.push(
+      `  sizing: logical effort ${g.join(', ') || '–'}; parasitic delay ${p}; ${formatSi(s.load, 'F')} per output`,
+    );
   }
   return out;
 }

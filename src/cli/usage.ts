@@ -1,4 +1,7 @@
 /** Help texts and the error for unusable arguments (exit status 2). */
+import { CAUTION } from '../core/caution.ts';
+import { DEFAULT_POWER_SETTINGS } from '../core/power/settings.ts';
+import { formatSi } from './colour.ts';
 
 export class UsageError extends Error {
   override readonly name = 'UsageError';
@@ -18,7 +21,7 @@ Usage:
 FILE is a Railwise design file (.json) or a SPICE-compatible netlist (.sp .spi .cir .net .cdl).
 Exit status: 0 no errors, 1 error findings, 2 unusable input or arguments.
 
-Results are switch-level estimates, not sign-off: confirm with circuit simulation and the foundry's rules.
+${CAUTION}
 `;
 
 export const CHECK_HELP = `railwise check FILE... [options]
@@ -31,8 +34,9 @@ Pins and expectations (one cell: a single-cell file, or a library with --cell):
   --inputs A,B          input pins, in truth-table order (default: ports that only reach gates)
   --outputs Y           output pins (default: the other ports that are not rails)
   --expect "Y = EXPR"   expected function, repeatable: ! & | ^ ( ) 0 1, S ? A : B, and Z
-  --sequence "A=0 B=1; A=1"
-                        apply these steps in order, carrying stored charge, instead of the sweep
+  --sequence STEPS      apply these steps in order, carrying stored charge, instead of the sweep:
+                        "A=0 B=1; A=1" (steps split by ; or line breaks, "-" changes nothing),
+                        or the name of a sequence saved in a design file
   --cell NAME           check only this cell of a library
 
 Circuit:
@@ -45,9 +49,9 @@ Report:
   --json                print one JSON object (a "cells" list for a library)
   --all-nets            report every net's voltage, not only the outputs'
   --power               add static and dynamic power
-    --freq F            clock frequency, e.g. 100MHz, 100meg or 1e8 (default 100MHz)
+    --freq F            clock frequency, e.g. 100MHz, 100meg or 1e8 (default ${formatSi(DEFAULT_POWER_SETTINGS.frequency, 'Hz')})
     --activity KIND     sequence or random (default: sequence with --sequence, else random)
-    --load C            load on each output, e.g. 10f (default 0)
+    --load C            load on each output, also for --sizing, e.g. 10f (default ${formatSi(DEFAULT_POWER_SETTINGS.load, 'F')})
   --sizing              add logical effort, delay estimates and proposed widths
   --jobs N              worker threads for large libraries (default: one per core when it pays)
 

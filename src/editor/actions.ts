@@ -7,17 +7,7 @@ import { deleteItems, SheetEditError, updatePart, type PartPatch } from '../core
 import { mirrorItems, moveItems, rotateItems } from '../core/sheet/transform.ts';
 import { copyItems, pasteClip } from '../core/sheet/clipboard.ts';
 import { isEmptyItems, type ItemIds } from '../core/sheet/selection.ts';
-import { partBounds, pointsBounds, unionRects, type Rect } from '../core/sheet/geometry.ts';
-import { fitRect, zoomAt } from '../state/viewport.ts';
-import {
-  commitDoc,
-  setClipboard,
-  setSelection,
-  setTool,
-  setViewport,
-  showMessage,
-  store,
-} from '../state/store.ts';
+import { commitDoc, setClipboard, setSelection, setTool, showMessage, store } from '../state/store.ts';
 
 const selected = (): ItemIds => store.getState().selection.selected;
 
@@ -103,33 +93,4 @@ export function editPart(partId: string, patch: PartPatch): boolean {
     }
     throw e;
   }
-}
-
-export function sheetBounds(ids?: ItemIds): Rect | null {
-  const sheet = currentSheet();
-  const parts = ids ? sheet.parts.filter((p) => ids.parts.includes(p.id)) : sheet.parts;
-  const wires = ids ? sheet.wires.filter((w) => ids.wires.includes(w.id)) : sheet.wires;
-  return unionRects([...parts.map(partBounds), ...wires.flatMap((w) => pointsBounds(w.points) ?? [])]);
-}
-
-export function fitToView(): void {
-  const { screen } = store.getState();
-  setViewport(fitRect(sheetBounds(), screen.width, screen.height));
-}
-
-/** Centres the items (zooming out only if they do not fit), for jumps from the panels. */
-export function revealItems(ids: ItemIds): void {
-  const box = sheetBounds(ids);
-  if (!box) return;
-  const { screen, viewport } = store.getState();
-  const fitted = fitRect(box, screen.width, screen.height, 120);
-  const scale = Math.min(fitted.scale, viewport.scale);
-  const cx = (box.x0 + box.x1) / 2;
-  const cy = (box.y0 + box.y1) / 2;
-  setViewport({ scale, x: screen.width / 2 - cx * scale, y: screen.height / 2 - cy * scale });
-}
-
-export function zoomBy(factor: number): void {
-  const { screen, viewport } = store.getState();
-  setViewport(zoomAt(viewport, { x: screen.width / 2, y: screen.height / 2 }, factor));
 }

@@ -1,5 +1,3 @@
-import { useEffect } from 'react';
-import { followDocument } from '../state/simulation.ts';
 import { ExpectationSection, RuleSection } from './CellSections.tsx';
 import { SequenceSection } from './SequenceSection.tsx';
 import { TableSection } from './TableSection.tsx';
@@ -9,10 +7,10 @@ import './panels.css';
 
 /**
  * The analysis workspace beside the sheet: the selected vector, every vector, expected functions,
- * structure checks, sequences, power and sizing. It follows the document store and re-solves live.
+ * structure checks, sequences, power and sizing. It only renders the simulation slice, which the
+ * analysis wiring (src/state/analysis.ts, started at start-up) keeps up to date.
  */
 export function AnalysisPanel() {
-  useEffect(() => followDocument(), []);
   return (
     <aside className="rw-analysis" aria-label="Analysis" data-testid="analysis-panel">
       <VectorSection />

@@ -1,6 +1,6 @@
 import { useCallback, useMemo } from 'react';
 import { expressionProblem } from '../core/view/expectation.ts';
-import { setDesignFields } from '../state/store.ts';
+import { setDesignFields, useStore } from '../state/store.ts';
 import { useSimulation } from '../state/simulation.ts';
 import { ExpectationEditor } from './ExpectationEditor.tsx';
 import { FindingList } from './FindingList.tsx';
@@ -9,10 +9,9 @@ import { Section } from './Section.tsx';
 
 /** Expected functions per output, saved into the design as one undoable step each. */
 export function ExpectationSection() {
-  const design = useSimulation((s) => s.design);
-  const inputs = design?.netlist.inputs;
-  const validate = useCallback((text: string) => expressionProblem(text, inputs ?? []), [inputs]);
-  if (design === null) return null;
+  const design = useStore((s) => s.design);
+  const inputs = design.netlist.inputs;
+  const validate = useCallback((text: string) => expressionProblem(text, inputs), [inputs]);
   const commit = (output: string, text: string): void => {
     const next: Record<string, string> = { ...design.expectations };
     if (text === '') delete next[output];

@@ -1,8 +1,16 @@
 import { useState } from 'react';
 import { engineering } from '../core/view/format.ts';
-import { cancelJob, setPowerSettings, startPower, useSimulation } from '../state/simulation.ts';
+import type { PowerSettings } from '../core/power/settings.ts';
+import { useStore } from '../state/store.ts';
+import {
+  cancelJob,
+  computePowerAndSizing,
+  setPowerSettings,
+  useSimulation,
+  type JobState,
+  type SimulationState,
+} from '../state/simulation.ts';
 import { JobBar } from './JobBar.tsx';
-import type { PowerSettings } from '../worker/protocol.ts';
 import { PowerSizingPanel } from './power/PowerSizingPanel.tsx';
 import { Section } from './Section.tsx';
 
@@ -54,8 +62,8 @@ function Settings({ settings, hasSequence }: { settings: PowerSettings; hasSeque
         label="Clock"
         unit="MHz"
         scale={1e6}
-        value={settings.freq}
-        onCommit={(freq) => update({ freq })}
+        value={settings.frequency}
+        onCommit={(frequency) => update({ frequency })}
       />
       <NumberSetting
         label="Load"
@@ -80,34 +88,53 @@ function Settings({ settings, hasSequence }: { settings: PowerSettings; hasSeque
   );
 }
 
+/** The job the power figures wait for: the pass their activity comes from, or the sizing. */
+function busyJob(
+  source: SimulationState['sweep'],
+  sourceLane: 'sweep' | 'sequence',
+  sizing: SimulationState['sizing'],
+): { lane: 'sweep' | 'sequence' | 'sizing'; job: JobState<unknown> } | null {
+  if (source.status === 'running') return { lane: sourceLane, job: source };
+  return sizing.status === 'running' ? { lane: 'sizing', job: sizing } : null;
+}
+
 /** Power and sizing: the settings, then the power engineer's figures for the current cell. */
 export function PowerSection() {
-  const job = useSimulation((s) => s.power);
   const settings = useSimulation((s) => s.powerSettings);
-  const hasSequence = useSimulation((s) => (s.design?.sequences[s.sequenceIndex]?.steps.length ?? 0) > 0);
-  const result = job.result;
-  const error = job.error ?? (result !== null && result.errors.length > 0 ? result.errors.join('; ') : null);
+  const power = useSimulation((s) => s.power);
+  const sizing = useSimulation((s) => s.sizing);
+  const sourceLane = settings.activity === 'random' ? 'sweep' : 'sequence';
+  const source = useSimulation((s) => s[sourceLane]);
+  const busy = busyJob(source, sourceLane, sizing);
+  const sequenceIndex = useSimulation((s) => s.sequenceIndex);
+  const hasSequence = useStore((s) => (s.design.sequences[sequenceIndex]?.steps.length ?? 0) > 0);
+  const powerError = useSimulation((s) => s.powerError);
+  const error = powerError ?? sizing.error ?? sizing.result?.error ?? null;
+  const idle = power === null && busy === null;
   return (
     <Section
       title="Power and sizing"
       testId="power-section"
       open={false}
-      badge={result?.power ? engineering(result.power.totalWatts, 'W') : undefined}
+      badge={power ? engineering(power.totalWatts, 'W') : undefined}
     >
       <Settings settings={settings} hasSequence={hasSequence} />
-      {(job.status === 'idle' || job.status === 'cancelled') && (
-        <button type="button" onClick={() => void startPower()}>
+      {idle && (
+        <button type="button" onClick={() => void computePowerAndSizing()}>
           Compute power and sizing
         </button>
       )}
-      {job.status === 'running' &&
-        (job.long ? (
-          <JobBar label="Computing power" progress={job.progress} onCancel={() => cancelJob('power')} />
+      {busy !== null &&
+        (busy.job.long ? (
+          <JobBar
+            label="Computing power"
+            progress={busy.job.progress}
+            onCancel={() => cancelJob(busy.lane)}
+          />
         ) : (
           <p className="rw-muted">Computing…</p>
         ))}
-      {job.status === 'cancelled' && <p className="rw-muted">Cancelled.</p>}
-      <PowerSizingPanel power={result?.power ?? null} sizing={result?.sizing ?? null} error={error} />
+      <PowerSizingPanel power={power} sizing={sizing.result?.sizing ?? null} error={error} />
     </Section>
   );
 }

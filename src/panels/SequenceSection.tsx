@@ -1,7 +1,7 @@
 import { useMemo } from 'react';
 import type { InputVector } from '../core/model/design.ts';
 import { levelStrips } from '../core/view/levelStrip.ts';
-import { setDesignFields } from '../state/store.ts';
+import { setDesignFields, useStore } from '../state/store.ts';
 import {
   cancelJob,
   pickStep,
@@ -36,12 +36,12 @@ function NetChooser({ nets, chosen }: { nets: readonly string[]; chosen: readonl
   );
 }
 
-function SequenceResult({ steps }: { steps: readonly InputVector[] }) {
+function SequenceResult() {
   const job = useSimulation((s) => s.sequence);
-  const design = useSimulation((s) => s.design);
+  const netlist = useStore((s) => s.design.netlist);
   const chosen = useSimulation((s) => s.stripNets);
   const selectedStep = useSimulation((s) => s.selectedStep);
-  const nets = design === null ? [] : [...design.netlist.inputs, ...design.netlist.outputs];
+  const nets = [...netlist.inputs, ...netlist.outputs];
   const shownNets = chosen.length > 0 ? chosen : nets;
   const strips = useMemo(() => levelStrips(job.result?.stepLevels ?? [], shownNets), [job.result, shownNets]);
   if (job.status === 'running' && job.long)
@@ -61,7 +61,7 @@ function SequenceResult({ steps }: { steps: readonly InputVector[] }) {
         strips={strips}
         steps={job.result.stepLevels?.length ?? 0}
         selectedStep={selectedStep}
-        onPickStep={(i) => pickStep(i, steps)}
+        onPickStep={pickStep}
       />
       <NetChooser nets={allNets} chosen={shownNets} />
       <h4>Findings over the steps</h4>
@@ -77,10 +77,9 @@ function SequenceResult({ steps }: { steps: readonly InputVector[] }) {
 
 /** Sequences: pick one, edit its steps, run it with stored charge carried, read the strips. */
 export function SequenceSection() {
-  const design = useSimulation((s) => s.design);
+  const design = useStore((s) => s.design);
   const index = useSimulation((s) => s.sequenceIndex);
   const selectedStep = useSimulation((s) => s.selectedStep);
-  if (design === null) return null;
   const sequences = design.sequences;
   const current = sequences[index] ?? null;
   const steps = current?.steps ?? [];
@@ -111,7 +110,7 @@ export function SequenceSection() {
           type="button"
           data-testid="sequence-run"
           disabled={steps.length === 0}
-          onClick={() => void runSequence(steps)}
+          onClick={() => void runSequence()}
         >
           Run steps
         </button>
@@ -121,9 +120,9 @@ export function SequenceSection() {
         steps={steps}
         selectedStep={selectedStep}
         onChange={save}
-        onPickStep={(i) => pickStep(i, steps)}
+        onPickStep={pickStep}
       />
-      <SequenceResult steps={steps} />
+      <SequenceResult />
     </Section>
   );
 }

@@ -1,16 +1,13 @@
 import { useState } from 'react';
 import type { InputVector } from '../core/model/design.ts';
 import {
-  StepTextError,
-  formatSteps,
+  SEQUENCE_FORMAT_HINT,
+  SequenceTextError,
+  formatSequenceText,
   heldSteps,
-  insertStep,
-  moveStep,
-  nextCellValue,
-  parseSteps,
-  removeStep,
-  setStepCell,
-} from '../core/view/sequenceEdit.ts';
+  parseSequenceText,
+} from '../core/analysis/sequenceText.ts';
+import { insertStep, moveStep, nextCellValue, removeStep, setStepCell } from '../core/view/sequenceEdit.ts';
 
 interface StepEditorProps {
   readonly inputs: readonly string[];
@@ -85,23 +82,27 @@ function StepRow({ index, step, held, props }: StepRowProps) {
 function StepText({ inputs, steps, onChange }: Pick<StepEditorProps, 'inputs' | 'steps' | 'onChange'>) {
   const [text, setText] = useState<string | null>(null);
   const [error, setError] = useState<string | null>(null);
-  const shown = text ?? formatSteps(steps, inputs);
+  const shown = text ?? formatSequenceText(steps, inputs);
   const apply = (): void => {
     try {
-      onChange(parseSteps(shown, inputs));
+      onChange(parseSequenceText(shown, inputs));
       setText(null);
       setError(null);
     } catch (e) {
-      if (!(e instanceof StepTextError)) throw e;
-      setError(`column ${e.position + 1}: ${e.message}`);
+      if (!(e instanceof SequenceTextError)) throw e;
+      setError(e.message);
     }
   };
   return (
     <div className="rw-step-text">
+      <label htmlFor="rw-steps-text" className="rw-muted" data-testid="steps-format">
+        {SEQUENCE_FORMAT_HINT}
+      </label>
       <textarea
+        id="rw-steps-text"
         data-testid="steps-text"
         spellCheck={false}
-        rows={2}
+        rows={Math.min(8, Math.max(2, steps.length + 1))}
         value={shown}
         aria-invalid={error !== null}
         onChange={(e) => setText(e.target.value)}
@@ -120,7 +121,7 @@ function StepText({ inputs, steps, onChange }: Pick<StepEditorProps, 'inputs' | 
 
 /**
  * A list of steps as a grid of input values. A step sets only what it changes; faded cells show the
- * value held from the step before. Steps can also be typed as `A=0 B=1; A=1`.
+ * value held from the step before. Steps can also be typed as text (see SEQUENCE_FORMAT_HINT).
  */
 export function StepEditor(props: StepEditorProps) {
   const { inputs, steps, onChange } = props;
@@ -152,7 +153,7 @@ export function StepEditor(props: StepEditorProps) {
       >
         + Add step
       </button>
-      <StepText key={formatSteps(steps, inputs)} inputs={inputs} steps={steps} onChange={onChange} />
+      <StepText key={formatSequenceText(steps, inputs)} inputs={inputs} steps={steps} onChange={onChange} />
     </div>
   );
 }

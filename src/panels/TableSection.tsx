@@ -2,8 +2,9 @@ import { useMemo } from 'react';
 import { MAX_INPUTS_WITH_UNDRIVEN, PROGRESS_THRESHOLD_VECTORS, jobSize } from '../worker/protocol.ts';
 import { DEFAULT_MAX_INPUTS } from '../core/analysis/check.ts';
 import { arrangeRows, kindCounts, vectorRows } from '../core/view/vectorTable.ts';
+import { AUTO_SWEEP_VECTORS } from '../state/analysis.ts';
+import { useStore } from '../state/store.ts';
 import {
-  AUTO_SWEEP_VECTORS,
   cancelJob,
   selectRow,
   setTableView,
@@ -17,10 +18,9 @@ import { VectorTable } from './VectorTable.tsx';
 
 function SweepStatus() {
   const sweep = useSimulation((s) => s.sweep);
-  const design = useSimulation((s) => s.design);
+  const design = useStore((s) => s.design);
   const undrivenInputs = useSimulation((s) => s.undrivenInputs);
-  if (design === null) return null;
-  const size = jobSize({ kind: 'sweep', revision: 0, design, undrivenInputs });
+  const size = jobSize({ kind: 'sweep', revision: 0, cell: design, undrivenInputs });
   const limit = undrivenInputs ? MAX_INPUTS_WITH_UNDRIVEN : DEFAULT_MAX_INPUTS;
   if (design.netlist.inputs.length > limit) {
     return (

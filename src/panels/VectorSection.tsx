@@ -4,6 +4,7 @@ import { formatCurrent, formatPower } from '../core/view/format.ts';
 import { chainText, splitChain } from '../core/view/highlight.ts';
 import { rowOfVector } from '../core/view/vectorTable.ts';
 import { stepVector, toggleInput, useSimulation, type SimulationState } from '../state/simulation.ts';
+import { useStore } from '../state/store.ts';
 import { FindingList } from './FindingList.tsx';
 import { InputStrip } from './InputStrip.tsx';
 import { NetList } from './NetList.tsx';
@@ -95,14 +96,13 @@ function EveryNet() {
 
 /** The selected vector: its inputs, the sheet's levels, current paths and findings. */
 export function VectorSection() {
-  const design = useSimulation((s) => s.design);
+  const inputs = useStore((s) => s.design.netlist.inputs);
   const vector = useSimulation((s) => s.vector);
   const live = useSimulation((s) => s.live);
   const liveError = useSimulation((s) => s.liveError);
-  if (design === null) return null;
   return (
     <Section title="Vector" testId="vector-section">
-      <InputStrip inputs={design.netlist.inputs} vector={vector} onToggle={toggleInput} onStep={stepVector} />
+      <InputStrip inputs={inputs} vector={vector} onToggle={toggleInput} onStep={stepVector} />
       {liveError !== null && (
         <p className="rw-error-text" role="alert">
           Cannot solve this sheet: {liveError}

@@ -4,9 +4,8 @@
  */
 import type { Finding } from '../core/analysis/report.ts';
 import { findingTargets, toSheetTargets, type HighlightTargets } from '../core/view/highlight.ts';
-// eslint-disable-next-line railwise/layers -- known exception until the store owns revealing items
-import { revealItems } from '../editor/actions.ts';
 import { selectDevices, setHighlight, store } from '../state/store.ts';
+import { revealItems } from '../state/view.ts';
 
 export function pickTargets(targets: HighlightTargets): void {
   const { geometry } = store.getState();

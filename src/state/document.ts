@@ -7,6 +7,7 @@ import type { Technology } from '../core/model/technology.ts';
 import type { Sheet } from '../core/sheet/types.ts';
 import { sheetToNetlist, type SheetIssue } from '../core/sheet/toNetlist.ts';
 import { autoPlace } from '../core/sheet/autoPlace.ts';
+import { samePlainData } from '../core/model/plainData.ts';
 
 export interface SheetDocument {
   readonly name: string;
@@ -38,14 +39,19 @@ export interface DerivedDesign {
   readonly issues: readonly SheetIssue[];
 }
 
-export function deriveDesign(doc: SheetDocument): DerivedDesign {
+/**
+ * The design of a document: the netlist derived from the sheet. With the design derived before, an
+ * unchanged netlist or technology keeps its old object, so "did the circuit change?" is one identity
+ * test for everything downstream (moving a part re-derives an equal netlist).
+ */
+export function deriveDesign(doc: SheetDocument, before: Design | null = null): DerivedDesign {
   const d = sheetToNetlist(doc.sheet, doc.name);
   const deviceParts: Record<string, string> = {};
   for (const [partId, device] of Object.entries(d.partDevices)) deviceParts[device] ??= partId;
   const design: Design = {
     name: doc.name,
-    technology: doc.technology,
-    netlist: d.netlist,
+    technology: kept(before?.technology, doc.technology),
+    netlist: kept(before?.netlist, d.netlist),
     expectations: doc.expectations,
     sequences: doc.sequences,
     sheet: doc.sheet,
@@ -63,6 +69,11 @@ export function deriveDesign(doc: SheetDocument): DerivedDesign {
     },
     issues: d.issues,
   };
+}
+
+/** The earlier object when it equals the new one, so unchanged parts keep their identity. */
+function kept<T>(earlier: T | undefined, next: T): T {
+  return earlier !== undefined && samePlainData(earlier, next) ? earlier : next;
 }
 
 /** A design as the editor holds it; a design without a drawing is placed automatically. */

@@ -1,45 +1,11 @@
 /**
- * The application store: one vanilla zustand store in slices (document, history, selection,
- * viewport, interaction), a thin React hook, and actions as module functions.
- *
- * ─── API for the analysis workspace (src/panels, src/editor/overlay, src/state/simulation) ───
- *
- *   import { useStore, store, selectDevices, selectNets, setHighlight, clearHighlight } from '../state/store.ts';
- *
- *   useStore(selector)            React hook with a selector, e.g. useStore((s) => s.design).
- *   store.getState() / store.subscribe(listener)   the vanilla store (workers, tests, non-React code).
- *
- *   State fields (read-only outside this module):
- *     design: Design              the current design; design.netlist is derived from the sheet and
- *                                 recomputed on every document change (never edit it directly).
- *     revision: number            +1 on every committed document change (edit, undo, redo, open,
- *                                 end or cancel of a drag). Tag simulation jobs with it and drop
- *                                 stale results. During a drag only doc.sheet moves; design and
- *                                 geometry are re-derived when the drag ends.
- *     geometry: SheetGeometry     for drawing levels on the sheet:
- *                                   wireNets   wire id → net name
- *                                   pinNets    `${partId}.${pin}` → net name (pins: gate, drain,
- *                                              source, a, b, net)
- *                                   partDevices  part id → device name;  deviceParts  the inverse
- *                                   junctions  [{x, y}] grid points of junction dots
- *                                   openEnds   [{x, y}] wire ends that touch nothing
- *     doc.sheet: Sheet            parts and wires in grid units (see src/core/sheet/types.ts);
- *                                 one grid unit is GRID_PX pixels at scale 1 (src/editor/constants.ts).
- *     issues: SheetIssue[]        drawing problems found while deriving the netlist (name conflicts…).
- *     selection.selected          { parts: partId[], wires: wireId[] } chosen on the sheet.
- *     selection.highlight         { nets: string[], devices: string[] } asked for by the panels.
- *     viewport                    { x, y, scale }: screen position of grid (0,0), pixels per unit.
- *
- *   Actions (plain functions; call from anywhere):
- *     selectDevices(names)        selects the parts of those devices on the sheet (jump to devices).
- *     selectNets(names)           selects every wire and part pin on those nets.
- *     setHighlight({nets, devices})  / clearHighlight()   marks nets and devices without selecting.
- *     setDesignFields(patch)      changes expectations, sequences, technology, name or notes as one
- *                                 undoable step (e.g. editing an expected function in a panel).
- *   In src/editor/actions.ts: revealItems({parts, wires}) centres items on screen (jump to them).
+ * The application store: one vanilla zustand store of slices (document, history, selection,
+ * viewport, interaction, simulation, cell choice, messages), a thin React hook, and actions as
+ * module functions. Its API for panels, the overlay and tests is documented in ./README.md.
  *
  * Everything that changes the document goes through `commitDoc` (one undo step) or a gesture
- * (`beginGesture` → `previewDoc`… → `endGesture` | `cancelGesture`).
+ * (`beginGesture` → `previewDoc`… → `endGesture` | `cancelGesture`); `applyDoc` is the one place
+ * the design is derived from the document, and the one place `revision` and `netlistRevision` move.
  */
 import { createStore } from 'zustand/vanilla';
 import { useStore as useZustand } from 'zustand';
@@ -54,7 +20,9 @@ import { EMPTY_HISTORY, recordStep, redoStep, undoStep, type HistoryState } from
 import { EMPTY_SELECTION, pruneSelection, type SelectionState } from './selection.ts';
 import { DEFAULT_VIEWPORT, type Viewport } from './viewport.ts';
 import { DEFAULT_TECHNOLOGY } from '../core/model/technology.ts';
+import { samePlainData } from '../core/model/plainData.ts';
 import { EMPTY_SHEET } from '../core/sheet/edits.ts';
+import { INITIAL_SIMULATION, type SimulationState } from './simulationSlice.ts';
 
 /** The tool in hand: select (and drag, box-select, wire from a pin), place a part, or draw wires. */
 export type Tool =
@@ -74,12 +42,23 @@ export interface Message {
   readonly text: string;
 }
 
+/** The cells of an imported library, waiting for the designer to pick one (nothing loaded yet). */
+export interface CellChoice {
+  readonly fileName: string;
+  readonly designs: readonly Design[];
+  readonly failed: readonly string[];
+}
+
 export interface RailwiseState {
   readonly doc: SheetDocument;
+  /** Derived from `doc` by applyDoc; never edited directly. */
   readonly design: Design;
   readonly geometry: SheetGeometry;
   readonly issues: readonly SheetIssue[];
+  /** +1 on every committed document change (edit, undo, redo, open, end or cancel of a drag). */
   readonly revision: number;
+  /** The revision at which the derived netlist or the technology last changed. */
+  readonly netlistRevision: number;
   readonly history: HistoryState;
   readonly selection: SelectionState;
   readonly viewport: Viewport;
@@ -90,6 +69,8 @@ export interface RailwiseState {
   readonly overlay: 'help' | 'about' | null;
   /** Size of the sheet area in pixels, kept by the canvas for fit-to-view. */
   readonly screen: { readonly width: number; readonly height: number };
+  readonly simulation: SimulationState;
+  readonly cellChoice: CellChoice | null;
 }
 
 export const BLANK_DOCUMENT: SheetDocument = {
@@ -106,6 +87,7 @@ function initialState(doc: SheetDocument): RailwiseState {
     doc,
     ...derived,
     revision: 0,
+    netlistRevision: 0,
     history: EMPTY_HISTORY,
     selection: EMPTY_SELECTION,
     viewport: DEFAULT_VIEWPORT,
@@ -115,6 +97,8 @@ function initialState(doc: SheetDocument): RailwiseState {
     message: null,
     overlay: null,
     screen: { width: 800, height: 600 },
+    simulation: INITIAL_SIMULATION,
+    cellChoice: null,
   };
 }
 
@@ -124,19 +108,27 @@ export function useStore<T>(selector: (s: RailwiseState) => T): T {
   return useZustand(store, selector);
 }
 
-/** Test helper and "new sheet" without history: starts over from a document. */
+/** Test helper and start-up: starts over from a document, every slice at its initial state. */
 export function resetStore(doc: SheetDocument = BLANK_DOCUMENT): void {
   store.setState(initialState(doc), true);
 }
 
-/** Swaps in a new document: derives the design, bumps the revision, prunes the selection. */
+/**
+ * Swaps in a new document: derives the design (keeping the netlist object when it did not change),
+ * bumps the revision, and the netlist revision when the netlist or technology changed.
+ */
 function applyDoc(doc: SheetDocument, history: HistoryState): void {
   const s = store.getState();
+  const derived = deriveDesign(doc, s.design);
+  const revision = s.revision + 1;
+  const circuitChanged =
+    derived.design.netlist !== s.design.netlist || derived.design.technology !== s.design.technology;
   store.setState({
     doc,
-    ...deriveDesign(doc),
+    ...derived,
     history,
-    revision: s.revision + 1,
+    revision,
+    netlistRevision: circuitChanged ? revision : s.netlistRevision,
     selection: { ...s.selection, selected: pruneSelection(s.selection.selected, doc.sheet) },
   });
 }
@@ -170,7 +162,7 @@ export function endGesture(): void {
   const s = store.getState();
   const start = s.history.gestureStart;
   if (start === null) return;
-  if (start === s.doc || JSON.stringify(start) === JSON.stringify(s.doc)) {
+  if (samePlainData(start, s.doc)) {
     applyDoc(start, { ...s.history, gestureStart: null });
     return;
   }
@@ -277,6 +269,15 @@ export function setOverlay(overlay: RailwiseState['overlay']): void {
 
 export function setClipboard(clipboard: Clip | null): void {
   store.setState({ clipboard });
+}
+
+/** Offers the cells of a library file; nothing is loaded until one is chosen. */
+export function offerCells(fileName: string, designs: readonly Design[], failed: readonly string[]): void {
+  store.setState({ cellChoice: { fileName, designs, failed } });
+}
+
+export function closeCellChoice(): void {
+  store.setState({ cellChoice: null });
 }
 
 export function setScreen(width: number, height: number): void {

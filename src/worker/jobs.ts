@@ -1,23 +1,23 @@
 /**
- * The work itself, as plain functions over core calls: the worker exposes them, and tests and the
- * command line can call them directly. Nothing here knows about workers or the page.
+ * The work itself, as plain functions over the core's one-pass call (analyseCell, the same call the
+ * command line makes): the worker exposes them, tests call them directly. Nothing here knows about
+ * workers or the page.
  */
-import { checkSequence, checkSweep, DEFAULT_MAX_INPUTS } from '../core/analysis/check.ts';
-import type { Design } from '../core/model/design.ts';
-import { heldSteps } from '../core/view/sequenceEdit.ts';
-import { expressionProblem } from '../core/view/expectation.ts';
-import { sequenceLevels } from '../core/view/sequenceLevels.ts';
-import { powerReport } from '../core/power/powerReport.ts';
+import { DEFAULT_MAX_INPUTS } from '../core/analysis/check.ts';
+import { analyseCell } from '../core/power/cellAnalysis.ts';
 import { sizingReport } from '../core/sizing/sizingReport.ts';
+import { expressionProblem } from '../core/view/expectation.ts';
+import { StepLevelRecorder } from '../core/view/sequenceLevels.ts';
 import { MAX_INPUTS_WITH_UNDRIVEN } from './protocol.ts';
 import type {
   AnalysisJob,
+  CellInput,
   CheckResult,
   JobProgress,
   JobResult,
-  PowerJob,
-  PowerSizingResult,
   SequenceJob,
+  SizingJob,
+  SizingResult,
   SweepJob,
 } from './protocol.ts';
 
@@ -28,14 +28,14 @@ const PROGRESS_INTERVAL_MS = 50;
  * Expected functions the sweep can use: those of existing outputs that parse. The rest become notes,
  * so renaming a pin never takes the whole table away.
  */
-export function usableExpectations(design: Design): {
+export function usableExpectations(cell: CellInput): {
   expectations: Record<string, string>;
   notes: string[];
 } {
-  const { inputs, outputs } = design.netlist;
+  const { inputs, outputs } = cell.netlist;
   const expectations: Record<string, string> = {};
   const notes: string[] = [];
-  for (const [output, text] of Object.entries(design.expectations)) {
+  for (const [output, text] of Object.entries(cell.expectations)) {
     const problem = outputs.includes(output)
       ? expressionProblem(text, inputs)
       : { message: 'not an output', position: 0 };
@@ -55,56 +55,42 @@ function throttled(onProgress: (p: JobProgress) => void): (done: number, total: 
   };
 }
 
-function sweep(job: SweepJob, onProgress: (p: JobProgress) => void): Pick<CheckResult, 'report'> {
-  const { expectations, notes } = usableExpectations(job.design);
+type CheckPart = Pick<CheckResult, 'report' | 'power' | 'stepLevels'>;
+
+function sweep(job: SweepJob, onProgress: (p: JobProgress) => void): CheckPart {
+  const { expectations, notes } = usableExpectations(job.cell);
   const undriven = job.undrivenInputs === true;
-  const report = checkSweep(job.design.netlist, {
-    technology: job.design.technology,
+  const { report, power } = analyseCell(job.cell.netlist, {
+    technology: job.cell.technology,
     expectations,
     undrivenInputs: undriven,
     maxInputs: undriven ? MAX_INPUTS_WITH_UNDRIVEN : DEFAULT_MAX_INPUTS,
     onProgress: throttled(onProgress),
+    power: { activity: 'random' },
   });
-  return { report: { ...report, notes: [...notes, ...report.notes] } };
+  return { report: { ...report, notes: [...notes, ...report.notes] }, power };
 }
 
-function sequence(
-  job: SequenceJob,
-  onProgress: (p: JobProgress) => void,
-): Pick<CheckResult, 'report' | 'stepLevels'> {
-  const { netlist, technology } = job.design;
-  const { expectations, notes } = usableExpectations(job.design);
-  const steps = heldSteps(netlist.inputs, job.steps);
-  const report = checkSequence(netlist, steps, {
-    technology,
+function sequence(job: SequenceJob, onProgress: (p: JobProgress) => void): CheckPart {
+  const { expectations, notes } = usableExpectations(job.cell);
+  const levels = new StepLevelRecorder();
+  const { report, power } = analyseCell(job.cell.netlist, {
+    technology: job.cell.technology,
     expectations,
+    steps: job.steps,
+    observers: [levels],
     onProgress: throttled(onProgress),
+    ...(job.steps.length > 0 ? { power: { activity: 'sequence' } } : {}),
   });
-  return {
-    report: { ...report, notes: [...notes, ...report.notes] },
-    stepLevels: sequenceLevels(netlist, technology, steps),
-  };
+  return { report: { ...report, notes: [...notes, ...report.notes] }, stepLevels: levels.steps, power };
 }
 
-function attempt<T>(errors: string[], what: string, compute: () => T): T | null {
+function sizing(job: SizingJob): Pick<SizingResult, 'sizing' | 'error'> {
   try {
-    return compute();
+    return { sizing: sizingReport(job.cell.netlist, job.cell.technology, { load: job.load }), error: null };
   } catch (error) {
-    errors.push(`${what}: ${error instanceof Error ? error.message : String(error)}`);
-    return null;
+    return { sizing: null, error: `sizing: ${error instanceof Error ? error.message : String(error)}` };
   }
-}
-
-function powerSizing(job: PowerJob): Pick<PowerSizingResult, 'power' | 'sizing' | 'errors'> {
-  const { netlist, technology } = job.design;
-  const { freq, load, activity } = job.settings;
-  const errors: string[] = [];
-  const sequenceSteps = activity === 'sequence' ? { sequence: heldSteps(netlist.inputs, job.steps) } : {};
-  const power = attempt(errors, 'power', () =>
-    powerReport(netlist, technology, { freq, load, activity, ...sequenceSteps }),
-  );
-  const sizing = attempt(errors, 'sizing', () => sizingReport(netlist, technology, { load }));
-  return { power, sizing, errors };
 }
 
 export function runJob(job: AnalysisJob, onProgress: (p: JobProgress) => void = () => {}): JobResult {
@@ -115,7 +101,7 @@ export function runJob(job: AnalysisJob, onProgress: (p: JobProgress) => void = 
       return { kind: 'sweep', revision: job.revision, ...sweep(job, onProgress), elapsedMs: elapsed() };
     case 'sequence':
       return { kind: 'sequence', revision: job.revision, ...sequence(job, onProgress), elapsedMs: elapsed() };
-    case 'power':
-      return { kind: 'power', revision: job.revision, ...powerSizing(job), elapsedMs: elapsed() };
+    case 'sizing':
+      return { kind: 'sizing', revision: job.revision, ...sizing(job), elapsedMs: elapsed() };
   }
 }

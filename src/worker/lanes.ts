@@ -1,7 +1,8 @@
 /**
- * A lane runs one kind of job at a time and publishes its state. Starting a job supersedes the one
- * before; a result is published only while its job is the lane's current one and its revision is
- * still the document's analysis revision, so a late answer for an old drawing is dropped.
+ * A lane runs one kind of job at a time and publishes its state through its host (the store).
+ * Starting a job supersedes the one before. The job itself is the token: a result or a progress
+ * report is published only while the host's state is still about that very job, so an answer for
+ * an older drawing, a forgotten lane or a store that was reset is dropped.
  */
 import { JobCancelled } from './client.ts';
 import {
@@ -13,13 +14,11 @@ import {
   type JobResult,
   type JobState,
 } from './protocol.ts';
-import { jobRunner, type JobLane as LaneName } from './runner.ts';
+import { jobRunner, type JobLane } from './runner.ts';
 
 export interface LaneHost<R> {
   readonly publish: (state: JobState<R>) => void;
   readonly read: () => JobState<R>;
-  /** The document's analysis revision now. */
-  readonly revision: () => number;
   /** Narrows the worker's answer to this lane's result type. */
   readonly accept: (result: JobResult) => R;
 }
@@ -37,51 +36,37 @@ function message(error: unknown): string {
   return error instanceof Error ? `${error.name}: ${error.message}` : String(error);
 }
 
-export class Lane<R> {
-  private current: object | null = null;
-
-  constructor(
-    private readonly name: LaneName,
-    private readonly host: LaneHost<R>,
-  ) {}
-
-  async run(job: AnalysisJob): Promise<void> {
-    const token = {};
-    this.current = token;
-    const total = jobSize(job);
-    const running: JobState<R> = {
-      ...IDLE_JOB,
-      status: 'running',
-      revision: job.revision,
-      long: total > PROGRESS_THRESHOLD_VECTORS,
-      progress: { done: 0, total },
-    };
-    this.host.publish(running);
-    const live = (): boolean => this.current === token && this.host.revision() === job.revision;
-    const onProgress = (progress: JobProgress): void => {
-      if (live()) this.host.publish({ ...this.host.read(), progress });
-    };
-    try {
-      const result = this.host.accept(await jobRunner(this.name).run(job, onProgress));
-      if (live()) this.host.publish({ ...running, status: 'done', result, progress: { done: total, total } });
-    } catch (error) {
-      if (!live()) return;
-      const cancelled = error instanceof JobCancelled;
-      this.host.publish({
-        ...this.host.read(),
-        status: cancelled ? 'cancelled' : 'failed',
-        error: cancelled ? null : message(error),
-      });
-    }
+/** Runs a job in the lane's worker and publishes its progress and outcome while it is current. */
+export async function runInLane<R>(lane: JobLane, job: AnalysisJob, host: LaneHost<R>): Promise<void> {
+  const total = jobSize(job);
+  const running: JobState<R> = {
+    ...IDLE_JOB,
+    status: 'running',
+    job,
+    revision: job.revision,
+    long: total > PROGRESS_THRESHOLD_VECTORS,
+    progress: { done: 0, total },
+  };
+  host.publish(running);
+  const current = (): boolean => host.read().job === job;
+  const onProgress = (progress: JobProgress): void => {
+    if (current()) host.publish({ ...host.read(), progress });
+  };
+  try {
+    const result = host.accept(await jobRunner(lane).run(job, onProgress));
+    if (current()) host.publish({ ...running, status: 'done', result, progress: { done: total, total } });
+  } catch (error) {
+    if (!current()) return;
+    const cancelled = error instanceof JobCancelled;
+    host.publish({
+      ...host.read(),
+      status: cancelled ? 'cancelled' : 'failed',
+      error: cancelled ? null : message(error),
+    });
   }
+}
 
-  cancel(): void {
-    jobRunner(this.name).cancel();
-  }
-
-  /** Forgets the running job: its answer will be dropped, and the lane shows idle. */
-  forget(): void {
-    this.current = null;
-    this.host.publish(IDLE_JOB);
-  }
+/** Stops what the lane's worker is doing; the running job's state becomes cancelled. */
+export function cancelLane(lane: JobLane): void {
+  jobRunner(lane).cancel();
 }

@@ -1,47 +1,43 @@
 /**
- * What the page and the analysis worker say to each other. Every job carries the document revision it
- * was computed for; the page drops results whose revision is no longer current.
+ * What the page and the analysis worker say to each other. Every job carries the analysis revision
+ * it was computed for; the page drops results whose job is no longer the lane's current one.
  */
 import type { CheckReport } from '../core/analysis/report.ts';
 import type { Design, InputVector } from '../core/model/design.ts';
-import type { ActivitySource, PowerReport } from '../core/power/types.ts';
+import type { PowerCounts } from '../core/power/tally.ts';
 import type { SizingReport } from '../core/sizing/types.ts';
 import type { StepLevel } from '../core/view/levelStrip.ts';
 
+/** What a job analyses: the cell as derived at one revision, without its drawing. */
+export type CellInput = Pick<Design, 'netlist' | 'technology' | 'expectations'>;
+
+/** Every vector once: the table, the findings and the power counts for random activity. */
 export interface SweepJob {
   readonly kind: 'sweep';
   readonly revision: number;
-  readonly design: Design;
+  readonly cell: CellInput;
   /** Adds Z (an undriven pin) to each input's values. */
   readonly undrivenInputs?: boolean;
 }
 
+/** Steps once: the report, the level strips and the power counts for sequence activity. */
 export interface SequenceJob {
   readonly kind: 'sequence';
   readonly revision: number;
-  readonly design: Design;
+  readonly cell: CellInput;
   readonly steps: readonly InputVector[];
 }
 
-/** Power and sizing settings the designer chooses in the panel. */
-export interface PowerSettings {
-  /** Clock frequency, Hz. */
-  readonly freq: number;
+/** Sizing is topology only: it solves nothing. */
+export interface SizingJob {
+  readonly kind: 'sizing';
+  readonly revision: number;
+  readonly cell: CellInput;
   /** Load on each output, farads. */
   readonly load: number;
-  readonly activity: ActivitySource;
 }
 
-export interface PowerJob {
-  readonly kind: 'power';
-  readonly revision: number;
-  readonly design: Design;
-  readonly settings: PowerSettings;
-  /** Steps for sequence activity. */
-  readonly steps: readonly InputVector[];
-}
-
-export type AnalysisJob = SweepJob | SequenceJob | PowerJob;
+export type AnalysisJob = SweepJob | SequenceJob | SizingJob;
 
 export interface JobProgress {
   readonly done: number;
@@ -54,27 +50,29 @@ export interface CheckResult {
   readonly report: CheckReport;
   /** Sequences only: every net's level at every step, for the strips. */
   readonly stepLevels?: readonly Readonly<Record<string, StepLevel>>[];
+  /** Counted on the same solves; the page finishes them for its clock and load. */
+  readonly power: PowerCounts | null;
   /** Wall time in the worker, milliseconds. */
   readonly elapsedMs: number;
 }
 
-/** Power and sizing are computed apart: a failure of one still shows the other. */
-export interface PowerSizingResult {
-  readonly kind: 'power';
+export interface SizingResult {
+  readonly kind: 'sizing';
   readonly revision: number;
-  readonly power: PowerReport | null;
   readonly sizing: SizingReport | null;
-  readonly errors: readonly string[];
+  readonly error: string | null;
   readonly elapsedMs: number;
 }
 
-export type JobResult = CheckResult | PowerSizingResult;
+export type JobResult = CheckResult | SizingResult;
 
 /** A job as the panels see it, whatever its kind. */
 export type JobStatus = 'idle' | 'running' | 'done' | 'cancelled' | 'failed';
 
 export interface JobState<R> {
   readonly status: JobStatus;
+  /** The job this state is about: a lane publishes only while its job is still this one. */
+  readonly job: AnalysisJob | null;
   readonly revision: number;
   readonly progress: JobProgress;
   /** Past the size threshold: the panel shows a progress bar and a cancel button. */
@@ -85,6 +83,7 @@ export interface JobState<R> {
 
 export const IDLE_JOB: JobState<never> = {
   status: 'idle',
+  job: null,
   revision: -1,
   progress: { done: 0, total: 0 },
   long: false,
@@ -103,10 +102,14 @@ export const MAX_INPUTS_WITH_UNDRIVEN = 10;
 /** Sweeps with more vectors than this show a progress bar and a cancel button. */
 export const PROGRESS_THRESHOLD_VECTORS = 4096;
 
+/** Solves a job takes: vectors of a sweep, steps of a sequence, none for sizing. */
 export function jobSize(job: AnalysisJob): number {
-  if (job.kind === 'sequence') return job.steps.length;
-  if (job.kind === 'power' && job.settings.activity === 'sequence') return job.steps.length;
-  if (job.kind === 'power') return 2 ** job.design.netlist.inputs.length;
-  const values = job.undrivenInputs === true ? 3 : 2;
-  return values ** job.design.netlist.inputs.length;
+  switch (job.kind) {
+    case 'sequence':
+      return job.steps.length;
+    case 'sizing':
+      return 0;
+    case 'sweep':
+      return (job.undrivenInputs === true ? 3 : 2) ** job.cell.netlist.inputs.length;
+  }
 }

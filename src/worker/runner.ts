@@ -1,5 +1,5 @@
 /**
- * How the simulation slice runs long jobs: one lane for sweeps and one for sequences, so running a
+ * How the simulation slice runs long jobs: one lane per job kind (sweep, sequence, sizing), so a
  * sequence never cancels the table's sweep. In the browser each lane is an analysis worker; tests
  * and environments without workers swap in another runner (e.g. one that calls runJob directly).
  */

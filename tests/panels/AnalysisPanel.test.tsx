@@ -4,10 +4,10 @@ import { createRoot, type Root } from 'react-dom/client';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { AnalysisPanel } from '../../src/panels/AnalysisPanel.tsx';
 import { loadDesign, resetStore, store } from '../../src/state/store.ts';
-import { resetSimulation, SWEEP_DEBOUNCE_MS } from '../../src/state/simulation.ts';
+import { SWEEP_DEBOUNCE_MS, startAnalysis } from '../../src/state/analysis.ts';
 import { setJobRunnerFactory } from '../../src/worker/runner.ts';
 import { runJob } from '../../src/worker/jobs.ts';
-import { design, nand2MissingPullUp, resistorLoadInverter } from '../view/circuits.ts';
+import { design, nand2MissingPullUp, resistorLoadInverter } from '../cells.ts';
 
 (globalThis as { IS_REACT_ACT_ENVIRONMENT?: boolean }).IS_REACT_ACT_ENVIRONMENT = true;
 
@@ -33,13 +33,16 @@ async function mount(): Promise<void> {
   await act(async () => wait(SWEEP_DEBOUNCE_MS + 30));
 }
 
+let stopAnalysis: () => void;
+
 beforeEach(() => {
   resetStore();
-  resetSimulation();
+  stopAnalysis = startAnalysis();
   setJobRunnerFactory(() => ({ run: (job) => Promise.resolve(runJob(job)), cancel: () => {} }));
 });
 
 afterEach(async () => {
+  stopAnalysis();
   await act(async () => root.unmount());
   host.remove();
 });

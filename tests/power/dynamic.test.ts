@@ -29,19 +29,22 @@ describe('activity from the truth table (independent, equiprobable inputs)', () 
   // NOR example: 3/16, from memory).
   it('NAND2 and NOR2 outputs: α = 3/16', () => {
     for (const cell of [nand(2), nor(2)]) {
-      near(powerReport(cell, UNIT_RC_TECH, { freq: 1e6, activity: 'random' }).activity.Y, 3 / 16);
+      near(
+        powerReport(cell, UNIT_RC_TECH, { frequency: 1e6, activity: 'random', load: 0 }).activity.Y,
+        3 / 16,
+      );
     }
   });
 
   it('inverter output and every input: α = 1/4', () => {
-    const report = powerReport(inverter(), UNIT_RC_TECH, { freq: 1e6, activity: 'random' });
+    const report = powerReport(inverter(), UNIT_RC_TECH, { frequency: 1e6, activity: 'random', load: 0 });
     near(report.activity.Y, 1 / 4);
     near(report.activity.A, 1 / 4);
   });
 
   it('an inverter into 100 fF at 1.8 V and 500 MHz burns 40.5 µW', () => {
     // α = 1/4 from the truth table, then the arithmetic above: the whole chain through the solver.
-    const report = powerReport(inverter(), IDEAL_18, { freq: 500e6, activity: 'random', load: 100e-15 });
+    const report = powerReport(inverter(), IDEAL_18, { frequency: 500e6, activity: 'random', load: 100e-15 });
     near(report.capacitance.Y, 100e-15);
     near(report.dynamicWatts, 40.5e-6);
     expect(report.convention).toMatch(/0→1/);
@@ -52,12 +55,12 @@ describe('activity counted over a sequence', () => {
   const steps = ['1', '0', '1', '0', '1'].map((a) => ({ A: a as '0' | '1' }));
 
   it('A = 1,0,1,0,1 makes Y rise twice in four step changes: α = 1/2, 324 fJ each at 1.8 V', () => {
-    const report = powerReport(inverter(), IDEAL_18, {
-      freq: 1e9,
-      activity: 'sequence',
-      sequence: steps,
-      load: 100e-15,
-    });
+    const report = powerReport(
+      inverter(),
+      IDEAL_18,
+      { frequency: 1e9, activity: 'sequence', load: 100e-15 },
+      { sequence: steps },
+    );
     const y = report.nets.find((n) => n.net === 'Y');
     near(y?.activity, 0.5);
     near(y?.energyPerTransition, 324e-15);
@@ -79,7 +82,12 @@ describe('activity counted over a sequence', () => {
       { D: '0', G: '1' },
       { D: '1', G: '1' },
     ] as const;
-    const report = powerReport(pass, IDEAL_18, { freq: 1e6, activity: 'sequence', sequence });
+    const report = powerReport(
+      pass,
+      IDEAL_18,
+      { frequency: 1e6, activity: 'sequence', load: 0 },
+      { sequence },
+    );
     const y = report.nets.find((n) => n.net === 'Y');
     near(y?.swing, 1.8 - IDEAL_18.vtn);
     near(y?.energyPerTransition, 100e-15 * 1.8 * (1.8 - IDEAL_18.vtn));

@@ -3,7 +3,7 @@ import { powerReport } from '../../src/core/power/powerReport.ts';
 import { sizingReport } from '../../src/core/sizing/sizingReport.ts';
 import { STARTERS } from '../../src/core/starters/index.ts';
 
-const options = { freq: 100e6, activity: 'random', load: 10e-15 } as const;
+const options = { frequency: 100e6, activity: 'random', load: 10e-15 } as const;
 
 describe('power and sizing over every starter cell', () => {
   for (const { id, design } of STARTERS) {
@@ -38,11 +38,12 @@ describe('power and sizing over every starter cell', () => {
   it('sequences of the stateful starters give activities of at most one rise per step change', () => {
     for (const { design } of STARTERS.filter((s) => s.design.sequences.length > 0)) {
       const sequence = design.sequences[0].steps;
-      const power = powerReport(design.netlist, design.technology, {
-        ...options,
-        activity: 'sequence',
-        sequence,
-      });
+      const power = powerReport(
+        design.netlist,
+        design.technology,
+        { ...options, activity: 'sequence' },
+        { sequence },
+      );
       for (const a of Object.values(power.activity)) expect(a).toBeLessThanOrEqual(1);
       expect(power.vectors).toHaveLength(sequence.length);
     }

@@ -9,7 +9,7 @@ function near(actual: number | undefined, expected: number): void {
 }
 
 const NO_LEAK = { ...DEFAULT_TECHNOLOGY, ioffPerWidth: 0 };
-const random = { freq: 1e6, activity: 'random' } as const;
+const random = { frequency: 1e6, activity: 'random', load: 0 } as const;
 
 describe('static power through conducting paths', () => {
   it('a 10 kΩ pull-up to 5 V into 40 kΩ draws 0.1 mA and 0.5 mW', () => {
@@ -96,16 +96,16 @@ describe('leakage of off transistors', () => {
 describe('options are checked and named', () => {
   const cell = inverter();
   const cases = [
-    { options: { freq: -1, activity: 'random' as const }, field: 'freq' },
-    { options: { freq: 1e6, activity: 'random' as const, load: Number.NaN }, field: 'load' },
-    { options: { freq: 1e6, activity: 'sequence' as const }, field: 'sequence' },
-    { options: { freq: 1e6, activity: 'random' as const, maxInputs: 0 }, field: 'maxInputs' },
+    { settings: { ...random, frequency: -1 }, pass: {}, field: 'frequency' },
+    { settings: { ...random, load: Number.NaN }, pass: {}, field: 'load' },
+    { settings: { ...random, activity: 'sequence' as const }, pass: {}, field: 'sequence' },
+    { settings: random, pass: { maxInputs: 0 }, field: 'maxInputs' },
   ];
-  for (const { options, field } of cases) {
+  for (const { settings, pass, field } of cases) {
     it(`rejects a bad ${field}`, () => {
       let error: unknown;
       try {
-        powerReport(cell, DEFAULT_TECHNOLOGY, options);
+        powerReport(cell, DEFAULT_TECHNOLOGY, settings, pass);
       } catch (e) {
         error = e;
       }
@@ -116,7 +116,7 @@ describe('options are checked and named', () => {
 
   it('does not change the netlist it is given', () => {
     const copy = structuredClone(cell);
-    powerReport(cell, DEFAULT_TECHNOLOGY, { freq: 1e6, activity: 'random', load: 1e-15 });
+    powerReport(cell, DEFAULT_TECHNOLOGY, { frequency: 1e6, activity: 'random', load: 1e-15 });
     expect(cell).toEqual(copy);
   });
 });

@@ -38,7 +38,7 @@ describe('results do not depend on the order devices are listed in (docs/semanti
   it('power: same static power per vector, activity and capacitance per net', () => {
     fc.assert(
       fc.property(fc.constantFrom(...cells), orders, (cell, order) => {
-        const options = { freq: 1e8, activity: 'random', load: 3e-15 } as const;
+        const options = { frequency: 1e8, activity: 'random', load: 3e-15 } as const;
         const a = powerReport(cell, UNIT_RC_TECH, options);
         const b = powerReport(permuted(cell, order), UNIT_RC_TECH, options);
         expect(rounded(b.staticWatts)).toEqual(rounded(a.staticWatts));

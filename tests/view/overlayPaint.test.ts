@@ -5,7 +5,7 @@ import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import { LiveSession } from '../../src/core/view/liveSession.ts';
 import { solvedView } from '../../src/core/view/solvedView.ts';
 import { overlayPaint, paintLayout } from '../../src/core/view/overlayPaint.ts';
-import { inverter, nand2MissingPullUp } from './circuits.ts';
+import { inverter, nand2MissingPullUp } from '../cells.ts';
 import type { Netlist } from '../../src/core/model/netlist.ts';
 import type { InputVector } from '../../src/core/model/design.ts';
 

@@ -1,52 +1,12 @@
 import { describe, expect, it } from 'vitest';
 import {
-  StepTextError,
-  heldSteps,
-  formatSteps,
   insertStep,
   moveStep,
   nextCellValue,
-  setStepCell,
-  parseSteps,
   removeStep,
+  setStepCell,
   setStepValue,
 } from '../../src/core/view/sequenceEdit.ts';
-
-const D_LATCH = ['D', 'CLK'];
-
-describe('step text', () => {
-  it('parses only what each step changes; held values follow the sequence rule', () => {
-    const steps = parseSteps('D=1 CLK=1; CLK=0; D=0', D_LATCH);
-    expect(steps).toEqual([{ D: '1', CLK: '1' }, { CLK: '0' }, { D: '0' }]);
-    expect(heldSteps(D_LATCH, steps)).toEqual([
-      { D: '1', CLK: '1' },
-      { D: '1', CLK: '0' },
-      { D: '0', CLK: '0' },
-    ]);
-    expect(heldSteps(D_LATCH, [{ CLK: '0' }])).toEqual([{ D: 'X', CLK: '0' }]);
-  });
-
-  it('round-trips through its text form', () => {
-    const steps = parseSteps('D=1 CLK=1; CLK=0; D=z CLK=x', D_LATCH);
-    expect(formatSteps(steps, D_LATCH)).toBe('D=1 CLK=1; CLK=0; D=Z CLK=X');
-    expect(parseSteps(formatSteps(steps, D_LATCH), D_LATCH)).toEqual(steps);
-  });
-
-  it('points at the bad token', () => {
-    const text = 'D=1 CLK=1; D=2';
-    const error = (() => {
-      try {
-        parseSteps(text, D_LATCH);
-      } catch (e) {
-        return e;
-      }
-    })();
-    expect(error).toBeInstanceOf(StepTextError);
-    expect((error as StepTextError).position).toBe(text.indexOf('2'));
-    expect(() => parseSteps('Q=1', D_LATCH)).toThrow(StepTextError);
-    expect(() => parseSteps('D1', D_LATCH)).toThrow(StepTextError);
-  });
-});
 
 describe('step edits', () => {
   const steps = [{ D: '0' }, { D: '1' }, { D: 'Z' }] as const;

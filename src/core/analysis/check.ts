@@ -1,7 +1,7 @@
 import { compile, type CompiledNetlist } from '../compile/compile.ts';
 import { evaluateExpression, type ExpectedValue } from '../expect/evaluate.ts';
 import { ExpressionError, parseExpression, type Expr } from '../expect/parse.ts';
-import type { Design, InputValue, InputVector } from '../model/design.ts';
+import type { Design, InputVector } from '../model/design.ts';
 import type { Netlist } from '../model/netlist.ts';
 import { DEFAULT_TECHNOLOGY, type Technology } from '../model/technology.ts';
 import { levelName } from '../solver/levels.ts';
@@ -9,9 +9,11 @@ import { Simulator, type SolveResult } from '../solver/simulator.ts';
 import type { CheckReport, Finding, FindingKind, Summary, VectorReport } from './report.ts';
 import { structuralFindings } from './rules.ts';
 import { vectorFindings } from './vectorFindings.ts';
-import { checkSweepLimit, sweepSize, sweepVectors } from './vectors.ts';
+import { sequencePass, sweepPass, type PassProgress, type SolveObserver } from './pass.ts';
+import { checkSweepLimit, sweepSize } from './vectors.ts';
 
 export { DEFAULT_MAX_INPUTS, SweepLimitError, sweepVectors } from './vectors.ts';
+export { SequenceError } from './pass.ts';
 
 export interface CheckOptions {
   readonly technology?: Technology;
@@ -23,7 +25,11 @@ export interface CheckOptions {
   readonly undrivenInputs?: boolean;
   readonly maxInputs?: number;
   /** Called with (done, total) during long sweeps; return false to stop early. */
-  readonly onProgress?: (done: number, total: number) => boolean | void;
+  readonly onProgress?: PassProgress;
+  /** The revision's simulator, when the caller already has one: nothing is compiled again. */
+  readonly simulator?: Simulator;
+  /** Further readers of each solved vector (power counters, level strips): one solve feeds all. */
+  readonly observers?: readonly SolveObserver[];
 }
 
 export const FINDING_KINDS: readonly FindingKind[] = [
@@ -44,17 +50,19 @@ export function vectorLabel(v: InputVector, inputs: readonly string[]): string {
   return inputs.length === 0 ? '(no inputs)' : inputs.map((n) => `${n}=${v[n] ?? 'Z'}`).join(' ');
 }
 
-class Checker {
+class Checker implements SolveObserver {
   readonly compiled: CompiledNetlist;
   readonly simulator: Simulator;
+  readonly rows: VectorReport[] = [];
   private readonly expectations: [number, Expr][];
 
   constructor(
     readonly netlist: Netlist,
     readonly options: CheckOptions,
   ) {
-    this.compiled = compile(netlist, options.technology ?? DEFAULT_TECHNOLOGY);
-    this.simulator = new Simulator(this.compiled);
+    this.simulator =
+      options.simulator ?? new Simulator(compile(netlist, options.technology ?? DEFAULT_TECHNOLOGY));
+    this.compiled = this.simulator.compiled;
     this.expectations = Object.entries(options.expectations ?? {}).map(([output, text]) => {
       const n = this.compiled.netIndex.get(output);
       if (n === undefined || !netlist.outputs.includes(output)) {
@@ -62,6 +70,15 @@ class Checker {
       }
       return [n, parseExpression(text, netlist.inputs)];
     });
+  }
+
+  add(r: SolveResult, index: number): void {
+    this.rows.push(this.vectorReport(r, index));
+  }
+
+  /** Every reader of this pass: the checker's own rows first. */
+  observers(): SolveObserver[] {
+    return [this, ...(this.options.observers ?? [])];
   }
 
   vectorReport(r: SolveResult, index: number): VectorReport {
@@ -131,13 +148,9 @@ export function checkSweep(netlist: Netlist, options: CheckOptions = {}): CheckR
   const checker = new Checker(netlist, options);
   checkSweepLimit(netlist.inputs, options.maxInputs);
   const total = sweepSize(netlist.inputs, options.undrivenInputs);
-  const rows: VectorReport[] = [];
-  for (const v of sweepVectors(netlist.inputs, options.undrivenInputs)) {
-    rows.push(checker.vectorReport(checker.simulator.solveFresh(v, { recycle: true }), rows.length));
-    if (options.onProgress?.(rows.length, total) === false) break;
-  }
-  const notes = rows.length < total ? [`stopped after ${rows.length} of ${total} vectors`] : [];
-  return checker.report('vectors', rows, notes);
+  const done = sweepPass(checker.simulator, checker.observers(), options);
+  const notes = done < total ? [`stopped after ${done} of ${total} vectors`] : [];
+  return checker.report('vectors', checker.rows, notes);
 }
 
 /**
@@ -150,26 +163,8 @@ export function checkSequence(
   options: CheckOptions = {},
 ): CheckReport {
   const checker = new Checker(netlist, options);
-  const rows: VectorReport[] = [];
-  let held: Record<string, InputValue> = Object.fromEntries(
-    netlist.inputs.map((n) => [n, 'X' as InputValue]),
-  );
-  let previous: SolveResult | null = null;
-  for (const [i, step] of steps.entries()) {
-    for (const name of Object.keys(step)) {
-      if (!netlist.inputs.includes(name))
-        throw new SequenceError(`step ${i + 1} sets '${name}', which is not an input`);
-    }
-    held = { ...held, ...step };
-    previous = previous ? checker.simulator.solveNext(held, previous) : checker.simulator.solveFresh(held);
-    rows.push(checker.vectorReport(previous, i));
-    if (options.onProgress?.(i + 1, steps.length) === false) break;
-  }
-  return checker.report('steps', rows, []);
-}
-
-export class SequenceError extends Error {
-  override readonly name = 'SequenceError';
+  sequencePass(checker.simulator, steps, checker.observers(), options.onProgress);
+  return checker.report('steps', checker.rows, []);
 }
 
 /** Checks a design: its sweep with its own technology and expected functions. */

@@ -4,6 +4,7 @@
  * (pin directions, rails with unusual names, expected functions), so that importing the export
  * gives back the same netlist.
  */
+import { CAUTION } from '../caution.ts';
 import type { Device, MosDevice, Netlist } from '../model/netlist.ts';
 import type { Technology } from '../model/technology.ts';
 import { formatSpiceNumber } from './spiceNumber.ts';
@@ -24,7 +25,7 @@ export function exportSpice(netlist: Netlist, tech: Technology, options: SpiceEx
   const cell = token(netlist.name || 'cell');
   const ports = unique([...netlist.inputs, ...netlist.outputs, ...netlist.rails.map((r) => r.net)]);
   const lines = [
-    `* ${cell}: exported by Railwise. Switch-level estimate, not sign-off.`,
+    `* ${cell}: exported by Railwise. ${CAUTION}`,
     `* Level-1 models from: ${tech.source}`,
     `.model ${NMOS_MODEL} nmos (level=1 vto=${tech.vtn} kp=${formatSpiceNumber(tech.kpn)})`,
     `.model ${PMOS_MODEL} pmos (level=1 vto=${-tech.vtp} kp=${formatSpiceNumber(tech.kpp)})`,

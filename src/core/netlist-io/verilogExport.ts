@@ -9,6 +9,7 @@
  * between two equally driven nets) the direction is unknowable and it becomes a bidirectional
  * `tranif` switch.
  */
+import { CAUTION } from '../caution.ts';
 import type { Device, MosDevice, Netlist } from '../model/netlist.ts';
 import { channelNets, netNames } from '../model/netlist.ts';
 
@@ -26,7 +27,7 @@ export function exportVerilog(netlist: Netlist): string {
   const outputs = netlist.outputs.filter((n) => !netlist.inputs.includes(n));
   const lines = [
     `// ${netlist.name}: switch-level model exported by Railwise (IEEE Std 1364-2005 clause 7 primitives).`,
-    `// Switch-level estimate, not sign-off.`,
+    `// ${CAUTION}`,
     `module ${identifier(netlist.name || 'cell')} (${[...netlist.inputs, ...outputs].map(identifier).join(', ')});`,
     ...declaration('input', netlist.inputs),
     ...declaration('output', outputs),

@@ -7,18 +7,6 @@ import type { InputVector } from '../model/design.ts';
 /** Where switching activity comes from: a design's sequence, or every vector equally likely. */
 export type ActivitySource = 'sequence' | 'random';
 
-export interface PowerOptions {
-  /** Clock frequency, Hz: one input vector (or sequence step) per cycle. */
-  readonly freq: number;
-  readonly activity: ActivitySource;
-  /** Load capacitance on each output, farads (default 0). */
-  readonly load?: number;
-  /** Steps to count transitions over; required when activity is 'sequence'. */
-  readonly sequence?: readonly InputVector[];
-  /** Largest input count for the exhaustive sweep behind 'random' (default 16). */
-  readonly maxInputs?: number;
-}
-
 /** Static figures of one input vector (or sequence step). */
 export interface VectorPower {
   readonly inputs: InputVector;
@@ -65,8 +53,10 @@ export interface PowerReport {
   /** One sentence naming the leakage model. */
   readonly leakageModel: string;
   readonly activitySource: ActivitySource;
+  /** Clock frequency used, Hz. */
   readonly frequency: number;
   readonly vdd: number;
+  /** Load on each output used for these figures, farads. */
   readonly load: number;
   /** Per vector (random) or per step (sequence). */
   readonly vectors: readonly VectorPower[];
@@ -88,15 +78,4 @@ export interface PowerReport {
   readonly capacitance: Readonly<Record<string, number>>;
   readonly nets: readonly NetPower[];
   readonly notes: readonly string[];
-}
-
-export class PowerOptionsError extends Error {
-  override readonly name = 'PowerOptionsError';
-  constructor(
-    /** The option at fault: 'freq', 'load', 'sequence' or 'maxInputs'. */
-    readonly field: string,
-    message: string,
-  ) {
-    super(message);
-  }
 }

@@ -1,3 +1,4 @@
+import { CAUTION } from '../../core/caution.ts';
 import { formatPower, engineering } from '../../core/view/format.ts';
 import type { PowerReport } from '../../core/power/types.ts';
 import type { WidthProposal } from '../../core/sizing/proposeWidths.ts';
@@ -81,7 +82,7 @@ export function PowerSizingPanel({ power, sizing, error = null, proposal = null 
           {proposal !== null && <ProposalTable proposal={proposal} />}
         </>
       )}
-      <p className="rw-muted">Switch-level estimates, not sign-off: confirm with circuit simulation.</p>
+      <p className="rw-muted">{CAUTION}</p>
     </div>
   );
 }

@@ -1,6 +1,6 @@
 // Unit tests of our own plumbing: they check behaviour, not published values, so no source applies.
 import { describe, expect, it } from 'vitest';
-import { headlessEditor } from './headless.ts';
+import { headlessEditor } from '../editor/headless.ts';
 import { BLANK_DOCUMENT, loadDesign, setSelection } from '../../src/state/store.ts';
 import { STARTERS } from '../../src/core/starters/index.ts';
 import { editPart } from '../../src/editor/actions.ts';

@@ -5,7 +5,6 @@ import { levelAt, levelStrips } from '../../src/core/view/levelStrip.ts';
 import { vectorRows } from '../../src/core/view/vectorTable.ts';
 import { runJob as runAnyJob, usableExpectations } from '../../src/worker/jobs.ts';
 import type { CheckResult, SequenceJob, SweepJob } from '../../src/worker/protocol.ts';
-import { heldSteps } from '../../src/core/view/sequenceEdit.ts';
 import { jobSize } from '../../src/worker/protocol.ts';
 import {
   RESISTOR_LOAD_OHMS,
@@ -14,12 +13,12 @@ import {
   nand2MissingPullUp,
   nandLatch,
   resistorLoadInverter,
-} from './circuits.ts';
+} from '../cells.ts';
 
 /** The check jobs under test always answer with a check result. */
 function runJob(job: SweepJob | SequenceJob, onProgress?: Parameters<typeof runAnyJob>[1]): CheckResult {
   const result = runAnyJob(job, onProgress);
-  if (result.kind === 'power') throw new Error('expected a check result');
+  if (result.kind === 'sizing') throw new Error('expected a check result');
   return result;
 }
 
@@ -28,7 +27,7 @@ describe('sweep job', () => {
   // (RCN 2nd ed., table 3.3, from memory), in series with the 40 kΩ load: I = 2.5 V / 43.25 kΩ = 57.8 µA
   // and P = VDD·I = 145 µW (Ohm's law; common practice, no source).
   it('reports the current of the vector that draws it', () => {
-    const result = runJob({ kind: 'sweep', revision: 7, design: design(resistorLoadInverter, { Y: '!A' }) });
+    const result = runJob({ kind: 'sweep', revision: 7, cell: design(resistorLoadInverter, { Y: '!A' }) });
     expect(result.revision).toBe(7);
     const [low, high] = vectorRows(result.report);
     const ron = DEFAULT_TECHNOLOGY.rn * (0.25 / 1);
@@ -45,27 +44,27 @@ describe('sweep job', () => {
   // path to either rail (series-parallel duality, common practice, no source).
   it('finds the floating vector of a NAND2 with a missing pull-up, and nothing in the whole cell', () => {
     const broken = vectorRows(
-      runJob({ kind: 'sweep', revision: 1, design: design(nand2MissingPullUp, { Y: '!(A & B)' }) }).report,
+      runJob({ kind: 'sweep', revision: 1, cell: design(nand2MissingPullUp, { Y: '!(A & B)' }) }).report,
     );
     expect(broken.filter((r) => r.kinds.length > 0).map((r) => r.index)).toEqual([2]);
     expect(broken[2].outputs.Y).toBe('Z');
     expect(broken[2].kinds).toEqual(expect.arrayContaining(['floating', 'mismatch']));
     const fixed = vectorRows(
-      runJob({ kind: 'sweep', revision: 2, design: design(nand2, { Y: '!(A & B)' }) }).report,
+      runJob({ kind: 'sweep', revision: 2, cell: design(nand2, { Y: '!(A & B)' }) }).report,
     );
     expect(fixed.every((r) => r.kinds.length === 0)).toBe(true);
   });
 
   it('reports progress, ending at the total', () => {
     const seen: number[] = [];
-    runJob({ kind: 'sweep', revision: 1, design: design(nand2) }, (p) => seen.push(p.done / p.total));
+    runJob({ kind: 'sweep', revision: 1, cell: design(nand2) }, (p) => seen.push(p.done / p.total));
     expect(seen[seen.length - 1]).toBe(1);
   });
 
   it('caps sweeps with undriven inputs and names the limit', () => {
     const many = { ...nand2, inputs: [...nand2.inputs, ...Array.from({ length: 9 }, (_, i) => `U${i}`)] };
-    expect(jobSize({ kind: 'sweep', revision: 0, design: design(many), undrivenInputs: true })).toBe(3 ** 11);
-    expect(() => runJob({ kind: 'sweep', revision: 1, design: design(many), undrivenInputs: true })).toThrow(
+    expect(jobSize({ kind: 'sweep', revision: 0, cell: design(many), undrivenInputs: true })).toBe(3 ** 11);
+    expect(() => runJob({ kind: 'sweep', revision: 1, cell: design(many), undrivenInputs: true })).toThrow(
       SweepLimitError,
     );
   });
@@ -81,13 +80,6 @@ describe('expected functions in jobs', () => {
 });
 
 describe('sequence job', () => {
-  it('holds inputs a step leaves out, X before their first mention', () => {
-    expect(heldSteps(['SN', 'RN'], [{ SN: '0' }, { RN: '1' }])).toEqual([
-      { SN: '0', RN: 'X' },
-      { SN: '0', RN: '1' },
-    ]);
-  });
-
   // Cross-coupled NAND latch: SN = 0 sets Q = 1; both high hold it; RN = 0 resets Q = 0; both high hold
   // (W&H 4th ed., sequential circuits; common practice). Holding needs the stored state carried between steps.
   it('carries the latch state between steps and gives strips for every net', () => {
@@ -97,43 +89,52 @@ describe('sequence job', () => {
       { SN: '1', RN: '0' },
       { SN: '1', RN: '1' },
     ] as const;
-    const result = runJob({ kind: 'sequence', revision: 3, design: design(nandLatch), steps });
+    const result = runJob({ kind: 'sequence', revision: 3, cell: design(nandLatch), steps });
     expect(result.report.steps?.map((s) => s.outputs.Q)).toEqual(['1', '1', '0', '0']);
     const [q, qn] = levelStrips(result.stepLevels ?? [], ['Q', 'QN']);
     expect([0, 1, 2, 3].map((s) => levelAt(q, s))).toEqual(['1', '1', '0', '0']);
     expect([0, 1, 2, 3].map((s) => levelAt(qn, s))).toEqual(['0', '0', '1', '1']);
     expect(q.runs).toHaveLength(2);
+    // Sequence activity counts 0→1 changes between steps over the step changes: Q reads 1 1 0 0 (no
+    // rise), QN reads 0 0 1 1 (one rise in three changes), so α(QN) = 1/3 and α(Q) = 0.
+    expect(result.power?.nets.find((n) => n.net === 'QN')?.activity).toBeCloseTo(1 / 3, 12);
+    expect(result.power?.nets.find((n) => n.net === 'Q')?.activity).toBe(0);
   });
 });
 
-describe('power job', () => {
-  // Resistor-load inverter: the mean static power over A = 0 (no current) and A = 1 (2.5 V · 57.8 µA)
-  // is half of 145 µW (Ohm's law with RCN's Rn, table 3.3, from memory; vectors equally likely).
-  it('returns power and sizing figures, each on its own', () => {
+describe('sizing job', () => {
+  it('returns the sizing figures for the load asked, and a refused load as an error', () => {
     const result = runAnyJob({
-      kind: 'power',
+      kind: 'sizing',
       revision: 4,
-      design: design(resistorLoadInverter),
-      settings: { freq: 100e6, load: 10e-15, activity: 'random' },
-      steps: [],
+      cell: design(resistorLoadInverter),
+      load: 10e-15,
     });
-    if (result.kind !== 'power') throw new Error('expected a power result');
+    if (result.kind !== 'sizing') throw new Error('expected a sizing result');
     expect(result.revision).toBe(4);
+    expect(result.sizing?.load).toBe(10e-15);
+    const refused = runAnyJob({ kind: 'sizing', revision: 1, cell: design(nand2), load: -1 });
+    if (refused.kind !== 'sizing') throw new Error('expected a sizing result');
+    expect(refused.sizing).toBeNull();
+    expect(refused.error).toContain('sizing');
+  });
+});
+
+describe('power counts ride on the sweep', () => {
+  // Resistor-load inverter: the static power of A = 1 is 2.5 V² / (40 kΩ + 3.25 kΩ) (Ohm's law with
+  // RCN's Rn = 13 kΩ at W/L = 1, table 3.3, from memory); A = 0 draws none.
+  it('counts the static power of each vector in the same pass as the table', () => {
+    const result = runJob({ kind: 'sweep', revision: 4, cell: design(resistorLoadInverter) });
     const dc = 2.5 ** 2 / (RESISTOR_LOAD_OHMS + DEFAULT_TECHNOLOGY.rn * 0.25);
     expect(result.power?.vectors.map((v) => v.dcWatts)[1]).toBeCloseTo(dc, 8);
-    expect(result.sizing).not.toBeNull();
+    expect(result.power?.vectors[0]?.dcWatts).toBe(0);
   });
 
-  it('reports a refused setting as an error, not a crash', () => {
-    const result = runAnyJob({
-      kind: 'power',
-      revision: 1,
-      design: design(nand2),
-      settings: { freq: -1, load: 0, activity: 'random' },
-      steps: [],
-    });
-    if (result.kind !== 'power') throw new Error('expected a power result');
-    expect(result.power).toBeNull();
-    expect(result.errors[0]).toContain('power');
+  it('leaves vectors with an undriven input out of random activity', () => {
+    const plain = runJob({ kind: 'sweep', revision: 1, cell: design(nand2) });
+    const withZ = runJob({ kind: 'sweep', revision: 1, cell: design(nand2), undrivenInputs: true });
+    expect(withZ.report.vectors).toHaveLength(9);
+    expect(withZ.power?.vectors.map((v) => v.inputs)).toEqual(plain.power?.vectors.map((v) => v.inputs));
+    expect(withZ.power?.nets).toEqual(plain.power?.nets);
   });
 });

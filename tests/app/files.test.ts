@@ -1,7 +1,6 @@
 // Behaviour of our own file handling, not published values: no source applies.
 import { beforeEach, describe, expect, it } from 'vitest';
 import { designsFromSpice, openText } from '../../src/app/files.ts';
-import { cellChoice } from '../../src/app/cellChoice.ts';
 import { documentFromDesign } from '../../src/state/document.ts';
 import { resetStore, store } from '../../src/state/store.ts';
 import { STARTERS } from '../../src/core/starters/index.ts';
@@ -16,7 +15,6 @@ const INVERTER_CELL = [
 describe('opening files', () => {
   beforeEach(() => {
     resetStore(documentFromDesign(STARTERS[0]!.design));
-    cellChoice.setState({ choice: null });
   });
 
   it('a design file with a bad field is refused with the field named; nothing changes', () => {
@@ -53,6 +51,6 @@ describe('opening files', () => {
     expect(designsFromSpice(library, 'lib.sp').designs.map((d) => d.name)).toEqual(['inv', 'inv_b']);
     expect(openText(library, 'lib.sp')).toBe(true);
     expect(store.getState().doc).toBe(before);
-    expect(cellChoice.getState().choice?.designs).toHaveLength(2);
+    expect(store.getState().cellChoice?.designs).toHaveLength(2);
   });
 });

@@ -2,13 +2,13 @@
 import { act } from 'react';
 import { createRoot } from 'react-dom/client';
 import { afterEach, describe, expect, it } from 'vitest';
-import { powerReport } from '../../src/core/power/powerReport.ts';
-import { NetCapacitanceTable } from '../../src/panels/power/NetCapacitanceTable.tsx';
-import { nand, UNIT_RC_TECH } from '../sizing/cells.ts';
+import { powerReport } from '../../../src/core/power/powerReport.ts';
+import { NetCapacitanceTable } from '../../../src/panels/power/NetCapacitanceTable.tsx';
+import { nand, UNIT_RC_TECH } from '../../sizing/cells.ts';
 
 (globalThis as { IS_REACT_ACT_ENVIRONMENT?: boolean }).IS_REACT_ACT_ENVIRONMENT = true;
 
-const report = powerReport(nand(2), UNIT_RC_TECH, { freq: 1e6, activity: 'random', load: 10e-15 });
+const report = powerReport(nand(2), UNIT_RC_TECH, { frequency: 1e6, activity: 'random', load: 10e-15 });
 let host: HTMLElement | null = null;
 
 afterEach(() => host?.remove());

@@ -1,13 +1,17 @@
 import { renderToStaticMarkup } from 'react-dom/server';
 import { describe, expect, it } from 'vitest';
-import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
-import { powerReport } from '../../src/core/power/powerReport.ts';
-import { proposeWidths, sizingReport } from '../../src/core/sizing/sizingReport.ts';
-import { chartGeometry, DEFAULT_FRAME } from '../../src/panels/power/chartGeometry.ts';
-import { PowerSizingPanel } from '../../src/panels/power/PowerSizingPanel.tsx';
-import { nand, UNIT_RC_TECH } from '../sizing/cells.ts';
+import { DEFAULT_TECHNOLOGY } from '../../../src/core/model/technology.ts';
+import { powerReport } from '../../../src/core/power/powerReport.ts';
+import { proposeWidths, sizingReport } from '../../../src/core/sizing/sizingReport.ts';
+import { chartGeometry, DEFAULT_FRAME } from '../../../src/panels/power/chartGeometry.ts';
+import { PowerSizingPanel } from '../../../src/panels/power/PowerSizingPanel.tsx';
+import { nand, UNIT_RC_TECH } from '../../sizing/cells.ts';
 
-const power = powerReport(nand(2), DEFAULT_TECHNOLOGY, { freq: 100e6, activity: 'random', load: 10e-15 });
+const power = powerReport(nand(2), DEFAULT_TECHNOLOGY, {
+  frequency: 100e6,
+  activity: 'random',
+  load: 10e-15,
+});
 const sizing = sizingReport(nand(2), UNIT_RC_TECH, { load: 10e-15 });
 
 describe('static power chart geometry', () => {

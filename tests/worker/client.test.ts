@@ -3,7 +3,7 @@ import * as Comlink from 'comlink';
 import { AnalysisClient, JobCancelled } from '../../src/worker/client.ts';
 import { runJob } from '../../src/worker/jobs.ts';
 import type { AnalysisWorkerApi, JobProgress } from '../../src/worker/protocol.ts';
-import { design, nand2 } from '../view/circuits.ts';
+import { design, nand2 } from '../cells.ts';
 
 /**
  * A stand-in for the module worker: the real worker API exposed over a MessageChannel, with a
@@ -36,9 +36,7 @@ describe('analysis client', () => {
     const client = new AnalysisClient(() => fakeWorker(log));
     clients.push(client);
     const seen: JobProgress[] = [];
-    const result = await client.run({ kind: 'sweep', revision: 5, design: design(nand2) }, (p) =>
-      seen.push(p),
-    );
+    const result = await client.run({ kind: 'sweep', revision: 5, cell: design(nand2) }, (p) => seen.push(p));
     expect(result.revision).toBe(5);
     expect(result.kind === 'sweep' && result.report.vectors?.length).toBe(4);
     await new Promise((r) => setTimeout(r, 20)); // progress messages cross the channel asynchronously
@@ -49,7 +47,7 @@ describe('analysis client', () => {
     const log: string[] = [];
     const client = new AnalysisClient(() => fakeWorker(log, true));
     clients.push(client);
-    const running = client.run({ kind: 'sweep', revision: 1, design: design(nand2) });
+    const running = client.run({ kind: 'sweep', revision: 1, cell: design(nand2) });
     client.cancel();
     await expect(running).rejects.toBeInstanceOf(JobCancelled);
     expect(log).toEqual(['terminated']);
@@ -60,8 +58,8 @@ describe('analysis client', () => {
     let made = 0;
     const client = new AnalysisClient(() => fakeWorker(log, made++ === 0));
     clients.push(client);
-    const first = client.run({ kind: 'sweep', revision: 1, design: design(nand2) });
-    const second = client.run({ kind: 'sweep', revision: 2, design: design(nand2) });
+    const first = client.run({ kind: 'sweep', revision: 1, cell: design(nand2) });
+    const second = client.run({ kind: 'sweep', revision: 2, cell: design(nand2) });
     await expect(first).rejects.toBeInstanceOf(JobCancelled);
     expect((await second).revision).toBe(2);
     expect(made).toBe(2);

@@ -1,0 +1,175 @@
+/**
+ * The analysis wiring, started once at start-up (src/main.tsx) so the sheet overlay has levels
+ * whatever panel is open. It follows the store: when the netlist revision moves it builds the page's
+ * one compiled netlist and re-solves the live vector; when what a job reads changes it forgets that
+ * lane (a late answer is then dropped) and, for small cells, starts it again once edits pause; when
+ * a pass's counts or the power settings change it finishes the power figures. Nothing is compared
+ * by serialising: the document slice keeps unchanged netlists, expectations and sequences as the
+ * same objects, and numbers their changes.
+ */
+import { powerFromCounts } from '../core/power/powerReport.ts';
+import { LiveSession } from '../core/view/liveSession.ts';
+import { completeVector } from '../core/view/vectorControl.ts';
+import { IDLE_JOB, jobSize } from '../worker/protocol.ts';
+import {
+  currentSteps,
+  runSequence,
+  setSimulation,
+  solvedLive,
+  startSizing,
+  startSweep,
+} from './simulation.ts';
+import type { AnalysedInputs, SimulationState } from './simulationSlice.ts';
+import { store, type RailwiseState } from './store.ts';
+
+/** Cells with up to this many vectors are checked by themselves after each edit; larger ones on a click. */
+export const AUTO_SWEEP_VECTORS = 1024;
+/** Waits for edits to pause before starting jobs by themselves. */
+export const SWEEP_DEBOUNCE_MS = 120;
+
+/** Which lanes a change made stale. */
+interface Staleness {
+  readonly netlist: boolean;
+  readonly check: boolean;
+  readonly sweep: boolean;
+  readonly sequence: boolean;
+  readonly sizing: boolean;
+  readonly activity: boolean;
+}
+
+function analysedNow(s: RailwiseState): AnalysedInputs {
+  const sim = s.simulation;
+  return {
+    netlistRevision: s.netlistRevision,
+    expectations: s.design.expectations,
+    sequences: s.design.sequences,
+    sequenceIndex: sim.sequenceIndex,
+    undrivenInputs: sim.undrivenInputs,
+    load: sim.powerSettings.load,
+    activity: sim.powerSettings.activity,
+  };
+}
+
+function staleness(s: RailwiseState): Staleness {
+  const a = s.simulation.analysed;
+  const now = analysedNow(s);
+  const netlist = now.netlistRevision !== a.netlistRevision;
+  const check = netlist || now.expectations !== a.expectations;
+  return {
+    netlist,
+    check,
+    sweep: check || now.undrivenInputs !== a.undrivenInputs,
+    sequence: check || now.sequences !== a.sequences || now.sequenceIndex !== a.sequenceIndex,
+    sizing: netlist || now.load !== a.load,
+    activity: now.activity !== a.activity,
+  };
+}
+
+/**
+ * The page's one compile of a netlist revision (the live session), and the live vector solved on
+ * it from an unknown state.
+ */
+function followNetlist(s: RailwiseState): void {
+  const { netlist, technology } = s.design;
+  try {
+    setSimulation({ session: new LiveSession(netlist, technology), selectedRow: null, selectedStep: null });
+    setSimulation(solvedLive(completeVector(netlist.inputs, s.simulation.vector)));
+  } catch (error) {
+    const liveError = error instanceof Error ? `${error.name}: ${error.message}` : String(error);
+    setSimulation({ session: null, live: null, liveError, selectedRow: null, selectedStep: null });
+  }
+}
+
+/** The power figures from the pass the activity comes from, for the current settings. */
+export function finishedPower(sim: SimulationState): Pick<SimulationState, 'power' | 'powerError'> {
+  const source = sim.powerSettings.activity === 'random' ? sim.sweep : sim.sequence;
+  const counts = source.status === 'done' ? (source.result?.power ?? null) : null;
+  if (counts === null) return { power: null, powerError: null };
+  try {
+    return { power: powerFromCounts(counts, sim.powerSettings), powerError: null };
+  } catch (error) {
+    return { power: null, powerError: error instanceof Error ? error.message : String(error) };
+  }
+}
+
+/** Brings the slice up to date with the document; returns which lanes went stale. */
+function follow(s: RailwiseState): Staleness {
+  const stale = staleness(s);
+  if (!Object.values(stale).some(Boolean)) return stale;
+  setSimulation({
+    analysed: analysedNow(s),
+    analysisRevision: stale.check ? s.revision : s.simulation.analysisRevision,
+    ...(stale.sweep ? { sweep: IDLE_JOB } : {}),
+    ...(stale.sequence ? { sequence: IDLE_JOB, selectedStep: null } : {}),
+    ...(stale.sizing ? { sizing: IDLE_JOB } : {}),
+  });
+  if (stale.netlist) followNetlist(store.getState());
+  return stale;
+}
+
+/** Starts, once edits pause, the jobs a small cell needs to show everything. */
+function autoRun(stale: Staleness): void {
+  const s = store.getState();
+  const sim = s.simulation;
+  const cell = { netlist: s.design.netlist, technology: s.design.technology, expectations: {} };
+  if (jobSize({ kind: 'sweep', revision: 0, cell, undrivenInputs: sim.undrivenInputs }) > AUTO_SWEEP_VECTORS)
+    return;
+  const bySequence = sim.powerSettings.activity === 'sequence';
+  if (stale.sweep && sim.sweep.status === 'idle') void startSweep();
+  if (stale.sizing && sim.sizing.status === 'idle') void startSizing();
+  if (
+    (stale.sequence || stale.activity) &&
+    bySequence &&
+    sim.sequence.status === 'idle' &&
+    currentSteps().length > 0
+  )
+    void runSequence();
+}
+
+/** Follows the store from now on; returns the function that stops following. */
+export function startAnalysis(): () => void {
+  let timer: ReturnType<typeof setTimeout> | null = null;
+  let pending: Staleness | null = null;
+  const react = (s: RailwiseState, previous: RailwiseState | null): void => {
+    const stale = follow(s);
+    if (Object.values(stale).some(Boolean)) {
+      pending = pending === null ? stale : merge(pending, stale);
+      if (timer !== null) clearTimeout(timer);
+      timer = setTimeout(() => {
+        timer = null;
+        const due = pending;
+        pending = null;
+        if (due !== null) autoRun(due);
+      }, SWEEP_DEBOUNCE_MS);
+    }
+    const sim = store.getState().simulation;
+    if (previous === null || powerInputsChanged(sim, previous.simulation)) setSimulation(finishedPower(sim));
+  };
+  react(store.getState(), null);
+  const unsubscribe = store.subscribe((s, previous) => react(s, previous));
+  return () => {
+    unsubscribe();
+    if (timer !== null) clearTimeout(timer);
+  };
+}
+
+function powerInputsChanged(now: SimulationState, before: SimulationState): boolean {
+  return (
+    now.powerSettings !== before.powerSettings ||
+    now.sweep.result !== before.sweep.result ||
+    now.sequence.result !== before.sequence.result ||
+    now.sweep.status !== before.sweep.status ||
+    now.sequence.status !== before.sequence.status
+  );
+}
+
+function merge(a: Staleness, b: Staleness): Staleness {
+  return {
+    netlist: a.netlist || b.netlist,
+    check: a.check || b.check,
+    sweep: a.sweep || b.sweep,
+    sequence: a.sequence || b.sequence,
+    sizing: a.sizing || b.sizing,
+    activity: a.activity || b.activity,
+  };
+}

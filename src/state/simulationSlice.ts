@@ -1,0 +1,80 @@
+/**
+ * The simulation slice of the store: the selected input vector, the live solve of the sheet for it,
+ * the jobs run in the worker (sweep, sequence, sizing) and the power figures finished from their
+ * counts. Plain state only: the actions are in ./simulation.ts, the wiring that follows the document
+ * in ./analysis.ts. Nothing here copies the design: the document slice holds it once.
+ */
+import type { InputVector } from '../core/model/design.ts';
+import { DEFAULT_POWER_SETTINGS, type PowerSettings } from '../core/power/settings.ts';
+import type { ActivitySource, PowerReport } from '../core/power/types.ts';
+import type { LiveSession } from '../core/view/liveSession.ts';
+import type { SolvedView } from '../core/view/solvedView.ts';
+import type { TableView } from '../core/view/vectorTable.ts';
+import { IDLE_JOB, type CheckResult, type JobState, type SizingResult } from '../worker/protocol.ts';
+
+/** What the analysis last followed: a change to any of these is what makes results stale. */
+export interface AnalysedInputs {
+  readonly netlistRevision: number;
+  readonly expectations: object | null;
+  readonly sequences: object | null;
+  readonly sequenceIndex: number;
+  readonly undrivenInputs: boolean;
+  readonly load: number;
+  readonly activity: ActivitySource;
+}
+
+export interface SimulationState {
+  /** The revision at which the netlist, technology or expected functions last changed: jobs carry it. */
+  readonly analysisRevision: number;
+  readonly analysed: AnalysedInputs;
+  /** The compiled netlist and simulator of the current netlist revision, on the page's thread. */
+  readonly session: LiveSession | null;
+  readonly vector: InputVector;
+  readonly live: SolvedView | null;
+  readonly liveError: string | null;
+  readonly sweep: JobState<CheckResult>;
+  readonly sequence: JobState<CheckResult>;
+  readonly sizing: JobState<SizingResult>;
+  readonly powerSettings: PowerSettings;
+  /** Finished from the counts of the sweep (random activity) or the sequence, for powerSettings. */
+  readonly power: PowerReport | null;
+  readonly powerError: string | null;
+  readonly sequenceIndex: number;
+  readonly selectedStep: number | null;
+  readonly stripNets: readonly string[];
+  readonly table: TableView;
+  readonly selectedRow: number | null;
+  /** Sweeps also leave each input undriven (Z), for pins a bus may release. */
+  readonly undrivenInputs: boolean;
+}
+
+export const NOTHING_ANALYSED: AnalysedInputs = {
+  netlistRevision: -1,
+  expectations: null,
+  sequences: null,
+  sequenceIndex: 0,
+  undrivenInputs: false,
+  load: DEFAULT_POWER_SETTINGS.load,
+  activity: DEFAULT_POWER_SETTINGS.activity,
+};
+
+export const INITIAL_SIMULATION: SimulationState = {
+  analysisRevision: -1,
+  analysed: NOTHING_ANALYSED,
+  session: null,
+  vector: {},
+  live: null,
+  liveError: null,
+  sweep: IDLE_JOB,
+  sequence: IDLE_JOB,
+  sizing: IDLE_JOB,
+  powerSettings: DEFAULT_POWER_SETTINGS,
+  power: null,
+  powerError: null,
+  sequenceIndex: 0,
+  selectedStep: null,
+  stripNets: [],
+  table: { sort: 'vector', direction: 'ascending', filter: 'all' },
+  selectedRow: null,
+  undrivenInputs: false,
+};
