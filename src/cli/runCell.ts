@@ -85,14 +85,17 @@ export function sequenceSteps(job: CellJob, text: string): readonly InputVector[
   return parseSequenceText(text, job.netlist.inputs);
 }
 
-/** Settings as given, else the core's defaults; activity follows the sequence when there is one. */
+/**
+ * Settings as given, else the core's defaults (the app's too); with --sequence the activity is that
+ * sequence's unless --activity says otherwise, and --activity sequence alone uses the first saved one.
+ */
 function powerSettings(
   job: CellJob,
   given: Partial<PowerSettings>,
   steps: readonly InputVector[] | undefined,
 ): { settings: PowerSettings; request: PowerRequest } {
+  const activity = given.activity ?? (steps === undefined ? DEFAULT_POWER_SETTINGS.activity : 'sequence');
   const sequence = steps ?? job.sequences[0]?.steps;
-  const activity = given.activity ?? (sequence === undefined ? 'random' : 'sequence');
   const settings = { ...DEFAULT_POWER_SETTINGS, ...given, activity };
   return { settings, request: { activity, ...(sequence === undefined ? {} : { sequence }) } };
 }

@@ -6,6 +6,11 @@ import { STARTERS } from '../../src/core/starters/index.ts';
 const options = { frequency: 100e6, activity: 'random', load: 10e-15 } as const;
 
 describe('power and sizing over every starter cell', () => {
+  it('has starter cells to check, some of them with stored state and a sequence', () => {
+    expect(STARTERS.length).toBeGreaterThanOrEqual(10);
+    expect(STARTERS.filter((s) => s.design.sequences.length > 0).length).toBeGreaterThan(0);
+  });
+
   for (const { id, design } of STARTERS) {
     it(`${id}: figures within their physical bounds`, () => {
       const power = powerReport(design.netlist, design.technology, options);
@@ -36,7 +41,9 @@ describe('power and sizing over every starter cell', () => {
   });
 
   it('sequences of the stateful starters give activities of at most one rise per step change', () => {
-    for (const { design } of STARTERS.filter((s) => s.design.sequences.length > 0)) {
+    const stateful = STARTERS.filter((s) => s.design.sequences.length > 0);
+    expect(stateful.length).toBeGreaterThan(0);
+    for (const { design } of stateful) {
       const sequence = design.sequences[0].steps;
       const power = powerReport(
         design.netlist,
