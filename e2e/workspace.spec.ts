@@ -183,3 +183,46 @@ test('a big sweep runs in the background with progress and can be cancelled', as
   await expect(ws.root.getByTestId('job-bar')).toHaveCount(0);
   expect(errors).toEqual([]);
 });
+
+test('sequence text: one step per line, the format beside the field, bad text refused at its place', async ({
+  page,
+}) => {
+  const { app, ws } = await start(page);
+  await app.starter('Cross-coupled NAND latch');
+  const section = ws.sequenceSection;
+  await expect(section.getByTestId('steps-format')).toContainText('One step per line or separated by ";"');
+  const field = section.getByTestId('steps-text');
+  await field.fill('Sb=0 Rb=1\nSb=1 Rb=1\nSb=1, Rb=0\n-\n');
+  await section.getByTestId('steps-apply').click();
+  await expect(section.locator('[data-testid^="step-"][data-testid$="-Sb"]')).toHaveCount(4);
+  await ws.runSequence();
+  // Set, hold, reset, then a step that changes nothing: Q = 1, 1, 0, 0 (W&H 4th ed., sequential
+  // circuits; common practice).
+  expect(await ws.stripLevels('Q')).toEqual(['1', '1', '0', '0']);
+  await field.fill('Sb=0 Rb=1\nSb=2');
+  await section.getByTestId('steps-apply').click();
+  await expect(section.getByRole('alert')).toContainText(
+    'line 2, column 4: the value of Sb must be 0, 1, X or Z',
+  );
+  await expect(section.locator('[data-testid^="step-"][data-testid$="-Sb"]')).toHaveCount(4);
+});
+
+test('the sheet shows levels with every panel section closed', async ({ page }) => {
+  const { app, ws } = await start(page);
+  const open = ws.root.locator('details[open] > summary');
+  while ((await open.count()) > 0) await open.first().click();
+  // The demo NAND2 at A = 0, B = 0 gives Y = 1; double-clicking the input pin A and then B on the
+  // sheet gives A = B = 1 and Y = 0 (common practice, no source).
+  expect(await page.evaluate(() => window.__railwise!.overlayLevel('Y'))).toBe('1');
+  for (const name of ['A', 'B']) {
+    const part = await page.evaluate(
+      (n) => window.__railwise!.state().doc.sheet.parts.find((p) => p.kind === 'input' && p.name === n),
+      name,
+    );
+    if (part === undefined) throw new Error(`no input pin ${name}`);
+    const box = partBounds(part as SheetPart);
+    const at = await app.toPage({ x: (box.x0 + box.x1) / 2, y: (box.y0 + box.y1) / 2 });
+    await page.mouse.dblclick(at.x, at.y);
+  }
+  await expect.poll(() => page.evaluate(() => window.__railwise!.overlayLevel('Y'))).toBe('0');
+});

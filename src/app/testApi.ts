@@ -11,6 +11,8 @@ import { AUTOSAVE_KEY } from './autosave.ts';
 export interface RailwiseTestApi {
   state: typeof store.getState;
   netlist: () => unknown;
+  /** The level the sheet overlay paints on a net for the vector shown (from the simulation slice). */
+  overlayLevel: (net: string) => string | null;
   /** Page (client) coordinates of a sheet grid point. */
   toPage: (p: Point) => Point;
   undo: typeof undo;
@@ -28,6 +30,7 @@ export function installTestApi(): void {
   window.__railwise = {
     state: store.getState,
     netlist: () => store.getState().design.netlist,
+    overlayLevel: (net) => store.getState().simulation.live?.net(net)?.level ?? null,
     toPage(p) {
       const canvas = document.querySelector('[data-testid="sheet"]');
       const box = canvas?.getBoundingClientRect() ?? { left: 0, top: 0 };

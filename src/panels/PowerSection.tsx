@@ -2,15 +2,7 @@ import { useState } from 'react';
 import { engineering } from '../core/view/format.ts';
 import type { PowerSettings } from '../core/power/settings.ts';
 import { useStore } from '../state/store.ts';
-import {
-  cancelJob,
-  computePowerAndSizing,
-  setPowerSettings,
-  useSimulation,
-  type JobState,
-  type SimulationState,
-} from '../state/simulation.ts';
-import { JobBar } from './JobBar.tsx';
+import { computePowerAndSizing, setPowerSettings, useSimulation } from '../state/simulation.ts';
 import { PowerSizingPanel } from './power/PowerSizingPanel.tsx';
 import { Section } from './Section.tsx';
 
@@ -88,29 +80,19 @@ function Settings({ settings, hasSequence }: { settings: PowerSettings; hasSeque
   );
 }
 
-/** The job the power figures wait for: the pass their activity comes from, or the sizing. */
-function busyJob(
-  source: SimulationState['sweep'],
-  sourceLane: 'sweep' | 'sequence',
-  sizing: SimulationState['sizing'],
-): { lane: 'sweep' | 'sequence' | 'sizing'; job: JobState<unknown> } | null {
-  if (source.status === 'running') return { lane: sourceLane, job: source };
-  return sizing.status === 'running' ? { lane: 'sizing', job: sizing } : null;
-}
-
 /** Power and sizing: the settings, then the power engineer's figures for the current cell. */
 export function PowerSection() {
   const settings = useSimulation((s) => s.powerSettings);
   const power = useSimulation((s) => s.power);
   const sizing = useSimulation((s) => s.sizing);
-  const sourceLane = settings.activity === 'random' ? 'sweep' : 'sequence';
-  const source = useSimulation((s) => s[sourceLane]);
-  const busy = busyJob(source, sourceLane, sizing);
+  const bySequence = settings.activity === 'sequence';
+  const sourceRunning = useSimulation((s) => (bySequence ? s.sequence : s.sweep).status === 'running');
+  const busy = sourceRunning || sizing.status === 'running';
   const sequenceIndex = useSimulation((s) => s.sequenceIndex);
   const hasSequence = useStore((s) => (s.design.sequences[sequenceIndex]?.steps.length ?? 0) > 0);
   const powerError = useSimulation((s) => s.powerError);
   const error = powerError ?? sizing.error ?? sizing.result?.error ?? null;
-  const idle = power === null && busy === null;
+  const idle = power === null && !busy;
   return (
     <Section
       title="Power and sizing"
@@ -124,16 +106,13 @@ export function PowerSection() {
           Compute power and sizing
         </button>
       )}
-      {busy !== null &&
-        (busy.job.long ? (
-          <JobBar
-            label="Computing power"
-            progress={busy.job.progress}
-            onCancel={() => cancelJob(busy.lane)}
-          />
-        ) : (
-          <p className="rw-muted">Computing…</p>
-        ))}
+      {busy && (
+        <p className="rw-muted">
+          {sourceRunning
+            ? `Counting power on ${bySequence ? "the sequence's steps" : 'the check of every vector'}…`
+            : 'Computing…'}
+        </p>
+      )}
       <PowerSizingPanel power={power} sizing={sizing.result?.sizing ?? null} error={error} />
     </Section>
   );
