@@ -13,19 +13,11 @@ import {
 } from '../../src/core/format/designFile.ts';
 import { MIGRATIONS } from '../../src/core/format/migrations.ts';
 import type { Design } from '../../src/core/model/design.ts';
-import { circuit } from '../../src/core/model/builder.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import type { SheetPart } from '../../src/core/sheet/types.ts';
 import { makeSheetPart, PART_KINDS } from '../../src/core/sheet/parts/index.ts';
 import { netlistArb } from '../netlist-io/arbitraries.ts';
-
-const inverter = circuit('inv')
-  .rails()
-  .input('A')
-  .output('Y')
-  .pmos('P1', { g: 'A', d: 'Y', s: 'VDD', w: 2 })
-  .nmos('N1', { g: 'A', d: 'Y', s: 'GND' })
-  .build();
+import { inverter } from '../cells.ts';
 
 const design: Design = {
   name: 'Lamp inverter',

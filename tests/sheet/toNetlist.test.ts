@@ -1,19 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { sheetToNetlist } from '../../src/core/sheet/toNetlist.ts';
 import type { Sheet } from '../../src/core/sheet/types.ts';
-import { circuit } from '../../src/core/model/builder.ts';
 import { drawnInverter, part } from './fixtures.ts';
+import { inverter } from '../cells.ts';
 
 describe('sheetToNetlist', () => {
   it('derives the static CMOS inverter from a drawing', () => {
     // The inverter topology (PMOS VDD→Y, NMOS Y→GND, both gates on A) is common practice, no source.
-    const expected = circuit('inv')
-      .rails()
-      .input('A')
-      .output('Y')
-      .pmos('P1', { g: 'A', d: 'Y', s: 'VDD', w: 2 })
-      .nmos('N1', { g: 'A', d: 'Y', s: 'GND' })
-      .build();
+    const expected = inverter;
     const d = sheetToNetlist(drawnInverter(), 'inv');
     expect(d.netlist).toEqual(expected);
     expect(d.issues).toEqual([]);

@@ -4,6 +4,7 @@ import { DEFAULT_TECHNOLOGY, type Technology } from '../../src/core/model/techno
 import { FLAG_DEGRADED } from '../../src/core/solver/levels.ts';
 import type { InputValue } from '../../src/core/model/design.ts';
 import { solve, solveSteps } from '../helpers.ts';
+import { nand2 } from '../cells.ts';
 
 describe('IEEE Std 1364 switch primitives with an X or Z control', () => {
   // Source: IEEE Std 1364-2005 clause 7 (carried as IEEE Std 1800-2017 table 28-6): nmos switch,
@@ -46,15 +47,7 @@ describe("Bryant's switch-level model", () => {
   // Source: R. E. Bryant, "A switch-level model and simulator for MOS digital systems", IEEE Trans.
   // Computers C-33(2), 1984 (rule restated from memory): a node is definite under an indeterminate
   // transistor only if it has the same value with it open and closed.
-  const nand = circuit('nand')
-    .rails()
-    .input('A', 'B')
-    .output('Y')
-    .pmos('PA', { g: 'A', d: 'Y', s: 'VDD' })
-    .pmos('PB', { g: 'B', d: 'Y', s: 'VDD' })
-    .nmos('NA', { g: 'A', d: 'Y', s: 'x' })
-    .nmos('NB', { g: 'B', d: 'x', s: 'GND' })
-    .build();
+  const nand = nand2;
   it('NAND2 with A = 0, B = X gives 1', () => expect(solve(nand, { A: '0', B: 'X' }).level('Y')).toBe('1'));
   it('NAND2 with A = 1, B = X gives X', () => expect(solve(nand, { A: '1', B: 'X' }).level('Y')).toBe('X'));
   it('an inverter with input X gives X', () => {
