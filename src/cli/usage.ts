@@ -1,5 +1,6 @@
 /** Help texts and the error for unusable arguments (exit status 2). */
 import { CAUTION } from '../core/caution.ts';
+import { VIH_FRACTION, VIL_FRACTION } from '../core/model/technology.ts';
 import { DEFAULT_POWER_SETTINGS } from '../core/power/settings.ts';
 import { formatSi } from './colour.ts';
 
@@ -40,7 +41,7 @@ Pins and expectations (one cell: a single-cell file, or a library with --cell):
   --cell NAME           check only this cell of a library
 
 Circuit:
-  --vdd V               supply voltage (thresholds follow at 0.35 and 0.65 of VDD)
+  --vdd V               supply voltage (thresholds follow at ${VIL_FRACTION} and ${VIH_FRACTION} of VDD)
   --supply NAMES        extra supply rail net names, comma separated
   --ground NAMES        extra ground rail net names, comma separated
   --undriven            also leave each input undriven (Z) in the sweep

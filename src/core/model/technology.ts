@@ -35,6 +35,13 @@ export interface Technology {
   readonly kpp: number;
 }
 
+/**
+ * Input thresholds as fractions of VDD: VIL = 0.35·VDD, VIH = 0.65·VDD (JESD8 family, from memory).
+ * The one definition the default technology, a changed supply and the command line's --vdd use.
+ */
+export const VIL_FRACTION = 0.35;
+export const VIH_FRACTION = 0.65;
+
 export const TEXTBOOK_SOURCE =
   'Rabaey, Chandrakasan, Nikolić, Digital Integrated Circuits, 2nd ed. (2003), 0.25 µm process, tables 3.2–3.3';
 
@@ -45,8 +52,8 @@ export const DEFAULT_TECHNOLOGY: Technology = {
   rp: 31e3,
   vtn: 0.43,
   vtp: 0.4,
-  vil: 0.35 * 2.5,
-  vih: 0.65 * 2.5,
+  vil: VIL_FRACTION * 2.5,
+  vih: VIH_FRACTION * 2.5,
   cgPerArea: 6e-15,
   cdPerWidth: 1e-15,
   ioffPerWidth: 1e-10,
@@ -54,7 +61,7 @@ export const DEFAULT_TECHNOLOGY: Technology = {
   kpp: 30e-6,
 };
 
-/** A technology at another supply: thresholds follow VDD as fractions 0.35 and 0.65. */
+/** A technology at another supply: thresholds follow VDD as VIL_FRACTION and VIH_FRACTION. */
 export function withVdd(tech: Technology, vdd: number): Technology {
-  return { ...tech, vdd, vil: 0.35 * vdd, vih: 0.65 * vdd };
+  return { ...tech, vdd, vil: VIL_FRACTION * vdd, vih: VIH_FRACTION * vdd };
 }
