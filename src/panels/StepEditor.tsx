@@ -95,11 +95,12 @@ function StepText({ inputs, steps, onChange }: Pick<StepEditorProps, 'inputs' | 
   };
   return (
     <div className="rw-step-text">
-      <label htmlFor="rw-steps-text" className="rw-muted" data-testid="steps-format">
+      <p id="rw-steps-format" className="rw-muted" data-testid="steps-format">
         {SEQUENCE_FORMAT_HINT}
-      </label>
+      </p>
       <textarea
-        id="rw-steps-text"
+        aria-label="Steps as text"
+        aria-describedby="rw-steps-format"
         data-testid="steps-text"
         spellCheck={false}
         rows={Math.min(8, Math.max(2, steps.length + 1))}
