@@ -64,10 +64,17 @@ function expectationOf(pin: LibertyPin, inputs: ReadonlyMap<string, string>, sou
   }
 }
 
-/** Power and ground pin names over the whole library, for reading the netlists' rails. */
+/**
+ * Power and ground names over the whole library, for reading the netlists' rails: every cell's
+ * power pins, and every name of the library's `voltage_map` (0 V a ground, else a supply), which
+ * also covers well pins that are no `pg_pin` of any cell.
+ */
 export function powerNames(library: LibertyLibrary): { supply: string[]; ground: string[] } {
   const supply = new Set<string>();
   const ground = new Set<string>();
+  library.voltages.forEach((volts, name) => {
+    if (Number.isFinite(volts)) (volts === 0 ? ground : supply).add(name);
+  });
   for (const cell of library.cells)
     for (const p of cell.powerPins) (p.role === 'supply' ? supply : ground).add(p.name);
   return { supply: [...supply], ground: [...ground].filter((n) => !supply.has(n)) };

@@ -31,6 +31,8 @@ export interface LibertyCell {
 export interface LibertyLibrary {
   readonly name: string;
   readonly cells: readonly LibertyCell[];
+  /** The library's `voltage_map`: supply net names and their voltages. */
+  readonly voltages: ReadonlyMap<string, number>;
 }
 
 const SEQUENTIAL = new Set(['ff', 'ff_bank', 'latch', 'latch_bank', 'statetable']);
@@ -42,7 +44,7 @@ export function readLiberty(text: string): LibertyLibrary {
   if (library === undefined) throw new LibertyError(1, 'no library group: this is not a Liberty file');
   const voltages = voltageMap(library);
   const cells = library.groups.filter((g) => g.type === 'cell').map((g) => readCell(g, voltages));
-  return { name: library.names[0] ?? '', cells };
+  return { name: library.names[0] ?? '', cells, voltages };
 }
 
 /** `voltage_map (VPWR, 1.8);` at the library level: the voltage each supply name stands for. */

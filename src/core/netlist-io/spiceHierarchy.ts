@@ -102,7 +102,7 @@ export class Hierarchy {
             open.add(sub);
           }
         }
-      } else if (e.kind !== 'source' && e.kind !== 'short') f.devices += 1;
+      } else if (e.kind !== 'source') f.devices += 1;
     }
     return result;
   }
