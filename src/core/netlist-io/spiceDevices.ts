@@ -63,6 +63,15 @@ function multiplier(b: CellBuilder, e: MosElement): number {
 function micronsParam(b: CellBuilder, e: MosElement, key: 'w' | 'l'): number {
   const text = e.params.get(key);
   if (text === undefined) return key === 'w' ? 1 : 0.25;
+  const cacheKey = key + text;
+  const known = b.sizes.get(cacheKey);
+  if (known !== undefined) return known;
+  const microns = checkedMicrons(b, e, key, text);
+  b.sizes.set(cacheKey, microns);
+  return microns;
+}
+
+function checkedMicrons(b: CellBuilder, e: MosElement, key: 'w' | 'l', text: string): number {
   const field = key.toUpperCase();
   const microns = scaledMicrons(text, b.ctx.scale?.factor ?? 1);
   if (microns === null || !(microns > 0))
@@ -88,6 +97,14 @@ export function implausible(text: string, microns: number): string {
 
 /** From the model card; failing that, from the model's name (nch, pfet, …). */
 function mosKind(b: CellBuilder, e: MosElement): MosKind {
+  const known = b.modelKinds.get(e.model);
+  if (known !== undefined) return known;
+  const kind = modelKind(b, e);
+  b.modelKinds.set(e.model, kind);
+  return kind;
+}
+
+function modelKind(b: CellBuilder, e: MosElement): MosKind {
   const lower = e.model.toLowerCase();
   const models = b.ctx.file.models;
   // Binned model sets name their bins `nch.1`, `nch.2`…; any bin gives the type.

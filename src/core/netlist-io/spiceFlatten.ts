@@ -6,7 +6,7 @@
  * Instances of subcircuits the file does not define stand for devices by the rules of
  * `deviceNames.ts`; `short` links join their nets afterwards (`spiceShorts.ts`).
  */
-import type { Device } from '../model/netlist.ts';
+import type { Device, MosKind } from '../model/netlist.ts';
 import type { Body, SpiceFile } from './spiceParse.ts';
 import type { Element, InstanceElement, SourceElement } from './spiceElements.ts';
 import { SpiceImportError } from './spiceErrors.ts';
@@ -45,6 +45,8 @@ export interface FlattenContext {
 
 export interface Scope {
   readonly prefix: string;
+  /** The prefix in lower case, for the case-blind net index. */
+  readonly lowerPrefix: string;
   /** Lower-case local port name → net in the enclosing scope. */
   readonly ports: ReadonlyMap<string, string>;
 }
@@ -55,17 +57,27 @@ export class CellBuilder {
   readonly shorts: ShortLink[] = [];
   readonly notes = new DeviceNotesCollector();
   private readonly byLower = new Map<string, string>();
+  /** Local names repeat in every instance: their lower case and whether they are global, once. */
+  private readonly locals = new Map<string, { lower: string; global: boolean }>();
+  /** Caches for the device readers: a model's type and a size text's value, per cell. */
+  readonly modelKinds = new Map<string, MosKind>();
+  readonly sizes = new Map<string, number>();
 
   constructor(readonly ctx: FlattenContext) {}
 
   net(local: string, scope: Scope): string {
-    const lower = local.toLowerCase();
-    const port = scope.ports.get(lower);
+    let info = this.locals.get(local);
+    if (info === undefined) {
+      const lower = local.toLowerCase();
+      info = { lower, global: this.ctx.isGlobal(lower) };
+      this.locals.set(local, info);
+    }
+    const port = scope.ports.get(info.lower);
     if (port !== undefined) return port;
-    const full = this.ctx.isGlobal(lower) ? local : `${scope.prefix}${local}`;
-    const key = full.toLowerCase();
+    const key = info.global ? info.lower : scope.lowerPrefix + info.lower;
     const known = this.byLower.get(key);
     if (known !== undefined) return known;
+    const full = info.global ? local : scope.prefix + local;
     this.byLower.set(key, full);
     return full;
   }
@@ -106,7 +118,7 @@ export class DeviceNotesCollector implements DeviceNotes {
 /** Flattens a body; `ports` are the cell's own port names (registered first, in order). */
 export function flattenCell(body: Body, ports: readonly string[], ctx: FlattenContext): FlatCell {
   const b = new CellBuilder(ctx);
-  const root: Scope = { prefix: '', ports: new Map() };
+  const root: Scope = { prefix: '', lowerPrefix: '', ports: new Map() };
   ports.forEach((p) => b.net(p, root));
   expand(b, body, root);
   const joined = joinShorts(b, new Set(ports.map((p) => p.toLowerCase())));
@@ -184,5 +196,6 @@ function enter(b: CellBuilder, x: InstanceElement, scope: Scope): Frame | null {
   }
   x.params.forEach((_, p) => b.notes.ignoredParams.add(p));
   const ports = new Map(sub.ports.map((p, i) => [p.toLowerCase(), b.net(x.nets[i] as string, scope)]));
-  return { body: sub, scope: { prefix: `${scope.prefix}${x.name}/`, ports }, next: 0 };
+  const prefix = `${scope.prefix}${x.name}/`;
+  return { body: sub, scope: { prefix, lowerPrefix: prefix.toLowerCase(), ports }, next: 0 };
 }
