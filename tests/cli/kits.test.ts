@@ -4,27 +4,11 @@
  * published functions (docs/semantics.md §4–§6).
  */
 import { describe, expect, it } from 'vitest';
-import { run } from '../../src/cli/main.ts';
+import { json, railwise } from './inProcess.ts';
 
 const SPICE = 'tests/cli/fixtures/harbour-kit.spice';
 const CDL = 'tests/cli/fixtures/harbour-kit.cdl';
 const LIB = 'tests/cli/fixtures/harbour.lib';
-
-async function railwise(...argv: string[]): Promise<{ status: number; out: string; err: string }> {
-  let out = '';
-  let err = '';
-  const status = await run(argv, {
-    out: (t) => (out += `${t}\n`),
-    err: (t) => (err += `${t}\n`),
-    colour: false,
-  });
-  return { status, out, err };
-}
-
-async function json(...argv: string[]): Promise<{ status: number; body: Record<string, unknown> }> {
-  const r = await railwise(...argv, '--json');
-  return { status: r.status, body: JSON.parse(r.out) as Record<string, unknown> };
-}
 
 type Cell = Record<string, unknown> & { cell: string };
 

@@ -3,29 +3,13 @@
  * 0 / 1 / 2 of docs/semantics.md §5, the JSON shape, and the exports. bin.test.ts runs the real executable.
  */
 import { describe, expect, it } from 'vitest';
-import { run } from '../../src/cli/main.ts';
+import { json, railwise } from './inProcess.ts';
 import { colourWanted, formatSi } from '../../src/cli/colour.ts';
 
 const LIB = 'public/examples/tidewater-cells.sp';
 const BROKEN_LIB = 'tests/cli/fixtures/buoy-lib-with-broken-cell.sp';
 const DIVIDER = 'tests/cli/fixtures/divider.sp';
 const TG = 'tests/cli/fixtures/tg.sp';
-
-async function railwise(...argv: string[]): Promise<{ status: number; out: string; err: string }> {
-  let out = '';
-  let err = '';
-  const status = await run(argv, {
-    out: (t) => (out += `${t}\n`),
-    err: (t) => (err += `${t}\n`),
-    colour: false,
-  });
-  return { status, out, err };
-}
-
-async function json(...argv: string[]): Promise<{ status: number; body: Record<string, unknown> }> {
-  const r = await railwise(...argv, '--json');
-  return { status: r.status, body: JSON.parse(r.out) as Record<string, unknown> };
-}
 
 describe('arguments', () => {
   it('prints help with exit status 0', async () => {

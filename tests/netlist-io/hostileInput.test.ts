@@ -4,19 +4,14 @@
  * source); each refusal names the file, the line and the field.
  */
 import { describe, expect, it } from 'vitest';
-import { importSpice, SpiceImportError } from '../../src/core/netlist-io/spiceImport.ts';
+import { importSpice, type SpiceImportError } from '../../src/core/netlist-io/spiceImport.ts';
+import { refusalOf } from './refusal.ts';
 import { MAX_FLAT_DEVICES } from '../../src/core/netlist-io/spiceHierarchy.ts';
 
 const FILE = 'hostile.sp';
 
 function refusal(text: string): SpiceImportError {
-  try {
-    importSpice(text, FILE);
-  } catch (e) {
-    if (e instanceof SpiceImportError) return e;
-    throw e;
-  }
-  throw new Error('expected a refusal');
+  return refusalOf(text, FILE);
 }
 
 const cell = (line: string) => `.subckt c A Y vdd gnd\nMP Y A vdd vdd pch W=1u L=0.25u\n${line}\n.ends\n`;

@@ -4,7 +4,8 @@
  * open kits' conventions (`…nfet…`, `…_lv_pmos`); the naming rule is common practice, no source.
  */
 import { describe, expect, it } from 'vitest';
-import { importSpice, SpiceImportError } from '../../src/core/netlist-io/spiceImport.ts';
+import { importSpice, type SpiceImportError } from '../../src/core/netlist-io/spiceImport.ts';
+import { refusalOf } from './refusal.ts';
 import type { Netlist } from '../../src/core/model/netlist.ts';
 
 const FILE = 'kit/cells.spice';
@@ -17,13 +18,7 @@ function only(text: string, options = {}): { netlist: Netlist; notes: readonly s
 }
 
 function refusal(text: string, options = {}): SpiceImportError {
-  try {
-    importSpice(text, FILE, options);
-  } catch (e) {
-    if (e instanceof SpiceImportError) return e;
-    throw e;
-  }
-  throw new Error('expected a refusal');
+  return refusalOf(text, FILE, options);
 }
 
 const INV = (n: string, p: string) => `.subckt inv A Y VGND VPWR

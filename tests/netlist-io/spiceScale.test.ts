@@ -5,7 +5,8 @@
  * all a centimetre or more in metres is read in micrometres with a note (our own rule).
  */
 import { describe, expect, it } from 'vitest';
-import { importSpice, SpiceImportError } from '../../src/core/netlist-io/spiceImport.ts';
+import { importSpice, type SpiceImportError } from '../../src/core/netlist-io/spiceImport.ts';
+import { refusalOf } from './refusal.ts';
 import type { MosDevice } from '../../src/core/model/netlist.ts';
 
 const FILE = 'kit/cells.cdl';
@@ -19,13 +20,7 @@ function cellOf(body: string, options = {}) {
 }
 
 function refusal(text: string, options = {}): SpiceImportError {
-  try {
-    importSpice(text, FILE, options);
-  } catch (e) {
-    if (e instanceof SpiceImportError) return e;
-    throw e;
-  }
-  throw new Error('expected a refusal');
+  return refusalOf(text, FILE, options);
 }
 
 const PAIR = (w: string, l: string) => `MP Y A VDD VDD pch w=${w} l=${l}\nMN Y A VSS VSS nch w=${w} l=${l}`;
