@@ -161,7 +161,7 @@ function cellChoice(v: CellValues): CellChoice {
     ...(v.inputs === undefined ? {} : { inputs: list(v.inputs) }),
     ...(v.outputs === undefined ? {} : { outputs: list(v.outputs) }),
     ...(v.sequence === undefined ? {} : { sequence: v.sequence }),
-    ...(v.vdd === undefined ? {} : { vdd: positiveNumber('--vdd', v.vdd) }),
+    ...(v.vdd === undefined ? {} : { vdd: supplyVolts(v.vdd) }),
   };
 }
 
@@ -219,8 +219,10 @@ function list(text: string | undefined): string[] {
 
 function loadValue(text: string | undefined): number {
   const load = text === undefined ? 0 : spiceValue(text);
-  if (load === null || load < 0)
-    throw new UsageError(`--load "${text}" is not a capacitance in farads (e.g. 10f)`);
+  if (load === null || load < 0 || (load > 0 && rangeProblem('farads', load) !== null))
+    throw new UsageError(
+      `--load "${text}" is not a capacitance in farads from 1 zF to 1 µF, or 0 (e.g. 10f)`,
+    );
   return load;
 }
 
@@ -238,10 +240,19 @@ export function frequency(text: string): number {
   return positiveNumber('--freq', text);
 }
 
-/** Accepts SPICE-style numbers: `2.5`, `100meg`, `1e8`. */
+/** Accepts SPICE-style numbers: `2.5`, `100meg`, `1e8`; finite ones only. */
 function positiveNumber(flag: string, text: string): number {
   const value = spiceValue(text);
-  if (value === null || !(value > 0)) throw new UsageError(`${flag} "${text}" is not a positive number`);
+  if (value === null || !(value > 0) || !Number.isFinite(value))
+    throw new UsageError(`${flag} "${text}" is not a positive number`);
+  return value;
+}
+
+/** `--vdd`: a positive supply in the range a netlist's sources may have (docs/semantics.md §6). */
+function supplyVolts(text: string): number {
+  const value = positiveNumber('--vdd', text);
+  const problem = rangeProblem('volts', value);
+  if (problem !== null) throw new UsageError(`--vdd "${text}" ${problem}`);
   return value;
 }
 

@@ -107,6 +107,8 @@ describe('netlists as published', () => {
     [['--scale', '10'], /--scale "10" is outside 1e-12 to 1/],
     [['--treat-as', 'kitdev=bjt'], /--treat-as "kitdev=bjt": write NAME=nmos/],
     [['--functions-from', 'nowhere.lib'], /--functions-from nowhere\.lib: cannot read: no such file/],
+    [['--vdd', '1e400'], /--vdd "1e400" is not a positive number/],
+    [['--vdd', '500'], /--vdd "500" is outside 0 to 100 V/],
   ])('%j is unusable (exit 2) with a message naming the flag', async (flags, message) => {
     const r = await railwise('check', CDL, ...flags);
     expect(r.status).toBe(2);

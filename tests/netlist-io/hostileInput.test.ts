@@ -105,3 +105,11 @@ describe('what comes after .end', () => {
     );
   });
 });
+
+describe('a first line that is an element with a value out of range', () => {
+  it('is refused on line 1, not taken for a title', () => {
+    const e = refusalOf('R1 vdd y 1e-300\nMN y a 0 0 nch W=1u L=0.25u\n', FILE);
+    expect(e.line).toBe(1);
+    expect(e.message).toMatch(/R1: ohms 1e-300 is outside 1 mΩ to 1 TΩ/);
+  });
+});

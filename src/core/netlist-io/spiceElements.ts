@@ -65,6 +65,8 @@ export type Element =
 /** Thrown by the element readers; the caller adds the file name. */
 export class ElementError extends Error {
   override readonly name = 'ElementError';
+  /** True when the line reads as an element and only a value is out of its range. */
+  outOfRange = false;
 }
 
 const UNSUPPORTED: Readonly<Record<string, string>> = {
@@ -175,8 +177,10 @@ function readPassive(
 /** The value, or an error naming the element, the field and the documented range. */
 export function inRange(name: string, field: RangedField, text: string, value: number): number {
   const problem = rangeProblem(field, value);
-  if (problem !== null) throw new ElementError(`${name}: ${field} ${text} ${problem}`);
-  return value;
+  if (problem === null) return value;
+  const error = new ElementError(`${name}: ${field} ${text} ${problem}`);
+  error.outOfRange = true;
+  throw error;
 }
 
 function readDiode(name: string, args: readonly string[], line: number): DiodeElement {

@@ -147,13 +147,16 @@ function readLines(text: string, fileName: string): LogicalLine[] {
   }
 }
 
-/** Classic SPICE takes the first line as a title; we do so only when it reads as no element. */
+/**
+ * Classic SPICE takes the first line as a title; we do so only when it reads as no element (an
+ * element whose only fault is a value out of range is an element, refused as such).
+ */
 function isTitle(text: string): boolean {
   try {
     readElement(text, 1);
     return false;
-  } catch {
-    return true;
+  } catch (e) {
+    return !(e instanceof ElementError && e.outOfRange);
   }
 }
 
