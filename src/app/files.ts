@@ -5,7 +5,8 @@
 import type { Design } from '../core/model/design.ts';
 import { DEFAULT_TECHNOLOGY } from '../core/model/technology.ts';
 import { DesignFileError, parseDesignFile, serializeDesign } from '../core/format/designFile.ts';
-import { importSpice, SpiceImportError } from '../core/netlist-io/spiceImport.ts';
+import { SpiceImportError } from '../core/netlist-io/spiceImport.ts';
+import { cellsFromText, isSpiceFileName, SPICE_EXTENSIONS } from '../core/netlist-io/cellFiles.ts';
 import { exportSpice } from '../core/netlist-io/spiceExport.ts';
 import { exportVerilog } from '../core/netlist-io/verilogExport.ts';
 import { exportTruthTableCsv } from '../core/netlist-io/csvExport.ts';
@@ -19,16 +20,12 @@ import { fitToView } from '../state/view.ts';
 import { downloadText, downloadUrl, safeFileName } from './download.ts';
 
 export const DESIGN_EXTENSION = '.railwise.json';
-const SPICE_EXTENSIONS = ['.sp', '.spi', '.cir', '.net', '.cdl', '.spice'];
 export const OPEN_ACCEPT = ['.json', ...SPICE_EXTENSIONS].join(',');
 export const OPEN_INPUT_ID = 'railwise-open-file';
 
 export type ExportKind = 'spice' | 'verilog' | 'csv' | 'svg' | 'png';
 
-export function isSpiceFile(fileName: string): boolean {
-  const lower = fileName.toLowerCase();
-  return SPICE_EXTENSIONS.some((ext) => lower.endsWith(ext));
-}
+export const isSpiceFile = isSpiceFileName;
 
 export interface SpiceDesigns {
   /** One design per readable cell, in file order. */
@@ -39,19 +36,28 @@ export interface SpiceDesigns {
 
 /** Reads a SPICE text into designs, one per cell; throws when no cell at all can be read. */
 export function designsFromSpice(text: string, fileName: string): SpiceDesigns {
-  const result = importSpice(text, fileName);
-  if (result.cells.length === 0) {
-    const first = result.failed[0];
-    throw first ? first.error : new SpiceImportError(fileName, 1, 'no cell could be read');
+  const loaded = cellsFromText(text, fileName).cells;
+  const designs = loaded.flatMap((c): Design[] =>
+    'job' in c
+      ? [
+          {
+            name: c.job.cell,
+            technology: DEFAULT_TECHNOLOGY,
+            netlist: c.job.netlist,
+            expectations: c.job.expectations,
+            sequences: [],
+          },
+        ]
+      : [],
+  );
+  const failed = loaded.flatMap((c) => ('failure' in c ? [c.failure] : []));
+  if (designs.length === 0) {
+    const first = failed[0];
+    const line = first?.line ?? 1;
+    const detail = (first?.message ?? 'no cell could be read').replace(`${fileName}:${line}: `, '');
+    throw new SpiceImportError(fileName, line, detail);
   }
-  const designs = result.cells.map((cell): Design => ({
-    name: cell.name,
-    technology: DEFAULT_TECHNOLOGY,
-    netlist: cell.netlist,
-    expectations: cell.expectations,
-    sequences: [],
-  }));
-  return { designs, failed: result.failed.map((f) => `${f.name} (${f.error.message})`) };
+  return { designs, failed: failed.map((f) => (f.cell === null ? f.message : `${f.cell} (${f.message})`)) };
 }
 
 /** Loads one imported cell and says where it came from. */

@@ -4,6 +4,8 @@
  */
 import { parseArgs, type ParseArgsConfig } from 'node:util';
 import { spiceValue } from '../core/netlist-io/spiceNumber.ts';
+import { parseStandIns, type StandIn } from '../core/netlist-io/deviceNames.ts';
+import { rangeProblem } from '../core/netlist-io/valueRanges.ts';
 import type { PowerSettings } from '../core/power/settings.ts';
 import { UsageError } from './usage.ts';
 
@@ -17,6 +19,14 @@ export interface CellChoice {
   readonly vdd?: number;
   readonly supply: readonly string[];
   readonly ground: readonly string[];
+  /** Metres per unit of W and L as written in netlists (`--scale`). */
+  readonly scale?: number;
+  /** What undefined subcircuits stand for (`--treat-as NAME=nmos`), by lower-case name. */
+  readonly treatAs: ReadonlyMap<string, StandIn>;
+  /** In a library, check only the subcircuits nothing instantiates. */
+  readonly topOnly: boolean;
+  /** A Liberty file whose published functions the cells are checked against. */
+  readonly functionsFrom?: string;
 }
 
 export interface CheckArgs extends CellChoice {
@@ -50,6 +60,10 @@ const CELL_OPTIONS = {
   vdd: { type: 'string' },
   supply: { type: 'string' },
   ground: { type: 'string' },
+  scale: { type: 'string' },
+  'treat-as': { type: 'string', multiple: true },
+  'top-only': { type: 'boolean' },
+  'functions-from': { type: 'string' },
   help: { type: 'boolean', short: 'h' },
 } as const satisfies ParseArgsConfig['options'];
 
@@ -121,6 +135,10 @@ interface CellValues {
   vdd?: string;
   supply?: string;
   ground?: string;
+  scale?: string;
+  'treat-as'?: string[];
+  'top-only'?: boolean;
+  'functions-from'?: string;
 }
 
 function cellChoice(v: CellValues): CellChoice {
@@ -128,11 +146,15 @@ function cellChoice(v: CellValues): CellChoice {
     expect: expectations(v.expect ?? []),
     supply: list(v.supply),
     ground: list(v.ground),
+    treatAs: treatAs(v['treat-as'] ?? []),
+    topOnly: v['top-only'] ?? false,
+    ...(v.scale === undefined ? {} : { scale: scaleValue(v.scale) }),
+    ...(v['functions-from'] === undefined ? {} : { functionsFrom: v['functions-from'] }),
     ...(v.cell === undefined ? {} : { cell: v.cell }),
     ...(v.inputs === undefined ? {} : { inputs: list(v.inputs) }),
     ...(v.outputs === undefined ? {} : { outputs: list(v.outputs) }),
     ...(v.sequence === undefined ? {} : { sequence: v.sequence }),
-    ...(v.vdd === undefined ? {} : { vdd: positiveNumber('--vdd', v.vdd) }),
+    ...(v.vdd === undefined ? {} : { vdd: supplyVolts(v.vdd) }),
   };
 }
 
@@ -163,14 +185,37 @@ function expectations(texts: readonly string[]): Record<string, string> {
   return out;
 }
 
+/** `--treat-as NAME=nmos`, repeatable, or comma-separated pairs. */
+function treatAs(texts: readonly string[]): Map<string, StandIn> {
+  const map = new Map<string, StandIn>();
+  for (const text of texts) {
+    const { map: pairs, bad } = parseStandIns(text);
+    if (bad !== null)
+      throw new UsageError(`--treat-as "${bad}": write NAME=nmos, NAME=pmos, NAME=diode or NAME=short`);
+    pairs.forEach((kind, name) => map.set(name, kind));
+  }
+  return map;
+}
+
+/** `--scale 1e-6`: metres per unit of the W and L numbers, in its documented range. */
+function scaleValue(text: string): number {
+  const value = spiceValue(text);
+  const problem = value === null ? 'is not a number' : rangeProblem('scale', value);
+  if (problem !== null)
+    throw new UsageError(`--scale "${text}" ${problem} (e.g. --scale 1e-6 for sizes in µm)`);
+  return value as number;
+}
+
 function list(text: string | undefined): string[] {
   return text === undefined ? [] : text.split(/[\s,]+/).filter((s) => s !== '');
 }
 
 function loadValue(text: string): number {
   const load = spiceValue(text);
-  if (load === null || load < 0)
-    throw new UsageError(`--load "${text}" is not a capacitance in farads (e.g. 10f)`);
+  if (load === null || load < 0 || (load > 0 && rangeProblem('farads', load) !== null))
+    throw new UsageError(
+      `--load "${text}" is not a capacitance in farads from 1 zF to 1 µF, or 0 (e.g. 10f)`,
+    );
   return load;
 }
 
@@ -188,10 +233,19 @@ export function frequency(text: string): number {
   return positiveNumber('--freq', text);
 }
 
-/** Accepts SPICE-style numbers: `2.5`, `100meg`, `1e8`. */
+/** Accepts SPICE-style numbers: `2.5`, `100meg`, `1e8`; finite ones only. */
 function positiveNumber(flag: string, text: string): number {
   const value = spiceValue(text);
-  if (value === null || !(value > 0)) throw new UsageError(`${flag} "${text}" is not a positive number`);
+  if (value === null || !(value > 0) || !Number.isFinite(value))
+    throw new UsageError(`${flag} "${text}" is not a positive number`);
+  return value;
+}
+
+/** `--vdd`: a positive supply in the range a netlist's sources may have (docs/semantics.md §6). */
+function supplyVolts(text: string): number {
+  const value = positiveNumber('--vdd', text);
+  const problem = rangeProblem('volts', value);
+  if (problem !== null) throw new UsageError(`--vdd "${text}" ${problem}`);
   return value;
 }
 

@@ -5,11 +5,11 @@
 import { DEFAULT_POWER_SETTINGS } from '../core/power/settings.ts';
 import type { CheckArgs } from './args.ts';
 import { makeColour } from './colour.ts';
-import { loadCells, type CellFailure } from './loadCells.ts';
+import { loadCells, type CellFailure, type CellSkip } from './loadCells.ts';
 import { runCells } from './parallel.ts';
 import type { CellJson, CellResult, RunOptions } from './runCell.ts';
 import { CAUTION } from '../core/caution.ts';
-import { count, formatCell, formatFailure } from './textReport.ts';
+import { count, formatCell, formatFailure, formatSkipped } from './textReport.ts';
 import { EXIT_FINDINGS, EXIT_OK, EXIT_UNUSABLE } from './usage.ts';
 
 export interface Output {
@@ -34,14 +34,25 @@ export async function checkCommand(args: CheckArgs, io: Output): Promise<number>
   const results: CellResult[] = loaded.cells.map((c) => ('job' in c ? (ran[next++] as CellResult) : c));
   const status = Math.max(EXIT_OK, ...results.map(exitOf));
   if (args.json)
-    io.out(JSON.stringify(loaded.asLibrary ? libraryJson(results) : singleJson(results), null, 2));
-  else io.out(humanReport(results, loaded.asLibrary, makeColour(io.colour)));
+    io.out(
+      JSON.stringify(loaded.asLibrary ? libraryJson(results, loaded.notes) : singleJson(results), null, 2),
+    );
+  else io.out(humanReport(results, loaded.asLibrary, loaded.notes, makeColour(io.colour)));
   return status;
 }
 
 function exitOf(r: CellResult): number {
   if ('failure' in r) return EXIT_UNUSABLE;
+  if ('skipped' in r) return EXIT_OK;
   return r.json.summary.errors > 0 ? EXIT_FINDINGS : EXIT_OK;
+}
+
+function skippedJson(s: CellSkip): object {
+  return { cell: s.cell, file: s.file, skipped: s.reason };
+}
+
+function resultJson(r: CellResult): object {
+  return 'json' in r ? r.json : 'failure' in r ? failureJson(r.failure) : skippedJson(r.skipped);
 }
 
 function failureJson(f: CellFailure): object {
@@ -59,37 +70,50 @@ function failureJson(f: CellFailure): object {
 function singleJson(results: readonly CellResult[]): object {
   const [only] = results;
   if (only === undefined) return { error: { message: 'no cells found' } };
-  return 'json' in only ? only.json : failureJson(only.failure);
+  return resultJson(only);
 }
 
 export function librarySummary(results: readonly CellResult[]): Record<string, number> {
   const checked = results.flatMap((r) => ('json' in r ? [r.json] : []));
+  const skipped = results.filter((r) => 'skipped' in r).length;
   return {
     cells: results.length,
     passed: checked.filter((j) => j.summary.errors === 0).length,
     failed: checked.filter((j) => j.summary.errors > 0).length,
-    unusable: results.length - checked.length,
+    unusable: results.length - checked.length - skipped,
+    ...(skipped > 0 ? { skipped } : {}),
     errors: sum(checked.map((j) => j.summary.errors)),
     warnings: sum(checked.map((j) => j.summary.warnings)),
   };
 }
 
-function libraryJson(results: readonly CellResult[]): object {
-  const cells = results.map((r) => ('json' in r ? r.json : failureJson(r.failure)));
-  return { cells, summary: librarySummary(results), caution: CAUTION };
+function libraryJson(results: readonly CellResult[], notes: readonly string[]): object {
+  const cells = results.map(resultJson);
+  return {
+    cells,
+    summary: librarySummary(results),
+    ...(notes.length > 0 ? { notes } : {}),
+    caution: CAUTION,
+  };
 }
 
 function humanReport(
   results: readonly CellResult[],
   asLibrary: boolean,
+  notes: readonly string[],
   c: ReturnType<typeof makeColour>,
 ): string {
   const blocks = results.map((r) =>
-    'json' in r ? formatCell(r.json as CellJson, c) : formatFailure(r.failure, c),
+    'json' in r
+      ? formatCell(r.json as CellJson, c)
+      : 'failure' in r
+        ? formatFailure(r.failure, c)
+        : formatSkipped(r.skipped, c),
   );
   const s = librarySummary(results);
   const total = asLibrary ? [libraryTotals(results, s)] : [];
-  return [...blocks, ...total, c.dim(CAUTION)].join('\n\n');
+  const runNotes = notes.map((n) => c.dim(`note: ${n}`));
+  return [...blocks, ...runNotes, ...total, c.dim(CAUTION)].join('\n\n');
 }
 
 /** The closing lines a CI log is read by: counts, then which cells need attention. */
@@ -97,7 +121,7 @@ function libraryTotals(results: readonly CellResult[], s: Record<string, number>
   const failing = results.flatMap((r) => ('json' in r && r.json.summary.errors > 0 ? [r.json.cell] : []));
   const unusable = results.flatMap((r) => ('failure' in r ? [r.failure.cell ?? r.failure.file] : []));
   return [
-    `${count(s['cells'] ?? 0, 'cell')}: ${s['passed']} pass, ${s['failed']} with errors, ${s['unusable']} unusable; ${count(s['errors'] ?? 0, 'error')}, ${count(s['warnings'] ?? 0, 'warning')}`,
+    `${count(s['cells'] ?? 0, 'cell')}: ${s['passed']} pass, ${s['failed']} with errors, ${s['unusable']} unusable${s['skipped'] ? `, ${s['skipped']} skipped` : ''}; ${count(s['errors'] ?? 0, 'error')}, ${count(s['warnings'] ?? 0, 'warning')}`,
     ...(failing.length > 0 ? [`  with errors: ${failing.join(', ')}`] : []),
     ...(unusable.length > 0 ? [`  unusable: ${unusable.join(', ')}`] : []),
   ].join('\n');

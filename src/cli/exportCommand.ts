@@ -16,13 +16,19 @@ export interface ExportOutput {
 export function exportCommand(args: ExportArgs, io: ExportOutput): number {
   const loaded = loadCells([args.file], args);
   if (loaded.cells.length > 1) {
-    const names = loaded.cells.map((c) => ('job' in c ? c.job.cell : c.failure.cell)).join(', ');
+    const names = loaded.cells
+      .map((c) => ('job' in c ? c.job.cell : 'failure' in c ? c.failure.cell : c.skipped.cell))
+      .join(', ');
     throw new UsageError(`${args.file} is a library: pick one cell with --cell NAME (cells: ${names})`);
   }
   const [cell] = loaded.cells;
   if (cell === undefined) throw new UsageError(`${args.file}: no cell found`);
   if ('failure' in cell) {
     io.err(cell.failure.message);
+    return EXIT_UNUSABLE;
+  }
+  if ('skipped' in cell) {
+    io.err(`${cell.skipped.cell}: ${cell.skipped.reason}; not exported`);
     return EXIT_UNUSABLE;
   }
   try {

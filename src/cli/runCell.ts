@@ -15,7 +15,7 @@ import { DEFAULT_POWER_SETTINGS, PowerOptionsError, type PowerSettings } from '.
 import type { PowerReport } from '../core/power/types.ts';
 import { sizingReport } from '../core/sizing/sizingReport.ts';
 import type { SizingReport } from '../core/sizing/types.ts';
-import type { CellFailure, CellJob } from './loadCells.ts';
+import type { CellFailure, CellJob, CellSkip } from './loadCells.ts';
 
 export interface RunOptions {
   readonly allNets: boolean;
@@ -44,7 +44,8 @@ export interface CellJson extends Omit<CheckReport, 'vectors' | 'steps'> {
   readonly caution: string;
 }
 
-export type CellResult = { readonly json: CellJson } | { readonly failure: CellFailure };
+export type CellResult =
+  { readonly json: CellJson } | { readonly failure: CellFailure } | { readonly skipped: CellSkip };
 
 export function runCell(job: CellJob, options: RunOptions): CellResult {
   try {

@@ -4,7 +4,7 @@
  */
 import type { Finding } from '../core/analysis/report.ts';
 import { formatSi, type Colour } from './colour.ts';
-import type { CellFailure } from './loadCells.ts';
+import type { CellFailure, CellSkip } from './loadCells.ts';
 import type { CellJson, VectorJson } from './runCell.ts';
 
 /** Rows beyond this are left out when they have no findings (the JSON has them all). */
@@ -28,6 +28,10 @@ export function formatCell(json: CellJson, c: Colour): string {
 export function formatFailure(f: CellFailure, c: Colour): string {
   const where = f.cell === null ? f.file : `${f.cell}  ${c.dim(f.file)}`;
   return `${c.bold(where)}\n  ${c.error('unusable')}: ${f.message}`;
+}
+
+export function formatSkipped(s: CellSkip, c: Colour): string {
+  return `${c.bold(s.cell)}  ${c.dim(s.file)}\n  ${c.dim('skipped')}: ${s.reason}`;
 }
 
 function truthTable(json: CellJson, rows: readonly VectorJson[], c: Colour): string[] {

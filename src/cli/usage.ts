@@ -19,7 +19,7 @@ Usage:
   railwise export FILE --to FORMAT     write a cell as spice, verilog or csv
   railwise help [check|export]         show help
 
-FILE is a Railwise design file (.json) or a SPICE-compatible netlist (.sp .spi .cir .net .cdl).
+FILE is a Railwise design file (.json) or a SPICE-compatible netlist (.sp .spi .spice .cir .net .cdl .ckt).
 Exit status: 0 no errors, 1 error findings, 2 unusable input or arguments.
 
 ${CAUTION}
@@ -29,7 +29,7 @@ export const CHECK_HELP = `railwise check FILE... [options]
 
 Checks every input vector of each cell (or a sequence of vectors) and reports output levels,
 supply-to-ground current paths and findings. A file with several top-level subcircuits that nothing
-instantiates is a library: each subcircuit is checked as its own cell.
+instantiates is a library: each subcircuit that holds devices is checked as its own cell.
 
 Pins and expectations (one cell: a single-cell file, or a library with --cell):
   --inputs A,B          input pins, in truth-table order (default: ports that only reach gates)
@@ -38,13 +38,21 @@ Pins and expectations (one cell: a single-cell file, or a library with --cell):
   --sequence STEPS      apply these steps in order, carrying stored charge, instead of the sweep:
                         "A=0 B=1; A=1" (steps split by ; or line breaks, "-" changes nothing),
                         or the name of a sequence saved in a design file
-  --cell NAME           check only this cell of a library
+  --cell NAME           check only this cell: any subcircuit the file defines
+  --functions-from LIB  check each cell against the function and three_state attributes of the
+                        Liberty file LIB (pins and power rails from it too; sequential cells skipped)
 
 Circuit:
   --vdd V               supply voltage (thresholds follow at ${VIL_FRACTION} and ${VIH_FRACTION} of VDD)
   --supply NAMES        extra supply rail net names, comma separated
   --ground NAMES        extra ground rail net names, comma separated
   --undriven            also leave each input undriven (Z) in the sweep
+
+Netlists:
+  --scale F             metres per unit of W and L as written (e.g. 1e-6), over the file's own
+  --treat-as NAME=KIND  read instances of the undefined subcircuit NAME as nmos, pmos, diode or
+                        short (repeatable, or comma separated)
+  --top-only            in a library, check only the subcircuits that nothing instantiates
 
 Report:
   --json                print one JSON object (a "cells" list for a library)

@@ -55,9 +55,9 @@ describe('bin/railwise.mjs', () => {
       cells: Record<string, unknown>[];
       summary: Record<string, number>;
     };
-    expect(body.cells).toHaveLength(5);
-    expect(body.cells.filter((c) => 'summary' in c)).toHaveLength(4);
-    expect(body.summary).toMatchObject({ cells: 5, unusable: 1 });
+    expect(body.cells).toHaveLength(4);
+    expect(body.cells.filter((c) => 'summary' in c)).toHaveLength(3);
+    expect(body.summary).toMatchObject({ cells: 4, unusable: 1 });
   });
 
   it('exit status 2 and a message on stderr for bad arguments', () => {

@@ -8,7 +8,13 @@ import type { RunOptions } from '../../src/cli/runCell.ts';
 const OPTIONS: RunOptions = { allNets: false, undriven: false, sizing: false, load: 0 };
 
 function jobs(): CellJob[] {
-  const loaded = loadCells(['public/examples/tidewater-cells.sp'], { expect: {}, supply: [], ground: [] });
+  const loaded = loadCells(['public/examples/tidewater-cells.sp'], {
+    expect: {},
+    supply: [],
+    ground: [],
+    treatAs: new Map(),
+    topOnly: false,
+  });
   return loaded.cells.flatMap((c) => ('job' in c ? [c.job] : []));
 }
 

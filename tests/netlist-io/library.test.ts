@@ -13,12 +13,7 @@ describe('library import', () => {
   it('checks every top-level subcircuit as a cell and isolates the broken one with its line', () => {
     const lib = importSpice(readFileSync(FIXTURE, 'utf8'), FIXTURE);
     expect(lib.isLibrary).toBe(true);
-    expect(lib.cells.map((c) => c.name)).toEqual([
-      'buoy_inv',
-      'buoy_nor2',
-      'buoy_nand2_wrong_expect',
-      'buoy_fill',
-    ]);
+    expect(lib.cells.map((c) => c.name)).toEqual(['buoy_inv', 'buoy_nor2', 'buoy_nand2_wrong_expect']);
     expect(lib.failed).toHaveLength(1);
     const broken = lib.failed[0];
     expect(broken?.name).toBe('buoy_bandgap_stub');
@@ -28,13 +23,13 @@ describe('library import', () => {
     );
   });
 
-  it('reports a cell with no pins (a filler) as a cell with no inputs or outputs', () => {
+  it('leaves a subcircuit with no devices (a filler) out of the cells, with a note', () => {
     const lib = importSpice(readFileSync(FIXTURE, 'utf8'), FIXTURE);
-    const fill = lib.cells.find((c) => c.name === 'buoy_fill');
-    expect(fill?.netlist).toMatchObject({ devices: [], inputs: [], outputs: [] });
+    expect(lib.cells.find((c) => c.name === 'buoy_fill')).toBeUndefined();
+    expect(lib.notes).toContain('subcircuits with no devices are not checked: buoy_fill');
   });
 
-  it('does not count subcircuits that another instantiates as cells', () => {
+  it('checks the cells that others instantiate too, or only the top-level ones when asked', () => {
     const text = `.subckt inv A Y VDD GND
 MP Y A VDD VDD pch W=2u L=0.25u
 MN Y A GND GND nch W=1u L=0.25u
@@ -51,10 +46,15 @@ MN2 n B GND GND nch W=2u L=0.25u
 .ends`;
     const lib = importSpice(`* railwise: expect Y = A\n${text}`, 'lib.sp');
     expect(lib.isLibrary).toBe(true);
-    expect(lib.cells.map((c) => c.name)).toEqual(['buf', 'nand']);
+    expect(lib.cells.map((c) => c.name)).toEqual(['inv', 'buf', 'nand']);
     // An expected function outside every cell of a library belongs to none of them.
     expect(lib.cells.every((c) => Object.keys(c.expectations).length === 0)).toBe(true);
     expect(lib.notes).toEqual(['line 1: a "expect" directive outside any .subckt of a library is ignored']);
+    const top = importSpice(text, 'lib.sp', { topOnly: true });
+    expect(top.cells.map((c) => c.name)).toEqual(['buf', 'nand']);
+    expect(top.notes).toEqual([
+      '1 subcircuits that other cells instantiate are not checked on their own (top-level cells only)',
+    ]);
   });
 
   it('reads the example library: eight cells, pins and expected functions', () => {

@@ -6,6 +6,7 @@
 import type { Device, Netlist, Rail } from '../model/netlist.ts';
 import type { Body, Directive } from './spiceParse.ts';
 import { flattenCell, type FlatCell, type FlattenContext, type FlatSource } from './spiceFlatten.ts';
+import type { Hierarchy } from './spiceHierarchy.ts';
 import { SpiceImportError } from './spiceErrors.ts';
 import { assignPins, PinError } from './pins.ts';
 
@@ -14,12 +15,17 @@ export interface ImportedCell {
   readonly netlist: Netlist;
   /** Expected functions from `* railwise: expect Y = …` lines, by output. */
   readonly expectations: Readonly<Record<string, string>>;
+  /** Line of the `* railwise: expect` directive of each expected function, by output. */
+  readonly expectationLines: Readonly<Record<string, number>>;
+  /** True when `* railwise: inputs` or `outputs` lines named the pins. */
+  readonly pinsNamed: boolean;
   readonly notes: readonly string[];
 }
 
 export interface CellContext extends FlattenContext {
   /** Role of a net by its name, or null. */
   readonly railRole: (net: string) => Rail['role'] | null;
+  readonly hierarchy: Hierarchy;
 }
 
 export interface CellSpec {
@@ -29,19 +35,20 @@ export interface CellSpec {
   readonly ports: readonly string[] | null;
   /** Extra `V` lines that apply (those at the top level of a library). */
   readonly sharedSources: readonly FlatSource[];
+  /** Where the cell starts, for errors about the cell as a whole. */
+  readonly line: number;
 }
 
 export function buildCell(spec: CellSpec, ctx: CellContext): ImportedCell {
+  ctx.hierarchy.check(spec.name, spec.body, spec.line);
   const flat = flattenCell(spec.body, spec.ports ?? [], ctx);
   const rails = cellRails(flat, spec.sharedSources, ctx);
   const railNets = new Set(rails.map((r) => r.net));
   const notes = [...flat.notes];
-  const ports = (spec.ports ?? topLevelPorts(flat)).filter((p) => !railNets.has(resolveNet(flat, p)));
-  const pins = inferPins(
-    flat.devices,
-    ports.map((p) => resolveNet(flat, p)),
-    spec.ports === null,
-  );
+  const byLower = new Map(flat.nets.map((n) => [n.toLowerCase(), n]));
+  const resolveNet = (name: string): string => byLower.get(name.toLowerCase()) ?? name;
+  const ports = (spec.ports ?? topLevelPorts(flat)).map(resolveNet).filter((p) => !railNets.has(p));
+  const pins = inferPins(flat.devices, ports, spec.ports === null);
   if (spec.ports === null && pins.outputs.length > 0) {
     notes.push(
       `a flat netlist has no ports: outputs taken as the nets that reach no gate (${pins.outputs.join(', ')})`,
@@ -52,12 +59,9 @@ export function buildCell(spec: CellSpec, ctx: CellContext): ImportedCell {
     notes.push(`protection diodes kept, never conducting in steady state: ${diodes.join(', ')}`);
   let netlist: Netlist = { name: spec.name, devices: flat.devices, rails, ...pins };
   netlist = applyPinDirectives(netlist, spec.body.directives, ctx.fileName);
-  const expectations = readExpectations(netlist, spec.body.directives, notes);
-  return { name: spec.name, netlist, expectations, notes };
-}
-
-function resolveNet(flat: FlatCell, name: string): string {
-  return flat.nets.find((n) => n.toLowerCase() === name.toLowerCase()) ?? name;
+  const { expectations, lines } = readExpectations(netlist, spec.body.directives, notes);
+  const pinsNamed = spec.body.directives.some((d) => d.key === 'inputs' || d.key === 'outputs');
+  return { name: spec.name, netlist, expectations, expectationLines: lines, pinsNamed, notes };
 }
 
 /** Rails in order of first appearance: named rails, then nets a `V` line holds. */
@@ -126,7 +130,8 @@ function inferPins(devices: readonly Device[], ports: readonly string[], flat: b
     } else if (d.kind === 'resistor') channels.add(d.a).add(d.b);
   }
   const inputs = ports.filter((p) => gates.has(p) && !channels.has(p));
-  const outputs = ports.filter((p) => !inputs.includes(p) && (!flat || (channels.has(p) && !gates.has(p))));
+  const isInput = new Set(inputs);
+  const outputs = ports.filter((p) => !isInput.has(p) && (!flat || (channels.has(p) && !gates.has(p))));
   return { inputs, outputs };
 }
 
@@ -145,14 +150,15 @@ function applyPinDirectives(netlist: Netlist, directives: readonly Directive[], 
   return result;
 }
 
-const KNOWN_DIRECTIVES = new Set(['expect', 'inputs', 'outputs', 'supply', 'ground']);
+const KNOWN_DIRECTIVES = new Set(['expect', 'inputs', 'outputs', 'supply', 'ground', 'treat-as']);
 
 function readExpectations(
   netlist: Netlist,
   directives: readonly Directive[],
   notes: string[],
-): Record<string, string> {
+): { expectations: Record<string, string>; lines: Record<string, number> } {
   const expectations: Record<string, string> = {};
+  const lines: Record<string, number> = {};
   for (const d of directives) {
     if (!KNOWN_DIRECTIVES.has(d.key))
       notes.push(`line ${d.line}: unknown railwise directive "${d.key}" ignored`);
@@ -165,6 +171,7 @@ function readExpectations(
     }
     const net = netlist.outputs.find((o) => o.toLowerCase() === output.toLowerCase()) ?? output;
     expectations[net] = d.value.slice(eq + 1).trim();
+    lines[net] = d.line;
   }
-  return expectations;
+  return { expectations, lines };
 }

@@ -5,6 +5,7 @@
  */
 import { spiceValue } from './spiceNumber.ts';
 import { tokens } from './spiceLines.ts';
+import { rangeProblem, type RangedField } from './valueRanges.ts';
 
 interface Located {
   readonly name: string;
@@ -30,6 +31,13 @@ export interface PassiveElement extends Located {
   readonly value: number;
 }
 
+/** A CDL resistor whose value is the word `short`: a zero-ohm connection. */
+export interface ShortElement extends Located {
+  readonly kind: 'short';
+  readonly a: string;
+  readonly b: string;
+}
+
 export interface DiodeElement extends Located {
   readonly kind: 'diode';
   readonly anode: string;
@@ -47,15 +55,18 @@ export interface InstanceElement extends Located {
   readonly kind: 'instance';
   readonly nets: readonly string[];
   readonly subckt: string;
-  /** Lower-case names of parameters given on the instance (ignored, with a note). */
-  readonly ignoredParams: readonly string[];
+  /** Parameters given on the instance by lower-case name, values as written. */
+  readonly params: ReadonlyMap<string, string>;
 }
 
-export type Element = MosElement | PassiveElement | DiodeElement | SourceElement | InstanceElement;
+export type Element =
+  MosElement | PassiveElement | ShortElement | DiodeElement | SourceElement | InstanceElement;
 
 /** Thrown by the element readers; the caller adds the file name. */
 export class ElementError extends Error {
   override readonly name = 'ElementError';
+  /** True when the line reads as an element and only a value is out of its range. */
+  outOfRange = false;
 }
 
 const UNSUPPORTED: Readonly<Record<string, string>> = {
@@ -142,17 +153,34 @@ function readPassive(
   name: string,
   args: readonly string[],
   line: number,
-): PassiveElement {
+): PassiveElement | ShortElement {
   const { positional, params } = splitParams(args);
   const [a, b, valueText = params.get(kind === 'resistor' ? 'r' : 'c')] = positional;
   const unit = kind === 'resistor' ? 'resistance in ohms' : 'capacitance in farads';
   if (a === undefined || b === undefined || valueText === undefined) {
     throw new ElementError(`${name}: needs two nets and a ${unit}`);
   }
+  if (kind === 'resistor' && valueText.toLowerCase() === 'short') return { kind: 'short', name, line, a, b };
   const value = spiceValue(valueText);
   if (value === null || !(value > 0))
     throw new ElementError(`${name}: "${valueText}" is not a positive ${unit}`);
-  return { kind, name, line, a, b, value };
+  return {
+    kind,
+    name,
+    line,
+    a,
+    b,
+    value: inRange(name, kind === 'resistor' ? 'ohms' : 'farads', valueText, value),
+  };
+}
+
+/** The value, or an error naming the element, the field and the documented range. */
+export function inRange(name: string, field: RangedField, text: string, value: number): number {
+  const problem = rangeProblem(field, value);
+  if (problem === null) return value;
+  const error = new ElementError(`${name}: ${field} ${text} ${problem}`);
+  error.outOfRange = true;
+  throw error;
 }
 
 function readDiode(name: string, args: readonly string[], line: number): DiodeElement {
@@ -177,6 +205,7 @@ function readSource(name: string, args: readonly string[], text: string, line: n
   if (plus === undefined || minus === undefined || volts === null) {
     throw new ElementError(`${name}: a V line needs two nets and a DC voltage`);
   }
+  if (Math.abs(volts) > 0) inRange(name, 'volts', first, Math.abs(volts));
   return { kind: 'source', name, line, plus, minus, volts };
 }
 
@@ -191,6 +220,6 @@ function readInstance(name: string, args: readonly string[], line: number): Inst
     line,
     nets: positional.slice(0, -1),
     subckt,
-    ignoredParams: [...params.keys()],
+    params,
   };
 }

@@ -1,14 +1,19 @@
 /**
- * SPICE-compatible netlist import (docs/semantics.md §6): a file holds one cell (a flat netlist, or one
- * subcircuit that the others build up) or a library (several top-level subcircuits that nothing
- * instantiates, each its own cell). In a library a broken cell is reported apart and never stops
- * the rest; in a single-cell file the problem throws.
+ * SPICE-compatible netlist import (docs/semantics.md §6): a file holds one cell (a flat netlist, or
+ * one subcircuit that the others build up) or a library (several top-level subcircuits that nothing
+ * instantiates). A library run checks every subcircuit that holds devices, also those its larger
+ * cells instantiate, unless only the top-level ones are asked for; `cell` picks any one subcircuit.
+ * In a library a broken cell is reported apart and never stops the rest; in a single-cell file the
+ * problem throws.
  */
 import type { Rail } from '../model/netlist.ts';
 import { parseSpice, type Body, type SpiceFile, type Subckt } from './spiceParse.ts';
 import { buildCell, type CellContext, type CellSpec, type ImportedCell } from './spiceCells.ts';
 import type { FlatSource } from './spiceFlatten.ts';
 import { SpiceImportError } from './spiceErrors.ts';
+import { Hierarchy } from './spiceHierarchy.ts';
+import { resolveScale } from './spiceSizes.ts';
+import { parseStandIns, type StandIn } from './deviceNames.ts';
 
 export { SpiceImportError } from './spiceErrors.ts';
 export type { ImportedCell } from './spiceCells.ts';
@@ -17,6 +22,14 @@ export interface SpiceImportOptions {
   /** Extra net names taken as supply rails (libraries use many spellings). */
   readonly supplyNames?: readonly string[];
   readonly groundNames?: readonly string[];
+  /** Metres per unit of W and L as written (`--scale`); overrides the file's directive. */
+  readonly scale?: number;
+  /** What undefined subcircuits stand for, by name (`--treat-as`), over the naming rule. */
+  readonly standIns?: ReadonlyMap<string, StandIn>;
+  /** Read only this cell: any subcircuit the file defines, or the flat netlist's own name. */
+  readonly cell?: string;
+  /** In a library, only the subcircuits that nothing instantiates. */
+  readonly topOnly?: boolean;
 }
 
 export interface FailedCell {
@@ -31,10 +44,12 @@ export interface SpiceImport {
   readonly cells: readonly ImportedCell[];
   /** Cells of a library that could not be read; empty for a single-cell file (which throws). */
   readonly failed: readonly FailedCell[];
-  /** File-level notes: ignored commands, a title line, unused subcircuits. */
+  /** File-level notes: ignored commands, a title line, scale, cells not checked. */
   readonly notes: readonly string[];
-  /** Names of all cells, read or failed, in the order the file defines them. */
+  /** Names of the cells read or failed, in the order the file defines them. */
   readonly order: readonly string[];
+  /** Every cell name the file offers to `cell`. */
+  readonly available: readonly string[];
 }
 
 /** Net names that are rails in every file, compared lower-case with a trailing `!` dropped. */
@@ -43,51 +58,116 @@ const SUPPLY_NAMES = ['vdd', 'vcc'];
 
 export function importSpice(text: string, fileName: string, options: SpiceImportOptions = {}): SpiceImport {
   const file = parseSpice(text, fileName);
-  const ctx = cellContext(file, fileName, options);
   const notes = [...file.notes];
-  const single = (spec: CellSpec): SpiceImport => {
-    const cells = [buildCell(spec, ctx)];
-    return { file: fileName, isLibrary: false, cells, failed: [], notes, order: [spec.name] };
+  const ctx = cellContext(file, fileName, options, notes);
+  const flatTop = file.top.elements.some((e) => e.kind !== 'source');
+  const available = [...(flatTop ? [baseName(fileName)] : []), ...file.subckts.map((s) => s.name)];
+  const result = (isLibrary: boolean, specs: readonly CellSpec[]): SpiceImport => {
+    const built = isLibrary
+      ? buildEach(specs, ctx)
+      : { cells: specs.map((s) => buildCell(s, ctx)), failed: [] };
+    return { file: fileName, isLibrary, ...built, notes, order: specs.map((s) => s.name), available };
   };
-  if (file.top.elements.some((e) => e.kind !== 'source')) {
-    notes.push(...unusedNotes(file));
-    return single({ name: baseName(fileName), body: file.top, ports: null, sharedSources: [] });
-  }
-  const roots = file.subckts.filter((s) => !file.subckts.some((o) => o !== s && instantiated(o, s)));
+  const shared = topLevelSources(file.top);
+  const used = instantiatedNames(file);
+  const roots = file.subckts.filter((s) => !used.has(s.name.toLowerCase()));
   const [only] = roots;
+  if (options.cell !== undefined) {
+    const single = !flatTop && roots.length === 1 ? only : undefined;
+    return result(false, pickSpec(file, options.cell, { flatTop, fileName, shared, single }));
+  }
+  if (flatTop) {
+    notes.push(...unusedNotes(file, used));
+    return result(false, [flatSpec(fileName, file)]);
+  }
   if (only === undefined) {
     const detail = 'no devices found: the file holds no elements and no .subckt that could be a cell';
     throw new SpiceImportError(fileName, file.subckts[0]?.line ?? 1, detail);
   }
-  const shared = topLevelSources(file.top);
   if (roots.length === 1) {
     const body = withTopDirectives(only, file.top);
-    return single({ name: only.name, body, ports: only.ports, sharedSources: shared });
+    return result(false, [subcktSpec(only, shared, body)]);
   }
   notes.push(...strayDirectiveNotes(file.top));
-  const specs = roots.map((s): CellSpec => ({
-    name: s.name,
-    body: s,
-    ports: s.ports,
-    sharedSources: shared,
-  }));
-  const order = specs.map((spec) => spec.name);
-  return { file: fileName, isLibrary: true, ...buildEach(specs, ctx), notes, order };
+  const cells = libraryCells(file, roots, options.topOnly === true, ctx.hierarchy, notes);
+  return result(
+    true,
+    cells.map((s) => subcktSpec(s, shared)),
+  );
 }
 
-function unusedNotes(file: SpiceFile): string[] {
-  const used = (s: Subckt): boolean =>
-    instantiated(file.top, s) || file.subckts.some((o) => instantiated(o, s));
-  const unused = file.subckts.filter((s) => !used(s)).map((s) => s.name);
+function subcktSpec(s: Subckt, shared: readonly FlatSource[], body: Body = s): CellSpec {
+  return { name: s.name, body, ports: s.ports, sharedSources: shared, line: s.line };
+}
+
+function flatSpec(fileName: string, file: SpiceFile): CellSpec {
+  return { name: baseName(fileName), body: file.top, ports: null, sharedSources: [], line: 1 };
+}
+
+interface PickContext {
+  readonly flatTop: boolean;
+  readonly fileName: string;
+  readonly shared: readonly FlatSource[];
+  /** The one top-level subcircuit of a single-cell file: it takes the top-level directives. */
+  readonly single: Subckt | undefined;
+}
+
+/** `cell` asks for one cell by name: any subcircuit, or the flat netlist itself (none: empty). */
+function pickSpec(file: SpiceFile, name: string, p: PickContext): CellSpec[] {
+  const sub = file.subcktByName.get(name.toLowerCase());
+  if (sub !== undefined)
+    return [subcktSpec(sub, p.shared, sub === p.single ? withTopDirectives(sub, file.top) : sub)];
+  if (p.flatTop && baseName(p.fileName).toLowerCase() === name.toLowerCase())
+    return [flatSpec(p.fileName, file)];
+  return [];
+}
+
+/**
+ * The cells of a library, in file order: every subcircuit that holds devices, directly or through
+ * instances (or only the top-level ones); the others are named in a note.
+ */
+function libraryCells(
+  file: SpiceFile,
+  roots: readonly Subckt[],
+  topOnly: boolean,
+  hierarchy: Hierarchy,
+  notes: string[],
+): Subckt[] {
+  const rootSet = new Set(roots);
+  const candidates = topOnly ? file.subckts.filter((s) => rootSet.has(s)) : file.subckts;
+  // A body with an unreadable line is a cell to report, whatever else it holds.
+  const holdsDevices = (s: Subckt): boolean => s.error !== undefined || hierarchy.deviceCount(s) !== 0;
+  const empty = candidates.filter((s) => !holdsDevices(s));
+  if (empty.length > 0)
+    notes.push(`subcircuits with no devices are not checked: ${empty.map((s) => s.name).join(', ')}`);
+  if (topOnly && roots.length < file.subckts.length)
+    notes.push(
+      `${file.subckts.length - roots.length} subcircuits that other cells instantiate are not checked on their own (top-level cells only)`,
+    );
+  return candidates.filter(holdsDevices);
+}
+
+function instantiatedNames(file: SpiceFile): Set<string> {
+  const names = new Set<string>();
+  for (const body of [file.top, ...file.subckts])
+    for (const e of body.elements) if (e.kind === 'instance') names.add(e.subckt.toLowerCase());
+  return names;
+}
+
+function unusedNotes(file: SpiceFile, used: ReadonlySet<string>): string[] {
+  const unused = file.subckts.filter((s) => !used.has(s.name.toLowerCase())).map((s) => s.name);
   return unused.length > 0 ? [`subcircuits defined but not used: ${unused.join(', ')}`] : [];
 }
 
 /** Pin and expect directives at the top of a library belong to no cell. */
 function strayDirectiveNotes(top: Body): string[] {
   return top.directives
-    .filter((d) => d.key !== 'supply' && d.key !== 'ground')
+    .filter((d) => !FILE_DIRECTIVES.has(d.key))
     .map((d) => `line ${d.line}: a "${d.key}" directive outside any .subckt of a library is ignored`);
 }
+
+/** Directives that speak for the whole file wherever they stand. */
+const FILE_DIRECTIVES = new Set(['supply', 'ground', 'treat-as']);
 
 /** Every cell of a library; one that cannot be built is set aside with its error. */
 function buildEach(
@@ -107,18 +187,17 @@ function buildEach(
   return { cells, failed };
 }
 
-function instantiated(body: Body, sub: Subckt): boolean {
-  const lower = sub.name.toLowerCase();
-  return body.elements.some((e) => e.kind === 'instance' && e.subckt.toLowerCase() === lower);
-}
-
-/** `* railwise: supply …` and `ground …` lines anywhere in the file name rails for all cells. */
-function cellContext(file: SpiceFile, fileName: string, options: SpiceImportOptions): CellContext {
+/** Rail names, scale and stand-ins: what holds for every cell of the file. */
+function cellContext(
+  file: SpiceFile,
+  fileName: string,
+  options: SpiceImportOptions,
+  notes: string[],
+): CellContext {
   const bare = (n: string): string => n.toLowerCase().replace(/!$/, '');
+  const directives = [file.top, ...file.subckts].flatMap((b) => b.directives);
   const directiveNames = (key: string): string[] =>
-    [file.top, ...file.subckts].flatMap((b) =>
-      b.directives.filter((d) => d.key === key).flatMap((d) => d.value.split(/[\s,]+/)),
-    );
+    directives.filter((d) => d.key === key).flatMap((d) => d.value.split(/[\s,]+/));
   const ground = new Set(
     [...GROUND_NAMES, ...(options.groundNames ?? []), ...directiveNames('ground')].map(bare),
   );
@@ -137,7 +216,21 @@ function cellContext(file: SpiceFile, fileName: string, options: SpiceImportOpti
   ]);
   const isGlobal = (lower: string): boolean =>
     railRole(lower) !== null || globals.has(lower) || lower.endsWith('!');
-  return { file, fileName, railRole, isGlobal };
+  const standIns = new Map<string, StandIn>();
+  for (const d of directives.filter((x) => x.key === 'treat-as')) {
+    const { map, bad } = parseStandIns(d.value);
+    if (bad !== null)
+      throw new SpiceImportError(
+        fileName,
+        d.line,
+        `treat-as: "${bad}" should read NAME=nmos|pmos|diode|short`,
+      );
+    map.forEach((kind, name) => standIns.set(name, kind));
+  }
+  options.standIns?.forEach((kind, name) => standIns.set(name.toLowerCase(), kind));
+  const scale = resolveScale(file, options.scale, notes);
+  const hierarchy = new Hierarchy(file, fileName);
+  return { file, fileName, railRole, isGlobal, scale, standIns, hierarchy };
 }
 
 function topLevelSources(top: Body): FlatSource[] {
@@ -147,7 +240,7 @@ function topLevelSources(top: Body): FlatSource[] {
 }
 
 /** Directives at the top of a single-subcircuit file (`expect`, `inputs`) belong to its cell. */
-function withTopDirectives(sub: Body, top: Body): Body {
+function withTopDirectives(sub: Subckt, top: Body): Subckt {
   return top.directives.length === 0 ? sub : { ...sub, directives: [...top.directives, ...sub.directives] };
 }
 

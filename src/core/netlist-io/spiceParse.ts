@@ -6,6 +6,7 @@
 import { ContinuationError, logicalLines, tokens, type LogicalLine } from './spiceLines.ts';
 import { ElementError, readElement, type Element } from './spiceElements.ts';
 import { SpiceImportError } from './spiceErrors.ts';
+import { readScale, type Scale } from './spiceScale.ts';
 
 export interface Directive {
   readonly line: number;
@@ -36,6 +37,10 @@ export interface ModelCard {
 export interface SpiceFile {
   readonly top: Body;
   readonly subckts: Subckt[];
+  /** By lower-case name. */
+  readonly subcktByName: Map<string, Subckt>;
+  /** The file's scale directive (`.option scale=`, `.scale`, `*.SCALE`), if any. */
+  scale?: Scale;
   /** By lower-case model name. */
   readonly models: Map<string, ModelCard>;
   /** Lower-case names declared by `.global`. */
@@ -72,7 +77,8 @@ interface ParseState {
   readonly file: SpiceFile;
   readonly fileName: string;
   current: Subckt | null;
-  ended: boolean;
+  /** Line of the `.end` command, once seen. */
+  endLine: number | null;
   inControl: boolean;
 }
 
@@ -80,14 +86,20 @@ export function parseSpice(text: string, fileName: string): SpiceFile {
   const file: SpiceFile = {
     top: { elements: [], directives: [] },
     subckts: [],
+    subcktByName: new Map(),
     models: new Map(),
     globals: new Set(),
     notes: [],
   };
-  const state: ParseState = { file, fileName, current: null, ended: false, inControl: false };
-  for (const [index, l] of readLines(text, fileName).entries()) {
-    if (state.ended) break;
+  const state: ParseState = { file, fileName, current: null, endLine: null, inControl: false };
+  const lines = readLines(text, fileName);
+  for (const [index, l] of lines.entries()) {
+    if (state.endLine !== null) {
+      file.notes.push(afterEndNote(state.endLine, lines.slice(index)));
+      break;
+    }
     if (l.kind === 'directive') addDirective(state, l);
+    else if (l.kind === 'scale') setScale(state, l.line, l.text, '*.SCALE');
     else if (state.inControl) state.inControl = !/^\.endc\b/i.test(l.text);
     else if (l.text.startsWith('.')) dotCommand(state, l);
     else if (index === 0 && l.line === 1 && isTitle(l.text))
@@ -100,6 +112,32 @@ export function parseSpice(text: string, fileName: string): SpiceFile {
   return file;
 }
 
+/**
+ * What follows `.end` is ignored, as SPICE ignores it, but never silently: a note names the lines
+ * and any subcircuits defined there (docs/semantics.md §6).
+ */
+function afterEndNote(endLine: number, rest: readonly LogicalLine[]): string {
+  const last = rest[rest.length - 1]?.line ?? endLine;
+  const subckts = rest.flatMap((l) => {
+    const m = /^\.subckt\s+(\S+)/i.exec(l.text);
+    return m ? [m[1] as string] : [];
+  });
+  const defined =
+    subckts.length > 0 ? `, including subcircuits ${subckts.join(', ')}, which are not checked` : '';
+  return `lines ${rest[0]?.line ?? endLine}–${last} come after .end (line ${endLine}) and are ignored, as SPICE ignores them${defined}`;
+}
+
+function setScale(state: ParseState, line: number, text: string, form: string): void {
+  const fail = (detail: string): never => {
+    throw new SpiceImportError(state.fileName, line, detail);
+  };
+  const scale = readScale(text, line, form, fail);
+  const before = state.file.scale;
+  if (before !== undefined && before.factor !== scale.factor)
+    fail(`${form} ${text} contradicts the scale ${before.factor} given on line ${before.line}`);
+  state.file.scale = scale;
+}
+
 function readLines(text: string, fileName: string): LogicalLine[] {
   try {
     return logicalLines(text);
@@ -109,13 +147,16 @@ function readLines(text: string, fileName: string): LogicalLine[] {
   }
 }
 
-/** Classic SPICE takes the first line as a title; we do so only when it reads as no element. */
+/**
+ * Classic SPICE takes the first line as a title; we do so only when it reads as no element (an
+ * element whose only fault is a value out of range is an element, refused as such).
+ */
 function isTitle(text: string): boolean {
   try {
     readElement(text, 1);
     return false;
-  } catch {
-    return true;
+  } catch (e) {
+    return !(e instanceof ElementError && e.outOfRange);
   }
 }
 
@@ -157,9 +198,11 @@ function dotCommand(state: ParseState, l: LogicalLine): void {
     return;
   }
   if (command === '.end') {
-    state.ended = true;
+    state.endLine = l.line;
     return;
   }
+  if (command === '.scale') return setScale(state, l.line, t.slice(1).join(' '), '.scale');
+  if (command === '.option' || command === '.options') optionScale(state, t, l.line);
   if (command === '.control') {
     state.inControl = true;
     state.file.notes.push(`line ${l.line}: .control block skipped`);
@@ -181,7 +224,7 @@ function openSubckt(state: ParseState, t: readonly string[], line: number, fail:
   const name = t[1];
   if (name === undefined) fail('.subckt needs a name');
   const lower = (name as string).toLowerCase();
-  const twin = state.file.subckts.find((s) => s.name.toLowerCase() === lower);
+  const twin = state.file.subcktByName.get(lower);
   if (twin !== undefined) fail(`subcircuit ${name} is already defined on line ${twin.line}`);
   const rest = t.slice(2).filter((p) => !/^params:$/i.test(p));
   const ports = rest.filter((p) => !p.includes('='));
@@ -189,6 +232,7 @@ function openSubckt(state: ParseState, t: readonly string[], line: number, fail:
     state.file.notes.push(`line ${line}: parameters of .subckt ${name} ignored`);
   const sub: Subckt = { name: name as string, line, ports, elements: [], directives: [] };
   state.file.subckts.push(sub);
+  state.file.subcktByName.set(lower, sub);
   state.current = sub;
 }
 
@@ -196,4 +240,12 @@ function addModel(state: ParseState, t: readonly string[], line: number, fail: (
   const [, name, type] = t;
   if (name === undefined || type === undefined) fail('.model needs a name and a type');
   state.file.models.set((name as string).toLowerCase(), { type: (type as string).toLowerCase(), line });
+}
+
+/** `.option scale=1e-6` (other options stay ignored, with the note every analysis command gets). */
+function optionScale(state: ParseState, t: readonly string[], line: number): void {
+  for (const option of t.slice(1)) {
+    const m = /^scale=(.*)$/i.exec(option);
+    if (m) setScale(state, line, m[1] ?? '', '.option scale=');
+  }
 }

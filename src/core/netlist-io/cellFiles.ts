@@ -1,0 +1,171 @@
+/**
+ * From the text of one file to the cells to check, shared by the app and the command line (which
+ * only reads files and applies its flags): design files hold one cell, SPICE files one or a library.
+ * A file or cell that cannot be used becomes a failure entry; the others still load.
+ */
+import { DesignFileError, parseDesignFile } from '../format/designFile.ts';
+import type { Sequence } from '../model/design.ts';
+import type { Netlist } from '../model/netlist.ts';
+import { DEFAULT_TECHNOLOGY, withVdd, type Technology } from '../model/technology.ts';
+import { ExpressionError, parseExpression } from '../expect/parse.ts';
+import { importSpice, SpiceImportError, type SpiceImportOptions } from './spiceImport.ts';
+
+/** Extensions read as SPICE-compatible netlists, everywhere (docs/semantics.md §6). */
+export const SPICE_EXTENSIONS: readonly string[] = ['.sp', '.spi', '.spice', '.cir', '.net', '.cdl', '.ckt'];
+export const DESIGN_EXTENSIONS: readonly string[] = ['.json'];
+
+/** One cell, ready to check; plain data so it can cross to a worker thread. */
+export interface CellJob {
+  readonly file: string;
+  readonly cell: string;
+  readonly netlist: Netlist;
+  readonly technology: Technology;
+  readonly expectations: Readonly<Record<string, string>>;
+  /** Line of the file each expected function was written on, when it came from the file. */
+  readonly expectationLines: Readonly<Record<string, number>>;
+  /** True when the file named the pins itself (a directive), so no other source overrides them. */
+  readonly pinsNamed: boolean;
+  /** A design file's saved sequences. */
+  readonly sequences: readonly Sequence[];
+  readonly notes: readonly string[];
+}
+
+export interface CellFailure {
+  readonly file: string;
+  /** Null when the whole file could not be read. */
+  readonly cell: string | null;
+  readonly message: string;
+  readonly line?: number;
+  readonly field?: string;
+}
+
+/** A cell that is deliberately not checked (a sequential cell under a library's functions). */
+export interface CellSkip {
+  readonly file: string;
+  readonly cell: string;
+  readonly reason: string;
+}
+
+export type LoadedCell =
+  { readonly job: CellJob } | { readonly failure: CellFailure } | { readonly skipped: CellSkip };
+
+export interface FileCells {
+  readonly cells: readonly LoadedCell[];
+  /** A library: report as a list of cells. */
+  readonly library: boolean;
+  /** Every cell name the file offers (for `--cell` messages). */
+  readonly available: readonly string[];
+}
+
+export interface LoadOptions extends SpiceImportOptions {
+  /** Supply voltage over the file's own (design files) or the default technology's (netlists). */
+  readonly vdd?: number;
+}
+
+function technologyOf(base: Technology, vdd: number | undefined): Technology {
+  return vdd === undefined ? base : withVdd(base, vdd);
+}
+
+export function isSpiceFileName(fileName: string): boolean {
+  const lower = fileName.toLowerCase();
+  return SPICE_EXTENSIONS.some((ext) => lower.endsWith(ext));
+}
+
+/** A design file by extension, or by content when the extension says nothing. */
+export function isDesignText(fileName: string, text: string): boolean {
+  const lower = fileName.toLowerCase();
+  if (DESIGN_EXTENSIONS.some((ext) => lower.endsWith(ext))) return true;
+  return !isSpiceFileName(fileName) && text.trimStart().startsWith('{');
+}
+
+export function cellsFromText(text: string, fileName: string, options: LoadOptions = {}): FileCells {
+  try {
+    return isDesignText(fileName, text)
+      ? designCells(text, fileName, options)
+      : spiceCells(text, fileName, options);
+  } catch (e) {
+    if (e instanceof DesignFileError) {
+      const failure = { file: fileName, cell: null, message: e.message, field: e.field };
+      return unreadable(e.line === undefined ? failure : { ...failure, line: e.line });
+    }
+    if (e instanceof SpiceImportError)
+      return unreadable({ file: fileName, cell: null, message: e.message, line: e.line });
+    throw e;
+  }
+}
+
+function unreadable(failure: CellFailure): FileCells {
+  return { cells: [{ failure }], library: false, available: [] };
+}
+
+function designCells(text: string, file: string, options: LoadOptions): FileCells {
+  const design = parseDesignFile(text, file);
+  const cell = design.netlist.name || design.name;
+  if (options.cell !== undefined && options.cell.toLowerCase() !== cell.toLowerCase())
+    return { cells: [], library: false, available: [cell] };
+  const job: CellJob = {
+    file,
+    cell,
+    netlist: design.netlist,
+    technology: technologyOf(design.technology, options.vdd),
+    expectations: design.expectations,
+    expectationLines: {},
+    pinsNamed: true,
+    sequences: design.sequences,
+    notes: [],
+  };
+  return { cells: [{ job }], library: false, available: [cell] };
+}
+
+function spiceCells(text: string, file: string, options: LoadOptions): FileCells {
+  const imported = importSpice(text, file, options);
+  const technology = technologyOf(DEFAULT_TECHNOLOGY, options.vdd);
+  const position = new Map(imported.order.map((name, i) => [name, i]));
+  const cells: { at: number; cell: LoadedCell }[] = [];
+  for (const c of imported.cells) {
+    const job: CellJob = {
+      file,
+      cell: c.name,
+      netlist: c.netlist,
+      technology,
+      expectations: c.expectations,
+      expectationLines: c.expectationLines,
+      pinsNamed: c.pinsNamed,
+      sequences: [],
+      notes: [...imported.notes, ...c.notes],
+    };
+    cells.push({ at: position.get(c.name) ?? 0, cell: { job } });
+  }
+  for (const f of imported.failed) {
+    const failure = { file, cell: f.name, message: f.error.message, line: f.error.line };
+    cells.push({ at: position.get(f.name) ?? 0, cell: { failure } });
+  }
+  // Cells in the order the file defines them, broken ones included.
+  cells.sort((a, b) => a.at - b.at);
+  return { cells: cells.map((c) => c.cell), library: imported.isLibrary, available: imported.available };
+}
+
+/**
+ * An expected function that cannot be used, located: the file and line of the directive that
+ * wrote it (the column is in the message), or the field of the flag. Null when all parse.
+ */
+export function expectationProblem(job: CellJob): CellFailure | null {
+  for (const [output, text] of Object.entries(job.expectations)) {
+    const line = job.expectationLines[output];
+    const where =
+      line === undefined ? `expected function for ${output}` : `${job.file}:${line}: expect ${output}`;
+    const base = { file: job.file, cell: job.cell, ...(line === undefined ? { field: 'expect' } : { line }) };
+    if (!job.netlist.outputs.includes(output))
+      return {
+        ...base,
+        message: `${where}: '${output}' is not an output (outputs: ${job.netlist.outputs.join(', ') || 'none'})`,
+      };
+    try {
+      parseExpression(text, job.netlist.inputs);
+    } catch (e) {
+      if (e instanceof ExpressionError) return { ...base, message: `${where}: ${e.message}` };
+      throw e;
+    }
+  }
+  return null;
+}
