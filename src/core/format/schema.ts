@@ -86,6 +86,13 @@ export const technologySchema = z
     ioffPerWidth: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.ioffPerWidth),
     kpn: positive.default(DEFAULT_TECHNOLOGY.kpn),
     kpp: positive.default(DEFAULT_TECHNOLOGY.kpp),
+    // Level-1 DC model (added after version 1 files were written, so optional with defaults).
+    gamman: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.gamman),
+    gammap: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.gammap),
+    phin: positive.default(DEFAULT_TECHNOLOGY.phin),
+    phip: positive.default(DEFAULT_TECHNOLOGY.phip),
+    lambdan: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.lambdan),
+    lambdap: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.lambdap),
   })
   .transform(({ vil, vih, ...t }) => {
     const { vil: lowDefault, vih: highDefault } = withVdd(DEFAULT_TECHNOLOGY, t.vdd);

@@ -8,6 +8,9 @@
  * The input thresholds 0.35·VDD and 0.65·VDD are the usual low-voltage CMOS input levels of the JEDEC
  * JESD8 family (from memory). Gate capacitance uses Cox ≈ 6 fF/µm² for tox ≈ 5.7 nm (RCN, from memory);
  * diffusion capacitance and off-current are round illustrative values (common practice, no source).
+ * The level-1 (Shichman–Hodges) DC model reads VT0 from vtn/vtp and k' from kpn/kpp, plus the body-effect
+ * coefficient γ 0.4 V^½ (both types), the surface potential 2φF 0.6 V and the channel-length modulation
+ * λ 0.06 V⁻¹ (NMOS) and 0.1 V⁻¹ (PMOS) of the same RCN tables (from memory).
  */
 export interface Technology {
   /** Where the values come from, shown in the UI and reports. */
@@ -33,6 +36,15 @@ export interface Technology {
   /** Process transconductance k' = µCox, A/V² (NMOS, PMOS magnitude). */
   readonly kpn: number;
   readonly kpp: number;
+  /** Body-effect coefficient γ, V^½ (NMOS, PMOS magnitude): VT = VT0 + γ(√(2φF + VSB) − √(2φF)). */
+  readonly gamman: number;
+  readonly gammap: number;
+  /** Surface potential 2φF, volts (NMOS, PMOS magnitude); the `phi` of level-1 model cards. */
+  readonly phin: number;
+  readonly phip: number;
+  /** Channel-length modulation λ, 1/V (NMOS, PMOS magnitude): ID grows by (1 + λ·VDS). */
+  readonly lambdan: number;
+  readonly lambdap: number;
 }
 
 /**
@@ -59,6 +71,12 @@ export const DEFAULT_TECHNOLOGY: Technology = {
   ioffPerWidth: 1e-10,
   kpn: 115e-6,
   kpp: 30e-6,
+  gamman: 0.4,
+  gammap: 0.4,
+  phin: 0.6,
+  phip: 0.6,
+  lambdan: 0.06,
+  lambdap: 0.1,
 };
 
 /** A technology at another supply: thresholds follow VDD as VIL_FRACTION and VIH_FRACTION. */

@@ -1,0 +1,128 @@
+import { NMOS, RESISTOR, type CompiledNetlist } from '../compile/compile.ts';
+import type { MosDevice } from '../model/netlist.ts';
+import type { Technology } from '../model/technology.ts';
+import { buildTopology, type Topology } from '../solver/topology.ts';
+import type { Level1Device } from './level1.ts';
+
+/**
+ * The DC view of a compiled netlist for one choice of source nets (rails and driven inputs): channel
+ * elements with their level-1 parameters, and the nets to solve split into groups that can be solved
+ * one after another (docs/semantics.md §2, DC levels).
+ *
+ * Gates draw no DC current, so the channel-connected components of the switch-level topology are
+ * independent systems once their gate voltages are known; feedback (a latch) puts several components
+ * in one strongly connected group, solved together. A bulk tied to a net solved in a later group
+ * breaks that order: the whole circuit is then one group.
+ */
+export interface DcGroup {
+  /** Global nets solved together. */
+  readonly nets: Int32Array;
+  /** Channel elements with at least one end in the group. */
+  readonly elements: Int32Array;
+  /** Some element's gate or bulk is a net of the group (a loop, possibly bistable). */
+  readonly feedback: boolean;
+}
+
+export class DcNetwork {
+  readonly topology: Topology;
+  readonly groups: readonly DcGroup[];
+  /** Group of each net, -1 for sources. */
+  readonly groupOf: Int32Array;
+  /** Bulk net per channel element, -1 where the device names none (or for resistors). */
+  readonly bulk: Int32Array;
+  /** Bulk volts where the device names no bulk: ground for NMOS, VDD for PMOS. */
+  readonly bulkDefault: Float64Array;
+  /** Level-1 parameters per channel element, null for resistors. */
+  readonly devices: readonly (Level1Device | null)[];
+  /** Siemens per channel element (resistors only). */
+  readonly conductance: Float64Array;
+  /** Supply rail nets, whose outgoing current is the supply current. */
+  readonly supplyNets: readonly number[];
+
+  constructor(
+    readonly compiled: CompiledNetlist,
+    undriven: ReadonlySet<number> = new Set(),
+  ) {
+    const c = compiled;
+    this.topology = buildTopology(c, undriven);
+    this.bulk = new Int32Array(c.chCount).fill(-1);
+    this.bulkDefault = new Float64Array(c.chCount);
+    this.conductance = new Float64Array(c.chCount);
+    const devices: (Level1Device | null)[] = [];
+    for (let e = 0; e < c.chCount; e++) {
+      const d = c.netlist.devices[c.chDevice[e]];
+      if (c.chKind[e] === RESISTOR || (d.kind !== 'nmos' && d.kind !== 'pmos')) {
+        this.conductance[e] = 1 / c.chOhms[e];
+        devices.push(null);
+        continue;
+      }
+      devices.push(level1Device(d, c.tech));
+      if (d.bulk !== undefined) this.bulk[e] = c.netIndex.get(d.bulk) as number;
+      this.bulkDefault[e] = c.chKind[e] === NMOS ? 0 : c.tech.vdd;
+    }
+    this.devices = devices;
+    this.supplyNets = c.netlist.rails
+      .filter((r) => r.role === 'supply')
+      .map((r) => c.netIndex.get(r.net) as number);
+    const grouped = orderedGroups(c, this.topology, this.bulk);
+    this.groups = grouped.groups;
+    this.groupOf = grouped.groupOf;
+  }
+}
+
+/**
+ * Level-1 parameters of one transistor from the design's technology. The one place a per-model
+ * parameter set (a SPICE `.model` card) would be looked up.
+ */
+export function level1Device(d: MosDevice, tech: Technology): Level1Device {
+  const n = d.kind === 'nmos';
+  return {
+    polarity: n ? 1 : -1,
+    beta: (n ? tech.kpn : tech.kpp) * (d.w / d.l),
+    vt0: n ? tech.vtn : tech.vtp,
+    gamma: n ? tech.gamman : tech.gammap,
+    phi: n ? tech.phin : tech.phip,
+    lambda: n ? tech.lambdan : tech.lambdap,
+  };
+}
+
+function orderedGroups(
+  c: CompiledNetlist,
+  topo: Topology,
+  bulk: Int32Array,
+): { groups: DcGroup[]; groupOf: Int32Array } {
+  const { sccOrder, cccNets, cccElements } = topo;
+  const groupOf = new Int32Array(c.netCount).fill(-1);
+  const lists: { nets: number[]; elements: number[] }[] = [];
+  for (let s = 0; s < sccOrder.start.length - 1; s++) {
+    const nets: number[] = [];
+    const elements: number[] = [];
+    for (let i = sccOrder.start[s]; i < sccOrder.start[s + 1]; i++) {
+      const k = sccOrder.items[i];
+      for (let j = cccNets.start[k]; j < cccNets.start[k + 1]; j++) nets.push(cccNets.items[j]);
+      for (let j = cccElements.start[k]; j < cccElements.start[k + 1]; j++)
+        elements.push(cccElements.items[j]);
+    }
+    for (const n of nets) groupOf[n] = lists.length;
+    lists.push({ nets, elements });
+  }
+  const bulkOutOfOrder = lists.some((g, index) =>
+    g.elements.some((e) => bulk[e] >= 0 && groupOf[bulk[e]] > index),
+  );
+  const merged = bulkOutOfOrder
+    ? [{ nets: lists.flatMap((g) => g.nets), elements: lists.flatMap((g) => g.elements) }]
+    : lists;
+  if (bulkOutOfOrder) for (const n of merged[0]?.nets ?? []) groupOf[n] = 0;
+  const groups = merged.map((g, index) => ({
+    nets: Int32Array.from(g.nets),
+    elements: Int32Array.from(g.elements),
+    feedback: g.elements.some(
+      (e) => controlledFrom(c.chGate[e], groupOf, index) || controlledFrom(bulk[e], groupOf, index),
+    ),
+  }));
+  return { groups, groupOf };
+}
+
+function controlledFrom(net: number, groupOf: Int32Array, group: number): boolean {
+  return net >= 0 && groupOf[net] === group;
+}

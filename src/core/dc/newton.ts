@@ -1,0 +1,62 @@
+import { LuDecomposition, Matrix } from 'ml-matrix';
+import type { NodalSystem } from './assemble.ts';
+
+/** A Newton step smaller than this on every net ends the iteration, volts. */
+export const STEP_TOLERANCE = 1e-9;
+/** Iterations allowed to one Newton run before it counts as not converging. */
+export const MAX_ITERATIONS = 100;
+
+export interface NewtonRun {
+  /** Fixed voltages are multiplied by this (source stepping); 1 normally. */
+  readonly scale: number;
+  /** Extra conductance to ground on every unknown net (gmin stepping); 0 normally. */
+  readonly shunt: number;
+  /** Voltages are kept inside [lo, hi]: no net of a network of channels can leave its sources' range. */
+  readonly lo: number;
+  readonly hi: number;
+}
+
+export interface NewtonOutcome {
+  readonly converged: boolean;
+  readonly iterations: number;
+  /** Largest change per unknown in the last step (which nets were still moving), volts. */
+  readonly lastStep: Float64Array;
+}
+
+/**
+ * Damped Newton–Raphson on one nodal system, updating `x` in place. Damping: a step whose largest
+ * change exceeds a fifth of the voltage range is scaled down to it (so a device jumping between
+ * cut-off and conduction cannot throw the iterate far), and every net is clamped to [lo, hi].
+ */
+export function newton(sys: NodalSystem, x: Float64Array, run: NewtonRun): NewtonOutcome {
+  const limit = Math.max(0.05, 0.2 * (run.hi - run.lo));
+  const lastStep = new Float64Array(sys.n);
+  const rhs = new Matrix(sys.n, 1);
+  for (let iteration = 1; iteration <= MAX_ITERATIONS; iteration++) {
+    sys.assemble(x, run.scale, run.shunt);
+    for (let i = 0; i < sys.n; i++) rhs.set(i, 0, -sys.residual[i]);
+    const step = solveLinear(sys.jacobian(), rhs);
+    if (step === null) return { converged: false, iterations: iteration, lastStep };
+    let largest = 0;
+    for (let i = 0; i < sys.n; i++) largest = Math.max(largest, Math.abs(step[i]));
+    const damping = largest > limit ? limit / largest : 1;
+    for (let i = 0; i < sys.n; i++) {
+      const next = Math.min(run.hi, Math.max(run.lo, x[i] + damping * step[i]));
+      lastStep[i] = Math.abs(next - x[i]);
+      x[i] = next;
+    }
+    if (largest <= STEP_TOLERANCE) {
+      sys.assemble(x, run.scale, run.shunt);
+      return { converged: true, iterations: iteration, lastStep };
+    }
+  }
+  return { converged: false, iterations: MAX_ITERATIONS, lastStep };
+}
+
+/** J·dx = rhs through ml-matrix's LU; null when J is singular or the answer is not finite. */
+export function solveLinear(jacobian: Matrix, rhs: Matrix): Float64Array | null {
+  const lu = new LuDecomposition(jacobian);
+  if (lu.isSingular()) return null;
+  const column = Float64Array.from(lu.solve(rhs).getColumn(0));
+  return column.every(Number.isFinite) ? column : null;
+}

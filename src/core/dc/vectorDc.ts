@@ -1,0 +1,126 @@
+import { checkSweepLimit, sweepVectors } from '../analysis/vectors.ts';
+import { compile, type CompiledNetlist } from '../compile/compile.ts';
+import type { InputValue, InputVector } from '../model/design.ts';
+import type { Netlist } from '../model/netlist.ts';
+import type { Technology } from '../model/technology.ts';
+import { Simulator, type SolveResult } from '../solver/simulator.ts';
+import { problems } from './explain.ts';
+import { DcSolver, sourcesFor } from './operatingPoint.ts';
+import { storedVolts } from './start.ts';
+
+/**
+ * Where the level-1 answer and the switch-level estimate are said to disagree: an output voltage
+ * apart by more than this fraction of VDD, or supply currents apart by more than this ratio (when
+ * either is above 1 nA). Reporting thresholds of our own choosing (common practice, no source).
+ */
+export const DISAGREE_FRACTION_OF_VDD = 0.05;
+export const DISAGREE_CURRENT_RATIO = 1.25;
+const CURRENT_FLOOR = 1e-9;
+
+/** The level-1 DC answer for one vector, JSON-ready (the `dc` object of a vector in the report). */
+export interface VectorDc {
+  /** Volts for the outputs (every net when asked); null where no voltage could be decided. */
+  readonly voltages: Readonly<Record<string, number | null>>;
+  /** Amperes drawn from the supply rails; null when some path to a supply has no solution. */
+  readonly supplyCurrent: number | null;
+  /** Outputs, and `supplyCurrent`, where this answer and the switch-level estimate disagree. */
+  readonly differs: readonly string[];
+  /** Which nets have no voltage and why (floating, did not converge, unstable latch…). */
+  readonly problems: readonly string[];
+}
+
+export interface DcOptions {
+  /** Report every net's voltage, not just the outputs'. */
+  readonly allNets?: boolean;
+}
+
+/**
+ * Level-1 operating points beside switch-level results: give it each SolveResult of a sweep or a
+ * sequence (the app's worker can hand over its own). Starts from the switch-level voltages and keeps
+ * the charge they leave on floating nets.
+ */
+export class VectorDcRunner {
+  private readonly solver: DcSolver;
+
+  constructor(
+    readonly compiled: CompiledNetlist,
+    private readonly options: DcOptions = {},
+  ) {
+    this.solver = new DcSolver(compiled);
+  }
+
+  vector(result: SolveResult): VectorDc {
+    const c = this.compiled;
+    const point = this.solver.solve(sourcesFor(c, result.inputs), {
+      start: result.volts,
+      stored: storedVolts(result),
+    });
+    const names = this.options.allNets ? c.netNames : c.netlist.outputs;
+    const value = (v: number): number | null => (Number.isNaN(v) ? null : v);
+    const voltages = Object.fromEntries(
+      names.map((n) => [n, value(point.volts[c.netIndex.get(n) as number])]),
+    );
+    const supplyCurrent = value(point.supplyCurrent);
+    return {
+      voltages,
+      supplyCurrent,
+      differs: this.differences(result, point.volts, supplyCurrent),
+      problems: problems(point).map((p) => p.message),
+    };
+  }
+
+  private differences(result: SolveResult, volts: Float64Array, current: number | null): string[] {
+    const c = this.compiled;
+    const out = c.netlist.outputs.filter((name) => {
+      const n = c.netIndex.get(name) as number;
+      const a = volts[n];
+      const b = result.volts[n];
+      return (
+        Number.isFinite(a) && Number.isFinite(b) && Math.abs(a - b) > DISAGREE_FRACTION_OF_VDD * c.tech.vdd
+      );
+    });
+    const big = Math.max(Math.abs(current ?? 0), Math.abs(result.supplyCurrent));
+    const small = Math.min(Math.abs(current ?? 0), Math.abs(result.supplyCurrent));
+    if (current !== null && big > CURRENT_FLOOR && big > DISAGREE_CURRENT_RATIO * small)
+      out.push('supplyCurrent');
+    return out;
+  }
+}
+
+/** Level-1 DC for every vector of the sweep, in the order `checkSweep` reports them. */
+export function dcSweep(
+  netlist: Netlist,
+  tech: Technology,
+  options: DcOptions & { readonly undrivenInputs?: boolean; readonly maxInputs?: number } = {},
+): VectorDc[] {
+  checkSweepLimit(netlist.inputs, options.maxInputs);
+  const runner = new VectorDcRunner(compile(netlist, tech), options);
+  const simulator = new Simulator(runner.compiled);
+  const out: VectorDc[] = [];
+  for (const v of sweepVectors(netlist.inputs, options.undrivenInputs))
+    out.push(runner.vector(simulator.solveFresh(v, { recycle: true })));
+  return out;
+}
+
+/**
+ * Level-1 DC for every step of a sequence, in the order `checkSequence` reports them: an input a step
+ * does not mention keeps its value, X before its first mention; stored charge carries over.
+ */
+export function dcSequence(
+  netlist: Netlist,
+  tech: Technology,
+  steps: readonly InputVector[],
+  options: DcOptions = {},
+): VectorDc[] {
+  const runner = new VectorDcRunner(compile(netlist, tech), options);
+  const simulator = new Simulator(runner.compiled);
+  let held: Record<string, InputValue> = Object.fromEntries(
+    netlist.inputs.map((n) => [n, 'X' as InputValue]),
+  );
+  let previous: SolveResult | null = null;
+  return steps.map((step) => {
+    held = { ...held, ...step };
+    previous = previous ? simulator.solveNext(held, previous) : simulator.solveFresh(held);
+    return runner.vector(previous);
+  });
+}
