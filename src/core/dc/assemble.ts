@@ -11,9 +11,30 @@ import type { DcNetwork } from './network.ts';
 export const GMIN = 1e-12;
 
 /**
+ * What is added to the bare circuit while searching for its operating point: fixed voltages scaled
+ * by `scale` (source stepping), a conductance `shunt` from every unknown to ground (gmin stepping),
+ * and per-unknown conductances `tie.g` towards `tie.toward` (pseudo-transient stepping: C/Δt to the
+ * previous voltages).
+ */
+export interface Loading {
+  readonly scale: number;
+  readonly shunt: number;
+  readonly tie?: { readonly g: Float64Array; readonly toward: Float64Array };
+}
+
+/** The bare circuit. */
+export const BARE: Loading = { scale: 1, shunt: 0 };
+
+/** The right-hand side of J·dx = rhs for the unknowns' slope, given d volts / d parameter of fixed nets. */
+export interface SlopeRequest {
+  readonly boundary: Float64Array;
+  readonly rhs: Float64Array;
+}
+
+/**
  * The nodal equations of one group: unknown nets are those with `pos[net] >= 0` (their index in `x`);
- * every other net reads `volts[net]` times `scale` (source stepping scales all fixed voltages).
- * F_i = Σ currents leaving net i through channel elements + (GMIN + shunt)·x_i = 0.
+ * every other net reads `volts[net]` (times `loading.scale`).
+ * F_i = Σ currents leaving net i through channel elements + GMIN·x_i (+ the loading's terms) = 0.
  */
 export class NodalSystem {
   readonly n: number;
@@ -50,24 +71,16 @@ export class NodalSystem {
     return p >= 0 ? x[p] : scale * this.volts[net];
   }
 
-  /**
-   * Fills the Jacobian and the residual at `x`. With `boundarySlope` (d volts / d parameter for the
-   * fixed nets), also fills `rhs`, the right-hand side of J·dx = rhs for the unknowns' slope.
-   */
-  assemble(
-    x: Float64Array,
-    scale: number,
-    shunt: number,
-    boundarySlope?: Float64Array,
-    rhs?: Float64Array,
-  ): void {
+  /** Fills the Jacobian and the residual at `x` (and the slope's right-hand side when asked). */
+  assemble(x: Float64Array, loading: Loading = BARE, slope?: SlopeRequest): void {
     const { residual: res, network: net, mos: m } = this;
+    const { scale } = loading;
     const c = net.compiled;
     for (const row of this.rows) row.fill(0);
     res.fill(0);
-    rhs?.fill(0);
-    this.slope = boundarySlope ?? null;
-    this.rhs = rhs ?? null;
+    slope?.rhs.fill(0);
+    this.slope = slope?.boundary ?? null;
+    this.rhs = slope?.rhs ?? null;
     for (const e of this.elements) {
       const a = c.chA[e];
       const b = c.chB[e];
@@ -93,11 +106,15 @@ export class NodalSystem {
       this.stampBoth(a, b, 0, b, m[G_SOURCE]);
       if (bulkNet >= 0) this.stampBoth(a, b, 0, bulkNet, m[G_BULK]);
     }
-    const g0 = GMIN + shunt;
-    const rows = this.rows;
+    const g0 = GMIN + loading.shunt;
+    const { rows } = this;
+    const tie = loading.tie;
     for (let i = 0; i < this.n; i++) {
       res[i] += g0 * x[i];
       rows[i][i] += g0;
+      if (tie === undefined) continue;
+      res[i] += tie.g[i] * (x[i] - tie.toward[i]);
+      rows[i][i] += tie.g[i];
     }
   }
 

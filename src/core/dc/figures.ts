@@ -38,6 +38,12 @@ export interface SampledCurve {
   readonly at: (vin: number, near: number) => CurvePoint | null;
 }
 
+/**
+ * An output whose two ends differ by less than this fraction of the sweep does not switch, and gets
+ * no figures: a constant high output "crosses" Vout = Vin near VDD, which is no switching threshold.
+ */
+export const MIN_SWING = 0.5;
+
 const NONE: TransferFigures = { vm: null, vil: null, vih: null, vol: null, voh: null, nml: null, nmh: null };
 
 /** Figures of a curve whose every sample has a voltage; notes say why a figure is missing. */
@@ -50,6 +56,13 @@ export function curveFigures(
   const last = vin.length - 1;
   if (last < 1) return NONE;
   const inverting = vout[0] > vout[last];
+  const swing = Math.abs(vout[0] - vout[last]);
+  if (swing < MIN_SWING * (vin[last] - vin[0])) {
+    notes.push(
+      `the output moves only ${swing.toFixed(3)} V over the sweep: it does not switch with this hold`,
+    );
+    return NONE;
+  }
   const vm = refine(
     curve,
     (k) => vout[k] - vin[k],

@@ -36,6 +36,8 @@ export interface SolveState {
   readonly pos: Int32Array;
   readonly start: ArrayLike<number>;
   readonly stored: ArrayLike<number>;
+  /** Newton iterations per attempt (tests lower it to exercise the fallbacks). */
+  readonly maxIterations?: number;
 }
 
 /** Rounds of "hold the floating nets at their stored charge and solve again" before giving up. */
@@ -95,7 +97,13 @@ function solveOnce(network: DcNetwork, group: DcGroup, state: SolveState, held: 
     const v = state.start[n];
     return Number.isFinite(v) ? Math.min(hi, Math.max(lo, v)) : (lo + hi) / 2;
   });
-  const result = converge(sys, x, lo, hi);
+  const bounds = {
+    lo,
+    hi,
+    caps: Float64Array.from(unknowns, (n) => network.compiled.netCap[n]),
+    ...(state.maxIterations === undefined ? {} : { maxIterations: state.maxIterations }),
+  };
+  const result = converge(sys, x, bounds);
   const floating = result.converged ? floatingNets(network, group, sys, unknowns, held) : [];
   const unstable =
     result.converged &&

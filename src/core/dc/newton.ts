@@ -1,19 +1,17 @@
 import { LuDecomposition, Matrix } from 'ml-matrix';
-import type { NodalSystem } from './assemble.ts';
+import type { Loading, NodalSystem } from './assemble.ts';
 
 /** A Newton step smaller than this on every net ends the iteration, volts. */
 export const STEP_TOLERANCE = 1e-9;
 /** Iterations allowed to one Newton run before it counts as not converging. */
 export const MAX_ITERATIONS = 100;
 
-export interface NewtonRun {
-  /** Fixed voltages are multiplied by this (source stepping); 1 normally. */
-  readonly scale: number;
-  /** Extra conductance to ground on every unknown net (gmin stepping); 0 normally. */
-  readonly shunt: number;
+export interface NewtonRun extends Loading {
   /** Voltages are kept inside [lo, hi]: no net of a network of channels can leave its sources' range. */
   readonly lo: number;
   readonly hi: number;
+  /** Iterations before this run counts as not converging (default MAX_ITERATIONS). */
+  readonly maxIterations?: number;
 }
 
 export interface NewtonOutcome {
@@ -32,8 +30,9 @@ export function newton(sys: NodalSystem, x: Float64Array, run: NewtonRun): Newto
   const limit = Math.max(0.05, 0.2 * (run.hi - run.lo));
   const lastStep = new Float64Array(sys.n);
   const rhs = new Matrix(sys.n, 1);
-  for (let iteration = 1; iteration <= MAX_ITERATIONS; iteration++) {
-    sys.assemble(x, run.scale, run.shunt);
+  const most = run.maxIterations ?? MAX_ITERATIONS;
+  for (let iteration = 1; iteration <= most; iteration++) {
+    sys.assemble(x, run);
     for (let i = 0; i < sys.n; i++) rhs.set(i, 0, -sys.residual[i]);
     const step = solveLinear(sys.jacobian(), rhs);
     if (step === null) return { converged: false, iterations: iteration, lastStep };
@@ -46,11 +45,11 @@ export function newton(sys: NodalSystem, x: Float64Array, run: NewtonRun): Newto
       x[i] = next;
     }
     if (largest <= STEP_TOLERANCE) {
-      sys.assemble(x, run.scale, run.shunt);
+      sys.assemble(x, run);
       return { converged: true, iterations: iteration, lastStep };
     }
   }
-  return { converged: false, iterations: MAX_ITERATIONS, lastStep };
+  return { converged: false, iterations: most, lastStep };
 }
 
 /** J·dx = rhs through ml-matrix's LU; null when J is singular or the answer is not finite. */

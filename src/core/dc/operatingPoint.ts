@@ -29,6 +29,8 @@ export interface SolveOptions {
    * holding its charge); NaN: unknown charge, so the net has no DC voltage.
    */
   readonly stored?: ArrayLike<number>;
+  /** Newton iterations allowed per attempt; lower only to see the fallbacks at work. */
+  readonly maxIterations?: number;
 }
 
 /** Fixed voltages of one vector: rails, and inputs at 0 or VDD (X: NaN); Z inputs are not sources. */
@@ -82,10 +84,11 @@ export class DcSolver {
       pos: new Int32Array(c.netCount).fill(-1),
       start: options.start ?? none,
       stored: options.stored ?? none,
+      ...(options.maxIterations === undefined ? {} : { maxIterations: options.maxIterations }),
     };
     const groups = network.groups.map((g) => solveGroup(network, g, state));
     const bridges = new NodalSystem(network, network.topology.bridges, state.pos, volts, 0);
-    bridges.assemble(new Float64Array(0), 1, 0);
+    bridges.assemble(new Float64Array(0));
     for (const e of network.topology.bridges) state.current[e] = bridges.current[e];
     return {
       network,
@@ -133,10 +136,8 @@ export function slopeAt(point: OperatingPoint, source: number): Float64Array {
     const rhs = new Float64Array(unknowns.length);
     sys.assemble(
       Float64Array.from(unknowns, (n) => raw[n]),
-      1,
-      0,
-      slope,
-      rhs,
+      undefined,
+      { boundary: slope, rhs },
     );
     const dx = solveLinear(sys.jacobian(), Matrix.columnVector(Array.from(rhs)));
     unknowns.forEach((n, i) => {

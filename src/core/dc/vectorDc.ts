@@ -25,8 +25,11 @@ export interface VectorDc {
   readonly supplyCurrent: number | null;
   /** Outputs, and `supplyCurrent`, where this answer and the switch-level estimate disagree. */
   readonly differs: readonly string[];
-  /** Which nets have no voltage and why (floating, did not converge, unstable latch…). */
-  readonly problems: readonly string[];
+  /**
+   * Which of the reported nets have no voltage and why (floating, did not converge, unstable latch…),
+   * and which floating nets were held at their stored charge.
+   */
+  readonly notes: readonly string[];
 }
 
 export interface DcOptions {
@@ -65,7 +68,10 @@ export class VectorDcRunner {
       voltages,
       supplyCurrent,
       differs: this.differences(result, point.volts, supplyCurrent),
-      problems: problems(point).map((p) => p.message),
+      // Only about the nets reported: a stack node between two off devices floats in every static gate.
+      notes: problems(point)
+        .filter((p) => p.kind === 'held' || p.nets.some((n) => n in voltages))
+        .map((p) => p.message),
     };
   }
 
