@@ -3,6 +3,8 @@
  * after this point works on typed values. Every problem is a UsageError naming the flag.
  */
 import { parseArgs, type ParseArgsConfig } from 'node:util';
+import { MARGIN_CONVENTIONS, type MarginConvention } from '../core/dc/figures.ts';
+import { DEFAULT_TRANSFER_POINTS, MAX_TRANSFER_POINTS } from '../core/dc/transfer.ts';
 import { spiceValue } from '../core/netlist-io/spiceNumber.ts';
 import { parseStandIns, type StandIn } from '../core/netlist-io/deviceNames.ts';
 import { rangeProblem } from '../core/netlist-io/valueRanges.ts';
@@ -29,6 +31,15 @@ export interface CellChoice {
   readonly functionsFrom?: string;
 }
 
+/** `--transfer IN [--hold "B=1 C=0"] [--convention unity-gain|rails] [--points N]`. */
+export interface TransferChoice {
+  readonly input: string;
+  /** The --hold text, read against the cell's inputs when it runs. */
+  readonly hold?: string;
+  readonly convention: MarginConvention;
+  readonly points: number;
+}
+
 export interface CheckArgs extends CellChoice {
   readonly files: readonly string[];
   readonly json: boolean;
@@ -37,6 +48,9 @@ export interface CheckArgs extends CellChoice {
   /** The power settings given on the command line; the rest take the core's defaults. */
   readonly power?: Partial<PowerSettings>;
   readonly sizing: boolean;
+  readonly transfer?: TransferChoice;
+  /** Level-1 DC operating point beside each vector. */
+  readonly dc: boolean;
   /** Output load in farads for --power and --sizing, when given (else the core's default). */
   readonly load?: number;
   readonly jobs?: number;
@@ -78,6 +92,11 @@ const CHECK_OPTIONS = {
   load: { type: 'string' },
   sizing: { type: 'boolean' },
   jobs: { type: 'string' },
+  transfer: { type: 'string' },
+  hold: { type: 'string' },
+  convention: { type: 'string' },
+  points: { type: 'string' },
+  dc: { type: 'boolean' },
 } as const satisfies ParseArgsConfig['options'];
 
 const EXPORT_OPTIONS = {
@@ -93,6 +112,7 @@ export function parseCheckArgs(argv: readonly string[]): CheckArgs {
   if (powerFlag && !v.power) throw new UsageError('--freq and --activity go with --power');
   if (v.load !== undefined && !v.power && !v.sizing)
     throw new UsageError('--load goes with --power or --sizing');
+  const transfer = transferChoice(v);
   return {
     ...cellChoice(v),
     files: positionals,
@@ -100,6 +120,8 @@ export function parseCheckArgs(argv: readonly string[]): CheckArgs {
     allNets: v['all-nets'] ?? false,
     undriven: v.undriven ?? false,
     sizing: v.sizing ?? false,
+    dc: v.dc ?? false,
+    ...(transfer === undefined ? {} : { transfer }),
     help: v.help ?? false,
     ...(v.load === undefined ? {} : { load: loadValue(v.load) }),
     ...(v.power ? { power: powerChoice(v) } : {}),
@@ -167,6 +189,38 @@ function powerChoice(v: { freq?: string; activity?: string; load?: string }): Pa
     ...(v.freq === undefined ? {} : { frequency: frequency(v.freq) }),
     ...(v.load === undefined ? {} : { load: loadValue(v.load) }),
     ...(activity === undefined ? {} : { activity }),
+  };
+}
+
+function transferChoice(v: {
+  transfer?: string;
+  hold?: string;
+  convention?: string;
+  points?: string;
+}): TransferChoice | undefined {
+  if (v.transfer === undefined) {
+    const stray =
+      v.hold !== undefined
+        ? '--hold'
+        : v.convention !== undefined
+          ? '--convention'
+          : v.points !== undefined
+            ? '--points'
+            : null;
+    if (stray !== null) throw new UsageError(`${stray} goes with --transfer IN`);
+    return undefined;
+  }
+  const convention = v.convention ?? 'unity-gain';
+  if (!(MARGIN_CONVENTIONS as readonly string[]).includes(convention))
+    throw new UsageError(`--convention must be ${MARGIN_CONVENTIONS.join(' or ')} (got "${convention}")`);
+  const points = v.points === undefined ? DEFAULT_TRANSFER_POINTS : positiveInteger('--points', v.points);
+  if (points < 3 || points > MAX_TRANSFER_POINTS)
+    throw new UsageError(`--points ${points}: give 3 to ${MAX_TRANSFER_POINTS}`);
+  return {
+    input: v.transfer.trim(),
+    convention: convention as MarginConvention,
+    points,
+    ...(v.hold === undefined ? {} : { hold: v.hold }),
   };
 }
 

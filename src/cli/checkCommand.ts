@@ -10,7 +10,7 @@ import { runCells } from './parallel.ts';
 import type { CellJson, CellResult, RunOptions } from './runCell.ts';
 import { CAUTION } from '../core/caution.ts';
 import { count, formatCell, formatFailure, formatSkipped } from './textReport.ts';
-import { EXIT_FINDINGS, EXIT_OK, EXIT_UNUSABLE } from './usage.ts';
+import { EXIT_FINDINGS, EXIT_OK, EXIT_UNUSABLE, UsageError } from './usage.ts';
 
 export interface Output {
   readonly out: (text: string) => void;
@@ -19,11 +19,15 @@ export interface Output {
 
 export async function checkCommand(args: CheckArgs, io: Output): Promise<number> {
   const loaded = loadCells(args.files, args);
+  if (args.transfer !== undefined && loaded.cells.length > 1)
+    throw new UsageError('--transfer applies to one cell: add --cell NAME');
   const options: RunOptions = {
     allNets: args.allNets,
     undriven: args.undriven,
     sizing: args.sizing,
     load: args.load ?? DEFAULT_POWER_SETTINGS.load,
+    dc: args.dc,
+    ...(args.transfer === undefined ? {} : { transfer: args.transfer }),
     ...(args.sequence === undefined ? {} : { sequence: args.sequence }),
     ...(args.power === undefined ? {} : { power: args.power }),
   };

@@ -15,6 +15,12 @@ import { DEFAULT_POWER_SETTINGS, PowerOptionsError, type PowerSettings } from '.
 import type { PowerReport } from '../core/power/types.ts';
 import { sizingReport } from '../core/sizing/sizingReport.ts';
 import type { SizingReport } from '../core/sizing/types.ts';
+import { compile } from '../core/compile/compile.ts';
+import { TransferError, type TransferReport } from '../core/dc/transfer.ts';
+import { VectorDcRunner, type VectorDc } from '../core/dc/vectorDc.ts';
+import { Simulator } from '../core/solver/simulator.ts';
+import type { TransferChoice } from './args.ts';
+import { cellTransfer } from './dcCell.ts';
 import type { CellFailure, CellJob, CellSkip } from './loadCells.ts';
 
 export interface RunOptions {
@@ -27,11 +33,24 @@ export interface RunOptions {
   readonly sizing: boolean;
   /** Output load for sizing, farads. */
   readonly load: number;
+  readonly transfer?: TransferChoice;
+  /** Level-1 DC beside each vector, read from the same pass as the check. */
+  readonly dc?: boolean;
 }
 
 /** A vector as printed: inputs as the numbers 0 and 1 (X and Z stay strings), per docs/semantics.md §5. */
 export interface VectorJson extends Omit<VectorReport, 'inputs'> {
   readonly inputs: Readonly<Record<string, 0 | 1 | 'X' | 'Z'>>;
+  /** With --dc: the level-1 operating point of this vector. */
+  readonly dc?: VectorDc;
+}
+
+/** What the optional flags add to a cell's JSON. */
+interface Extras {
+  readonly power?: PowerReport | undefined;
+  readonly sizing?: SizingReport | undefined;
+  readonly transfer?: TransferReport | undefined;
+  readonly dc?: readonly VectorDc[] | undefined;
 }
 
 export interface CellJson extends Omit<CheckReport, 'vectors' | 'steps'> {
@@ -41,6 +60,7 @@ export interface CellJson extends Omit<CheckReport, 'vectors' | 'steps'> {
   readonly technology: { readonly source: string; readonly vdd: number };
   readonly power?: PowerReport;
   readonly sizing?: SizingReport;
+  readonly transfer?: TransferReport;
   readonly caution: string;
 }
 
@@ -51,11 +71,16 @@ export function runCell(job: CellJob, options: RunOptions): CellResult {
   try {
     const steps = options.sequence === undefined ? undefined : sequenceSteps(job, options.sequence);
     const power = options.power === undefined ? undefined : powerSettings(job, options.power, steps);
+    // --dc reads each solved vector of the check's own pass.
+    const simulator = new Simulator(compile(job.netlist, job.technology));
+    const dc = options.dc ? new VectorDcRunner(simulator.compiled, { allNets: options.allNets }) : null;
     const { report, power: counts } = analyseCell(job.netlist, {
       technology: job.technology,
+      simulator,
       expectations: job.expectations,
       allNets: options.allNets,
       undrivenInputs: options.undriven,
+      ...(dc === null ? {} : { observers: [dc] }),
       ...(steps === undefined ? {} : { steps }),
       ...(power === undefined ? {} : { power: power.request }),
     });
@@ -64,7 +89,8 @@ export function runCell(job: CellJob, options: RunOptions): CellResult {
       : undefined;
     const powerJson =
       counts === null || power === undefined ? undefined : powerFromCounts(counts, power.settings);
-    return { json: cellJson(job, report, powerJson, sizing) };
+    const transfer = options.transfer === undefined ? undefined : cellTransfer(job, options.transfer);
+    return { json: cellJson(job, report, { power: powerJson, sizing, transfer, dc: dc?.rows }) };
   } catch (e) {
     return { failure: { file: job.file, cell: job.cell, ...failureOf(e) } };
   }
@@ -105,6 +131,7 @@ function powerSettings(
 export function failureOf(e: unknown): { message: string; field?: string } {
   if (e instanceof ExpressionError) return { message: `expected function: ${e.message}`, field: 'expect' };
   if (e instanceof SequenceError) return { message: `--sequence: ${e.message}`, field: 'sequence' };
+  if (e instanceof TransferError) return { message: `--transfer: ${e.message}`, field: 'transfer' };
   if (e instanceof PowerOptionsError) return { message: `--power: ${e.message}`, field: e.field };
   if (e instanceof SweepLimitError)
     return { message: `${e.message}; name fewer inputs or give --sequence`, field: 'inputs' };
@@ -113,20 +140,24 @@ export function failureOf(e: unknown): { message: string; field?: string } {
   return { message: `internal error (please report it): ${text}` };
 }
 
-function cellJson(job: CellJob, report: CheckReport, power?: PowerReport, sizing?: SizingReport): CellJson {
+function cellJson(job: CellJob, report: CheckReport, extras: Extras): CellJson {
+  const { power, sizing, transfer, dc } = extras;
+  const rows = (list: readonly VectorReport[]): VectorJson[] =>
+    list.map((v, i) => (dc?.[i] === undefined ? vectorJson(v) : { ...vectorJson(v), dc: dc[i] }));
   return {
     cell: job.cell,
     file: job.file,
     inputs: report.inputs,
     outputs: report.outputs,
-    ...(report.vectors === undefined ? {} : { vectors: report.vectors.map(vectorJson) }),
-    ...(report.steps === undefined ? {} : { steps: report.steps.map(vectorJson) }),
+    ...(report.vectors === undefined ? {} : { vectors: rows(report.vectors) }),
+    ...(report.steps === undefined ? {} : { steps: rows(report.steps) }),
     findings: report.findings,
     summary: report.summary,
     notes: [...job.notes, ...report.notes],
     technology: { source: job.technology.source, vdd: job.technology.vdd },
     ...(power === undefined ? {} : { power }),
     ...(sizing === undefined ? {} : { sizing }),
+    ...(transfer === undefined ? {} : { transfer }),
     caution: CAUTION,
   };
 }

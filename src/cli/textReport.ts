@@ -4,6 +4,7 @@
  */
 import type { Finding } from '../core/analysis/report.ts';
 import { formatSi, type Colour } from './colour.ts';
+import { dcLines, transferLines } from './dcText.ts';
 import type { CellFailure, CellSkip } from './loadCells.ts';
 import type { CellJson, VectorJson } from './runCell.ts';
 
@@ -20,6 +21,8 @@ export function formatCell(json: CellJson, c: Colour): string {
     ...findingLines(json.findings, c),
     ...json.notes.map((n) => c.dim(`  note: ${n}`)),
     ...extraLines(json),
+    ...(json.transfer === undefined ? [] : transferLines(json.transfer, c)),
+    ...dcLines(json, c),
     summaryLine(json, c),
   ];
   return lines.join('\n');

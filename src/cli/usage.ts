@@ -62,6 +62,14 @@ Report:
     --activity KIND     sequence or random (default: sequence with --sequence, else random)
     --load C            load on each output, also for --sizing, e.g. 10f (default ${formatSi(DEFAULT_POWER_SETTINGS.load, 'F')})
   --sizing              add logical effort, delay estimates and proposed widths
+  --transfer IN         add the DC transfer curve of every output as IN goes from 0 to VDD, with
+                        VM, VIL, VIH, VOL, VOH and the noise margins (level-1 model; one cell)
+    --hold "B=1 C=0"    values of the other inputs (default: chosen so an output follows IN)
+    --convention KIND   unity-gain (VOL/VOH at the unity-gain points, default) or rails
+                        (VOL/VOH with the input at 0 and VDD)
+    --points N          input steps from 0 to VDD inclusive (default 201)
+  --dc                  add each vector's level-1 DC voltages and supply current beside the
+                        switch-level estimate
   --jobs N              worker threads for large libraries (default: one per core when it pays)
 
 Exit status: 0 no error findings, 1 error findings, 2 unusable input or arguments.

@@ -67,16 +67,18 @@ function flippingOutputs(c: CompiledNetlist, simulator: Simulator, input: string
 }
 
 /**
- * Reads held values written as `"B=1 C=0"` (spaces or commas between); a TransferError names a bad item.
+ * Reads held values written as `"B=1 C=0"` (spaces or commas between; names match an input
+ * regardless of case); a TransferError names a bad item.
  */
 export function parseHold(text: string, inputs: readonly string[]): InputVector {
   const hold: Record<string, InputValue> = {};
   for (const item of text.split(/[\s,]+/).filter((s) => s !== '')) {
     const m = /^([^=\s]+)=([01])$/.exec(item);
-    if (!m) throw new TransferError(`'${item}' is not NAME=0 or NAME=1`);
-    if (!inputs.includes(m[1]))
-      throw new TransferError(`'${m[1]}' is not an input (inputs: ${inputs.join(', ') || 'none'})`);
-    hold[m[1]] = m[2] as InputValue;
+    if (!m) throw new TransferError(`held '${item}' is not NAME=0 or NAME=1`);
+    const name = inputs.includes(m[1]) ? m[1] : inputs.find((n) => n.toLowerCase() === m[1].toLowerCase());
+    if (name === undefined)
+      throw new TransferError(`held '${m[1]}' is not an input (inputs: ${inputs.join(', ') || 'none'})`);
+    hold[name] = m[2] as InputValue;
   }
   return hold;
 }

@@ -1,6 +1,6 @@
 import type { CompiledNetlist } from '../compile/compile.ts';
 import type { InputVector } from '../model/design.ts';
-import { NodalSystem } from './assemble.ts';
+import { GMIN, NodalSystem } from './assemble.ts';
 import { solveGroup, type GroupOutcome, type SolveState } from './group.ts';
 import { DcNetwork } from './network.ts';
 import { solveLinear } from './newton.ts';
@@ -101,8 +101,15 @@ export class DcSolver {
   }
 }
 
+/**
+ * Amperes leaving the supply rails. GMIN on each unknown net draws up to GMIN·V through whatever holds
+ * it, so a total within that bound is below the model's precision and reads 0.
+ */
 function supplyCurrent(network: DcNetwork, current: Float64Array): number {
   const c = network.compiled;
+  let top = c.tech.vdd;
+  for (const v of c.railVolts) if (Number.isFinite(v)) top = Math.max(top, Math.abs(v));
+  const floor = 2 * GMIN * top * c.netCount;
   let total = 0;
   for (const rail of network.supplyNets) {
     for (let i = c.netChannels.start[rail]; i < c.netChannels.start[rail + 1]; i++) {
@@ -111,7 +118,7 @@ function supplyCurrent(network: DcNetwork, current: Float64Array): number {
       total += c.chA[e] === rail ? current[e] : -current[e];
     }
   }
-  return total;
+  return Math.abs(total) <= floor ? 0 : total;
 }
 
 /**

@@ -1,6 +1,7 @@
-import { checkSweepLimit, sweepVectors } from '../analysis/vectors.ts';
+import { sequencePass, sweepPass, type SolveObserver } from '../analysis/pass.ts';
+import { checkSweepLimit } from '../analysis/vectors.ts';
 import { compile, type CompiledNetlist } from '../compile/compile.ts';
-import type { InputValue, InputVector } from '../model/design.ts';
+import type { InputVector } from '../model/design.ts';
 import type { Netlist } from '../model/netlist.ts';
 import type { Technology } from '../model/technology.ts';
 import { Simulator, type SolveResult } from '../solver/simulator.ts';
@@ -38,11 +39,13 @@ export interface DcOptions {
 }
 
 /**
- * Level-1 operating points beside switch-level results: give it each SolveResult of a sweep or a
- * sequence (the app's worker can hand over its own). Starts from the switch-level voltages and keeps
- * the charge they leave on floating nets.
+ * Level-1 operating points beside switch-level results: an observer of a sweep or sequence pass
+ * (docs/semantics.md §5), so the DC rides on the check's own solves; `rows` collects one VectorDc
+ * per vector in order. Starts from the switch-level voltages and keeps the charge they leave on
+ * floating nets.
  */
-export class VectorDcRunner {
+export class VectorDcRunner implements SolveObserver {
+  readonly rows: VectorDc[] = [];
   private readonly solver: DcSolver;
 
   constructor(
@@ -50,6 +53,10 @@ export class VectorDcRunner {
     private readonly options: DcOptions = {},
   ) {
     this.solver = new DcSolver(compiled);
+  }
+
+  add(result: SolveResult): void {
+    this.rows.push(this.vector(result));
   }
 
   vector(result: SolveResult): VectorDc {
@@ -68,11 +75,20 @@ export class VectorDcRunner {
       voltages,
       supplyCurrent,
       differs: this.differences(result, point.volts, supplyCurrent),
-      // Only about the nets reported: a stack node between two off devices floats in every static gate.
       notes: problems(point)
-        .filter((p) => p.kind === 'held' || p.nets.some((n) => n in voltages))
+        .filter((p) => p.nets.some((n) => n in voltages || (p.kind === 'held' && this.gates(n))))
         .map((p) => p.message),
     };
+  }
+
+  /**
+   * Notes are only about the nets reported, and about held nets that gate a device (the answer rests
+   * on their stored charge): a stack node between two off devices floats in every static gate.
+   */
+  private gates(net: string): boolean {
+    const { netGates, netIndex } = this.compiled;
+    const n = netIndex.get(net) as number;
+    return netGates.start[n + 1] > netGates.start[n];
   }
 
   private differences(result: SolveResult, volts: Float64Array, current: number | null): string[] {
@@ -101,17 +117,11 @@ export function dcSweep(
 ): VectorDc[] {
   checkSweepLimit(netlist.inputs, options.maxInputs);
   const runner = new VectorDcRunner(compile(netlist, tech), options);
-  const simulator = new Simulator(runner.compiled);
-  const out: VectorDc[] = [];
-  for (const v of sweepVectors(netlist.inputs, options.undrivenInputs))
-    out.push(runner.vector(simulator.solveFresh(v, { recycle: true })));
-  return out;
+  sweepPass(new Simulator(runner.compiled), [runner], options);
+  return runner.rows;
 }
 
-/**
- * Level-1 DC for every step of a sequence, in the order `checkSequence` reports them: an input a step
- * does not mention keeps its value, X before its first mention; stored charge carries over.
- */
+/** Level-1 DC for every step of a sequence, in the order `checkSequence` reports them. */
 export function dcSequence(
   netlist: Netlist,
   tech: Technology,
@@ -119,14 +129,6 @@ export function dcSequence(
   options: DcOptions = {},
 ): VectorDc[] {
   const runner = new VectorDcRunner(compile(netlist, tech), options);
-  const simulator = new Simulator(runner.compiled);
-  let held: Record<string, InputValue> = Object.fromEntries(
-    netlist.inputs.map((n) => [n, 'X' as InputValue]),
-  );
-  let previous: SolveResult | null = null;
-  return steps.map((step) => {
-    held = { ...held, ...step };
-    previous = previous ? simulator.solveNext(held, previous) : simulator.solveFresh(held);
-    return runner.vector(previous);
-  });
+  sequencePass(new Simulator(runner.compiled), steps, [runner]);
+  return runner.rows;
 }
