@@ -6,6 +6,7 @@
 import { compile } from '../src/core/compile/compile.ts';
 import { DEFAULT_TECHNOLOGY } from '../src/core/model/technology.ts';
 import { FAMILIES, MEMORY_SERIES, OVERHEAD_BITS, TOGGLE_BITS, familyNamed, sweepCircuit } from './cases.ts';
+import { dcCases, type DcCaseResult } from './dc.ts';
 import { floorFrame, floorLoop } from './floor.ts';
 import { measureToggleWithPaint } from './screen.ts';
 import { rippleAdder } from './generators/index.ts';
@@ -135,6 +136,20 @@ function printTables(floorNs: number, cases: readonly CaseResult[], memory: read
   console.log(formatTable(['memory', 'transistors', 'bytes/T', 'JS-heap bytes/T', 'slope bytes/T'], memRows));
 }
 
+function printDc(cases: readonly DcCaseResult[]): void {
+  const rows = cases.map((c) => [
+    c.name,
+    c.transistors,
+    c.points,
+    c.seconds * 1e3,
+    c.cpuSecondsPerRun * 1e3,
+    c.targetSeconds * 1e3,
+  ]);
+  console.log('');
+  console.log(formatTable(['level-1 DC', 'transistors', 'points', 'ms', 'CPU ms/run', 'goal ms'], rows));
+  console.log('ms: the fastest run; CPU ms/run: the average over every run, warm-up included.');
+}
+
 function main(): void {
   const json = process.argv.includes('--json');
   const started = now();
@@ -145,12 +160,15 @@ function main(): void {
   const sweep = measureSweep('sweep/adder-bank-16-inputs', prepare(sweepCircuit()));
   cases.push(sweep, ...analysisOverhead(), ...toggleCases());
   const memory = memorySeries();
+  progress('level-1 DC: transfer curve and every-vector pass');
+  const dc = dcCases();
   printTables(floorNs, cases, memory);
+  printDc(dc);
   const totalSeconds = secondsSince(started);
   console.log(`\nwhole run: ${totalSeconds.toFixed(1)} s`);
   if (json) {
     const withRatio = cases.map((c) => ({ ...c, ratioToFloor: c.nsPerTransistorVector / floorNs }));
-    const summary = { node: process.version, totalSeconds, sweepSeconds: sweep.seconds, memory };
+    const summary = { node: process.version, totalSeconds, sweepSeconds: sweep.seconds, memory, dc };
     console.log(JSON.stringify({ floorNsPerTransistorVector: floorNs, cases: withRatio, ...summary }));
   }
 }

@@ -75,7 +75,8 @@ describe('static CMOS transfer curves', () => {
           const y = transferCurves(gate, DEFAULT_TECHNOLOGY, { input, points: 41 }).curves['Y'];
           const v = (y?.points ?? []).map(([, out]) => out as number);
           expect(v.every((out) => Number.isFinite(out))).toBe(true);
-          for (let k = 1; k < v.length; k++) expect(v[k]).toBeLessThanOrEqual((v[k - 1] as number) + 1e-9);
+          // Within 1 µV: GMIN (1 pS) moves a net held through a weak path by nanovolts.
+          for (let k = 1; k < v.length; k++) expect(v[k]).toBeLessThanOrEqual((v[k - 1] as number) + 1e-6);
         },
       ),
       { numRuns: 40 },

@@ -1,4 +1,4 @@
-import { Matrix } from 'ml-matrix';
+import { LuDecomposition, Matrix } from 'ml-matrix';
 import { evaluateMos, G_BULK, G_DRAIN, G_GATE, G_SOURCE, ID, mosOutput } from './level1.ts';
 import type { DcNetwork } from './network.ts';
 
@@ -38,32 +38,54 @@ export interface SlopeRequest {
  */
 export class NodalSystem {
   readonly n: number;
-  /** ∂F_i/∂x_j, row by row. */
-  readonly rows: Float64Array[];
+  /** ∂F_i/∂x_j. */
+  readonly jacobian: Matrix;
   readonly residual: Float64Array;
+  /** Scratch for Newton: the right-hand side, the step, and how far each unknown last moved. */
+  readonly rhs: Float64Array;
+  readonly step: Float64Array;
+  readonly lastStep: Float64Array;
   /** Per element, after `assemble`: current from drain (A) to source (B), amperes. */
   readonly current: Float64Array;
   /** Per element, after `assemble`: 1 when the channel conducts (not in cut-off). */
   readonly conducting: Uint8Array;
   private readonly mos = mosOutput();
 
+  /**
+   * `volts` holds every fixed net's voltage; point it at the solve's array before assembling (a
+   * system is reused from solve to solve).
+   */
   constructor(
     readonly network: DcNetwork,
     readonly elements: Int32Array,
     readonly pos: Int32Array,
-    readonly volts: Float64Array,
+    public volts: Float64Array,
     n: number,
   ) {
     this.n = n;
-    this.rows = Array.from({ length: n }, () => new Float64Array(n));
+    this.jacobian = new Matrix(n, n);
     this.residual = new Float64Array(n);
+    this.rhs = new Float64Array(n);
+    this.step = new Float64Array(n);
+    this.lastStep = new Float64Array(n);
     this.current = new Float64Array(network.compiled.chCount);
     this.conducting = new Uint8Array(network.compiled.chCount);
   }
 
-  /** The Jacobian as an ml-matrix Matrix (a copy). */
-  jacobian(): Matrix {
-    return new Matrix(this.rows);
+  /**
+   * Solves J·out = rhs: one unknown directly, more through ml-matrix's LU. False when J is singular
+   * or the answer is not finite.
+   */
+  solveLinear(rhs: Float64Array, out: Float64Array): boolean {
+    if (this.n === 1) {
+      out[0] = rhs[0] / this.jacobian.get(0, 0);
+      return Number.isFinite(out[0]);
+    }
+    const lu = new LuDecomposition(this.jacobian);
+    if (lu.isSingular()) return false;
+    const column = lu.solve(Matrix.columnVector(rhs));
+    for (let i = 0; i < this.n; i++) out[i] = column.get(i, 0);
+    return out.every(Number.isFinite);
   }
 
   private read(net: number, x: Float64Array, scale: number): number {
@@ -76,11 +98,11 @@ export class NodalSystem {
     const { residual: res, network: net, mos: m } = this;
     const { scale } = loading;
     const c = net.compiled;
-    for (const row of this.rows) row.fill(0);
+    this.jacobian.fill(0);
     res.fill(0);
     slope?.rhs.fill(0);
-    this.slope = slope?.boundary ?? null;
-    this.rhs = slope?.rhs ?? null;
+    this.slopeBoundary = slope?.boundary ?? null;
+    this.slopeRhs = slope?.rhs ?? null;
     for (const e of this.elements) {
       const a = c.chA[e];
       const b = c.chB[e];
@@ -107,19 +129,17 @@ export class NodalSystem {
       if (bulkNet >= 0) this.stampBoth(a, b, 0, bulkNet, m[G_BULK]);
     }
     const g0 = GMIN + loading.shunt;
-    const { rows } = this;
+    const jac = this.jacobian;
     const tie = loading.tie;
     for (let i = 0; i < this.n; i++) {
-      res[i] += g0 * x[i];
-      rows[i][i] += g0;
-      if (tie === undefined) continue;
-      res[i] += tie.g[i] * (x[i] - tie.toward[i]);
-      rows[i][i] += tie.g[i];
+      const g = g0 + (tie === undefined ? 0 : tie.g[i]);
+      res[i] += g0 * x[i] + (tie === undefined ? 0 : tie.g[i] * (x[i] - tie.toward[i]));
+      jac.set(i, i, jac.get(i, i) + g);
     }
   }
 
-  private slope: Float64Array | null = null;
-  private rhs: Float64Array | null = null;
+  private slopeBoundary: Float64Array | null = null;
+  private slopeRhs: Float64Array | null = null;
 
   /**
    * A current i leaving net a and entering net b, and its derivative g with respect to net `col`:
@@ -132,14 +152,14 @@ export class NodalSystem {
     if (rb >= 0) this.residual[rb] -= i;
     if (g === 0) return;
     const p = this.pos[col];
-    const rows = this.rows;
+    const jac = this.jacobian;
     if (p >= 0) {
-      if (ra >= 0) rows[ra][p] += g;
-      if (rb >= 0) rows[rb][p] -= g;
-    } else if (this.rhs !== null && this.slope !== null) {
-      const d = g * this.slope[col];
-      if (ra >= 0) this.rhs[ra] -= d;
-      if (rb >= 0) this.rhs[rb] += d;
+      if (ra >= 0) jac.set(ra, p, jac.get(ra, p) + g);
+      if (rb >= 0) jac.set(rb, p, jac.get(rb, p) - g);
+    } else if (this.slopeRhs !== null && this.slopeBoundary !== null) {
+      const d = g * this.slopeBoundary[col];
+      if (ra >= 0) this.slopeRhs[ra] -= d;
+      if (rb >= 0) this.slopeRhs[rb] += d;
     }
   }
 }

@@ -1,4 +1,4 @@
-import { NodalSystem } from './assemble.ts';
+import type { NodalSystem } from './assemble.ts';
 import type { DcGroup, DcNetwork } from './network.ts';
 import { isUnstable } from './stability.ts';
 import { converge } from './strategies.ts';
@@ -32,8 +32,6 @@ export interface SolveState {
   /** The numbers Newton settled on, floating nets included: for continuation and slopes only. */
   readonly raw: Float64Array;
   readonly current: Float64Array;
-  /** Position of each unknown of the group being solved, -1 elsewhere (kept all -1 between groups). */
-  readonly pos: Int32Array;
   readonly start: ArrayLike<number>;
   readonly stored: ArrayLike<number>;
   /** Newton iterations per attempt (tests lower it to exercise the fallbacks). */
@@ -43,18 +41,19 @@ export interface SolveState {
 /** Rounds of "hold the floating nets at their stored charge and solve again" before giving up. */
 const HOLD_ROUNDS = 3;
 
-export function solveGroup(network: DcNetwork, group: DcGroup, state: SolveState): GroupOutcome {
+export function solveGroup(network: DcNetwork, k: number, state: SolveState): GroupOutcome {
+  const group = network.groups[k] as DcGroup;
   const missing = missingInputs(network, group, state.volts);
   if (missing.length > 0) return fail(group, state, 'blocked', [], 0, missing);
   const held = new Set<number>();
-  let pass = solveOnce(network, group, state, held);
+  let pass = solveOnce(network, k, state, held);
   let iterations = pass.iterations;
   for (let round = 1; round < HOLD_ROUNDS && pass.converged; round++) {
     // A floating net that gates the group itself decides the rest: hold it at its stored charge.
     const storable = pass.floating.filter((n) => storedAt(state, n) && controlsGroup(network, group, n));
     if (storable.length === 0) break;
     storable.forEach((n) => held.add(n));
-    pass = solveOnce(network, group, state, held);
+    pass = solveOnce(network, k, state, held);
     iterations += pass.iterations;
   }
   if (!pass.converged) return fail(group, state, 'not-converged', pass.tried, iterations, pass.moving);
@@ -87,11 +86,12 @@ interface Pass {
 }
 
 /** One Newton solve of the group with `held` nets fixed at their stored voltage; writes state.volts. */
-function solveOnce(network: DcNetwork, group: DcGroup, state: SolveState, held: ReadonlySet<number>): Pass {
+function solveOnce(network: DcNetwork, k: number, state: SolveState, held: ReadonlySet<number>): Pass {
+  const group = network.groups[k] as DcGroup;
   const unknowns = Array.from(group.nets).filter((n) => !held.has(n));
   for (const n of held) state.volts[n] = state.raw[n] = state.stored[n];
-  const sys = new NodalSystem(network, group.elements, state.pos, state.volts, unknowns.length);
-  unknowns.forEach((n, i) => (state.pos[n] = i));
+  const sys = network.system(k, unknowns.length, state.volts);
+  unknowns.forEach((n, i) => (network.pos[n] = i));
   const [lo, hi] = range(network, group, state, held);
   const x = Float64Array.from(unknowns, (n) => {
     const v = state.start[n];
@@ -109,11 +109,11 @@ function solveOnce(network: DcNetwork, group: DcGroup, state: SolveState, held: 
     result.converged &&
     group.feedback &&
     isUnstable(
-      sys.jacobian(),
+      sys.jacobian,
       unknowns.map((n) => network.compiled.netCap[n]),
     );
   unknowns.forEach((n, i) => {
-    state.pos[n] = -1;
+    network.pos[n] = -1;
     state.volts[n] = state.raw[n] = x[i];
   });
   return {

@@ -2,6 +2,7 @@ import { NMOS, RESISTOR, type CompiledNetlist } from '../compile/compile.ts';
 import type { MosDevice } from '../model/netlist.ts';
 import type { Technology } from '../model/technology.ts';
 import { buildTopology, type Topology } from '../solver/topology.ts';
+import { NodalSystem } from './assemble.ts';
 import type { Level1Device } from './level1.ts';
 
 /**
@@ -38,6 +39,9 @@ export class DcNetwork {
   readonly conductance: Float64Array;
   /** Supply rail nets, whose outgoing current is the supply current. */
   readonly supplyNets: readonly number[];
+  /** Scratch: each unknown's position while its group is solved, -1 everywhere between solves. */
+  readonly pos: Int32Array;
+  private readonly systems: (NodalSystem | undefined)[] = [];
 
   constructor(
     readonly compiled: CompiledNetlist,
@@ -67,6 +71,25 @@ export class DcNetwork {
     const grouped = orderedGroups(c, this.topology, this.bulk);
     this.groups = grouped.groups;
     this.groupOf = grouped.groupOf;
+    this.pos = new Int32Array(c.netCount).fill(-1);
+  }
+
+  /**
+   * The nodal system of group k with `unknowns` unknown nets, reading fixed nets from `volts`; kept
+   * from solve to solve when every net of the group is unknown (the usual case), so a sweep point
+   * allocates almost nothing.
+   */
+  system(k: number, unknowns: number, volts: Float64Array): NodalSystem {
+    const group = this.groups[k] as DcGroup;
+    if (unknowns !== group.nets.length)
+      return new NodalSystem(this, group.elements, this.pos, volts, unknowns);
+    let sys = this.systems[k];
+    if (sys === undefined) {
+      sys = new NodalSystem(this, group.elements, this.pos, volts, unknowns);
+      this.systems[k] = sys;
+    }
+    sys.volts = volts;
+    return sys;
   }
 }
 

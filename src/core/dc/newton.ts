@@ -1,4 +1,3 @@
-import { LuDecomposition, Matrix } from 'ml-matrix';
 import type { Loading, NodalSystem } from './assemble.ts';
 
 /** A Newton step smaller than this on every net ends the iteration, volts. */
@@ -28,14 +27,13 @@ export interface NewtonOutcome {
  */
 export function newton(sys: NodalSystem, x: Float64Array, run: NewtonRun): NewtonOutcome {
   const limit = Math.max(0.05, 0.2 * (run.hi - run.lo));
-  const lastStep = new Float64Array(sys.n);
-  const rhs = new Matrix(sys.n, 1);
+  const { lastStep, rhs, step } = sys;
+  lastStep.fill(0);
   const most = run.maxIterations ?? MAX_ITERATIONS;
   for (let iteration = 1; iteration <= most; iteration++) {
     sys.assemble(x, run);
-    for (let i = 0; i < sys.n; i++) rhs.set(i, 0, -sys.residual[i]);
-    const step = solveLinear(sys.jacobian(), rhs);
-    if (step === null) return { converged: false, iterations: iteration, lastStep };
+    for (let i = 0; i < sys.n; i++) rhs[i] = -sys.residual[i];
+    if (!sys.solveLinear(rhs, step)) return { converged: false, iterations: iteration, lastStep };
     let largest = 0;
     for (let i = 0; i < sys.n; i++) largest = Math.max(largest, Math.abs(step[i]));
     const damping = largest > limit ? limit / largest : 1;
@@ -50,12 +48,4 @@ export function newton(sys: NodalSystem, x: Float64Array, run: NewtonRun): Newto
     }
   }
   return { converged: false, iterations: most, lastStep };
-}
-
-/** J·dx = rhs through ml-matrix's LU; null when J is singular or the answer is not finite. */
-export function solveLinear(jacobian: Matrix, rhs: Matrix): Float64Array | null {
-  const lu = new LuDecomposition(jacobian);
-  if (lu.isSingular()) return null;
-  const column = Float64Array.from(lu.solve(rhs).getColumn(0));
-  return column.every(Number.isFinite) ? column : null;
 }

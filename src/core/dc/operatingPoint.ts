@@ -3,8 +3,6 @@ import type { InputVector } from '../model/design.ts';
 import { GMIN, NodalSystem } from './assemble.ts';
 import { solveGroup, type GroupOutcome, type SolveState } from './group.ts';
 import { DcNetwork } from './network.ts';
-import { solveLinear } from './newton.ts';
-import { Matrix } from 'ml-matrix';
 
 /** The level-1 DC operating point of one input vector (docs/semantics.md §2, DC levels). */
 export interface OperatingPoint {
@@ -81,13 +79,12 @@ export class DcSolver {
       volts,
       raw: volts.slice(),
       current: new Float64Array(c.chCount).fill(NaN),
-      pos: new Int32Array(c.netCount).fill(-1),
       start: options.start ?? none,
       stored: options.stored ?? none,
       ...(options.maxIterations === undefined ? {} : { maxIterations: options.maxIterations }),
     };
-    const groups = network.groups.map((g) => solveGroup(network, g, state));
-    const bridges = new NodalSystem(network, network.topology.bridges, state.pos, volts, 0);
+    const groups = network.groups.map((_g, k) => solveGroup(network, k, state));
+    const bridges = new NodalSystem(network, network.topology.bridges, network.pos, volts, 0);
     bridges.assemble(new Float64Array(0));
     for (const e of network.topology.bridges) state.current[e] = bridges.current[e];
     return {
@@ -131,25 +128,23 @@ export function slopeAt(point: OperatingPoint, source: number): Float64Array {
   const c = network.compiled;
   const slope = new Float64Array(c.netCount).fill(NaN);
   for (let n = 0; n < c.netCount; n++) if (network.topology.isSource[n]) slope[n] = n === source ? 1 : 0;
-  const pos = new Int32Array(c.netCount).fill(-1);
   network.groups.forEach((group, k) => {
     const outcome = point.groups[k];
     if (outcome?.status !== 'solved') return;
-    const fixed = new Set(outcome.floating);
-    for (const n of fixed) slope[n] = Number.isNaN(volts[n]) ? NaN : 0;
-    const unknowns = Array.from(group.nets).filter((n) => !fixed.has(n));
-    unknowns.forEach((n, i) => (pos[n] = i));
-    const sys = new NodalSystem(network, group.elements, pos, raw, unknowns.length);
-    const rhs = new Float64Array(unknowns.length);
+    for (const n of outcome.floating) slope[n] = Number.isNaN(volts[n]) ? NaN : 0;
+    const unknowns =
+      outcome.floating.length === 0 ? group.nets : group.nets.filter((n) => !outcome.floating.includes(n));
+    unknowns.forEach((n, i) => (network.pos[n] = i));
+    const sys = network.system(k, unknowns.length, raw);
     sys.assemble(
       Float64Array.from(unknowns, (n) => raw[n]),
       undefined,
-      { boundary: slope, rhs },
+      { boundary: slope, rhs: sys.rhs },
     );
-    const dx = solveLinear(sys.jacobian(), Matrix.columnVector(Array.from(rhs)));
+    const solved = sys.solveLinear(sys.rhs, sys.step);
     unknowns.forEach((n, i) => {
-      pos[n] = -1;
-      slope[n] = dx === null ? NaN : (dx[i] as number);
+      network.pos[n] = -1;
+      slope[n] = solved ? sys.step[i] : NaN;
     });
   });
   return slope;
