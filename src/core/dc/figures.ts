@@ -4,7 +4,7 @@
  * VOL and VOH, and the noise margins NML = VIL − VOL and NMH = VOH − VIH.
  *
  * Books differ on where VOL and VOH are read. Weste & Harris (CMOS VLSI Design, 4th ed., §2.5) read
- * them on the curve at the unity-gain points (`unity-gain`, the default here); Sedra & Smith
+ * them on the curve at the unity-gain points (section number from memory) (`unity-gain`, the default here); Sedra & Smith
  * (Microelectronic Circuits, 5th ed.) and Rabaey, Chandrakasan & Nikolić (Digital Integrated
  * Circuits, 2nd ed.) take the output with the input at the rails (`rails`).
  */
