@@ -3,21 +3,10 @@
  * the flags' errors. The numbers themselves are checked against published values in tests/dc.
  */
 import { describe, expect, it } from 'vitest';
-import { run } from '../../src/cli/main.ts';
+import { json, railwise } from './inProcess.ts';
 
 const LIB = 'public/examples/tidewater-cells.sp';
 const LATCH = 'public/examples/beacon-sr-latch.railwise.json';
-
-async function railwise(...argv: string[]): Promise<{ status: number; out: string; err: string }> {
-  let out = '';
-  let err = '';
-  const status = await run(argv, {
-    out: (t) => (out += `${t}\n`),
-    err: (t) => (err += `${t}\n`),
-    colour: false,
-  });
-  return { status, out, err };
-}
 
 interface Curve {
   points: [number, number | null][];
@@ -45,15 +34,16 @@ interface Json {
   steps: { dc: { voltages: Record<string, number | null> } }[];
 }
 
-async function json(...argv: string[]): Promise<Json> {
-  const r = await railwise(...argv, '--json');
-  expect(r.status).toBeLessThan(2);
-  return JSON.parse(r.out) as Json;
+/** The cell's JSON, which must have been usable (exit status 0 or 1). */
+async function cellJson(...argv: string[]): Promise<Json> {
+  const { status, body } = await json(...argv);
+  expect(status).toBeLessThan(2);
+  return body as unknown as Json;
 }
 
 describe('--transfer', () => {
   it('adds input, hold, convention and per-output curves with their figures', async () => {
-    const body = await json('check', LIB, '--cell', 'tw_nand2', '--transfer', 'A');
+    const body = await cellJson('check', LIB, '--cell', 'tw_nand2', '--transfer', 'A');
     expect(body.transfer.input).toBe('A');
     expect(body.transfer.hold).toEqual({ B: 1 });
     expect(body.transfer.convention).toBe('unity-gain');
@@ -68,7 +58,7 @@ describe('--transfer', () => {
   });
 
   it('takes --hold, --convention rails and --points', async () => {
-    const body = await json(
+    const body = await cellJson(
       'check',
       LIB,
       '--cell',
@@ -103,7 +93,7 @@ describe('--transfer', () => {
 
 describe('--dc', () => {
   it('adds voltages and supply current from the level-1 operating point to every vector', async () => {
-    const body = await json('check', LIB, '--cell', 'tw_pnor2', '--dc');
+    const body = await cellJson('check', LIB, '--cell', 'tw_pnor2', '--dc');
     expect(body.vectors).toHaveLength(4);
     for (const v of body.vectors) {
       expect(Object.keys(v.dc.voltages)).toEqual(['Y']);
@@ -113,7 +103,7 @@ describe('--dc', () => {
     expect(body.vectors[3]?.dc.supplyCurrent).toBeGreaterThan(1e-6);
   });
   it('follows a sequence, keeping the latch state', async () => {
-    const body = await json('check', LATCH, '--sequence', 'set, hold, reset, hold', '--dc');
+    const body = await cellJson('check', LATCH, '--sequence', 'set, hold, reset, hold', '--dc');
     expect(body.steps.map((s) => s.dc.voltages['Q'])).toEqual([
       expect.closeTo(2.5, 6),
       expect.closeTo(2.5, 6),

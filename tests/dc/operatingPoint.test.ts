@@ -9,7 +9,7 @@ import type { Netlist } from '../../src/core/model/netlist.ts';
 import { DEFAULT_TECHNOLOGY, type Technology } from '../../src/core/model/technology.ts';
 import { nandLatch } from '../../src/core/starters/sequential.ts';
 import { tristateInverter } from '../../src/core/starters/combinational.ts';
-import { squareLaw } from './helpers.ts';
+import { cmosInverter, pseudoNmosInverter, squareLaw } from './helpers.ts';
 
 function operatingPoint(
   netlist: Netlist,
@@ -37,13 +37,7 @@ describe('pseudo-NMOS inverter, output low', () => {
   const kn = 115e-6 * 1.5;
   const kp = kn / 9;
   const L = 0.25;
-  const netlist = circuit('pseudo_nmos')
-    .rails()
-    .input('A')
-    .output('Y')
-    .pmos('PL', { g: 'GND', d: 'Y', s: 'VDD', w: (kp / 30e-6) * L, l: L })
-    .nmos('N1', { g: 'A', d: 'Y', s: 'GND', w: 1.5 * L, l: L })
-    .build();
+  const netlist = pseudoNmosInverter(1.5 * L, (kp / 30e-6) * L, L);
   const vov = 2.5 - 0.4;
   const current = (kp / 2) * vov ** 2;
   const vol = vov - Math.sqrt(vov ** 2 - (2 * current) / kn);
@@ -132,13 +126,7 @@ describe('nets without a DC voltage are reported, never guessed', () => {
     expect(volts('Qb')).toBeLessThan(0.01);
   });
   it('an input at X leaves what it reaches unknown', () => {
-    const inv = circuit('inv')
-      .rails()
-      .input('A')
-      .output('Y')
-      .pmos('P', { g: 'A', d: 'Y', s: 'VDD' })
-      .nmos('N', { g: 'A', d: 'Y', s: 'GND' })
-      .build();
+    const inv = cmosInverter(1, 1);
     const { point, volts } = operatingPoint(inv, { A: 'X' });
     expect(volts('Y')).toBeNaN();
     expect(point.groups[0]?.status).toBe('blocked');
@@ -146,13 +134,7 @@ describe('nets without a DC voltage are reported, never guessed', () => {
   });
   it('when every strategy runs out of iterations, the nets and what was tried are named', () => {
     const tech = squareLaw({ vdd: 2.5, vtn: 0.4, vtp: 0.4 });
-    const pseudo = circuit('p')
-      .rails()
-      .input('A')
-      .output('Y')
-      .pmos('PL', { g: 'GND', d: 'Y', s: 'VDD', w: 0.2 })
-      .nmos('N1', { g: 'A', d: 'Y', s: 'GND', w: 1 })
-      .build();
+    const pseudo = pseudoNmosInverter(1, 0.2);
     const { point, volts } = operatingPoint(pseudo, { A: '1' }, tech, { maxIterations: 1, start: 2.5 });
     expect(volts('Y')).toBeNaN();
     const [group] = point.groups;

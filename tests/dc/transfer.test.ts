@@ -4,16 +4,10 @@ import { circuit } from '../../src/core/model/builder.ts';
 import type { Netlist } from '../../src/core/model/netlist.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import { nand2, tristateInverter } from '../../src/core/starters/combinational.ts';
-import { squareLaw } from './helpers.ts';
+import { cmosInverter, pseudoNmosInverter, squareLaw } from './helpers.ts';
 
 function inverter(wn = 1, wp = 1, l = 0.5): Netlist {
-  return circuit('inv')
-    .rails()
-    .input('A')
-    .output('Y')
-    .pmos('P1', { g: 'A', d: 'Y', s: 'VDD', w: wp, l })
-    .nmos('N1', { g: 'A', d: 'Y', s: 'GND', w: wn, l })
-    .build();
+  return cmosInverter(wn, wp, l);
 }
 
 function curveOf(netlist: Netlist, tech = DEFAULT_TECHNOLOGY, output = 'Y', options = {}): TransferCurve {
@@ -67,13 +61,7 @@ describe('curves beyond the inverter', () => {
   it('a pseudo-NMOS inverter reads its ratioed low at the rail: VOL 0.120 V', () => {
     // The published pseudo-NMOS case (see operatingPoint.test.ts for its sources and derivation).
     const tech = squareLaw({ vdd: 2.5, vtn: 0.4, vtp: 0.4, kpn: 115e-6, kpp: 30e-6 });
-    const pseudo = circuit('pseudo')
-      .rails()
-      .input('A')
-      .output('Y')
-      .pmos('PL', { g: 'GND', d: 'Y', s: 'VDD', w: ((115e-6 * 1.5) / 9 / 30e-6) * 0.25, l: 0.25 })
-      .nmos('N1', { g: 'A', d: 'Y', s: 'GND', w: 1.5 * 0.25, l: 0.25 })
-      .build();
+    const pseudo = pseudoNmosInverter(1.5 * 0.25, ((115e-6 * 1.5) / 9 / 30e-6) * 0.25);
     const y = curveOf(pseudo, tech, 'Y', { convention: 'rails' });
     expect(Math.abs((y.vol as number) - 0.12)).toBeLessThan(0.001);
     expect(y.voh).toBeCloseTo(2.5, 6);
