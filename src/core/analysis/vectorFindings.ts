@@ -7,6 +7,7 @@ import {
   FLAG_CONTENTION,
   FLAG_DEGRADED,
   FLAG_OSCILLATING,
+  LEVEL_0,
   LEVEL_X,
   LEVEL_Z,
   levelName,
@@ -144,7 +145,7 @@ function flaggedFindings(r: SolveResult, vector: number, label: () => string): F
         vector,
         [name.net(n)],
         by,
-        `degraded level at ${label()}: ${name.net(n)} reaches only ${r.volts[n].toFixed(2)} V (a threshold drop${by.length ? ` through ${by[0]}` : ''})`,
+        `degraded level at ${label()}: ${name.net(n)} ${r.levels[n] === LEVEL_0 ? 'falls only to' : 'reaches only'} ${r.volts[n].toFixed(2)} V (a threshold drop${by.length ? ` through ${by[0]}` : ''})`,
       ),
     );
   }

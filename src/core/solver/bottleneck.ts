@@ -1,5 +1,6 @@
 import { NMOS, PMOS } from '../compile/compile.ts';
 import type { Frame } from './frame.ts';
+import { clampPass, GATE_NOT_TIED, GATE_TIED_A } from './selfGated.ts';
 
 /**
  * Threshold drop (docs/semantics.md §2.4) as a bottleneck path search. A high level passed by an NMOS is capped at
@@ -27,7 +28,7 @@ export function bottleneck(frame: Frame, root: number, snapVolts: Float64Array, 
     if (high !== vs >= mid) continue;
     const e = frame.element(j);
     const local = topo.elemLocalA[e] >= 0 ? topo.elemLocalA[e] : topo.elemLocalB[e];
-    if (offer(frame, local, passed(frame, e, vs, snapVolts, high), vs, e, high)) {
+    if (offer(frame, local, passed(frame, e, vs, snapVolts, high, local), vs, e, high)) {
       if (!inQueue[local]) {
         inQueue[local] = 1;
         queue[qTail] = local;
@@ -49,7 +50,8 @@ export function bottleneck(frame: Frame, root: number, snapVolts: Float64Array, 
       const b = topo.elemLocalB[e];
       if (a < 0 || b < 0) continue;
       const other = a === i ? b : a;
-      if (offer(frame, other, passed(frame, e, best[i], snapVolts, high), best[i], e, high, limiter[i])) {
+      const v = passed(frame, e, best[i], snapVolts, high, other);
+      if (offer(frame, other, v, best[i], e, high, limiter[i])) {
         if (!inQueue[other]) {
           inQueue[other] = 1;
           queue[qTail] = other;
@@ -61,10 +63,25 @@ export function bottleneck(frame: Frame, root: number, snapVolts: Float64Array, 
   return reached;
 }
 
-/** Level after passing `v` through element e (see above). Unknown gate voltages pass the best case. */
-function passed(frame: Frame, e: number, v: number, snapVolts: Float64Array, high: boolean): number {
-  const { c } = frame;
+/**
+ * Level after passing `v` through element e into local net `into` (see above). Unknown gate voltages
+ * pass the best case; a self-gated element follows its clamp rule (selfGated.ts).
+ */
+function passed(
+  frame: Frame,
+  e: number,
+  v: number,
+  snapVolts: Float64Array,
+  high: boolean,
+  into: number,
+): number {
+  const { c, topo } = frame;
   const kind = c.chKind[e];
+  const tied = topo.selfGate[e];
+  if (tied !== GATE_NOT_TIED) {
+    const gateEnd = tied === GATE_TIED_A ? topo.elemLocalA[e] : topo.elemLocalB[e];
+    return clampPass(kind, v, high, into === gateEnd, c.tech);
+  }
   if (high && kind === NMOS) {
     const vg = snapVolts[c.chGate[e]];
     return Math.min(v, (Number.isNaN(vg) ? c.tech.vdd : vg) - c.tech.vtn);

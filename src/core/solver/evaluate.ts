@@ -72,6 +72,7 @@ interface Unknown {
 function setConduction(frame: Frame, snapVolts: Float64Array, sourceVolts: Float64Array): boolean {
   const { topo, c, on, maybe, sourceEndVolts } = frame;
   const { chKind, chGate, chA, chB } = c;
+  const { selfGate } = topo;
   const { vil, vih } = c.tech;
   const items = topo.cccElements.items;
   const base = frame.elemStart;
@@ -79,7 +80,8 @@ function setConduction(frame: Frame, snapVolts: Float64Array, sourceVolts: Float
   for (let j = 0; j < frame.elemCount; j++) {
     const e = items[base + j];
     const gate = chGate[e];
-    const state = conductionFor(chKind[e], gate >= 0 ? snapVolts[gate] : NaN, vil, vih);
+    // A self-gated element is tried as on; the trial switches it off when it is not forward-biased.
+    const state = selfGate[e] ? ON : conductionFor(chKind[e], gate >= 0 ? snapVolts[gate] : NaN, vil, vih);
     on[j] = state === OFF ? 0 : 1;
     maybe[j] = state === MAYBE ? 1 : 0;
     const sourceEnd = topo.elemLocalA[e] < 0 ? chA[e] : topo.elemLocalB[e] < 0 ? chB[e] : -1;

@@ -13,6 +13,7 @@ import {
   ON,
 } from './levels.ts';
 import { sameVolts, Schedule, type NetState } from './schedule.ts';
+import { clampConduction, GATE_NOT_TIED, GATE_TIED_A } from './selfGated.ts';
 import type { Topology } from './topology.ts';
 
 export { SETTLE_ROUNDS_BASE, SETTLE_ROUNDS_PER_COMPONENT } from './schedule.ts';
@@ -183,10 +184,19 @@ export class Simulator {
     }
   }
 
-  /** Conduction of every element from its gate's voltage (a floating gate reads its stored charge). */
-  private conductionAll(volts: Float64Array, into: Uint8Array): Uint8Array {
-    const { chKind, chGate, tech } = this.compiled;
+  /**
+   * Conduction of every element from its gate's voltage (a floating gate reads its stored charge); a
+   * self-gated element conducts when it is forward-biased.
+   */
+  private conductionAll(topology: Topology, volts: Float64Array, into: Uint8Array): Uint8Array {
+    const { chKind, chGate, chA, chB, tech } = this.compiled;
     for (let e = 0; e < into.length; e++) {
+      const tied = topology.selfGate[e];
+      if (tied !== GATE_NOT_TIED) {
+        const [gateEnd, other] = tied === GATE_TIED_A ? [chA[e], chB[e]] : [chB[e], chA[e]];
+        into[e] = clampConduction(chKind[e], volts[gateEnd], volts[other]);
+        continue;
+      }
       const gate = chGate[e];
       into[e] = conductionFor(chKind[e], gate >= 0 ? volts[gate] : NaN, tech.vil, tech.vih);
     }
@@ -241,7 +251,11 @@ export class Simulator {
       levels,
       flags,
       limiter: state.limiter,
-      conduction: this.conductionAll(volts, recycled ? recycled.conduction : new Uint8Array(c.chCount)),
+      conduction: this.conductionAll(
+        topology,
+        volts,
+        recycled ? recycled.conduction : new Uint8Array(c.chCount),
+      ),
       chCurrent,
       sourceOut,
       paths: currentPaths(c, topology.isSource, schedule.sourceNets, volts, chCurrent, sourceOut),
