@@ -6,6 +6,7 @@ import {
   FLAG_CHARGE_SHARED,
   FLAG_MAYBE,
   FLAG_OSCILLATING,
+  FLAG_STATES,
   LEVEL_0,
   LEVEL_1,
   LEVEL_X,
@@ -163,7 +164,8 @@ export class Simulator {
   /**
    * What an incremental solve must re-evaluate: components touched by a source whose voltage changed
    * and, when carrying state, those whose last result was an event rather than a state (charge just
-   * shared, a loop that did not settle, a value made unknown by maybe devices), since evaluating them
+   * shared, a loop that did not settle, a value made unknown by maybe devices or by several steady
+   * states), since evaluating them
    * again from the state they left need not repeat it.
    */
   private markChanged(
@@ -179,7 +181,10 @@ export class Simulator {
     if (fresh) return;
     const { cccOfNet } = schedule.topology;
     for (let n = 0; n < base.flags.length; n++) {
-      if (cccOfNet[n] >= 0 && base.flags[n] & (FLAG_CHARGE_SHARED | FLAG_OSCILLATING | FLAG_MAYBE))
+      if (
+        cccOfNet[n] >= 0 &&
+        base.flags[n] & (FLAG_CHARGE_SHARED | FLAG_OSCILLATING | FLAG_MAYBE | FLAG_STATES)
+      )
         dirty[cccOfNet[n]] = 1;
     }
   }
