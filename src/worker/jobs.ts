@@ -3,7 +3,7 @@
  * command line makes): the worker exposes them, tests call them directly. Nothing here knows about
  * workers or the page.
  */
-import { DEFAULT_MAX_INPUTS } from '../core/analysis/check.ts';
+import { DEFAULT_MAX_INPUTS, expressionNames } from '../core/analysis/check.ts';
 import { analyseCell } from '../core/power/cellAnalysis.ts';
 import { sizingReport } from '../core/sizing/sizingReport.ts';
 import { expressionProblem } from '../core/view/expectation.ts';
@@ -32,12 +32,13 @@ export function usableExpectations(cell: CellInput): {
   expectations: Record<string, string>;
   notes: string[];
 } {
-  const { inputs, outputs } = cell.netlist;
+  const { outputs } = cell.netlist;
+  const names = expressionNames(cell.netlist);
   const expectations: Record<string, string> = {};
   const notes: string[] = [];
   for (const [output, text] of Object.entries(cell.expectations)) {
     const problem = outputs.includes(output)
-      ? expressionProblem(text, inputs)
+      ? expressionProblem(text, names)
       : { message: 'not an output', position: 0 };
     if (problem === null) expectations[output] = text;
     else notes.push(`expected function of ${output} ignored: ${problem.message}`);

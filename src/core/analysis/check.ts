@@ -41,9 +41,19 @@ export const FINDING_KINDS: readonly FindingKind[] = [
   'charge-sharing',
   'no-steady-state',
   'mismatch',
+  'unknown',
   'rule',
   'limit',
 ];
+
+/**
+ * Names an expected function may use (docs/semantics.md §4): the inputs, and the outputs, which stand
+ * for the value the output held before this vector (the previous step in a sequence; unknown in a
+ * sweep, where every vector starts from an unknown state). `Q = !Sb | Rb & Q` says that Q holds.
+ */
+export function expressionNames(netlist: Pick<Netlist, 'inputs' | 'outputs'>): string[] {
+  return [...netlist.inputs, ...netlist.outputs];
+}
 
 /** `A=1 B=0` */
 export function vectorLabel(v: InputVector, inputs: readonly string[]): string {
@@ -55,10 +65,14 @@ class Checker implements SolveObserver {
   readonly simulator: Simulator;
   readonly rows: VectorReport[] = [];
   private readonly expectations: [number, Expr][];
+  /** Some expected function names an output (its held value). */
+  private readonly refersToHeld: boolean;
 
   constructor(
     readonly netlist: Netlist,
     readonly options: CheckOptions,
+    /** A sweep's vectors each start from an unknown state; a sequence's steps follow each other. */
+    readonly mode: 'vectors' | 'steps',
   ) {
     this.simulator =
       options.simulator ?? new Simulator(compile(netlist, options.technology ?? DEFAULT_TECHNOLOGY));
@@ -68,12 +82,16 @@ class Checker implements SolveObserver {
       if (n === undefined || !netlist.outputs.includes(output)) {
         throw new ExpressionError(`'${output}' is not an output`, `${output} = ${text}`, 0);
       }
-      return [n, parseExpression(text, netlist.inputs)];
+      return [n, parseExpression(text, expressionNames(netlist))];
     });
+    const outputs = new Set(netlist.outputs);
+    this.refersToHeld = this.expectations.some(([, e]) => namesIn(e).some((name) => outputs.has(name)));
   }
 
   add(r: SolveResult, index: number): void {
-    this.rows.push(this.vectorReport(r, index));
+    // In a sequence an output's held value is its level at the previous step; a sweep has none.
+    const held = this.mode === 'steps' ? this.rows[index - 1] : undefined;
+    this.rows.push(this.vectorReport(r, index, held));
   }
 
   /** Every reader of this pass: the checker's own rows first. */
@@ -81,11 +99,16 @@ class Checker implements SolveObserver {
     return [this, ...(this.options.observers ?? [])];
   }
 
-  vectorReport(r: SolveResult, index: number): VectorReport {
+  /**
+   * One vector's report. `held` is the previous step's report in a sequence; without it (a sweep, or a
+   * sequence's first step) the outputs' held values are unknown.
+   */
+  vectorReport(r: SolveResult, index: number, held?: VectorReport): VectorReport {
     const { netlist } = this;
     const c = this.compiled;
+    const values = this.refersToHeld ? { ...heldValues(netlist.outputs, held), ...r.inputs } : r.inputs;
     const expected = new Map<number, ExpectedValue>(
-      this.expectations.map(([n, e]) => [n, evaluateExpression(e, r.inputs)]),
+      this.expectations.map(([n, e]) => [n, evaluateExpression(e, values)]),
     );
     const voltageNets = this.options.allNets ? c.netNames : netlist.outputs;
     const volts = (name: string): number | null => {
@@ -133,6 +156,29 @@ class Checker implements SolveObserver {
   }
 }
 
+/** Each output's level in the previous report, read as an input value (X where not 0 or 1). */
+function heldValues(outputs: readonly string[], held: VectorReport | undefined): Record<string, InputValue> {
+  return Object.fromEntries(
+    outputs.map((o) => {
+      const level = held?.outputs[o];
+      return [o, level === '0' || level === '1' ? level : 'X'];
+    }),
+  );
+}
+
+/** The names an expression reads, walked with a list rather than the call stack. */
+function namesIn(root: Expr): string[] {
+  const names: string[] = [];
+  const todo: Expr[] = [root];
+  for (let e = todo.pop(); e !== undefined; e = todo.pop()) {
+    if (e.kind === 'name') names.push(e.name);
+    else if (e.kind === 'not') todo.push(e.arg);
+    else if (e.kind === 'choose') todo.push(e.select, e.whenTrue, e.whenFalse);
+    else if (e.kind !== 'const') todo.push(e.left, e.right);
+  }
+  return names;
+}
+
 export function summarize(vectors: number, findings: readonly Finding[]): Summary {
   const counts: Record<string, number> = { vectors, errors: 0, warnings: 0 };
   for (const k of FINDING_KINDS) counts[k] = 0;
@@ -145,7 +191,7 @@ export function summarize(vectors: number, findings: readonly Finding[]): Summar
 
 /** Checks every input combination, each solved from an unknown state (docs/semantics.md §2.9, sweep mode). */
 export function checkSweep(netlist: Netlist, options: CheckOptions = {}): CheckReport {
-  const checker = new Checker(netlist, options);
+  const checker = new Checker(netlist, options, 'vectors');
   checkSweepLimit(netlist.inputs, options.maxInputs);
   const total = sweepSize(netlist.inputs, options.undrivenInputs);
   const done = sweepPass(checker.simulator, checker.observers(), options);
@@ -162,7 +208,7 @@ export function checkSequence(
   steps: readonly InputVector[],
   options: CheckOptions = {},
 ): CheckReport {
-  const checker = new Checker(netlist, options);
+  const checker = new Checker(netlist, options, 'steps');
   sequencePass(checker.simulator, steps, checker.observers(), options.onProgress);
   return checker.report('steps', checker.rows, []);
 }
