@@ -1,7 +1,14 @@
 import { NMOS, PMOS } from '../compile/compile.ts';
 import { bottleneck } from './bottleneck.ts';
 import type { Frame } from './frame.ts';
-import { classify, FLAG_CHARGE_SHARED, FLAG_CONTENTION, FLAG_DEGRADED, LEVEL_X } from './levels.ts';
+import {
+  classify,
+  FLAG_CHARGE_SHARED,
+  FLAG_CONTENTION,
+  FLAG_DEGRADED,
+  FLAG_ILL_CONDITIONED,
+  LEVEL_X,
+} from './levels.ts';
 import { solveNodal } from './nodal.ts';
 import { conductsForward, GATE_TIED_A } from './selfGated.ts';
 
@@ -171,7 +178,7 @@ function driveSingle(frame: Frame, root: number, snapVolts: Float64Array, vs: nu
  */
 function driveMixed(frame: Frame, root: number, snapVolts: Float64Array): void {
   const { c } = frame;
-  solveNodal(frame, root);
+  if (!solveNodal(frame, root)) return markIllConditioned(frame, root);
   const resistive = new Map<number, number>();
   for (let i = frame.head[root]; i >= 0; i = frame.next[i]) resistive.set(i, frame.volts[i]);
   const highLimit = new Map<number, [number, number]>();
@@ -194,5 +201,15 @@ function driveMixed(frame: Frame, root: number, snapVolts: Float64Array): void {
     let flags = limiter >= 0 ? FLAG_DEGRADED : 0;
     if (classify(v, c.tech.vil, c.tech.vih) === LEVEL_X) flags |= FLAG_CONTENTION;
     frame.flags[i] = flags;
+  }
+}
+
+/** A group the nodal solve could not trust: its nets are X, flagged, and carry no current. */
+function markIllConditioned(frame: Frame, root: number): void {
+  for (let i = frame.head[root]; i >= 0; i = frame.next[i]) {
+    frame.volts[i] = NaN;
+    frame.driven[i] = 1;
+    frame.flags[i] = FLAG_ILL_CONDITIONED;
+    frame.limiter[i] = -1;
   }
 }
