@@ -101,3 +101,39 @@ export function randomNetlist(): fc.Arbitrary<Netlist> {
     outputs: ['Y', 'n1'],
   }));
 }
+
+/**
+ * Pass networks: transistors whose gates sit at a rail or an input (so every device is definitely on
+ * or off) and resistors, wired at random between inputs, rails and internal nets. Levels reach nets
+ * along several paths of different lengths with threshold drops, which is where a degraded level's
+ * limiter is chosen.
+ */
+export function passNetwork(): fc.Arbitrary<Netlist> {
+  const nets = ['VDD', 'GND', 'A', 'B', 'Y', 'n1', 'n2', 'n3'];
+  const net = fc.constantFrom(...nets);
+  const transistor = fc.record({
+    kind: fc.constantFrom('nmos' as const, 'pmos' as const),
+    gate: fc.constantFrom('VDD', 'GND', 'A', 'B'),
+    drain: net,
+    source: net,
+    w: fc.constantFrom(0.5, 1, 2),
+    l: fc.constant(0.25),
+  });
+  const resistor = fc.record({
+    kind: fc.constant('resistor' as const),
+    a: net,
+    b: net,
+    ohms: fc.constantFrom(1e3, 1e5),
+  });
+  const device = fc.oneof({ weight: 3, arbitrary: transistor }, { weight: 2, arbitrary: resistor });
+  return fc.array(device, { minLength: 4, maxLength: 14 }).map((devices) => ({
+    name: 'pass',
+    devices: devices.map((d, i) => ({ ...d, name: `D${i}` })),
+    rails: [
+      { net: 'VDD', role: 'supply' as const },
+      { net: 'GND', role: 'ground' as const },
+    ],
+    inputs: ['A', 'B'],
+    outputs: ['Y', 'n1', 'n2', 'n3', 'n4', 'n5'],
+  }));
+}

@@ -66,45 +66,58 @@ interface Explanation {
 }
 
 /**
- * Why net `out` is X, as far as the result tells: walks back from it through maybe-conducting devices
- * to their unknown gates until it meets nets whose flags name a cause.
+ * Why net `out` is X, as far as the result tells: walks back from it, a level at a time, through
+ * maybe-conducting devices to their unknown gates until it meets nets whose flags name a cause. Each
+ * level is taken in name order, so what is named never depends on the order of devices.
  */
 function explain(r: SolveResult, out: number): Explanation {
   const name = new Namer(r);
-  const causes = new Map<string, number[]>();
-  const devices = new Set<number>();
-  const seen = new Set<number>([out]);
-  const queue = [out];
-  for (let n = queue.shift(); n !== undefined && seen.size <= MAX_TRACED_NETS; n = queue.shift()) {
-    const cause = causeOf(r, n);
-    if (cause !== null) {
-      const with_ = (r.flags[n] & FLAG_STATES) !== 0 ? statesPartners(r, n) : [n];
-      const listed = causes.get(cause) ?? [];
-      causes.set(cause, [...listed, ...with_.filter((m) => !listed.includes(m))]);
-      continue;
-    }
-    for (const [e, gate] of maybeDevices(r, n)) {
-      devices.add(e);
-      if (gate >= 0 && !seen.has(gate)) {
-        seen.add(gate);
-        queue.push(gate);
-      }
-    }
-  }
-  const parts = [...causes].map(([cause, nets]) =>
-    cause.replace('%', nets.map((n) => name.net(n)).join(', ')),
-  );
+  const byName = (a: number, b: number): number => (name.net(a) < name.net(b) ? -1 : 1);
+  const { causes, devices } = traceCauses(r, out, byName);
+  const listed = [...causes].map(([cause, nets]) => [cause, [...nets].sort(byName)] as const);
+  listed.sort(([a], [b]) => (a < b ? -1 : 1));
+  const parts = listed.map(([cause, nets]) => cause.replace('%', nets.map((n) => name.net(n)).join(', ')));
   const through = [...devices].map((e) => name.element(e)).sort();
   const text =
     (parts.length > 0 ? parts.join('; ') : 'its value depends on devices whose gates are unknown') +
     (through.length > 0 ? ` (through ${through.join(', ')})` : '');
-  const causeNets = [...causes.values()].flat().filter((n) => n !== out);
+  const causeNets = [...new Set(listed.flatMap(([, nets]) => nets))].filter((n) => n !== out);
   return {
     text,
     nets: causeNets.map((n) => name.net(n)),
     devices: through.length > 0 ? through : channelDevices(r, [out, ...causeNets], true),
     stored: causes.has(STORED_STATE),
   };
+}
+
+/** The breadth-first walk of `explain`: causes with their nets, and the maybe devices passed. */
+function traceCauses(
+  r: SolveResult,
+  out: number,
+  byName: (a: number, b: number) => number,
+): { causes: Map<string, Set<number>>; devices: Set<number> } {
+  const causes = new Map<string, Set<number>>();
+  const devices = new Set<number>();
+  const seen = new Set<number>([out]);
+  for (let level = [out]; level.length > 0 && seen.size <= MAX_TRACED_NETS;) {
+    const next: number[] = [];
+    for (const n of level) {
+      const cause = causeOf(r, n);
+      if (cause !== null) {
+        const set = causes.get(cause) ?? new Set<number>();
+        for (const m of (r.flags[n] & FLAG_STATES) !== 0 ? statesPartners(r, n) : [n]) set.add(m);
+        causes.set(cause, set);
+        continue;
+      }
+      for (const [e, gate] of maybeDevices(r, n)) {
+        devices.add(e);
+        if (gate >= 0 && !seen.has(gate)) next.push(gate);
+      }
+    }
+    level = [...new Set(next)].sort(byName).slice(0, MAX_TRACED_NETS + 1 - seen.size);
+    for (const n of level) seen.add(n);
+  }
+  return { causes, devices };
 }
 
 const STORED_STATE = 'several steady states on % (stored state: a latch or memory holding its value)';

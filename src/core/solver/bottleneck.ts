@@ -13,28 +13,84 @@ import { clampPass, GATE_NOT_TIED, GATE_TIED_A } from './selfGated.ts';
  * Returns false when no chosen source reaches the component.
  */
 export function bottleneck(frame: Frame, root: number, snapVolts: Float64Array, high: boolean): boolean {
-  const { c, topo, best, limiter, queue, inQueue } = frame;
-  const mid = c.tech.vdd / 2;
+  const { best, limiter } = frame;
   for (let i = frame.head[root]; i >= 0; i = frame.next[i]) {
     best[i] = high ? -Infinity : Infinity;
     limiter[i] = -1;
   }
+  let seed = high ? -Infinity : Infinity;
+  const reached = propagate(frame, root, snapVolts, high, (into, v, vIn, _e, from) => {
+    if (from < 0) seed = high ? Math.max(seed, vIn) : Math.min(seed, vIn);
+    if (high ? v > best[into] + 1e-12 : v < best[into] - 1e-12) {
+      best[into] = v;
+      return true;
+    }
+    return false;
+  });
+  let dropped = false;
+  for (let i = frame.head[root]; i >= 0; i = frame.next[i])
+    if (Math.abs(best[i] - seed) > 1e-12) dropped = true;
+  if (dropped) findLimiters(frame, root, snapVolts, high);
+  return reached;
+}
+
+/** Label of a net reached along a best path with no drop at all: it has no limiter, whatever else. */
+const NO_LIMITER = -1;
+/** Label of a net no best path has reached yet. */
+const UNREACHED = 0x7fffffff;
+
+/**
+ * The limiter of each net, once the best levels are known: among the paths that achieve a net's best
+ * level, the device that made the last drop, choosing the smallest device name when paths disagree
+ * (and none when some best path has no drop). A minimum over paths, found by relaxing only along
+ * edges that achieve the best level, so it never depends on the order devices are listed or visited in.
+ */
+function findLimiters(frame: Frame, root: number, snapVolts: Float64Array, high: boolean): void {
+  const { best, limiter, labelRank } = frame;
+  const rank = frame.nameRanks();
+  for (let i = frame.head[root]; i >= 0; i = frame.next[i]) labelRank[i] = UNREACHED;
+  propagate(frame, root, snapVolts, high, (into, v, vIn, e, from) => {
+    if (!(Math.abs(v - best[into]) <= 1e-12)) return false;
+    const drops = Math.abs(v - vIn) > 1e-12;
+    const candidate = drops ? rank[e] : from < 0 ? NO_LIMITER : labelRank[from];
+    if (candidate >= labelRank[into]) return false;
+    labelRank[into] = candidate;
+    limiter[into] = drops ? e : from < 0 ? -1 : limiter[from];
+    return true;
+  });
+}
+
+/**
+ * Offers levels from the chosen sources, then from every net whose offer was taken to its conducting
+ * neighbours, until no offer is taken. `offer(into, v, vIn, e, from)`: level v arrives at local net
+ * `into` through element e from local net `from` (−1 for a source) where the level was vIn; it returns
+ * true when it changed something at `into`, which then passes it on.
+ */
+function propagate(
+  frame: Frame,
+  root: number,
+  snapVolts: Float64Array,
+  high: boolean,
+  offer: (into: number, v: number, vIn: number, e: number, from: number) => boolean,
+): boolean {
+  const { c, topo, best, queue, inQueue } = frame;
+  const mid = c.tech.vdd / 2;
   let qHead = 0;
   let qTail = 0;
   const size = queue.length;
+  const push = (i: number): void => {
+    if (inQueue[i]) return;
+    inQueue[i] = 1;
+    queue[qTail] = i;
+    qTail = (qTail + 1) % size;
+  };
   let reached = false;
   for (let j = frame.srcHead[root]; j >= 0; j = frame.srcNext[j]) {
     const vs = frame.sourceEndVolts[j];
     if (high !== vs >= mid) continue;
     const e = frame.element(j);
     const local = topo.elemLocalA[e] >= 0 ? topo.elemLocalA[e] : topo.elemLocalB[e];
-    if (offer(frame, local, passed(frame, e, vs, snapVolts, high, local), vs, e, high)) {
-      if (!inQueue[local]) {
-        inQueue[local] = 1;
-        queue[qTail] = local;
-        qTail = (qTail + 1) % size;
-      }
-    }
+    if (offer(local, passed(frame, e, vs, snapVolts, high, local), vs, e, -1)) push(local);
     reached = true;
   }
   while (qHead !== qTail) {
@@ -44,20 +100,12 @@ export function bottleneck(frame: Frame, root: number, snapVolts: Float64Array, 
     const n = frame.net(i);
     for (let p = c.netChannels.start[n]; p < c.netChannels.start[n + 1]; p++) {
       const e = c.netChannels.items[p];
-      const j = topo.elemLocal[e];
-      if (!frame.on[j]) continue;
+      if (!frame.on[topo.elemLocal[e]]) continue;
       const a = topo.elemLocalA[e];
       const b = topo.elemLocalB[e];
       if (a < 0 || b < 0) continue;
       const other = a === i ? b : a;
-      const v = passed(frame, e, best[i], snapVolts, high, other);
-      if (offer(frame, other, v, best[i], e, high, limiter[i])) {
-        if (!inQueue[other]) {
-          inQueue[other] = 1;
-          queue[qTail] = other;
-          qTail = (qTail + 1) % size;
-        }
-      }
+      if (offer(other, passed(frame, e, best[i], snapVolts, high, other), best[i], e, i)) push(other);
     }
   }
   return reached;
@@ -91,37 +139,4 @@ function passed(
     return Math.max(v, (Number.isNaN(vg) ? 0 : vg) + c.tech.vtp);
   }
   return v;
-}
-
-/**
- * Records a better level for local net i; the limiter is e when e itself dropped the level. Among
- * equally good paths the limiter with the smallest device name wins, so results never depend on the
- * order devices are listed in; a changed limiter is propagated like a changed level.
- */
-function offer(
-  frame: Frame,
-  i: number,
-  v: number,
-  vIn: number,
-  e: number,
-  high: boolean,
-  inherited = -1,
-): boolean {
-  const limiter = Math.abs(v - vIn) > 1e-12 ? e : inherited;
-  const better = high ? v > frame.best[i] + 1e-12 : v < frame.best[i] - 1e-12;
-  if (better) {
-    frame.best[i] = v;
-    frame.limiter[i] = limiter;
-    return true;
-  }
-  const tie = Math.abs(v - frame.best[i]) <= 1e-12;
-  if (!tie || limiter < 0 || limiter === frame.limiter[i]) return false;
-  if (frame.limiter[i] >= 0 && deviceName(frame, limiter) >= deviceName(frame, frame.limiter[i]))
-    return false;
-  frame.limiter[i] = limiter;
-  return true;
-}
-
-function deviceName(frame: Frame, e: number): string {
-  return frame.c.netlist.devices[frame.c.chDevice[e]].name;
 }
