@@ -1,7 +1,8 @@
 /**
  * `unknown` findings and held values in expected functions (docs/semantics.md §3 and §4): a checker
  * never passes an output it could not decide. Our own rules; the latch behaviour they check is the
- * textbook one (active-low SR latch from NAND gates: W&H 4th ed. §10.2; common practice).
+ * textbook one (active-low SR latch from NAND gates: W&H 4th ed., sequential circuits, ch. 10 from
+ * memory; common practice).
  */
 import { describe, expect, it } from 'vitest';
 import { checkSequence, checkSweep } from '../../src/core/analysis/check.ts';

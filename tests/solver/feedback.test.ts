@@ -18,7 +18,10 @@ const bits = (i: number): InputVector => ({
   B: (i >> 1) & 1 ? '1' : '0',
   CI: i & 1 ? '1' : '0',
 });
-/** Majority of three: the carry of a full adder (W&H 4th ed. §11.2.1; common practice). */
+/**
+ * Majority of three: the carry of a full adder (W&H 4th ed. ch. 11, addition, chapter from memory;
+ * common practice).
+ */
 const majority = (i: number): string => (((i >> 2) & 1) + ((i >> 1) & 1) + (i & 1) >= 2 ? '1' : '0');
 
 describe('transmission-gate carry (our own reproducer TGC)', () => {
@@ -83,7 +86,7 @@ function ring(n: number): CircuitBuilder {
 
 describe('rings', () => {
   // An odd ring of inverters has no steady state; an even one has two (a ring oscillator and a bistable
-  // ring: W&H 4th ed. §13.3 and §10.3; common practice).
+  // ring; common practice, no source).
   it('three inverters: no 0/1 assignment is steady, so no steady state in sweep mode', () => {
     const report = checkSweep(ring(3).build());
     expect(report.vectors![0].outputs.n0).toBe('X');

@@ -45,7 +45,9 @@ describe('the limiter of a degraded level', () => {
     expect([...seen]).toEqual(['n1:P2']);
   });
 
-  it('n1 sits at |Vtp| (a low passed by a PMOS with its gate at 0: W&H 4th ed. §1.4.6, common practice)', () => {
+  // A low passed by a PMOS with its gate at 0 is floored at |Vtp| (W&H 4th ed. ch. 1, pass transistors;
+  // common practice).
+  it('n1 sits at |Vtp|', () => {
     const report = checkSweep(cell, { allNets: true });
     expect(report.vectors![0].voltages.n1).toBeCloseTo(TECH.vtp, 12);
     expect(report.vectors![0].voltages.Y).toBe(0);

@@ -61,7 +61,8 @@ describe('tie cells', () => {
 
 describe('the clamp in both directions', () => {
   // An NMOS whose gate is its drain n passes a high from n to its source one Vtn down, like any NMOS
-  // with its gate at the high level (the threshold drop, W&H 4th ed. §1.4.6; common practice).
+  // with its gate at the high level (the threshold drop: W&H 4th ed. ch. 1, pass transistors; common
+  // practice).
   const dropper = circuit('dropper')
     .rails()
     .input('A')
