@@ -30,33 +30,29 @@ describe('tie cells', () => {
   // al., Digital Integrated Circuits, 2nd ed., ch. 3; equation number from memory). Tie cells rely on
   // it: the clamped net is one threshold from its rail and fully turns on the device it gates
   // (common practice, no source).
-  it('TIEH: Z = 1 at the supply; the clamped gate net A sits one Vtn above ground, a degraded 0', () => {
-    const cell = fixtureCell('tieh.sp');
-    const report = checkSweep(cell.netlist, { expectations: cell.expectations, allNets: true });
-    expect(report.summary.errors).toBe(0);
-    const [v] = report.vectors!;
-    expect(v.outputs.Z).toBe('1');
-    expect(v.voltages.Z).toBe(TECH.vdd);
-    expect(v.voltages.A).toBeCloseTo(TECH.vtn, 12);
-    const s = solve(cell.netlist, {});
-    expect(s.level('A')).toBe('0');
-    expect(s.flags('A') & FLAG_DEGRADED).toBe(FLAG_DEGRADED);
-    expect(report.findings.map((f) => `${f.kind}:${f.nets.join()}:${f.devices.join()}`)).toEqual([
-      'degraded:A:MN',
-    ]);
-    expect(conduction(cell.netlist, 'MN')).toBe(ON);
-  });
-
-  it('tie-low: Z = 0 at ground; the clamped gate net B sits one |Vtp| below the supply, a degraded 1', () => {
-    const cell = fixtureCell('tiel.sp');
-    const report = checkSweep(cell.netlist, { expectations: cell.expectations, allNets: true });
-    expect(report.summary.errors).toBe(0);
-    const [v] = report.vectors!;
-    expect(v.outputs.Z).toBe('0');
-    expect(v.voltages.Z).toBe(0);
-    expect(v.voltages.B).toBeCloseTo(TECH.vdd - TECH.vtp, 12);
-    expect(solve(cell.netlist, {}).flags('B') & FLAG_DEGRADED).toBe(FLAG_DEGRADED);
-  });
+  it.each([
+    // [fixture, output level and volts, clamped net, its volts, the clamp]
+    ['tieh.sp', '1', TECH.vdd, 'A', TECH.vtn, 'MN'],
+    ['tiel.sp', '0', 0, 'B', TECH.vdd - TECH.vtp, 'MP'],
+  ] as const)(
+    '%s: Z = %s; the clamped net sits one threshold from its rail, degraded',
+    (file, z, zVolts, net, volts, clamp) => {
+      const cell = fixtureCell(file);
+      const report = checkSweep(cell.netlist, { expectations: cell.expectations, allNets: true });
+      expect(report.summary.errors).toBe(0);
+      const [v] = report.vectors!;
+      expect(v.outputs.Z).toBe(z);
+      expect(v.voltages.Z).toBe(zVolts);
+      expect(v.voltages[net]).toBeCloseTo(volts, 12);
+      const s = solve(cell.netlist, {});
+      expect(s.level(net)).toBe(z === '1' ? '0' : '1');
+      expect(s.flags(net) & FLAG_DEGRADED).toBe(FLAG_DEGRADED);
+      expect(report.findings.map((f) => `${f.kind}:${f.nets.join()}:${f.devices.join()}`)).toEqual([
+        `degraded:${net}:${clamp}`,
+      ]);
+      expect(conduction(cell.netlist, clamp)).toBe(ON);
+    },
+  );
 });
 
 describe('the clamp in both directions', () => {
