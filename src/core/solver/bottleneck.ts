@@ -18,20 +18,26 @@ export function bottleneck(frame: Frame, root: number, snapVolts: Float64Array, 
     best[i] = high ? -Infinity : Infinity;
     limiter[i] = -1;
   }
-  let seed = high ? -Infinity : Infinity;
-  const reached = propagate(frame, root, snapVolts, high, (into, v, vIn, _e, from) => {
-    if (from < 0) seed = high ? Math.max(seed, vIn) : Math.min(seed, vIn);
-    if (high ? v > best[into] + 1e-12 : v < best[into] - 1e-12) {
-      best[into] = v;
-      return true;
-    }
-    return false;
-  });
-  let dropped = false;
-  for (let i = frame.head[root]; i >= 0; i = frame.next[i])
-    if (Math.abs(best[i] - seed) > 1e-12) dropped = true;
-  if (dropped) findLimiters(frame, root, snapVolts, high);
+  const reached = propagate(frame, root, snapVolts, high, false);
+  if (reached && anyDropped(frame, root, high)) {
+    for (let i = frame.head[root]; i >= 0; i = frame.next[i]) frame.labelRank[i] = UNREACHED;
+    propagate(frame, root, snapVolts, high, true);
+  }
   return reached;
+}
+
+/** Whether some net's best level falls short of the best source level: only then are there limiters. */
+function anyDropped(frame: Frame, root: number, high: boolean): boolean {
+  const mid = frame.c.tech.vdd / 2;
+  let seed = high ? -Infinity : Infinity;
+  for (let j = frame.srcHead[root]; j >= 0; j = frame.srcNext[j]) {
+    const vs = frame.sourceEndVolts[j];
+    if (high === vs >= mid) seed = high ? Math.max(seed, vs) : Math.min(seed, vs);
+  }
+  for (let i = frame.head[root]; i >= 0; i = frame.next[i]) {
+    if (!(Math.abs(frame.best[i] - seed) <= 1e-12)) return true;
+  }
+  return false;
 }
 
 /** Label of a net reached along a best path with no drop at all: it has no limiter, whatever else. */
@@ -39,59 +45,65 @@ const NO_LIMITER = -1;
 /** Label of a net no best path has reached yet. */
 const UNREACHED = 0x7fffffff;
 
+/** Takes level v at local net i when it beats the best so far. */
+function offerLevel(frame: Frame, i: number, v: number, high: boolean): boolean {
+  if (high ? v > frame.best[i] + 1e-12 : v < frame.best[i] - 1e-12) {
+    frame.best[i] = v;
+    return true;
+  }
+  return false;
+}
+
 /**
  * The limiter of each net, once the best levels are known: among the paths that achieve a net's best
  * level, the device that made the last drop, choosing the smallest device name when paths disagree
  * (and none when some best path has no drop). A minimum over paths, found by relaxing only along
- * edges that achieve the best level, so it never depends on the order devices are listed or visited in.
+ * edges that achieve the best level, so it never depends on the order devices are listed or visited
+ * in. Level v arrives at local net i through element e from local net `from` (−1 for a source), where
+ * the level was vIn.
  */
-function findLimiters(frame: Frame, root: number, snapVolts: Float64Array, high: boolean): void {
-  const { best, limiter, labelRank } = frame;
-  const rank = frame.nameRanks();
-  for (let i = frame.head[root]; i >= 0; i = frame.next[i]) labelRank[i] = UNREACHED;
-  propagate(frame, root, snapVolts, high, (into, v, vIn, e, from) => {
-    if (!(Math.abs(v - best[into]) <= 1e-12)) return false;
-    const drops = Math.abs(v - vIn) > 1e-12;
-    const candidate = drops ? rank[e] : from < 0 ? NO_LIMITER : labelRank[from];
-    if (candidate >= labelRank[into]) return false;
-    labelRank[into] = candidate;
-    limiter[into] = drops ? e : from < 0 ? -1 : limiter[from];
-    return true;
-  });
+function offerLimiter(frame: Frame, i: number, v: number, vIn: number, e: number, from: number): boolean {
+  const { labelRank, limiter } = frame;
+  if (!(Math.abs(v - frame.best[i]) <= 1e-12)) return false;
+  const drops = Math.abs(v - vIn) > 1e-12;
+  const candidate = drops ? frame.nameRanks()[e] : from < 0 ? NO_LIMITER : labelRank[from];
+  if (candidate >= labelRank[i]) return false;
+  labelRank[i] = candidate;
+  limiter[i] = drops ? e : from < 0 ? -1 : limiter[from];
+  return true;
 }
 
 /**
  * Offers levels from the chosen sources, then from every net whose offer was taken to its conducting
- * neighbours, until no offer is taken. `offer(into, v, vIn, e, from)`: level v arrives at local net
- * `into` through element e from local net `from` (−1 for a source) where the level was vIn; it returns
- * true when it changed something at `into`, which then passes it on.
+ * neighbours, until no offer is taken: levels (offerLevel) or, with `limiters`, limiters along the
+ * best levels found (offerLimiter).
  */
 function propagate(
   frame: Frame,
   root: number,
   snapVolts: Float64Array,
   high: boolean,
-  offer: (into: number, v: number, vIn: number, e: number, from: number) => boolean,
+  limiters: boolean,
 ): boolean {
   const { c, topo, best, queue, inQueue } = frame;
   const mid = c.tech.vdd / 2;
   let qHead = 0;
   let qTail = 0;
   const size = queue.length;
-  const push = (i: number): void => {
-    if (inQueue[i]) return;
-    inQueue[i] = 1;
-    queue[qTail] = i;
-    qTail = (qTail + 1) % size;
-  };
   let reached = false;
   for (let j = frame.srcHead[root]; j >= 0; j = frame.srcNext[j]) {
     const vs = frame.sourceEndVolts[j];
     if (high !== vs >= mid) continue;
+    reached = true;
     const e = frame.element(j);
     const local = topo.elemLocalA[e] >= 0 ? topo.elemLocalA[e] : topo.elemLocalB[e];
-    if (offer(local, passed(frame, e, vs, snapVolts, high, local), vs, e, -1)) push(local);
-    reached = true;
+    const v = passed(frame, e, vs, snapVolts, high, local);
+    const taken = limiters ? offerLimiter(frame, local, v, vs, e, -1) : offerLevel(frame, local, v, high);
+    if (taken && !inQueue[local]) {
+      inQueue[local] = 1;
+      queue[qTail] = local;
+      qTail = (qTail + 1) % size;
+    }
   }
   while (qHead !== qTail) {
     const i = queue[qHead];
@@ -105,7 +117,15 @@ function propagate(
       const b = topo.elemLocalB[e];
       if (a < 0 || b < 0) continue;
       const other = a === i ? b : a;
-      if (offer(other, passed(frame, e, best[i], snapVolts, high, other), best[i], e, i)) push(other);
+      const v = passed(frame, e, best[i], snapVolts, high, other);
+      const taken = limiters
+        ? offerLimiter(frame, other, v, best[i], e, i)
+        : offerLevel(frame, other, v, high);
+      if (taken && !inQueue[other]) {
+        inQueue[other] = 1;
+        queue[qTail] = other;
+        qTail = (qTail + 1) % size;
+      }
     }
   }
   return reached;

@@ -14,7 +14,7 @@ import {
   ON,
 } from './levels.ts';
 import { sameVolts, Schedule, type NetState } from './schedule.ts';
-import { clampConduction, GATE_NOT_TIED, GATE_TIED_A } from './selfGated.ts';
+import { clampConduction, GATE_TIED_A } from './selfGated.ts';
 import type { Topology } from './topology.ts';
 
 export { SETTLE_ROUNDS_BASE, SETTLE_ROUNDS_PER_COMPONENT } from './schedule.ts';
@@ -196,14 +196,12 @@ export class Simulator {
   private conductionAll(topology: Topology, volts: Float64Array, into: Uint8Array): Uint8Array {
     const { chKind, chGate, chA, chB, tech } = this.compiled;
     for (let e = 0; e < into.length; e++) {
-      const tied = topology.selfGate[e];
-      if (tied !== GATE_NOT_TIED) {
-        const [gateEnd, other] = tied === GATE_TIED_A ? [chA[e], chB[e]] : [chB[e], chA[e]];
-        into[e] = clampConduction(chKind[e], volts[gateEnd], volts[other]);
-        continue;
-      }
       const gate = chGate[e];
       into[e] = conductionFor(chKind[e], gate >= 0 ? volts[gate] : NaN, tech.vil, tech.vih);
+    }
+    for (const e of topology.selfGatedElements) {
+      const [gateEnd, other] = topology.selfGate[e] === GATE_TIED_A ? [chA[e], chB[e]] : [chB[e], chA[e]];
+      into[e] = clampConduction(chKind[e], volts[gateEnd], volts[other]);
     }
     return into;
   }

@@ -29,6 +29,8 @@ export interface Topology {
   readonly selfGate: Uint8Array;
   /** Per CCC: local indices of its self-gated elements (usually none). */
   readonly cccSelfGated: Csr;
+  /** Every self-gated element inside a CCC, by global index. */
+  readonly selfGatedElements: Int32Array;
   /** Strongly connected groups of CCCs (feedback), in evaluation order: a group only gates later ones. */
   readonly sccOrder: Csr;
   /** CCCs whose elements are gated by a net of this CCC (may include itself). */
@@ -110,10 +112,12 @@ export function buildTopology(c: CompiledNetlist, undriven: ReadonlySet<number> 
   const selfGate = selfGateEnds(c, isSource);
   const selfRows: number[] = [];
   const selfItems: number[] = [];
+  const selfElements: number[] = [];
   for (let e = 0; e < c.chCount; e++) {
     if (selfGate[e] === GATE_NOT_TIED || elemLocal[e] < 0) continue;
     selfRows.push(cccOfNet[c.chA[e]] >= 0 ? cccOfNet[c.chA[e]] : cccOfNet[c.chB[e]]);
     selfItems.push(elemLocal[e]);
+    selfElements.push(e);
   }
   const dependents = cccDependencies(c, cccOfNet, cccElements, cccCount, selfGate);
   return {
@@ -129,6 +133,7 @@ export function buildTopology(c: CompiledNetlist, undriven: ReadonlySet<number> 
     bridges: Int32Array.from(bridges),
     selfGate,
     cccSelfGated: csrFrom(cccCount, selfRows, selfItems),
+    selfGatedElements: Int32Array.from(selfElements),
     sccOrder: stronglyConnectedOrder(cccCount, dependents),
     cccDependents: dependents,
   };

@@ -97,11 +97,18 @@ function groupNets(frame: Frame): void {
     const a = topo.elemLocalA[e];
     const b = topo.elemLocalB[e];
     const r = parent[a >= 0 ? a : b];
-    frame.kinds[r] |=
-      (kind[e] === NMOS ? HAS_NMOS : kind[e] === PMOS ? HAS_PMOS : 0) | (topo.selfGate[e] ? HAS_SELF : 0);
+    frame.kinds[r] |= kind[e] === NMOS ? HAS_NMOS : kind[e] === PMOS ? HAS_PMOS : 0;
     if (a >= 0 && b >= 0) continue;
     frame.srcNext[j] = frame.srcHead[r];
     frame.srcHead[r] = j;
+  }
+  const self = topo.cccSelfGated;
+  for (let p = self.start[frame.k]; p < self.start[frame.k + 1]; p++) {
+    const j = self.items[p];
+    if (!frame.on[j]) continue;
+    const e = frame.element(j);
+    const a = topo.elemLocalA[e];
+    frame.kinds[parent[a >= 0 ? a : topo.elemLocalB[e]]] |= HAS_SELF;
   }
 }
 
