@@ -7,6 +7,7 @@
 import { describe, expect, it } from 'vitest';
 import { checkSequence, checkSweep } from '../../src/core/analysis/check.ts';
 import { run } from '../../src/cli/main.ts';
+import { circuit } from '../../src/core/model/builder.ts';
 import { inverter } from '../../src/core/starters/combinational.ts';
 import { fixtureCell } from '../solver/fixtures.ts';
 
@@ -57,6 +58,23 @@ describe('an output at X is an unknown finding', () => {
     // An error that names the output already fails the vector: no second finding.
     const expected = checkSequence(inverter, [{ A: 'X' }], { expectations: { Y: '1' } });
     expect(expected.findings.map((x) => x.kind)).toEqual(['mismatch']);
+  });
+});
+
+describe('names in expected functions', () => {
+  it('an output called Z is not a held value: Z keeps meaning high-impedance', () => {
+    const tristate = circuit('tbuf')
+      .rails()
+      .input('A', 'EN')
+      .output('Z')
+      .pmos('PI', { g: 'EN', d: 'ENb', s: 'VDD' })
+      .nmos('NI', { g: 'EN', d: 'ENb', s: 'GND' })
+      .nmos('NT', { g: 'EN', d: 'A', s: 'Z' })
+      .pmos('PT', { g: 'ENb', d: 'A', s: 'Z' })
+      .build();
+    const report = checkSweep(tristate, { expectations: { Z: 'EN ? A : Z' } });
+    expect(report.summary.floating).toBe(0);
+    expect(report.summary.mismatch).toBe(0);
   });
 });
 

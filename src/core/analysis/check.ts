@@ -1,7 +1,8 @@
 import { compile, type CompiledNetlist } from '../compile/compile.ts';
 import { evaluateExpression, type ExpectedValue } from '../expect/evaluate.ts';
+import { expressionNames } from '../expect/names.ts';
 import { ExpressionError, parseExpression, type Expr } from '../expect/parse.ts';
-import type { Design, InputVector } from '../model/design.ts';
+import type { Design, InputValue, InputVector } from '../model/design.ts';
 import type { Netlist } from '../model/netlist.ts';
 import { DEFAULT_TECHNOLOGY, type Technology } from '../model/technology.ts';
 import { levelName } from '../solver/levels.ts';
@@ -46,14 +47,7 @@ export const FINDING_KINDS: readonly FindingKind[] = [
   'limit',
 ];
 
-/**
- * Names an expected function may use (docs/semantics.md §4): the inputs, and the outputs, which stand
- * for the value the output held before this vector (the previous step in a sequence; unknown in a
- * sweep, where every vector starts from an unknown state). `Q = !Sb | Rb & Q` says that Q holds.
- */
-export function expressionNames(netlist: Pick<Netlist, 'inputs' | 'outputs'>): string[] {
-  return [...netlist.inputs, ...netlist.outputs];
-}
+export { expressionNames };
 
 /** `A=1 B=0` */
 export function vectorLabel(v: InputVector, inputs: readonly string[]): string {

@@ -7,6 +7,7 @@ import { DesignFileError, parseDesignFile } from '../format/designFile.ts';
 import type { Sequence } from '../model/design.ts';
 import type { Netlist } from '../model/netlist.ts';
 import { DEFAULT_TECHNOLOGY, withVdd, type Technology } from '../model/technology.ts';
+import { expressionNames } from '../expect/names.ts';
 import { ExpressionError, parseExpression } from '../expect/parse.ts';
 import { importSpice, SpiceImportError, type SpiceImportOptions } from './spiceImport.ts';
 
@@ -161,7 +162,7 @@ export function expectationProblem(job: CellJob): CellFailure | null {
         message: `${where}: '${output}' is not an output (outputs: ${job.netlist.outputs.join(', ') || 'none'})`,
       };
     try {
-      parseExpression(text, job.netlist.inputs);
+      parseExpression(text, expressionNames(job.netlist));
     } catch (e) {
       if (e instanceof ExpressionError) return { ...base, message: `${where}: ${e.message}` };
       throw e;
