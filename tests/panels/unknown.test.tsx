@@ -8,11 +8,11 @@ import { createRoot, type Root } from 'react-dom/client';
 import { afterEach, beforeEach, describe, expect, it } from 'vitest';
 import { AnalysisPanel } from '../../src/panels/AnalysisPanel.tsx';
 import { Legend } from '../../src/panels/Legend.tsx';
+import { SWEEP_DEBOUNCE_MS, startAnalysis } from '../../src/state/analysis.ts';
 import { loadDesign, resetStore } from '../../src/state/store.ts';
-import { resetSimulation, SWEEP_DEBOUNCE_MS } from '../../src/state/simulation.ts';
 import { runJob } from '../../src/worker/jobs.ts';
 import { setJobRunnerFactory } from '../../src/worker/runner.ts';
-import { design, nandLatch } from '../view/circuits.ts';
+import { design, nandLatch } from '../cells.ts';
 
 (globalThis as { IS_REACT_ACT_ENVIRONMENT?: boolean }).IS_REACT_ACT_ENVIRONMENT = true;
 
@@ -28,13 +28,16 @@ async function render(node: React.ReactNode, settle = 0): Promise<void> {
   await act(async () => new Promise((r) => setTimeout(r, settle)));
 }
 
+let stopAnalysis: () => void;
+
 beforeEach(() => {
   resetStore();
-  resetSimulation();
+  stopAnalysis = startAnalysis();
   setJobRunnerFactory(() => ({ run: (job) => Promise.resolve(runJob(job)), cancel: () => {} }));
 });
 
 afterEach(async () => {
+  stopAnalysis();
   await act(async () => root.unmount());
   host.remove();
 });
