@@ -35,7 +35,8 @@ describe('axes', () => {
     expect(chart.diagonal).toEqual([plot.x, plot.y + plot.height, plot.x + plot.width, plot.y]);
     expect(chart.xTicks[0]?.at).toBe(plot.x);
     expect(chart.yTicks[chart.yTicks.length - 1]?.at).toBe(plot.y);
-    expect(chart.xTitle).toBe('V(A) [V]');
+    expect(chart.xTitle.text).toBe('V(A) [V]');
+    expect(chart.xTickBaseline).toBeGreaterThan(plot.y + plot.height);
   });
 });
 
@@ -50,7 +51,7 @@ describe('the curve and its figures', () => {
     expect(curve?.path.startsWith(`M${x(0)} ${y(1)}`)).toBe(true);
     expect(curve?.path.match(/M/g)).toHaveLength(1);
     expect(curve?.path.match(/L/g)).toHaveLength(100);
-    expect(curve?.label.text).toBe('Y');
+    expect(curve?.legend.text).toBe('Y');
   });
 
   it('marks VM on the line Vout = Vin, at 0.5 V', () => {
@@ -122,7 +123,8 @@ describe('several outputs and missing points', () => {
 
   it('tells outputs apart by dash and label, not colour alone', () => {
     const chart = transferChart(twoOut, 'Z', 'unity-gain', SIZE);
-    expect(chart.curves.map((c) => c.label.text)).toEqual(['Y', 'Z']);
+    expect(chart.curves.map((c) => c.legend.text)).toEqual(['Y', 'Z']);
+    expect(chart.curves[0]?.legend.x).not.toBe(chart.curves[1]?.legend.x);
     expect(new Set(chart.curves.map((c) => c.dash)).size).toBe(2);
     expect(chart.curves.map((c) => c.chosen)).toEqual([false, true]);
   });

@@ -14,3 +14,9 @@ export function transferCsv(report: TransferReport): string {
   const rows = vin.map((v, k) => [numberField(v), ...curves.map((points) => numberField(points[k]?.[1]))]);
   return csvText([header, ...rows]);
 }
+
+/** The download's name: the cell and the swept input, in letters, digits, dot, dash and underscore. */
+export function transferCsvName(cell: string, input: string): string {
+  const safe = (text: string): string => text.trim().replace(/[^A-Za-z0-9._-]+/g, '_');
+  return `${safe(cell) || 'cell'}-transfer-${safe(input) || 'input'}.csv`;
+}

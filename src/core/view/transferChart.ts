@@ -15,13 +15,24 @@ export interface ChartSize {
   readonly height: number;
 }
 
-export const DEFAULT_CHART_SIZE: ChartSize = { width: 320, height: 300 };
+export const DEFAULT_CHART_SIZE: ChartSize = { width: 360, height: 350 };
 
-/** Room around the plot for tick labels and axis titles, pixels. */
-const PAD = { left: 40, right: 44, top: 22, bottom: 36 };
+/**
+ * Room around the plot, pixels: tick labels on the left; the legend above; VOL and VOH labels on the
+ * right; below, the tick labels, the two noise-margin spans and the axis title.
+ */
+const PAD = { left: 40, right: 64, top: 26, bottom: 68 };
+/** Rows below the input axis, pixels from its line. */
+const BELOW = { ticks: 12, nml: 28, nmh: 44 };
 
 /** Dash patterns for the curves in output order (solid first). */
 export const CURVE_DASHES: readonly string[] = ['', '7 3', '2 3', '9 3 2 3'];
+
+export interface ChartText {
+  readonly x: number;
+  readonly y: number;
+  readonly text: string;
+}
 
 export interface Tick {
   readonly value: number;
@@ -36,7 +47,13 @@ export interface ChartCurve {
   readonly path: string;
   readonly dash: string;
   readonly chosen: boolean;
-  readonly label: { readonly x: number; readonly y: number; readonly text: string };
+  /** Its legend entry above the plot: a sample of its stroke, then its name. */
+  readonly legend: {
+    readonly sample: readonly [number, number, number, number];
+    readonly x: number;
+    readonly y: number;
+    readonly text: string;
+  };
 }
 
 export type FigureName = 'vm' | 'vil' | 'vih' | 'vol' | 'voh' | 'nml' | 'nmh';
@@ -59,8 +76,10 @@ export interface TransferChart {
   readonly vdd: number;
   readonly xTicks: readonly Tick[];
   readonly yTicks: readonly Tick[];
-  readonly xTitle: string;
-  readonly yTitle: string;
+  /** Baseline of the input axis's tick labels, pixels. */
+  readonly xTickBaseline: number;
+  readonly xTitle: ChartText;
+  readonly yTitle: ChartText;
   /** Vout = Vin, pixels [x1, y1, x2, y2]. */
   readonly diagonal: readonly [number, number, number, number];
   readonly curves: readonly ChartCurve[];
@@ -104,10 +123,13 @@ export function transferChart(
     vdd,
     xTicks: ticks.map((t) => ({ ...t, at: scale.x(t.value) })),
     yTicks: ticks.map((t) => ({ ...t, at: scale.y(t.value) })),
-    xTitle: `V(${report.input}) [V]`,
-    yTitle: 'Vout [V]',
+    xTickBaseline: plot.y + plot.height + BELOW.ticks,
+    xTitle: { x: plot.x + plot.width / 2, y: size.height - 4, text: `V(${report.input}) [V]` },
+    yTitle: { x: 4, y: plot.y - 8, text: 'Vout [V]' },
     diagonal: [scale.x(0), scale.y(0), scale.x(vdd), scale.y(vdd)],
-    curves: outputs.map((o, i) => chartCurve(o, report.curves[o] as TransferCurve, i, o === chosen, scale)),
+    curves: outputs.map((o, i) =>
+      chartCurve(o, report.curves[o] as TransferCurve, i, o === chosen, scale, legendAt(plot, i)),
+    ),
     marks: curve === undefined || figures === null ? [] : figureMarks(curve, figures, scale, plot),
     summary: summary(report, chosen, figures, convention),
   };
@@ -138,16 +160,21 @@ export function niceTicks(vdd: number): { value: number; label: string }[] {
   return ticks;
 }
 
+/** Legend entries run right to left from the plot's top right corner, 56 px each. */
+function legendAt(plot: Plot, index: number): { x: number; y: number } {
+  return { x: plot.x + plot.width - 56 * (index + 1), y: plot.y - 8 };
+}
+
 function chartCurve(
   output: string,
   curve: TransferCurve,
   index: number,
   chosen: boolean,
   scale: Scale,
+  at: { x: number; y: number },
 ): ChartCurve {
   let path = '';
   let pen = false;
-  let last: readonly [number, number] | null = null;
   for (const [vin, vout] of curve.points) {
     if (vout === null) {
       pen = false;
@@ -155,15 +182,13 @@ function chartCurve(
     }
     path += `${pen ? 'L' : 'M'}${scale.x(vin)} ${scale.y(vout)} `;
     pen = true;
-    last = [vin, vout];
   }
-  const end = last ?? [0, 0];
   return {
     output,
     path: path.trim(),
     dash: CURVE_DASHES[index % CURVE_DASHES.length] as string,
     chosen,
-    label: { x: scale.x(end[0]) + 4, y: scale.y(end[1]), text: output },
+    legend: { sample: [at.x, at.y, at.x + 18, at.y], x: at.x + 22, y: at.y + 3, text: output },
   };
 }
 
@@ -195,7 +220,7 @@ function figureMarks(curve: TransferCurve, f: CurveFigures, scale: Scale, plot: 
       text: `${figure.toUpperCase()} ${formatVolts(level)}`,
       lines: [[plot.x, y, right, y]],
       point: null,
-      labelAt: { x: right + 2, y: y + (figure === 'vol' ? -3 : 10), anchor: 'start' },
+      labelAt: { x: right + 3, y: y + 3, anchor: 'start' },
     });
   }
   marks.push(...marginSpans(f, scale, bottom));
@@ -227,16 +252,16 @@ function unityMarks(curve: TransferCurve, f: CurveFigures, scale: Scale, bottom:
   return marks;
 }
 
-/** NML spans VOL…VIL and NMH spans VIH…VOH of the input axis, drawn just above it. */
+/** NML spans VOL…VIL and NMH spans VIH…VOH of the input axis, drawn in rows below it. */
 function marginSpans(f: CurveFigures, scale: Scale, bottom: number): ChartMark[] {
   const marks: ChartMark[] = [];
-  for (const [figure, from, to, value, row] of [
-    ['nml', f.vol, f.vil, f.nml, 1],
-    ['nmh', f.vih, f.voh, f.nmh, 2],
+  for (const [figure, from, to, value] of [
+    ['nml', f.vol, f.vil, f.nml],
+    ['nmh', f.vih, f.voh, f.nmh],
   ] as const) {
     if (from === null || to === null || value === null) continue;
     const [x1, x2] = [scale.x(Math.min(from, to)), scale.x(Math.max(from, to))];
-    const y = bottom - 8 * row;
+    const y = bottom + BELOW[figure];
     marks.push({
       figure,
       text: `${figure.toUpperCase()} ${formatVolts(value)}`,
@@ -246,7 +271,7 @@ function marginSpans(f: CurveFigures, scale: Scale, bottom: number): ChartMark[]
         [x2, y - 3, x2, y + 3],
       ],
       point: null,
-      labelAt: { x: (x1 + x2) / 2, y: y - 3, anchor: 'middle' },
+      labelAt: { x: (x1 + x2) / 2, y: y - 4, anchor: 'middle' },
     });
   }
   return marks;
