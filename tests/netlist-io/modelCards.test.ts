@@ -11,7 +11,8 @@ import type { MosDevice, Netlist } from '../../src/core/model/netlist.ts';
 import { DEFAULT_TECHNOLOGY, type Technology } from '../../src/core/model/technology.ts';
 import { cellsFromText, type CellJob } from '../../src/core/netlist-io/cellFiles.ts';
 import { exportSpice } from '../../src/core/netlist-io/spiceExport.ts';
-import { importSpice, SpiceImportError } from '../../src/core/netlist-io/spiceImport.ts';
+import type { SpiceImportError } from '../../src/core/netlist-io/spiceImport.ts';
+import { refusalOf } from './refusal.ts';
 
 const FILE = 'cards.sp';
 
@@ -28,13 +29,7 @@ function mos(n: Netlist, name: string): MosDevice {
 }
 
 function refusal(text: string): SpiceImportError {
-  try {
-    importSpice(text, FILE);
-  } catch (e) {
-    if (e instanceof SpiceImportError) return e;
-    throw e;
-  }
-  throw new Error('expected a SpiceImportError');
+  return refusalOf(text, FILE);
 }
 
 const inverter = (nModel: string, pModel: string, cards: string): string => `.subckt inv A Y VDD GND

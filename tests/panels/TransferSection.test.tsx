@@ -5,32 +5,12 @@
  * level-1 answer beside the switch-level estimate.
  */
 import { act } from 'react';
-import { createRoot, type Root } from 'react-dom/client';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { AnalysisPanel } from '../../src/panels/AnalysisPanel.tsx';
-import { SWEEP_DEBOUNCE_MS, startAnalysis } from '../../src/state/analysis.ts';
-import { loadDesign, resetStore } from '../../src/state/store.ts';
-import { runJob } from '../../src/worker/jobs.ts';
-import { setJobRunnerFactory } from '../../src/worker/runner.ts';
+import { describe, expect, it } from 'vitest';
+import { loadDesign } from '../../src/state/store.ts';
 import { design, inverter, resistorLoadInverter } from '../cells.ts';
+import { byTestId, click, mount, pause, usePanelHarness } from './panelHarness.tsx';
 
-(globalThis as { IS_REACT_ACT_ENVIRONMENT?: boolean }).IS_REACT_ACT_ENVIRONMENT = true;
-
-let root: Root;
-let host: HTMLElement;
-let stopAnalysis: () => void;
-
-const byTestId = (id: string): HTMLElement | null => host.querySelector(`[data-testid="${id}"]`);
-const wait = (ms: number) => new Promise((r) => setTimeout(r, ms));
-const pause = () => act(async () => wait(SWEEP_DEBOUNCE_MS + 50));
-
-async function mount(): Promise<void> {
-  host = document.createElement('div');
-  document.body.append(host);
-  root = createRoot(host);
-  await act(async () => root.render(<AnalysisPanel />));
-  await pause();
-}
+usePanelHarness();
 
 async function choose(id: string, value: string): Promise<void> {
   const select = byTestId(id) as HTMLSelectElement;
@@ -48,18 +28,6 @@ async function openTransferSection(): Promise<void> {
   });
   await pause();
 }
-
-beforeEach(() => {
-  resetStore();
-  stopAnalysis = startAnalysis();
-  setJobRunnerFactory(() => ({ run: (job) => Promise.resolve(runJob(job)), cancel: () => {} }));
-});
-
-afterEach(async () => {
-  stopAnalysis();
-  await act(async () => root.unmount());
-  host.remove();
-});
 
 describe('the DC transfer curve view', () => {
   it('draws the curve with its figures once opened, and switches the convention', async () => {
@@ -88,7 +56,7 @@ describe("the shown vector's level-1 answer", () => {
   it('stands beside the switch-level estimate, marked where they differ', async () => {
     loadDesign(design(resistorLoadInverter));
     await mount();
-    await act(async () => (byTestId('bit-A') as HTMLElement).click());
+    await click(byTestId('bit-A'));
     await pause();
     const row = byTestId('vector-dc-Y');
     expect(row?.textContent).toMatch(/^Y0 · \d\.\d\d V\d\.\d\d V/);

@@ -3,8 +3,8 @@
  * follow edits (a stale answer is dropped, never shown as current), run in the worker lanes, report
  * progress and can be cancelled. Jobs run in-process, finished when the test says.
  */
-import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { SWEEP_DEBOUNCE_MS, startAnalysis } from '../../src/state/analysis.ts';
+import { describe, expect, it, vi } from 'vitest';
+import { SWEEP_DEBOUNCE_MS } from '../../src/state/analysis.ts';
 import {
   openTransfer,
   setTransferConvention,
@@ -13,53 +13,13 @@ import {
   startTransfer,
 } from '../../src/state/dc.ts';
 import { cancelJob, toggleInput } from '../../src/state/simulation.ts';
-import { loadDesign, resetStore, store } from '../../src/state/store.ts';
-import { JobCancelled } from '../../src/worker/client.ts';
+import { loadDesign, store } from '../../src/state/store.ts';
 import { runJob } from '../../src/worker/jobs.ts';
-import type { AnalysisJob, JobProgress, JobResult } from '../../src/worker/protocol.ts';
-import { setJobRunnerFactory, type JobRunner } from '../../src/worker/runner.ts';
 import { design, inverter, nand2, resistorLoadInverter } from '../cells.ts';
-
-/** Runs jobs in-process when the test says; reports half-way progress as a job starts. */
-class HeldRunner implements JobRunner {
-  pending: { job: AnalysisJob; resolve: (r: JobResult) => void; reject: (e: Error) => void }[] = [];
-  run(job: AnalysisJob, onProgress: (p: JobProgress) => void): Promise<JobResult> {
-    if (job.kind === 'transfer') onProgress({ done: 100, total: job.points });
-    return new Promise((resolve, reject) => this.pending.push({ job, resolve, reject }));
-  }
-  cancel(): void {
-    for (const p of this.pending.splice(0)) p.reject(new JobCancelled('cancelled'));
-  }
-  finishAll(): void {
-    for (const p of this.pending.splice(0)) p.resolve(runJob(p.job));
-  }
-  kinds(): string[] {
-    return this.pending.map((p) => p.job.kind);
-  }
-}
+import { runner, settle, useHeldRunner } from './heldRunner.ts';
 
 const state = () => store.getState().simulation;
-let runner: HeldRunner;
-let stop: () => void;
-
-beforeEach(() => {
-  vi.useFakeTimers();
-  resetStore();
-  runner = new HeldRunner();
-  setJobRunnerFactory(() => runner);
-  stop = startAnalysis();
-});
-
-afterEach(() => {
-  stop();
-  vi.useRealTimers();
-});
-
-async function settle(): Promise<void> {
-  vi.advanceTimersByTime(SWEEP_DEBOUNCE_MS + 1);
-  runner.finishAll();
-  await vi.runAllTimersAsync();
-}
+useHeldRunner();
 
 /** Lets queued jobs start without finishing them. */
 function startQueued(): void {
