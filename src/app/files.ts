@@ -3,7 +3,6 @@
  * message naming the file and the line or field, and the open design is left exactly as it was.
  */
 import type { Design } from '../core/model/design.ts';
-import { DEFAULT_TECHNOLOGY } from '../core/model/technology.ts';
 import { DesignFileError, parseDesignFile, serializeDesign } from '../core/format/designFile.ts';
 import { SpiceImportError } from '../core/netlist-io/spiceImport.ts';
 import { cellsFromText, isSpiceFileName, SPICE_EXTENSIONS } from '../core/netlist-io/cellFiles.ts';
@@ -42,7 +41,7 @@ export function designsFromSpice(text: string, fileName: string): SpiceDesigns {
       ? [
           {
             name: c.job.cell,
-            technology: DEFAULT_TECHNOLOGY,
+            technology: c.job.technology,
             netlist: c.job.netlist,
             expectations: c.job.expectations,
             sequences: [],

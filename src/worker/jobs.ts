@@ -8,6 +8,7 @@ import { analyseCell } from '../core/power/cellAnalysis.ts';
 import { sizingReport } from '../core/sizing/sizingReport.ts';
 import { expressionProblem } from '../core/view/expectation.ts';
 import { StepLevelRecorder } from '../core/view/sequenceLevels.ts';
+import { transfer, vectorDc } from './dcJobs.ts';
 import { MAX_INPUTS_WITH_UNDRIVEN } from './protocol.ts';
 import type {
   AnalysisJob,
@@ -104,5 +105,11 @@ export function runJob(job: AnalysisJob, onProgress: (p: JobProgress) => void = 
       return { kind: 'sequence', revision: job.revision, ...sequence(job, onProgress), elapsedMs: elapsed() };
     case 'sizing':
       return { kind: 'sizing', revision: job.revision, ...sizing(job), elapsedMs: elapsed() };
+    case 'transfer': {
+      const outcome = transfer(job, throttled(onProgress));
+      return { kind: 'transfer', revision: job.revision, ...outcome, elapsedMs: elapsed() };
+    }
+    case 'vector-dc':
+      return { kind: 'vector-dc', revision: job.revision, ...vectorDc(job), elapsedMs: elapsed() };
   }
 }

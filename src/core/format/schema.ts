@@ -5,7 +5,7 @@
  * represent.
  */
 import { z } from 'zod';
-import { DEFAULT_TECHNOLOGY, withVdd } from '../model/technology.ts';
+import { DEFAULT_TECHNOLOGY, modelCard, withVdd, type Technology } from '../model/technology.ts';
 import { sheetPartSchema } from './sheetPartSchema.ts';
 
 const netName = z.string().min(1, 'a net name cannot be empty');
@@ -21,6 +21,7 @@ const mosSchema = z.object({
   bulk: netName.optional(),
   w: positive,
   l: positive,
+  model: z.string().min(1).optional(),
 });
 
 const resistorSchema = z.object({
@@ -68,6 +69,19 @@ export const netlistSchema = z.object({
 });
 
 /**
+ * One model card's level-1 values (docs/semantics.md §1, "Model cards"): what it leaves out, the
+ * technology gives. `vt0` is VTO for NMOS and −VTO for PMOS, as the technology keeps `vtp`.
+ */
+const deviceModelSchema = z.object({
+  type: z.enum(['nmos', 'pmos']),
+  vt0: z.number().min(-10).max(10).optional(),
+  kp: positive.optional(),
+  gamma: z.number().nonnegative().optional(),
+  phi: positive.optional(),
+  lambda: z.number().nonnegative().optional(),
+});
+
+/**
  * Each field may be left out of a hand-written file; missing ones take the textbook defaults, and
  * missing input thresholds follow the file's VDD at 0.35 and 0.65 of it (as `withVdd` does).
  */
@@ -93,6 +107,8 @@ export const technologySchema = z
     phip: positive.default(DEFAULT_TECHNOLOGY.phip),
     lambdan: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.lambdan),
     lambdap: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.lambdap),
+    // Model cards the devices name (added to version 1 as an optional field).
+    models: z.record(z.string().min(1), deviceModelSchema).optional(),
   })
   .transform(({ vil, vih, ...t }) => {
     const { vil: lowDefault, vih: highDefault } = withVdd(DEFAULT_TECHNOLOGY, t.vdd);
@@ -121,16 +137,37 @@ export const sheetSchema = z.object({
 /** The marker that tells a Railwise design file from any other JSON. */
 export const DESIGN_FORMAT_TAG = 'railwise-design';
 
-export const designFileV1Schema = z.object({
-  format: z.literal(DESIGN_FORMAT_TAG),
-  version: z.literal(1),
-  name: z.string(),
-  technology: technologySchema.default(DEFAULT_TECHNOLOGY),
-  netlist: netlistSchema,
-  expectations: z.record(z.string(), z.string()).default({}),
-  sequences: z.array(sequenceSchema).default([]),
-  sheet: sheetSchema.optional(),
-  notes: z.string().optional(),
-});
+export const designFileV1Schema = z
+  .object({
+    format: z.literal(DESIGN_FORMAT_TAG),
+    version: z.literal(1),
+    name: z.string(),
+    technology: technologySchema.default(DEFAULT_TECHNOLOGY),
+    netlist: netlistSchema,
+    expectations: z.record(z.string(), z.string()).default({}),
+    sequences: z.array(sequenceSchema).default([]),
+    sheet: sheetSchema.optional(),
+    notes: z.string().optional(),
+  })
+  .superRefine((file, ctx) => {
+    const check = (kind: string, model: string | undefined, path: (string | number)[]): void => {
+      const problem = modelProblem(file.technology, kind, model);
+      if (problem !== null) ctx.addIssue({ code: 'custom', message: problem, path });
+    };
+    file.netlist.devices.forEach((d, i) => {
+      if (d.kind === 'nmos' || d.kind === 'pmos') check(d.kind, d.model, ['netlist', 'devices', i, 'model']);
+    });
+    file.sheet?.parts.forEach((p, i) => {
+      if (p.kind === 'nmos' || p.kind === 'pmos') check(p.kind, p.model, ['sheet', 'parts', i, 'model']);
+    });
+  });
+
+/** Why a transistor cannot take the model card it names, or null. */
+function modelProblem(tech: Technology, kind: string, model: string | undefined): string | null {
+  if (model === undefined) return null;
+  const card = modelCard(tech, model);
+  if (card === undefined) return `no model card '${model}' in technology.models`;
+  return card.type === kind ? null : `model '${model}' is a ${card.type} card, not ${kind}`;
+}
 
 export type DesignFileV1 = z.infer<typeof designFileV1Schema>;

@@ -23,11 +23,13 @@ const placement = {
   mirror: z.boolean(),
 };
 
-/** A kind's record: its placement and its own properties, each a positive number or absent. */
+/** A kind's record: its placement and its own properties, each a positive number (or text) or absent. */
 function kindSchema(kind: PartKind) {
-  const props: Record<string, z.ZodOptional<z.ZodNumber>> = Object.fromEntries(
-    partSpec(kind).fields.map((f) => [f.key, z.number().positive().optional()]),
-  );
+  const spec = partSpec(kind);
+  const props: Record<string, z.ZodOptional<z.ZodNumber | z.ZodString>> = Object.fromEntries([
+    ...spec.fields.map((f) => [f.key, z.number().positive().optional()]),
+    ...(spec.textProps ?? []).map((key) => [key, z.string().min(1).optional()]),
+  ]);
   return z.object({ id: z.string().min(1), kind: z.literal(kind), ...placement }).extend(props);
 }
 

@@ -6,7 +6,13 @@
 import { DesignFileError, parseDesignFile } from '../format/designFile.ts';
 import type { Sequence } from '../model/design.ts';
 import type { Netlist } from '../model/netlist.ts';
-import { DEFAULT_TECHNOLOGY, withVdd, type Technology } from '../model/technology.ts';
+import {
+  DEFAULT_TECHNOLOGY,
+  withCardValues,
+  withVdd,
+  type DeviceModel,
+  type Technology,
+} from '../model/technology.ts';
 import { expressionNames } from '../expect/names.ts';
 import { ExpressionError, parseExpression } from '../expect/parse.ts';
 import { importSpice, SpiceImportError, type SpiceImportOptions } from './spiceImport.ts';
@@ -67,6 +73,13 @@ function technologyOf(base: Technology, vdd: number | undefined): Technology {
   return vdd === undefined ? base : withVdd(base, vdd);
 }
 
+/** The technology with the level-1 values of the cards `* railwise: technology` names. */
+function withTechnologyCards(base: Technology, cards: readonly DeviceModel[], file: string): Technology {
+  if (cards.length === 0) return base;
+  const source = `level-1 values from the model cards of ${file}; the rest from ${base.source}`;
+  return { ...cards.reduce(withCardValues, base), source };
+}
+
 export function isSpiceFileName(fileName: string): boolean {
   const lower = fileName.toLowerCase();
   return SPICE_EXTENSIONS.some((ext) => lower.endsWith(ext));
@@ -120,7 +133,11 @@ function designCells(text: string, file: string, options: LoadOptions): FileCell
 
 function spiceCells(text: string, file: string, options: LoadOptions): FileCells {
   const imported = importSpice(text, file, options);
-  const technology = technologyOf(DEFAULT_TECHNOLOGY, options.vdd);
+  const base = withTechnologyCards(
+    technologyOf(DEFAULT_TECHNOLOGY, options.vdd),
+    imported.technologyCards,
+    file,
+  );
   const position = new Map(imported.order.map((name, i) => [name, i]));
   const cells: { at: number; cell: LoadedCell }[] = [];
   for (const c of imported.cells) {
@@ -128,7 +145,7 @@ function spiceCells(text: string, file: string, options: LoadOptions): FileCells
       file,
       cell: c.name,
       netlist: c.netlist,
-      technology,
+      technology: Object.keys(c.models).length === 0 ? base : { ...base, models: c.models },
       expectations: c.expectations,
       expectationLines: c.expectationLines,
       pinsNamed: c.pinsNamed,

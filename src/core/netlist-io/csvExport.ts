@@ -27,14 +27,20 @@ export function exportTruthTableCsv(report: CheckReport): string {
     numberField(row.staticPower),
     row.findings.map(findingText).join('; '),
   ]);
-  return [header, ...body].map((fields) => fields.map(csvField).join(',')).join('\r\n') + '\r\n';
+  return csvText([header, ...body]);
+}
+
+/** Rows of fields as RFC 4180 text: the one CSV writer (truth tables, transfer curves). */
+export function csvText(rows: readonly (readonly string[])[]): string {
+  return rows.map((fields) => fields.map(csvField).join(',')).join('\r\n') + '\r\n';
 }
 
 function findingText(f: Finding): string {
   return f.nets.length === 0 ? `${f.severity} ${f.kind}` : `${f.severity} ${f.kind} (${f.nets.join(', ')})`;
 }
 
-function numberField(value: number | null | undefined): string {
+/** A number as JavaScript writes it exactly (read back by any CSV reader); empty when there is none. */
+export function numberField(value: number | null | undefined): string {
   return value === null || value === undefined || Number.isNaN(value) ? '' : String(value);
 }
 

@@ -4,6 +4,7 @@
  * the `* railwise:` directives inside the cell add (expected functions, pin directions).
  */
 import type { Device, Netlist, Rail } from '../model/netlist.ts';
+import type { DeviceModel } from '../model/technology.ts';
 import type { Body, Directive } from './spiceParse.ts';
 import { flattenCell, type FlatCell, type FlattenContext, type FlatSource } from './spiceFlatten.ts';
 import type { Hierarchy } from './spiceHierarchy.ts';
@@ -19,6 +20,8 @@ export interface ImportedCell {
   readonly expectationLines: Readonly<Record<string, number>>;
   /** True when `* railwise: inputs` or `outputs` lines named the pins. */
   readonly pinsNamed: boolean;
+  /** Level-1 values of the model cards the devices name (`MosDevice.model`), by card name. */
+  readonly models: Readonly<Record<string, DeviceModel>>;
   readonly notes: readonly string[];
 }
 
@@ -61,7 +64,8 @@ export function buildCell(spec: CellSpec, ctx: CellContext): ImportedCell {
   netlist = applyPinDirectives(netlist, spec.body.directives, ctx.fileName);
   const { expectations, lines } = readExpectations(netlist, spec.body.directives, notes);
   const pinsNamed = spec.body.directives.some((d) => d.key === 'inputs' || d.key === 'outputs');
-  return { name: spec.name, netlist, expectations, expectationLines: lines, pinsNamed, notes };
+  const models = Object.fromEntries(flat.models);
+  return { name: spec.name, netlist, expectations, expectationLines: lines, pinsNamed, models, notes };
 }
 
 /** Rails in order of first appearance: named rails, then nets a `V` line holds. */
@@ -150,7 +154,15 @@ function applyPinDirectives(netlist: Netlist, directives: readonly Directive[], 
   return result;
 }
 
-const KNOWN_DIRECTIVES = new Set(['expect', 'inputs', 'outputs', 'supply', 'ground', 'treat-as']);
+const KNOWN_DIRECTIVES = new Set([
+  'expect',
+  'inputs',
+  'outputs',
+  'supply',
+  'ground',
+  'treat-as',
+  'technology',
+]);
 
 function readExpectations(
   netlist: Netlist,

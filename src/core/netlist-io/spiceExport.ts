@@ -1,16 +1,18 @@
 /**
  * SPICE-compatible export: one `.subckt` with W and L, level-1 (Shichman–Hodges) `.model` cards
- * from the design's technology, and `* railwise:` directives that carry what plain SPICE cannot
- * (pin directions, rails with unusual names, expected functions), so that importing the export
- * gives back the same netlist.
+ * (the technology's own, named by a `* railwise: technology` line, and the cards devices name), and
+ * `* railwise:` directives that carry what plain SPICE cannot (pin directions, rails with unusual
+ * names, expected functions), so that importing the export gives back the same netlist and level-1
+ * values.
  */
 import { CAUTION } from '../caution.ts';
 import type { Device, MosDevice, Netlist } from '../model/netlist.ts';
 import type { Technology } from '../model/technology.ts';
+import { modelCards } from './spiceModelExport.ts';
+
+export { NMOS_MODEL, PMOS_MODEL } from './spiceModelExport.ts';
 import { formatSpiceNumber } from './spiceNumber.ts';
 
-export const NMOS_MODEL = 'rw_nmos';
-export const PMOS_MODEL = 'rw_pmos';
 export const DIODE_MODEL = 'rw_diode';
 
 /** Net names the importer takes as rails without being told (see spiceImport.ts). */
@@ -24,18 +26,18 @@ export interface SpiceExportOptions {
 export function exportSpice(netlist: Netlist, tech: Technology, options: SpiceExportOptions = {}): string {
   const cell = token(netlist.name || 'cell');
   const ports = unique([...netlist.inputs, ...netlist.outputs, ...netlist.rails.map((r) => r.net)]);
+  const cards = modelCards(netlist, tech, token);
   const lines = [
     `* ${cell}: exported by Railwise. ${CAUTION}`,
     `* Level-1 models from: ${tech.source}`,
-    `.model ${NMOS_MODEL} nmos (level=1 vto=${tech.vtn} kp=${formatSpiceNumber(tech.kpn)})`,
-    `.model ${PMOS_MODEL} pmos (level=1 vto=${-tech.vtp} kp=${formatSpiceNumber(tech.kpp)})`,
+    ...cards.lines,
     ...(netlist.devices.some((d) => d.kind === 'diode') ? [`.model ${DIODE_MODEL} d`] : []),
     `.subckt ${cell} ${ports.map(token).join(' ')}`,
     `* railwise: inputs ${netlist.inputs.map(token).join(' ')}`.trimEnd(),
     `* railwise: outputs ${netlist.outputs.map(token).join(' ')}`.trimEnd(),
     ...railLines(netlist),
     ...Object.entries(options.expectations ?? {}).map(([out, expr]) => `* railwise: expect ${out} = ${expr}`),
-    ...netlist.devices.map((d) => deviceLine(d, netlist)),
+    ...netlist.devices.map((d) => deviceLine(d, netlist, cards.modelOf)),
     `.ends ${cell}`,
     '.end',
   ];
@@ -54,11 +56,11 @@ function railLines(netlist: Netlist): string[] {
   });
 }
 
-function deviceLine(d: Device, netlist: Netlist): string {
+function deviceLine(d: Device, netlist: Netlist, modelOf: (d: MosDevice) => string): string {
   switch (d.kind) {
     case 'nmos':
     case 'pmos':
-      return mosLine(d, netlist);
+      return mosLine(d, netlist, modelOf(d));
     case 'resistor':
       return `${elementName('R', d.name)} ${token(d.a)} ${token(d.b)} ${formatSpiceNumber(d.ohms)}`;
     case 'capacitor':
@@ -68,10 +70,9 @@ function deviceLine(d: Device, netlist: Netlist): string {
   }
 }
 
-function mosLine(d: MosDevice, netlist: Netlist): string {
+function mosLine(d: MosDevice, netlist: Netlist, model: string): string {
   const role = d.kind === 'nmos' ? 'ground' : 'supply';
   const bulk = d.bulk ?? netlist.rails.find((r) => r.role === role)?.net ?? (role === 'ground' ? '0' : 'vdd');
-  const model = d.kind === 'nmos' ? NMOS_MODEL : PMOS_MODEL;
   const nets = [d.drain, d.gate, d.source, bulk].map(token).join(' ');
   return `${elementName('M', d.name)} ${nets} ${model} W=${microns(d.w)} L=${microns(d.l)}`;
 }

@@ -6,13 +6,14 @@
  * Instances of subcircuits the file does not define stand for devices by the rules of
  * `deviceNames.ts`; `short` links join their nets afterwards (`spiceShorts.ts`).
  */
-import type { Device, MosKind } from '../model/netlist.ts';
+import type { Device } from '../model/netlist.ts';
+import type { DeviceModel } from '../model/technology.ts';
 import type { Body, SpiceFile } from './spiceParse.ts';
 import type { Element, InstanceElement, SourceElement } from './spiceElements.ts';
 import { SpiceImportError } from './spiceErrors.ts';
 import type { Scale } from './spiceScale.ts';
 import type { StandIn } from './deviceNames.ts';
-import { instanceDevice, mosDevice, type DeviceNotes } from './spiceDevices.ts';
+import { instanceDevice, mosDevice, type DeviceNotes, type ModelUse } from './spiceDevices.ts';
 import { joinShorts, type ShortLink } from './spiceShorts.ts';
 
 /** A `V` line after flattening: its nets resolved. */
@@ -30,6 +31,8 @@ export interface FlatCell {
   /** Every net in order of first appearance, spelled as first written. */
   readonly nets: string[];
   readonly notes: string[];
+  /** Level-1 values of the cards the devices name, by card name. */
+  readonly models: ReadonlyMap<string, DeviceModel>;
 }
 
 export interface FlattenContext {
@@ -41,6 +44,8 @@ export interface FlattenContext {
   readonly scale: Scale | null;
   /** Explicit stand-ins for undefined subcircuits, by lower-case name. */
   readonly standIns: ReadonlyMap<string, StandIn>;
+  /** Lower-case names of the cards that are the technology's own (`* railwise: technology`). */
+  readonly technologyCards: ReadonlySet<string>;
 }
 
 export interface Scope {
@@ -59,8 +64,10 @@ export class CellBuilder {
   private readonly byLower = new Map<string, string>();
   /** Local names repeat in every instance: their lower case and whether they are global, once. */
   private readonly locals = new Map<string, { lower: string; global: boolean }>();
-  /** Caches for the device readers: a model's type and a size text's value, per cell. */
-  readonly modelKinds = new Map<string, MosKind>();
+  /** Caches for the device readers: what a model name gives and a size text's value, per cell. */
+  readonly modelUses = new Map<string, ModelUse>();
+  /** The level-1 values of the cards this cell's devices name. */
+  readonly models = new Map<string, DeviceModel>();
   readonly sizes = new Map<string, number>();
 
   constructor(readonly ctx: FlattenContext) {}
@@ -98,6 +105,7 @@ export class DeviceNotesCollector implements DeviceNotes {
   readonly sized: string[] = [];
   /** Undefined subcircuit → what it was read as, how many, and whether by rule. */
   readonly standIns = new Map<string, { kind: StandIn; count: number; byRule: boolean }>();
+  readonly models = new Set<string>();
 
   lines(): string[] {
     const out: string[] = [];
@@ -111,6 +119,7 @@ export class DeviceNotesCollector implements DeviceNotes {
       );
       out.push(`subcircuits not defined in this file read as devices: ${list.join(', ')}`);
     }
+    out.push(...this.models);
     return out;
   }
 }
@@ -122,7 +131,7 @@ export function flattenCell(body: Body, ports: readonly string[], ctx: FlattenCo
   ports.forEach((p) => b.net(p, root));
   expand(b, body, root);
   const joined = joinShorts(b, new Set(ports.map((p) => p.toLowerCase())));
-  return { ...joined, notes: [...b.notes.lines(), ...joined.notes] };
+  return { ...joined, notes: [...b.notes.lines(), ...joined.notes], models: b.models };
 }
 
 interface Frame {

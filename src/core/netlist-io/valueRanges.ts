@@ -5,7 +5,8 @@
  * (common practice, no source).
  */
 
-export type RangedField = 'w' | 'l' | 'm' | 'ohms' | 'farads' | 'volts' | 'scale';
+export type RangedField =
+  'w' | 'l' | 'm' | 'ohms' | 'farads' | 'volts' | 'scale' | 'vto' | 'kp' | 'gamma' | 'phi' | 'lambda';
 
 interface Range {
   readonly min: number;
@@ -24,6 +25,12 @@ export const VALUE_RANGES: Readonly<Record<RangedField, Range>> = {
   farads: { min: 1e-21, max: 1e-6, bounds: '1 zF to 1 µF' },
   volts: { min: 0, max: 100, bounds: '0 to 100 V' },
   scale: { min: 1e-12, max: 1, bounds: '1e-12 to 1' },
+  /** Level-1 model card values (`spiceModels.ts`): threshold, k', γ, 2φF, λ. */
+  vto: { min: -10, max: 10, bounds: '−10 to 10 V' },
+  kp: { min: 1e-7, max: 1e-2, bounds: '0.1 µA/V² to 10 mA/V² (write 110u for 110 µA/V²)' },
+  gamma: { min: 0, max: 10, bounds: '0 to 10 V^½' },
+  phi: { min: 0.05, max: 5, bounds: '0.05 to 5 V' },
+  lambda: { min: 0, max: 10, bounds: '0 to 10 1/V' },
 };
 
 /** Null when `value` is finite and in range, else the reason in words. */
