@@ -5,6 +5,7 @@
  */
 import { readFileSync } from 'node:fs';
 import type { Netlist } from '../core/model/netlist.ts';
+import { recordOf } from '../core/model/records.ts';
 import { assignPins, PinError } from '../core/netlist-io/pins.ts';
 import {
   cellsFromText,
@@ -114,8 +115,8 @@ function applyChoice(job: CellJob, choice: CellChoice): LoadedCell {
     };
     return { failure };
   }
-  const expectations: Record<string, string> = { ...job.expectations };
-  const expectationLines: Record<string, number> = { ...job.expectationLines };
+  const expectations = recordOf(Object.entries(job.expectations));
+  const expectationLines = recordOf(Object.entries(job.expectationLines));
   for (const [output, text] of Object.entries(choice.expect)) {
     const net = netlist.outputs.find((o) => o.toLowerCase() === output.toLowerCase()) ?? output;
     expectations[net] = text;

@@ -129,7 +129,12 @@ function powerSettings(
 
 /** Errors that mean "this cell cannot be checked as asked", each tied to what the user should fix. */
 export function failureOf(e: unknown): { message: string; field?: string } {
-  if (e instanceof ExpressionError) return { message: `expected function: ${e.message}`, field: 'expect' };
+  if (e instanceof ExpressionError) {
+    return {
+      message: `expected function${e.output === undefined ? ':' : ' of'} ${e.message}`,
+      field: 'expect',
+    };
+  }
   if (e instanceof SequenceError) return { message: `--sequence: ${e.message}`, field: 'sequence' };
   if (e instanceof TransferError) return { message: `--transfer: ${e.message}`, field: 'transfer' };
   if (e instanceof PowerOptionsError) return { message: `--power: ${e.message}`, field: e.field };

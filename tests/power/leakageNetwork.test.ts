@@ -13,7 +13,7 @@ import { powerReport } from '../../src/core/power/powerReport.ts';
 import { complementaryGate, type SpTree } from '../property/generators.ts';
 
 const tech = DEFAULT_TECHNOLOGY;
-const random = { freq: 1e6, activity: 'random' } as const;
+const random = { frequency: 1e6, load: 0, activity: 'random' } as const;
 
 /**
  * A 26-transistor complementary gate (7 inputs) that once ended in "LU matrix is singular": with

@@ -1,6 +1,6 @@
 import { compile, type CompiledNetlist } from '../compile/compile.ts';
 import { evaluateExpression, type ExpectedValue } from '../expect/evaluate.ts';
-import { ExpressionError, parseExpression, type Expr } from '../expect/parse.ts';
+import { ExpressionError, parseExpectation, type Expr } from '../expect/parse.ts';
 import type { Design, InputVector } from '../model/design.ts';
 import type { Netlist } from '../model/netlist.ts';
 import { DEFAULT_TECHNOLOGY, type Technology } from '../model/technology.ts';
@@ -66,9 +66,9 @@ class Checker implements SolveObserver {
     this.expectations = Object.entries(options.expectations ?? {}).map(([output, text]) => {
       const n = this.compiled.netIndex.get(output);
       if (n === undefined || !netlist.outputs.includes(output)) {
-        throw new ExpressionError(`'${output}' is not an output`, `${output} = ${text}`, 0);
+        throw new ExpressionError('not an output', text, 0, output);
       }
-      return [n, parseExpression(text, netlist.inputs)];
+      return [n, parseExpectation(output, text, netlist.inputs)];
     });
   }
 

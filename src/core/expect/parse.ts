@@ -23,11 +23,15 @@ export const MAX_EXPRESSION_DEPTH = 256;
 export class ExpressionError extends Error {
   override readonly name = 'ExpressionError';
   constructor(
-    message: string,
+    /** What is wrong, without the place. */
+    readonly detail: string,
     readonly source: string,
     readonly position: number,
+    /** The output whose expected function this is, when known. */
+    readonly output?: string,
   ) {
-    super(`${message} at column ${position + 1} of "${excerpt(source, position)}"`);
+    const whose = output === undefined ? '' : `${printable(output)}: `;
+    super(`${whose}${detail} at column ${position + 1} of "${excerpt(source, position)}"`);
   }
 }
 
@@ -194,6 +198,16 @@ class Parser {
  */
 export function parseExpression(source: string, inputs: readonly string[]): Expr {
   return new Parser(source, tokenize(source), new Set(inputs)).parseAll();
+}
+
+/** Parses the expected function of `output`; an error names the output. */
+export function parseExpectation(output: string, source: string, inputs: readonly string[]): Expr {
+  try {
+    return parseExpression(source, inputs);
+  } catch (e) {
+    if (!(e instanceof ExpressionError)) throw e;
+    throw new ExpressionError(e.detail, e.source, e.position, output);
+  }
 }
 
 /** Splits `Y = expr` into the output name and the expression text. */
