@@ -16,6 +16,7 @@ import {
   type LoadOptions,
 } from '../core/netlist-io/cellFiles.ts';
 import type { CellChoice } from './args.ts';
+import { binaryRefusal } from './fileText.ts';
 import { UsageError } from './usage.ts';
 import { libraryFunctions, type FunctionSource } from './functionsFrom.ts';
 
@@ -71,6 +72,13 @@ function readCells(file: string, options: LoadOptions): FileCells {
       available: [],
     };
   }
+  const binary = binaryRefusal(file, text);
+  if (binary !== null)
+    return {
+      cells: [{ failure: { file, cell: null, message: binary, line: 1 } }],
+      library: false,
+      available: [],
+    };
   return cellsFromText(text, file, options);
 }
 

@@ -30,6 +30,12 @@ export interface CheckOptions {
   readonly simulator?: Simulator;
   /** Further readers of each solved vector (power counters, level strips): one solve feeds all. */
   readonly observers?: readonly SolveObserver[];
+  /**
+   * Rows go here as they are found and are not kept, so a 65,536-vector sweep never holds its rows:
+   * the report then has no rows and only the structural findings, while its summary still counts
+   * every finding.
+   */
+  readonly onRow?: (row: VectorReport, index: number) => void;
 }
 
 export const FINDING_KINDS: readonly FindingKind[] = [
@@ -63,17 +69,21 @@ class Checker implements SolveObserver {
     this.simulator =
       options.simulator ?? new Simulator(compile(netlist, options.technology ?? DEFAULT_TECHNOLOGY));
     this.compiled = this.simulator.compiled;
-    this.expectations = Object.entries(options.expectations ?? {}).map(([output, text]) => {
-      const n = this.compiled.netIndex.get(output);
-      if (n === undefined || !netlist.outputs.includes(output)) {
-        throw new ExpressionError('not an output', text, 0, output);
-      }
-      return [n, parseExpectation(output, text, netlist.inputs)];
-    });
+    this.expectations = parsedExpectations(netlist, options.expectations).map(([output, e]) => [
+      this.compiled.netIndex.get(output) as number,
+      e,
+    ]);
   }
 
+  /** Rows handed to `onRow` rather than kept, and their findings counted by kind. */
+  private readonly streamed = { rows: 0, counts: summarize(0, []) as Record<string, number> };
+
   add(r: SolveResult, index: number): void {
-    this.rows.push(this.vectorReport(r, index));
+    const row = this.vectorReport(r, index);
+    if (this.options.onRow === undefined) return void this.rows.push(row);
+    this.streamed.rows++;
+    countFindings(this.streamed.counts, row.findings);
+    this.options.onRow(row, index);
   }
 
   /** Every reader of this pass: the checker's own rows first. */
@@ -121,24 +131,54 @@ class Checker implements SolveObserver {
 
   report(kind: 'vectors' | 'steps', rows: VectorReport[], notes: string[]): CheckReport {
     const findings = [...structuralFindings(this.compiled), ...rows.flatMap((v) => v.findings)];
+    const summary = countFindings({ ...this.streamed.counts }, findings);
     return {
       cell: this.netlist.name,
       inputs: this.netlist.inputs,
       outputs: this.netlist.outputs,
       [kind]: rows,
       findings,
-      summary: summarize(rows.length, findings),
+      summary: { ...summary, vectors: rows.length + this.streamed.rows },
       notes,
     };
   }
 }
 
+/**
+ * The expected functions parsed against the netlist's inputs, by output; throws ExpressionError
+ * naming the output for one that is not an output or does not parse. A check refuses these before
+ * it solves anything (`refusalBeforeCheck`).
+ */
+function parsedExpectations(
+  netlist: Netlist,
+  expectations: Readonly<Record<string, string>> = {},
+): [string, Expr][] {
+  return Object.entries(expectations).map(([output, text]) => {
+    if (!netlist.outputs.includes(output)) throw new ExpressionError('not an output', text, 0, output);
+    return [output, parseExpectation(output, text, netlist.inputs)];
+  });
+}
+
+/**
+ * Throws what a check with these options would refuse before solving a vector (an expected function
+ * that does not parse, too many inputs for a sweep), so a caller can refuse a cell before it starts
+ * writing the cell's report.
+ */
+export function refusalBeforeCheck(netlist: Netlist, options: CheckOptions, sweep: boolean): void {
+  parsedExpectations(netlist, options.expectations);
+  if (sweep) checkSweepLimit(netlist.inputs, options.maxInputs);
+}
+
 export function summarize(vectors: number, findings: readonly Finding[]): Summary {
   const counts: Record<string, number> = { vectors, errors: 0, warnings: 0 };
   for (const k of FINDING_KINDS) counts[k] = 0;
+  return countFindings(counts, findings);
+}
+
+function countFindings(counts: Record<string, number>, findings: readonly Finding[]): Summary {
   for (const f of findings) {
     counts[f.severity === 'error' ? 'errors' : 'warnings']++;
-    counts[f.kind]++;
+    counts[f.kind] = (counts[f.kind] ?? 0) + 1;
   }
   return counts as Summary;
 }

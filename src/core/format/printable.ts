@@ -48,3 +48,15 @@ export function unquoted(text: string): string | null {
     return null;
   }
 }
+
+/**
+ * Printable text of at most about `max` characters: a longer one keeps its start and end with the
+ * number of characters left out between, so a message quoting a megabyte of garbage stays a line.
+ */
+export function brief(text: string, max = 400): string {
+  const safe = printable(text);
+  if (safe.length <= max) return safe;
+  const head = Math.floor(max * 0.75);
+  const tail = max - head;
+  return `${safe.slice(0, head)} … (${safe.length - max} characters left out) … ${safe.slice(-tail)}`;
+}
