@@ -6,12 +6,15 @@
 import { closeSync, mkdtempSync, openSync, readSync, rmSync, writeSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
+import { StringDecoder } from 'node:string_decoder';
 import { Raw } from './jsonWriter.ts';
 
 /** In-memory text beyond which findings go to disk. */
 const IN_MEMORY_CHARS = 4 << 20;
 
 export class FindingSpool {
+  constructor(private readonly inMemoryChars = IN_MEMORY_CHARS) {}
+
   private memory: string[] = [];
   private chars = 0;
   private file: { dir: string; fd: number } | null = null;
@@ -23,7 +26,7 @@ export class FindingSpool {
     this.count++;
     this.memory.push(line);
     this.chars += line.length;
-    if (this.chars >= IN_MEMORY_CHARS) this.spill();
+    if (this.chars >= this.inMemoryChars) this.spill();
   }
 
   /** Every finding in order, each as the writer's Raw text; then the spool is empty. */
@@ -58,16 +61,17 @@ function openSpool(): { dir: string; fd: number } {
   return { dir, fd: openSync(join(dir, 'findings.jsonl'), 'w+') };
 }
 
-/** Reads a file of lines from the start in 1 MB pieces. */
+/** Reads a file of lines from the start in 64 KB pieces (a character split between pieces is kept whole). */
 function readLines(fd: number, each: (line: string) => void): void {
-  const buffer = Buffer.alloc(1 << 20);
+  const buffer = Buffer.alloc(1 << 16);
+  const decoder = new StringDecoder('utf8');
   let position = 0;
   let rest = '';
   for (;;) {
     const n = readSync(fd, buffer, 0, buffer.length, position);
     if (n === 0) break;
     position += n;
-    const text = rest + buffer.toString('utf8', 0, n);
+    const text = rest + decoder.write(buffer.subarray(0, n));
     const lines = text.split('\n');
     rest = lines.pop() ?? '';
     lines.forEach(each);
