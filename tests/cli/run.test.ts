@@ -25,7 +25,7 @@ describe('arguments', () => {
     [['check'], /at least one FILE/],
     [['check', LIB, '--colour'], /--colour/],
     [['check', LIB, '--expect', 'Y is !A'], /--expect "Y is !A": write OUTPUT = EXPRESSION/],
-    [['check', LIB, '--vdd', 'high'], /--vdd "high" must be from 0 to 100 V/],
+    [['check', LIB, '--vdd', 'high'], /--vdd "high" is not a positive number/],
     [['check', LIB, '--freq', '1meg'], /--freq and --activity go with --power/],
     [['check', LIB, '--power', '--activity', 'bursty'], /--activity must be sequence or random/],
     [['check', LIB, '--jobs', '0'], /--jobs "0"/],

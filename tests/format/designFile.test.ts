@@ -69,7 +69,7 @@ const partArb: fc.Arbitrary<SheetPart> = fc
       w: between(1e-3, 9999),
       l: between(1e-3, 9999),
       ohms: between(1e-3, 1e12),
-      farads: between(1e-21, 1),
+      farads: between(1e-21, 1e-6),
     }),
   })
   .map(({ kind, sizes, ...placement }) => makeSheetPart(kind, placement, sizes));

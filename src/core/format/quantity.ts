@@ -11,7 +11,7 @@ export function quantity(range: Range) {
   return z
     .number({
       error: (issue) =>
-        typeof issue.input === 'number' ? outside(issue.input) : `expected a number of ${range.unit}`,
+        typeof issue.input === 'number' ? outside(issue.input) : `expected a number (${range.words})`,
     })
     .refine((v) => inRange(v, range), { error: (issue) => outside(issue.input) });
 }
