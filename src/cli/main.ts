@@ -32,7 +32,7 @@ export async function run(argv: readonly string[], io: Io = processIo()): Promis
       ? e.message
       : `internal error (please report it): ${e instanceof Error ? (e.stack ?? e.message) : String(e)}`;
     io.err(`railwise: ${brief(message, 4000)}${usage ? '\nSee railwise --help.' : ''}`);
-    if (json && !wrote) io.out(JSON.stringify({ error: { message } }, null, 2));
+    if (json && !wrote) io.out(JSON.stringify({ error: { message: brief(message, 4000) } }, null, 2));
     return EXIT_UNUSABLE;
   }
 }

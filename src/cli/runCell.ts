@@ -9,6 +9,7 @@ import { CAUTION } from '../core/caution.ts';
 import { CompileError } from '../core/compile/compile.ts';
 import { ExpressionError } from '../core/expect/parse.ts';
 import type { InputValue, InputVector } from '../core/model/design.ts';
+import { recordOf } from '../core/model/records.ts';
 import { analyseCell, type PowerRequest } from '../core/power/cellAnalysis.ts';
 import { powerFromCounts } from '../core/power/powerReport.ts';
 import { DEFAULT_POWER_SETTINGS, PowerOptionsError, type PowerSettings } from '../core/power/settings.ts';
@@ -116,7 +117,7 @@ export function sequenceSteps(job: CellJob, text: string): readonly InputVector[
  * Settings as given, else the core's defaults (the app's too); with --sequence the activity is that
  * sequence's unless --activity says otherwise, and --activity sequence alone uses the first saved one.
  */
-function powerSettings(
+export function powerSettings(
   job: CellJob,
   given: Partial<PowerSettings>,
   steps: readonly InputVector[] | undefined,
@@ -167,8 +168,8 @@ function cellJson(job: CellJob, report: CheckReport, extras: Extras): CellJson {
   };
 }
 
-function vectorJson(v: VectorReport): VectorJson {
-  const inputs = Object.fromEntries(Object.entries(v.inputs).map(([k, x]) => [k, inputNumber(x)]));
+export function vectorJson(v: VectorReport): VectorJson {
+  const inputs = recordOf(Object.entries(v.inputs).map(([k, x]) => [k, inputNumber(x)] as const));
   return { ...v, inputs };
 }
 

@@ -126,12 +126,12 @@ export const technologySchema = z
     kpn: quantity(RANGES.transconductance).default(DEFAULT_TECHNOLOGY.kpn),
     kpp: quantity(RANGES.transconductance).default(DEFAULT_TECHNOLOGY.kpp),
     // Level-1 DC model (added after version 1 files were written, so optional with defaults).
-    gamman: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.gamman),
-    gammap: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.gammap),
-    phin: z.number().positive().default(DEFAULT_TECHNOLOGY.phin),
-    phip: z.number().positive().default(DEFAULT_TECHNOLOGY.phip),
-    lambdan: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.lambdan),
-    lambdap: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.lambdap),
+    gamman: quantity(RANGES.bodyEffect).default(DEFAULT_TECHNOLOGY.gamman),
+    gammap: quantity(RANGES.bodyEffect).default(DEFAULT_TECHNOLOGY.gammap),
+    phin: quantity(RANGES.surfacePotential).default(DEFAULT_TECHNOLOGY.phin),
+    phip: quantity(RANGES.surfacePotential).default(DEFAULT_TECHNOLOGY.phip),
+    lambdan: quantity(RANGES.channelModulation).default(DEFAULT_TECHNOLOGY.lambdan),
+    lambdap: quantity(RANGES.channelModulation).default(DEFAULT_TECHNOLOGY.lambdap),
   })
   .transform(({ vil, vih, ...t }) => {
     const { vil: lowDefault, vih: highDefault } = withVdd(DEFAULT_TECHNOLOGY, t.vdd);

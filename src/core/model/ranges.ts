@@ -36,6 +36,12 @@ export const RANGES = {
   currentPerWidth: { min: 0, max: 1e-3, words: '0 to 1 mA/µm' },
   /** Process transconductance k', A/V². */
   transconductance: { min: 1e-9, max: 1, words: '1 nA/V² to 1 A/V²' },
+  /** Body-effect coefficient γ of the level-1 DC model, V^½. */
+  bodyEffect: { min: 0, max: 10, words: '0 to 10 V^½' },
+  /** Surface potential 2φF of the level-1 DC model, volts. */
+  surfacePotential: { min: 0, max: 10, minExclusive: true, words: 'above 0 V, up to 10 V' },
+  /** Channel-length modulation λ of the level-1 DC model, 1/V. */
+  channelModulation: { min: 0, max: 10, words: '0 to 10 /V' },
   /** Sheet coordinates, grid units from the origin either way. */
   coordinate: { min: -1e6, max: 1e6, words: '−1,000,000 to 1,000,000 grid units' },
 } as const satisfies Readonly<Record<string, Range>>;
