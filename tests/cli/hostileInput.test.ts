@@ -8,13 +8,13 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { run } from '../../src/cli/main.ts';
 import { runCell } from '../../src/cli/runCell.ts';
 import { loadCells } from '../../src/cli/loadCells.ts';
 import { STREAM_ROWS } from '../../src/cli/streamCell.ts';
 import { FindingSpool } from '../../src/cli/findingSpool.ts';
 import { makeColour, terminalSafe } from '../../src/cli/colour.ts';
 import { hasControlCharacter } from '../fixtures/hostileNames.ts';
+import { railwise } from './inProcess.ts';
 
 const dir = mkdtempSync(join(tmpdir(), 'railwise-hostile-'));
 afterAll(() => rmSync(dir, { recursive: true, force: true }));
@@ -23,17 +23,6 @@ function file(name: string, text: string | Buffer): string {
   const path = join(dir, name);
   writeFileSync(path, text);
   return path;
-}
-
-async function railwise(...argv: string[]): Promise<{ status: number; out: string; err: string }> {
-  let out = '';
-  let err = '';
-  const status = await run(argv, {
-    out: (t) => (out += `${t}\n`),
-    err: (t) => (err += `${t}\n`),
-    colour: false,
-  });
-  return { status, out, err };
 }
 
 /** A static CMOS NOR of n inputs: n series PMOS, n parallel NMOS, and a wrong expected function. */
