@@ -20,21 +20,7 @@ import {
 import { serializeDesign } from '../../src/core/format/designFile.ts';
 import { starterById } from '../../src/core/starters/index.ts';
 import { loadDesign } from '../../src/state/store.ts';
-
-/** Storage as the browser gives it, in memory. */
-function memoryStorage(): Storage {
-  const items = new Map<string, string>();
-  return {
-    get length() {
-      return items.size;
-    },
-    clear: () => items.clear(),
-    getItem: (k) => items.get(k) ?? null,
-    key: (i) => [...items.keys()][i] ?? null,
-    removeItem: (k) => void items.delete(k),
-    setItem: (k, v) => void items.set(k, String(v)),
-  };
-}
+import { memoryStorage } from '../memoryStorage.ts';
 
 const inverter = starterById('inverter')!.design;
 const nand = starterById('nand2')!.design;

@@ -71,50 +71,39 @@ const mutated = (seeds: readonly string[]) =>
     .map(([i, ms]) => ms.reduce((t, m) => m(t), seeds[i] as string));
 
 describe('fuzzing the command line', () => {
-  it('mutated netlists', async () => {
+  /** Checks each mutated file, and each clean one's export → import. */
+  async function fuzzFiles(seeds: readonly string[], extension: string, seed: number): Promise<Tally> {
     const tally = new Tally();
     await fc.assert(
-      fc.asyncProperty(mutated(NETLISTS), async (text) => {
-        const file = fuzzFile('.sp', text);
-        const result = await checkCase(file);
-        tally.add(result, file);
-        if (result.outcome === 'clean') tally.add(exportsBack(text, file), `${file} (export)`);
-      }),
-      { seed: 1601, numRuns: RUNS },
-    );
-    report('netlists', tally);
-  }, 600_000);
-
-  it('mutated design files', async () => {
-    const tally = new Tally();
-    await fc.assert(
-      fc.asyncProperty(mutated(DESIGNS), fc.boolean(), async (text, power) => {
-        const file = fuzzFile('.json', text);
+      fc.asyncProperty(mutated(seeds), fc.boolean(), async (text, power) => {
+        const file = fuzzFile(extension, text);
         const result = await checkCase(file, ...(power ? ['--power', '--sizing'] : []));
         tally.add(result, file);
         if (result.outcome === 'clean') tally.add(exportsBack(text, file), `${file} (export)`);
       }),
-      { seed: 1602, numRuns: RUNS },
+      { seed, numRuns: RUNS },
     );
-    report('design files', tally);
+    return tally;
+  }
+
+  it('mutated netlists', async () => {
+    report('netlists', await fuzzFiles(NETLISTS, '.sp', 1601));
+  }, 600_000);
+
+  it('mutated design files', async () => {
+    report('design files', await fuzzFiles(DESIGNS, '.json', 1602));
   }, 600_000);
 
   it('mutated share links', async () => {
     const tally = new Tally();
     const links = await Promise.all(DESIGNS.map(encodeDesignFragment));
     await fc.assert(
-      fc.asyncProperty(
-        fc.oneof(
-          mutated(links),
-          mutated(DESIGNS).chain((t) => fc.constant(t)),
-        ),
-        async (text) => {
-          const fragment = text.startsWith('#design=')
-            ? text
-            : await encodeDesignFragment(text).catch(() => text);
-          tally.add(await linkCase(fragment), fragment.slice(0, 60));
-        },
-      ),
+      fc.asyncProperty(fc.oneof(mutated(links), mutated(DESIGNS)), async (text) => {
+        const fragment = text.startsWith('#design=')
+          ? text
+          : await encodeDesignFragment(text).catch(() => text);
+        tally.add(await linkCase(fragment), fragment.slice(0, 60));
+      }),
       { seed: 1603, numRuns: RUNS },
     );
     report('share links', tally);

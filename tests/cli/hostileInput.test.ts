@@ -143,20 +143,10 @@ describe('hostile names', () => {
     });
 
   it('an input called __proto__ is driven: the same truth table and verdict as plain names', async () => {
-    const plain = await railwise(
-      'check',
-      file('plain.json', nand('A', 'B', 'Y', 'n1')),
-      '--json',
-      '--power',
-      '--sizing',
-    );
-    const odd = await railwise(
-      'check',
-      file('odd.json', nand('__proto__', 'constructor', 'toString', 'hasOwnProperty')),
-      '--json',
-      '--power',
-      '--sizing',
-    );
+    const checked = (name: string, text: string) =>
+      railwise('check', file(name, text), '--json', '--power', '--sizing');
+    const plain = await checked('plain.json', nand('A', 'B', 'Y', 'n1'));
+    const odd = await checked('odd.json', nand('__proto__', 'constructor', 'toString', 'hasOwnProperty'));
     expect(odd.status).toBe(plain.status);
     type Body = {
       vectors: { inputs: Record<string, number>; outputs: Record<string, string> }[];

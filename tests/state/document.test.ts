@@ -4,21 +4,7 @@ import { parseDesignFile, serializeDesign } from '../../src/core/format/designFi
 import { STARTERS } from '../../src/core/starters/index.ts';
 import { resetStore, selectDevices, selectNets, store } from '../../src/state/store.ts';
 import { AUTOSAVE_KEY, RESCUE_KEY, openingDone, restoreAutosave } from '../../src/app/autosave.ts';
-
-/** A Storage in memory, as the browser's would behave. */
-function memoryStorage(): Storage {
-  const data = new Map<string, string>();
-  return {
-    get length() {
-      return data.size;
-    },
-    clear: () => data.clear(),
-    getItem: (k) => data.get(k) ?? null,
-    key: (i) => [...data.keys()][i] ?? null,
-    removeItem: (k) => void data.delete(k),
-    setItem: (k, v) => void data.set(k, String(v)),
-  };
-}
+import { memoryStorage } from '../memoryStorage.ts';
 
 describe('the document and its derived design', () => {
   const nand2 = STARTERS.find((s) => s.id === 'nand2')!.design;
