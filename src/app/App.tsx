@@ -13,6 +13,7 @@ import { MessageBar } from './MessageBar.tsx';
 import { HelpOverlay } from './HelpOverlay.tsx';
 import { AboutBox } from './AboutBox.tsx';
 import { CellChooser } from './CellChooser.tsx';
+import { RecoveryOffer } from './RecoveryOffer.tsx';
 import { handleKey } from './keyboard.ts';
 import { commandById } from './commands.ts';
 import { OPEN_ACCEPT, OPEN_INPUT_ID, openFile } from './files.ts';
@@ -68,6 +69,7 @@ export function App() {
       {overlay === 'help' ? <HelpOverlay /> : null}
       {overlay === 'about' ? <AboutBox /> : null}
       <CellChooser />
+      <RecoveryOffer />
     </div>
   );
 }

@@ -8,6 +8,7 @@ import type { Sheet } from '../core/sheet/types.ts';
 import { sheetToNetlist, type SheetIssue } from '../core/sheet/toNetlist.ts';
 import { autoPlace } from '../core/sheet/autoPlace.ts';
 import { samePlainData } from '../core/model/plainData.ts';
+import { nameRecord } from '../core/model/records.ts';
 
 export interface SheetDocument {
   readonly name: string;
@@ -46,7 +47,7 @@ export interface DerivedDesign {
  */
 export function deriveDesign(doc: SheetDocument, before: Design | null = null): DerivedDesign {
   const d = sheetToNetlist(doc.sheet, doc.name);
-  const deviceParts: Record<string, string> = {};
+  const deviceParts = nameRecord<string>();
   for (const [partId, device] of Object.entries(d.partDevices)) deviceParts[device] ??= partId;
   const design: Design = {
     name: doc.name,

@@ -4,6 +4,7 @@
  * workers or the page.
  */
 import { DEFAULT_MAX_INPUTS, expressionNames } from '../core/analysis/check.ts';
+import { nameRecord } from '../core/model/records.ts';
 import { analyseCell } from '../core/power/cellAnalysis.ts';
 import { sizingReport } from '../core/sizing/sizingReport.ts';
 import { expressionProblem } from '../core/view/expectation.ts';
@@ -35,7 +36,7 @@ export function usableExpectations(cell: CellInput): {
 } {
   const { outputs } = cell.netlist;
   const names = expressionNames(cell.netlist);
-  const expectations: Record<string, string> = {};
+  const expectations = nameRecord<string>(); // an output may be called __proto__
   const notes: string[] = [];
   for (const [output, text] of Object.entries(cell.expectations)) {
     const problem = outputs.includes(output)

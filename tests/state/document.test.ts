@@ -3,22 +3,8 @@ import { deriveDesign, documentFromDesign } from '../../src/state/document.ts';
 import { parseDesignFile, serializeDesign } from '../../src/core/format/designFile.ts';
 import { STARTERS } from '../../src/core/starters/index.ts';
 import { resetStore, selectDevices, selectNets, store } from '../../src/state/store.ts';
-import { AUTOSAVE_KEY, RESCUE_KEY, restoreAutosave } from '../../src/app/autosave.ts';
-
-/** A Storage in memory, as the browser's would behave. */
-function memoryStorage(): Storage {
-  const data = new Map<string, string>();
-  return {
-    get length() {
-      return data.size;
-    },
-    clear: () => data.clear(),
-    getItem: (k) => data.get(k) ?? null,
-    key: (i) => [...data.keys()][i] ?? null,
-    removeItem: (k) => void data.delete(k),
-    setItem: (k, v) => void data.set(k, String(v)),
-  };
-}
+import { AUTOSAVE_KEY, RESCUE_KEY, openingDone, restoreAutosave } from '../../src/app/autosave.ts';
+import { memoryStorage } from '../memoryStorage.ts';
 
 describe('the document and its derived design', () => {
   const nand2 = STARTERS.find((s) => s.id === 'nand2')!.design;
@@ -41,7 +27,9 @@ describe('the document and its derived design', () => {
     expect(restoreAutosave(storage)).toEqual({ design: null, problem: null });
     const { design } = deriveDesign(documentFromDesign(nand2));
     storage.setItem(AUTOSAVE_KEY, serializeDesign(design));
-    expect(restoreAutosave(storage).design?.sheet).toEqual(design.sheet);
+    const restored = restoreAutosave(storage);
+    expect(restored.design?.sheet).toEqual(design.sheet);
+    openingDone(restored.opening, storage); // the page showed it: the next start is a fresh one
     storage.setItem(AUTOSAVE_KEY, '{"format": "railwise-design", "version": 1, "name": 3');
     const bad = restoreAutosave(storage);
     expect(bad.design).toBeNull();

@@ -1,8 +1,9 @@
 import { compile, type CompiledNetlist } from '../compile/compile.ts';
 import { evaluateExpression, type ExpectedValue } from '../expect/evaluate.ts';
 import { expressionNames } from '../expect/names.ts';
-import { ExpressionError, parseExpression, type Expr } from '../expect/parse.ts';
+import { ExpressionError, parseExpectation, type Expr } from '../expect/parse.ts';
 import type { Design, InputValue, InputVector } from '../model/design.ts';
+import { recordOf } from '../model/records.ts';
 import type { Netlist } from '../model/netlist.ts';
 import { DEFAULT_TECHNOLOGY, type Technology } from '../model/technology.ts';
 import { levelName } from '../solver/levels.ts';
@@ -31,6 +32,12 @@ export interface CheckOptions {
   readonly simulator?: Simulator;
   /** Further readers of each solved vector (power counters, level strips): one solve feeds all. */
   readonly observers?: readonly SolveObserver[];
+  /**
+   * Rows go here as they are found and are not kept, so a 65,536-vector sweep never holds its rows:
+   * the report then has no rows and only the structural findings, while its summary still counts
+   * every finding.
+   */
+  readonly onRow?: (row: VectorReport, index: number) => void;
 }
 
 export const FINDING_KINDS: readonly FindingKind[] = [
@@ -61,6 +68,8 @@ class Checker implements SolveObserver {
   private readonly expectations: [number, Expr][];
   /** Some expected function names an output (its held value). */
   private readonly refersToHeld: boolean;
+  /** The last row made: the held values of the next step in a sequence (rows may be streamed). */
+  private previous: VectorReport | undefined;
 
   constructor(
     readonly netlist: Netlist,
@@ -71,21 +80,26 @@ class Checker implements SolveObserver {
     this.simulator =
       options.simulator ?? new Simulator(compile(netlist, options.technology ?? DEFAULT_TECHNOLOGY));
     this.compiled = this.simulator.compiled;
-    this.expectations = Object.entries(options.expectations ?? {}).map(([output, text]) => {
-      const n = this.compiled.netIndex.get(output);
-      if (n === undefined || !netlist.outputs.includes(output)) {
-        throw new ExpressionError(`'${output}' is not an output`, `${output} = ${text}`, 0);
-      }
-      return [n, parseExpression(text, expressionNames(netlist))];
-    });
+    this.expectations = parsedExpectations(netlist, options.expectations).map(([output, e]) => [
+      this.compiled.netIndex.get(output) as number,
+      e,
+    ]);
     const outputs = new Set(netlist.outputs);
     this.refersToHeld = this.expectations.some(([, e]) => namesIn(e).some((name) => outputs.has(name)));
   }
 
+  /** Rows handed to `onRow` rather than kept, and their findings counted by kind. */
+  private readonly streamed = { rows: 0, counts: summarize(0, []) as Record<string, number> };
+
   add(r: SolveResult, index: number): void {
     // In a sequence an output's held value is its level at the previous step; a sweep has none.
-    const held = this.mode === 'steps' ? this.rows[index - 1] : undefined;
-    this.rows.push(this.vectorReport(r, index, held));
+    const held = this.mode === 'steps' && index > 0 ? this.previous : undefined;
+    const row = this.vectorReport(r, index, held);
+    this.previous = row;
+    if (this.options.onRow === undefined) return void this.rows.push(row);
+    this.streamed.rows++;
+    countFindings(this.streamed.counts, row.findings);
+    this.options.onRow(row, index);
   }
 
   /** Every reader of this pass: the checker's own rows first. */
@@ -100,7 +114,9 @@ class Checker implements SolveObserver {
   vectorReport(r: SolveResult, index: number, held?: VectorReport): VectorReport {
     const { netlist } = this;
     const c = this.compiled;
-    const values = this.refersToHeld ? { ...heldValues(netlist.outputs, held), ...r.inputs } : r.inputs;
+    const values = this.refersToHeld
+      ? recordOf([...Object.entries(heldValues(netlist.outputs, held)), ...Object.entries(r.inputs)])
+      : r.inputs;
     const expected = new Map<number, ExpectedValue>(
       this.expectations.map(([n, e]) => [n, evaluateExpression(e, values)]),
     );
@@ -138,13 +154,14 @@ class Checker implements SolveObserver {
 
   report(kind: 'vectors' | 'steps', rows: VectorReport[], notes: string[]): CheckReport {
     const findings = [...structuralFindings(this.compiled), ...rows.flatMap((v) => v.findings)];
+    const summary = countFindings({ ...this.streamed.counts }, findings);
     return {
       cell: this.netlist.name,
       inputs: this.netlist.inputs,
       outputs: this.netlist.outputs,
       [kind]: rows,
       findings,
-      summary: summarize(rows.length, findings),
+      summary: { ...summary, vectors: rows.length + this.streamed.rows },
       notes,
     };
   }
@@ -152,7 +169,7 @@ class Checker implements SolveObserver {
 
 /** Each output's level in the previous report, read as an input value (X where not 0 or 1). */
 function heldValues(outputs: readonly string[], held: VectorReport | undefined): Record<string, InputValue> {
-  return Object.fromEntries(
+  return recordOf(
     outputs.map((o) => {
       const level = held?.outputs[o];
       return [o, level === '0' || level === '1' ? level : 'X'];
@@ -173,12 +190,42 @@ function namesIn(root: Expr): string[] {
   return names;
 }
 
+/**
+ * The expected functions parsed against the names they may read (inputs, and outputs for held
+ * values), by output; throws ExpressionError
+ * naming the output for one that is not an output or does not parse. A check refuses these before
+ * it solves anything (`refusalBeforeCheck`).
+ */
+function parsedExpectations(
+  netlist: Netlist,
+  expectations: Readonly<Record<string, string>> = {},
+): [string, Expr][] {
+  return Object.entries(expectations).map(([output, text]) => {
+    if (!netlist.outputs.includes(output)) throw new ExpressionError('not an output', text, 0, output);
+    return [output, parseExpectation(output, text, expressionNames(netlist))];
+  });
+}
+
+/**
+ * Throws what a check with these options would refuse before solving a vector (an expected function
+ * that does not parse, too many inputs for a sweep), so a caller can refuse a cell before it starts
+ * writing the cell's report.
+ */
+export function refusalBeforeCheck(netlist: Netlist, options: CheckOptions, sweep: boolean): void {
+  parsedExpectations(netlist, options.expectations);
+  if (sweep) checkSweepLimit(netlist.inputs, options.maxInputs);
+}
+
 export function summarize(vectors: number, findings: readonly Finding[]): Summary {
   const counts: Record<string, number> = { vectors, errors: 0, warnings: 0 };
   for (const k of FINDING_KINDS) counts[k] = 0;
+  return countFindings(counts, findings);
+}
+
+function countFindings(counts: Record<string, number>, findings: readonly Finding[]): Summary {
   for (const f of findings) {
     counts[f.severity === 'error' ? 'errors' : 'warnings']++;
-    counts[f.kind]++;
+    counts[f.kind] = (counts[f.kind] ?? 0) + 1;
   }
   return counts as Summary;
 }

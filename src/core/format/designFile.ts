@@ -6,6 +6,8 @@ import type { z } from 'zod';
 import type { Design } from '../model/design.ts';
 import { CURRENT_DESIGN_VERSION, documentVersion, migrateToCurrent, type RawDocument } from './migrations.ts';
 import { DESIGN_FORMAT_TAG, designFileV1Schema } from './schema.ts';
+import { netlistProblem } from './designChecks.ts';
+import { printable } from './printable.ts';
 
 export { CURRENT_DESIGN_VERSION } from './migrations.ts';
 
@@ -19,8 +21,11 @@ export class DesignFileError extends Error {
     /** 1-based line of a JSON syntax error, when known. */
     readonly line?: number,
   ) {
+    // Names and JSON excerpts in the detail come from the file: shown escaped, never raw.
     super(
-      `${file}${line === undefined ? '' : `:${line}`}: ${field === '' ? '' : `field ${field}: `}${detail}`,
+      printable(
+        `${file}${line === undefined ? '' : `:${line}`}: ${field === '' ? '' : `field ${field}: `}${detail}`,
+      ),
     );
   }
 }
@@ -45,6 +50,12 @@ export function parseDesignFile(text: string, fileName: string): Design {
   const result = designFileV1Schema.safeParse(migrateToCurrent(raw, version));
   if (!result.success) throw schemaError(fileName, raw, version, result.error);
   const { name, technology, netlist, expectations, sequences, sheet, notes } = result.data;
+  const problem = netlistProblem(netlist);
+  if (problem !== null) {
+    // A migrated bare netlist has its lists at the top of the file.
+    const field = version === 0 ? problem.field.replace(/^netlist\./, '') : problem.field;
+    throw new DesignFileError(fileName, field, problem.message);
+  }
   return {
     name,
     technology,

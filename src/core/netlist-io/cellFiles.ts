@@ -24,6 +24,8 @@ export const DESIGN_EXTENSIONS: readonly string[] = ['.json'];
 /** One cell, ready to check; plain data so it can cross to a worker thread. */
 export interface CellJob {
   readonly file: string;
+  /** A design file names its fields (`expectations.Y`); a netlist its lines and flags. */
+  readonly source: 'design' | 'netlist';
   readonly cell: string;
   readonly netlist: Netlist;
   readonly technology: Technology;
@@ -119,6 +121,7 @@ function designCells(text: string, file: string, options: LoadOptions): FileCell
     return { cells: [], library: false, available: [cell] };
   const job: CellJob = {
     file,
+    source: 'design',
     cell,
     netlist: design.netlist,
     technology: technologyOf(design.technology, options.vdd),
@@ -143,6 +146,7 @@ function spiceCells(text: string, file: string, options: LoadOptions): FileCells
   for (const c of imported.cells) {
     const job: CellJob = {
       file,
+      source: 'netlist',
       cell: c.name,
       netlist: c.netlist,
       technology: Object.keys(c.models).length === 0 ? base : { ...base, models: c.models },
@@ -172,7 +176,8 @@ export function expectationProblem(job: CellJob): CellFailure | null {
     const line = job.expectationLines[output];
     const where =
       line === undefined ? `expected function for ${output}` : `${job.file}:${line}: expect ${output}`;
-    const base = { file: job.file, cell: job.cell, ...(line === undefined ? { field: 'expect' } : { line }) };
+    const field = job.source === 'design' ? `expectations.${output}` : 'expect';
+    const base = { file: job.file, cell: job.cell, ...(line === undefined ? { field } : { line }) };
     if (!job.netlist.outputs.includes(output))
       return {
         ...base,

@@ -10,6 +10,9 @@ import { flattenCell, type FlatCell, type FlattenContext, type FlatSource } from
 import type { Hierarchy } from './spiceHierarchy.ts';
 import { SpiceImportError } from './spiceErrors.ts';
 import { assignPins, PinError } from './pins.ts';
+import { restoreExportedNames } from './spiceRestore.ts';
+import { nameRecord, recordOf } from '../model/records.ts';
+import { unquoted } from '../format/printable.ts';
 
 export interface ImportedCell {
   readonly name: string;
@@ -64,8 +67,13 @@ export function buildCell(spec: CellSpec, ctx: CellContext): ImportedCell {
   netlist = applyPinDirectives(netlist, spec.body.directives, ctx.fileName);
   const { expectations, lines } = readExpectations(netlist, spec.body.directives, notes);
   const pinsNamed = spec.body.directives.some((d) => d.key === 'inputs' || d.key === 'outputs');
-  const models = Object.fromEntries(flat.models);
-  return { name: spec.name, netlist, expectations, expectationLines: lines, pinsNamed, models, notes };
+  const models = recordOf(flat.models);
+  const restored = restoreExportedNames(
+    { netlist, expectations, expectationLines: lines },
+    spec.body.directives,
+    notes,
+  );
+  return { name: restored.netlist.name, ...restored, pinsNamed, models, notes };
 }
 
 /** Rails in order of first appearance: named rails, then nets a `V` line holds. */
@@ -139,19 +147,30 @@ function inferPins(devices: readonly Device[], ports: readonly string[], flat: b
   return { inputs, outputs };
 }
 
+/**
+ * `inputs` and `outputs` lines of one cell apply together, so a net named in both is a pin that is
+ * driven and observed (a bidirectional pin), as our export writes it.
+ */
 function applyPinDirectives(netlist: Netlist, directives: readonly Directive[], fileName: string): Netlist {
-  let result = netlist;
-  for (const d of directives) {
-    if (d.key !== 'inputs' && d.key !== 'outputs') continue;
-    const names = d.value.split(/[\s,]+/).filter((n) => n !== '');
-    try {
-      result = assignPins(result, d.key === 'inputs' ? { inputs: names } : { outputs: names });
-    } catch (e) {
-      if (e instanceof PinError) throw new SpiceImportError(fileName, d.line, `${d.key}: ${e.message}`);
-      throw e;
-    }
+  const pins = directives.filter((d) => d.key === 'inputs' || d.key === 'outputs');
+  const listed = (key: 'inputs' | 'outputs'): string[] | undefined => {
+    const lines = pins.filter((d) => d.key === key);
+    return lines.length === 0
+      ? undefined
+      : lines.flatMap((d) => d.value.split(/[\s,]+/).filter((n) => n !== ''));
+  };
+  const [inputs, outputs] = [listed('inputs'), listed('outputs')];
+  try {
+    return assignPins(
+      netlist,
+      { ...(inputs === undefined ? {} : { inputs }), ...(outputs === undefined ? {} : { outputs }) },
+      { bidirectional: true },
+    );
+  } catch (e) {
+    if (!(e instanceof PinError)) throw e;
+    const line = pins.find((d) => d.key === e.field)?.line ?? pins[0]?.line ?? 1;
+    throw new SpiceImportError(fileName, line, `${e.field}: ${e.message}`);
   }
-  return result;
 }
 
 const KNOWN_DIRECTIVES = new Set([
@@ -162,6 +181,9 @@ const KNOWN_DIRECTIVES = new Set([
   'ground',
   'treat-as',
   'technology',
+  'name',
+  'implied-bulk',
+  'implied-ground',
 ]);
 
 function readExpectations(
@@ -169,8 +191,8 @@ function readExpectations(
   directives: readonly Directive[],
   notes: string[],
 ): { expectations: Record<string, string>; lines: Record<string, number> } {
-  const expectations: Record<string, string> = {};
-  const lines: Record<string, number> = {};
+  const expectations = nameRecord<string>(); // an output may be called __proto__
+  const lines = nameRecord<number>();
   for (const d of directives) {
     if (!KNOWN_DIRECTIVES.has(d.key))
       notes.push(`line ${d.line}: unknown railwise directive "${d.key}" ignored`);
@@ -182,7 +204,9 @@ function readExpectations(
       continue;
     }
     const net = netlist.outputs.find((o) => o.toLowerCase() === output.toLowerCase()) ?? output;
-    expectations[net] = d.value.slice(eq + 1).trim();
+    const text = d.value.slice(eq + 1).trim();
+    // Our export writes an expression that would not read back as it is as a JSON string.
+    expectations[net] = (text.startsWith('"') ? unquoted(text) : null) ?? text;
     lines[net] = d.line;
   }
   return { expectations, lines };

@@ -237,6 +237,11 @@ function openSubckt(state: ParseState, t: readonly string[], line: number, fail:
   if (ports.length < rest.length)
     state.file.notes.push(`line ${line}: parameters of .subckt ${name} ignored`);
   const sub: Subckt = { name: name as string, line, ports, elements: [], directives: [] };
+  // A port named twice would make one net two pins: this cell cannot be read, the others still can.
+  const seen = new Set<string>();
+  const twice = ports.find((p) => seen.size === seen.add(p.toLowerCase()).size);
+  if (twice !== undefined)
+    sub.error = new SpiceImportError(state.fileName, line, `.subckt ${name}: port ${twice} is listed twice`);
   state.file.subckts.push(sub);
   state.file.subcktByName.set(lower, sub);
   state.current = sub;
