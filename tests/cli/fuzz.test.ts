@@ -47,8 +47,9 @@ DESIGNS.push(serializeDesign({ ...starterById('nand2')!.design, netlist: hostile
 function exportsBack(text: string, file: string): Case {
   for (const c of cellsFromText(text, file).cells) {
     if (!('job' in c)) continue;
-    const { netlist, expectations } = c.job;
-    const again = importSpice(exportSpice(netlist, DEFAULT_TECHNOLOGY, { expectations }), 'again.sp');
+    const { netlist, expectations, technology } = c.job;
+    // The cell's own technology: it holds the model cards its transistors name.
+    const again = importSpice(exportSpice(netlist, technology, { expectations }), 'again.sp');
     const back = again.cells[0];
     if (again.cells.length !== 1 || !isDeepStrictEqual(back?.netlist, netlist))
       return { outcome: 'bad', why: `export → import changed ${c.job.cell}` };

@@ -197,7 +197,7 @@ describe('export → import keeps the level-1 values', () => {
     expect(text).toContain('.model hvt nmos (level=1 vto=0.65 kp=98.5u)');
     expect(text).toContain('.model lvt_p pmos (level=1 vto=-0.25 lambda=0.2)');
     const back = job(text);
-    expect(back.netlist.devices.map((d) => d.name)).toEqual(['MP1', 'MN1', 'MN2']);
+    expect(back.netlist.devices.map((d) => d.name)).toEqual(['P1', 'N1', 'N2']);
     expect(
       back.netlist.devices.map((d) => (d.kind === 'nmos' || d.kind === 'pmos' ? d.model : null)),
     ).toEqual(['lvt_p', 'hvt', undefined]);
