@@ -1,18 +1,59 @@
 import { Circle, Layer, Line, Rect } from 'react-konva';
-import { useStore } from '../state/store.ts';
+import { useStore, type ContactMarks } from '../state/store.ts';
+import type { Point } from '../core/sheet/types.ts';
 import { normalizeRect, partBounds } from '../core/sheet/geometry.ts';
 import { makePart } from '../core/sheet/edits.ts';
 import { PART_VIEWS } from './devices/index.ts';
 import { SHEET_THEME, WIRE_STROKE } from './theme.ts';
 
-/** Selection outlines and the gesture in progress: box, wire preview, part ghost. */
+/**
+ * Where the last edit connected on purpose (a ring with a plus) or was refused because it would have
+ * joined or cut nets (a ring with a cross): shapes, so they read without colour.
+ */
+function ContactMark({ at, kind }: { at: Point; kind: ContactMarks['kind'] }) {
+  const colour = kind === 'made' ? SHEET_THEME.selected : SHEET_THEME.refused;
+  const r = 0.55;
+  const arm =
+    kind === 'made'
+      ? [0, -0.3, 0, 0.3, -0.3, 0, 0.3, 0]
+      : [-0.25, -0.25, 0.25, 0.25, -0.25, 0.25, 0.25, -0.25];
+  return (
+    <>
+      <Circle
+        x={at.x}
+        y={at.y}
+        radius={r}
+        stroke={colour}
+        strokeWidth={0.1}
+        dash={kind === 'made' ? [] : [0.2, 0.12]}
+      />
+      <Line
+        points={[at.x + arm[0]!, at.y + arm[1]!, at.x + arm[2]!, at.y + arm[3]!]}
+        stroke={colour}
+        strokeWidth={0.1}
+      />
+      <Line
+        points={[at.x + arm[4]!, at.y + arm[5]!, at.x + arm[6]!, at.y + arm[7]!]}
+        stroke={colour}
+        strokeWidth={0.1}
+      />
+    </>
+  );
+}
+
+/** Selection outlines, contact marks and the gesture in progress: box, wire preview, part ghost. */
 export function InteractionLayer() {
   const gesture = useStore((s) => s.gesture);
   const sheet = useStore((s) => s.doc.sheet);
   const selected = useStore((s) => s.selection.selected);
-  const outlines = sheet.parts.filter((p) => selected.parts.includes(p.id)).map(partBounds);
+  const marks = useStore((s) => s.contactMarks);
+  const chosen = new Set(selected.parts);
+  const outlines = chosen.size === 0 ? [] : sheet.parts.filter((p) => chosen.has(p.id)).map(partBounds);
   return (
     <Layer listening={false}>
+      {marks?.at.map((p, i) => (
+        <ContactMark key={`mark-${i}`} at={p} kind={marks.kind} />
+      ))}
       {outlines.map((b, i) => (
         <Rect
           key={i}

@@ -37,9 +37,20 @@ export type Gesture =
   | { readonly type: 'ghost'; readonly kind: PartKind; readonly at: Point }
   | { readonly type: 'pin'; readonly at: Point };
 
+/**
+ * A line for the designer under the sheet. Errors stay until dismissed (they say what was left
+ * unchanged); warnings and information are about the document as it was, so the next change of the
+ * document clears them.
+ */
 export interface Message {
-  readonly kind: 'error' | 'info';
+  readonly kind: 'error' | 'warning' | 'info';
   readonly text: string;
+}
+
+/** Where an edit made contacts on purpose, or would have made or cut them and was refused. */
+export interface ContactMarks {
+  readonly kind: 'made' | 'refused';
+  readonly at: readonly Point[];
 }
 
 /** The cells of an imported library, waiting for the designer to pick one (nothing loaded yet). */
@@ -66,6 +77,8 @@ export interface RailwiseState {
   readonly gesture: Gesture | null;
   readonly clipboard: Clip | null;
   readonly message: Message | null;
+  /** Drawn on the sheet until the document next changes (docs/semantics.md §1). */
+  readonly contactMarks: ContactMarks | null;
   readonly overlay: 'help' | 'about' | null;
   /** Size of the sheet area in pixels, kept by the canvas for fit-to-view. */
   readonly screen: { readonly width: number; readonly height: number };
@@ -95,6 +108,7 @@ function initialState(doc: SheetDocument): RailwiseState {
     gesture: null,
     clipboard: null,
     message: null,
+    contactMarks: null,
     overlay: null,
     screen: { width: 800, height: 600 },
     simulation: INITIAL_SIMULATION,
@@ -130,6 +144,8 @@ function applyDoc(doc: SheetDocument, history: HistoryState): void {
     revision,
     netlistRevision: circuitChanged ? revision : s.netlistRevision,
     selection: { ...s.selection, selected: pruneSelection(s.selection.selected, doc.sheet) },
+    message: s.message?.kind === 'error' ? s.message : null,
+    contactMarks: null,
   });
 }
 
@@ -260,7 +276,11 @@ export function showMessage(kind: Message['kind'], text: string): void {
 }
 
 export function dismissMessage(): void {
-  store.setState({ message: null });
+  store.setState({ message: null, contactMarks: null });
+}
+
+export function setContactMarks(marks: ContactMarks | null): void {
+  store.setState({ contactMarks: marks });
 }
 
 export function setOverlay(overlay: RailwiseState['overlay']): void {
