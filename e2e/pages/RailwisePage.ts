@@ -28,7 +28,7 @@ export class RailwisePage {
   }
 
   async newSheet(): Promise<void> {
-    await this.toolbarButton('New empty sheet').click();
+    await this.toolbarButton('New').click();
     await this.dismissMessage();
   }
 
