@@ -1,10 +1,14 @@
 /**
- * A small window API for the end-to-end tests (and curious designers in the console): read the
- * store and convert sheet points to page coordinates so tests can click real pixels. It only
- * reads state and calls the same actions the UI calls.
+ * A small window API for the end-to-end tests and the browser benchmark (and curious designers in
+ * the console): read the store, convert sheet points to page coordinates so tests can click real
+ * pixels, and draw a frame on demand. It only reads state and calls the same actions the UI calls.
  */
-import { sheetToScreen } from '../state/viewport.ts';
-import { store, undo, redo } from '../state/store.ts';
+import { flushSync } from 'react-dom';
+import { sheetToScreen, type Viewport } from '../state/viewport.ts';
+import { setViewport, store, undo, redo } from '../state/store.ts';
+import { toggleInput } from '../state/simulation.ts';
+import { AUTO_SWEEP_VECTORS } from '../state/analysis.ts';
+import { currentStage } from '../editor/stageRef.ts';
 import type { Point } from '../core/sheet/types.ts';
 import { AUTOSAVE_KEY } from './autosave.ts';
 
@@ -18,12 +22,35 @@ export interface RailwiseTestApi {
   undo: typeof undo;
   redo: typeof redo;
   autosaveKey: string;
+  /** Runs an action, renders what it changed and draws every layer now: the work of one frame. */
+  frame: (action: () => void) => void;
+  setViewport: (v: Viewport) => void;
+  toggleInput: (name: string) => void;
+  /** True once the live vector is solved and the check a cell gets by itself has reported. */
+  settled: () => boolean;
 }
 
 declare global {
   interface Window {
     __railwise?: RailwiseTestApi;
   }
+}
+
+function drawFrame(action: () => void): void {
+  flushSync(action);
+  const stage = currentStage();
+  if (!stage) return;
+  stage.draw();
+  // Reading a pixel makes the browser rasterise what was drawn, so the time includes it.
+  for (const layer of stage.getLayers()) layer.getContext().getImageData(0, 0, 1, 1);
+}
+
+function isSettled(): boolean {
+  const s = store.getState();
+  const sim = s.simulation;
+  if (sim.live === null && sim.liveError === null) return false;
+  const checkedByItself = 2 ** s.design.netlist.inputs.length <= AUTO_SWEEP_VECTORS;
+  return !checkedByItself || sim.sweep.status === 'done' || sim.sweep.status === 'failed';
 }
 
 export function installTestApi(): void {
@@ -40,5 +67,9 @@ export function installTestApi(): void {
     undo,
     redo,
     autosaveKey: AUTOSAVE_KEY,
+    frame: drawFrame,
+    setViewport,
+    toggleInput,
+    settled: isSettled,
   };
 }
