@@ -121,9 +121,9 @@ function pinsTouching(partId: string): Point[] {
   const part = doc.sheet.parts.find((p) => p.id === partId);
   if (part === undefined) return [];
   const count = new Map<string, number>();
-  for (const net of [...Object.values(geometry.pinNets), ...Object.values(geometry.wireNets)])
+  for (const net of [...geometry.pinNets.values(), ...Object.values(geometry.wireNets)])
     count.set(net, (count.get(net) ?? 0) + 1);
   return pinPositions(part)
-    .filter((pin) => (count.get(geometry.pinNets[`${partId}.${pin.pin}`] ?? '') ?? 0) > 1)
+    .filter((pin) => (count.get(geometry.pinNets.get(`${partId}.${pin.pin}`) ?? '') ?? 0) > 1)
     .map((pin) => ({ x: pin.x, y: pin.y }));
 }

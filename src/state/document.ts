@@ -24,7 +24,7 @@ export interface SheetGeometry {
   /** Net name of every wire, by wire id. */
   readonly wireNets: Readonly<Record<string, string>>;
   /** Net name of every part pin, keyed `partId.pin` (pins: gate, drain, source, a, b, net). */
-  readonly pinNets: Readonly<Record<string, string>>;
+  readonly pinNets: ReadonlyMap<string, string>;
   /** Device name of every device part, by part id. */
   readonly partDevices: Readonly<Record<string, string>>;
   /** The inverse: part id of every device name. */

@@ -242,9 +242,7 @@ export function selectNets(names: readonly string[]): void {
   const { geometry } = store.getState();
   const nets = new Set(names);
   const wires = Object.entries(geometry.wireNets).flatMap(([id, net]) => (nets.has(net) ? [id] : []));
-  const parts = Object.entries(geometry.pinNets).flatMap(([key, net]) =>
-    nets.has(net) ? [key.split('.')[0]!] : [],
-  );
+  const parts = [...geometry.pinNets].flatMap(([key, net]) => (nets.has(net) ? [key.split('.')[0]!] : []));
   setSelection({ parts: [...new Set(parts)], wires });
 }
 

@@ -5,7 +5,7 @@
 import type { RailwiseState } from '../../src/state/store.ts';
 
 export function pinGroups(state: RailwiseState): Map<string, string> {
-  return new Map(Object.entries(state.geometry.pinNets));
+  return new Map(state.geometry.pinNets);
 }
 
 export function sameGroupsOnCommonPins(

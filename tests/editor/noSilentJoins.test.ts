@@ -158,8 +158,8 @@ describe('Duplicate (Ctrl+D) and paste (Ctrl+C, Ctrl+V)', () => {
     const copy = s.doc.sheet.parts.at(-1)!;
     expect(copy.name).toBe('P1');
     expect(s.doc.sheet.parts.slice(0, -1).some((p) => overlaps(partBounds(p), partBounds(copy)))).toBe(false);
-    const ownNets = ['gate', 'drain', 'source'].map((pin) => s.geometry.pinNets[`${copy.id}.${pin}`]);
-    const elsewhere = Object.entries(s.geometry.pinNets).filter(([k]) => !k.startsWith(`${copy.id}.`));
+    const ownNets = ['gate', 'drain', 'source'].map((pin) => s.geometry.pinNets.get(`${copy.id}.${pin}`));
+    const elsewhere = [...s.geometry.pinNets].filter(([k]) => !k.startsWith(`${copy.id}.`));
     for (const net of ownNets) expect(elsewhere.some(([, n]) => n === net)).toBe(false);
     expect(s.design.netlist.devices.slice(0, before.length)).toEqual(before);
   });
@@ -192,7 +192,7 @@ describe('placing, wiring, naming, cutting and deleting', () => {
     const s = ed.state();
     const label = s.doc.sheet.parts.at(-1)!;
     expect(s.contactMarks).toEqual({ kind: 'made', at: [{ x: 1, y: 2 }] });
-    expect(s.geometry.pinNets[`${label.id}.net`]).toBe(s.geometry.wireNets.w2);
+    expect(s.geometry.pinNets.get(`${label.id}.net`)).toBe(s.geometry.wireNets.w2);
     // Two labels now name one net: the sheet says so (a drawing problem shown under the sheet).
     expect(s.issues.some((i) => i.message.includes(label.name) && i.message.includes('Q'))).toBe(true);
   });

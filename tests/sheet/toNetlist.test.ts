@@ -16,8 +16,8 @@ describe('sheetToNetlist', () => {
   it('maps every wire and pin to its net and every device part to its device', () => {
     const d = sheetToNetlist(drawnInverter());
     expect(d.wireNets).toEqual({ w1: 'Y', w2: 'Y', w3: 'A', w4: 'A' });
-    expect(d.pinNets['p1.gate']).toBe('A');
-    expect(d.pinNets['p2.source']).toBe('GND');
+    expect(d.pinNets.get('p1.gate')).toBe('A');
+    expect(d.pinNets.get('p2.source')).toBe('GND');
     expect(d.partDevices).toEqual({ p1: 'P1', p2: 'N1' });
   });
 

@@ -9,7 +9,7 @@ import { sheetConnectivity, type SheetConnectivity } from './connectivity.ts';
 
 /** Net names by pin (`partId.pin`) and by wire id, as `sheetToNetlist` reports them. */
 export interface NetsOfItems {
-  readonly pinNets: Readonly<Record<string, string>>;
+  readonly pinNets: ReadonlyMap<string, string>;
   readonly wireNets: Readonly<Record<string, string>>;
 }
 
@@ -40,7 +40,7 @@ export interface NetVerdict {
 const itemKey = (ref: ItemRef): string => `${ref.type}:${ref.key}`;
 
 function netOf(nets: NetsOfItems, ref: ItemRef): string | undefined {
-  return ref.type === 'pin' ? nets.pinNets[ref.key] : nets.wireNets[ref.key];
+  return ref.type === 'pin' ? nets.pinNets.get(ref.key) : nets.wireNets[ref.key];
 }
 
 /** For every item present on both sides: which nets each old net maps to, and back. */
@@ -55,7 +55,7 @@ function partitionShift(
     (forward.get(b) ?? forward.set(b, new Set()).get(b)!).add(a);
     (backward.get(a) ?? backward.set(a, new Set()).get(a)!).add(b);
   };
-  for (const key in before.pinNets) pair(before.pinNets[key], after.pinNets[key]);
+  for (const [key, net] of before.pinNets) pair(net, after.pinNets.get(key));
   for (const key in before.wireNets) pair(before.wireNets[key], after.wireNets[key]);
   const joined = new Set([...backward].filter(([, s]) => s.size > 1).map(([a]) => a));
   const split = new Set([...forward].filter(([, s]) => s.size > 1).map(([b]) => b));

@@ -22,26 +22,36 @@ export interface SpotIndex {
   readonly covers: readonly (readonly Cover[])[];
 }
 
-const byXY = (pts: readonly Point[]) => (a: number, b: number) =>
-  pts[a]!.x - pts[b]!.x || pts[a]!.y - pts[b]!.y;
-const byYX = (pts: readonly Point[]) => (a: number, b: number) =>
-  pts[a]!.y - pts[b]!.y || pts[a]!.x - pts[b]!.x;
-
-function sortedOrder(points: readonly Point[], compare: (a: number, b: number) => number): Int32Array {
-  return Int32Array.from(points.keys()).sort(compare);
+/** Coordinates as two typed arrays: sorting and grouping read numbers, not objects. */
+interface Coords {
+  readonly x: Float64Array;
+  readonly y: Float64Array;
 }
 
-/** Ranges of a sorted order that share one coordinate (`across`): a row or a column of points. */
-function linesOf(
-  points: readonly Point[],
-  order: Int32Array,
-  across: 'x' | 'y',
-): Map<number, [number, number]> {
+function coordsOf(points: readonly Point[]): Coords {
+  const x = new Float64Array(points.length);
+  const y = new Float64Array(points.length);
+  points.forEach((p, i) => {
+    x[i] = p.x;
+    y[i] = p.y;
+  });
+  return { x, y };
+}
+
+/** Point indices sorted by `first`, then `second`. */
+function sortedOrder(first: Float64Array, second: Float64Array): Int32Array {
+  const order = new Int32Array(first.length);
+  for (let i = 0; i < order.length; i++) order[i] = i;
+  return order.sort((a, b) => first[a]! - first[b]! || second[a]! - second[b]!);
+}
+
+/** Ranges of a sorted order that share one coordinate: a row or a column of points. */
+function linesOf(across: Float64Array, order: Int32Array): Map<number, [number, number]> {
   const lines = new Map<number, [number, number]>();
   for (let i = 0; i < order.length;) {
-    const v = points[order[i]!]![across];
+    const v = across[order[i]!]!;
     let j = i + 1;
-    while (j < order.length && points[order[j]!]![across] === v) j++;
+    while (j < order.length && across[order[j]!] === v) j++;
     lines.set(v, [i, j]);
     i = j;
   }
@@ -49,41 +59,39 @@ function linesOf(
 }
 
 /** First position in order[from, to) whose coordinate `along` is ≥ v. */
-function lowerBound(
-  points: readonly Point[],
-  order: Int32Array,
-  along: 'x' | 'y',
-  [from, to]: [number, number],
-  v: number,
-): number {
+function lowerBound(along: Float64Array, order: Int32Array, [from, to]: [number, number], v: number): number {
   let lo = from;
   let hi = to;
   while (lo < hi) {
     const mid = (lo + hi) >> 1;
-    if (points[order[mid]!]![along] < v) lo = mid + 1;
+    if (along[order[mid]!]! < v) lo = mid + 1;
     else hi = mid;
   }
   return lo;
 }
 
-function numberSpots(points: readonly Point[], order: Int32Array): { spotOf: Int32Array; spots: Point[] } {
-  const spotOf = new Int32Array(points.length);
+function numberSpots(c: Coords, order: Int32Array): { spotOf: Int32Array; spots: Point[] } {
+  const spotOf = new Int32Array(order.length);
   const spots: Point[] = [];
-  let last: Point | null = null;
+  let [lx, ly] = [Number.NaN, Number.NaN];
   for (const q of order) {
-    const p = points[q]!;
-    if (last === null || last.x !== p.x || last.y !== p.y) spots.push((last = { x: p.x, y: p.y }));
+    const [x, y] = [c.x[q]!, c.y[q]!];
+    if (x !== lx || y !== ly) {
+      spots.push({ x, y });
+      [lx, ly] = [x, y];
+    }
     spotOf[q] = spots.length - 1;
   }
   return { spotOf, spots };
 }
 
 export function spotIndex(wires: readonly SheetWire[], points: readonly Point[]): SpotIndex {
-  const xy = sortedOrder(points, byXY(points));
-  const yx = sortedOrder(points, byYX(points));
-  const { spotOf, spots } = numberSpots(points, xy);
-  const rows = linesOf(points, yx, 'y');
-  const columns = linesOf(points, xy, 'x');
+  const c = coordsOf(points);
+  const xy = sortedOrder(c.x, c.y);
+  const yx = sortedOrder(c.y, c.x);
+  const { spotOf, spots } = numberSpots(c, xy);
+  const rows = linesOf(c.y, yx);
+  const columns = linesOf(c.x, xy);
   const covers: Cover[][] = spots.map(() => []);
   wires.forEach((wire, w) => {
     for (let i = 1; i < wire.points.length; i++) {
@@ -91,21 +99,19 @@ export function spotIndex(wires: readonly SheetWire[], points: readonly Point[])
       const b = wire.points[i]!;
       const horizontal = a.y === b.y;
       if (!horizontal && a.x !== b.x) continue; // not orthogonal: covers nothing
-      const [order, along, range] = horizontal
-        ? [yx, 'x' as const, rows.get(a.y)]
-        : [xy, 'y' as const, columns.get(a.x)];
+      const range = horizontal ? rows.get(a.y) : columns.get(a.x);
       if (range === undefined) continue;
-      const lo = Math.min(a[along], b[along]);
-      const hi = Math.max(a[along], b[along]);
+      const [order, along, from, to] = horizontal ? [yx, c.x, a.x, b.x] : [xy, c.y, a.y, b.y];
+      const [lo, hi] = from < to ? [from, to] : [to, from];
       let previous = -1;
-      for (let j = lowerBound(points, order, along, range, lo); j < range[1]; j++) {
+      for (let j = lowerBound(along, order, range, lo); j < range[1]; j++) {
         const q = order[j]!;
-        const v = points[q]![along];
+        const v = along[q]!;
         if (v > hi) break;
         const spot = spotOf[q]!;
         if (spot === previous) continue; // equal points are one spot
         previous = spot;
-        covers[spot]!.push({ wire: w, end: v === a[along] || v === b[along] });
+        covers[spot]!.push({ wire: w, end: v === from || v === to });
         if (lo === hi) break; // a segment of no length is one point, found once
       }
     }

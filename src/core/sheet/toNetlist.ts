@@ -19,8 +19,8 @@ export interface DerivedNetlist {
   readonly netlist: Netlist;
   /** Net of every wire, by wire id. */
   readonly wireNets: Readonly<Record<string, string>>;
-  /** Net of every pin, keyed `partId.pin`. */
-  readonly pinNets: Readonly<Record<string, string>>;
+  /** Net of every pin, keyed `partId.pin` (a map: a big sheet has tens of thousands of pins). */
+  readonly pinNets: ReadonlyMap<string, string>;
   /** Device name of every device part, by part id. */
   readonly partDevices: Readonly<Record<string, string>>;
   readonly junctions: readonly { readonly x: number; readonly y: number }[];
@@ -148,19 +148,20 @@ export function sheetToNetlist(sheet: Sheet, name = 'cell'): DerivedNetlist {
   const { groups, junctions, openEnds } = c;
   joinEqualNames(sheet, c);
   const nameOf = nameGroups(sheet, c, issues);
-  const pinNets = nameRecord<string>();
+  const pinNets = new Map<string, string>();
   const partDevices = nameRecord<string>();
   const found: Contributions = { devices: [], rails: [], inputs: [], outputs: [] };
   sheet.parts.forEach((part, i) => {
     const pins = partSpec(part.kind).pins;
-    const nets = new Map<string, string>();
-    pins.forEach((pin, k) => {
-      const net = nameOf(groups.find(c.firstPin[i]! + k));
-      nets.set(pin.name, net);
-      pinNets[`${part.id}.${pin.name}`] = net;
-    });
+    const first = c.firstPin[i]!;
+    for (let k = 0; k < pins.length; k++)
+      pinNets.set(`${part.id}.${pins[k]!.name}`, nameOf(groups.find(first + k)));
     if (isDevicePart(part.kind)) partDevices[part.id] = part.name;
-    contribute(part, (pin) => nets.get(pin) ?? unknownPin(part, pin), found);
+    const netOf = (pin: string): string => {
+      const k = pins.findIndex((p) => p.name === pin);
+      return k < 0 ? unknownPin(part, pin) : nameOf(groups.find(first + k));
+    };
+    contribute(part, netOf, found);
   });
   reportDuplicateDevices(sheet, issues);
   const wireNets = nameRecord<string>();
