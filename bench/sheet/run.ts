@@ -7,29 +7,45 @@
  */
 import { spawnSync } from 'node:child_process';
 import { resolve } from 'node:path';
-import { chromium, type Page } from '@playwright/test';
+import { chromium, type CDPSession, type Page } from '@playwright/test';
 import { exportSpice } from '../../src/core/netlist-io/spiceExport.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import type { Netlist } from '../../src/core/model/netlist.ts';
 import { inverterChain, rippleAdder, transistorCount } from '../generators/index.ts';
 import { formatTable } from '../table.ts';
 import { serveDirectory } from './serve.ts';
-import { importStart, markImportStart, panZoomFrames, settledAt, toggleTimes } from './pageMeasures.ts';
+import {
+  importStart,
+  markImportStart,
+  panZoomFrames,
+  processCpuMs,
+  settledAt,
+  toggleTimes,
+  type Batch,
+} from './pageMeasures.ts';
 
 const PORT = Number(process.env.BENCH_PORT ?? 4317);
 const CHROMIUM = process.env.CHROMIUM_PATH ?? '/usr/bin/chromium';
 const FRAMES = 60;
 
+/** Wall time in the page and CPU time of its renderer process (per step, over a batch), milliseconds. */
+interface Pair {
+  readonly wall: number;
+  readonly cpu: number;
+}
+
 interface SheetFigures {
   readonly name: string;
   readonly transistors: number;
-  readonly importMs: number;
-  readonly reloadMs: number;
-  readonly panP95Ms: number;
-  readonly zoomP95Ms: number;
-  readonly panMeanMs: number;
-  readonly toggleMedianMs: number;
-  readonly toggleMaxMs: number;
+  readonly import: Pair;
+  readonly reload: Pair;
+  /** 95th percentile of the frames' wall times; CPU per frame over all of them. */
+  readonly panP95: Pair;
+  readonly zoomP95: Pair;
+  readonly panMean: Pair;
+  /** Median of ten toggles. */
+  readonly toggle: Pair;
+  readonly toggleMax: Pair;
 }
 
 function progress(message: string): void {
@@ -43,16 +59,22 @@ function percentile(values: readonly number[], p: number): number {
 
 const mean = (v: readonly number[]): number => v.reduce((a, b) => a + b, 0) / Math.max(v.length, 1);
 
-async function importCell(page: Page, netlist: Netlist): Promise<number> {
+/** A statistic of the wall times, beside the batch's CPU time per step. */
+function both(b: Batch, stat: (v: readonly number[]) => number): Pair {
+  return { wall: stat(b.wallMs), cpu: b.cpuMsPerStep };
+}
+
+async function importCell(page: Page, cdp: CDPSession, netlist: Netlist): Promise<Pair> {
   await markImportStart(page);
   const text = exportSpice(netlist, DEFAULT_TECHNOLOGY);
+  const cpu0 = await processCpuMs(cdp);
   await page.getByTestId('open-file').setInputFiles({
     name: `${netlist.name}.sp`,
     mimeType: 'text/plain',
     buffer: Buffer.from(text),
   });
   const done = await settledAt(page, netlist.name);
-  return done - (await importStart(page));
+  return { wall: done - (await importStart(page)), cpu: (await processCpuMs(cdp)) - cpu0 };
 }
 
 async function measureSheet(page: Page, netlist: Netlist): Promise<SheetFigures> {
@@ -60,33 +82,42 @@ async function measureSheet(page: Page, netlist: Netlist): Promise<SheetFigures>
   await page.evaluate(() => localStorage.clear());
   await page.reload();
   await page.waitForFunction(() => window.__railwise !== undefined);
+  const cdp = await page.context().newCDPSession(page);
+  await cdp.send('Performance.enable');
   progress(`${netlist.name}: import`);
-  const importMs = await importCell(page, netlist);
+  const imported = await importCell(page, cdp, netlist);
   await page.evaluate(() =>
     window.__railwise!.frame(() =>
       document.querySelector<HTMLButtonElement>('[data-command="fit"]')?.click(),
     ),
   );
   progress(`${netlist.name}: frames`);
-  const frames = await panZoomFrames(page, FRAMES);
+  const frames = await panZoomFrames(page, cdp, FRAMES);
   progress(`${netlist.name}: toggles`);
-  const toggles = await toggleTimes(page, 10);
+  const toggles = await toggleTimes(page, cdp, 10);
   progress(`${netlist.name}: reload`);
-  await page.waitForTimeout(1500); // the autosave writes shortly after the last change
+  await page.waitForTimeout(2500); // the autosave writes once the page is idle after the last change
+  const cpu0 = await processCpuMs(cdp);
   await page.reload();
-  const reloadMs = await settledAt(page, netlist.name);
+  const reloadWall = await settledAt(page, netlist.name);
+  const cpu1 = await processCpuMs(cdp);
+  await cdp.detach();
+  const p95 = (v: readonly number[]): number => percentile(v, 0.95);
   return {
     name: netlist.name,
     transistors: transistorCount(netlist),
-    importMs,
-    reloadMs,
-    panP95Ms: percentile(frames.pan, 0.95),
-    zoomP95Ms: percentile(frames.zoom, 0.95),
-    panMeanMs: mean(frames.pan),
-    toggleMedianMs: percentile(toggles, 0.5),
-    toggleMaxMs: Math.max(...toggles),
+    import: imported,
+    // A reload that moved to a new renderer process starts its counter again.
+    reload: { wall: reloadWall, cpu: cpu1 >= cpu0 ? cpu1 - cpu0 : cpu1 },
+    panP95: both(frames.pan, p95),
+    zoomP95: both(frames.zoom, p95),
+    panMean: both(frames.pan, mean),
+    toggle: both(toggles, (v) => percentile(v, 0.5)),
+    toggleMax: both(toggles, (v) => Math.max(...v)),
   };
 }
+
+const pair = (p: Pair): string => `${p.wall.toFixed(1)} / ${p.cpu.toFixed(1)}`;
 
 async function main(): Promise<void> {
   const args = new Set(process.argv.slice(2));
@@ -109,28 +140,31 @@ async function main(): Promise<void> {
     const figures: SheetFigures[] = [];
     for (const netlist of cells) figures.push(await measureSheet(page, netlist));
     console.log(
+      'milliseconds: wall time in the page / CPU time of its renderer process (per step, over the batch)',
+    );
+    console.log(
       formatTable(
         [
           'sheet',
           'transistors',
-          'import ms',
-          'reload ms',
-          'pan p95 ms',
-          'zoom p95 ms',
-          'pan mean ms',
-          'toggle ms',
-          'toggle max ms',
+          'import',
+          'reload',
+          'pan p95',
+          'zoom p95',
+          'pan mean',
+          'toggle',
+          'toggle max',
         ],
         figures.map((f) => [
           f.name,
           f.transistors,
-          f.importMs,
-          f.reloadMs,
-          f.panP95Ms,
-          f.zoomP95Ms,
-          f.panMeanMs,
-          f.toggleMedianMs,
-          f.toggleMaxMs,
+          pair(f.import),
+          pair(f.reload),
+          pair(f.panP95),
+          pair(f.zoomP95),
+          pair(f.panMean),
+          pair(f.toggle),
+          pair(f.toggleMax),
         ]),
       ),
     );

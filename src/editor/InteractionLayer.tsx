@@ -1,9 +1,9 @@
-import { Circle, Layer, Line, Rect } from 'react-konva';
+import { Circle, Group, Line, Rect, Shape } from 'react-konva';
 import { useStore, type ContactMarks } from '../state/store.ts';
 import type { Point } from '../core/sheet/types.ts';
-import { normalizeRect, partBounds } from '../core/sheet/geometry.ts';
+import { normalizeRect } from '../core/sheet/geometry.ts';
 import { makePart } from '../core/sheet/edits.ts';
-import { PART_VIEWS } from './devices/index.ts';
+import { paintParts } from './paint/scenePaint.ts';
 import { SHEET_THEME, WIRE_STROKE } from './theme.ts';
 
 /**
@@ -41,30 +41,14 @@ function ContactMark({ at, kind }: { at: Point; kind: ContactMarks['kind'] }) {
   );
 }
 
-/** Selection outlines, contact marks and the gesture in progress: box, wire preview, part ghost. */
+/** Contact marks and the gesture in progress: box, wire preview, pin ring, part ghost. */
 export function InteractionLayer() {
   const gesture = useStore((s) => s.gesture);
-  const sheet = useStore((s) => s.doc.sheet);
-  const selected = useStore((s) => s.selection.selected);
   const marks = useStore((s) => s.contactMarks);
-  const chosen = new Set(selected.parts);
-  const outlines = chosen.size === 0 ? [] : sheet.parts.filter((p) => chosen.has(p.id)).map(partBounds);
   return (
-    <Layer listening={false}>
+    <Group listening={false}>
       {marks?.at.map((p, i) => (
         <ContactMark key={`mark-${i}`} at={p} kind={marks.kind} />
-      ))}
-      {outlines.map((b, i) => (
-        <Rect
-          key={i}
-          x={b.x0 - 0.3}
-          y={b.y0 - 0.3}
-          width={b.x1 - b.x0 + 0.6}
-          height={b.y1 - b.y0 + 0.6}
-          stroke={SHEET_THEME.selected}
-          strokeWidth={0.05}
-          dash={[0.3, 0.2]}
-        />
       ))}
       {gesture?.type === 'box' ? <BoxGesture from={gesture.from} to={gesture.to} /> : null}
       {gesture?.type === 'wiring' ? (
@@ -94,7 +78,7 @@ export function InteractionLayer() {
         />
       ) : null}
       {gesture?.type === 'ghost' ? <Ghost kind={gesture.kind} x={gesture.at.x} y={gesture.at.y} /> : null}
-    </Layer>
+    </Group>
   );
 }
 
@@ -113,9 +97,20 @@ function BoxGesture({ from, to }: { from: { x: number; y: number }; to: { x: num
   );
 }
 
+/** The part about to be placed, in the ghost colour, drawn by its kind's painter. */
 function Ghost({ kind, x, y }: { kind: Parameters<typeof makePart>[1]['kind']; x: number; y: number }) {
   const sheet = useStore((s) => s.doc.sheet);
   const part = makePart(sheet, { kind, at: { x, y } });
-  const View = PART_VIEWS[kind];
-  return <View part={part} color={SHEET_THEME.ghost} />;
+  const scale = useStore((s) => s.viewport.scale);
+  return (
+    <Shape
+      sceneFunc={(ctx) => {
+        const c = ctx._context;
+        c.lineCap = 'round';
+        c.lineJoin = 'round';
+        paintParts(c, [part], scale, SHEET_THEME.ghost, () => SHEET_THEME.ghost);
+      }}
+      listening={false}
+    />
+  );
 }

@@ -92,7 +92,7 @@ function RowView({
       aria-selected={selected}
       onClick={() => onSelect(row.index)}
     >
-      <td>{row.index}</td>
+      <td>{row.index + 1}</td>
       <td className="rw-mono">{inputs.map((n) => row.inputs[n] ?? '·').join('')}</td>
       {outputs.map((o) => (
         <td
