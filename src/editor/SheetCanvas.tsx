@@ -4,6 +4,7 @@ import type Konva from 'konva';
 import type { KonvaEventObject } from 'konva/lib/Node';
 import { setScreen, setViewport, store, useStore } from '../state/store.ts';
 import { screenToSheet, zoomAt } from '../state/viewport.ts';
+import { zoomFloor } from '../state/view.ts';
 import { PointerLayer, SimulationOverlay } from './overlay/SimulationOverlay.tsx';
 import { GridLayer } from './GridLayer.tsx';
 import { EmphasisLayer, SceneLayer } from './SceneLayer.tsx';
@@ -101,7 +102,7 @@ export function SheetCanvas({
     if (!p) return;
     // Trackpads send many small deltas; scale the factor by the delta so both feel alike.
     const factor = Math.exp(-e.evt.deltaY * 0.0015);
-    setViewport(zoomAt(store.getState().viewport, p, factor));
+    setViewport(zoomAt(store.getState().viewport, p, factor, zoomFloor()));
   }, []);
   return (
     <div
