@@ -5,13 +5,16 @@ import { ErrorBoundary } from './app/ErrorBoundary.tsx';
 import { openFirstDesign } from './app/startup.ts';
 import { openSharedLink } from './app/shareLink.ts';
 import { startAutosave } from './app/autosave.ts';
+import { restoreSessionHistory, startSessionHistory } from './app/sessionHistory.ts';
 import { installTestApi } from './app/testApi.ts';
 import { startAnalysis } from './state/analysis.ts';
 
 openFirstDesign();
+restoreSessionHistory();
 startAnalysis();
 void openSharedLink();
 startAutosave();
+startSessionHistory();
 installTestApi();
 
 const root = document.getElementById('root');

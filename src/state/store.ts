@@ -208,6 +208,11 @@ export function redo(): boolean {
   return r !== null;
 }
 
+/** Puts back an undo history kept across a reload (the document itself is already in place). */
+export function restoreHistory(past: readonly SheetDocument[], future: readonly SheetDocument[]): void {
+  store.setState({ history: { past, future, gestureStart: null } });
+}
+
 /** Opens a design (file, starter, import) as one undoable step, so nothing drawn is lost. */
 export function loadDesign(design: Design): void {
   const doc = documentFromDesign(design);
