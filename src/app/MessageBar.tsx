@@ -1,11 +1,13 @@
 import { countOf } from '../core/view/plural.ts';
 import { dismissMessage, useStore } from '../state/store.ts';
+import { DesignNotes } from './DesignNotes.tsx';
 
 /** Drawing problems shown at once; more would crowd the line under the sheet. */
 const MAX_ISSUES = 3;
 
 /**
- * The line under the sheet (never over it): the latest message and the drawing's problems.
+ * The line under the sheet (never over it): the latest message, the notes kept with the design
+ * (what an import changed) and the drawing's problems.
  * Errors stay until dismissed and say what was left unchanged; warnings and information clear when
  * the document next changes (the store does that); drawing problems show while they exist.
  */
@@ -27,6 +29,7 @@ export function MessageBar() {
           </button>
         </div>
       ) : null}
+      <DesignNotes />
       {issues.slice(0, MAX_ISSUES).map((i, k) => (
         <div key={k} className="rw-message rw-warning" data-testid="sheet-issue">
           Sheet: {i.message}

@@ -17,6 +17,7 @@ import { loadDesign, offerCells, setViewport, showMessage, store } from '../stat
 import { currentStage } from '../editor/stageRef.ts';
 import { fitToView } from '../state/view.ts';
 import { downloadText, downloadUrl, safeFileName } from './download.ts';
+import { countOf } from '../core/view/plural.ts';
 
 export const DESIGN_EXTENSION = '.railwise.json';
 export const OPEN_ACCEPT = ['.json', ...SPICE_EXTENSIONS].join(',');
@@ -33,22 +34,32 @@ export interface SpiceDesigns {
   readonly failed: readonly string[];
 }
 
+/**
+ * What an import changed or left out, as the design's notes (one per line under a heading naming
+ * the file), kept with the design until the designer dismisses them: the same notes the command
+ * line prints for the cell.
+ */
+export function importNotes(fileName: string, notes: readonly string[]): string | undefined {
+  return notes.length === 0 ? undefined : [`Imported from ${fileName}:`, ...notes].join('\n');
+}
+
 /** Reads a SPICE text into designs, one per cell; throws when no cell at all can be read. */
 export function designsFromSpice(text: string, fileName: string): SpiceDesigns {
   const loaded = cellsFromText(text, fileName).cells;
-  const designs = loaded.flatMap((c): Design[] =>
-    'job' in c
-      ? [
-          {
-            name: c.job.cell,
-            technology: c.job.technology,
-            netlist: c.job.netlist,
-            expectations: c.job.expectations,
-            sequences: [],
-          },
-        ]
-      : [],
-  );
+  const designs = loaded.flatMap((c): Design[] => {
+    if (!('job' in c)) return [];
+    const notes = importNotes(fileName, c.job.notes);
+    return [
+      {
+        name: c.job.cell,
+        technology: c.job.technology,
+        netlist: c.job.netlist,
+        expectations: c.job.expectations,
+        sequences: [],
+        ...(notes === undefined ? {} : { notes }),
+      },
+    ];
+  });
   const failed = loaded.flatMap((c) => ('failure' in c ? [c.failure] : []));
   if (designs.length === 0) {
     const first = failed[0];
@@ -59,12 +70,21 @@ export function designsFromSpice(text: string, fileName: string): SpiceDesigns {
   return { designs, failed: failed.map((f) => (f.cell === null ? f.message : `${f.cell} (${f.message})`)) };
 }
 
-/** Loads one imported cell and says where it came from. */
+/**
+ * Loads one imported cell and says where it came from. Cells of the file that could not be read
+ * join the import's notes, so they stay in view with the rest until dismissed.
+ */
 export function loadImportedCell(design: Design, fileName: string, failed: readonly string[]): void {
-  loadDesign(design);
+  const unread = failed.map((f) => `not readable: ${f}`);
+  const notes =
+    unread.length === 0
+      ? design.notes
+      : (design.notes ?? `Imported from ${fileName}:`) + `\n${unread.join('\n')}`;
+  loadDesign({ ...design, ...(notes === undefined ? {} : { notes }) });
   fitToView();
-  const note = failed.length ? `. Not readable: ${failed.join('; ')}` : '';
-  showMessage('info', `Imported ${design.name} from ${fileName}${note}`);
+  const kept = notes === undefined ? 0 : notes.split('\n').length - 1;
+  const where = kept === 0 ? '' : `; ${countOf(kept, 'note')} on what the import changed, under the sheet`;
+  showMessage('info', `Imported ${design.name} from ${fileName}${where}`);
 }
 
 function openSpice(text: string, fileName: string): void {
