@@ -22,9 +22,21 @@ interface StoredHistory {
   readonly ahead: readonly DocPatch[];
 }
 
-/** FNV-1a over the document's JSON: enough to tell whether a restored design is the one saved. */
+/** JSON with every object's keys sorted: equal documents read back from a file give equal text. */
+function canonicalJson(value: unknown): string {
+  return JSON.stringify(value, (_key, v: unknown) =>
+    v !== null && typeof v === 'object' && !Array.isArray(v)
+      ? Object.fromEntries(Object.entries(v).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)))
+      : v,
+  );
+}
+
+/**
+ * FNV-1a over the document's canonical JSON: enough to tell whether a design restored from the
+ * autosave (whose objects list their keys in another order) is the document the steps lead from.
+ */
 export function fingerprint(doc: SheetDocument): string {
-  const text = JSON.stringify(doc);
+  const text = canonicalJson(doc);
   let h = 0x811c9dc5;
   for (let i = 0; i < text.length; i++) h = Math.imul(h ^ text.charCodeAt(i), 0x01000193);
   return `${(h >>> 0).toString(16)}:${text.length}`;

@@ -19,14 +19,22 @@ import { pinPositions } from '../core/sheet/geometry.ts';
 import { derivedSheet } from '../state/document.ts';
 import { cancelGesture, commitDoc, endGesture, setContactMarks, showMessage, store } from '../state/store.ts';
 
-/** Nets named in a list: "VDD and Y", "A, B and C". */
-function netList(nets: readonly string[]): string {
-  const unique = [...new Set(nets)];
-  return unique.length <= 1 ? (unique[0] ?? '') : `${unique.slice(0, -1).join(', ')} and ${unique.at(-1)}`;
+/** Names in a list: "VDD and Y", "A, B and C". */
+function nameList(names: readonly string[]): string {
+  return names.length <= 1 ? (names[0] ?? '') : `${names.slice(0, -1).join(', ')} and ${names.at(-1)}`;
 }
 
-function changeText(change: NetChange): string {
-  return change.kind === 'join' ? `join ${netList(change.nets)}` : `cut net ${change.nets[0]} apart`;
+/** "join VDD and Y", "join A and B; Y and x1", "cut net Q apart". */
+function changesText(changes: readonly NetChange[]): string {
+  const joins = [
+    ...new Set(changes.filter((c) => c.kind === 'join').map((c) => nameList([...new Set(c.nets)]))),
+  ];
+  const cuts = [...new Set(changes.filter((c) => c.kind === 'cut').map((c) => c.nets[0]!))];
+  const parts = [
+    ...(joins.length > 0 ? [`join ${joins.join('; ')}`] : []),
+    ...(cuts.length > 0 ? [`cut ${cuts.length === 1 ? 'net' : 'nets'} ${nameList(cuts)} apart`] : []),
+  ];
+  return parts.join(', and ');
 }
 
 const ARRANGE_ADVICE = 'Moving parts never connects or cuts nets: draw a wire, or give the nets one name.';
@@ -34,9 +42,8 @@ const PLACE_ADVICE = 'A pin there would touch two nets at once: place the part e
 
 /** "Turn not done: it would join VDD and Y (the place is marked on the sheet). …" */
 export function refusalText(verb: string, changes: readonly NetChange[], advice = ARRANGE_ADVICE): string {
-  const what = [...new Set(changes.map(changeText))];
   const places = changes.length === 1 ? 'the place is marked' : `${changes.length} places are marked`;
-  return `${verb} not done: it would ${what.join(' and ')} (${places} on the sheet). ${advice}`;
+  return `${verb} not done: it would ${changesText(changes)} (${places} on the sheet). ${advice}`;
 }
 
 /** Judges `next` against the document's current sheet, whose nets the store already holds. */
