@@ -1,3 +1,7 @@
+import { spawnSync } from 'node:child_process';
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { expect, test } from '@playwright/test';
 import { RailwisePage } from './pages/RailwisePage.ts';
 import { WorkspacePanel } from './pages/workspace.ts';
@@ -109,4 +113,23 @@ test('the undo history survives a reload', async ({ page }) => {
   expect(await app.undoDepth()).toBe(4);
   await app.press('Control+z');
   expect(await app.partCount()).toBe(2);
+});
+
+test('the same cell gives the same power figure in the app and from the command line', async ({ page }) => {
+  const dir = mkdtempSync(join(tmpdir(), 'railwise-e2e-'));
+  const file = join(dir, 'nload.sp');
+  writeFileSync(file, NMOS_LOAD_INVERTER);
+  const cli = spawnSync(process.execPath, ['bin/railwise.mjs', 'check', file, '--power', '--json'], {
+    encoding: 'utf8',
+  });
+  const power = (JSON.parse(cli.stdout) as { power: { totalWatts: number; load: number } }).power;
+  const app = new RailwisePage(page);
+  await app.open();
+  await app.openFile('nload.sp', NMOS_LOAD_INVERTER);
+  await expect
+    .poll(() => page.evaluate(() => window.__railwise!.state().simulation.power?.totalWatts ?? null))
+    .toBe(power.totalWatts);
+  // Both used the one default load (10 fF per output, docs/semantics.md §5).
+  expect(power.load).toBe(1e-14);
+  expect(await page.evaluate(() => window.__railwise!.state().simulation.powerSettings.load)).toBe(1e-14);
 });
