@@ -22,24 +22,31 @@ interface StoredHistory {
   readonly ahead: readonly DocPatch[];
 }
 
-/** JSON with every object's keys sorted: equal documents read back from a file give equal text. */
-function canonicalJson(value: unknown): string {
-  return JSON.stringify(value, (_key, v: unknown) =>
-    v !== null && typeof v === 'object' && !Array.isArray(v)
-      ? Object.fromEntries(Object.entries(v).sort(([a], [b]) => (a < b ? -1 : a > b ? 1 : 0)))
-      : v,
-  );
+/** FNV-1a, one step per character. */
+function mixText(h: number, text: string): number {
+  for (let i = 0; i < text.length; i++) h = Math.imul(h ^ text.charCodeAt(i), 0x01000193);
+  return Math.imul(h ^ 0x1f, 0x01000193); // a separator, so "ab","c" and "a","bc" differ
+}
+
+/** Mixes a plain value in: arrays in order, objects by sorted key, so key order never matters. */
+function mixValue(h: number, v: unknown): number {
+  if (Array.isArray(v)) return v.reduce((acc: number, x) => mixValue(acc, x), mixText(h, '['));
+  if (v !== null && typeof v === 'object') {
+    const record = v as Record<string, unknown>;
+    return Object.keys(record)
+      .filter((k) => record[k] !== undefined) // as JSON leaves them out
+      .sort()
+      .reduce((acc, k) => mixValue(mixText(acc, k), record[k]), mixText(h, '{'));
+  }
+  return mixText(h, `${typeof v}:${String(v)}`);
 }
 
 /**
- * FNV-1a over the document's canonical JSON: enough to tell whether a design restored from the
- * autosave (whose objects list their keys in another order) is the document the steps lead from.
+ * A hash of the document's content: enough to tell whether a design restored from the autosave
+ * (whose objects list their keys in another order) is the document the stored steps lead from.
  */
 export function fingerprint(doc: SheetDocument): string {
-  const text = canonicalJson(doc);
-  let h = 0x811c9dc5;
-  for (let i = 0; i < text.length; i++) h = Math.imul(h ^ text.charCodeAt(i), 0x01000193);
-  return `${(h >>> 0).toString(16)}:${text.length}`;
+  return (mixValue(0x811c9dc5, doc) >>> 0).toString(16);
 }
 
 /** Patches between neighbouring documents, remembered per pair: each step is compared once. */

@@ -74,6 +74,8 @@ describe('the undo history across a reload', () => {
     const text = storedHistory(doc, history.past, history.future);
     const other = { ...doc, name: 'other' };
     expect(historyFor(other, text)).toBeNull();
+    // A field left undefined is the same document as one without it (as it reads back from JSON).
+    expect(historyFor({ ...doc, notes: undefined }, text)).not.toBeNull();
     expect(historyFor(doc, 'not json')).toBeNull();
   });
 
