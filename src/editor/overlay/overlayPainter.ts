@@ -104,6 +104,10 @@ function paintDevices(ctx: CanvasRenderingContext2D, area: Rect, paint: OverlayP
   }
 }
 
+/** Below these zooms (pixels per grid unit) device marks, then level marks, would be specks: left out. */
+const DEVICES_FROM_PX = 3;
+const MARKS_FROM_PX = 6;
+
 export function paintOverlay(
   ctx: CanvasRenderingContext2D,
   area: Rect,
@@ -112,6 +116,6 @@ export function paintOverlay(
   paint: OverlayPaint,
 ): void {
   paintStrokes(ctx, area, scale, layout, paint);
-  paintDevices(ctx, area, paint);
-  paintMarks(ctx, area, paint);
+  if (scale >= DEVICES_FROM_PX) paintDevices(ctx, area, paint);
+  if (scale >= MARKS_FROM_PX) paintMarks(ctx, area, paint);
 }

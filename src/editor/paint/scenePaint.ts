@@ -5,7 +5,7 @@
  * apart (emphasisPaint.ts); levels by the simulation overlay.
  */
 import type { Point, Sheet } from '../../core/sheet/types.ts';
-import type { Rect } from '../../core/sheet/geometry.ts';
+import { partBounds, type Rect } from '../../core/sheet/geometry.ts';
 import type { PartText } from '../../core/sheet/parts/index.ts';
 import { PART_PAINTERS } from '../devices/index.ts';
 import { textDetail, writeTexts } from '../devices/symbolPainter.ts';
@@ -25,6 +25,9 @@ const DOT_PX = 2.4;
 
 /** Lines never thinner than this many pixels, so a zoomed-out sheet stays legible. */
 const MIN_LINE_PX = 0.8;
+
+/** Below this many pixels per grid unit a part is drawn as its box. */
+const OUTLINE_BELOW_PX = 2;
 
 export const lineWidth = (units: number, scale: number): number => Math.max(units, MIN_LINE_PX / scale);
 
@@ -63,10 +66,17 @@ export function paintParts(
   text: ((style: PartText['style']) => string) | null,
 ): void {
   ctx.beginPath();
-  for (const p of parts) PART_PAINTERS[p.kind].trace(ctx, p, false);
+  if (scale < OUTLINE_BELOW_PX) {
+    // A part a few pixels across: its box says where it is; its symbol would be a smudge.
+    for (const p of parts) {
+      const b = partBounds(p);
+      ctx.rect(b.x0, b.y0, b.x1 - b.x0, b.y1 - b.y0);
+    }
+  } else for (const p of parts) PART_PAINTERS[p.kind].trace(ctx, p, false);
   ctx.lineWidth = lineWidth(STROKE, scale);
   ctx.strokeStyle = colour;
   ctx.stroke();
+  if (scale < OUTLINE_BELOW_PX) return;
   ctx.beginPath();
   for (const p of parts) PART_PAINTERS[p.kind].trace(ctx, p, true);
   ctx.fillStyle = colour;
