@@ -165,6 +165,16 @@ export function overlayPaint(
   return { strokes, marks, devices, nets: looks, conduction };
 }
 
+/** The box around a flat x, y list. */
+export function segmentBox(points: readonly number[]): Rect {
+  let [x0, y0, x1, y1] = [Infinity, Infinity, -Infinity, -Infinity];
+  for (let i = 0; i + 1 < points.length; i += 2) {
+    [x0, x1] = [Math.min(x0, points[i]!), Math.max(x1, points[i]!)];
+    [y0, y1] = [Math.min(y0, points[i + 1]!), Math.max(y1, points[i + 1]!)];
+  }
+  return { x0, y0, x1, y1 };
+}
+
 /** How far a level mark's text reaches from its anchor (bold, 0.55 units high; generous). */
 const MARK_REACH = { x: 3, y: 1 };
 /** A device mark's radius, with its stroke. */
@@ -182,16 +192,7 @@ function sameNetPaint(a: NetPaint | null | undefined, b: NetPaint | null | undef
 export function changedPaintAreas(layout: PaintLayout, before: OverlayPaint, after: OverlayPaint): Rect[] {
   const changed = layout.nets.map((_, i) => !sameNetPaint(before.nets[i], after.nets[i]));
   const areas: Rect[] = [];
-  for (const segment of layout.segments) {
-    if (!changed[segment.net]) continue;
-    const p = segment.points;
-    let [x0, y0, x1, y1] = [p[0]!, p[1]!, p[0]!, p[1]!];
-    for (let i = 2; i + 1 < p.length; i += 2) {
-      [x0, x1] = [Math.min(x0, p[i]!), Math.max(x1, p[i]!)];
-      [y0, y1] = [Math.min(y0, p[i + 1]!), Math.max(y1, p[i + 1]!)];
-    }
-    areas.push({ x0, y0, x1, y1 });
-  }
+  for (const segment of layout.segments) if (changed[segment.net]) areas.push(segmentBox(segment.points));
   for (const m of layout.marks)
     if (changed[m.net])
       areas.push({

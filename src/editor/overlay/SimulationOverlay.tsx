@@ -106,7 +106,7 @@ function LevelLayer({ layout, paint, sheet }: { layout: PaintLayout; paint: Over
   const changed = usePaintChanges(layout, paint);
   const painter = useMemo(
     () => (ctx: CanvasRenderingContext2D, area: Rect, scale: number) =>
-      paintOverlay(ctx, area, scale, layout, paint),
+      paintOverlay(ctx, area, scale, { layout, paint }),
     [layout, paint],
   );
   const bounds = useMemo(() => sheetInk(sheet), [sheet]);

@@ -5,7 +5,7 @@
  * from the pure paint model (core/view/overlayPaint.ts), which tests read without a canvas.
  */
 import type { Rect } from '../../core/sheet/geometry.ts';
-import type { OverlayPaint, PaintLayout } from '../../core/view/overlayPaint.ts';
+import { segmentBox, type OverlayPaint, type PaintLayout } from '../../core/view/overlayPaint.ts';
 import { LOOKS, type Conduction, type LookName } from '../../core/view/visualLanguage.ts';
 import { SHEET_THEME } from '../theme.ts';
 
@@ -20,20 +20,21 @@ const DEVICE_STYLE: Readonly<Record<Conduction, { fill: string; stroke: string; 
 };
 
 function meets(points: readonly number[], area: Rect): boolean {
-  let [x0, y0, x1, y1] = [Infinity, Infinity, -Infinity, -Infinity];
-  for (let i = 0; i + 1 < points.length; i += 2) {
-    [x0, x1] = [Math.min(x0, points[i]!), Math.max(x1, points[i]!)];
-    [y0, y1] = [Math.min(y0, points[i + 1]!), Math.max(y1, points[i + 1]!)];
-  }
-  return x0 <= area.x1 && area.x0 <= x1 && y0 <= area.y1 && area.y0 <= y1;
+  const b = segmentBox(points);
+  return b.x0 <= area.x1 && area.x0 <= b.x1 && b.y0 <= area.y1 && area.y0 <= b.y1;
+}
+
+/** What the overlay paints: the drawing's layout and one vector's paint on it. */
+export interface LevelScene {
+  readonly layout: PaintLayout;
+  readonly paint: OverlayPaint;
 }
 
 function paintStrokes(
   ctx: CanvasRenderingContext2D,
   area: Rect,
   scale: number,
-  layout: PaintLayout,
-  paint: OverlayPaint,
+  { layout, paint }: LevelScene,
 ): void {
   const byLook = new Map<LookName, (readonly number[])[]>();
   for (const segment of layout.segments) {
@@ -112,10 +113,9 @@ export function paintOverlay(
   ctx: CanvasRenderingContext2D,
   area: Rect,
   scale: number,
-  layout: PaintLayout,
-  paint: OverlayPaint,
+  scene: LevelScene,
 ): void {
-  paintStrokes(ctx, area, scale, layout, paint);
-  if (scale >= DEVICES_FROM_PX) paintDevices(ctx, area, paint);
-  if (scale >= MARKS_FROM_PX) paintMarks(ctx, area, paint);
+  paintStrokes(ctx, area, scale, scene);
+  if (scale >= DEVICES_FROM_PX) paintDevices(ctx, area, scene.paint);
+  if (scale >= MARKS_FROM_PX) paintMarks(ctx, area, scene.paint);
 }
