@@ -3,7 +3,8 @@
  * equal points share a spot. Which wire segments pass through each spot is found without walking
  * the wires grid point by grid point: the points are sorted by row and by column once, and each
  * segment looks up the points between its ends by binary search. Cost: O((segments + points) ·
- * log points + hits), whatever the drawn length of the wires; no map is keyed by a point.
+ * log points + hits), whatever the drawn length of the wires (a wire a million grid units long costs
+ * what a short one does); no map is keyed by a point.
  */
 import type { Point, SheetWire } from './types.ts';
 
@@ -70,6 +71,19 @@ function lowerBound(along: Float64Array, order: Int32Array, [from, to]: [number,
   return lo;
 }
 
+/** The spot at (x, y), found in x's column of the (x, y) order; null when no query point is there. */
+function spotAt(
+  c: Coords,
+  xy: Int32Array,
+  spotOf: Int32Array,
+  column: [number, number] | undefined,
+  y: number,
+): number | null {
+  if (column === undefined) return null;
+  const j = lowerBound(c.y, xy, column, y);
+  return j < column[1] && c.y[xy[j]!] === y ? spotOf[xy[j]!]! : null;
+}
+
 function numberSpots(c: Coords, order: Int32Array): { spotOf: Int32Array; spots: Point[] } {
   const spotOf = new Int32Array(order.length);
   const spots: Point[] = [];
@@ -98,7 +112,14 @@ export function spotIndex(wires: readonly SheetWire[], points: readonly Point[])
       const a = wire.points[i - 1]!;
       const b = wire.points[i]!;
       const horizontal = a.y === b.y;
-      if (!horizontal && a.x !== b.x) continue; // not orthogonal: covers nothing
+      if (!horizontal && a.x !== b.x) {
+        // A slanted segment (the editor never draws one) covers only its two ends.
+        for (const end of [a, b]) {
+          const spot = spotAt(c, xy, spotOf, columns.get(end.x), end.y);
+          if (spot !== null) covers[spot]!.push({ wire: w, end: true });
+        }
+        continue;
+      }
       const range = horizontal ? rows.get(a.y) : columns.get(a.x);
       if (range === undefined) continue;
       const [order, along, from, to] = horizontal ? [yx, c.x, a.x, b.x] : [xy, c.y, a.y, b.y];
