@@ -9,20 +9,24 @@ import { restoreSessionHistory, startSessionHistory } from './app/sessionHistory
 import { installTestApi } from './app/testApi.ts';
 import { startAnalysis } from './state/analysis.ts';
 
-openFirstDesign();
-restoreSessionHistory();
-startAnalysis();
-void openSharedLink();
-startAutosave();
-startSessionHistory();
-installTestApi();
+/** Opens the design (the autosaved one, expanded first when it was stored packed), then the page. */
+async function start(root: HTMLElement): Promise<void> {
+  await openFirstDesign();
+  restoreSessionHistory();
+  startAnalysis();
+  void openSharedLink();
+  startAutosave();
+  startSessionHistory();
+  installTestApi();
+  createRoot(root).render(
+    <StrictMode>
+      <ErrorBoundary>
+        <App />
+      </ErrorBoundary>
+    </StrictMode>,
+  );
+}
 
 const root = document.getElementById('root');
 if (!root) throw new Error('index.html has no #root element');
-createRoot(root).render(
-  <StrictMode>
-    <ErrorBoundary>
-      <App />
-    </ErrorBoundary>
-  </StrictMode>,
-);
+void start(root);

@@ -142,16 +142,8 @@ export class RailwisePage {
       .click();
   }
 
-  /** Waits until the autosave has caught up with the current revision. */
+  /** Waits until the autosave holds the design as it is now. */
   async waitForAutosave(): Promise<void> {
-    await this.page.waitForFunction(() => {
-      const api = window.__railwise!;
-      const saved = localStorage.getItem(api.autosaveKey);
-      return (
-        saved !== null &&
-        JSON.parse(saved).netlist !== undefined &&
-        JSON.stringify(JSON.parse(saved).sheet) === JSON.stringify(api.state().doc.sheet)
-      );
-    });
+    await this.page.waitForFunction(() => window.__railwise!.autosaveCaughtUp());
   }
 }

@@ -10,7 +10,8 @@ import { toggleInput } from '../state/simulation.ts';
 import { AUTO_SWEEP_VECTORS } from '../state/analysis.ts';
 import { currentStage } from '../editor/stageRef.ts';
 import type { Point } from '../core/sheet/types.ts';
-import { AUTOSAVE_KEY } from './autosave.ts';
+import { AUTOSAVE_KEY, autosavedText } from './autosave.ts';
+import { serializeDesign } from '../core/format/designFile.ts';
 
 export interface RailwiseTestApi {
   state: typeof store.getState;
@@ -22,6 +23,8 @@ export interface RailwiseTestApi {
   undo: typeof undo;
   redo: typeof redo;
   autosaveKey: string;
+  /** True once the autosave holds the design as it is now (expanded first when stored packed). */
+  autosaveCaughtUp: () => Promise<boolean>;
   /** Runs an action, renders what it changed and draws every layer now: the work of one frame. */
   frame: (action: () => void) => void;
   setViewport: (v: Viewport) => void;
@@ -67,6 +70,7 @@ export function installTestApi(): void {
     undo,
     redo,
     autosaveKey: AUTOSAVE_KEY,
+    autosaveCaughtUp: async () => (await autosavedText()) === serializeDesign(store.getState().design),
     frame: drawFrame,
     setViewport,
     toggleInput,
