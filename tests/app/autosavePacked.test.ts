@@ -14,24 +14,9 @@ import {
 } from '../../src/app/autosave.ts';
 import { isPacked, PACKED_MARK } from '../../src/app/storedText.ts';
 import { serializeDesign } from '../../src/core/format/designFile.ts';
-import { autoPlace } from '../../src/core/sheet/autoPlace.ts';
-import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
-import type { Design } from '../../src/core/model/design.ts';
 import { loadDesign, resetStore, store } from '../../src/state/store.ts';
-import { inverterChain } from '../../bench/generators/index.ts';
 import { memoryStorage } from '../memoryStorage.ts';
-
-function chain(): Design {
-  const netlist = inverterChain(400);
-  return {
-    name: 'chain',
-    technology: DEFAULT_TECHNOLOGY,
-    netlist,
-    expectations: {},
-    sequences: [],
-    sheet: autoPlace(netlist),
-  };
-}
+import { longDesign } from './longDesign.ts';
 
 let storage: Storage;
 beforeEach(() => {
@@ -49,7 +34,7 @@ describe('autosave of a long design', () => {
   it('is stored packed, and opens again as the same design', async () => {
     const stop = startAutosave(storage);
     openingDone(undefined, storage);
-    const design = chain();
+    const design = longDesign();
     loadDesign(design);
     const stored = await saved();
     stop();

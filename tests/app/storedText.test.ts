@@ -3,9 +3,7 @@
 import { describe, expect, it } from 'vitest';
 import { isPacked, PACK_ABOVE, packForStorage, unpackFromStorage } from '../../src/app/storedText.ts';
 import { serializeDesign } from '../../src/core/format/designFile.ts';
-import { autoPlace } from '../../src/core/sheet/autoPlace.ts';
-import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
-import { inverterChain } from '../../bench/generators/index.ts';
+import { longDesign } from './longDesign.ts';
 
 describe('design text in the browser’s storage', () => {
   it('keeps a short text as it is', async () => {
@@ -14,15 +12,7 @@ describe('design text in the browser’s storage', () => {
   });
 
   it('packs a long design to a fraction of its size and gets the same text back', async () => {
-    const netlist = inverterChain(500);
-    const text = serializeDesign({
-      name: 'chain',
-      technology: DEFAULT_TECHNOLOGY,
-      netlist,
-      expectations: {},
-      sequences: [],
-      sheet: autoPlace(netlist),
-    });
+    const text = serializeDesign(longDesign());
     expect(text.length).toBeGreaterThan(PACK_ABOVE);
     const stored = await packForStorage(text);
     expect(isPacked(stored)).toBe(true);

@@ -135,26 +135,14 @@ describe('sheetToNetlist', () => {
 });
 
 describe('connectivity of unusual wires', () => {
+  /** A wire through the given points. */
+  const wire = (id: string, ...xy: [number, number][]) => ({ id, points: xy.map(([x, y]) => ({ x, y })) });
+
   it('joins a pin in the middle of a wire a million units long, and a slanted segment only at its ends', () => {
     const sheet = {
       parts: [part('a', 'label', 'FAR', 500_000, 0), part('b', 'label', 'MID', 3, 3)],
-      wires: [
-        {
-          id: 'long',
-          points: [
-            { x: -500_000, y: 0 },
-            { x: 700_000, y: 0 },
-          ],
-        },
-        // A file may hold a slanted segment; it passes (1,1) and (2,2) without touching them.
-        {
-          id: 'slant',
-          points: [
-            { x: 0, y: 0 },
-            { x: 3, y: 3 },
-          ],
-        },
-      ],
+      // A file may hold a slanted segment; it passes (1,1) and (2,2) without touching them.
+      wires: [wire('long', [-500_000, 0], [700_000, 0]), wire('slant', [0, 0], [3, 3])],
     };
     const d = sheetToNetlist(sheet);
     expect(d.wireNets).toEqual({ long: 'FAR', slant: 'FAR' });
