@@ -133,3 +133,26 @@ test('the same cell gives the same power figure in the app and from the command 
   expect(power.load).toBe(1e-14);
   expect(await page.evaluate(() => window.__railwise!.state().simulation.powerSettings.load)).toBe(1e-14);
 });
+
+test('open, export as SPICE, open again: the drawing and the circuit come back as they were', async ({
+  page,
+}) => {
+  const app = new RailwisePage(page);
+  await app.open();
+  await app.selectDevice('PB');
+  await app.press('ArrowUp'); // a layout of the designer's own, not the automatic one
+  const before = await page.evaluate(() => {
+    const s = window.__railwise!.state();
+    return { sheet: s.doc.sheet, netlist: s.design.netlist };
+  });
+  const download = page.waitForEvent('download');
+  await page.getByRole('combobox', { name: 'Export' }).selectOption({ label: 'SPICE netlist' });
+  const text = await (await (await download).createReadStream()).toArray();
+  await app.openFile('nand2.sp', Buffer.concat(text).toString('utf8'));
+  await expect(app.message).toContainText('Imported nand2');
+  const after = await page.evaluate(() => {
+    const s = window.__railwise!.state();
+    return { sheet: s.doc.sheet, netlist: s.design.netlist };
+  });
+  expect(after).toEqual(before);
+});

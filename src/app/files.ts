@@ -56,6 +56,7 @@ export function designsFromSpice(text: string, fileName: string): SpiceDesigns {
         netlist: c.job.netlist,
         expectations: c.job.expectations,
         sequences: [],
+        ...(c.job.sheet === undefined ? {} : { sheet: c.job.sheet }),
         ...(notes === undefined ? {} : { notes }),
       },
     ];
@@ -147,7 +148,10 @@ export function exportDesign(kind: ExportKind): void {
       case 'spice':
         return downloadText(
           safeFileName(design.name, '.sp'),
-          exportSpice(design.netlist, design.technology, { expectations: design.expectations }),
+          exportSpice(design.netlist, design.technology, {
+            expectations: design.expectations,
+            ...(design.sheet === undefined ? {} : { sheet: design.sheet }),
+          }),
           'text/plain',
         );
       case 'verilog':
