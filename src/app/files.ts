@@ -18,6 +18,8 @@ import { currentStage } from '../editor/stageRef.ts';
 import { fitToView } from '../state/view.ts';
 import { downloadText, downloadUrl, safeFileName } from './download.ts';
 import { countOf } from '../core/view/plural.ts';
+import { binaryRefusal } from '../core/format/binaryText.ts';
+import { brief } from '../core/format/printable.ts';
 
 export const DESIGN_EXTENSION = '.railwise.json';
 export const OPEN_ACCEPT = ['.json', ...SPICE_EXTENSIONS].join(',');
@@ -97,6 +99,11 @@ function openSpice(text: string, fileName: string): void {
 
 /** Opens text as a design file or a SPICE netlist. Returns false when the file was refused. */
 export function openText(text: string, fileName: string): boolean {
+  const binary = binaryRefusal(fileName, text);
+  if (binary !== null) {
+    showMessage('error', `Could not open ${binary}. Your design is unchanged.`);
+    return false;
+  }
   try {
     if (isSpiceFile(fileName)) return (openSpice(text, fileName), true);
     loadDesign(parseDesignFile(text, fileName));
@@ -106,7 +113,8 @@ export function openText(text: string, fileName: string): boolean {
   } catch (e) {
     // Known errors name the file and line or field; anything else is still a message, never a crash.
     const known = e instanceof DesignFileError || e instanceof SpiceImportError;
-    const detail = e instanceof Error ? e.message : String(e);
+    // A short, printable excerpt: whatever the file held, the message stays one readable line.
+    const detail = brief(e instanceof Error ? e.message : String(e));
     showMessage(
       'error',
       `Could not open${known ? '' : ` ${fileName}`}: ${detail}. Your design is unchanged.`,

@@ -80,4 +80,21 @@ describe('opening files', () => {
     expect(openText(INVERTER_CELL.join('\n'), 'inv.sp')).toBe(true);
     expect(store.getState().doc.notes).toBeUndefined();
   });
+
+  it('refuses a binary file with one readable line, and shows no raw bytes', () => {
+    const before = store.getState().doc;
+    const bytes = Array.from({ length: 300 }, (_, i) => String.fromCharCode((i * 37 + 11) % 256)).join('');
+    expect(openText(`\u0000${bytes}`, 'garbage.sp')).toBe(false);
+    const text = store.getState().message!.text;
+    expect(text).toContain('garbage.sp: not a text file');
+    expect(/[\u0000-\u0008\u000b-\u001f\u007f-\u009f]/.test(text)).toBe(false);
+    expect(store.getState().doc).toBe(before);
+  });
+
+  it('quotes a broken line as a short, printable excerpt', () => {
+    expect(openText('{"format": "railwise-design", \u000b "x": 1', 'broken.railwise.json')).toBe(false);
+    const text = store.getState().message!.text;
+    expect(text).toContain('broken.railwise.json');
+    expect(/[\u0000-\u0008\u000b-\u001f\u007f-\u009f]/.test(text)).toBe(false);
+  });
 });
