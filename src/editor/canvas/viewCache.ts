@@ -4,6 +4,7 @@
  * the drawing), at the scale it was drawn at:
  * - a pan that stays inside it is one image copy;
  * - a zoom shows the bitmap scaled at once and draws it afresh when the wheel rests (SETTLE_MS);
+ *   zooming out past its edges leaves them empty meanwhile while it still shows most of the view;
  * - a change of content repaints only the areas given to `invalidate` (cleared, then drawn again
  *   clipped to them), or everything when told so.
  * Drawing is delegated to a painter that draws whatever meets an area, in sheet units.
@@ -51,6 +52,16 @@ const intersect = (a: Rect, b: Rect): Rect | null => {
   return r.x0 <= r.x1 && r.y0 <= r.y1 ? r : null;
 };
 
+/** During a zoom, a bitmap showing at least this share of the view is enough until the wheel rests. */
+const MOSTLY = 0.6;
+
+/** The share of `view`'s area that `held` covers. */
+function coverage(held: Rect, view: Rect): number {
+  const both = intersect(held, view);
+  const area = (r: Rect): number => Math.max(0, r.x1 - r.x0) * Math.max(0, r.y1 - r.y0);
+  return both === null || area(view) === 0 ? 0 : area(both) / area(view);
+}
+
 const contains = (outer: Rect, inner: Rect): boolean =>
   inner.x0 >= outer.x0 && inner.y0 >= outer.y0 && inner.x1 <= outer.x1 && inner.y1 <= outer.y1;
 
@@ -70,8 +81,14 @@ export class ViewCache {
   private pending: 'all' | Rect[] = 'all';
   private settleTimer: ReturnType<typeof setTimeout> | null = null;
 
-  /** `redraw` asks the canvas for another frame (the bitmap was drawn afresh after a zoom). */
-  constructor(private readonly redraw: () => void) {}
+  /**
+   * `redraw` asks the canvas for another frame (the bitmap was drawn afresh after a zoom);
+   * `makeCanvas` makes the bitmap (tests give one of their own).
+   */
+  constructor(
+    private readonly redraw: () => void,
+    private readonly makeCanvas: () => HTMLCanvasElement = () => document.createElement('canvas'),
+  ) {}
 
   /** Marks areas (sheet units) to draw again at the next frame, or everything. */
   invalidate(areas: 'all' | readonly Rect[]): void {
@@ -102,7 +119,11 @@ export class ViewCache {
     if (wanted === null) return;
     const p = this.placement;
     const held = p && sheetRect(p.view, p.left, p.top, p.width, p.height);
-    if (this.pending === 'all' || !p || !held || p.ratio !== ratio || !contains(held, wanted)) {
+    const zooming = p !== null && p.view.scale !== view.scale;
+    // While the wheel turns, a bitmap that still shows most of the view is shown scaled, its edges
+    // left for the fresh one drawn when the wheel rests: every zoom frame stays a copy.
+    const enough = held !== null && (contains(held, wanted) || (zooming && coverage(held, wanted) >= MOSTLY));
+    if (this.pending === 'all' || !p || p.ratio !== ratio || !enough) {
       this.render(view, screen, ratio, paint, bounds);
     } else {
       if (this.pending.length > 0) this.repaint(this.pending, paint);
@@ -132,7 +153,7 @@ export class ViewCache {
     };
     const width = Math.max(1, onScreen.x1 - onScreen.x0);
     const height = Math.max(1, onScreen.y1 - onScreen.y0);
-    this.canvas ??= document.createElement('canvas');
+    this.canvas ??= this.makeCanvas();
     this.canvas.width = Math.ceil(width * ratio);
     this.canvas.height = Math.ceil(height * ratio);
     this.placement = { view, left: onScreen.x0, top: onScreen.y0, width, height, ratio };
