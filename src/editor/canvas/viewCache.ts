@@ -129,7 +129,7 @@ export class ViewCache {
       if (this.pending.length > 0) this.repaint(this.pending, paint);
       if (p.view.scale !== view.scale) this.settleLater();
     }
-    this.blit(ctx, view, ratio);
+    this.blit(ctx, view, screen, ratio);
   }
 
   private settleLater(): void {
@@ -196,16 +196,33 @@ export class ViewCache {
   }
 
   /** Copies the bitmap to the screen, scaled when the zoom has moved on since it was drawn. */
-  private blit(ctx: CanvasRenderingContext2D, view: View, ratio: number): void {
+  private blit(ctx: CanvasRenderingContext2D, view: View, screen: Screen, ratio: number): void {
     const p = this.placement;
     if (!this.canvas || !p) return;
     const k = view.scale / p.view.scale;
     const x = ((p.left - p.view.x) / p.view.scale) * view.scale + view.x;
     const y = ((p.top - p.view.y) / p.view.scale) * view.scale + view.y;
+    // Only the part of the bitmap that lands on the screen is copied: a zoomed-in copy costs the
+    // screen's pixels, not the bitmap's blown up.
+    const dx0 = Math.max(0, x);
+    const dy0 = Math.max(0, y);
+    const dx1 = Math.min(screen.width, x + p.width * k);
+    const dy1 = Math.min(screen.height, y + p.height * k);
+    if (dx1 <= dx0 || dy1 <= dy0) return;
     ctx.save();
     ctx.setTransform(ratio, 0, 0, ratio, 0, 0);
-    ctx.imageSmoothingEnabled = k !== 1;
-    ctx.drawImage(this.canvas, x, y, p.width * k, p.height * k);
+    ctx.imageSmoothingEnabled = k < 1;
+    ctx.drawImage(
+      this.canvas,
+      ((dx0 - x) / k) * ratio,
+      ((dy0 - y) / k) * ratio,
+      ((dx1 - dx0) / k) * ratio,
+      ((dy1 - dy0) / k) * ratio,
+      dx0,
+      dy0,
+      dx1 - dx0,
+      dy1 - dy0,
+    );
     ctx.restore();
   }
 }

@@ -1,6 +1,6 @@
 /**
  * The sheet in neutral ink, painted into an area (sheet units): wires, junction dots, open wire
- * ends, part symbols and their text (the grid dots are painted live under it, by paintGrid). Everything of one look is one path and one stroke,
+ * ends, part symbols and their text (the grid dots are painted live under it, by GridLayer). Everything of one look is one path and one stroke,
  * so a thousand parts cost a few canvas calls. Selection and the panels' highlights are painted
  * apart (emphasisPaint.ts); levels by the simulation overlay.
  */
@@ -19,10 +19,6 @@ export interface SceneContent {
   readonly openEnds: readonly Point[];
 }
 
-/** Grid dots at least this many pixels apart: every 1, 5, 25… units as the zoom falls. */
-const MIN_DOT_SPACING_PX = 8;
-const DOT_PX = 2.4;
-
 /** Lines never thinner than this many pixels, so a zoomed-out sheet stays legible. */
 const MIN_LINE_PX = 0.8;
 
@@ -30,26 +26,6 @@ const MIN_LINE_PX = 0.8;
 const OUTLINE_BELOW_PX = 2;
 
 export const lineWidth = (units: number, scale: number): number => Math.max(units, MIN_LINE_PX / scale);
-
-/** Grid dots as dashed rows: one stroke for the whole area, dots exactly on grid points. */
-export function paintGrid(ctx: CanvasRenderingContext2D, area: Rect, scale: number): void {
-  let step = 1;
-  while (step * scale < MIN_DOT_SPACING_PX) step *= 5;
-  const dot = DOT_PX / scale;
-  const x0 = Math.floor(area.x0 / step) * step - dot / 2;
-  ctx.save();
-  ctx.beginPath();
-  for (let y = Math.floor(area.y0 / step) * step; y <= area.y1; y += step) {
-    ctx.moveTo(x0, y);
-    ctx.lineTo(area.x1 + step, y);
-  }
-  ctx.setLineDash([dot, step - dot]);
-  ctx.lineWidth = dot;
-  ctx.lineCap = 'butt';
-  ctx.strokeStyle = SHEET_THEME.gridDot;
-  ctx.stroke();
-  ctx.restore();
-}
 
 export function traceWires(ctx: CanvasRenderingContext2D, wires: readonly SheetWire[]): void {
   for (const w of wires) {
