@@ -53,4 +53,24 @@ describe('open, export, open again', () => {
     expect('job' in loaded && loaded.job.sheet).toBeFalsy();
     expect('job' in loaded && loaded.job.notes.some((n) => n.includes('placed afresh'))).toBe(true);
   });
+
+  it('keeps the model cards the devices name', () => {
+    const text = [
+      '* our own inverter on named models',
+      '.model nch nmos (level=1 vto=0.45 kp=120u)',
+      '.model pch pmos (level=1 vto=-0.42 kp=35u)',
+      '.subckt inv a y vdd gnd',
+      'mp y a vdd vdd pch w=2u l=0.25u',
+      'mn y a gnd gnd nch w=1u l=0.25u',
+      '.ends',
+    ].join('\n');
+    const first = cellsFromText(text, 'inv.sp').cells[0]!;
+    if (!('job' in first)) throw new Error('not read');
+    const sheet = autoPlace(first.job.netlist);
+    const again = exportSpice(sheetToNetlist(sheet, 'inv').netlist, first.job.technology, { sheet });
+    const second = cellsFromText(again, 'inv.sp').cells[0]!;
+    if (!('job' in second)) throw new Error('not read again');
+    expect(second.job.sheet).toEqual(sheet);
+    expect(second.job.netlist.devices.map((d) => ('model' in d ? d.model : null))).toEqual(['pch', 'nch']);
+  });
 });
