@@ -104,9 +104,7 @@ test('the undo history survives a reload', async ({ page }) => {
   }
   expect(await app.undoDepth()).toBe(4); // New and three placements
   await app.waitForAutosave();
-  await expect
-    .poll(() => page.evaluate(() => sessionStorage.getItem('railwise.history.v1') !== null))
-    .toBe(true);
+  await page.waitForFunction(() => window.__railwise!.historyCaughtUp());
   await page.reload();
   await app.open();
   expect(await app.partCount()).toBe(3);

@@ -109,7 +109,7 @@ export function restoreSessionHistory(storage: Storage = sessionStorage): boolea
   return found !== null;
 }
 
-/** Keeps the stored history up to date, writing when the page is idle; returns the stop function. */
+/** Keeps the stored history up to date, writing when the page is idle or goes away; returns the stop function. */
 export function startSessionHistory(storage: Storage = sessionStorage): () => void {
   let cancel: (() => void) | null = null;
   const write = (): void => {
@@ -125,8 +125,16 @@ export function startSessionHistory(storage: Storage = sessionStorage): () => vo
   const unsubscribe = store.subscribe((s, prev) => {
     if (s.history !== prev.history && cancel === null) cancel = whenIdle(write);
   });
+  // A reload right after an edit: the step is kept as the page goes, as the autosave keeps the design.
+  const flush = (): void => {
+    if (cancel === null) return;
+    cancel();
+    write();
+  };
+  window.addEventListener('pagehide', flush);
   return () => {
     unsubscribe();
+    window.removeEventListener('pagehide', flush);
     cancel?.();
   };
 }

@@ -11,6 +11,7 @@ import { AUTO_SWEEP_VECTORS } from '../state/analysis.ts';
 import { currentStage } from '../editor/stageRef.ts';
 import type { Point } from '../core/sheet/types.ts';
 import { AUTOSAVE_KEY, autosavedText } from './autosave.ts';
+import { HISTORY_KEY, historyFor, MAX_STORED_STEPS } from './sessionHistory.ts';
 import { serializeDesign } from '../core/format/designFile.ts';
 
 export interface RailwiseTestApi {
@@ -25,6 +26,8 @@ export interface RailwiseTestApi {
   autosaveKey: string;
   /** True once the autosave holds the design as it is now (expanded first when stored packed). */
   autosaveCaughtUp: () => Promise<boolean>;
+  /** True once the session's stored undo history leads from the document as it is now, step for step. */
+  historyCaughtUp: () => boolean;
   /** Runs an action, renders what it changed and draws every layer now: the work of one frame. */
   frame: (action: () => void) => void;
   setViewport: (v: Viewport) => void;
@@ -71,6 +74,11 @@ export function installTestApi(): void {
     redo,
     autosaveKey: AUTOSAVE_KEY,
     autosaveCaughtUp: async () => (await autosavedText()) === serializeDesign(store.getState().design),
+    historyCaughtUp: () => {
+      const { doc, history } = store.getState();
+      const kept = historyFor(doc, sessionStorage.getItem(HISTORY_KEY));
+      return kept !== null && kept.past.length === Math.min(history.past.length, MAX_STORED_STEPS);
+    },
     frame: drawFrame,
     setViewport,
     toggleInput,
