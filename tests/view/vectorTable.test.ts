@@ -26,7 +26,7 @@ describe('vector table rows', () => {
 
   it('reads sequence steps when there are no sweep vectors', () => {
     const { vectors, ...rest } = nandMissingPullUp;
-    expect(vectorRows({ ...rest, steps: vectors })).toHaveLength(4);
+    expect(vectorRows({ ...rest, steps: vectors ?? [] })).toHaveLength(4);
   });
 });
 
