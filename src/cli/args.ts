@@ -281,7 +281,7 @@ function loadValue(text: string): number {
 export function frequency(text: string): number {
   const hz = /^\s*([0-9]*\.?[0-9]+(?:e[+-]?[0-9]+)?)\s*([kmg]?)hz\s*$/i.exec(text);
   if (hz) {
-    const scale = { '': 1, k: 1e3, m: 1e6, g: 1e9 }[hz[2].toLowerCase() as '' | 'k' | 'm' | 'g'];
+    const scale = { '': 1, k: 1e3, m: 1e6, g: 1e9 }[(hz[2] ?? '').toLowerCase() as '' | 'k' | 'm' | 'g'];
     const value = Number(hz[1]) * scale;
     if (value > 0 && Number.isFinite(value)) return value;
   }
