@@ -40,7 +40,7 @@ test('the resistor-load inverter: pick the vector that draws current and read it
   await header.click();
   await header.click();
   const [top] = await ws.rowIndices();
-  await ws.row(top).click();
+  await ws.row(top!).click();
   await expect(ws.bit('A')).toContainText('1');
 
   // With A = 1 the NMOS is its on-resistance Rn·L/W (Rn = 13 kΩ at W/L = 1: RCN 2nd ed., table 3.3,

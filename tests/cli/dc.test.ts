@@ -51,7 +51,10 @@ describe('--transfer', () => {
     expect(y.points).toHaveLength(201);
     expect(y.points[0]).toEqual([0, expect.closeTo(2.5, 6)]);
     expect(y.points[200]).toEqual([2.5, expect.closeTo(0, 6)]);
-    const { vm, vil, vih, vol, voh, nml, nmh } = y as unknown as Record<string, number>;
+    const { vm, vil, vih, vol, voh, nml, nmh } = y as unknown as Record<
+      'vm' | 'vil' | 'vih' | 'vol' | 'voh' | 'nml' | 'nmh',
+      number
+    >;
     expect(0 < vil && vil < vm && vm < vih && vih < 2.5).toBe(true);
     expect(nml).toBeCloseTo(vil - vol, 12);
     expect(nmh).toBeCloseTo(voh - vih, 12);
