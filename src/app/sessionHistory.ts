@@ -23,22 +23,34 @@ interface StoredHistory {
 }
 
 /** FNV-1a, one step per character. */
-function mixText(h: number, text: string): number {
+function mixChars(h: number, text: string): number {
   for (let i = 0; i < text.length; i++) h = Math.imul(h ^ text.charCodeAt(i), 0x01000193);
-  return Math.imul(h ^ 0x1f, 0x01000193); // a separator, so "ab","c" and "a","bc" differ
+  return h;
 }
 
-/** Mixes a plain value in: arrays in order, objects by sorted key, so key order never matters. */
+/** A text, then a separator, so "ab","c" and "a","bc" differ. */
+function mixText(h: number, text: string): number {
+  return Math.imul(mixChars(h, text) ^ 0x1f, 0x01000193);
+}
+
+/**
+ * Mixes a plain value in: arrays in order, objects by sorted key, so key order never matters; a
+ * leaf as the text `type:value`. Plain loops, as it runs over the whole document at start-up.
+ */
 function mixValue(h: number, v: unknown): number {
-  if (Array.isArray(v)) return v.reduce((acc: number, x) => mixValue(acc, x), mixText(h, '['));
+  if (Array.isArray(v)) {
+    let acc = mixText(h, '[');
+    for (const item of v as unknown[]) acc = mixValue(acc, item);
+    return acc;
+  }
   if (v !== null && typeof v === 'object') {
     const record = v as Record<string, unknown>;
-    return Object.keys(record)
-      .filter((k) => record[k] !== undefined) // as JSON leaves them out
-      .sort()
-      .reduce((acc, k) => mixValue(mixText(acc, k), record[k]), mixText(h, '{'));
+    const keys = Object.keys(record).sort();
+    let acc = mixText(h, '{');
+    for (const k of keys) if (record[k] !== undefined) acc = mixValue(mixText(acc, k), record[k]); // as JSON leaves them out
+    return acc;
   }
-  return mixText(h, `${typeof v}:${String(v)}`);
+  return mixText(mixChars(mixChars(h, typeof v), ':'), String(v));
 }
 
 /**
