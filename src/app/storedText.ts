@@ -2,7 +2,7 @@
  * Design text as the browser's storage keeps it: as it is when short, gzip-compressed and base64
  * encoded (behind a mark) when long. A 5,000-transistor design is about 2.4 million characters of
  * JSON without whitespace (4.7 million indented), near what a site may keep in localStorage;
- * compressed it is a twentieth of that. Compression and expansion run in the browser's stream
+ * packed it is about an eighth of that. Compression and expansion run in the browser's stream
  * machinery.
  */
 
