@@ -190,6 +190,7 @@ export interface StartOptions {
 export function startAnalysis(options: StartOptions = {}): () => void {
   let timer: ReturnType<typeof setTimeout> | null = null;
   let pending: Staleness | null = null;
+  let stopped = false;
   const runDue = (): void => {
     timer = null;
     const due = pending;
@@ -200,6 +201,7 @@ export function startAnalysis(options: StartOptions = {}): () => void {
     // start once it has answered, so their workers do not compete with it for the processor.
     const check = autoCheck(due);
     const rest = (): void => {
+      if (stopped) return;
       autoRun(due);
       autoRunVectorDc(due);
     };
@@ -223,6 +225,7 @@ export function startAnalysis(options: StartOptions = {}): () => void {
   }
   const unsubscribe = store.subscribe((s, previous) => react(s, previous));
   return () => {
+    stopped = true;
     unsubscribe();
     if (timer !== null) clearTimeout(timer);
   };
