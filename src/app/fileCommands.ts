@@ -44,8 +44,10 @@ export function loadImportedCellLater(
   return withFiles(`open ${design.name}`, (files) => files.loadImportedCell(design, fileName, failed));
 }
 
+/** The browser's file dialog; the readers load while the designer picks (a failure shows on open). */
 export function pickAndOpen(): void {
   document.getElementById(OPEN_INPUT_ID)?.click();
+  import('./files.ts').catch(() => {});
 }
 
 export function saveDesign(): void {
