@@ -7,13 +7,13 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import {
   AUTOSAVE_KEY,
   autosavedText,
+  autosaveText,
   openingDone,
   RESCUE_KEY,
   restoreAutosave,
   startAutosave,
 } from '../../src/app/autosave.ts';
 import { isPacked, PACKED_MARK } from '../../src/app/storedText.ts';
-import { serializeDesign } from '../../src/core/format/designFile.ts';
 import { loadDesign, resetStore, store } from '../../src/state/store.ts';
 import { memoryStorage } from '../memoryStorage.ts';
 import { longDesign } from './longDesign.ts';
@@ -40,7 +40,7 @@ describe('autosave of a long design', () => {
     stop();
     expect(isPacked(stored)).toBe(true);
     const text = await autosavedText(storage);
-    expect(text).toBe(serializeDesign(store.getState().design));
+    expect(text).toBe(autosaveText(store.getState().design));
     expect(stored.length).toBeLessThan(text!.length / 5);
     const restored = restoreAutosave(storage, text);
     expect(restored.design?.sheet).toEqual(design.sheet);

@@ -1,0 +1,8 @@
+/**
+ * Which file names are read as what (docs/semantics.md §6), apart from the readers themselves so a
+ * page can offer the right files without loading them.
+ */
+
+/** Extensions read as SPICE-compatible netlists, everywhere. */
+export const SPICE_EXTENSIONS: readonly string[] = ['.sp', '.spi', '.spice', '.cir', '.net', '.cdl', '.ckt'];
+export const DESIGN_EXTENSIONS: readonly string[] = ['.json'];
