@@ -52,6 +52,8 @@ export interface CheckArgs extends CellChoice {
   readonly transfer?: TransferChoice;
   /** Level-1 DC operating point beside each vector. */
   readonly dc: boolean;
+  /** Prove every property for all vectors (docs/semantics.md §10). */
+  readonly prove: boolean;
   /** Output load in farads for --power and --sizing, when given (else the core's default). */
   readonly load?: number;
   readonly jobs?: number;
@@ -98,6 +100,31 @@ const CHECK_OPTIONS = {
   convention: { type: 'string' },
   points: { type: 'string' },
   dc: { type: 'boolean' },
+  prove: { type: 'boolean' },
+} as const satisfies ParseArgsConfig['options'];
+
+/** `railwise compare FILE_A FILE_B`: the cells of two files, read with the same import options. */
+export interface CompareArgs {
+  readonly fileA: string;
+  readonly fileB: string;
+  /** How both files are read; `cell` is unset (each side has its own). */
+  readonly choice: CellChoice;
+  readonly cellA?: string;
+  readonly cellB?: string;
+  readonly json: boolean;
+  readonly help: boolean;
+}
+
+const COMPARE_OPTIONS = {
+  'cell-a': { type: 'string' },
+  'cell-b': { type: 'string' },
+  json: { type: 'boolean' },
+  vdd: { type: 'string' },
+  supply: { type: 'string' },
+  ground: { type: 'string' },
+  scale: { type: 'string' },
+  'treat-as': { type: 'string', multiple: true },
+  help: { type: 'boolean', short: 'h' },
 } as const satisfies ParseArgsConfig['options'];
 
 const EXPORT_OPTIONS = {
@@ -122,6 +149,7 @@ export function parseCheckArgs(argv: readonly string[]): CheckArgs {
     undriven: v.undriven ?? false,
     sizing: v.sizing ?? false,
     dc: v.dc ?? false,
+    prove: v.prove ?? false,
     ...(transfer === undefined ? {} : { transfer }),
     help: v.help ?? false,
     ...(v.load === undefined ? {} : { load: loadValue(v.load) }),
@@ -139,6 +167,22 @@ export function parseExportArgs(argv: readonly string[]): ExportArgs {
     throw new UsageError(`--to must be spice, verilog or csv${v.to === undefined ? '' : ` (got "${v.to}")`}`);
   }
   return { ...cellChoice(v), file: positionals[0] ?? '', to: (v.to ?? 'spice') as ExportFormat, help };
+}
+
+export function parseCompareArgs(argv: readonly string[]): CompareArgs {
+  const { values: v, positionals } = parse(argv, COMPARE_OPTIONS);
+  const help = v.help ?? false;
+  if (!help && positionals.length !== 2)
+    throw new UsageError('compare takes exactly two files, FILE_A FILE_B (see railwise compare --help)');
+  return {
+    fileA: positionals[0] ?? '',
+    fileB: positionals[1] ?? '',
+    choice: cellChoice(v),
+    json: v.json ?? false,
+    help,
+    ...(v['cell-a'] === undefined ? {} : { cellA: v['cell-a'] }),
+    ...(v['cell-b'] === undefined ? {} : { cellB: v['cell-b'] }),
+  };
 }
 
 function parse<T extends NonNullable<ParseArgsConfig['options']>>(argv: readonly string[], options: T) {

@@ -125,7 +125,7 @@ describe('outside the scope of proofs', () => {
 
   it('a loop past the table bound is not covered; a combinational group past it is encoded structurally', () => {
     const latch = proveCell(nandLatch, { maxControls: 1 });
-    expect(latch.properties[0].reason).toMatch(/^not covered: a loop of 2 components/);
+    expect(latch.properties[0].reason).toMatch(/^out of scope for proofs: a loop of 2 components/);
     const gate = proveCell(starterById('aoi21')!.design.netlist, {
       expectations: { Y: '!(A & B | C)' },
       maxControls: 1,

@@ -231,6 +231,14 @@ function countFindings(counts: Record<string, number>, findings: readonly Findin
 }
 
 /**
+ * A check that solves no vector: the structural findings and a note, for a cell whose sweep is
+ * skipped (too many inputs) while a proof covers its vectors.
+ */
+export function checkStructure(netlist: Netlist, options: CheckOptions, note: string): CheckReport {
+  return new Checker(netlist, options, 'vectors').report('vectors', [], [note]);
+}
+
+/**
  * Checks single vectors, each from an unknown state exactly as `checkSweep` checks each of its
  * vectors: the replay of a proof's counterexamples (docs/semantics.md §10).
  */

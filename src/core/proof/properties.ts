@@ -1,4 +1,4 @@
-import type { VectorReport } from '../analysis/report.ts';
+import type { Finding, FindingKind, VectorReport } from '../analysis/report.ts';
 import type { ExpectedValue } from '../expect/evaluate.ts';
 import { own } from '../model/records.ts';
 
@@ -18,25 +18,32 @@ export interface PropertyQuery {
   readonly output: string | null;
 }
 
+/** The findings that show each property violated in a vector's report. */
+const SHOWN_BY: Record<ProofProperty, readonly FindingKind[]> = {
+  function: ['mismatch'],
+  'no-static-current': ['static-current', 'short'],
+  'no-contention': ['contention'],
+  'no-floating': ['floating'],
+  'no-unknown': ['unknown'],
+  'no-degraded': ['degraded'],
+};
+
+/** The findings of a vector that are about this property (for its output, if it has one). */
+export function findingsAbout(q: PropertyQuery, findings: readonly Finding[]): Finding[] {
+  const cellWide = q.output === null;
+  return findings.filter(
+    (f) => SHOWN_BY[q.property].includes(f.kind) && (cellWide || f.nets[0] === q.output),
+  );
+}
+
 /**
  * Whether one checked vector violates a property, read from the same report a sweep gives that
- * vector (its findings and output levels). `expected` is the output's expected value at that vector.
+ * vector: its findings, and for `no-unknown` the output's level (an error finding on the output
+ * stands in for its `unknown` finding, docs/semantics.md §3). `expected` is the output's expected
+ * value at that vector.
  */
 export function violates(q: PropertyQuery, row: VectorReport, expected: ExpectedValue | undefined): boolean {
-  const about = (kind: string): boolean =>
-    row.findings.some((f) => f.kind === kind && f.nets[0] === q.output);
-  switch (q.property) {
-    case 'function':
-      return about('mismatch');
-    case 'no-static-current':
-      return row.findings.some((f) => f.kind === 'static-current' || f.kind === 'short');
-    case 'no-contention':
-      return row.findings.some((f) => f.kind === 'contention');
-    case 'no-floating':
-      return about('floating');
-    case 'no-unknown':
-      return q.output !== null && own(row.outputs, q.output) === 'X' && expected !== 'X';
-    case 'no-degraded':
-      return about('degraded');
-  }
+  if (q.property === 'no-unknown')
+    return q.output !== null && own(row.outputs, q.output) === 'X' && expected !== 'X';
+  return findingsAbout(q, row.findings).length > 0;
 }

@@ -54,7 +54,7 @@ export class Search {
   /** `violated` is the solver's literal; `confirm` reads the replay and says whether it really is. */
   find(violated: number, scope: Scope, confirm: (replay: Replay) => boolean): Outcome {
     const blocker = this.blocker(scope);
-    if (blocker !== null) return { kind: 'unknown', reason: `not covered: ${blocker}` };
+    if (blocker !== null) return { kind: 'unknown', reason: `out of scope for proofs: ${blocker}` };
     const outside = this.outside(scope);
     const inside = this.cnf.sat.solve([violated, -outside]);
     if (inside !== null) {
