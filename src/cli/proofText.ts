@@ -1,11 +1,9 @@
 /** The human lines of a proof (`--prove`) and of a comparison (`compare`). */
 import { brief, printable } from '../core/format/printable.ts';
 import { findingsAbout } from '../core/proof/properties.ts';
+import { vectorText as coreVectorText } from '../core/view/proofView.ts';
 import type { Colour } from './colour.ts';
 import type { ProofJson, PropertyJson } from './proofCell.ts';
-
-/** At most this many inputs are spelled out in a counterexample; the JSON has them all. */
-const MAX_SHOWN_INPUTS = 24;
 
 export function proofLines(proof: ProofJson, inputs: number, c: Colour): string[] {
   const failing = proof.properties.filter((p) => p.holds !== true).length;
@@ -30,9 +28,7 @@ function propertyLine(p: PropertyJson, c: Colour): string {
   return `    ${c.error('FAILS  ')} ${what} at ${vectorText(p.vector ?? {})}${because}`;
 }
 
-/** `A=1 B=0`, the first MAX_SHOWN_INPUTS inputs. */
+/** `A=1 B=0`, the first inputs (the JSON has them all), each name made printable. */
 export function vectorText(vector: Readonly<Record<string, 0 | 1>>): string {
-  const parts = Object.entries(vector).map(([name, v]) => `${printable(name)}=${v}`);
-  const more = parts.length - MAX_SHOWN_INPUTS;
-  return more > 0 ? `${parts.slice(0, MAX_SHOWN_INPUTS).join(' ')} … (${more} more)` : parts.join(' ');
+  return coreVectorText(vector, printable);
 }
