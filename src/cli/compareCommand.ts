@@ -10,6 +10,7 @@ import type { CompareArgs } from './args.ts';
 import { makeColour, terminalSafe, type Colour } from './colour.ts';
 import { loadOneCell, type CellJob } from './loadCells.ts';
 import { vectorText } from './proofText.ts';
+import { vectorCountText } from '../core/view/vectorControl.ts';
 import { failureOf } from './runCell.ts';
 import { EXIT_FINDINGS, EXIT_OK, EXIT_UNUSABLE, UsageError } from './usage.ts';
 
@@ -68,7 +69,7 @@ function comparisonText(r: Comparison, a: CellJob, b: CellJob, seconds: number, 
   const name = (job: CellJob): string =>
     `${c.bold(printable(job.cell))} ${c.dim(`(${printable(job.file)})`)}`;
   const lines = [`${name(a)} against ${name(b)}`];
-  const vectors = `2^${a.netlist.inputs.length} vectors`;
+  const vectors = `${vectorCountText(a.netlist.inputs.length)} vectors`;
   if (r.equivalent === true)
     lines.push(
       `  ${c.bold('equivalent')}: every output has the same level for all ${vectors} (${seconds.toFixed(2)} s)`,

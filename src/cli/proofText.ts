@@ -2,12 +2,13 @@
 import { brief, printable } from '../core/format/printable.ts';
 import { findingsAbout } from '../core/proof/properties.ts';
 import { vectorText as coreVectorText } from '../core/view/proofView.ts';
+import { vectorCountText } from '../core/view/vectorControl.ts';
 import type { Colour } from './colour.ts';
 import type { ProofJson, PropertyJson } from './proofCell.ts';
 
 export function proofLines(proof: ProofJson, inputs: number, c: Colour): string[] {
   const failing = proof.properties.filter((p) => p.holds !== true).length;
-  const head = `  proof (all 2^${inputs} vectors, ${proof.seconds.toFixed(2)} s): ${proof.properties.length - failing} of ${proof.properties.length} properties hold`;
+  const head = `  proof (all ${vectorCountText(inputs)} vectors, ${proof.seconds.toFixed(2)} s): ${proof.properties.length - failing} of ${proof.properties.length} properties hold`;
   // One line per distinct reason: a latch gives every property the same one (docs/semantics.md §10).
   const reasons = [...new Set(proof.properties.flatMap((p) => (p.holds === null ? [p.reason ?? ''] : [])))];
   return [

@@ -2,6 +2,7 @@ import { DEFAULT_MAX_INPUTS } from '../core/analysis/check.ts';
 import type { PropertyResult } from '../core/proof/decide.ts';
 import { findingsAbout } from '../core/proof/properties.ts';
 import { propertyTitle, vectorText } from '../core/view/proofView.ts';
+import { vectorCountText } from '../core/view/vectorControl.ts';
 import { showCounterexample, startProof } from '../state/proof.ts';
 import { cancelJob, useSimulation } from '../state/simulation.ts';
 import { useStore } from '../state/store.ts';
@@ -79,7 +80,7 @@ function ProofStatus() {
     <p className="rw-muted">
       {proof.status === 'cancelled' && 'Proof cancelled. '}
       <button type="button" data-testid="proof-start" onClick={() => void startProof()}>
-        {proof.status === 'done' ? 'Prove again' : `Prove for all 2^${inputs} vectors`}
+        {proof.status === 'done' ? 'Prove again' : `Prove for all ${vectorCountText(inputs)} vectors`}
       </button>
       {proof.status === 'failed' && (
         <span className="rw-error-text" role="alert">
