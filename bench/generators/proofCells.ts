@@ -43,7 +43,7 @@ export function equalityComparator(bits: number): Netlist {
     return `${pin}_b`;
   };
   let level = a.map((ai, i) => {
-    const [x, y] = [buffered(ai), buffered(b[i])];
+    const [x, y] = [buffered(ai), buffered(`B${i}`)];
     cells.push(xorOfNands(`x${i}.`, x, y, `d${i}`), inverter(`x${i}.inv`, `d${i}`, `e${i}`));
     return `e${i}`;
   });
@@ -52,15 +52,16 @@ export function equalityComparator(bits: number): Netlist {
     for (let i = 0; i + 1 < level.length; i += 2) {
       const y = level.length === 2 ? 'EQ' : `t${depth}_${i / 2}`;
       cells.push(
-        nand2(`and${depth}_${i / 2}.`, level[i], level[i + 1], `${y}_n`),
+        nand2(`and${depth}_${i / 2}.`, level[i]!, level[i + 1]!, `${y}_n`), // i + 1 < length
         inverter(`and${depth}_${i / 2}.inv`, `${y}_n`, y),
       );
       next.push(y);
     }
-    if (level.length % 2 === 1) next.push(level[level.length - 1]);
+    const last = level[level.length - 1];
+    if (level.length % 2 === 1 && last !== undefined) next.push(last);
     level = next;
   }
-  const outputs = bits === 1 ? [level[0]] : ['EQ'];
+  const outputs = bits === 1 ? ['e0'] : ['EQ'];
   return assemble(`equality-${bits}`, { inputs: [...a, ...b], outputs }, cells);
 }
 
@@ -99,7 +100,7 @@ export function nandRippleAdder(bits: number): Netlist {
   const sum = numbered('S', bits);
   const carry = (i: number): string => (i === 0 ? 'CI' : i === bits ? 'CO' : `c${i}`);
   const cells = sum.map((s, i) =>
-    nandFullAdder(`FA${i}.`, { a: a[i], b: b[i], ci: carry(i), sum: s, co: carry(i + 1) }),
+    nandFullAdder(`FA${i}.`, { a: `A${i}`, b: `B${i}`, ci: carry(i), sum: s, co: carry(i + 1) }),
   );
   return assemble(
     `nand-ripple-adder-${bits}`,

@@ -31,8 +31,9 @@ export function compareCommand(args: CompareArgs, io: CompareOutput): number {
     { ...args.choice, ...(args.cellB === undefined ? {} : { cell: args.cellB }) },
     '--cell-b',
   );
-  for (const side of [a, b]) if ('problem' in side) return unusable(io, args, side.problem);
-  const [ja, jb] = [a, b].map((side) => (side as { job: CellJob }).job);
+  if ('problem' in a) return unusable(io, args, a.problem);
+  if ('problem' in b) return unusable(io, args, b.problem);
+  const [ja, jb] = [a.job, b.job];
   let result: Comparison;
   const started = performance.now();
   try {

@@ -64,8 +64,9 @@ describe('published facts', () => {
     expect(found.equivalent).toBe(false);
     // The good adder's answer at the counterexample is the sum A + B + CI (arithmetic).
     const v = found.vector!;
-    const word = (stem: string): number => [0, 1, 2, 3].reduce((s, i) => s + v[`${stem}${i}`] * 2 ** i, 0);
-    const sum = word('A') + word('B') + v.CI;
+    const word = (stem: string): number =>
+      [0, 1, 2, 3].reduce((s, i) => s + (v[`${stem}${i}`] ?? NaN) * 2 ** i, 0);
+    const sum = word('A') + word('B') + (v['CI'] ?? NaN);
     const read = (levels: Record<string, string>): number =>
       [0, 1, 2, 3].reduce((s, i) => s + (levels[`S${i}`] === '1' ? 2 ** i : 0), 0) +
       (levels.CO === '1' ? 16 : 0);
@@ -95,13 +96,13 @@ describe('agreement with two sweeps (internal consistency, fixed seed)', () => {
         if (found.equivalent === null) undecided++;
         const [a, b] = [checkSweep(netlist), checkSweep(other)];
         const differs = a.vectors!.map(
-          (row, i) => JSON.stringify(row.outputs) !== JSON.stringify(b.vectors![i].outputs),
+          (row, i) => JSON.stringify(row.outputs) !== JSON.stringify(b.vectors?.[i]?.outputs),
         );
         if (found.equivalent === true) expect(differs.some(Boolean)).toBe(false);
         if (found.equivalent === false) {
-          const index = netlist.inputs.reduce((k, n) => k * 2 + found.vector![n], 0);
+          const index = netlist.inputs.reduce((k, n) => k * 2 + (found.vector?.[n] ?? NaN), 0);
           expect(differs[index]).toBe(true);
-          expect(found.outputs).toEqual({ a: a.vectors![index].outputs, b: b.vectors![index].outputs });
+          expect(found.outputs).toEqual({ a: a.vectors?.[index]?.outputs, b: b.vectors?.[index]?.outputs });
         }
       }),
       { numRuns: 80, seed: 1203 },

@@ -57,7 +57,7 @@ describe('each property holds on a good cell and fails at a known vector on a fa
     const load = prove(resistorLoadInverter)('no-static-current');
     expect(load.holds).toBe(false);
     expect(load.vector).toEqual({ A: 1 });
-    expect(load.findings![0].path).toEqual(['VDD', 'R1', 'Y', 'N1', 'GND']);
+    expect(load.findings?.[0]?.path).toEqual(['VDD', 'R1', 'Y', 'N1', 'GND']);
   });
 
   it('no-contention and no-unknown: two inverters on one net fight where A and B differ', () => {
@@ -125,7 +125,7 @@ describe('outside the scope of proofs', () => {
 
   it('a loop past the table bound is not covered; a combinational group past it is encoded structurally', () => {
     const latch = proveCell(nandLatch, { maxControls: 1 });
-    expect(latch.properties[0].reason).toMatch(/^out of scope for proofs: a loop of 2 components/);
+    expect(latch.properties[0]?.reason).toMatch(/^out of scope for proofs: a loop of 2 components/);
     const gate = proveCell(starterById('aoi21')!.design.netlist, {
       expectations: { Y: '!(A & B | C)' },
       maxControls: 1,

@@ -69,7 +69,7 @@ function build(inputCount: number, stages: readonly Stage[], outputCount: number
     .rails()
     .input(...inputs);
   stages.forEach((s, k) => {
-    const [made, signal] = addStage(b, s, `s${k}`, (i) => pool[s.picks[i] % pool.length]);
+    const [made, signal] = addStage(b, s, `s${k}`, (i) => pool[(s.picks[i] ?? 0) % pool.length]!); // the pool holds the inputs at least
     b = made;
     pool.push(signal);
   });
@@ -150,7 +150,10 @@ function paren(s: Signal): string {
 }
 
 /** A small series-parallel tree over up to three signals, chosen by `shape`. */
-function treeOf(shape: number, signals: readonly Signal[]): { tree: SpTree; expr: string; used: Signal[] } {
+function treeOf(
+  shape: number,
+  signals: readonly [Signal, Signal, Signal],
+): { tree: SpTree; expr: string; used: Signal[] } {
   const leaf = (s: Signal): SpTree => ({ kind: 'leaf', input: s.net });
   const [p, q, r] = signals;
   switch (shape % 4) {

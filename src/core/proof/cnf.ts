@@ -88,9 +88,9 @@ export class Cnf {
     let row: number[] = Array.from(truth, (bit) => (bit ? TRUE : FALSE));
     for (const control of controls) {
       const next = new Array<number>(row.length >> 1);
-      for (let j = 0; j < next.length; j++) next[j] = this.ite(control, row[2 * j + 1], row[2 * j]);
+      for (let j = 0; j < next.length; j++) next[j] = this.ite(control, row[2 * j + 1]!, row[2 * j]!);
       row = next;
     }
-    return row[0];
+    return row[0]!;
   }
 }

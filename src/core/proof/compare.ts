@@ -1,5 +1,5 @@
 import { VectorChecker } from '../analysis/check.ts';
-import type { Level } from '../analysis/report.ts';
+import type { Level, VectorReport } from '../analysis/report.ts';
 import { compile } from '../compile/compile.ts';
 import type { Netlist } from '../model/netlist.ts';
 import { recordOf } from '../model/records.ts';
@@ -8,7 +8,7 @@ import { Cnf } from './cnf.ts';
 import { bits } from './decide.ts';
 import { CellEncoding } from './encodeCell.ts';
 import { SatLimitError } from './sat.ts';
-import { Search, type Replay } from './search.ts';
+import { Search, type Replay, type Side } from './search.ts';
 
 /** Two cells that cannot be compared: their pins differ. */
 export class ComparisonError extends Error {
@@ -45,23 +45,26 @@ export function compareCells(
   samePins(a.netlist, b.netlist);
   const cnf = new Cnf();
   const inputs = new Map<string, number>();
-  const sides = [a, b].map((side) => {
+  const encode = (side: ComparedCell): Side => {
     const technology = side.technology ?? DEFAULT_TECHNOLOGY;
     const cell = new CellEncoding(cnf, compile(side.netlist, technology), inputs, options);
     return { cell, checker: new VectorChecker(side.netlist, { technology }) };
-  });
+  };
+  const sides = [encode(a), encode(b)] as const;
   const outputs = a.netlist.outputs;
+  const netOf = (cell: CellEncoding, name: string): number => cell.compiled.netIndex.get(name) as number;
   const differ = cnf.or(
     outputs.map((name) => {
-      const [la, lb] = sides.map(({ cell }) => cell.level(cell.compiled.netIndex.get(name) as number));
+      const [la, lb] = [
+        sides[0].cell.level(netOf(sides[0].cell, name)),
+        sides[1].cell.level(netOf(sides[1].cell, name)),
+      ];
       return cnf.or([cnf.xor(la.l0, lb.l0), cnf.xor(la.l1, lb.l1), cnf.xor(la.lz, lb.lz)]);
     }),
   );
-  const groups = sides.map(({ cell }) =>
-    cell.cone(outputs.map((name) => cell.compiled.netIndex.get(name) as number)),
-  );
-  const confirm = (replay: Replay): boolean =>
-    outputs.some((o) => replay.rows[0].outputs[o] !== replay.rows[1].outputs[o]);
+  const groups = sides.map(({ cell }) => cell.cone(outputs.map((name) => netOf(cell, name))));
+  const confirm = ({ rows: [ra, rb] }: Replay): boolean =>
+    outputs.some((o) => ra?.outputs[o] !== rb?.outputs[o]);
   try {
     const outcome = new Search(cnf, sides, a.netlist.inputs).find(
       differ,
@@ -75,7 +78,10 @@ export function compareCells(
         return { equivalent: null, reason: outcome.reason };
       case 'violated': {
         const [ra, rb] = outcome.replay.rows;
-        const levels = (row: typeof ra) => recordOf(outputs.map((o) => [o, row.outputs[o]] as const));
+        const levels = (row: VectorReport | undefined): Record<string, Level> =>
+          recordOf(
+            outputs.flatMap((o) => (row?.outputs[o] === undefined ? [] : [[o, row.outputs[o]] as const])),
+          );
         return { equivalent: false, vector: bits(outcome.replay), outputs: { a: levels(ra), b: levels(rb) } };
       }
     }

@@ -23,7 +23,7 @@ export function decide(search: Search, p: PropertyCheck): PropertyResult {
   const base = { property: p.property, output: p.output };
   const confirm = (replay: Replay): boolean => {
     const expected = p.expected === null ? undefined : evaluateExpression(p.expected, replay.vector);
-    return violates(p, replay.rows[0], expected);
+    return violates(p, replay.rows[0]!, expected);
   };
   const outcome = search.find(p.violated, { groups: [p.groups], bridges: p.bridges }, confirm);
   switch (outcome.kind) {
@@ -32,7 +32,12 @@ export function decide(search: Search, p: PropertyCheck): PropertyResult {
     case 'unknown':
       return { ...base, holds: null, reason: outcome.reason };
     case 'violated':
-      return { ...base, holds: false, vector: bits(outcome.replay), findings: outcome.replay.findings[0] };
+      return {
+        ...base,
+        holds: false,
+        vector: bits(outcome.replay),
+        findings: outcome.replay.findings[0] ?? [],
+      };
   }
 }
 

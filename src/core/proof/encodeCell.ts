@@ -30,7 +30,10 @@ export class CellEncoding {
     private readonly inputs: Map<string, number>,
     options: { readonly maxControls?: number } = {},
   ) {
-    this.tables = new ComponentTables(compiled, { maxControls: options.maxControls });
+    this.tables = new ComponentTables(
+      compiled,
+      options.maxControls === undefined ? {} : { maxControls: options.maxControls },
+    );
     for (const name of compiled.netlist.inputs) if (!inputs.has(name)) inputs.set(name, cnf.fresh());
     const context = this.context();
     const { topology } = this.tables.schedule;
@@ -67,7 +70,7 @@ export class CellEncoding {
   /** Level literals of an output. */
   level(n: number): LevelLits {
     const { vil, vih } = this.compiled.tech;
-    const v = this.compiled.railVolts[n];
+    const v = this.compiled.railVolts[n]!;
     if (!Number.isNaN(v)) {
       const level = classify(v, vil, vih);
       return {
@@ -88,11 +91,11 @@ export class CellEncoding {
   cone(nets: readonly number[]): number[] {
     const { groupOfNet, shapes } = this.tables;
     const seen = new Set<number>();
-    const todo = nets.map((n) => groupOfNet[n]).filter((s) => s >= 0);
+    const todo = nets.map((n) => groupOfNet[n]!).filter((s) => s >= 0);
     for (let s = todo.pop(); s !== undefined; s = todo.pop()) {
       if (seen.has(s)) continue;
       seen.add(s);
-      for (const c of shapes[s].controls) if (groupOfNet[c] >= 0) todo.push(groupOfNet[c]);
+      for (const c of shapes[s]!.controls) if (groupOfNet[c]! >= 0) todo.push(groupOfNet[c]!);
     }
     return [...seen].sort((a, b) => a - b);
   }
@@ -104,7 +107,7 @@ export class CellEncoding {
 
   /** True for the vectors where some of these groups (or, with `bridges`, a bridge) is not described. */
   unknown(groups: readonly number[], bridges = false): number {
-    const lits = groups.map((s) => this.groups[s].unknown);
+    const lits = groups.map((s) => this.groups[s]!.unknown);
     return this.cnf.or(bridges ? [...lits, ...this.bridges.map((b) => b.unknown)] : lits);
   }
 
@@ -119,7 +122,7 @@ export class CellEncoding {
 
   private sourcePin(n: number): number | undefined {
     const { isSource } = this.tables.schedule.topology;
-    return isSource[n] ? this.inputs.get(this.compiled.netNames[n]) : undefined;
+    return isSource[n] ? this.inputs.get(this.compiled.netNames[n]!) : undefined;
   }
 
   private context(): GroupContext {
@@ -128,9 +131,9 @@ export class CellEncoding {
     for (const o of c.outputNets) output[o] = 1;
     return {
       rail: (n) => this.rail(n),
-      needsRail: (n) => c.netGates.start[n + 1] > c.netGates.start[n],
+      needsRail: (n) => c.netGates.start[n + 1]! > c.netGates.start[n]!,
       needsLevel: (n) => output[n] === 1,
-      name: (n) => c.netNames[n],
+      name: (n) => c.netNames[n] ?? `net ${n}`,
     };
   }
 
@@ -138,14 +141,14 @@ export class CellEncoding {
   private bridge(e: number): BridgeLits {
     const c = this.compiled;
     const kind = c.chKind[e];
-    const gate = kind === NMOS || kind === PMOS ? this.rail(c.chGate[e]) : { high: TRUE, low: FALSE };
+    const gate = kind === NMOS || kind === PMOS ? this.rail(c.chGate[e]!) : { high: TRUE, low: FALSE };
     const on = kind === NMOS ? gate.high : kind === PMOS ? gate.low : TRUE;
-    const [a, b] = [c.chA[e], c.chB[e]];
+    const [a, b] = [c.chA[e]!, c.chB[e]!];
     const odd = (n: number): boolean =>
-      !Number.isNaN(c.railVolts[n]) && c.railVolts[n] !== 0 && c.railVolts[n] !== c.tech.vdd;
+      !Number.isNaN(c.railVolts[n]!) && c.railVolts[n] !== 0 && c.railVolts[n] !== c.tech.vdd;
     const differ =
       odd(a) || odd(b)
-        ? !Number.isNaN(c.railVolts[a]) && !Number.isNaN(c.railVolts[b])
+        ? !Number.isNaN(c.railVolts[a]!) && !Number.isNaN(c.railVolts[b]!)
           ? c.railVolts[a] !== c.railVolts[b]
             ? TRUE
             : FALSE

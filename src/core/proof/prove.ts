@@ -31,11 +31,18 @@ export interface ProofReport {
 export function proveCell(netlist: Netlist, options: ProofOptions = {}): ProofReport {
   const technology = options.technology ?? DEFAULT_TECHNOLOGY;
   const expectations = new Map(parsedExpectations(netlist, options.expectations));
-  const checker = new VectorChecker(netlist, { technology, expectations: options.expectations });
-  const cnf = new Cnf();
-  const cell = new CellEncoding(cnf, compile(netlist, technology), new Map(), {
-    maxControls: options.maxControls,
+  const { expectations: texts, maxControls } = options;
+  const checker = new VectorChecker(netlist, {
+    technology,
+    ...(texts === undefined ? {} : { expectations: texts }),
   });
+  const cnf = new Cnf();
+  const cell = new CellEncoding(
+    cnf,
+    compile(netlist, technology),
+    new Map(),
+    maxControls === undefined ? {} : { maxControls },
+  );
   const checks = propertyChecks(cnf, cell, expectations);
   const search = new Search(cnf, [{ cell, checker }], netlist.inputs);
   const properties: PropertyResult[] = [];

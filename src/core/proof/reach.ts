@@ -18,8 +18,8 @@ export function reach(cnf: Cnf, seeds: readonly number[], links: readonly Link[]
   for (let d = 0; d < layers; d++) {
     const incoming: number[][] = current.map((lit) => [lit]);
     for (const { a, b, conducts } of links) {
-      incoming[a].push(cnf.and([conducts, current[b]]));
-      incoming[b].push(cnf.and([conducts, current[a]]));
+      incoming[a]!.push(cnf.and([conducts, current[b]!]));
+      incoming[b]!.push(cnf.and([conducts, current[a]!]));
     }
     const next = incoming.map((lits) => cnf.or(lits));
     if (next.every((lit, i) => lit === current[i])) break;
@@ -35,8 +35,8 @@ export function reach(cnf: Cnf, seeds: readonly number[], links: readonly Link[]
 export function layersNeeded(netCount: number, links: readonly Link[]): number {
   const adjacent: number[][] = Array.from({ length: netCount }, () => []);
   for (const { a, b } of links) {
-    adjacent[a].push(b);
-    adjacent[b].push(a);
+    adjacent[a]!.push(b);
+    adjacent[b]!.push(a);
   }
   if (links.length >= netCount || hasLoop(netCount, links)) return Math.max(0, netCount - 1);
   const seen = new Uint8Array(netCount);
@@ -52,7 +52,7 @@ export function layersNeeded(netCount: number, links: readonly Link[]): number {
 function hasLoop(netCount: number, links: readonly Link[]): boolean {
   const parent = Int32Array.from({ length: netCount }, (_, i) => i);
   const root = (x: number): number => {
-    while (parent[x] !== x) x = parent[x] = parent[parent[x]];
+    while (parent[x] !== x) x = parent[x] = parent[parent[x]!]!;
     return x;
   };
   for (const { a, b } of links) {
@@ -73,7 +73,7 @@ function farthest(adjacent: readonly number[][], start: number, seen: Uint8Array
     const next: number[] = [];
     for (const n of frontier) {
       last = n;
-      for (const m of adjacent[n]) {
+      for (const m of adjacent[n]!) {
         if (seen[m]) continue;
         seen[m] = 1;
         next.push(m);

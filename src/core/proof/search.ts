@@ -44,12 +44,18 @@ export type Outcome =
 export class Search {
   private readonly replays = new Map<string, Replay>();
   private readonly blockers = new Map<string, string | null>();
+  /** The first side's encoding, whose input literals every side shares. */
+  private readonly first: CellEncoding;
 
   constructor(
     private readonly cnf: Cnf,
     private readonly sides: readonly Side[],
     private readonly inputs: readonly string[],
-  ) {}
+  ) {
+    const [side] = sides;
+    if (side === undefined) throw new RangeError('a search needs at least one cell');
+    this.first = side.cell;
+  }
 
   /** `violated` is the solver's literal; `confirm` reads the replay and says whether it really is. */
   find(violated: number, scope: Scope, confirm: (replay: Replay) => boolean): Outcome {
@@ -88,7 +94,7 @@ export class Search {
   }
 
   private outside(scope: Scope): number {
-    return this.cnf.or(this.sides.map((side, i) => side.cell.unknown(scope.groups[i], scope.bridges)));
+    return this.cnf.or(this.sides.map((side, i) => side.cell.unknown(scope.groups[i] ?? [], scope.bridges)));
   }
 
   /**
@@ -99,7 +105,7 @@ export class Search {
     for (const [i, groups] of scope.groups.entries()) {
       for (const s of groups) {
         const key = `${i}:${s}`;
-        if (!this.blockers.has(key)) this.blockers.set(key, this.groupBlocker(this.sides[i].cell, s));
+        if (!this.blockers.has(key)) this.blockers.set(key, this.groupBlocker(this.sides[i]!.cell, s));
         const found = this.blockers.get(key);
         if (found) return found;
       }
@@ -108,9 +114,9 @@ export class Search {
   }
 
   private groupBlocker(cell: CellEncoding, s: number): string | null {
-    const group = cell.groups[s];
+    const group = cell.groups[s]!;
     if (group.blocker !== null || group.storedState === FALSE) return group.blocker;
-    const cone = cell.cone([cell.tables.shapes[s].nets[0]]);
+    const cone = cell.cone([cell.tables.shapes[s]!.nets[0]!]);
     const model = this.cnf.sat.solve([group.storedState, -cell.unknown(cone)]);
     if (model === null) return null;
     const at = label(this.replay(model).vector);
@@ -120,14 +126,14 @@ export class Search {
   /** Under `active`, the solver may not choose this vector again. */
   private exclude(active: number, vector: InputVector): void {
     const lits = this.inputs.map((name) => {
-      const x = this.sides[0].cell.input(name) as number;
+      const x = this.first.input(name) as number;
       return vector[name] === '1' ? -x : x;
     });
     this.cnf.sat.addClause([-active, ...lits]);
   }
 
   private replay(model: boolean[]): Replay {
-    const cell = this.sides[0].cell;
+    const cell = this.first;
     const vector: InputVector = recordOf(
       this.inputs.map((name) => [name, model[cell.input(name) as number] ? '1' : '0'] as const),
     );
@@ -147,18 +153,18 @@ export class Search {
 
   /** Which group a model leaves undescribed, and why: controls off the rails, or a ratioed fight. */
   private whyOutside(model: boolean[], scope: Scope): string {
-    const value = (lit: number): boolean => (lit > 0 ? model[lit] : !model[-lit]);
+    const value = (lit: number): boolean => (lit > 0 ? model[lit] === true : model[-lit] !== true);
     for (const [i, groups] of scope.groups.entries()) {
-      const cell = this.sides[i].cell;
+      const cell = this.sides[i]!.cell;
       const names = cell.compiled.netNames;
       for (const s of groups) {
-        if (!value(cell.groups[s].unknown)) continue;
-        const shape = cell.tables.shapes[s];
+        if (!value(cell.groups[s]!.unknown)) continue;
+        const shape = cell.tables.shapes[s]!;
         const off = Array.from(shape.controls).filter(
           (n) => !value(cell.rail(n).high) && !value(cell.rail(n).low),
         );
         if (off.length > 0) return `${off.map((n) => names[n]).join(', ')} at neither 0 V nor VDD`;
-        return `sources of both levels meet at ${names[shape.nets[0]]}, a ratioed group past the table bound`;
+        return `sources of both levels meet at ${names[shape.nets[0]!]}, a ratioed group past the table bound`;
       }
     }
     return 'a device between two sources has its gate at neither 0 V nor VDD';

@@ -36,14 +36,14 @@ export function encodeStructural(
   const low = reach(cnf, parts.seeds.low, parts.links.on, layers);
   const fullHigh = reach(cnf, parts.seeds.fullHigh, parts.links.fullHigh, layers);
   const fullLow = reach(cnf, parts.seeds.fullLow, parts.links.fullLow, layers);
-  const fight = cnf.or(Array.from(shape.nets, (_, i) => cnf.and([high[i], low[i]])));
+  const fight = cnf.or(Array.from(shape.nets, (_, i) => cnf.and([high[i]!, low[i]!])));
   const { vdd, vtn, vtp, vil, vih } = c.tech;
   const droppedHigh = classify(vdd - vtn, vil, vih);
   const droppedLow = classify(vtp, vil, vih);
   const rails = new Map<number, RailLits>();
   const levels = new Map<number, LevelLits>();
   shape.nets.forEach((n, i) => {
-    const [h, l, fh, fl] = [high[i], low[i], fullHigh[i], fullLow[i]];
+    const [h, l, fh, fl] = [high[i]!, low[i]!, fullHigh[i]!, fullLow[i]!];
     if (context.needsRail(n)) rails.set(n, { high: cnf.and([fh, -l]), low: cnf.and([fl, -h]) });
     if (!context.needsLevel(n)) return;
     levels.set(n, {
@@ -96,20 +96,20 @@ function deviceParts(
   const offRail: number[] = [];
   for (const e of shape.elements) {
     const kind = c.chKind[e];
-    const gate = kind === NMOS || kind === PMOS ? context.rail(c.chGate[e]) : { high: TRUE, low: FALSE };
+    const gate = kind === NMOS || kind === PMOS ? context.rail(c.chGate[e]!) : { high: TRUE, low: FALSE };
     offRail.push(cnf.and([-gate.high, -gate.low]));
     const on = kind === NMOS ? gate.high : kind === PMOS ? gate.low : TRUE;
     const passesHigh = kind !== NMOS ? on : FALSE;
     const passesLow = kind !== PMOS ? on : FALSE;
-    const [a, b] = [c.chA[e], c.chB[e]];
+    const [a, b] = [c.chA[e]!, c.chB[e]!];
     if (topology.isSource[a] || topology.isSource[b]) {
       const [src, net] = topology.isSource[a] ? [a, local.get(b)] : [b, local.get(a)];
       if (net === undefined) continue;
       const level = context.rail(src);
-      seedLists.high[net].push(cnf.and([on, level.high]));
-      seedLists.low[net].push(cnf.and([on, level.low]));
-      seedLists.fullHigh[net].push(cnf.and([passesHigh, level.high]));
-      seedLists.fullLow[net].push(cnf.and([passesLow, level.low]));
+      seedLists.high[net]!.push(cnf.and([on, level.high]));
+      seedLists.low[net]!.push(cnf.and([on, level.low]));
+      seedLists.fullHigh[net]!.push(cnf.and([passesHigh, level.high]));
+      seedLists.fullLow[net]!.push(cnf.and([passesLow, level.low]));
       continue;
     }
     const [i, j] = [local.get(a) as number, local.get(b) as number];
@@ -143,8 +143,8 @@ function cannotEncode(c: CompiledNetlist, topology: Topology, shape: GroupShape)
   for (const e of shape.elements) {
     if (topology.selfGate[e] !== 0)
       return `a self-gated (diode-connected) device in a group past the table bound`;
-    for (const end of [c.chA[e], c.chB[e]]) {
-      const v = c.railVolts[end];
+    for (const end of [c.chA[e]!, c.chB[e]!]) {
+      const v = c.railVolts[end]!;
       if (!Number.isNaN(v) && v !== 0 && v !== c.tech.vdd)
         return `a rail at ${v} V feeds a group past the table bound`;
     }
@@ -161,7 +161,7 @@ function blocked(cnf: Cnf, shape: GroupShape, context: GroupContext, reason: str
     if (context.needsLevel(n))
       levels.set(n, { l0: cnf.fresh(), l1: cnf.fresh(), lz: cnf.fresh(), degraded: cnf.fresh() });
   }
-  const name = context.name(shape.nets[0]);
+  const name = context.name(shape.nets[0]!);
   return {
     rails,
     levels,

@@ -18,7 +18,7 @@ export function encodeTabled(cnf: Cnf, table: GroupTable, context: GroupContext)
   const column = (test: (state: number, flags: number) => boolean, i: number): number => {
     const truth = new Uint8Array(table.entries);
     for (let e = 0; e < table.entries; e++)
-      truth[e] = test(table.states[e * width + i], table.flags[e * width + i]) ? 1 : 0;
+      truth[e] = test(table.states[e * width + i]!, table.flags[e * width + i]!) ? 1 : 0;
     return cnf.truthTable(bits, truth);
   };
   const rails = new Map<number, RailLits>();
@@ -41,7 +41,7 @@ export function encodeTabled(cnf: Cnf, table: GroupTable, context: GroupContext)
   });
   const anyNet = (test: (flags: number) => boolean): Uint8Array =>
     Uint8Array.from({ length: table.entries }, (_, e) => {
-      for (let i = 0; i < width; i++) if (test(table.flags[e * width + i])) return 1;
+      for (let i = 0; i < width; i++) if (test(table.flags[e * width + i]!)) return 1;
       return 0;
     });
   return {
@@ -67,7 +67,7 @@ function storedNets(table: GroupTable, context: GroupContext): string[] {
   const width = table.shape.nets.length;
   return Array.from(table.shape.nets, (n, i) => {
     for (let e = 0; e < table.entries; e++)
-      if (table.flags[e * width + i] & FLAG_STATES) return [context.name(n)];
+      if (table.flags[e * width + i]! & FLAG_STATES) return [context.name(n)];
     return [];
   }).flat();
 }

@@ -29,7 +29,8 @@ export function propertyChecks(
   const outputs = c.netlist.outputs.map((name, i) => {
     const expr = expectations.get(name) ?? null;
     const lits: ExpectedLits | null = expr && encodeExpected(cnf, expr, (pin) => cell.input(pin));
-    return { name, net: c.outputNets[i], expr, lits, groups: cell.cone([c.outputNets[i]]) };
+    const net = c.outputNets[i]!; // one net per output, in order
+    return { name, net, expr, lits, groups: cell.cone([net]) };
   });
   const all = cell.allGroups();
   type Output = (typeof outputs)[number];
