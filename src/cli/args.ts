@@ -103,30 +103,6 @@ const CHECK_OPTIONS = {
   prove: { type: 'boolean' },
 } as const satisfies ParseArgsConfig['options'];
 
-/** `railwise compare FILE_A FILE_B`: the cells of two files, read with the same import options. */
-export interface CompareArgs {
-  readonly fileA: string;
-  readonly fileB: string;
-  /** How both files are read; `cell` is unset (each side has its own). */
-  readonly choice: CellChoice;
-  readonly cellA?: string;
-  readonly cellB?: string;
-  readonly json: boolean;
-  readonly help: boolean;
-}
-
-const COMPARE_OPTIONS = {
-  'cell-a': { type: 'string' },
-  'cell-b': { type: 'string' },
-  json: { type: 'boolean' },
-  vdd: { type: 'string' },
-  supply: { type: 'string' },
-  ground: { type: 'string' },
-  scale: { type: 'string' },
-  'treat-as': { type: 'string', multiple: true },
-  help: { type: 'boolean', short: 'h' },
-} as const satisfies ParseArgsConfig['options'];
-
 const EXPORT_OPTIONS = {
   ...CELL_OPTIONS,
   to: { type: 'string' },
@@ -169,23 +145,11 @@ export function parseExportArgs(argv: readonly string[]): ExportArgs {
   return { ...cellChoice(v), file: positionals[0] ?? '', to: (v.to ?? 'spice') as ExportFormat, help };
 }
 
-export function parseCompareArgs(argv: readonly string[]): CompareArgs {
-  const { values: v, positionals } = parse(argv, COMPARE_OPTIONS);
-  const help = v.help ?? false;
-  if (!help && positionals.length !== 2)
-    throw new UsageError('compare takes exactly two files, FILE_A FILE_B (see railwise compare --help)');
-  return {
-    fileA: positionals[0] ?? '',
-    fileB: positionals[1] ?? '',
-    choice: cellChoice(v),
-    json: v.json ?? false,
-    help,
-    ...(v['cell-a'] === undefined ? {} : { cellA: v['cell-a'] }),
-    ...(v['cell-b'] === undefined ? {} : { cellB: v['cell-b'] }),
-  };
-}
-
-function parse<T extends NonNullable<ParseArgsConfig['options']>>(argv: readonly string[], options: T) {
+/** `util.parseArgs` with every problem a UsageError (exit status 2). */
+export function parse<T extends NonNullable<ParseArgsConfig['options']>>(
+  argv: readonly string[],
+  options: T,
+) {
   try {
     return parseArgs({ args: [...argv], options, allowPositionals: true, strict: true });
   } catch (e) {
@@ -193,7 +157,7 @@ function parse<T extends NonNullable<ParseArgsConfig['options']>>(argv: readonly
   }
 }
 
-interface CellValues {
+export interface CellValues {
   cell?: string;
   inputs?: string;
   outputs?: string;
@@ -208,7 +172,8 @@ interface CellValues {
   'functions-from'?: string;
 }
 
-function cellChoice(v: CellValues): CellChoice {
+/** How a file is read and which of its cells, from the flags check, export and compare share. */
+export function cellChoice(v: CellValues): CellChoice {
   return {
     expect: expectations(v.expect ?? []),
     supply: list(v.supply),

@@ -6,7 +6,7 @@
 import { CAUTION } from '../core/caution.ts';
 import { brief, printable } from '../core/format/printable.ts';
 import { ComparisonError, compareCells, type Comparison } from '../core/proof/compare.ts';
-import type { CompareArgs } from './args.ts';
+import type { CompareArgs } from './compareArgs.ts';
 import { makeColour, terminalSafe, type Colour } from './colour.ts';
 import { loadOneCell, type CellJob } from './loadCells.ts';
 import { vectorText } from './proofText.ts';

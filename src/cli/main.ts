@@ -2,7 +2,8 @@
  * The `railwise` command. `run` takes the arguments and an output sink and returns the exit status,
  * so tests can call it directly; bin/railwise.mjs wires it to the process.
  */
-import { parseCheckArgs, parseCompareArgs, parseExportArgs } from './args.ts';
+import { parseCheckArgs, parseExportArgs } from './args.ts';
+import { parseCompareArgs } from './compareArgs.ts';
 import { checkCommand } from './checkCommand.ts';
 import { colourWanted } from './colour.ts';
 import { compareCommand } from './compareCommand.ts';
