@@ -29,6 +29,14 @@ interface PropertyJson {
 type ProofJson = { properties: PropertyJson[]; seconds: number };
 const proofOf = (cell: Record<string, unknown>): ProofJson => cell['proof'] as ProofJson;
 
+/** The equality comparator of the proof bench (bench/generators/proofCells.ts) as a netlist file. */
+function comparatorFile(bits: number): string {
+  const file = join(mkdtempSync(join(tmpdir(), 'railwise-prove-')), `eq${bits}.sp`);
+  const expectations = { EQ: equalityExpectation(bits) };
+  writeFileSync(file, exportSpice(equalityComparator(bits), DEFAULT_TECHNOLOGY, { expectations }));
+  return file;
+}
+
 describe('check --prove', () => {
   it('proves every property of the NAND2 for all vectors (exit 0); a held property has no vector', async () => {
     const { status, body } = await json('check', LIB, '--cell', 'tw_nand2', '--prove');
@@ -82,14 +90,15 @@ describe('check --prove', () => {
     expect(text.out.match(/undecided: out of scope for proofs/g)).toHaveLength(1);
   });
 
+  it('a sweep written as it runs (2^14 vectors) carries the proof in its one JSON document', async () => {
+    const { status, body } = await json('check', comparatorFile(7), '--prove');
+    expect(status).toBe(0);
+    expect(body['vectors']).toHaveLength(2 ** 14);
+    expect(proofOf(body).properties.every((p) => p.holds === true)).toBe(true);
+  });
+
   it('past the exhaustive limit the sweep is skipped and the proof covers all 2^18 vectors', async () => {
-    const dir = mkdtempSync(join(tmpdir(), 'railwise-prove-'));
-    const file = join(dir, 'eq9.sp');
-    const netlist = equalityComparator(9);
-    writeFileSync(
-      file,
-      exportSpice(netlist, DEFAULT_TECHNOLOGY, { expectations: { EQ: equalityExpectation(9) } }),
-    );
+    const file = comparatorFile(9);
     expect((await railwise('check', file)).status).toBe(2);
     const { status, body } = await json('check', file, '--prove');
     expect(status).toBe(0);
