@@ -1,5 +1,8 @@
 import { readFileSync } from 'node:fs';
 import { expect, test } from '@playwright/test';
+import { equalityComparator, equalityExpectation } from '../bench/generators/proofCells.ts';
+import { DEFAULT_TECHNOLOGY } from '../src/core/model/technology.ts';
+import { exportSpice } from '../src/core/netlist-io/spiceExport.ts';
 import { RailwisePage } from './pages/RailwisePage.ts';
 
 // A NAND2 whose MN1 source went to VDD: with A = B = 1 its output is a degraded high, not the 0 a
@@ -46,4 +49,24 @@ test('proving a miswired NAND2: the counterexample goes on the sheet; compared w
   await expect(answer).toContainText('Y: 1 in tw_nand2_slip, 0 in tw_nand2');
   await page.screenshot({ path: test.info().outputPath('proof.png') });
   expect(errors).toEqual([]);
+});
+
+test('past the exhaustive limit the table offers the proof: an 18-input comparator proved in the background', async ({
+  page,
+}) => {
+  const app = new RailwisePage(page);
+  await app.open();
+  const expectations = { EQ: equalityExpectation(9) };
+  const text = exportSpice(equalityComparator(9), DEFAULT_TECHNOLOGY, { expectations });
+  await app.openFile('equality-9.sp', text);
+  const panel = page.getByTestId('analysis-panel');
+  await expect(panel.getByTestId('sweep-limit')).toContainText('18 inputs');
+  await panel.getByTestId('sweep-limit-prove').click();
+  const proof = panel.getByTestId('proof-section');
+  await expect(proof.getByTestId('proof-summary')).toContainText('6 of 6 properties proved', {
+    timeout: 20_000,
+  });
+  await expect(proof.getByTestId('proof-property-0')).toContainText(
+    'EQ follows its expected function: proved',
+  );
 });
