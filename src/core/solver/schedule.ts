@@ -135,15 +135,16 @@ export class Schedule {
    */
   evaluateGroup(s: number, sourceVolts: Float64Array, state: NetState, fresh: boolean): void {
     const order = this.topology.sccOrder;
-    const first = order.start[s];
-    if (this.isSimpleGroup(s)) this.evaluateOne(order.items[first], sourceVolts, state, fresh);
+    const first = order.start[s]!; // s is a group of this topology: its row bounds exist
+    if (this.isSimpleGroup(s)) this.evaluateOne(order.items[first]!, sourceVolts, state, fresh);
     else this.settle(s, Array.from(order.items.subarray(first, order.start[s + 1])), sourceVolts, state);
   }
 
   /** True when group s is one component that gates none of its own elements (no feedback). */
   isSimpleGroup(s: number): boolean {
     const order = this.topology.sccOrder;
-    return order.start[s + 1] - order.start[s] === 1 && !this.selfDependent[order.items[order.start[s]]];
+    const first = order.start[s]!;
+    return order.start[s + 1]! - first === 1 && !this.selfDependent[order.items[first]!];
   }
 
   private anyDirty(dirty: Uint8Array, first: number, end: number): boolean {
