@@ -52,6 +52,8 @@ export interface CheckArgs extends CellChoice {
   readonly transfer?: TransferChoice;
   /** Level-1 DC operating point beside each vector. */
   readonly dc: boolean;
+  /** Prove every property for all vectors (docs/semantics.md §10). */
+  readonly prove: boolean;
   /** Output load in farads for --power and --sizing, when given (else the core's default). */
   readonly load?: number;
   readonly jobs?: number;
@@ -98,6 +100,7 @@ const CHECK_OPTIONS = {
   convention: { type: 'string' },
   points: { type: 'string' },
   dc: { type: 'boolean' },
+  prove: { type: 'boolean' },
 } as const satisfies ParseArgsConfig['options'];
 
 const EXPORT_OPTIONS = {
@@ -122,6 +125,7 @@ export function parseCheckArgs(argv: readonly string[]): CheckArgs {
     undriven: v.undriven ?? false,
     sizing: v.sizing ?? false,
     dc: v.dc ?? false,
+    prove: v.prove ?? false,
     ...(transfer === undefined ? {} : { transfer }),
     help: v.help ?? false,
     ...(v.load === undefined ? {} : { load: loadValue(v.load) }),
@@ -141,7 +145,11 @@ export function parseExportArgs(argv: readonly string[]): ExportArgs {
   return { ...cellChoice(v), file: positionals[0] ?? '', to: (v.to ?? 'spice') as ExportFormat, help };
 }
 
-function parse<T extends NonNullable<ParseArgsConfig['options']>>(argv: readonly string[], options: T) {
+/** `util.parseArgs` with every problem a UsageError (exit status 2). */
+export function parse<T extends NonNullable<ParseArgsConfig['options']>>(
+  argv: readonly string[],
+  options: T,
+) {
   try {
     return parseArgs({ args: [...argv], options, allowPositionals: true, strict: true });
   } catch (e) {
@@ -149,7 +157,7 @@ function parse<T extends NonNullable<ParseArgsConfig['options']>>(argv: readonly
   }
 }
 
-interface CellValues {
+export interface CellValues {
   cell?: string;
   inputs?: string;
   outputs?: string;
@@ -164,7 +172,8 @@ interface CellValues {
   'functions-from'?: string;
 }
 
-function cellChoice(v: CellValues): CellChoice {
+/** How a file is read and which of its cells, from the flags check, export and compare share. */
+export function cellChoice(v: CellValues): CellChoice {
   return {
     expect: expectations(v.expect ?? []),
     supply: list(v.supply),

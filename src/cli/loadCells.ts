@@ -47,6 +47,27 @@ export function loadCells(files: readonly string[], choice: CellChoice): LoadedC
   return { cells: cells.map((c) => ('job' in c ? applyChoice(c.job, choice) : c)), asLibrary, notes };
 }
 
+/**
+ * The one cell of a file for commands that take a single cell (export, compare): a library needs
+ * `flag` NAME. A cell that cannot be used comes back as its problem.
+ */
+export function loadOneCell(
+  file: string,
+  choice: CellChoice,
+  flag = '--cell',
+): { job: CellJob } | { problem: string } {
+  const loaded = loadCells([file], choice);
+  if (loaded.cells.length > 1) {
+    const names = loaded.cells.map(cellName).join(', ');
+    throw new UsageError(`${file} is a library: pick one cell with ${flag} NAME (cells: ${names})`);
+  }
+  const [cell] = loaded.cells;
+  if (cell === undefined) throw new UsageError(`${file}: no cell found`);
+  if ('failure' in cell) return { problem: cell.failure.message };
+  if ('skipped' in cell) return { problem: `${cell.skipped.cell}: ${cell.skipped.reason}` };
+  return { job: cell.job };
+}
+
 function loadOptions(choice: CellChoice, functions: FunctionSource | null): LoadOptions {
   return {
     supplyNames: [...choice.supply, ...(functions?.supplyNames ?? [])],

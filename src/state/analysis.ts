@@ -121,6 +121,8 @@ function follow(s: RailwiseState): Staleness {
     ...(stale.sizing ? { sizing: IDLE_JOB } : {}),
     ...(stale.transfer ? { transfer: IDLE_JOB } : {}),
     ...(stale.vectorDc ? { vectorDc: IDLE_JOB } : {}),
+    ...(stale.check ? { proof: IDLE_JOB } : {}),
+    ...(stale.netlist ? { comparison: IDLE_JOB } : {}),
   });
   if (stale.netlist) followNetlist(store.getState());
   return stale;

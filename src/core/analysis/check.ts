@@ -197,7 +197,7 @@ function namesIn(root: Expr): string[] {
  * naming the output for one that is not an output or does not parse. A check refuses these before
  * it solves anything (`refusalBeforeCheck`).
  */
-function parsedExpectations(
+export function parsedExpectations(
   netlist: Netlist,
   expectations: Readonly<Record<string, string>> = {},
 ): [string, Expr][] {
@@ -230,6 +230,31 @@ function countFindings(counts: Record<string, number>, findings: readonly Findin
     counts[f.kind] = (counts[f.kind] ?? 0) + 1;
   }
   return counts as Summary;
+}
+
+/**
+ * A check that solves no vector: the structural findings and a note, for a cell whose sweep is
+ * skipped (too many inputs) while a proof covers its vectors.
+ */
+export function checkStructure(netlist: Netlist, options: CheckOptions, note: string): CheckReport {
+  return new Checker(netlist, options, 'vectors').report('vectors', [], [note]);
+}
+
+/**
+ * Checks single vectors, each from an unknown state exactly as `checkSweep` checks each of its
+ * vectors: the replay of a proof's counterexamples (docs/semantics.md §10).
+ */
+export class VectorChecker {
+  private readonly checker: Checker;
+
+  constructor(netlist: Netlist, options: CheckOptions = {}) {
+    this.checker = new Checker(netlist, options, 'vectors');
+  }
+
+  /** The vector's report; `index` is the vector's place in the sweep's order, named by its findings. */
+  check(vector: InputVector, index: number): VectorReport {
+    return this.checker.vectorReport(this.checker.simulator.solveFresh(vector), index);
+  }
 }
 
 /** Checks every input combination, each solved from an unknown state (docs/semantics.md §2.9, sweep mode). */
