@@ -1,6 +1,9 @@
 /**
  * `railwise check --transfer` and `--dc`, called in-process: the JSON shapes, the text figures, and
- * the flags' errors. The numbers themselves are checked against published values in tests/dc.
+ * the flags' errors. The figures here are checked for consistency only (NML = VIL − VOL and
+ * NMH = VOH − VIH by definition; a pseudo-NMOS NOR with every input low has its pull-down off and
+ * draws no current; both common practice, no source); their values are checked against published
+ * ones in tests/dc.
  */
 import { describe, expect, it } from 'vitest';
 import { json, railwise } from './inProcess.ts';
