@@ -4,6 +4,7 @@ import { equalityComparator, equalityExpectation } from '../bench/generators/pro
 import { DEFAULT_TECHNOLOGY } from '../src/core/model/technology.ts';
 import { exportSpice } from '../src/core/netlist-io/spiceExport.ts';
 import { RailwisePage } from './pages/RailwisePage.ts';
+import { watchErrors } from './pages/errors.ts';
 
 // A NAND2 whose MN1 source went to VDD: with A = B = 1 its output is a degraded high, not the 0 a
 // NAND gives (common practice, no source), so its function fails at exactly that vector.
@@ -13,8 +14,7 @@ const LIBRARY = 'public/examples/tidewater-cells.sp';
 test('proving a miswired NAND2: the counterexample goes on the sheet; compared with the library NAND2', async ({
   page,
 }) => {
-  const errors: string[] = [];
-  page.on('pageerror', (e) => errors.push(String(e)));
+  const errors = watchErrors(page);
   const app = new RailwisePage(page);
   await app.open();
   await app.openFile('nand2-miswired.sp', readFileSync(SLIP, 'utf8'));

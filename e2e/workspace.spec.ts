@@ -4,14 +4,8 @@ import type { SheetPart } from '../src/core/sheet/types.ts';
 import { DEFAULT_TECHNOLOGY } from '../src/core/model/technology.ts';
 import { formatCurrent } from '../src/core/view/format.ts';
 import { RailwisePage } from './pages/RailwisePage.ts';
+import { watchErrors } from './pages/errors.ts';
 import { WorkspacePanel } from './pages/workspace.ts';
-
-function watchErrors(page: Page): string[] {
-  const errors: string[] = [];
-  page.on('pageerror', (e) => errors.push(String(e)));
-  page.on('console', (m) => m.type() === 'error' && errors.push(m.text()));
-  return errors;
-}
 
 async function start(page: Page): Promise<{ app: RailwisePage; ws: WorkspacePanel }> {
   const app = new RailwisePage(page);

@@ -14,7 +14,8 @@ import { CellChooser } from './CellChooser.tsx';
 import { RecoveryOffer } from './RecoveryOffer.tsx';
 import { handleKey } from './keyboard.ts';
 import { commandById } from './commands.ts';
-import { OPEN_ACCEPT, OPEN_INPUT_ID, openFileLater } from './fileCommands.ts';
+import { OPEN_FILE_ACCEPT } from '../core/netlist-io/fileKinds.ts';
+import { OPEN_INPUT_ID, openFileLater } from './fileCommands.ts';
 import './app.css';
 
 // Dialogs shown on request load when first asked for, so start-up parses less.
@@ -27,7 +28,7 @@ function OpenFileInput() {
       id={OPEN_INPUT_ID}
       data-testid="open-file"
       type="file"
-      accept={OPEN_ACCEPT}
+      accept={OPEN_FILE_ACCEPT}
       hidden
       onChange={(e) => {
         const file = e.target.files?.[0];

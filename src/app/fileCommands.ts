@@ -5,7 +5,6 @@
  */
 import { serializeDesign } from '../core/format/designFile.ts';
 import type { Design } from '../core/model/design.ts';
-import { SPICE_EXTENSIONS } from '../core/netlist-io/fileKinds.ts';
 import { EMPTY_SHEET } from '../core/sheet/edits.ts';
 import { loadDesign, showMessage, store } from '../state/store.ts';
 import { downloadText, safeFileName } from './download.ts';
@@ -13,7 +12,6 @@ import type * as Files from './files.ts';
 import type { ExportKind } from './files.ts';
 
 export const DESIGN_EXTENSION = '.railwise.json';
-export const OPEN_ACCEPT = ['.json', ...SPICE_EXTENSIONS].join(',');
 export const OPEN_INPUT_ID = 'railwise-open-file';
 
 /** Runs `use` with the file readers and writers, loaded the first time they are needed. */

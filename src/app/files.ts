@@ -22,15 +22,6 @@ import { countOf } from '../core/view/plural.ts';
 import { binaryRefusal } from '../core/format/binaryText.ts';
 import { brief } from '../core/format/printable.ts';
 
-export {
-  DESIGN_EXTENSION,
-  OPEN_ACCEPT,
-  OPEN_INPUT_ID,
-  newDesign,
-  pickAndOpen,
-  saveDesign,
-} from './fileCommands.ts';
-
 export type ExportKind = 'spice' | 'verilog' | 'csv' | 'svg' | 'png';
 
 export const isSpiceFile = isSpiceFileName;

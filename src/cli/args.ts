@@ -68,17 +68,22 @@ export interface ExportArgs extends CellChoice {
   readonly help: boolean;
 }
 
-const CELL_OPTIONS = {
-  cell: { type: 'string' },
-  inputs: { type: 'string' },
-  outputs: { type: 'string' },
-  expect: { type: 'string', multiple: true },
-  sequence: { type: 'string' },
+/** How a file is read into cells: its rails, supply voltage, size scale and kit devices. */
+export const READING_OPTIONS = {
   vdd: { type: 'string' },
   supply: { type: 'string' },
   ground: { type: 'string' },
   scale: { type: 'string' },
   'treat-as': { type: 'string', multiple: true },
+} as const satisfies ParseArgsConfig['options'];
+
+const CELL_OPTIONS = {
+  ...READING_OPTIONS,
+  cell: { type: 'string' },
+  inputs: { type: 'string' },
+  outputs: { type: 'string' },
+  expect: { type: 'string', multiple: true },
+  sequence: { type: 'string' },
   'top-only': { type: 'boolean' },
   'functions-from': { type: 'string' },
   help: { type: 'boolean', short: 'h' },

@@ -3,7 +3,7 @@
  * the same import flags as `check`; `--cell-a` and `--cell-b` pick a cell of a library.
  */
 import type { ParseArgsConfig } from 'node:util';
-import { cellChoice, parse, type CellChoice } from './args.ts';
+import { cellChoice, parse, READING_OPTIONS, type CellChoice } from './args.ts';
 import { UsageError } from './usage.ts';
 
 /** `railwise compare FILE_A FILE_B`: the cells of two files, read with the same import options. */
@@ -22,11 +22,7 @@ const COMPARE_OPTIONS = {
   'cell-a': { type: 'string' },
   'cell-b': { type: 'string' },
   json: { type: 'boolean' },
-  vdd: { type: 'string' },
-  supply: { type: 'string' },
-  ground: { type: 'string' },
-  scale: { type: 'string' },
-  'treat-as': { type: 'string', multiple: true },
+  ...READING_OPTIONS,
   help: { type: 'boolean', short: 'h' },
 } as const satisfies ParseArgsConfig['options'];
 

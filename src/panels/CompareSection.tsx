@@ -1,5 +1,5 @@
 import type { ChangeEvent } from 'react';
-import { SPICE_EXTENSIONS } from '../core/netlist-io/cellFiles.ts';
+import { OPEN_FILE_ACCEPT } from '../core/netlist-io/fileKinds.ts';
 import { vectorText } from '../core/view/proofView.ts';
 import { compareWithCell, compareWithFile, showCounterexample } from '../state/proof.ts';
 import { cancelJob, useSimulation } from '../state/simulation.ts';
@@ -7,9 +7,6 @@ import { useStore } from '../state/store.ts';
 import type { CompareResult } from '../worker/protocol.ts';
 import { JobBar } from './JobBar.tsx';
 import { Section } from './Section.tsx';
-
-/** Design files and the netlist extensions the app opens. */
-const COMPARE_ACCEPT = ['.json', ...SPICE_EXTENSIONS].join(',');
 
 function pickFile(e: ChangeEvent<HTMLInputElement>): void {
   const file = e.target.files?.[0];
@@ -91,7 +88,7 @@ export function CompareSection() {
         (replayed in both). The pins must have the same names.
       </p>
       <label className="rw-setting">
-        File <input type="file" accept={COMPARE_ACCEPT} onChange={pickFile} data-testid="compare-file" />
+        File <input type="file" accept={OPEN_FILE_ACCEPT} onChange={pickFile} data-testid="compare-file" />
       </label>
       {comparison.status === 'running' && (
         <JobBar label="Comparing" progress={comparison.progress} onCancel={() => cancelJob('compare')} />

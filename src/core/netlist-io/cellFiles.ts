@@ -20,8 +20,6 @@ import { importSpice, SpiceImportError, type SpiceImportOptions } from './spiceI
 
 import { DESIGN_EXTENSIONS, SPICE_EXTENSIONS } from './fileKinds.ts';
 
-export { DESIGN_EXTENSIONS, SPICE_EXTENSIONS } from './fileKinds.ts';
-
 /** One cell, ready to check; plain data so it can cross to a worker thread. */
 export interface CellJob {
   readonly file: string;
