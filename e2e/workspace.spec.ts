@@ -85,7 +85,8 @@ test('a floating output: find its vectors in the table, fix the cell on the shee
   await ws.showOnly('problems');
   // With A = 1 and B = 0 the only conducting pull-up drives Yq, not Y, and the NMOS stack is open:
   // Y has no path to either rail (series-parallel duality of the NAND; common practice, no source).
-  expect(await ws.rowIndices()).toEqual([2]);
+  // The table fills from the worker after the import: poll rather than read once.
+  await expect.poll(() => ws.rowIndices()).toEqual([2]);
   await expect(ws.row(2)).toContainText('floating');
   await expect(ws.row(2)).toContainText('Z');
 
@@ -97,7 +98,7 @@ test('a floating output: find its vectors in the table, fix the cell on the shee
   await expect(ws.root.getByTestId('table-empty')).toBeVisible();
   await ws.showOnly('all');
   await expect(ws.tableSummary).toContainText('no findings');
-  expect(await ws.rowIndices()).toEqual([0, 1, 2, 3]);
+  await expect.poll(() => ws.rowIndices()).toEqual([0, 1, 2, 3]);
   expect(errors).toEqual([]);
 });
 
