@@ -15,7 +15,7 @@ import {
   levelName,
 } from '../solver/levels.ts';
 import type { SolveResult } from '../solver/simulator.ts';
-import { engineering } from '../view/format.ts';
+import { engineering } from '../units/engineering.ts';
 import { channelDevices, finding, Namer } from './findingParts.ts';
 import type { Finding, FindingKind, Severity } from './report.ts';
 import { unknownFindings } from './unknownFindings.ts';
