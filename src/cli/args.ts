@@ -6,7 +6,7 @@ import { parseArgs, type ParseArgsConfig } from 'node:util';
 import { MARGIN_CONVENTIONS, type MarginConvention } from '../core/dc/figures.ts';
 import { DEFAULT_TRANSFER_POINTS, MAX_TRANSFER_POINTS } from '../core/dc/transfer.ts';
 import { nameRecord } from '../core/model/records.ts';
-import { spiceValue } from '../core/netlist-io/spiceNumber.ts';
+import { spiceValue } from '../core/units/spiceNumber.ts';
 import { parseStandIns, type StandIn } from '../core/netlist-io/deviceNames.ts';
 import { rangeProblem } from '../core/netlist-io/valueRanges.ts';
 import type { PowerSettings } from '../core/power/settings.ts';

@@ -6,7 +6,7 @@
 import type { MosDevice, MosKind } from '../model/netlist.ts';
 import type { InstanceElement, MosElement } from './spiceElements.ts';
 import { mosTypeFromName, STAND_IN_TERMINALS, standInByRule, type StandIn } from './deviceNames.ts';
-import { spiceValue } from './spiceNumber.ts';
+import { spiceValue } from '../units/spiceNumber.ts';
 import { scaledMicrons } from './spiceScale.ts';
 import { rangeProblem, VALUE_RANGES } from './valueRanges.ts';
 import type { CellBuilder, Scope } from './spiceFlatten.ts';

@@ -3,7 +3,7 @@
  * as written where the unit depends on context (MOS W and L are converted when the cell is built);
  * anything this reader does not understand throws with the line number.
  */
-import { spiceValue } from './spiceNumber.ts';
+import { spiceValue } from '../units/spiceNumber.ts';
 import { tokens } from './spiceLines.ts';
 import { rangeProblem, type RangedField } from './valueRanges.ts';
 

@@ -14,7 +14,7 @@ import { isPrintable, printable, quoted } from '../format/printable.ts';
 import { modelCards } from './spiceModelExport.ts';
 
 export { NMOS_MODEL, PMOS_MODEL } from './spiceModelExport.ts';
-import { formatSpiceNumber } from './spiceNumber.ts';
+import { formatSpiceNumber } from '../units/spiceNumber.ts';
 import type { Sheet } from '../sheet/types.ts';
 import { placementLines } from './placementComments.ts';
 import {

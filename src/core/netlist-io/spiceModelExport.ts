@@ -14,7 +14,7 @@ import {
   type Technology,
 } from '../model/technology.ts';
 import { CARD_KEYS } from './spiceModels.ts';
-import { formatSpiceNumber, spiceValue } from './spiceNumber.ts';
+import { formatSpiceNumber, spiceValue } from '../units/spiceNumber.ts';
 
 export const NMOS_MODEL = 'rw_nmos';
 export const PMOS_MODEL = 'rw_pmos';

@@ -8,7 +8,7 @@ import type { MosKind } from '../model/netlist.ts';
 import { MODEL_FIELDS, type DeviceModel, type ModelField } from '../model/technology.ts';
 import { SpiceImportError } from './spiceErrors.ts';
 import type { Directive, ModelCard, SpiceFile } from './spiceParse.ts';
-import { spiceValue } from './spiceNumber.ts';
+import { spiceValue } from '../units/spiceNumber.ts';
 import { rangeProblem, type RangedField } from './valueRanges.ts';
 
 /** A card that cannot be read: a word that is no parameter, a value that is no number or out of range. */

@@ -4,7 +4,7 @@
  * (`*.SCALE METER` for sizes in metres, `*.SCALE MICRON` for micrometres; from memory). A file
  * with no directive whose sizes are all implausible in metres is read in micrometres, with a note.
  */
-import { spiceValue } from './spiceNumber.ts';
+import { spiceValue } from '../units/spiceNumber.ts';
 import { rangeProblem } from './valueRanges.ts';
 
 export interface Scale {

@@ -6,7 +6,7 @@
  */
 import type { SpiceFile } from './spiceParse.ts';
 import type { Scale } from './spiceScale.ts';
-import { spiceValue } from './spiceNumber.ts';
+import { spiceValue } from '../units/spiceNumber.ts';
 import { VALUE_RANGES } from './valueRanges.ts';
 
 export function resolveScale(file: SpiceFile, option: number | undefined, notes: string[]): Scale | null {

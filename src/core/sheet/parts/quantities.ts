@@ -3,7 +3,7 @@
  * on the sheet, and checked. Units are the model's: µm for W and L, ohms, farads.
  */
 import { engineering } from '../../units/engineering.ts';
-import { formatSpiceNumber, spiceValue } from '../../netlist-io/spiceNumber.ts';
+import { formatSpiceNumber, spiceValue } from '../../units/spiceNumber.ts';
 
 export type ReadResult =
   { readonly ok: true; readonly value: number } | { readonly ok: false; readonly error: string };

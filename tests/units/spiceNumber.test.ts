@@ -4,7 +4,7 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { formatSpiceNumber, spiceValue } from '../../src/core/netlist-io/spiceNumber.ts';
+import { formatSpiceNumber, spiceValue } from '../../src/core/units/spiceNumber.ts';
 
 describe('spiceValue', () => {
   it.each([
