@@ -20,7 +20,7 @@ import { fitToView } from '../state/view.ts';
 import { downloadText, downloadUrl, safeFileName } from './download.ts';
 import { countOf } from '../core/view/plural.ts';
 import { binaryRefusal } from '../core/format/binaryText.ts';
-import { brief } from '../core/format/printable.ts';
+import { brief } from '../core/text/printable.ts';
 
 export type ExportKind = 'spice' | 'verilog' | 'csv' | 'svg' | 'png';
 

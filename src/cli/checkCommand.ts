@@ -9,7 +9,7 @@
  */
 import { CAUTION } from '../core/caution.ts';
 import type { Summary } from '../core/analysis/report.ts';
-import { brief, printable } from '../core/format/printable.ts';
+import { brief, printable } from '../core/text/printable.ts';
 import { DEFAULT_POWER_SETTINGS } from '../core/power/settings.ts';
 import type { CheckArgs } from './args.ts';
 import { makeColour, terminalSafe, type Colour } from './colour.ts';

@@ -4,7 +4,7 @@
  * (replayed in both). Exit status 0 equivalent, 1 not (or undecided), 2 unusable input.
  */
 import { CAUTION } from '../core/caution.ts';
-import { brief, printable } from '../core/format/printable.ts';
+import { brief, printable } from '../core/text/printable.ts';
 import { ComparisonError, compareCells, type Comparison } from '../core/proof/compare.ts';
 import type { CompareArgs } from './compareArgs.ts';
 import { makeColour, terminalSafe, type Colour } from './colour.ts';

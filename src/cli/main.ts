@@ -8,7 +8,7 @@ import { checkCommand } from './checkCommand.ts';
 import { colourWanted } from './colour.ts';
 import { compareCommand } from './compareCommand.ts';
 import { exportCommand } from './exportCommand.ts';
-import { brief } from '../core/format/printable.ts';
+import { brief } from '../core/text/printable.ts';
 import { own } from '../core/model/records.ts';
 import {
   CHECK_HELP,

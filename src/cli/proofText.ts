@@ -1,5 +1,5 @@
 /** The human lines of a proof (`--prove`) and of a comparison (`compare`). */
-import { brief, printable } from '../core/format/printable.ts';
+import { brief, printable } from '../core/text/printable.ts';
 import { findingsAbout } from '../core/proof/properties.ts';
 import { vectorText as coreVectorText } from '../core/view/proofView.ts';
 import { vectorCountText } from '../core/view/vectorControl.ts';

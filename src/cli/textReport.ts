@@ -5,7 +5,7 @@
  * printed escaped (printable.ts): a net name cannot move the cursor or rewrite a CI log.
  */
 import type { Finding, Summary } from '../core/analysis/report.ts';
-import { brief, printable } from '../core/format/printable.ts';
+import { brief, printable } from '../core/text/printable.ts';
 import { own } from '../core/model/records.ts';
 import { formatSi, type Colour } from './colour.ts';
 import { dcLines, transferLines } from './dcText.ts';

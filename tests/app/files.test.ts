@@ -1,7 +1,7 @@
 // Behaviour of our own file handling, not published values: no source applies.
 import { beforeEach, describe, expect, it } from 'vitest';
 import { designsFromSpice, openText } from '../../src/app/files.ts';
-import { isPrintable } from '../../src/core/format/printable.ts';
+import { isPrintable } from '../../src/core/text/printable.ts';
 import { documentFromDesign } from '../../src/state/document.ts';
 import { resetStore, store } from '../../src/state/store.ts';
 import { STARTERS } from '../../src/core/starters/index.ts';

@@ -1,5 +1,5 @@
 // Indexes read here are in range by construction, so `!` marks them (no run-time cost).
-import { printable } from '../format/printable.ts';
+import { printable } from '../text/printable.ts';
 
 /**
  * Expected functions (docs/semantics.md §4): `!` `&` `|` `^`, parentheses, constants 0 and 1, `S ? A : B`, and `Z`

@@ -5,7 +5,7 @@
  * Text files never hold NUL characters; a file read as UTF-8 that is mostly U+FFFD was not UTF-8
  * text (common practice, no source).
  */
-import { printable } from './printable.ts';
+import { printable } from '../text/printable.ts';
 
 const SAMPLE = 8192;
 

@@ -7,7 +7,7 @@ import type { Design } from '../model/design.ts';
 import { CURRENT_DESIGN_VERSION, documentVersion, migrateToCurrent, type RawDocument } from './migrations.ts';
 import { DESIGN_FORMAT_TAG, designFileV1Schema } from './schema.ts';
 import { netlistProblem } from './designChecks.ts';
-import { printable } from './printable.ts';
+import { printable } from '../text/printable.ts';
 
 export { CURRENT_DESIGN_VERSION } from './migrations.ts';
 

@@ -13,7 +13,7 @@
  */
 import type { CheckReport, Finding, VectorReport } from '../analysis/report.ts';
 import { own } from '../model/records.ts';
-import { printable } from '../format/printable.ts';
+import { printable } from '../text/printable.ts';
 
 export function exportTruthTableCsv(report: CheckReport): string {
   const isSequence = report.steps !== undefined;

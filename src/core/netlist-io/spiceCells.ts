@@ -14,7 +14,7 @@ import { restoreExportedNames } from './spiceRestore.ts';
 import { readPlacement } from './placementComments.ts';
 import type { Sheet } from '../sheet/types.ts';
 import { nameRecord, recordOf } from '../model/records.ts';
-import { unquoted } from '../format/printable.ts';
+import { unquoted } from '../text/printable.ts';
 
 export interface ImportedCell {
   readonly name: string;

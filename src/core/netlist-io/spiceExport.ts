@@ -10,7 +10,7 @@
 import { CAUTION } from '../caution.ts';
 import type { Device, MosDevice, Netlist } from '../model/netlist.ts';
 import type { Technology } from '../model/technology.ts';
-import { isPrintable, printable, quoted } from '../format/printable.ts';
+import { isPrintable, printable, quoted } from '../text/printable.ts';
 import { modelCards } from './spiceModelExport.ts';
 
 export { NMOS_MODEL, PMOS_MODEL } from './spiceModelExport.ts';

@@ -8,7 +8,7 @@
  */
 import type { Netlist } from '../model/netlist.ts';
 import { netNames } from '../model/netlist.ts';
-import { quoted } from '../format/printable.ts';
+import { quoted } from '../text/printable.ts';
 import { exportNames, identifierMap, MAX_IDENTIFIER_LENGTH, type IdentifierRules } from './exportNames.ts';
 
 /** Net names the importer takes as rails without being told (see spiceImport.ts). */

@@ -8,7 +8,7 @@
  */
 import type { Device, Netlist } from '../model/netlist.ts';
 import { recordOf } from '../model/records.ts';
-import { unquoted } from '../format/printable.ts';
+import { unquoted } from '../text/printable.ts';
 import type { Directive } from './spiceParse.ts';
 
 export interface RestoredCell {

@@ -12,7 +12,7 @@
 import { CAUTION } from '../caution.ts';
 import type { Device, MosDevice, Netlist } from '../model/netlist.ts';
 import { channelNets, netNames } from '../model/netlist.ts';
-import { printable } from '../format/printable.ts';
+import { printable } from '../text/printable.ts';
 import { verilogNames } from './verilogNames.ts';
 
 interface Hops {

@@ -8,7 +8,7 @@
  */
 import type { Netlist } from '../model/netlist.ts';
 import { netNames } from '../model/netlist.ts';
-import { quoted } from '../format/printable.ts';
+import { quoted } from '../text/printable.ts';
 import { exportNames, identifierMap, MAX_IDENTIFIER_LENGTH, type IdentifierRules } from './exportNames.ts';
 
 /** Reserved words of IEEE Std 1364-2005 (Annex B) that a net or device name might collide with. */

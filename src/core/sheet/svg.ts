@@ -6,7 +6,7 @@ import type { Sheet, SheetPart } from './types.ts';
 import { partSpec, type PartText, type Primitive } from './parts/index.ts';
 import { TEXT_SIZE } from './parts/text.ts';
 import { partBounds, pointsBounds, toWorld, unionRects } from './geometry.ts';
-import { printable } from '../format/printable.ts';
+import { printable } from '../text/printable.ts';
 import { sheetConnectivity } from './connectivity.ts';
 
 export interface SvgOptions {
