@@ -4,7 +4,7 @@ import { evaluateCcc } from './evaluate.ts';
 import type { Frame } from './frame.ts';
 import { GroupSnapshot, mergeSteadyStates, type MergeContext } from './groupStates.ts';
 import { classify, FLAG_BOUND, FLAG_OSCILLATING, LEVEL_0, LEVEL_1, LEVEL_X } from './levels.ts';
-import type { NetState } from './schedule.ts';
+import type { NetState } from './netState.ts';
 import { GATE_NOT_TIED } from './selfGated.ts';
 import type { Topology } from './topology.ts';
 

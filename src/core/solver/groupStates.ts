@@ -1,6 +1,6 @@
 // Hot loop: indexes here are in range by construction, so `!` marks them (no run-time cost).
 import { classify, FLAG_OSCILLATING, FLAG_STATES, LEVEL_0, LEVEL_1 } from './levels.ts';
-import type { NetState } from './schedule.ts';
+import type { NetState } from './netState.ts';
 
 /** The state of a feedback group's nets and elements, saved to try a guess and put back afterwards. */
 export class GroupSnapshot {

@@ -1,7 +1,7 @@
 // Hot loop: indexes here are in range by construction, so `!` marks them (no run-time cost).
 import type { CompiledNetlist } from '../compile/compile.ts';
 import { csrFrom, type Csr } from '../compile/csr.ts';
-import type { NetState } from './schedule.ts';
+import type { NetState } from './netState.ts';
 import type { Topology } from './topology.ts';
 
 /** Components whose outcome depends on more full-rail nets than this are never memoised. */

@@ -1,10 +1,11 @@
 // Hot loop: indexes here are in range by construction, so `!` marks them (no run-time cost).
 import type { CompiledNetlist } from '../compile/compile.ts';
-import { evaluateCcc, type EvaluationTarget } from './evaluate.ts';
+import { evaluateCcc } from './evaluate.ts';
 import { FeedbackSearch } from './feedback.ts';
 import { Frame } from './frame.ts';
 import { FLAG_OSCILLATING } from './levels.ts';
 import { OutcomeMemo } from './memo.ts';
+import type { NetState } from './netState.ts';
 import { buildTopology, type Topology } from './topology.ts';
 
 /**
@@ -14,15 +15,6 @@ import { buildTopology, type Topology } from './topology.ts';
  */
 export const SETTLE_ROUNDS_BASE = 16;
 export const SETTLE_ROUNDS_PER_COMPONENT = 2;
-
-/** Mutable per-net and per-element state of one solve. */
-export interface NetState extends EvaluationTarget {
-  readonly volts: Float64Array;
-  readonly driven: Uint8Array;
-  readonly flags: Uint8Array;
-  readonly limiter: Int32Array;
-  readonly chCurrent: Float64Array;
-}
 
 /** Everything the scheduler needs for one topology, built once and reused across vectors. */
 export class Schedule {

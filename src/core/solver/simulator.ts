@@ -14,7 +14,8 @@ import {
   LEVEL_Z,
   ON,
 } from './levels.ts';
-import { sameVolts, Schedule, type NetState } from './schedule.ts';
+import type { NetState } from './netState.ts';
+import { sameVolts, Schedule } from './schedule.ts';
 import { clampConduction, GATE_TIED_A } from './selfGated.ts';
 import type { Topology } from './topology.ts';
 

@@ -1,6 +1,7 @@
 import type { CompiledNetlist } from '../compile/compile.ts';
 import { classify, LEVEL_Z } from '../solver/levels.ts';
-import type { NetState, Schedule } from '../solver/schedule.ts';
+import type { NetState } from '../solver/netState.ts';
+import type { Schedule } from '../solver/schedule.ts';
 import type { GroupShape } from './shape.ts';
 import { STATE_DRIVEN, STATE_EXACT, TRIT_X, type GroupTable } from './table.ts';
 
