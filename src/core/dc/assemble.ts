@@ -1,7 +1,7 @@
 // Indexes here are in range by construction (compiled-netlist and per-net arrays), so `!` marks them (no run-time cost).
 import { LuDecomposition, Matrix } from 'ml-matrix';
 import { evaluateMos, G_BULK, G_DRAIN, G_GATE, G_SOURCE, ID, mosOutput } from './level1.ts';
-import type { DcNetwork } from './network.ts';
+import type { DcElements } from './elements.ts';
 
 /**
  * Conductance to ground on every unknown net, siemens: keeps the nodal matrix regular where a net is
@@ -57,7 +57,7 @@ export class NodalSystem {
    * system is reused from solve to solve).
    */
   constructor(
-    readonly network: DcNetwork,
+    readonly network: DcElements,
     readonly elements: Int32Array,
     readonly pos: Int32Array,
     public volts: Float64Array,

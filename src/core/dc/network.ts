@@ -4,6 +4,7 @@ import type { MosDevice } from '../model/netlist.ts';
 import { modelCard, technologyValue, type ModelField, type Technology } from '../model/technology.ts';
 import { buildTopology, type Topology } from '../solver/topology.ts';
 import { NodalSystem } from './assemble.ts';
+import type { DcElements } from './elements.ts';
 import type { Level1Device } from './level1.ts';
 
 /**
@@ -25,7 +26,7 @@ export interface DcGroup {
   readonly feedback: boolean;
 }
 
-export class DcNetwork {
+export class DcNetwork implements DcElements {
   readonly topology: Topology;
   readonly groups: readonly DcGroup[];
   /** Group of each net, -1 for sources. */
