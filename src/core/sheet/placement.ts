@@ -2,7 +2,7 @@
  * Local → world transforms of a placed part. Kept apart from `geometry.ts` (which reads the part
  * specs) so the specs themselves can place their text without an import cycle.
  */
-import type { PartPlacement, Point } from './types.ts';
+import type { PartPlacement, Point } from './position.ts';
 
 export type Placement = Pick<PartPlacement, 'x' | 'y' | 'rotation' | 'mirror'>;
 

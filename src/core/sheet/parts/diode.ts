@@ -1,5 +1,5 @@
 import type { DiodeDevice } from '../../model/netlist.ts';
-import type { PartPlacement } from '../types.ts';
+import type { PartPlacement } from '../position.ts';
 import { deviceRole, type PartSpec } from './spec.ts';
 import { nameAndValue, noValue } from './text.ts';
 

@@ -4,7 +4,7 @@
  * is its spec here plus its view in `src/editor/devices/`.
  */
 import type { Device } from '../../model/netlist.ts';
-import type { PartPlacement } from '../types.ts';
+import type { PartPlacement } from '../position.ts';
 import type { PartSpec, PropKey } from './spec.ts';
 import { NMOS_SPEC } from './nmos.ts';
 import { PMOS_SPEC } from './pmos.ts';

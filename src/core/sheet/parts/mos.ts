@@ -3,7 +3,7 @@
  * at (0, -2) and (0, 2); only the gate lead differs (the PMOS one ends in the inversion bubble).
  */
 import type { MosDevice, MosKind } from '../../model/netlist.ts';
-import type { PartPlacement } from '../types.ts';
+import type { PartPlacement } from '../position.ts';
 import { deviceRole, type PartSpec, type Primitive } from './spec.ts';
 import { MICROMETRES } from './quantities.ts';
 import { nameAndValue } from './text.ts';

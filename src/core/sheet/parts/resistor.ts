@@ -1,5 +1,5 @@
 import type { ResistorDevice } from '../../model/netlist.ts';
-import type { PartPlacement } from '../types.ts';
+import type { PartPlacement } from '../position.ts';
 import { deviceRole, type PartSpec } from './spec.ts';
 import { OHMS } from './quantities.ts';
 import { nameAndValue } from './text.ts';

@@ -6,7 +6,7 @@
  * is described once.
  */
 import type { Device } from '../../model/netlist.ts';
-import type { PartPlacement, Point } from '../types.ts';
+import type { PartPlacement, Point } from '../position.ts';
 import type { Quantity } from './quantities.ts';
 
 /** Drawing primitives in local grid units. `points` are flat x,y pairs. */

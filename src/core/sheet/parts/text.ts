@@ -2,7 +2,7 @@
  * Text drawn with parts. Sizes are in grid units; the canvas and the SVG export both place a line
  * by the middle of its height, so they agree on where text sits.
  */
-import type { Point } from '../types.ts';
+import type { Point } from '../position.ts';
 import { toWorld, type Placement } from '../placement.ts';
 import type { PartText } from './spec.ts';
 
