@@ -1,6 +1,6 @@
 /** Small cells for the workspace tests, built with the core builder. */
 import { circuit } from '../src/core/model/builder.ts';
-import type { Design } from '../src/core/model/design.ts';
+import type { Design } from '../src/core/document/design.ts';
 import type { Netlist } from '../src/core/model/netlist.ts';
 import { DEFAULT_TECHNOLOGY } from '../src/core/model/technology.ts';
 

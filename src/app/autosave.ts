@@ -16,7 +16,7 @@
  */
 import { createStore } from 'zustand/vanilla';
 import { useStore as useZustand } from 'zustand';
-import type { Design } from '../core/model/design.ts';
+import type { Design } from '../core/document/design.ts';
 import { parseDesignFile, serializeDesign } from '../core/format/designFile.ts';
 import { store } from '../state/store.ts';
 import { afterPause } from './idle.ts';

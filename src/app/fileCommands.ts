@@ -4,7 +4,7 @@
  * loads on first use, so start-up parses less. A failure to load it is a message, never a crash.
  */
 import { serializeDesign } from '../core/format/designFile.ts';
-import type { Design } from '../core/model/design.ts';
+import type { Design } from '../core/document/design.ts';
 import { EMPTY_SHEET } from '../core/sheet/edits.ts';
 import { loadDesign, showMessage, store } from '../state/store.ts';
 import { downloadText, safeFileName } from './download.ts';

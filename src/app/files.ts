@@ -3,7 +3,7 @@
  * naming the file and the line or field, and the open design is left exactly as it was. The page
  * loads this module on first use (`fileCommands.ts`, which also holds save and new).
  */
-import type { Design } from '../core/model/design.ts';
+import type { Design } from '../core/document/design.ts';
 import { DesignFileError, parseDesignFile } from '../core/format/designFile.ts';
 import { SpiceImportError } from '../core/netlist-io/spiceImport.ts';
 import { cellsFromText, isSpiceFileName } from '../core/netlist-io/cellFiles.ts';

@@ -4,7 +4,7 @@
  * sends the link. Opening a link is validated like opening a file: a damaged or foreign link gives a
  * message and leaves the open design as it was.
  */
-import type { Design } from '../core/model/design.ts';
+import type { Design } from '../core/document/design.ts';
 import { countOf } from '../core/view/plural.ts';
 import { parseDesignFile, serializeDesign } from '../core/format/designFile.ts';
 import { fitToView } from '../state/view.ts';

@@ -2,7 +2,8 @@
  * The document slice: what the designer edits and what undo restores. The netlist is never
  * stored here; it is derived from the sheet on every change, so the two cannot disagree.
  */
-import type { Design, Sequence } from '../core/model/design.ts';
+import type { Design } from '../core/document/design.ts';
+import type { Sequence } from '../core/model/design.ts';
 import type { Technology } from '../core/model/technology.ts';
 import type { Sheet } from '../core/sheet/types.ts';
 import { sheetToNetlist, type DerivedNetlist, type SheetIssue } from '../core/sheet/toNetlist.ts';

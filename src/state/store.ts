@@ -9,7 +9,7 @@
  */
 import { createStore } from 'zustand/vanilla';
 import { useStore as useZustand } from 'zustand';
-import type { Design } from '../core/model/design.ts';
+import type { Design } from '../core/document/design.ts';
 import type { ItemIds } from '../core/sheet/selection.ts';
 import type { SheetIssue } from '../core/sheet/toNetlist.ts';
 import type { Clip } from '../core/sheet/clipboard.ts';

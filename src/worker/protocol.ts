@@ -5,7 +5,8 @@
 import type { CheckReport } from '../core/analysis/report.ts';
 import type { TransferReport } from '../core/dc/transfer.ts';
 import type { DcComparison } from '../core/dc/vectorCompare.ts';
-import type { Design, InputVector } from '../core/model/design.ts';
+import type { Design } from '../core/document/design.ts';
+import type { InputVector } from '../core/model/design.ts';
 import type { PowerCounts } from '../core/power/tally.ts';
 import type { Comparison } from '../core/proof/compare.ts';
 import type { ProofReport } from '../core/proof/prove.ts';

@@ -12,7 +12,7 @@ import {
   serializeDesign,
 } from '../../src/core/format/designFile.ts';
 import { MIGRATIONS } from '../../src/core/format/migrations.ts';
-import type { Design } from '../../src/core/model/design.ts';
+import type { Design } from '../../src/core/document/design.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import type { SheetPart } from '../../src/core/sheet/types.ts';
 import { makeSheetPart, PART_KINDS } from '../../src/core/sheet/parts/index.ts';

@@ -6,7 +6,7 @@
 import { describe, expect, it } from 'vitest';
 import { DesignFileError, parseDesignFile, serializeDesign } from '../../src/core/format/designFile.ts';
 import { circuit } from '../../src/core/model/builder.ts';
-import type { Design } from '../../src/core/model/design.ts';
+import type { Design } from '../../src/core/document/design.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 
 const inverter: Design = {

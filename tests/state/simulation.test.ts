@@ -16,7 +16,7 @@ import {
 } from '../../src/state/simulation.ts';
 import { loadDesign, setDesignFields, store } from '../../src/state/store.ts';
 import { runJob } from '../../src/worker/jobs.ts';
-import type { Design } from '../../src/core/model/design.ts';
+import type { Design } from '../../src/core/document/design.ts';
 import { design, inverter, nand2, nand2MissingPullUp, nandLatch, resistorLoadInverter } from '../cells.ts';
 import { runner, settle, useHeldRunner } from './heldRunner.ts';
 

@@ -3,7 +3,7 @@
  * Text in, text out: the caller (browser or command line) reads and writes the bytes.
  */
 import type { z } from 'zod';
-import type { Design } from '../model/design.ts';
+import type { Design } from '../document/design.ts';
 import { CURRENT_DESIGN_VERSION, documentVersion, migrateToCurrent, type RawDocument } from './migrations.ts';
 import { DESIGN_FORMAT_TAG, designFileV1Schema } from './schema.ts';
 import { netlistProblem } from './designChecks.ts';

@@ -1,4 +1,4 @@
-import type { Design } from '../model/design.ts';
+import type { Design } from '../document/design.ts';
 import type { Netlist } from '../model/netlist.ts';
 import { DEFAULT_TECHNOLOGY } from '../model/technology.ts';
 import * as comb from './combinational.ts';
