@@ -6,7 +6,8 @@
 import type { Device, Netlist, Rail } from '../model/netlist.ts';
 import type { DeviceModel } from '../model/technology.ts';
 import type { Body, Directive } from './spiceParse.ts';
-import { flattenCell, type FlatCell, type FlattenContext, type FlatSource } from './spiceFlatten.ts';
+import type { FlattenContext, FlatSource } from './spiceCellBuilder.ts';
+import { flattenCell, type FlatCell } from './spiceFlatten.ts';
 import type { Hierarchy } from './spiceHierarchy.ts';
 import { SpiceImportError } from './spiceErrors.ts';
 import { assignPins, PinError, withInputsReadByExpectations } from './pins.ts';

@@ -5,22 +5,13 @@
  */
 import type { MosDevice, MosKind } from '../model/netlist.ts';
 import type { InstanceElement, MosElement } from './spiceElements.ts';
-import { mosTypeFromName, STAND_IN_TERMINALS, standInByRule, type StandIn } from './deviceNames.ts';
+import { mosTypeFromName, STAND_IN_TERMINALS, standInByRule } from './deviceNames.ts';
 import { spiceValue } from '../units/spiceNumber.ts';
 import { scaledMicrons } from './spiceScale.ts';
 import { rangeProblem, VALUE_RANGES } from './valueRanges.ts';
-import type { CellBuilder, Scope } from './spiceFlatten.ts';
+import type { CellBuilder, ModelUse, Scope } from './spiceCellBuilder.ts';
 import { readCard } from './spiceModels.ts';
 import type { ModelCard } from './spiceParse.ts';
-
-export interface DeviceNotes {
-  readonly ignoredParams: Set<string>;
-  readonly folded: string[];
-  readonly sized: string[];
-  readonly standIns: Map<string, { kind: StandIn; count: number; byRule: boolean }>;
-  /** About model cards: other levels, bins, fields left to the technology. */
-  readonly models: Set<string>;
-}
 
 /** Widest total width of one device after `m` is folded in, µm (1 m). */
 const MAX_FOLDED_WIDTH = 1e6;
@@ -99,12 +90,6 @@ export function implausible(text: string, microns: number): string {
   const scale = 'if this file writes sizes under a scale, add ".option scale=1e-6" or give --scale 1e-6';
   if (letters === '') return `is ${metres} (plain numbers are metres): write ${text}u for µm, or ${scale}`;
   return `is ${metres}, more than 1 cm: ${scale}`;
-}
-
-/** What a device line's model gives it: its type, and the card whose level-1 values it takes. */
-export interface ModelUse {
-  readonly kind: MosKind;
-  readonly model?: string;
 }
 
 /** From the model card; failing that, from the model's name (nch, pfet, …). Once per model a cell. */

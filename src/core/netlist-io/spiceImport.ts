@@ -10,7 +10,7 @@ import type { Rail } from '../model/netlist.ts';
 import type { DeviceModel } from '../model/technology.ts';
 import { parseSpice, type Body, type SpiceFile, type Subckt } from './spiceParse.ts';
 import { buildCell, type CellContext, type CellSpec, type ImportedCell } from './spiceCells.ts';
-import type { FlatSource } from './spiceFlatten.ts';
+import type { FlatSource } from './spiceCellBuilder.ts';
 import { SpiceImportError } from './spiceErrors.ts';
 import { Hierarchy } from './spiceHierarchy.ts';
 import { resolveScale } from './spiceSizes.ts';

@@ -6,15 +6,8 @@
  * rails) the link is kept as a resistor of the smallest resistance in range, so nothing is renamed.
  */
 import type { Device } from '../model/netlist.ts';
-import type { CellBuilder, FlatSource } from './spiceFlatten.ts';
+import type { CellBuilder, FlatSource } from './spiceCellBuilder.ts';
 import { VALUE_RANGES } from './valueRanges.ts';
-
-export interface ShortLink {
-  readonly name: string;
-  readonly line: number;
-  readonly a: string;
-  readonly b: string;
-}
 
 interface Joined {
   readonly devices: Device[];
