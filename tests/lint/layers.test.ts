@@ -5,7 +5,7 @@
  */
 import { ESLint } from 'eslint';
 import { describe, expect, it } from 'vitest';
-import { FORBIDDEN_LAYERS } from '../../eslint.layers.js';
+import { CORE_ORDER, FORBIDDEN_LAYERS } from '../../eslint.layers.js';
 
 const eslint = new ESLint({ cwd: process.cwd() });
 
@@ -48,5 +48,27 @@ describe('the layer map', () => {
     });
     for (const r of [reexport, dynamic])
       expect(r?.messages.some((m) => m.ruleId === 'railwise/layers')).toBe(true);
+  });
+});
+
+describe('the order of the core folders', () => {
+  const steps = CORE_ORDER.slice(1).map((upper, k) => [CORE_ORDER[k] ?? '', upper] as const);
+
+  it.each(steps)('src/core/%s importing src/core/%s (above it) is an error', async (lower, upper) => {
+    const up = await layerErrors(`src/core/${lower}/a/probe.ts`, `../../${upper}/thing.ts`);
+    expect(up).toHaveLength(1);
+    expect(up[0]).toContain(`src/core/${lower} must not import from src/core/${upper}`);
+    expect(await layerErrors(`src/core/${upper}/probe.ts`, `../${lower}/thing.ts`)).toEqual([]);
+  });
+
+  it('keeps files directly in src/core below every folder', async () => {
+    expect(await layerErrors('src/core/probe.ts', './text/printable.ts')).toHaveLength(1);
+    expect(await layerErrors('src/core/text/probe.ts', '../caution.ts')).toEqual([]);
+  });
+
+  it('reports a folder that is not placed in CORE_ORDER', async () => {
+    const [message] = await layerErrors('src/core/newfolder/probe.ts', '../model/netlist.ts');
+    expect(message).toContain('src/core/newfolder is not in CORE_ORDER');
+    expect(await layerErrors('src/core/newfolder/probe.ts', './sibling.ts')).toEqual([]);
   });
 });
