@@ -129,3 +129,30 @@ describe('the list of limits in DEVELOPERS.md', () => {
     expect(bounds.filter((name) => !section.includes(`\`${name}\``))).toEqual([]);
   });
 });
+
+describe('the worker lanes the docs name', () => {
+  const protocol = read('src/worker/protocol.ts');
+  const union = /export type AnalysisJob =([^;]+);/.exec(protocol)?.[1] ?? '';
+  const kinds = union
+    .split('|')
+    .map((name) => name.trim())
+    .map(
+      (name) => new RegExp(`interface ${name} [^{]*\\{[^}]*?readonly kind: '([\\w-]+)'`).exec(protocol)?.[1],
+    );
+  const NUMBERS = ['zero', 'one', 'two', 'three', 'four', 'five', 'six', 'seven', 'eight', 'nine', 'ten'];
+
+  it('are read from the protocol', () => {
+    expect(kinds.length).toBeGreaterThan(6);
+    expect(kinds.every((k) => k !== undefined)).toBe(true);
+  });
+
+  it.each([
+    ['DEVELOPERS.md', /There are (\w+) \(`JobLane`[^:]*:([^.]*)\./],
+    ['src/worker/README.md', /- (\w+) lanes, one worker each[^:]*:([^.]*)\./],
+  ])('are the job kinds of worker/protocol.ts in %s', (doc, pattern) => {
+    const m = pattern.exec(read(doc).replace(/\s+/g, ' '));
+    expect(m).not.toBeNull();
+    expect(NUMBERS.indexOf((m?.[1] ?? '').toLowerCase())).toBe(kinds.length);
+    expect(codeSpans(m?.[2] ?? '')).toEqual(kinds);
+  });
+});
