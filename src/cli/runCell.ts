@@ -5,6 +5,7 @@
 import { SequenceError, SweepLimitError } from '../core/analysis/check.ts';
 import { parseSequenceText } from '../core/analysis/sequenceText.ts';
 import type { CheckReport, VectorReport } from '../core/analysis/report.ts';
+import { sweepRows, type SweepColumns } from '../core/analysis/sweepColumns.ts';
 import { CAUTION } from '../core/caution.ts';
 import { CompileError } from '../core/compile/compile.ts';
 import { ExpressionError } from '../core/expect/parse.ts';
@@ -54,8 +55,14 @@ interface Extras {
   readonly dc?: readonly VectorDc[] | undefined;
 }
 
-export interface CellJson extends Omit<CheckReport, 'vectors' | 'steps'> {
+/**
+ * A checked cell as plain data, ready to print: the single-cell JSON object of docs/semantics.md §5,
+ * except that a sweep's rows stay in columns (`sweep`, printed as `vectors` row by row).
+ */
+export interface CellJson extends Omit<CheckReport, 'sweep' | 'steps'> {
   readonly file: string;
+  readonly sweep?: SweepColumns;
+  /** Rows as printed: a sweep's with `--dc` (each with its `dc`), or a sequence's steps. */
   readonly vectors?: readonly VectorJson[];
   readonly steps?: readonly VectorJson[];
   readonly technology: { readonly source: string; readonly vdd: number };
@@ -150,13 +157,14 @@ function cellJson(job: CellJob, report: CheckReport, extras: Extras): CellJson {
   const { power, sizing, transfer, dc } = extras;
   const rows = (list: readonly VectorReport[]): VectorJson[] =>
     list.map((v, i) => (dc?.[i] === undefined ? vectorJson(v) : { ...vectorJson(v), dc: dc[i] }));
+  const { sweep, steps } = report;
   return {
     cell: job.cell,
     file: job.file,
     inputs: report.inputs,
     outputs: report.outputs,
-    ...(report.vectors === undefined ? {} : { vectors: rows(report.vectors) }),
-    ...(report.steps === undefined ? {} : { steps: rows(report.steps) }),
+    ...(sweep === undefined ? {} : dc === undefined ? { sweep } : { vectors: rows(sweepRows(sweep)) }),
+    ...(steps === undefined ? {} : { steps: rows(steps) }),
     findings: report.findings,
     summary: report.summary,
     notes: [...job.notes, ...report.notes],

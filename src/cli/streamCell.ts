@@ -1,10 +1,11 @@
 /**
  * A cell whose sweep is too big to collect (more than STREAM_ROWS vectors): everything that can
- * refuse it is checked first (`prepareStreamedCell`), then its rows are handed on one at a time as
- * they are solved and never held together. Sequences and `--dc` are always collected (runCell.ts):
+ * refuse it is checked first (`prepareStreamedCell`), then its rows are handed on block by block
+ * (columns of up to SWEEP_BLOCK vectors) as they are solved and never held together. Sequences and `--dc` are always collected (runCell.ts):
  * a sequence has few steps, and the DC rows are read beside the check's.
  */
 import type { Finding, Summary } from '../core/analysis/report.ts';
+import type { SweepColumns } from '../core/analysis/sweepColumns.ts';
 import type { TransferReport } from '../core/dc/transfer.ts';
 import { prepareAnalysis } from '../core/power/cellAnalysis.ts';
 import { powerFromCounts } from '../core/power/powerReport.ts';
@@ -14,7 +15,7 @@ import type { SizingReport } from '../core/sizing/types.ts';
 import { sweepSize } from '../core/analysis/vectors.ts';
 import { cellTransfer } from './dcCell.ts';
 import type { CellFailure, CellJob } from './loadCells.ts';
-import { failureOf, powerSettings, vectorJson, type RunOptions, type VectorJson } from './runCell.ts';
+import { failureOf, powerSettings, type RunOptions } from './runCell.ts';
 
 /** Sweeps of more vectors than this are written as they run instead of collected first. */
 export const STREAM_ROWS = 4096;
@@ -46,7 +47,7 @@ export interface CellTail {
 
 export interface StreamedCell {
   readonly head: CellHead;
-  readonly rows: (onRow: (row: VectorJson) => void) => CellTail;
+  readonly rows: (onBlock: (block: SweepColumns) => void) => CellTail;
 }
 
 export function prepareStreamedCell(
@@ -55,13 +56,13 @@ export function prepareStreamedCell(
 ): StreamedCell | { failure: CellFailure } {
   try {
     const power = options.power === undefined ? undefined : powerSettings(job, options.power, undefined);
-    const onRow: { current: (row: VectorJson) => void } = { current: () => undefined };
+    const onBlock: { current: (block: SweepColumns) => void } = { current: () => undefined };
     const analysis = prepareAnalysis(job.netlist, {
       technology: job.technology,
       expectations: job.expectations,
       allNets: options.allNets,
       undrivenInputs: options.undriven,
-      onRow: (row) => onRow.current(vectorJson(row)),
+      onBlock: (block) => onBlock.current(block),
       ...(power === undefined ? {} : { power: power.request }),
     });
     const sizing = options.sizing
@@ -77,8 +78,8 @@ export function prepareStreamedCell(
       ...(sizing === undefined ? {} : { sizing }),
       ...(transfer === undefined ? {} : { transfer }),
     };
-    const rows = (each: (row: VectorJson) => void): CellTail => {
-      onRow.current = each;
+    const rows = (each: (block: SweepColumns) => void): CellTail => {
+      onBlock.current = each;
       const { report, power: counts } = analysis.run();
       const powerJson =
         counts === null || power === undefined ? undefined : powerFromCounts(counts, power.settings);

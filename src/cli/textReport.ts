@@ -10,7 +10,8 @@ import { own } from '../core/model/records.ts';
 import { formatSi, type Colour } from './colour.ts';
 import { dcLines, transferLines } from './dcText.ts';
 import type { CellFailure, CellSkip } from './loadCells.ts';
-import type { CellJson, VectorJson } from './runCell.ts';
+import { vectorJson, type CellJson, type VectorJson } from './runCell.ts';
+import { sweepFindings, sweepRow, type SweepColumns } from '../core/analysis/sweepColumns.ts';
 import type { CellHead, CellTail } from './streamCell.ts';
 
 /** Rows beyond this are left out when they have no findings (the JSON has them all). */
@@ -48,6 +49,19 @@ export class TextDigest {
     for (const f of row.findings) if (this.rowFindings.length < MAX_FINDINGS) this.rowFindings.push(f);
   }
 
+  /** A block of a sweep: only the rows the report may show are built. */
+  addBlock(s: SweepColumns): void {
+    for (let i = 0; i < s.count && this.first.length < MAX_TABLE_ROWS; i++)
+      this.first.push(vectorJson(sweepRow(s, i)));
+    for (let i = 0; i < s.count && this.flagged.length < MAX_TABLE_ROWS; i++)
+      if (s.kinds[i] !== 0) this.flagged.push(vectorJson(sweepRow(s, i)));
+    for (const f of sweepFindings(s)) {
+      this.rowFindingCount++;
+      if (this.rowFindings.length < MAX_FINDINGS) this.rowFindings.push(f);
+    }
+    this.rowCount += s.count;
+  }
+
   view(head: CellHead, tail: CellTail, rowKind: CellView['rowKind'] = 'vectors'): CellView {
     return {
       head,
@@ -65,7 +79,9 @@ export class TextDigest {
     const rows = json.steps ?? json.vectors ?? [];
     const digest = new TextDigest();
     rows.forEach((r) => digest.add(r));
+    if (json.sweep !== undefined) digest.addBlock(json.sweep);
     const inRows = new Set(rows.flatMap((r) => r.findings));
+    if (json.sweep !== undefined) for (const f of sweepFindings(json.sweep)) inRows.add(f);
     const { cell, file, inputs, outputs, technology, sizing, transfer, power, summary, notes } = json;
     const head: CellHead = {
       cell,

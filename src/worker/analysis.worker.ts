@@ -3,12 +3,13 @@
  * adapter: all work is in jobs.ts. Cancel is done by the page terminating this worker.
  */
 import * as Comlink from 'comlink';
-import { runJob } from './jobs.ts';
+import { forTransfer, runJob } from './jobs.ts';
 import type { AnalysisWorkerApi } from './protocol.ts';
 
 const api: AnalysisWorkerApi = {
   run(job, onProgress) {
-    return Promise.resolve(runJob(job, onProgress));
+    const { result, buffers } = forTransfer(runJob(job, onProgress));
+    return Promise.resolve(Comlink.transfer(result, buffers));
   },
 };
 

@@ -4,6 +4,7 @@
  * workers or the page.
  */
 import { DEFAULT_MAX_INPUTS, expressionNames } from '../core/analysis/check.ts';
+import { packedForTransfer } from '../core/analysis/sweepColumns.ts';
 import { nameRecord } from '../core/model/records.ts';
 import { analyseCell } from '../core/power/cellAnalysis.ts';
 import { sizingReport } from '../core/sizing/sizingReport.ts';
@@ -71,7 +72,9 @@ function sweep(job: SweepJob, onProgress: (p: JobProgress) => void): CheckPart {
     onProgress: throttled(onProgress),
     power: { activity: 'random' },
   });
-  return { report: { ...report, notes: [...notes, ...report.notes] }, power };
+  // Each vector's findings are in the sweep's details; the list keeps the structural ones.
+  const findings = report.findings.filter((f) => f.vector === null);
+  return { report: { ...report, findings, notes: [...notes, ...report.notes] }, power };
 }
 
 function sequence(job: SequenceJob, onProgress: (p: JobProgress) => void): CheckPart {
@@ -113,4 +116,15 @@ export function runJob(job: AnalysisJob, onProgress: (p: JobProgress) => void = 
     case 'vector-dc':
       return { kind: 'vector-dc', revision: job.revision, ...vectorDc(job), elapsedMs: elapsed() };
   }
+}
+
+/**
+ * A result ready to cross to the page: a sweep's details packed into one text and the buffers of its
+ * columns listed for transfer, so the page receives a 65,536-vector sweep without copying or
+ * cloning it object by object.
+ */
+export function forTransfer(result: JobResult): { result: JobResult; buffers: ArrayBuffer[] } {
+  if (result.kind !== 'sweep' || result.report.sweep === undefined) return { result, buffers: [] };
+  const { columns, buffers } = packedForTransfer(result.report.sweep);
+  return { result: { ...result, report: { ...result.report, sweep: columns } }, buffers };
 }

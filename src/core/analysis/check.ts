@@ -8,10 +8,13 @@ import type { Netlist } from '../model/netlist.ts';
 import { DEFAULT_TECHNOLOGY, type Technology } from '../model/technology.ts';
 import { levelName } from '../solver/levels.ts';
 import { Simulator, type SolveResult } from '../solver/simulator.ts';
+import { currentPathsOf } from './findingParts.ts';
 import type { CheckReport, Finding, FindingKind, Summary, VectorReport } from './report.ts';
 import { structuralFindings } from './rules.ts';
 import { vectorFindings } from './vectorFindings.ts';
 import { sequencePass, sweepPass, type PassProgress, type SolveObserver } from './pass.ts';
+import { KIND_ORDER, sweepFindings, type SweepColumns } from './sweepColumns.ts';
+import { reportedNets, SweepRecorder, type RecorderShape } from './sweepRecorder.ts';
 import { checkSweepLimit, sweepSize } from './vectors.ts';
 
 export { DEFAULT_MAX_INPUTS, SweepLimitError, sweepVectors } from './vectors.ts';
@@ -33,26 +36,17 @@ export interface CheckOptions {
   /** Further readers of each solved vector (power counters, level strips): one solve feeds all. */
   readonly observers?: readonly SolveObserver[];
   /**
-   * Rows go here as they are found and are not kept, so a 65,536-vector sweep never holds its rows:
-   * the report then has no rows and only the structural findings, while its summary still counts
-   * every finding.
+   * A sweep's rows go here block by block (SWEEP_BLOCK vectors at most) as they are solved and are
+   * not kept, so a sweep of millions of vectors never holds its rows: the report then has no `sweep`
+   * and only the structural findings, while its summary still counts every finding.
    */
-  readonly onRow?: (row: VectorReport, index: number) => void;
+  readonly onBlock?: (block: SweepColumns) => void;
 }
 
-export const FINDING_KINDS: readonly FindingKind[] = [
-  'short',
-  'static-current',
-  'floating',
-  'contention',
-  'degraded',
-  'charge-sharing',
-  'no-steady-state',
-  'mismatch',
-  'unknown',
-  'rule',
-  'limit',
-];
+/** Rows per block handed to `onBlock`: a multiple of 32, the vectors one bit-plane word holds. */
+export const SWEEP_BLOCK = 4096;
+
+export const FINDING_KINDS: readonly FindingKind[] = KIND_ORDER;
 
 export { expressionNames };
 
@@ -61,21 +55,19 @@ export function vectorLabel(v: InputVector, inputs: readonly string[]): string {
   return inputs.length === 0 ? '(no inputs)' : inputs.map((n) => `${n}=${v[n] ?? 'Z'}`).join(' ');
 }
 
-class Checker implements SolveObserver {
+/** What a check reads of every solved vector: its expected values and its findings. */
+class Checker {
   readonly compiled: CompiledNetlist;
   readonly simulator: Simulator;
-  readonly rows: VectorReport[] = [];
   private readonly expectations: [number, Expr][];
   /** Some expected function names an output (its held value). */
   private readonly refersToHeld: boolean;
-  /** The last row made: the held values of the next step in a sequence (rows may be streamed). */
-  private previous: VectorReport | undefined;
+  /** Findings of every vector checked, counted by kind (the rows themselves may be streamed). */
+  readonly counts: Record<string, number> = summarize(0, []) as Record<string, number>;
 
   constructor(
     readonly netlist: Netlist,
     readonly options: CheckOptions,
-    /** A sweep's vectors each start from an unknown state; a sequence's steps follow each other. */
-    readonly mode: 'vectors' | 'steps',
   ) {
     this.simulator =
       options.simulator ?? new Simulator(compile(netlist, options.technology ?? DEFAULT_TECHNOLOGY));
@@ -88,38 +80,27 @@ class Checker implements SolveObserver {
     this.refersToHeld = this.expectations.some(([, e]) => namesIn(e).some((name) => outputs.has(name)));
   }
 
-  /** Rows handed to `onRow` rather than kept, and their findings counted by kind. */
-  private readonly streamed = { rows: 0, counts: summarize(0, []) as Record<string, number> };
-
-  add(r: SolveResult, index: number): void {
-    // In a sequence an output's held value is its level at the previous step; a sweep has none.
-    const held = this.mode === 'steps' && index > 0 ? this.previous : undefined;
-    const row = this.vectorReport(r, index, held);
-    this.previous = row;
-    if (this.options.onRow === undefined) return void this.rows.push(row);
-    this.streamed.rows++;
-    countFindings(this.streamed.counts, row.findings);
-    this.options.onRow(row, index);
-  }
-
-  /** Every reader of this pass: the checker's own rows first. */
-  observers(): SolveObserver[] {
-    return [this, ...(this.options.observers ?? [])];
-  }
-
   /**
-   * One vector's report. `held` is the previous step's report in a sequence; without it (a sweep, or a
-   * sequence's first step) the outputs' held values are unknown.
+   * One vector's findings, counted. `held` is the previous step's report in a sequence; without it
+   * (a sweep, or a sequence's first step) the outputs' held values are unknown.
    */
-  vectorReport(r: SolveResult, index: number, held?: VectorReport): VectorReport {
+  findingsOf(r: SolveResult, index: number, held?: VectorReport): Finding[] {
     const { netlist } = this;
-    const c = this.compiled;
     const values = this.refersToHeld
       ? recordOf([...Object.entries(heldValues(netlist.outputs, held)), ...Object.entries(r.inputs)])
       : r.inputs;
     const expected = new Map<number, ExpectedValue>(
       this.expectations.map(([n, e]) => [n, evaluateExpression(e, values)]),
     );
+    const findings = vectorFindings(r, index, () => vectorLabel(r.inputs, netlist.inputs), expected);
+    countFindings(this.counts, findings);
+    return findings;
+  }
+
+  /** One step's report, in the shape of docs/semantics.md §5. */
+  vectorReport(r: SolveResult, index: number, held?: VectorReport): VectorReport {
+    const { netlist } = this;
+    const c = this.compiled;
     const voltageNets = this.options.allNets ? c.netNames : netlist.outputs;
     const volts = (name: string): number | null => {
       const v = r.volts[c.netIndex.get(name) as number];
@@ -133,37 +114,89 @@ class Checker implements SolveObserver {
       voltages: Object.fromEntries(voltageNets.map((n) => [n, volts(n)])),
       supplyCurrent: r.supplyCurrent,
       staticPower: r.staticPower,
-      currentPaths: r.paths.map((p) => ({
-        chain: p.nets.flatMap((n, i) =>
-          i < p.elements.length
-            ? [c.netNames[n], netlist.devices[c.chDevice[p.elements[i]]].name]
-            : [c.netNames[n]],
-        ),
-        current: p.current,
-      })),
-      findings: vectorFindings(r, index, () => vectorLabel(r.inputs, netlist.inputs), expected),
+      currentPaths: currentPathsOf(r),
+      findings: this.findingsOf(r, index, held),
     };
   }
 
-  /** The vector as given when it names every input (sweeps do), else completed with Z. */
+  /** The vector as given when it names every input, else completed with Z. */
   private allInputs(v: InputVector): InputVector {
     return this.netlist.inputs.every((n) => n in v)
       ? v
       : Object.fromEntries(this.netlist.inputs.map((n) => [n, v[n] ?? 'Z']));
   }
 
-  report(kind: 'vectors' | 'steps', rows: VectorReport[], notes: string[]): CheckReport {
-    const findings = [...structuralFindings(this.compiled), ...rows.flatMap((v) => v.findings)];
-    const summary = countFindings({ ...this.streamed.counts }, findings);
+  /** The report: structural findings first, then those of the rows kept; the summary counts all. */
+  report(vectors: number, rows: Pick<CheckReport, 'steps' | 'sweep'>, notes: string[]): CheckReport {
+    const structural = structuralFindings(this.compiled);
+    const kept = rows.steps?.flatMap((v) => v.findings) ?? (rows.sweep ? [...sweepFindings(rows.sweep)] : []);
+    const summary = countFindings({ ...this.counts }, structural);
     return {
       cell: this.netlist.name,
       inputs: this.netlist.inputs,
       outputs: this.netlist.outputs,
-      [kind]: rows,
-      findings,
-      summary: { ...summary, vectors: rows.length + this.streamed.rows },
+      ...rows,
+      findings: [...structural, ...kept],
+      summary: { ...summary, vectors },
       notes,
     };
+  }
+}
+
+/** The steps of a sequence as report rows, each read with the one before it (held values). */
+class StepRows implements SolveObserver {
+  readonly rows: VectorReport[] = [];
+
+  constructor(private readonly checker: Checker) {}
+
+  add(r: SolveResult, index: number): void {
+    const held = index > 0 ? this.rows[this.rows.length - 1] : undefined;
+    this.rows.push(this.checker.vectorReport(r, index, held));
+  }
+}
+
+/** The vectors of a sweep in columns: one block kept, or blocks handed to `onBlock` as they fill. */
+class SweepRows implements SolveObserver {
+  private recorder: SweepRecorder;
+  private readonly shape: RecorderShape;
+  private readonly total: number;
+  private readonly blockSize: number;
+  rows = 0;
+
+  constructor(
+    private readonly checker: Checker,
+    private readonly onBlock: ((block: SweepColumns) => void) | undefined,
+  ) {
+    const { netlist, options } = checker;
+    const undriven = options.undrivenInputs === true;
+    const c = checker.compiled;
+    const reported = reportedNets(c, options.allNets === true);
+    this.shape = { inputs: netlist.inputs, undriven, reported, vdd: c.tech.vdd };
+    this.total = sweepSize(netlist.inputs, undriven);
+    this.blockSize = onBlock === undefined ? this.total : Math.min(this.total, SWEEP_BLOCK);
+    this.recorder = this.block(0);
+  }
+
+  private block(first: number): SweepRecorder {
+    const capacity = Math.min(this.blockSize, this.total - first);
+    return new SweepRecorder(this.shape, first, Math.max(1, capacity));
+  }
+
+  add(r: SolveResult, index: number): void {
+    this.recorder.add(r, this.checker.findingsOf(r, index));
+    this.rows++;
+    if (this.onBlock !== undefined && this.recorder.isFull()) {
+      this.onBlock(this.recorder.columns());
+      this.recorder = this.block(this.rows);
+    }
+  }
+
+  /** The rows kept (none when streamed); a streamed sweep's last, partial block goes out here. */
+  finish(): SweepColumns | undefined {
+    const last = this.recorder.columns();
+    if (this.onBlock === undefined) return last;
+    if (last.count > 0) this.onBlock(last);
+    return undefined;
   }
 }
 
@@ -232,12 +265,14 @@ function countFindings(counts: Record<string, number>, findings: readonly Findin
 
 /** Checks every input combination, each solved from an unknown state (docs/semantics.md §2.9, sweep mode). */
 export function checkSweep(netlist: Netlist, options: CheckOptions = {}): CheckReport {
-  const checker = new Checker(netlist, options, 'vectors');
+  const checker = new Checker(netlist, options);
   checkSweepLimit(netlist.inputs, options.maxInputs);
   const total = sweepSize(netlist.inputs, options.undrivenInputs);
-  const done = sweepPass(checker.simulator, checker.observers(), options);
+  const rows = new SweepRows(checker, options.onBlock);
+  const done = sweepPass(checker.simulator, [rows, ...(options.observers ?? [])], options);
   const notes = done < total ? [`stopped after ${done} of ${total} vectors`] : [];
-  return checker.report('vectors', checker.rows, notes);
+  const sweep = rows.finish();
+  return checker.report(done, sweep === undefined ? {} : { sweep }, notes);
 }
 
 /**
@@ -249,9 +284,10 @@ export function checkSequence(
   steps: readonly InputVector[],
   options: CheckOptions = {},
 ): CheckReport {
-  const checker = new Checker(netlist, options, 'steps');
-  sequencePass(checker.simulator, steps, checker.observers(), options.onProgress);
-  return checker.report('steps', checker.rows, []);
+  const checker = new Checker(netlist, options);
+  const rows = new StepRows(checker);
+  sequencePass(checker.simulator, steps, [rows, ...(options.observers ?? [])], options.onProgress);
+  return checker.report(rows.rows.length, { steps: rows.rows }, []);
 }
 
 /** Checks a design: its sweep with its own technology and expected functions. */

@@ -3,6 +3,7 @@
  * Keep these names stable; add fields freely.
  */
 import type { InputValue } from '../model/design.ts';
+import type { SweepColumns } from './sweepColumns.ts';
 
 export type FindingKind =
   | 'short'
@@ -70,10 +71,13 @@ export interface CheckReport {
   readonly cell: string;
   readonly inputs: readonly string[];
   readonly outputs: readonly string[];
-  /** Sweep results; a sequence run fills `steps` instead. */
-  readonly vectors?: readonly VectorReport[];
+  /**
+   * Sweep results in columns (rows on demand: `sweepRow`); absent when the rows were handed on block
+   * by block (`CheckOptions.onBlock`). A sequence run fills `steps` instead.
+   */
+  readonly sweep?: SweepColumns;
   readonly steps?: readonly VectorReport[];
-  /** Every finding: structural ones first, then per vector. */
+  /** Every finding: structural ones first, then per vector (of the rows kept). */
   readonly findings: readonly Finding[];
   readonly summary: Summary;
   /** Notes about approximations or ignored input (e.g. bounds reached). */

@@ -16,6 +16,7 @@ import {
 import type { SolveResult } from '../solver/simulator.ts';
 import { engineering } from '../view/format.ts';
 import { channelDevices, finding, Namer } from './findingParts.ts';
+import { observationOf } from './observation.ts';
 import type { Finding, FindingKind, Severity } from './report.ts';
 import { unknownFindings } from './unknownFindings.ts';
 
@@ -69,12 +70,6 @@ function currentFindings(r: SolveResult, vector: number, label: () => string): F
   });
 }
 
-/** Nets that feed a gate or are outputs: the ones whose level matters to the cell. */
-function observed(r: SolveResult, n: number): boolean {
-  const c = r.compiled;
-  return c.netGates.start[n + 1] > c.netGates.start[n] || c.outputNets.includes(n);
-}
-
 /** Nets flagged in one result, and the finding helpers that read them. */
 class Flagged {
   readonly name: Namer;
@@ -92,9 +87,8 @@ class Flagged {
   }
 
   nets(flag: number, onlyObserved = false): number[] {
-    return this.flagged.filter(
-      (n) => (this.r.flags[n] & flag) !== 0 && (!onlyObserved || observed(this.r, n)),
-    );
+    const { observed } = observationOf(this.r.compiled);
+    return this.flagged.filter((n) => (this.r.flags[n] & flag) !== 0 && (!onlyObserved || observed[n] === 1));
   }
 
   /** One finding over a list of nets (none when the list is empty); `say` writes the message. */
@@ -190,10 +184,11 @@ function floatingFindings(
 ): Finding[] {
   const name = new Namer(r);
   const c = r.compiled;
+  const { observed, isOutput: outputs } = observationOf(c);
   const out: Finding[] = [];
   for (let n = 0; n < c.netCount; n++) {
-    if (r.levels[n] !== LEVEL_Z || r.topology.isSource[n] || !observed(r, n)) continue;
-    const isOutput = c.outputNets.includes(n);
+    if (r.levels[n] !== LEVEL_Z || r.topology.isSource[n] || observed[n] === 0) continue;
+    const isOutput = outputs[n] === 1;
     if (isOutput && expected.get(n) === 'Z') continue;
     const known = !Number.isNaN(r.volts[n]);
     const severity: Severity = isOutput || !known ? 'error' : 'warning';

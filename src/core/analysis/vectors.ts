@@ -21,22 +21,31 @@ export function checkSweepLimit(inputs: readonly string[], maxInputs = DEFAULT_M
   }
 }
 
+const TWO_VALUES: readonly InputValue[] = ['0', '1'];
+const THREE_VALUES: readonly InputValue[] = ['0', '1', 'Z'];
+
 /**
- * Every combination of the inputs in truth-table order: the first input is the most significant
- * digit (0, 1, then Z when undriven inputs are swept too). A generator, so a 16-input sweep never
- * holds its 65,536 vectors at once.
+ * Vector number k of a sweep in truth-table order: the first input is the most significant digit
+ * (0, 1, then Z when undriven inputs are swept too). The record's names are set last input first,
+ * the order the command line has always printed them in.
+ */
+export function sweepVector(inputs: readonly string[], k: number, undriven = false): InputVector {
+  const values = undriven ? THREE_VALUES : TWO_VALUES;
+  const base = values.length;
+  const vector = nameRecord<InputValue>(); // an input may be called __proto__
+  let rest = k;
+  for (let i = inputs.length - 1; i >= 0; i--) {
+    vector[inputs[i]] = values[rest % base];
+    rest = Math.floor(rest / base);
+  }
+  return vector;
+}
+
+/**
+ * Every combination of the inputs in truth-table order (see sweepVector). A generator, so a 16-input
+ * sweep never holds its 65,536 vectors at once.
  */
 export function* sweepVectors(inputs: readonly string[], undriven = false): Generator<InputVector> {
-  const values: readonly InputValue[] = undriven ? ['0', '1', 'Z'] : ['0', '1'];
-  const base = values.length;
   const total = sweepSize(inputs, undriven);
-  for (let k = 0; k < total; k++) {
-    const vector = nameRecord<InputValue>(); // an input may be called __proto__
-    let rest = k;
-    for (let i = inputs.length - 1; i >= 0; i--) {
-      vector[inputs[i]] = values[rest % base];
-      rest = Math.floor(rest / base);
-    }
-    yield vector;
-  }
+  for (let k = 0; k < total; k++) yield sweepVector(inputs, k, undriven);
 }

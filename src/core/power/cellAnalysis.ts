@@ -42,7 +42,7 @@ export function analyseCell(netlist: Netlist, options: CellAnalysisOptions = {})
 /**
  * Everything that can refuse the analysis (the power settings, the expected functions, the input
  * limit) is checked here, before a vector is solved, so a caller that writes rows as they come
- * (`onRow`) never has to abandon a report it has begun.
+ * (`onBlock`) never has to abandon a report it has begun.
  */
 export function prepareAnalysis(
   netlist: Netlist,
