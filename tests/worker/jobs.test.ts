@@ -1,10 +1,10 @@
 import { describe, expect, it } from 'vitest';
 import { SweepLimitError } from '../../src/core/analysis/check.ts';
-import type { SweepColumns } from '../../src/core/analysis/sweepColumns.ts';
+import { reportRows, type SweepColumns } from '../../src/core/analysis/sweepColumns.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import { levelAt, levelStrips } from '../../src/core/view/levelStrip.ts';
 import { vectorRows } from '../../src/core/view/vectorTable.ts';
-import { runJob as runAnyJob, usableExpectations } from '../../src/worker/jobs.ts';
+import { forTransfer, runJob as runAnyJob, usableExpectations } from '../../src/worker/jobs.ts';
 import type { CheckResult, SequenceJob, SweepJob } from '../../src/worker/protocol.ts';
 import { jobSize } from '../../src/worker/protocol.ts';
 import {
@@ -143,5 +143,26 @@ describe('power counts ride on the sweep', () => {
     expect(sweepOf(withZ).count).toBe(9);
     expect(withZ.power?.vectors.map((v) => v.inputs)).toEqual(plain.power?.vectors.map((v) => v.inputs));
     expect(withZ.power?.nets).toEqual(plain.power?.nets);
+  });
+});
+
+describe('a sweep crossing to the page', () => {
+  it('moves its columns as buffers and its details as one text, reading back row for row', () => {
+    const result = runJob({
+      kind: 'sweep',
+      revision: 3,
+      cell: design(nand2MissingPullUp, { Y: '!(A & B)' }),
+    });
+    const [rows, table] = [reportRows(result.report), vectorRows(sweepOf(result))];
+    const { result: moving, buffers } = forTransfer(result);
+    expect(buffers.length).toBeGreaterThanOrEqual(8);
+    const arrived = structuredClone(moving, { transfer: buffers }) as CheckResult;
+    expect(buffers.every((b) => b.byteLength === 0)).toBe(true); // moved, not copied
+    const sweep = sweepOf(arrived);
+    expect(Array.isArray(sweep.details)).toBe(false);
+    expect(vectorRows(sweep)).toEqual(table);
+    expect(reportRows(arrived.report)).toEqual(rows);
+    // Only the structural findings travel in the report's list; each vector's are in its row.
+    expect(arrived.report.findings.every((f) => f.vector === null)).toBe(true);
   });
 });
