@@ -3,12 +3,11 @@
  * command line makes): the worker exposes them, tests call them directly. Nothing here knows about
  * workers or the page.
  */
-import { DEFAULT_MAX_INPUTS, expressionNames } from '../core/analysis/check.ts';
+import { DEFAULT_MAX_INPUTS } from '../core/analysis/check.ts';
 import { packedForTransfer } from '../core/analysis/sweepColumns.ts';
-import { nameRecord } from '../core/model/records.ts';
 import { analyseCell } from '../core/power/cellAnalysis.ts';
 import { sizingReport } from '../core/sizing/sizingReport.ts';
-import { expressionProblem } from '../core/view/expectation.ts';
+import { usableExpectations as usableExpectationsOf } from '../core/view/expectation.ts';
 import { StepLevelRecorder } from '../core/view/sequenceLevels.ts';
 import { transfer, vectorDc } from './dcJobs.ts';
 import { MAX_INPUTS_WITH_UNDRIVEN } from './protocol.ts';
@@ -27,26 +26,12 @@ import type {
 /** Progress messages cross a thread boundary: at most one per this many milliseconds. */
 const PROGRESS_INTERVAL_MS = 50;
 
-/**
- * Expected functions the sweep can use: those of existing outputs that parse. The rest become notes,
- * so renaming a pin never takes the whole table away.
- */
+/** The cell's expected functions a check can use, and notes for the rest (core/view/expectation.ts). */
 export function usableExpectations(cell: CellInput): {
   expectations: Record<string, string>;
   notes: string[];
 } {
-  const { outputs } = cell.netlist;
-  const names = expressionNames(cell.netlist);
-  const expectations = nameRecord<string>(); // an output may be called __proto__
-  const notes: string[] = [];
-  for (const [output, text] of Object.entries(cell.expectations)) {
-    const problem = outputs.includes(output)
-      ? expressionProblem(text, names)
-      : { message: 'not an output', position: 0 };
-    if (problem === null) expectations[output] = text;
-    else notes.push(`expected function of ${output} ignored: ${problem.message}`);
-  }
-  return { expectations, notes };
+  return usableExpectationsOf(cell.netlist, cell.expectations);
 }
 
 function throttled(onProgress: (p: JobProgress) => void): (done: number, total: number) => void {

@@ -4,8 +4,20 @@ import { nameRecord } from '../model/records.ts';
 /** Exhaustive sweeps stop here by default: 2^16 = 65,536 vectors. */
 export const DEFAULT_MAX_INPUTS = 16;
 
+/** The most inputs a sweep can be asked to take (`--max-inputs`): 2^24 = 16,777,216 vectors. */
+export const MAX_SWEEP_INPUTS = 24;
+
 export class SweepLimitError extends Error {
   override readonly name = 'SweepLimitError';
+  constructor(
+    /** The cell's inputs and the limit they exceed. */
+    readonly inputs: number,
+    readonly limit: number,
+  ) {
+    super(
+      `${inputs} inputs exceed the exhaustive-sweep limit of ${limit} (${(2 ** limit).toLocaleString('en-US')} vectors)`,
+    );
+  }
 }
 
 /** How many vectors a sweep has: 2^n, or 3^n when each input may also be left undriven. */
@@ -14,11 +26,7 @@ export function sweepSize(inputs: readonly string[], undriven = false): number {
 }
 
 export function checkSweepLimit(inputs: readonly string[], maxInputs = DEFAULT_MAX_INPUTS): void {
-  if (inputs.length > maxInputs) {
-    throw new SweepLimitError(
-      `${inputs.length} inputs exceed the exhaustive-sweep limit of ${maxInputs} (${2 ** maxInputs} vectors)`,
-    );
-  }
+  if (inputs.length > maxInputs) throw new SweepLimitError(inputs.length, maxInputs);
 }
 
 const TWO_VALUES: readonly InputValue[] = ['0', '1'];
