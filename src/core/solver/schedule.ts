@@ -120,13 +120,30 @@ export class Schedule {
       const end = order.start[s + 1];
       if (tracked && !this.anyDirty(dirty, first, end)) continue;
       if (tracked) for (let i = first; i < end; i++) this.forget(order.items[i], state, fresh);
-      if (end - first === 1 && !this.selfDependent[order.items[first]]) {
-        this.evaluateOne(order.items[first], sourceVolts, state, fresh);
-      } else {
-        this.settle(s, Array.from(order.items.subarray(first, end)), sourceVolts, state);
-      }
+      this.evaluateGroup(s, sourceVolts, state, fresh);
       if (tracked) for (let i = first; i < end; i++) this.markChangedNets(order.items[i], state, dirty);
     }
+  }
+
+  /**
+   * Evaluates strongly connected group s (a row of `topology.sccOrder`) against the voltages now in
+   * `state` (its gates outside the group, the sources tied to it) and `sourceVolts`, and writes its nets
+   * and elements into `state`: one component outside any loop is evaluated once, a feedback group by
+   * Jacobi rounds and the steady-state search. With `fresh`, the caller has set the group's nets to
+   * unknown charge (NaN, not driven) first, as a sweep does. The one evaluation of a group: the solve
+   * and the component tables (`core/tables`) both call it, so they can never disagree.
+   */
+  evaluateGroup(s: number, sourceVolts: Float64Array, state: NetState, fresh: boolean): void {
+    const order = this.topology.sccOrder;
+    const first = order.start[s];
+    if (this.isSimpleGroup(s)) this.evaluateOne(order.items[first], sourceVolts, state, fresh);
+    else this.settle(s, Array.from(order.items.subarray(first, order.start[s + 1])), sourceVolts, state);
+  }
+
+  /** True when group s is one component that gates none of its own elements (no feedback). */
+  isSimpleGroup(s: number): boolean {
+    const order = this.topology.sccOrder;
+    return order.start[s + 1] - order.start[s] === 1 && !this.selfDependent[order.items[order.start[s]]];
   }
 
   private anyDirty(dirty: Uint8Array, first: number, end: number): boolean {
