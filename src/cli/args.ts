@@ -6,6 +6,7 @@ import { parseArgs, type ParseArgsConfig } from 'node:util';
 import { MARGIN_CONVENTIONS, type MarginConvention } from '../core/dc/figures.ts';
 import { DEFAULT_TRANSFER_POINTS, MAX_TRANSFER_POINTS } from '../core/dc/transfer.ts';
 import { nameRecord } from '../core/model/records.ts';
+import { MAX_SWEEP_INPUTS } from '../core/analysis/vectors.ts';
 import { spiceValue } from '../core/netlist-io/spiceNumber.ts';
 import { parseStandIns, type StandIn } from '../core/netlist-io/deviceNames.ts';
 import { rangeProblem } from '../core/netlist-io/valueRanges.ts';
@@ -55,6 +56,8 @@ export interface CheckArgs extends CellChoice {
   /** Output load in farads for --power and --sizing, when given (else the core's default). */
   readonly load?: number;
   readonly jobs?: number;
+  /** Inputs a sweep may take (`--max-inputs`, at most MAX_SWEEP_INPUTS); the core's default when left out. */
+  readonly maxInputs?: number;
   readonly help: boolean;
 }
 
@@ -98,6 +101,7 @@ const CHECK_OPTIONS = {
   convention: { type: 'string' },
   points: { type: 'string' },
   dc: { type: 'boolean' },
+  'max-inputs': { type: 'string' },
 } as const satisfies ParseArgsConfig['options'];
 
 const EXPORT_OPTIONS = {
@@ -127,8 +131,23 @@ export function parseCheckArgs(argv: readonly string[]): CheckArgs {
     ...(v.load === undefined ? {} : { load: loadValue(v.load) }),
     ...(v.power ? { power: powerChoice(v) } : {}),
     ...(v.jobs === undefined ? {} : { jobs: positiveInteger('--jobs', v.jobs) }),
+    ...(v['max-inputs'] === undefined ? {} : { maxInputs: maxInputs(v['max-inputs']) }),
   };
 }
+
+/** `--max-inputs N`: 1 to MAX_SWEEP_INPUTS; past that no sweep is offered, and the message says what is. */
+function maxInputs(text: string): number {
+  const value = positiveInteger('--max-inputs', text);
+  if (value > MAX_SWEEP_INPUTS)
+    throw new UsageError(
+      `--max-inputs ${value}: a sweep takes at most ${MAX_SWEEP_INPUTS} inputs (${(2 ** MAX_SWEEP_INPUTS).toLocaleString('en-US')} vectors); ${WIDER_CELLS}`,
+    );
+  return value;
+}
+
+/** What to do for a cell with more inputs than any sweep takes. */
+export const WIDER_CELLS =
+  'check chosen vectors instead with --sequence "A=0 B=1; A=1" (a single vector is a one-step sequence)';
 
 export function parseExportArgs(argv: readonly string[]): ExportArgs {
   const { values: v, positionals } = parse(argv, EXPORT_OPTIONS);

@@ -48,6 +48,7 @@ export async function checkCommand(args: CheckArgs, io: Output): Promise<number>
     sizing: args.sizing,
     load: args.load ?? DEFAULT_POWER_SETTINGS.load,
     dc: args.dc,
+    ...(args.maxInputs === undefined ? {} : { maxInputs: args.maxInputs }),
     ...(args.transfer === undefined ? {} : { transfer: args.transfer }),
     ...(args.sequence === undefined ? {} : { sequence: args.sequence }),
     ...(args.power === undefined ? {} : { power: args.power }),

@@ -21,7 +21,8 @@ import { compile } from '../core/compile/compile.ts';
 import { TransferError, type TransferReport } from '../core/dc/transfer.ts';
 import { VectorDcRunner, type VectorDc } from '../core/dc/vectorDc.ts';
 import { Simulator } from '../core/solver/simulator.ts';
-import type { TransferChoice } from './args.ts';
+import { MAX_SWEEP_INPUTS } from '../core/analysis/vectors.ts';
+import { WIDER_CELLS, type TransferChoice } from './args.ts';
 import { cellTransfer } from './dcCell.ts';
 import type { CellFailure, CellJob, CellSkip } from './loadCells.ts';
 
@@ -38,6 +39,8 @@ export interface RunOptions {
   readonly transfer?: TransferChoice;
   /** Level-1 DC beside each vector, read from the same pass as the check. */
   readonly dc?: boolean;
+  /** Inputs a sweep may take (`--max-inputs`); the core's default when left out. */
+  readonly maxInputs?: number;
 }
 
 /** A vector as printed: inputs as the numbers 0 and 1 (X and Z stay strings), per docs/semantics.md §5. */
@@ -88,6 +91,7 @@ export function runCell(job: CellJob, options: RunOptions): CellResult {
       expectations: job.expectations,
       allNets: options.allNets,
       undrivenInputs: options.undriven,
+      ...(options.maxInputs === undefined ? {} : { maxInputs: options.maxInputs }),
       ...(dc === null ? {} : { observers: [dc] }),
       ...(steps === undefined ? {} : { steps }),
       ...(power === undefined ? {} : { power: power.request }),
@@ -146,11 +150,17 @@ export function failureOf(e: unknown): { message: string; field?: string } {
   if (e instanceof SequenceError) return { message: `--sequence: ${e.message}`, field: 'sequence' };
   if (e instanceof TransferError) return { message: `--transfer: ${e.message}`, field: 'transfer' };
   if (e instanceof PowerOptionsError) return { message: `--power: ${e.message}`, field: e.field };
-  if (e instanceof SweepLimitError)
-    return { message: `${e.message}; name fewer inputs or give --sequence`, field: 'inputs' };
+  if (e instanceof SweepLimitError) return { message: sweepLimitMessage(e), field: 'inputs' };
   if (e instanceof CompileError) return { message: e.message };
   const text = e instanceof Error ? (e.stack ?? e.message) : String(e);
   return { message: `internal error (please report it): ${text}` };
+}
+
+/** Past the limit asked for, how to sweep anyway; past the largest sweep, what to check instead. */
+function sweepLimitMessage(e: SweepLimitError): string {
+  if (e.inputs <= MAX_SWEEP_INPUTS && e.limit < e.inputs)
+    return `${e.message}; give --max-inputs ${e.inputs} to sweep all ${(2 ** e.inputs).toLocaleString('en-US')} vectors, or ${WIDER_CELLS}`;
+  return `${e.message}, and no sweep takes more than ${MAX_SWEEP_INPUTS}; ${WIDER_CELLS}`;
 }
 
 function cellJson(job: CellJob, report: CheckReport, extras: Extras): CellJson {

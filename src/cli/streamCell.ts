@@ -62,6 +62,7 @@ export function prepareStreamedCell(
       expectations: job.expectations,
       allNets: options.allNets,
       undrivenInputs: options.undriven,
+      ...(options.maxInputs === undefined ? {} : { maxInputs: options.maxInputs }),
       onBlock: (block) => onBlock.current(block),
       ...(power === undefined ? {} : { power: power.request }),
     });

@@ -47,6 +47,8 @@ Circuit:
   --supply NAMES        extra supply rail net names, comma separated
   --ground NAMES        extra ground rail net names, comma separated
   --undriven            also leave each input undriven (Z) in the sweep
+  --max-inputs N        sweep cells of up to N inputs (default 16, at most 24: 16,777,216
+                        vectors); wider cells are checked with --sequence
 
 Netlists:
   --scale F             metres per unit of W and L as written (e.g. 1e-6), over the file's own

@@ -1,6 +1,5 @@
 import { useCallback, useMemo } from 'react';
-import { MAX_INPUTS_WITH_UNDRIVEN, PROGRESS_THRESHOLD_VECTORS, jobSize } from '../worker/protocol.ts';
-import { DEFAULT_MAX_INPUTS } from '../core/analysis/check.ts';
+import { PROGRESS_THRESHOLD_VECTORS, appSweepLimit, jobSize } from '../worker/protocol.ts';
 import type { SweepColumns } from '../core/analysis/sweepColumns.ts';
 import { arrangeRows, kindCounts, vectorRow } from '../core/view/vectorTable.ts';
 import { AUTO_SWEEP_VECTORS } from '../state/analysis.ts';
@@ -22,12 +21,13 @@ function SweepStatus() {
   const design = useStore((s) => s.design);
   const undrivenInputs = useSimulation((s) => s.undrivenInputs);
   const size = jobSize({ kind: 'sweep', revision: 0, cell: design, undrivenInputs });
-  const limit = undrivenInputs ? MAX_INPUTS_WITH_UNDRIVEN : DEFAULT_MAX_INPUTS;
+  const limit = appSweepLimit(undrivenInputs);
   if (design.netlist.inputs.length > limit) {
     return (
       <p className="rw-muted" data-testid="sweep-limit">
-        {design.netlist.inputs.length} inputs: more than the {limit} an exhaustive check allows. Check the
-        cell with sequences, or split it.
+        {design.netlist.inputs.length} inputs: more than the {limit} the page checks exhaustively. The shown
+        vector is still checked (its findings are above); check chosen vectors with sequences, or the whole
+        cell with <code>railwise check --max-inputs</code> (up to 24 inputs).
       </p>
     );
   }

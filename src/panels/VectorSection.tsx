@@ -6,6 +6,8 @@ import { detailOf } from '../core/analysis/sweepColumns.ts';
 import { rowOfVector } from '../core/view/vectorTable.ts';
 import { stepVector, toggleInput, useSimulation, type SimulationState } from '../state/simulation.ts';
 import { useStore } from '../state/store.ts';
+import { usableExpectations } from '../core/view/expectation.ts';
+import { appSweepLimit } from '../worker/protocol.ts';
 import { FindingList } from './FindingList.tsx';
 import { InputStrip } from './InputStrip.tsx';
 import { NetList } from './NetList.tsx';
@@ -26,16 +28,34 @@ function shownRow(s: SimulationState): number | null {
   return s.selectedRow ?? rowOfVector(sweep, s.vector);
 }
 
-/** The findings of what the sheet shows: the picked step's, else its sweep row's (null: none yet). */
+/**
+ * The findings of what the sheet shows: the picked step's, else its sweep row's, else, for a cell
+ * too wide to sweep, the shown vector's own (docs/semantics.md §7). Null: none yet.
+ */
 function useShownFindings(): readonly Finding[] | null {
   const step = useSimulation(shownStep);
   const sweep = useSimulation((s) => (s.sweep.status === 'done' ? s.sweep.result?.report.sweep : undefined));
   const row = useSimulation((s) => (s.selectedStep === null ? shownRow(s) : null));
+  const wide = useWideCellFindings();
   return useMemo(() => {
     if (step !== null) return step.findings;
+    if (wide !== null) return wide;
     if (sweep === undefined || row === null) return null;
     return detailOf(sweep, row)?.findings ?? [];
-  }, [step, sweep, row]);
+  }, [step, sweep, row, wide]);
+}
+
+/** Past the page's sweep limit: the live vector's findings, expected functions included; else null. */
+function useWideCellFindings(): readonly Finding[] | null {
+  const session = useSimulation((s) => s.session);
+  const live = useSimulation((s) => s.live);
+  const undriven = useSimulation((s) => s.undrivenInputs);
+  const given = useStore((s) => s.design.expectations);
+  return useMemo(() => {
+    if (session === null || live === null) return null;
+    if (session.netlist.inputs.length <= appSweepLimit(undriven)) return null;
+    return session.findingsOfLast(usableExpectations(session.netlist, given).expectations);
+  }, [session, live, undriven, given]);
 }
 
 function CurrentPaths() {

@@ -3,14 +3,13 @@
  * command line makes): the worker exposes them, tests call them directly. Nothing here knows about
  * workers or the page.
  */
-import { DEFAULT_MAX_INPUTS } from '../core/analysis/check.ts';
 import { packedForTransfer } from '../core/analysis/sweepColumns.ts';
 import { analyseCell } from '../core/power/cellAnalysis.ts';
 import { sizingReport } from '../core/sizing/sizingReport.ts';
 import { usableExpectations as usableExpectationsOf } from '../core/view/expectation.ts';
 import { StepLevelRecorder } from '../core/view/sequenceLevels.ts';
 import { transfer, vectorDc } from './dcJobs.ts';
-import { MAX_INPUTS_WITH_UNDRIVEN } from './protocol.ts';
+import { appSweepLimit } from './protocol.ts';
 import type {
   AnalysisJob,
   CellInput,
@@ -53,7 +52,7 @@ function sweep(job: SweepJob, onProgress: (p: JobProgress) => void): CheckPart {
     technology: job.cell.technology,
     expectations,
     undrivenInputs: undriven,
-    maxInputs: undriven ? MAX_INPUTS_WITH_UNDRIVEN : DEFAULT_MAX_INPUTS,
+    maxInputs: appSweepLimit(undriven),
     onProgress: throttled(onProgress),
     power: { activity: 'random' },
   });

@@ -135,8 +135,19 @@ export interface AnalysisWorkerApi {
   run(job: AnalysisJob, onProgress: (progress: JobProgress) => void): Promise<JobResult>;
 }
 
-/** With Z as a third value, 3^10 = 59,049 vectors: about the two-valued limit of 2^16. */
-export const MAX_INPUTS_WITH_UNDRIVEN = 10;
+/**
+ * The page sweeps up to 2^20 = 1,048,576 vectors in the worker, with progress and cancel; the
+ * command line goes to 24 inputs when asked (docs/semantics.md §7).
+ */
+export const APP_MAX_INPUTS = 20;
+
+/** With Z as a third value, 3^12 = 531,441 vectors: within the two-valued limit of 2^20. */
+export const MAX_INPUTS_WITH_UNDRIVEN = 12;
+
+/** The most inputs the page sweeps, two- or three-valued. */
+export function appSweepLimit(undrivenInputs: boolean): number {
+  return undrivenInputs ? MAX_INPUTS_WITH_UNDRIVEN : APP_MAX_INPUTS;
+}
 
 /** Sweeps with more vectors than this show a progress bar and a cancel button. */
 export const PROGRESS_THRESHOLD_VECTORS = 4096;

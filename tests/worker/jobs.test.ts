@@ -6,7 +6,7 @@ import { levelAt, levelStrips } from '../../src/core/view/levelStrip.ts';
 import { vectorRows } from '../../src/core/view/vectorTable.ts';
 import { forTransfer, runJob as runAnyJob, usableExpectations } from '../../src/worker/jobs.ts';
 import type { CheckResult, SequenceJob, SweepJob } from '../../src/worker/protocol.ts';
-import { jobSize } from '../../src/worker/protocol.ts';
+import { APP_MAX_INPUTS, MAX_INPUTS_WITH_UNDRIVEN, jobSize } from '../../src/worker/protocol.ts';
 import {
   RESISTOR_LOAD_OHMS,
   design,
@@ -68,12 +68,29 @@ describe('sweep job', () => {
     expect(seen[seen.length - 1]).toBe(1);
   });
 
+  /** The NAND2 with `extra` more inputs that drive nothing. */
+  const widened = (extra: number) => ({
+    ...nand2,
+    inputs: [...nand2.inputs, ...Array.from({ length: extra }, (_, i) => `U${i}`)],
+  });
+
   it('caps sweeps with undriven inputs and names the limit', () => {
-    const many = { ...nand2, inputs: [...nand2.inputs, ...Array.from({ length: 9 }, (_, i) => `U${i}`)] };
-    expect(jobSize({ kind: 'sweep', revision: 0, cell: design(many), undrivenInputs: true })).toBe(3 ** 11);
+    const many = widened(MAX_INPUTS_WITH_UNDRIVEN - 1);
+    const size = jobSize({ kind: 'sweep', revision: 0, cell: design(many), undrivenInputs: true });
+    expect(size).toBe(3 ** (MAX_INPUTS_WITH_UNDRIVEN + 1));
     expect(() => runJob({ kind: 'sweep', revision: 1, cell: design(many), undrivenInputs: true })).toThrow(
       SweepLimitError,
     );
+  });
+
+  it("sweeps past the command line's default of 16 inputs, and refuses past the page's limit", () => {
+    const result = runJob({ kind: 'sweep', revision: 1, cell: design(widened(15), { Y: '!(A & B)' }) });
+    expect(sweepOf(result).count).toBe(2 ** 17);
+    // NAND2 (common practice, no source): no vector disagrees; the 15 unused inputs are structural findings.
+    expect(result.report.summary.mismatch).toBe(0);
+    expect(result.report.findings.every((f) => f.vector === null)).toBe(true);
+    const wide = design(widened(APP_MAX_INPUTS - 1));
+    expect(() => runJob({ kind: 'sweep', revision: 1, cell: wide })).toThrow(SweepLimitError);
   });
 });
 

@@ -15,7 +15,7 @@ import { vectorFindings } from './vectorFindings.ts';
 import { sequencePass, sweepPass, type PassProgress, type SolveObserver } from './pass.ts';
 import { KIND_ORDER, sweepFindings, type SweepColumns } from './sweepColumns.ts';
 import { reportedNets, SweepRecorder, type RecorderShape } from './sweepRecorder.ts';
-import { checkSweepLimit, sweepSize } from './vectors.ts';
+import { checkSweepLimit, sweepSize, vectorNumber } from './vectors.ts';
 
 export { DEFAULT_MAX_INPUTS, SweepLimitError, sweepVectors } from './vectors.ts';
 export { SequenceError } from './pass.ts';
@@ -288,6 +288,20 @@ export function checkSequence(
   const rows = new StepRows(checker);
   sequencePass(checker.simulator, steps, [rows, ...(options.observers ?? [])], options.onProgress);
   return checker.report(rows.rows.length, { steps: rows.rows }, []);
+}
+
+/**
+ * One solved vector's findings, read as a sweep row's are, expected functions included: the page's
+ * shown vector when the cell has more inputs than a sweep takes (docs/semantics.md §7).
+ */
+export function solvedVectorFindings(
+  netlist: Netlist,
+  simulator: Simulator,
+  r: SolveResult,
+  expectations: Readonly<Record<string, string>>,
+): Finding[] {
+  const checker = new Checker(netlist, { simulator, expectations });
+  return checker.findingsOf(r, vectorNumber(netlist.inputs, r.inputs));
 }
 
 /** Checks a design: its sweep with its own technology and expected functions. */

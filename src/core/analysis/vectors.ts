@@ -49,6 +49,17 @@ export function sweepVector(inputs: readonly string[], k: number, undriven = fal
   return vector;
 }
 
+/** A two-valued vector's number in truth-table order (sweepVector's inverse); 0 when an input is not 0 or 1. */
+export function vectorNumber(inputs: readonly string[], vector: InputVector): number {
+  let k = 0;
+  for (const name of inputs) {
+    const value = Object.hasOwn(vector, name) ? vector[name] : undefined;
+    if (value !== '0' && value !== '1') return 0;
+    k = k * 2 + (value === '1' ? 1 : 0);
+  }
+  return k;
+}
+
 /**
  * Every combination of the inputs in truth-table order (see sweepVector). A generator, so a 16-input
  * sweep never holds its 65,536 vectors at once.

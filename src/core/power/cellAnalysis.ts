@@ -54,7 +54,12 @@ export function prepareAnalysis(
   if (power !== undefined)
     checkPowerPass(netlist, power.activity, {
       sequence: power.sequence ?? steps ?? [],
-      ...(shared ? { maxInputs: Infinity } : {}),
+      // The check's own limit applies to a pass of the power's own too (--max-inputs).
+      ...(shared
+        ? { maxInputs: Infinity }
+        : options.maxInputs === undefined
+          ? {}
+          : { maxInputs: options.maxInputs }),
     });
   refusalBeforeCheck(netlist, options, steps === undefined);
   const run = (): CellAnalysis => {
