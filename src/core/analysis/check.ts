@@ -16,6 +16,7 @@ import { sequencePass, sweepPass, type PassProgress, type SolveObserver } from '
 import { KIND_ORDER, sweepFindings, type SweepColumns } from './sweepColumns.ts';
 import { reportedNets, SweepRecorder, type RecorderShape } from './sweepRecorder.ts';
 import { checkSweepLimit, sweepSize, vectorNumber } from './vectors.ts';
+import { WordSweep, type WordRows } from './vectorsWordPass.ts';
 
 export { DEFAULT_MAX_INPUTS, SweepLimitError, sweepVectors } from './vectors.ts';
 export { SequenceError } from './pass.ts';
@@ -41,6 +42,11 @@ export interface CheckOptions {
    * and only the structural findings, while its summary still counts every finding.
    */
   readonly onBlock?: (block: SweepColumns) => void;
+  /**
+   * Sweeps take the bit-parallel path where the cell suits it (docs/semantics.md §2.10; same rows);
+   * false keeps every vector on the scalar engine, for comparison.
+   */
+  readonly wordParallel?: boolean;
 }
 
 /** Rows per block handed to `onBlock`: a multiple of 32, the vectors one bit-plane word holds. */
@@ -156,7 +162,7 @@ class StepRows implements SolveObserver {
 }
 
 /** The vectors of a sweep in columns: one block kept, or blocks handed to `onBlock` as they fill. */
-class SweepRows implements SolveObserver {
+class SweepRows implements SolveObserver, WordRows {
   private recorder: SweepRecorder;
   private readonly shape: RecorderShape;
   private readonly total: number;
@@ -184,11 +190,29 @@ class SweepRows implements SolveObserver {
 
   add(r: SolveResult, index: number): void {
     this.recorder.add(r, this.checker.findingsOf(r, index));
+    this.next();
+  }
+
+  addWord(levels: Int32Array, fast: number): void {
+    this.recorder.orLevels(levels, fast);
+  }
+
+  addPlain(): void {
+    this.recorder.addPlain();
+    this.next();
+  }
+
+  private next(): void {
     this.rows++;
     if (this.onBlock !== undefined && this.recorder.isFull()) {
       this.onBlock(this.recorder.columns());
       this.recorder = this.block(this.rows);
     }
+  }
+
+  /** The reported nets, as compiled net numbers. */
+  get reportedNets(): Int32Array {
+    return this.shape.reported.nets;
   }
 
   /** The rows kept (none when streamed); a streamed sweep's last, partial block goes out here. */
@@ -269,10 +293,21 @@ export function checkSweep(netlist: Netlist, options: CheckOptions = {}): CheckR
   checkSweepLimit(netlist.inputs, options.maxInputs);
   const total = sweepSize(netlist.inputs, options.undrivenInputs);
   const rows = new SweepRows(checker, options.onBlock);
-  const done = sweepPass(checker.simulator, [rows, ...(options.observers ?? [])], options);
+  const words = wordSweepOf(checker, rows, options);
+  const done =
+    words === null
+      ? sweepPass(checker.simulator, [rows, ...(options.observers ?? [])], options)
+      : words.run(rows, options.onProgress);
   const notes = done < total ? [`stopped after ${done} of ${total} vectors`] : [];
   const sweep = rows.finish();
   return checker.report(done, sweep === undefined ? {} : { sweep }, notes);
+}
+
+/** The bit-parallel sweep when nothing but the rows reads the vectors and the cell suits it. */
+function wordSweepOf(checker: Checker, rows: SweepRows, options: CheckOptions): WordSweep | null {
+  if (options.wordParallel === false || options.undrivenInputs === true) return null;
+  if ((options.observers?.length ?? 0) > 0) return null;
+  return WordSweep.plan(checker.simulator, rows.reportedNets, options.expectations ?? {});
 }
 
 /**

@@ -87,6 +87,24 @@ export class SweepRecorder {
     this.addRow(r.supplyCurrent, r.staticPower, findings, () => currentPathsOf(r));
   }
 
+  /**
+   * Levels of the 32 rows from the next one (which starts a word) where `lanes` has a bit: two words
+   * per reported net, code bits 0 and 1, as the bit-parallel sweep writes them (vectorsWordPass.ts).
+   */
+  orLevels(levels: Int32Array, lanes: number): void {
+    const { words } = this;
+    const w = this.count >> 5;
+    for (let j = 0; 2 * j < levels.length; j++) {
+      this.levels[2 * j * words + w]! |= levels[2 * j]! & lanes;
+      this.levels[(2 * j + 1) * words + w]! |= levels[2 * j + 1]! & lanes;
+    }
+  }
+
+  /** The next row, plain (no findings, no current, voltages as its levels imply); levels by orLevels. */
+  addPlain(): void {
+    this.count++;
+  }
+
   /** The next row from a report row (`sweepRow`'s inverse): what a test or a fixture writes by hand. */
   addReport(row: VectorReport): void {
     const { names } = this.reported;
