@@ -28,9 +28,9 @@ function isIndex(name: string): boolean {
  * indices first, ascending, then the rest as set (ECMA-262, OrdinaryOwnPropertyKeys).
  */
 export function propertyOrder(names: readonly string[], setOrder: readonly number[]): number[] {
-  const indices = setOrder.filter((k) => isIndex(names[k]));
+  const indices = setOrder.filter((k) => isIndex(names[k] ?? ''));
   indices.sort((a, b) => Number(names[a]) - Number(names[b]));
-  return [...indices, ...setOrder.filter((k) => !isIndex(names[k]))];
+  return [...indices, ...setOrder.filter((k) => !isIndex(names[k] ?? ''))];
 }
 
 export class SweepRowText {
@@ -42,11 +42,17 @@ export class SweepRowText {
   private readonly netOrder: number[];
   private readonly digits: string[];
   private readonly base: number;
-  private lastIndent = '';
+  private readonly vdd: number;
+  private lastIndent: string | null = null;
   private pieces: { inner: string; deeper: string } = { inner: '  ', deeper: '    ' };
+  /** Member texts at the current indent, by position and level code (4 per net): written once. */
+  private outputMembers: string[] = [];
+  private voltageMembers: string[] = [];
+  /** Member texts of the inputs, by input position and digit. */
+  private inputMembers: string[] = [];
 
   /** Every block of one sweep shares its names, so one writer serves them all. */
-  constructor(s: Pick<SweepColumns, 'inputs' | 'nets' | 'outputs' | 'undriven'>) {
+  constructor(s: Pick<SweepColumns, 'inputs' | 'nets' | 'outputs' | 'undriven' | 'vdd'>) {
     this.inputKeys = quoted(s.inputs);
     this.netKeys = quoted(s.nets);
     const n = s.inputs.length;
@@ -54,61 +60,71 @@ export class SweepRowText {
       s.inputs,
       Array.from({ length: n }, (_, k) => n - 1 - k),
     );
-    const outputNames = Array.from(s.outputs, (j) => s.nets[j]);
-    this.outputOrder = propertyOrder(outputNames, [...outputNames.keys()]).map((k) => s.outputs[k]);
+    const outputNames = Array.from(s.outputs, (j) => s.nets[j] as string);
+    this.outputOrder = propertyOrder(outputNames, [...outputNames.keys()]).map((k) => s.outputs[k] as number);
     this.netOrder = propertyOrder(s.nets, [...s.nets.keys()]);
     this.digits = s.undriven ? ['0', '1', '"Z"'] : ['0', '1'];
     this.base = this.digits.length;
+    this.vdd = s.vdd;
   }
 
   /** Row i of a block: its JSON text, lines after the first starting with `indent`. */
   text(s: SweepColumns, i: number, indent: string): string {
-    if (s.detail[i] >= 0) return general(s, i, indent);
-    if (indent !== this.lastIndent) {
-      this.lastIndent = indent;
-      this.pieces = { inner: `${indent}  `, deeper: `${indent}    ` };
-    }
+    if ((s.detail[i] as number) >= 0) return general(s, i, indent);
+    if (indent !== this.lastIndent) this.indentAt(indent);
     const { inner } = this.pieces;
     return (
       `{\n${inner}"inputs": ${this.inputs(s.first + i)},\n${inner}"outputs": ${this.outputs(s, i)},\n` +
       `${inner}"voltages": ${this.voltages(s, i)},\n` +
-      `${inner}"supplyCurrent": ${numberText(s.supplyCurrent[i])},\n` +
-      `${inner}"staticPower": ${numberText(s.staticPower[i])},\n` +
+      `${inner}"supplyCurrent": ${numberText(s.supplyCurrent[i] as number)},\n` +
+      `${inner}"staticPower": ${numberText(s.staticPower[i] as number)},\n` +
       `${inner}"currentPaths": [],\n${inner}"findings": []\n${indent}}`
     );
   }
 
+  /** Writes every member text once for rows nested at `indent`. */
+  private indentAt(indent: string): void {
+    this.lastIndent = indent;
+    const deeper = `${indent}    `;
+    this.pieces = { inner: `${indent}  `, deeper };
+    const codes = [0, 1, 2, 3];
+    this.outputMembers = this.netKeys.flatMap((key) =>
+      codes.map((code) => `\n${deeper}${key}: "${levelName(code)}"`),
+    );
+    this.voltageMembers = this.netKeys.flatMap((key) =>
+      codes.map((code) => `\n${deeper}${key}: ${numberText(plainVolts(code, this.vdd))}`),
+    );
+    this.inputMembers = this.inputKeys.flatMap((key) => this.digits.map((d) => `\n${deeper}${key}: ${d}`));
+  }
+
   /** The inputs of vector number k, in the order a sweep's vector names them. */
   private inputs(k: number): string {
-    const keys = this.inputKeys;
-    const values = new Array<string>(keys.length);
+    const { base, inputOrder } = this;
+    const n = this.inputKeys.length;
+    const digit = new Array<number>(n);
     let rest = k;
-    for (let k = keys.length - 1; k >= 0; k--) {
-      values[k] = this.digits[rest % this.base];
-      rest = Math.floor(rest / this.base);
+    for (let p = n - 1; p >= 0; p--) {
+      digit[p] = rest % base;
+      rest = Math.floor(rest / base);
     }
-    return this.object(this.inputOrder, (k) => `${keys[k]}: ${values[k]}`);
+    return this.object(inputOrder, (p) => this.inputMembers[p * base + (digit[p] as number)] as string);
   }
 
   private outputs(s: SweepColumns, i: number): string {
-    return this.object(this.outputOrder, (j) => `${this.netKeys[j]}: "${levelName(levelAt(s, j, i))}"`);
+    return this.object(this.outputOrder, (j) => this.outputMembers[4 * j + levelAt(s, j, i)] as string);
   }
 
   private voltages(s: SweepColumns, i: number): string {
-    return this.object(
-      this.netOrder,
-      (j) => `${this.netKeys[j]}: ${numberText(plainVolts(levelAt(s, j, i), s.vdd))}`,
-    );
+    return this.object(this.netOrder, (j) => this.voltageMembers[4 * j + levelAt(s, j, i)] as string);
   }
 
   /** An object's text at the row's nesting: one member per position, in the order given. */
   private object(order: readonly number[], member: (k: number) => string): string {
     if (order.length === 0) return '{}';
-    const { inner, deeper } = this.pieces;
     let out = '{';
-    for (let m = 0; m < order.length; m++)
-      out += `\n${deeper}${member(order[m])}${m + 1 < order.length ? ',' : ''}`;
-    return `${out}\n${inner}}`;
+    const last = order.length - 1;
+    for (let m = 0; m < last; m++) out += `${member(order[m] as number)},`;
+    return `${out}${member(order[last] as number)}\n${this.pieces.inner}}`;
   }
 }
 
