@@ -28,6 +28,7 @@ function aloneRows(netlist: Netlist, options: { allNets: boolean; undriven: bool
   return Array.from({ length: total }, (_, k) => {
     const vector = sweepVector(netlist.inputs, k, options.undriven);
     const [row] = checkSequence(netlist, [vector], { allNets: options.allNets }).steps ?? [];
+    if (row === undefined) throw new Error(`vector ${k} gave no row`);
     return { ...row, findings: row.findings.map((f) => ({ ...f, vector: k })) };
   });
 }

@@ -79,8 +79,8 @@ export function kindBit(kind: FindingKind): number {
 export function levelAt(s: SweepColumns, j: number, i: number): number {
   const w = i >> 5;
   const b = i & 31;
-  const low = (s.levels[2 * j * s.words + w] >>> b) & 1;
-  const high = (s.levels[(2 * j + 1) * s.words + w] >>> b) & 1;
+  const low = (s.levels[2 * j * s.words + w]! >>> b) & 1;
+  const high = (s.levels[(2 * j + 1) * s.words + w]! >>> b) & 1;
   return low | (high << 1);
 }
 
@@ -98,7 +98,11 @@ export function rowVector(s: SweepColumns, i: number): InputVector {
 const unpacked = new WeakMap<PackedDetails, Map<number, RowDetail>>();
 
 function detailAt(details: SweepColumns['details'], k: number): RowDetail {
-  if (Array.isArray(details)) return (details as readonly RowDetail[])[k];
+  if (Array.isArray(details)) {
+    const d = (details as readonly RowDetail[])[k];
+    if (d === undefined) throw new RangeError(`no detail ${k}`);
+    return d;
+  }
   const packed = details as PackedDetails;
   let cache = unpacked.get(packed);
   if (cache === undefined) unpacked.set(packed, (cache = new Map()));
@@ -114,19 +118,21 @@ export function detailCount(s: SweepColumns): number {
 
 export function detailOf(s: SweepColumns, i: number): RowDetail | null {
   const k = s.detail[i];
-  return k < 0 ? null : detailAt(s.details, k);
+  return k === undefined || k < 0 ? null : detailAt(s.details, k);
 }
 
 /** Output pin k's level at row i. */
 export function outputLevel(s: SweepColumns, k: number, i: number): Level {
-  return levelName(levelAt(s, s.outputs[k], i));
+  const j = s.outputs[k];
+  if (j === undefined) throw new RangeError(`no output ${k}`);
+  return levelName(levelAt(s, j, i));
 }
 
 /** Row i in the report's shape, with the key order the command line has always printed. */
 export function sweepRow(s: SweepColumns, i: number): VectorReport {
   const d = detailOf(s, i);
   const volts = (j: number): number | null => {
-    const v = d?.voltages ? d.voltages[j] : plainVolts(levelAt(s, j, i), s.vdd);
+    const v = d?.voltages ? (d.voltages[j] ?? NaN) : plainVolts(levelAt(s, j, i), s.vdd);
     return Number.isNaN(v) ? null : v;
   };
   // Object.fromEntries defines each name as its own key, also one called __proto__.
@@ -134,8 +140,8 @@ export function sweepRow(s: SweepColumns, i: number): VectorReport {
     inputs: rowVector(s, i),
     outputs: Object.fromEntries(Array.from(s.outputs, (j, k) => [s.nets[j], outputLevel(s, k, i)])),
     voltages: Object.fromEntries(s.nets.map((net, j) => [net, volts(j)])),
-    supplyCurrent: s.supplyCurrent[i],
-    staticPower: s.staticPower[i],
+    supplyCurrent: s.supplyCurrent[i] ?? NaN,
+    staticPower: s.staticPower[i] ?? NaN,
     currentPaths: d?.currentPaths ?? [],
     findings: d?.findings ?? [],
   };
@@ -177,7 +183,11 @@ export function reportRowCount(report: Pick<CheckReport, 'sweep' | 'steps'>): nu
 
 /** Row i of a report, built on demand for a sweep. */
 export function reportRow(report: Pick<CheckReport, 'sweep' | 'steps'>, i: number): VectorReport {
-  if (report.steps !== undefined) return report.steps[i];
+  if (report.steps !== undefined) {
+    const step = report.steps[i];
+    if (step === undefined) throw new RangeError(`no row ${i}`);
+    return step;
+  }
   if (report.sweep === undefined || i >= report.sweep.count) throw new RangeError(`no row ${i}`);
   return sweepRow(report.sweep, i);
 }
@@ -213,7 +223,7 @@ export function packDetails(details: readonly RowDetail[]): PackedDetails {
     } satisfies DetailJson),
   );
   const starts = new Int32Array(pieces.length + 1);
-  pieces.forEach((p, k) => (starts[k + 1] = starts[k] + p.length));
+  pieces.forEach((p, k) => (starts[k + 1] = starts[k]! + p.length));
   return { text: pieces.join(''), starts };
 }
 

@@ -81,8 +81,9 @@ export class SweepRecorder {
   add(r: SolveResult, findings: readonly Finding[]): void {
     const { nets } = this.reported;
     for (let j = 0; j < nets.length; j++) {
-      this.codes[j] = r.levels[nets[j]];
-      this.volts[j] = r.volts[nets[j]];
+      const n = nets[j]!;
+      this.codes[j] = r.levels[n]!;
+      this.volts[j] = r.volts[n]!;
     }
     this.addRow(r.supplyCurrent, r.staticPower, findings, () => currentPathsOf(r));
   }
@@ -109,8 +110,9 @@ export class SweepRecorder {
   addReport(row: VectorReport): void {
     const { names } = this.reported;
     for (let j = 0; j < names.length; j++) {
-      const v = own(row.voltages, names[j]);
-      const level = own(row.outputs, names[j]);
+      const name = names[j]!;
+      const v = own(row.voltages, name);
+      const level = own(row.outputs, name);
       this.codes[j] = level === undefined ? LEVEL_X : LEVEL_CODES[level];
       this.volts[j] = v === null || v === undefined ? NaN : v;
     }
@@ -129,9 +131,10 @@ export class SweepRecorder {
     this.supplyCurrent[i] = supplyCurrent;
     this.staticPower[i] = staticPower;
     for (const f of findings) {
-      this.kinds[i] |= kindBit(f.kind);
-      if (f.severity === 'error') this.errors[i] = Math.min(MAX_COUNT, this.errors[i] + 1);
-      else this.warnings[i] = Math.min(MAX_COUNT, this.warnings[i] + 1);
+      // Row i is below the capacity the arrays were made with.
+      this.kinds[i]! |= kindBit(f.kind);
+      if (f.severity === 'error') this.errors[i] = Math.min(MAX_COUNT, this.errors[i]! + 1);
+      else this.warnings[i] = Math.min(MAX_COUNT, this.warnings[i]! + 1);
     }
     const currentPaths = paths();
     if (plain && findings.length === 0 && currentPaths.length === 0) return;
@@ -147,9 +150,9 @@ export class SweepRecorder {
     const bit = 1 << (i & 31);
     let plain = true;
     for (let j = 0; j < codes.length; j++) {
-      const code = codes[j];
-      if (code & 1) levels[2 * j * words + w] |= bit;
-      if (code & 2) levels[(2 * j + 1) * words + w] |= bit;
+      const code = codes[j]!;
+      if (code & 1) levels[2 * j * words + w]! |= bit;
+      if (code & 2) levels[(2 * j + 1) * words + w]! |= bit;
       if (!Object.is(volts[j], plainVolts(code, vdd))) plain = false;
     }
     return plain;

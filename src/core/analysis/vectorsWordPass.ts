@@ -96,7 +96,7 @@ export class WordSweep {
     for (const step of this.plan.steps) {
       const k = step.controls.length;
       for (let i = 0; i < k; i++) controls[i] = high[step.controls[i] as number] as number;
-      evaluator.begin(controls.subarray(0, k));
+      evaluator.begin(controls, k);
       fallback |= evaluator.value(step.fallback);
       for (let i = 0; i < step.nets.length; i++) {
         const net = step.nets[i] as number;

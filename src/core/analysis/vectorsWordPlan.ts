@@ -141,50 +141,55 @@ function wordFunction(entries: number, bit: (entry: number) => boolean): WordFun
 
 /**
  * Evaluates a group's functions for one word of vectors: `controls` holds each control's word
- * (bit j: control at VDD in vector j). `scratch` needs 2^k words, `entry` 32.
+ * (bit j: control at VDD in vector j). A group without controls has only constant functions.
  */
 export class WordEvaluator {
-  private readonly scratch = new Int32Array(1 << SHANNON_MAX_CONTROLS);
+  private readonly scratch = new Int32Array(1 << (SHANNON_MAX_CONTROLS - 1));
   private readonly entries = new Int32Array(32);
   private controls: Int32Array = new Int32Array(0);
-  private shannon = true;
+  private k = 0;
 
-  /** Starts a group: its controls' words; large groups get each lane's entry number once. */
-  begin(controls: Int32Array): void {
+  /** Starts a group: its first k controls' words; large groups get each lane's entry number once. */
+  begin(controls: Int32Array, k: number): void {
     this.controls = controls;
-    this.shannon = controls.length <= SHANNON_MAX_CONTROLS;
-    if (this.shannon) return;
+    this.k = k;
+    if (k <= SHANNON_MAX_CONTROLS) return;
     const { entries } = this;
     entries.fill(0);
-    for (let i = 0; i < controls.length; i++) {
-      const word = controls[i] as number;
-      for (let j = 0; j < 32; j++) entries[j] = (entries[j] as number) | (((word >>> j) & 1) << i);
+    for (let i = 0; i < k; i++) {
+      const word = controls[i]!;
+      for (let j = 0; j < 32; j++) entries[j]! |= ((word >>> j) & 1) << i;
     }
   }
 
   value(f: WordFunction): number {
     if (f.constant !== null) return f.constant;
-    return this.shannon ? this.expand(f.leaves) : this.lookUp(f.leaves);
+    return this.k <= SHANNON_MAX_CONTROLS ? this.expand(f.leaves) : this.lookUp(f.leaves);
   }
 
-  /** f = c_i ? f|c_i=1 : f|c_i=0, folding the lowest control first (entry bit i is control i). */
+  /**
+   * f = c_i ? f|c_i=1 : f|c_i=0, folding the lowest control first (entry bit i is control i); the
+   * first fold reads the leaves, the rest fold the scratch words in place. Indices are in range by
+   * construction (2^k leaves, 2^(k-1) scratch words).
+   */
   private expand(leaves: Int32Array): number {
     const s = this.scratch;
-    const { controls } = this;
-    s.set(leaves);
-    let n = leaves.length;
-    for (let i = 0; i < controls.length; i++) {
-      const c = controls[i] as number;
+    const { controls, k } = this;
+    const c0 = controls[0]!;
+    let n = leaves.length >> 1;
+    for (let p = 0; p < n; p++) s[p] = (leaves[2 * p]! & ~c0) | (leaves[2 * p + 1]! & c0);
+    for (let i = 1; i < k; i++) {
+      const c = controls[i]!;
       n >>= 1;
-      for (let p = 0; p < n; p++) s[p] = ((s[2 * p] as number) & ~c) | ((s[2 * p + 1] as number) & c);
+      for (let p = 0; p < n; p++) s[p] = (s[2 * p]! & ~c) | (s[2 * p + 1]! & c);
     }
-    return s[0] as number;
+    return s[0]!;
   }
 
   private lookUp(leaves: Int32Array): number {
     const { entries } = this;
     let word = 0;
-    for (let j = 0; j < 32; j++) word |= (leaves[entries[j] as number] as number) & (1 << j);
+    for (let j = 0; j < 32; j++) word |= leaves[entries[j]!]! & (1 << j);
     return word;
   }
 }
