@@ -1,4 +1,5 @@
 import { Dialog } from './Dialog.tsx';
+import { countOf } from '../core/view/plural.ts';
 import { closeCellChoice, useStore } from '../state/store.ts';
 import { loadImportedCell } from './files.ts';
 
@@ -19,7 +20,8 @@ export function CellChooser() {
                 loadImportedCell(d, choice.fileName, choice.failed);
               }}
             >
-              {d.name} — {d.netlist.devices.length} devices, inputs {d.netlist.inputs.join(' ') || 'none'}
+              {d.name} — {countOf(d.netlist.devices.length, 'device')}, inputs{' '}
+              {d.netlist.inputs.join(' ') || 'none'}
             </button>
           </li>
         ))}

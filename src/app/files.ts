@@ -17,6 +17,9 @@ import { loadDesign, offerCells, setViewport, showMessage, store } from '../stat
 import { currentStage } from '../editor/stageRef.ts';
 import { fitToView } from '../state/view.ts';
 import { downloadText, downloadUrl, safeFileName } from './download.ts';
+import { countOf } from '../core/view/plural.ts';
+import { binaryRefusal } from '../core/format/binaryText.ts';
+import { brief } from '../core/format/printable.ts';
 
 export const DESIGN_EXTENSION = '.railwise.json';
 export const OPEN_ACCEPT = ['.json', ...SPICE_EXTENSIONS].join(',');
@@ -33,22 +36,33 @@ export interface SpiceDesigns {
   readonly failed: readonly string[];
 }
 
+/**
+ * What an import changed or left out, as the design's notes (one per line under a heading naming
+ * the file), kept with the design until the designer dismisses them: the same notes the command
+ * line prints for the cell.
+ */
+export function importNotes(fileName: string, notes: readonly string[]): string | undefined {
+  return notes.length === 0 ? undefined : [`Imported from ${fileName}:`, ...notes].join('\n');
+}
+
 /** Reads a SPICE text into designs, one per cell; throws when no cell at all can be read. */
 export function designsFromSpice(text: string, fileName: string): SpiceDesigns {
   const loaded = cellsFromText(text, fileName).cells;
-  const designs = loaded.flatMap((c): Design[] =>
-    'job' in c
-      ? [
-          {
-            name: c.job.cell,
-            technology: c.job.technology,
-            netlist: c.job.netlist,
-            expectations: c.job.expectations,
-            sequences: [],
-          },
-        ]
-      : [],
-  );
+  const designs = loaded.flatMap((c): Design[] => {
+    if (!('job' in c)) return [];
+    const notes = importNotes(fileName, c.job.notes);
+    return [
+      {
+        name: c.job.cell,
+        technology: c.job.technology,
+        netlist: c.job.netlist,
+        expectations: c.job.expectations,
+        sequences: [],
+        ...(c.job.sheet === undefined ? {} : { sheet: c.job.sheet }),
+        ...(notes === undefined ? {} : { notes }),
+      },
+    ];
+  });
   const failed = loaded.flatMap((c) => ('failure' in c ? [c.failure] : []));
   if (designs.length === 0) {
     const first = failed[0];
@@ -59,12 +73,21 @@ export function designsFromSpice(text: string, fileName: string): SpiceDesigns {
   return { designs, failed: failed.map((f) => (f.cell === null ? f.message : `${f.cell} (${f.message})`)) };
 }
 
-/** Loads one imported cell and says where it came from. */
+/**
+ * Loads one imported cell and says where it came from. Cells of the file that could not be read
+ * join the import's notes, so they stay in view with the rest until dismissed.
+ */
 export function loadImportedCell(design: Design, fileName: string, failed: readonly string[]): void {
-  loadDesign(design);
+  const unread = failed.map((f) => `not readable: ${f}`);
+  const notes =
+    unread.length === 0
+      ? design.notes
+      : (design.notes ?? `Imported from ${fileName}:`) + `\n${unread.join('\n')}`;
+  loadDesign({ ...design, ...(notes === undefined ? {} : { notes }) });
   fitToView();
-  const note = failed.length ? `. Not readable: ${failed.join('; ')}` : '';
-  showMessage('info', `Imported ${design.name} from ${fileName}${note}`);
+  const kept = notes === undefined ? 0 : notes.split('\n').length - 1;
+  const where = kept === 0 ? '' : `; ${countOf(kept, 'note')} on what the import changed, under the sheet`;
+  showMessage('info', `Imported ${design.name} from ${fileName}${where}`);
 }
 
 function openSpice(text: string, fileName: string): void {
@@ -76,6 +99,11 @@ function openSpice(text: string, fileName: string): void {
 
 /** Opens text as a design file or a SPICE netlist. Returns false when the file was refused. */
 export function openText(text: string, fileName: string): boolean {
+  const binary = binaryRefusal(fileName, text);
+  if (binary !== null) {
+    showMessage('error', `Could not open ${binary}. Your design is unchanged.`);
+    return false;
+  }
   try {
     if (isSpiceFile(fileName)) return (openSpice(text, fileName), true);
     loadDesign(parseDesignFile(text, fileName));
@@ -85,7 +113,8 @@ export function openText(text: string, fileName: string): boolean {
   } catch (e) {
     // Known errors name the file and line or field; anything else is still a message, never a crash.
     const known = e instanceof DesignFileError || e instanceof SpiceImportError;
-    const detail = e instanceof Error ? e.message : String(e);
+    // A short, printable excerpt: whatever the file held, the message stays one readable line.
+    const detail = brief(e instanceof Error ? e.message : String(e));
     showMessage(
       'error',
       `Could not open${known ? '' : ` ${fileName}`}: ${detail}. Your design is unchanged.`,
@@ -127,7 +156,10 @@ export function exportDesign(kind: ExportKind): void {
       case 'spice':
         return downloadText(
           safeFileName(design.name, '.sp'),
-          exportSpice(design.netlist, design.technology, { expectations: design.expectations }),
+          exportSpice(design.netlist, design.technology, {
+            expectations: design.expectations,
+            ...(design.sheet === undefined ? {} : { sheet: design.sheet }),
+          }),
           'text/plain',
         );
       case 'verilog':

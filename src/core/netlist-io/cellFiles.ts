@@ -6,6 +6,7 @@
 import { DesignFileError, parseDesignFile } from '../format/designFile.ts';
 import type { Sequence } from '../model/design.ts';
 import type { Netlist } from '../model/netlist.ts';
+import type { Sheet } from '../sheet/types.ts';
 import {
   DEFAULT_TECHNOLOGY,
   withCardValues,
@@ -36,6 +37,8 @@ export interface CellJob {
   readonly pinsNamed: boolean;
   /** A design file's saved sequences. */
   readonly sequences: readonly Sequence[];
+  /** The drawing, when the file holds one (a design file, or a Railwise export's comment lines). */
+  readonly sheet?: Sheet;
   readonly notes: readonly string[];
 }
 
@@ -129,6 +132,7 @@ function designCells(text: string, file: string, options: LoadOptions): FileCell
     expectationLines: {},
     pinsNamed: true,
     sequences: design.sequences,
+    ...(design.sheet === undefined ? {} : { sheet: design.sheet }),
     notes: [],
   };
   return { cells: [{ job }], library: false, available: [cell] };
@@ -154,6 +158,7 @@ function spiceCells(text: string, file: string, options: LoadOptions): FileCells
       expectationLines: c.expectationLines,
       pinsNamed: c.pinsNamed,
       sequences: [],
+      ...(c.sheet === undefined ? {} : { sheet: c.sheet }),
       notes: [...imported.notes, ...c.notes],
     };
     cells.push({ at: position.get(c.name) ?? 0, cell: { job } });

@@ -11,6 +11,8 @@ import type { Hierarchy } from './spiceHierarchy.ts';
 import { SpiceImportError } from './spiceErrors.ts';
 import { assignPins, PinError } from './pins.ts';
 import { restoreExportedNames } from './spiceRestore.ts';
+import { readPlacement } from './placementComments.ts';
+import type { Sheet } from '../sheet/types.ts';
 import { nameRecord, recordOf } from '../model/records.ts';
 import { unquoted } from '../format/printable.ts';
 
@@ -25,6 +27,8 @@ export interface ImportedCell {
   readonly pinsNamed: boolean;
   /** Level-1 values of the model cards the devices name (`MosDevice.model`), by card name. */
   readonly models: Readonly<Record<string, DeviceModel>>;
+  /** The drawing a Railwise export carried (placementComments.ts), when it still fits the netlist. */
+  readonly sheet?: Sheet;
   readonly notes: readonly string[];
 }
 
@@ -73,7 +77,8 @@ export function buildCell(spec: CellSpec, ctx: CellContext): ImportedCell {
     spec.body.directives,
     notes,
   );
-  return { name: restored.netlist.name, ...restored, pinsNamed, models, notes };
+  const sheet = readPlacement(spec.body.directives, restored.netlist, notes);
+  return { name: restored.netlist.name, ...restored, pinsNamed, models, ...(sheet ? { sheet } : {}), notes };
 }
 
 /** Rails in order of first appearance: named rails, then nets a `V` line holds. */

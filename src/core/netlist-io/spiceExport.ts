@@ -15,6 +15,8 @@ import { modelCards } from './spiceModelExport.ts';
 
 export { NMOS_MODEL, PMOS_MODEL } from './spiceModelExport.ts';
 import { formatSpiceNumber } from './spiceNumber.ts';
+import type { Sheet } from '../sheet/types.ts';
+import { placementLines } from './placementComments.ts';
 import {
   bareRailName,
   DEFAULT_RAIL_NAMES,
@@ -28,6 +30,8 @@ export const DIODE_MODEL = 'rw_diode';
 export interface SpiceExportOptions {
   /** Expected functions to carry as directives. */
   readonly expectations?: Readonly<Record<string, string>>;
+  /** The drawing, carried in comment lines of our own (placementComments.ts). */
+  readonly sheet?: Sheet;
 }
 
 export function exportSpice(netlist: Netlist, tech: Technology, options: SpiceExportOptions = {}): string {
@@ -54,6 +58,7 @@ export function exportSpice(netlist: Netlist, tech: Technology, options: SpiceEx
     ...railLines(netlist, net),
     ...impliedBulkLines(netlist, names),
     ...expectations.map(([out, text]) => `* railwise: expect ${net(out)} = ${expressionText(text)}`),
+    ...(options.sheet === undefined ? [] : placementLines(options.sheet)),
     ...netlist.devices.map((d, i) => deviceLine(d, names.device(i), netlist, net, cards.modelOf)),
     `.ends ${names.cell}`,
     '.end',

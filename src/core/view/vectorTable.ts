@@ -27,6 +27,8 @@ export interface VectorRow {
   readonly warnings: number;
   /** Outputs that differ from their expected function. */
   readonly mismatched: readonly string[];
+  /** Outputs whose level arrives through a threshold drop (a `degraded` finding names them). */
+  readonly degraded: readonly string[];
   readonly supplyCurrent: number;
   readonly staticPower: number;
 }
@@ -64,7 +66,10 @@ const bitOf = (kind: FindingKind): number => 1 << KIND_ORDER.indexOf(kind);
 export function vectorRow(s: SweepColumns, i: number): VectorRow {
   const mask = s.kinds[i];
   const findings = detailOf(s, i)?.findings ?? [];
-  const mismatched = new Set(findings.filter((f) => f.kind === 'mismatch').flatMap((f) => f.nets));
+  const named = (kind: FindingKind): Set<string> =>
+    new Set(findings.filter((f) => f.kind === kind).flatMap((f) => f.nets));
+  const mismatched = named('mismatch');
+  const degraded = named('degraded');
   const outputs = Object.fromEntries(Array.from(s.outputs, (j, k) => [s.nets[j], outputLevel(s, k, i)]));
   return {
     index: i,
@@ -74,6 +79,7 @@ export function vectorRow(s: SweepColumns, i: number): VectorRow {
     errors: s.errors[i],
     warnings: s.warnings[i],
     mismatched: Object.keys(outputs).filter((o) => mismatched.has(o)),
+    degraded: Object.keys(outputs).filter((o) => degraded.has(o)),
     supplyCurrent: s.supplyCurrent[i],
     staticPower: s.staticPower[i],
   };
