@@ -60,4 +60,10 @@ describe('--max-inputs', () => {
     expect(r.status).toBe(2);
     expect(r.err).toMatch(message);
   });
+
+  it('refuses --power past 20 inputs: its report lists every vector', async () => {
+    const r = await railwise('check', inverterRow(21), '--max-inputs', '21', '--power');
+    expect(r.status).toBe(2);
+    expect(r.out).toMatch(/random activity sweeps every vector: 21 inputs exceed the limit of 20/);
+  });
 });
