@@ -11,7 +11,7 @@ import { chromium, type CDPSession, type Page } from '@playwright/test';
 import { exportSpice } from '../../src/core/netlist-io/spiceExport.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import type { Netlist } from '../../src/core/model/netlist.ts';
-import { inverterChain, rippleAdder, transistorCount } from '../generators/index.ts';
+import { adderBank, inverterChain, rippleAdder, transistorCount } from '../generators/index.ts';
 import { formatTable } from '../table.ts';
 import { serveDirectory } from './serve.ts';
 import {
@@ -119,6 +119,40 @@ async function measureSheet(page: Page, netlist: Netlist): Promise<SheetFigures>
 
 const pair = (p: Pair): string => `${p.wall.toFixed(1)} / ${p.cpu.toFixed(1)}`;
 
+/** The sweep table of a cell: worker time, and the page's time from the result to the first row drawn. */
+interface SweepFigures {
+  readonly name: string;
+  readonly vectors: number;
+  readonly workerMs: number;
+  readonly readyMs: number;
+}
+
+async function measureSweepTable(page: Page, netlist: Netlist): Promise<SweepFigures> {
+  await page.goto(`http://127.0.0.1:${PORT}/`);
+  await page.evaluate(() => localStorage.clear());
+  await page.reload();
+  await page.waitForFunction(() => window.__railwise !== undefined);
+  const cdp = await page.context().newCDPSession(page);
+  progress(`${netlist.name}: import`);
+  await importCell(page, cdp, netlist);
+  await cdp.detach();
+  progress(`${netlist.name}: sweep of ${2 ** netlist.inputs.length} vectors`);
+  await page.getByTestId('sweep-start').click();
+  const done = await page.waitForFunction(
+    () => (window.__railwise?.state().simulation.sweep.status === 'done' ? performance.now() : false),
+    undefined,
+    { polling: 'raf', timeout: 600_000 },
+  );
+  const doneAt = (await done.jsonValue()) as number;
+  await page.locator('[data-testid="vector-row-0"]').waitFor({ timeout: 60_000 });
+  const drawnAt = await page.evaluate(() => performance.now());
+  const workerMs = await page.evaluate(() => {
+    const sweep = window.__railwise?.state().simulation.sweep;
+    return sweep?.result?.elapsedMs ?? Number.NaN;
+  });
+  return { name: netlist.name, vectors: 2 ** netlist.inputs.length, workerMs, readyMs: drawnAt - doneAt };
+}
+
 async function main(): Promise<void> {
   const args = new Set(process.argv.slice(2));
   if (!args.has('--no-build')) {
@@ -137,6 +171,12 @@ async function main(): Promise<void> {
       { ...inverterChain(500), name: 'chain500' },
       { ...rippleAdder(179), name: 'adder179' },
     ];
+    const sweep = await measureSweepTable(page, { ...adderBank(8), name: 'bank16' });
+    console.log(
+      `sweep table, ${sweep.name}: ${sweep.vectors} vectors, worker ${sweep.workerMs.toFixed(0)} ms, ` +
+        `first row drawn ${sweep.readyMs.toFixed(0)} ms after the result reached the page's state (wall)`,
+    );
+    if (args.has('--sweep-only')) return;
     const figures: SheetFigures[] = [];
     for (const netlist of cells) figures.push(await measureSheet(page, netlist));
     console.log(
@@ -168,7 +208,7 @@ async function main(): Promise<void> {
         ]),
       ),
     );
-    if (args.has('--json')) console.log(JSON.stringify({ frames: FRAMES, sheets: figures }));
+    if (args.has('--json')) console.log(JSON.stringify({ frames: FRAMES, sheets: figures, sweep }));
   } finally {
     await browser.close();
     server.close();
