@@ -77,12 +77,17 @@ async function importCell(page: Page, cdp: CDPSession, netlist: Netlist): Promis
   return { wall: done - (await importStart(page)), cpu: (await processCpuMs(cdp)) - cpu0 };
 }
 
-async function measureSheet(page: Page, netlist: Netlist): Promise<SheetFigures> {
+/** The app on an empty store, ready, with a session on the browser's own counters. */
+async function freshPage(page: Page): Promise<CDPSession> {
   await page.goto(`http://127.0.0.1:${PORT}/`);
   await page.evaluate(() => localStorage.clear());
   await page.reload();
   await page.waitForFunction(() => window.__railwise !== undefined);
-  const cdp = await page.context().newCDPSession(page);
+  return page.context().newCDPSession(page);
+}
+
+async function measureSheet(page: Page, netlist: Netlist): Promise<SheetFigures> {
+  const cdp = await freshPage(page);
   await cdp.send('Performance.enable');
   progress(`${netlist.name}: import`);
   const imported = await importCell(page, cdp, netlist);
@@ -128,11 +133,7 @@ interface SweepFigures {
 }
 
 async function measureSweepTable(page: Page, netlist: Netlist): Promise<SweepFigures> {
-  await page.goto(`http://127.0.0.1:${PORT}/`);
-  await page.evaluate(() => localStorage.clear());
-  await page.reload();
-  await page.waitForFunction(() => window.__railwise !== undefined);
-  const cdp = await page.context().newCDPSession(page);
+  const cdp = await freshPage(page);
   progress(`${netlist.name}: import`);
   await importCell(page, cdp, netlist);
   await cdp.detach();
