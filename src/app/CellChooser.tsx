@@ -1,7 +1,7 @@
 import { Dialog } from './Dialog.tsx';
 import { countOf } from '../core/view/plural.ts';
 import { closeCellChoice, useStore } from '../state/store.ts';
-import { loadImportedCell } from './files.ts';
+import { loadImportedCellLater } from './fileCommands.ts';
 
 /** Picks one cell of an imported library; closing it leaves the open design as it was. */
 export function CellChooser() {
@@ -17,7 +17,7 @@ export function CellChooser() {
               type="button"
               onClick={() => {
                 closeCellChoice();
-                loadImportedCell(d, choice.fileName, choice.failed);
+                void loadImportedCellLater(d, choice.fileName, choice.failed);
               }}
             >
               {d.name} — {countOf(d.netlist.devices.length, 'device')}, inputs{' '}

@@ -2,7 +2,12 @@
  * Checks one cell and returns plain data: the single-cell JSON object of docs/semantics.md §5, or a failure.
  * No file access and no printing, so a worker thread can run it as well as the main thread.
  */
-import { SequenceError, SweepLimitError } from '../core/analysis/check.ts';
+import {
+  checkStructure,
+  DEFAULT_MAX_INPUTS,
+  SequenceError,
+  SweepLimitError,
+} from '../core/analysis/check.ts';
 import { parseSequenceText } from '../core/analysis/sequenceText.ts';
 import type { CheckReport, VectorReport } from '../core/analysis/report.ts';
 import { sweepRows, type SweepColumns } from '../core/analysis/sweepColumns.ts';
@@ -24,6 +29,7 @@ import { Simulator } from '../core/solver/simulator.ts';
 import { MAX_SWEEP_INPUTS } from '../core/analysis/vectors.ts';
 import { WIDER_CELLS, type TransferChoice } from './args.ts';
 import { cellTransfer } from './dcCell.ts';
+import { cellProof, type ProofJson } from './proofCell.ts';
 import type { CellFailure, CellJob, CellSkip } from './loadCells.ts';
 
 export interface RunOptions {
@@ -41,6 +47,8 @@ export interface RunOptions {
   readonly dc?: boolean;
   /** Inputs a sweep may take (`--max-inputs`); the core's default when left out. */
   readonly maxInputs?: number;
+  /** `--prove`: add the proof of every property; past the exhaustive limit the sweep is skipped. */
+  readonly prove?: boolean;
 }
 
 /** A vector as printed: inputs as the numbers 0 and 1 (X and Z stay strings), per docs/semantics.md §5. */
@@ -56,6 +64,7 @@ interface Extras {
   readonly sizing?: SizingReport | undefined;
   readonly transfer?: TransferReport | undefined;
   readonly dc?: readonly VectorDc[] | undefined;
+  readonly proof?: ProofJson | undefined;
 }
 
 /**
@@ -72,6 +81,7 @@ export interface CellJson extends Omit<CheckReport, 'sweep' | 'steps'> {
   readonly power?: PowerReport;
   readonly sizing?: SizingReport;
   readonly transfer?: TransferReport;
+  readonly proof?: ProofJson;
   readonly caution: string;
 }
 
@@ -80,6 +90,16 @@ export type CellResult =
 
 export function runCell(job: CellJob, options: RunOptions): CellResult {
   try {
+    const proof = options.prove ? cellProof(job) : undefined;
+    if (proof !== undefined && sweepSkipped(job, options)) {
+      const note = `${job.netlist.inputs.length} inputs are past the exhaustive limit of ${sweepLimit(options)}: the sweep was skipped, the proof covers every vector`;
+      const report = checkStructure(
+        job.netlist,
+        { technology: job.technology, expectations: job.expectations },
+        note,
+      );
+      return { json: cellJson(job, report, { proof }) };
+    }
     const steps = options.sequence === undefined ? undefined : sequenceSteps(job, options.sequence);
     const power = options.power === undefined ? undefined : powerSettings(job, options.power, steps);
     // --dc reads each solved vector of the check's own pass.
@@ -102,10 +122,24 @@ export function runCell(job: CellJob, options: RunOptions): CellResult {
     const powerJson =
       counts === null || power === undefined ? undefined : powerFromCounts(counts, power.settings);
     const transfer = options.transfer === undefined ? undefined : cellTransfer(job, options.transfer);
-    return { json: cellJson(job, report, { power: powerJson, sizing, transfer, dc: dc?.rows }) };
+    return { json: cellJson(job, report, { power: powerJson, sizing, transfer, dc: dc?.rows, proof }) };
   } catch (e) {
     return { failure: { file: job.file, cell: job.cell, ...failureOf(e) } };
   }
+}
+
+/** With --prove, a sweep past the exhaustive limit is skipped rather than refused (no --sequence). */
+export function sweepSkipped(job: CellJob, options: RunOptions): boolean {
+  return (
+    options.prove === true &&
+    options.sequence === undefined &&
+    job.netlist.inputs.length > sweepLimit(options)
+  );
+}
+
+/** The most inputs a sweep takes: `--max-inputs`, else the core's default. */
+function sweepLimit(options: RunOptions): number {
+  return options.maxInputs ?? DEFAULT_MAX_INPUTS;
 }
 
 /**
@@ -164,7 +198,7 @@ function sweepLimitMessage(e: SweepLimitError): string {
 }
 
 function cellJson(job: CellJob, report: CheckReport, extras: Extras): CellJson {
-  const { power, sizing, transfer, dc } = extras;
+  const { power, sizing, transfer, dc, proof } = extras;
   const rows = (list: readonly VectorReport[]): VectorJson[] =>
     list.map((v, i) => (dc?.[i] === undefined ? vectorJson(v) : { ...vectorJson(v), dc: dc[i] }));
   const { sweep, steps } = report;
@@ -182,6 +216,7 @@ function cellJson(job: CellJob, report: CheckReport, extras: Extras): CellJson {
     ...(power === undefined ? {} : { power }),
     ...(sizing === undefined ? {} : { sizing }),
     ...(transfer === undefined ? {} : { transfer }),
+    ...(proof === undefined ? {} : { proof }),
     caution: CAUTION,
   };
 }

@@ -15,13 +15,14 @@ import type { SizingReport } from '../core/sizing/types.ts';
 import { sweepSize } from '../core/analysis/vectors.ts';
 import { cellTransfer } from './dcCell.ts';
 import type { CellFailure, CellJob } from './loadCells.ts';
-import { failureOf, powerSettings, type RunOptions } from './runCell.ts';
+import { cellProof, type ProofJson } from './proofCell.ts';
+import { failureOf, powerSettings, sweepSkipped, type RunOptions } from './runCell.ts';
 
 /** Sweeps of more vectors than this are written as they run instead of collected first. */
 export const STREAM_ROWS = 4096;
 
 export function isStreamed(job: CellJob, options: RunOptions): boolean {
-  if (options.sequence !== undefined || options.dc === true) return false;
+  if (options.sequence !== undefined || options.dc === true || sweepSkipped(job, options)) return false;
   return sweepSize(job.netlist.inputs, options.undriven) > STREAM_ROWS;
 }
 
@@ -34,6 +35,7 @@ export interface CellHead {
   readonly technology: { readonly source: string; readonly vdd: number };
   readonly sizing?: SizingReport;
   readonly transfer?: TransferReport;
+  readonly proof?: ProofJson;
 }
 
 /** What is known once the rows have gone by. */
@@ -70,6 +72,7 @@ export function prepareStreamedCell(
       ? sizingReport(job.netlist, job.technology, { load: options.load })
       : undefined;
     const transfer = options.transfer === undefined ? undefined : cellTransfer(job, options.transfer);
+    const proof = options.prove ? cellProof(job) : undefined;
     const head: CellHead = {
       cell: job.cell,
       file: job.file,
@@ -78,6 +81,7 @@ export function prepareStreamedCell(
       technology: { source: job.technology.source, vdd: job.technology.vdd },
       ...(sizing === undefined ? {} : { sizing }),
       ...(transfer === undefined ? {} : { transfer }),
+      ...(proof === undefined ? {} : { proof }),
     };
     const rows = (each: (block: SweepColumns) => void): CellTail => {
       onBlock.current = each;

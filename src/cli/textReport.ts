@@ -9,6 +9,7 @@ import { brief, printable } from '../core/format/printable.ts';
 import { own } from '../core/model/records.ts';
 import { formatSi, type Colour } from './colour.ts';
 import { dcLines, transferLines } from './dcText.ts';
+import { proofLines } from './proofText.ts';
 import type { CellFailure, CellSkip } from './loadCells.ts';
 import { vectorJson, type CellJson, type VectorJson } from './runCell.ts';
 import { sweepFindings, sweepRow, type SweepColumns } from '../core/analysis/sweepColumns.ts';
@@ -82,7 +83,7 @@ export class TextDigest {
     if (json.sweep !== undefined) digest.addBlock(json.sweep);
     const inRows = new Set(rows.flatMap((r) => r.findings));
     if (json.sweep !== undefined) for (const f of sweepFindings(json.sweep)) inRows.add(f);
-    const { cell, file, inputs, outputs, technology, sizing, transfer, power, summary, notes } = json;
+    const { cell, file, inputs, outputs, technology, sizing, transfer, proof, power, summary, notes } = json;
     const head: CellHead = {
       cell,
       file,
@@ -91,6 +92,7 @@ export class TextDigest {
       technology,
       ...(sizing === undefined ? {} : { sizing }),
       ...(transfer === undefined ? {} : { transfer }),
+      ...(proof === undefined ? {} : { proof }),
     };
     const structural = json.findings.filter((f) => !inRows.has(f));
     const tail: CellTail = { structural, summary, notes, ...(power === undefined ? {} : { power }) };
@@ -109,6 +111,7 @@ export function formatCell(view: CellView, c: Colour): string {
     ...extraLines(head, tail),
     ...(head.transfer === undefined ? [] : transferLines(head.transfer, c)),
     ...(view.json === undefined ? [] : dcLines(view.json, c)),
+    ...(head.proof === undefined ? [] : proofLines(head.proof, head.inputs.length, c)),
     summaryLine(tail.summary, what, c),
   ];
   return lines.join('\n');

@@ -5,6 +5,7 @@ import { PROGRESS_THRESHOLD_VECTORS, appSweepLimit, jobSize } from '../worker/pr
 import type { SweepColumns } from '../core/analysis/sweepColumns.ts';
 import { arrangeRows, kindCounts, vectorRow } from '../core/view/vectorTable.ts';
 import { AUTO_SWEEP_VECTORS } from '../state/analysis.ts';
+import { startProof } from '../state/proof.ts';
 import { useStore } from '../state/store.ts';
 import {
   cancelJob,
@@ -28,8 +29,12 @@ function SweepStatus() {
     return (
       <p className="rw-muted" data-testid="sweep-limit">
         {countOf(design.netlist.inputs.length, 'input')}: more than the {limit} the page checks exhaustively.
-        The shown vector is still checked (its findings are above); check chosen vectors with sequences, or
-        the whole cell with <code>railwise check --max-inputs</code> (up to 24 inputs).
+        The shown vector is still checked (its findings are above).{' '}
+        <button type="button" data-testid="sweep-limit-prove" onClick={() => void startProof()}>
+          Prove it for every vector
+        </button>{' '}
+        instead (see the proof below), check chosen vectors with sequences, or sweep the whole cell with{' '}
+        <code>railwise check --max-inputs</code> (up to 24 inputs).
       </p>
     );
   }

@@ -9,6 +9,7 @@ import { sizingReport } from '../core/sizing/sizingReport.ts';
 import { usableExpectations as usableExpectationsOf } from '../core/view/expectation.ts';
 import { StepLevelRecorder } from '../core/view/sequenceLevels.ts';
 import { transfer, vectorDc } from './dcJobs.ts';
+import { compare, proof } from './proofJobs.ts';
 import { appSweepLimit } from './protocol.ts';
 import type {
   AnalysisJob,
@@ -99,6 +100,12 @@ export function runJob(job: AnalysisJob, onProgress: (p: JobProgress) => void = 
     }
     case 'vector-dc':
       return { kind: 'vector-dc', revision: job.revision, ...vectorDc(job), elapsedMs: elapsed() };
+    case 'proof': {
+      const outcome = proof(job, throttled(onProgress));
+      return { kind: 'proof', revision: job.revision, ...outcome, elapsedMs: elapsed() };
+    }
+    case 'compare':
+      return { kind: 'compare', revision: job.revision, ...compare(job), elapsedMs: elapsed() };
   }
 }
 

@@ -24,7 +24,7 @@ describe('starter cells reproduce their truth tables', () => {
       const starter = STARTERS.find((s) => s.id === id);
       expect(starter).toBeDefined();
       const report = checkDesign(starter!.design);
-      const output = starter!.design.netlist.outputs[0];
+      const output = starter!.design.netlist.outputs[0]!;
       expect(
         reportRows(report)
           .map((v) => v.outputs[output])

@@ -69,7 +69,7 @@ function build(inputCount: number, stages: readonly Stage[], outputCount: number
     .rails()
     .input(...inputs);
   stages.forEach((s, k) => {
-    const [made, signal] = addStage(b, s, `s${k}`, (i) => pool[s.picks[i] % pool.length]);
+    const [made, signal] = addStage(b, s, `s${k}`, (i) => pool[(s.picks[i] ?? 0) % pool.length]!); // the pool holds the inputs at least
     b = made;
     pool.push(signal);
   });
@@ -92,6 +92,9 @@ function addStage(
   pick: (i: number) => Signal,
 ): [CircuitBuilder, Signal] {
   const [p, q, r] = [pick(0), pick(1), pick(2)];
+  // A function of signals that are no function (Z, fights) is none either.
+  const of = (used: readonly Signal[], expr: () => string): string | null =>
+    used.every((u) => u.expr !== null) ? expr() : null;
   switch (s.kind) {
     case 'gate':
     case 'broken-gate': {
@@ -103,10 +106,10 @@ function addStage(
         out,
         s.kind === 'broken-gate' ? 1 + (s.shape % 3) : 0,
       );
-      return [built, { net: out, expr: s.kind === 'gate' ? `!${tree.expr}` : null }];
+      return [built, { net: out, expr: s.kind === 'gate' ? of(tree.used, () => `!${tree.expr}`) : null }];
     }
     case 'inverter':
-      return [inverter(b, out, p.net, out), { net: out, expr: `!${paren(p)}` }];
+      return [inverter(b, out, p.net, out), { net: out, expr: of([p], () => `!${paren(p)}`) }];
     case 'mux': {
       const sb = `${out}_sb`;
       const made = tg(
@@ -117,7 +120,7 @@ function addStage(
         sb,
         p.net,
       );
-      return [made, { net: out, expr: `(${paren(p)} ? ${paren(q)} : ${paren(r)})` }];
+      return [made, { net: out, expr: of([p, q, r], () => `(${paren(p)} ? ${paren(q)} : ${paren(r)})`) }];
     }
     case 'pass':
       return [b.nmos(`N${out}`, { g: p.net, d: q.net, s: out }), { net: out, expr: null }];
@@ -135,7 +138,7 @@ function addStage(
         .pmos(`P${out}`, { g: 'GND', d: out, s: 'VDD', w: 0.5 })
         .nmos(`N${out}a`, { g: p.net, d: out, s: 'GND', w: 2 })
         .nmos(`N${out}b`, { g: q.net, d: out, s: 'GND', w: 2 });
-      return [made, { net: out, expr: `!(${paren(p)} | ${paren(q)})` }];
+      return [made, { net: out, expr: of([p, q], () => `!(${paren(p)} | ${paren(q)})`) }];
     }
     case 'fight':
       return [inverter(inverter(b, `${out}f`, q.net, out), out, p.net, out), { net: out, expr: null }];
@@ -143,27 +146,36 @@ function addStage(
 }
 
 function paren(s: Signal): string {
-  return s.expr === null ? s.net : `(${s.expr})`;
+  return `(${s.expr})`;
 }
 
 /** A small series-parallel tree over up to three signals, chosen by `shape`. */
-function treeOf(shape: number, signals: readonly Signal[]): { tree: SpTree; expr: string } {
+function treeOf(
+  shape: number,
+  signals: readonly [Signal, Signal, Signal],
+): { tree: SpTree; expr: string; used: Signal[] } {
   const leaf = (s: Signal): SpTree => ({ kind: 'leaf', input: s.net });
   const [p, q, r] = signals;
   switch (shape % 4) {
     case 0:
-      return { tree: leaf(p), expr: paren(p) };
+      return { tree: leaf(p), expr: paren(p), used: [p] };
     case 1:
-      return { tree: { kind: 'series', left: leaf(p), right: leaf(q) }, expr: `(${paren(p)} & ${paren(q)})` };
+      return {
+        tree: { kind: 'series', left: leaf(p), right: leaf(q) },
+        expr: `(${paren(p)} & ${paren(q)})`,
+        used: [p, q],
+      };
     case 2:
       return {
         tree: { kind: 'parallel', left: leaf(p), right: leaf(q) },
         expr: `(${paren(p)} | ${paren(q)})`,
+        used: [p, q],
       };
     default:
       return {
         tree: { kind: 'parallel', left: { kind: 'series', left: leaf(p), right: leaf(q) }, right: leaf(r) },
         expr: `(${paren(p)} & ${paren(q)} | ${paren(r)})`,
+        used: [p, q, r],
       };
   }
 }

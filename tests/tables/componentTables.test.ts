@@ -28,7 +28,7 @@ function tablesOf(netlist: Netlist, options = {}) {
   const tables = new ComponentTables(compiled, options);
   const net = (name: string): number => compiled.netIndex.get(name) as number;
   const tableOf = (name: string): GroupTable => {
-    const found = tables.binary(tables.groupOfNet[net(name)]);
+    const found = tables.binary(tables.groupOfNet[net(name)]!);
     if (found.kind !== 'table') throw new Error(found.reason);
     return found;
   };
@@ -39,7 +39,7 @@ function tablesOf(netlist: Netlist, options = {}) {
     for (const [c, v] of Object.entries(controls)) volts[net(c)] = v * VDD;
     const entry = binaryEntry(table.shape, volts, VDD);
     const i = table.shape.nets.indexOf(net(name));
-    return levelName(table.states[entry * table.shape.nets.length + i] & STATE_LEVEL);
+    return levelName(table.states[entry * table.shape.nets.length + i]! & STATE_LEVEL);
   };
   return { compiled, tables, net, tableOf, level };
 }
@@ -62,13 +62,13 @@ describe('tables of textbook gates equal their truth tables', () => {
       expect(tableOf('Y').shape.controls.length).toBe(inputs.length);
       for (let k = 0; k < 2 ** inputs.length; k++) {
         const v = bits(k, inputs.length);
-        const controls = Object.fromEntries(inputs.map((n, i) => [n, v[i]]));
+        const controls = Object.fromEntries(inputs.map((n, i) => [n, v[i]!]));
         expect(level('Y', controls)).toBe(f(v) ? '1' : '0');
       }
       const table = tableOf('Y');
       const y = table.shape.nets.indexOf(tablesOf(starterById(id)!.design.netlist).net('Y'));
       for (let e = 0; e < table.entries; e++) {
-        expect(table.states[e * table.shape.nets.length + y] & STATE_EXACT).toBe(STATE_EXACT);
+        expect(table.states[e * table.shape.nets.length + y]! & STATE_EXACT).toBe(STATE_EXACT);
         expect(table.cleanObserved[e]).toBe(1);
         expect(table.current[e]).toBe(0);
       }
@@ -80,7 +80,7 @@ describe('tables of textbook gates equal their truth tables', () => {
     // Controls: S, its complement Sb (an inverter's output), and the data inputs tied to the channels.
     expect(tableOf('Y').shape.controls.length).toBe(4);
     for (let k = 0; k < 8; k++) {
-      const [s, d1, d0] = bits(k, 3);
+      const [s, d1, d0] = bits(k, 3) as [0 | 1, 0 | 1, 0 | 1];
       expect(level('Y', { S: s, Sb: (1 - s) as 0 | 1, D1: d1, D0: d0 })).toBe(String(s ? d1 : d0));
     }
     // Both gates on with different data: a fight, which the table records as the engine solves it.
@@ -101,9 +101,9 @@ describe('groups with feedback', () => {
       const value = (name: string): number => (e >> names.indexOf(name)) & 1;
       const majority = value('A') + value('B') + value('CI') >= 2;
       // K is the inverted carry (majority of three, common practice).
-      expect(table.states[e * loop.nets.length + k] & STATE_LEVEL).toBe(majority ? LEVEL_0 : LEVEL_1);
+      expect(table.states[e * loop.nets.length + k]! & STATE_LEVEL).toBe(majority ? LEVEL_0 : LEVEL_1);
       for (let i = 0; i < loop.nets.length; i++)
-        expect(table.flags[e * loop.nets.length + i] & FLAG_STATES).toBe(0);
+        expect(table.flags[e * loop.nets.length + i]! & FLAG_STATES).toBe(0);
     }
   });
 
@@ -115,9 +115,10 @@ describe('groups with feedback', () => {
     expect(level('Q', { SN: 0, RN: 1 })).toBe('1');
     expect(level('Q', { SN: 1, RN: 0 })).toBe('0');
     const held = Array.from({ length: table.entries }, (_, e) =>
-      Array.from(table.shape.nets, (_, i) => table.flags[e * table.shape.nets.length + i] & FLAG_STATES).some(
-        Boolean,
-      ),
+      Array.from(
+        table.shape.nets,
+        (_, i) => table.flags[e * table.shape.nets.length + i]! & FLAG_STATES,
+      ).some(Boolean),
     );
     expect(held.filter(Boolean)).toHaveLength(1);
   });
@@ -126,19 +127,19 @@ describe('groups with feedback', () => {
 describe('bounds and the ternary option', () => {
   it('a group past the bound gets no table, with the reason', () => {
     const { tables, net } = tablesOf(starterById('aoi21')!.design.netlist, { maxControls: 2 });
-    const found = tables.binary(tables.groupOfNet[net('Y')]);
+    const found = tables.binary(tables.groupOfNet[net('Y')]!);
     expect(found.kind).toBe('none');
     if (found.kind === 'none') expect(found.reason).toMatch(/3 controls exceed the table bound of 2/);
   });
 
   it('an inverter with its input at X: Y is X in the ternary table, and entries index by base 3', () => {
     const { tables, net, compiled } = tablesOf(starterById('inverter')!.design.netlist);
-    const table = tables.ternary(tables.groupOfNet[net('Y')]) as GroupTable;
+    const table = tables.ternary(tables.groupOfNet[net('Y')]!) as GroupTable;
     expect(table.entries).toBe(3);
     const volts = new Float64Array(compiled.netCount);
     const levelAt = (a: number): string => {
       volts[net('A')] = a;
-      return levelName(table.states[ternaryEntry(table.shape, volts, VDD)] & STATE_LEVEL);
+      return levelName(table.states[ternaryEntry(table.shape, volts, VDD)]! & STATE_LEVEL);
     };
     expect([levelAt(0), levelAt(VDD), levelAt(NaN)]).toEqual(['1', '0', 'X']);
     volts[net('A')] = 1.2;

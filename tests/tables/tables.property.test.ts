@@ -29,7 +29,7 @@ function fromSolve(table: GroupTable, r: SolveResult) {
     states: Array.from(nets, (n) => {
       const v = r.volts[n];
       const exact = r.driven[n] === 1 && (v === 0 || v === VDD);
-      return r.levels[n] | (exact ? STATE_EXACT : 0) | (r.driven[n] ? STATE_DRIVEN : 0);
+      return r.levels[n]! | (exact ? STATE_EXACT : 0) | (r.driven[n] ? STATE_DRIVEN : 0);
     }),
     flags: Array.from(nets, (n) => r.flags[n]),
     volts: Array.from(nets, (n) => String(r.volts[n])),
@@ -68,7 +68,7 @@ function vectors(inputs: readonly string[], values: readonly InputValue[]): Inpu
     out.push(
       Object.fromEntries(
         inputs.map((name) => {
-          const v = values[rest % values.length];
+          const v = values[rest % values.length]!;
           rest = Math.floor(rest / values.length);
           return [name, v];
         }),

@@ -1,3 +1,4 @@
+// Indexes read here are in range by construction, so `!` marks them (no run-time cost).
 import { compile, type CompiledNetlist } from '../compile/compile.ts';
 import { evaluateExpression, type ExpectedValue } from '../expect/evaluate.ts';
 import { expressionNames } from '../expect/names.ts';
@@ -14,9 +15,9 @@ import { structuralFindings } from './rules.ts';
 import { vectorFindings } from './vectorFindings.ts';
 import { sequencePass, sweepPass, type PassProgress, type SolveObserver } from './pass.ts';
 import { KIND_ORDER, sweepFindings, type SweepColumns } from './sweepColumns.ts';
-import { reportedNets, SweepRecorder, type RecorderShape } from './sweepRecorder.ts';
+import { SweepRows } from './sweepRows.ts';
 import { checkSweepLimit, sweepSize, vectorNumber } from './vectors.ts';
-import { WordSweep, type WordRows } from './vectorsWordPass.ts';
+import { WordSweep } from './vectorsWordPass.ts';
 
 export { DEFAULT_MAX_INPUTS, SweepLimitError, sweepVectors } from './vectors.ts';
 export { SequenceError } from './pass.ts';
@@ -49,8 +50,7 @@ export interface CheckOptions {
   readonly wordParallel?: boolean;
 }
 
-/** Rows per block handed to `onBlock`: a multiple of 32, the vectors one bit-plane word holds. */
-export const SWEEP_BLOCK = 4096;
+export { SWEEP_BLOCK } from './sweepRows.ts';
 
 export const FINDING_KINDS: readonly FindingKind[] = KIND_ORDER;
 
@@ -109,13 +109,13 @@ class Checker {
     const c = this.compiled;
     const voltageNets = this.options.allNets ? c.netNames : netlist.outputs;
     const volts = (name: string): number | null => {
-      const v = r.volts[c.netIndex.get(name) as number];
+      const v = r.volts[c.netIndex.get(name) as number]!;
       return Number.isNaN(v) ? null : v;
     };
     return {
       inputs: this.allInputs(r.inputs),
       outputs: Object.fromEntries(
-        netlist.outputs.map((n) => [n, levelName(r.levels[c.netIndex.get(n) as number])]),
+        netlist.outputs.map((n) => [n, levelName(r.levels[c.netIndex.get(n) as number]!)]),
       ),
       voltages: Object.fromEntries(voltageNets.map((n) => [n, volts(n)])),
       supplyCurrent: r.supplyCurrent,
@@ -161,69 +161,6 @@ class StepRows implements SolveObserver {
   }
 }
 
-/** The vectors of a sweep in columns: one block kept, or blocks handed to `onBlock` as they fill. */
-class SweepRows implements SolveObserver, WordRows {
-  private recorder: SweepRecorder;
-  private readonly shape: RecorderShape;
-  private readonly total: number;
-  private readonly blockSize: number;
-  rows = 0;
-
-  constructor(
-    private readonly checker: Checker,
-    private readonly onBlock: ((block: SweepColumns) => void) | undefined,
-  ) {
-    const { netlist, options } = checker;
-    const undriven = options.undrivenInputs === true;
-    const c = checker.compiled;
-    const reported = reportedNets(c, options.allNets === true);
-    this.shape = { inputs: netlist.inputs, undriven, reported, vdd: c.tech.vdd };
-    this.total = sweepSize(netlist.inputs, undriven);
-    this.blockSize = onBlock === undefined ? this.total : Math.min(this.total, SWEEP_BLOCK);
-    this.recorder = this.block(0);
-  }
-
-  private block(first: number): SweepRecorder {
-    const capacity = Math.min(this.blockSize, this.total - first);
-    return new SweepRecorder(this.shape, first, Math.max(1, capacity));
-  }
-
-  add(r: SolveResult, index: number): void {
-    this.recorder.add(r, this.checker.findingsOf(r, index));
-    this.next();
-  }
-
-  addWord(levels: Int32Array, fast: number): void {
-    this.recorder.orLevels(levels, fast);
-  }
-
-  addPlain(): void {
-    this.recorder.addPlain();
-    this.next();
-  }
-
-  private next(): void {
-    this.rows++;
-    if (this.onBlock !== undefined && this.recorder.isFull()) {
-      this.onBlock(this.recorder.columns());
-      this.recorder = this.block(this.rows);
-    }
-  }
-
-  /** The reported nets, as compiled net numbers. */
-  get reportedNets(): Int32Array {
-    return this.shape.reported.nets;
-  }
-
-  /** The rows kept (none when streamed); a streamed sweep's last, partial block goes out here. */
-  finish(): SweepColumns | undefined {
-    const last = this.recorder.columns();
-    if (this.onBlock === undefined) return last;
-    if (last.count > 0) this.onBlock(last);
-    return undefined;
-  }
-}
-
 /** Each output's level in the previous report, read as an input value (X where not 0 or 1). */
 function heldValues(outputs: readonly string[], held: VectorReport | undefined): Record<string, InputValue> {
   return recordOf(
@@ -253,7 +190,7 @@ function namesIn(root: Expr): string[] {
  * naming the output for one that is not an output or does not parse. A check refuses these before
  * it solves anything (`refusalBeforeCheck`).
  */
-function parsedExpectations(
+export function parsedExpectations(
   netlist: Netlist,
   expectations: Readonly<Record<string, string>> = {},
 ): [string, Expr][] {
@@ -281,10 +218,38 @@ export function summarize(vectors: number, findings: readonly Finding[]): Summar
 
 function countFindings(counts: Record<string, number>, findings: readonly Finding[]): Summary {
   for (const f of findings) {
-    counts[f.severity === 'error' ? 'errors' : 'warnings']++;
+    const severity = f.severity === 'error' ? 'errors' : 'warnings';
+    counts[severity] = (counts[severity] ?? 0) + 1;
     counts[f.kind] = (counts[f.kind] ?? 0) + 1;
   }
   return counts as Summary;
+}
+
+/**
+ * A check that solves no vector: the structural findings and a note, for a cell whose sweep is
+ * skipped (too many inputs) while a proof covers its vectors.
+ */
+export function checkStructure(netlist: Netlist, options: CheckOptions, note: string): CheckReport {
+  const checker = new Checker(netlist, options);
+  const sweep = new SweepRows(checker, undefined, 0).finish(); // no rows: `vectors` prints as []
+  return checker.report(0, sweep === undefined ? {} : { sweep }, [note]);
+}
+
+/**
+ * Checks single vectors, each from an unknown state exactly as `checkSweep` checks each of its
+ * vectors: the replay of a proof's counterexamples (docs/semantics.md §10).
+ */
+export class VectorChecker {
+  private readonly checker: Checker;
+
+  constructor(netlist: Netlist, options: CheckOptions = {}) {
+    this.checker = new Checker(netlist, options);
+  }
+
+  /** The vector's report; `index` is the vector's place in the sweep's order, named by its findings. */
+  check(vector: InputVector, index: number): VectorReport {
+    return this.checker.vectorReport(this.checker.simulator.solveFresh(vector), index);
+  }
 }
 
 /** Checks every input combination, each solved from an unknown state (docs/semantics.md §2.9, sweep mode). */

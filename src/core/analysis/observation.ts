@@ -20,7 +20,7 @@ export function observationOf(c: CompiledNetlist): Observation {
     const isOutput = new Uint8Array(c.netCount);
     for (const n of c.outputNets) isOutput[n] = 1;
     const observed = Uint8Array.from(isOutput);
-    for (let n = 0; n < c.netCount; n++) if (c.netGates.start[n + 1] > c.netGates.start[n]) observed[n] = 1;
+    for (let n = 0; n < c.netCount; n++) if (c.netGates.start[n + 1]! > c.netGates.start[n]!) observed[n] = 1;
     o = { isOutput, observed };
     cache.set(c, o);
   }

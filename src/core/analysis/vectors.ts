@@ -1,3 +1,4 @@
+// Indexes read here are in range by construction, so `!` marks them (no run-time cost).
 import type { InputValue, InputVector } from '../model/design.ts';
 import { nameRecord } from '../model/records.ts';
 
@@ -43,7 +44,7 @@ export function sweepVector(inputs: readonly string[], k: number, undriven = fal
   const vector = nameRecord<InputValue>(); // an input may be called __proto__
   let rest = k;
   for (let i = inputs.length - 1; i >= 0; i--) {
-    vector[inputs[i]] = values[rest % base];
+    vector[inputs[i]!] = values[rest % base]!;
     rest = Math.floor(rest / base);
   }
   return vector;

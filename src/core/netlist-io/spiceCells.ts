@@ -9,7 +9,7 @@ import type { Body, Directive } from './spiceParse.ts';
 import { flattenCell, type FlatCell, type FlattenContext, type FlatSource } from './spiceFlatten.ts';
 import type { Hierarchy } from './spiceHierarchy.ts';
 import { SpiceImportError } from './spiceErrors.ts';
-import { assignPins, PinError } from './pins.ts';
+import { assignPins, PinError, withInputsReadByExpectations } from './pins.ts';
 import { restoreExportedNames } from './spiceRestore.ts';
 import { readPlacement } from './placementComments.ts';
 import type { Sheet } from '../sheet/types.ts';
@@ -71,6 +71,7 @@ export function buildCell(spec: CellSpec, ctx: CellContext): ImportedCell {
   netlist = applyPinDirectives(netlist, spec.body.directives, ctx.fileName);
   const { expectations, lines } = readExpectations(netlist, spec.body.directives, notes);
   const pinsNamed = spec.body.directives.some((d) => d.key === 'inputs' || d.key === 'outputs');
+  if (!pinsNamed) netlist = withInputsReadByExpectations(netlist, expectations);
   const models = recordOf(flat.models);
   const restored = restoreExportedNames(
     { netlist, expectations, expectationLines: lines },

@@ -83,13 +83,13 @@ export class TableBench {
     let clean = 1;
     let cleanObserved = 1;
     for (let i = 0; i < nets.length; i++) {
-      const n = nets[i];
-      const v = state.volts[n];
+      const n = nets[i]!;
+      const v = state.volts[n]!;
       const driven = state.driven[n] === 1;
       const level = driven ? classify(v, vil, vih) : LEVEL_Z;
       const exact = driven && (v === 0 || v === vdd);
       table.states[at + i] = level | (exact ? STATE_EXACT : 0) | (driven ? STATE_DRIVEN : 0);
-      table.flags[at + i] = state.flags[n];
+      table.flags[at + i] = state.flags[n]!;
       table.volts[at + i] = v;
       const quiet = state.flags[n] === 0 && (exact || (!driven && Number.isNaN(v)));
       if (!quiet) {

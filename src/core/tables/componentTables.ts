@@ -68,6 +68,7 @@ export class ComponentTables {
     let found = cache.get(s);
     if (found === undefined) {
       const shape = this.shapes[s];
+      if (shape === undefined) throw new RangeError(`no group ${s}: the cell has ${this.shapes.length}`);
       const reason = refusal(shape, ternary, bound);
       found = reason === null ? this.bench.build(shape, ternary) : { kind: 'none', shape, reason };
       cache.set(s, found);

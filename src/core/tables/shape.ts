@@ -49,9 +49,9 @@ export function groupShapes(
       controls.push(n);
     };
     for (const e of elements) {
-      if (topology.selfGate[e] === GATE_NOT_TIED) add(c.chGate[e]);
-      if (topology.isSource[c.chA[e]]) add(c.chA[e]);
-      if (topology.isSource[c.chB[e]]) add(c.chB[e]);
+      if (topology.selfGate[e] === GATE_NOT_TIED) add(c.chGate[e]!);
+      if (topology.isSource[c.chA[e]!]) add(c.chA[e]!);
+      if (topology.isSource[c.chB[e]!]) add(c.chB[e]!);
     }
     const observed = Uint8Array.from(nets, (n) => (feedsGate(c, n) || output[n] ? 1 : 0));
     shapes.push({
@@ -72,17 +72,18 @@ export function groupsOfNets(topology: Topology): Int32Array {
   const { sccOrder, cccOfNet } = topology;
   const groupOfCcc = new Int32Array(topology.cccCount);
   for (let s = 0; s + 1 < sccOrder.start.length; s++) {
-    for (let i = sccOrder.start[s]; i < sccOrder.start[s + 1]; i++) groupOfCcc[sccOrder.items[i]] = s;
+    for (let i = sccOrder.start[s]!; i < sccOrder.start[s + 1]!; i++) groupOfCcc[sccOrder.items[i]!] = s;
   }
-  return Int32Array.from(cccOfNet, (k) => (k < 0 ? -1 : groupOfCcc[k]));
+  return Int32Array.from(cccOfNet, (k) => (k < 0 ? -1 : groupOfCcc[k]!));
 }
 
 function collect(rows: { start: Int32Array; items: Int32Array }, components: Int32Array): Int32Array {
   const out: number[] = [];
-  for (const k of components) for (let i = rows.start[k]; i < rows.start[k + 1]; i++) out.push(rows.items[i]);
+  for (const k of components)
+    for (let i = rows.start[k]!; i < rows.start[k + 1]!; i++) out.push(rows.items[i]!);
   return Int32Array.from(out);
 }
 
 function feedsGate(c: CompiledNetlist, n: number): boolean {
-  return c.netGates.start[n + 1] > c.netGates.start[n];
+  return c.netGates.start[n + 1]! > c.netGates.start[n]!;
 }

@@ -64,7 +64,7 @@ export function binaryEntry(shape: GroupShape, volts: Float64Array, vdd: number)
   let entry = 0;
   const { controls } = shape;
   for (let i = 0; i < controls.length; i++) {
-    const v = volts[controls[i]];
+    const v = volts[controls[i]!];
     if (v === vdd) entry |= 1 << i;
     else if (v !== 0) return -1;
   }
@@ -80,7 +80,7 @@ export function ternaryEntry(shape: GroupShape, volts: Float64Array, vdd: number
   let weight = 1;
   const { controls } = shape;
   for (let i = 0; i < controls.length; i++) {
-    const v = volts[controls[i]];
+    const v = volts[controls[i]!];
     if (v === vdd) entry += weight;
     else if (Number.isNaN(v)) entry += TRIT_X * weight;
     else if (v !== 0) return -1;

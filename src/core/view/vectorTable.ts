@@ -1,3 +1,4 @@
+// Typed-array rows read here are in range by construction, so `!` marks them (no run-time cost).
 /**
  * The table of all vectors of a sweep: one row per vector with its outputs, the kinds of finding it
  * raised, its supply current and static power; filtered and sorted for the side panel. It reads the
@@ -64,7 +65,7 @@ const bitOf = (kind: FindingKind): number => 1 << KIND_ORDER.indexOf(kind);
 
 /** Row i of the sweep as the table shows it. */
 export function vectorRow(s: SweepColumns, i: number): VectorRow {
-  const mask = s.kinds[i];
+  const mask = s.kinds[i]!;
   const findings = detailOf(s, i)?.findings ?? [];
   const named = (kind: FindingKind): Set<string> =>
     new Set(findings.filter((f) => f.kind === kind).flatMap((f) => f.nets));
@@ -76,12 +77,12 @@ export function vectorRow(s: SweepColumns, i: number): VectorRow {
     inputs: rowVector(s, i),
     outputs,
     kinds: FINDING_ORDER.filter((k) => (mask & bitOf(k)) !== 0),
-    errors: s.errors[i],
-    warnings: s.warnings[i],
+    errors: s.errors[i]!,
+    warnings: s.warnings[i]!,
     mismatched: Object.keys(outputs).filter((o) => mismatched.has(o)),
     degraded: Object.keys(outputs).filter((o) => degraded.has(o)),
-    supplyCurrent: s.supplyCurrent[i],
-    staticPower: s.staticPower[i],
+    supplyCurrent: s.supplyCurrent[i]!,
+    staticPower: s.staticPower[i]!,
   };
 }
 
@@ -98,9 +99,9 @@ export function keepRow(s: SweepColumns, i: number, filter: RowFilter): boolean 
     case 'problems':
       return s.kinds[i] !== 0;
     case 'errors':
-      return s.errors[i] > 0;
+      return s.errors[i]! > 0;
     default:
-      return (s.kinds[i] & bitOf(filter)) !== 0;
+      return (s.kinds[i]! & bitOf(filter)) !== 0;
   }
 }
 
@@ -115,11 +116,11 @@ function sortKeys(s: SweepColumns, key: SortKey): Float64Array | null {
     const name = key.slice('output:'.length);
     const k = Array.from(s.outputs).findIndex((j) => s.nets[j] === name);
     if (k < 0) return null;
-    return Float64Array.from({ length: s.count }, (_, i) => levelRank(levelAt(s, s.outputs[k], i)));
+    return Float64Array.from({ length: s.count }, (_, i) => levelRank(levelAt(s, s.outputs[k]!, i)));
   }
   switch (key) {
     case 'severity':
-      return Float64Array.from({ length: s.count }, (_, i) => s.errors[i] * 65536 + s.warnings[i]);
+      return Float64Array.from({ length: s.count }, (_, i) => s.errors[i]! * 65536 + s.warnings[i]!);
     case 'supplyCurrent':
       return s.supplyCurrent;
     case 'staticPower':
@@ -143,7 +144,7 @@ export function arrangeRows(
   const order = Int32Array.from(kept);
   const keys = sortKeys(s, sort);
   const sign = direction === 'ascending' ? 1 : -1;
-  if (keys !== null) order.sort((a, b) => sign * (keys[a] - keys[b]) || a - b);
+  if (keys !== null) order.sort((a, b) => sign * (keys[a]! - keys[b]!) || a - b);
   else if (sign < 0) order.reverse();
   return order;
 }
@@ -152,13 +153,15 @@ export function arrangeRows(
 export function kindCounts(s: SweepColumns): Map<FindingKind, number> {
   const tally = new Float64Array(KIND_ORDER.length);
   for (let i = 0; i < s.count; i++) {
-    const mask = s.kinds[i];
+    const mask = s.kinds[i]!;
     if (mask === 0) continue;
-    for (let b = 0; b < KIND_ORDER.length; b++) if (mask & (1 << b)) tally[b]++;
+    for (let b = 0; b < KIND_ORDER.length; b++) if (mask & (1 << b)) tally[b]!++; // b < KIND_ORDER.length
   }
   const counts = new Map<FindingKind, number>();
-  for (const k of FINDING_ORDER)
-    if (tally[KIND_ORDER.indexOf(k)] > 0) counts.set(k, tally[KIND_ORDER.indexOf(k)]);
+  for (const k of FINDING_ORDER) {
+    const n = tally[KIND_ORDER.indexOf(k)] ?? 0;
+    if (n > 0) counts.set(k, n);
+  }
   return counts;
 }
 

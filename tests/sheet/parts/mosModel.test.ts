@@ -8,6 +8,7 @@ import { designsFromSpice } from '../../../src/app/files.ts';
 import { parseDesignFile, serializeDesign } from '../../../src/core/format/designFile.ts';
 import { updatePart } from '../../../src/core/sheet/edits.ts';
 import { makeSheetPart, partForDevice } from '../../../src/core/sheet/parts/index.ts';
+import type { MosDevice } from '../../../src/core/model/netlist.ts';
 import { deriveDesign, documentFromDesign } from '../../../src/state/document.ts';
 
 const DECK = `.subckt inv A Y VDD GND
@@ -16,6 +17,11 @@ MN Y A GND GND hvt W=1u L=0.25u
 .ends
 .model hvt nmos (level=1 vto=0.62 kp=100u)
 `;
+
+/** The device with no model card named (the key left out, as a file would). */
+function withoutModel({ model: _unnamed, ...rest }: MosDevice): MosDevice {
+  return rest;
+}
 
 const AT = { id: 'p1', x: 0, y: 0, rotation: 0 as const, mirror: false };
 
@@ -57,7 +63,7 @@ describe('the model a transistor names', () => {
     const [design] = designsFromSpice(DECK, 'inv.sp').designs;
     const drawn = deriveDesign(documentFromDesign(design!)).design;
     // The netlist names no card here, so the sheet's part is what is refused.
-    const devices = drawn.netlist.devices.map((d) => (d.kind === 'nmos' ? { ...d, model: undefined } : d));
+    const devices = drawn.netlist.devices.map((d) => (d.kind === 'nmos' ? withoutModel(d) : d));
     const netlist = { ...drawn.netlist, devices };
     const text = serializeDesign({ ...drawn, netlist, technology: { ...drawn.technology, models: {} } });
     expect(() => parseDesignFile(text, 'bad.json')).toThrow(
