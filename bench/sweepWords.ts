@@ -47,7 +47,7 @@ export function measureWordSweep(name: string, netlist: Netlist): CpuRow {
   let sink = 0;
   const rows: WordRows = {
     addWord: (levels) => (sink ^= levels[0] ?? 0),
-    addPlain: () => {},
+    addPlains: () => {},
     add: (r) => (sink ^= r.levels[0] ?? 0),
   };
   const once = (): { vectors: number; cpu: number } => {

@@ -42,7 +42,11 @@ function split(
   const sweep = WordSweep.plan(simulator, simulator.compiled.outputNets, expectations);
   if (sweep === null) return null;
   const counts = { fast: 0, scalar: 0 };
-  const rows: WordRows = { addWord: () => {}, addPlain: () => counts.fast++, add: () => counts.scalar++ };
+  const rows: WordRows = {
+    addWord: () => {},
+    addPlains: (n) => (counts.fast += n),
+    add: () => counts.scalar++,
+  };
   sweep.run(rows);
   return counts;
 }

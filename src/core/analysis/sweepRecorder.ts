@@ -101,9 +101,9 @@ export class SweepRecorder {
     }
   }
 
-  /** The next row, plain (no findings, no current, voltages as its levels imply); levels by orLevels. */
-  addPlain(): void {
-    this.count++;
+  /** The next rows, plain (no findings, no current, voltages as their levels imply); levels by orLevels. */
+  addPlains(count: number): void {
+    this.count += count;
   }
 
   /** The next row from a report row (`sweepRow`'s inverse): what a test or a fixture writes by hand. */

@@ -2,7 +2,7 @@
  * The rows of one sweep as they are solved, in columns (sweepColumns.ts): one block kept for the
  * report, or blocks of SWEEP_BLOCK vectors handed on as they fill, so a streamed sweep of millions of
  * vectors never holds its rows. Both passes write here: the scalar one row by row (`add`), the
- * bit-parallel one a word of levels at a time (`addWord`, `addPlain`).
+ * bit-parallel one a word of levels at a time (`addWord`, `addPlains`).
  */
 import type { CompiledNetlist } from '../compile/compile.ts';
 import type { Netlist } from '../model/netlist.ts';
@@ -59,13 +59,14 @@ export class SweepRows implements SolveObserver, WordRows {
     this.recorder.orLevels(levels, fast);
   }
 
-  addPlain(): void {
-    this.recorder.addPlain();
-    this.next();
+  addPlains(count: number): void {
+    this.recorder.addPlains(count);
+    this.next(count);
   }
 
-  private next(): void {
-    this.rows++;
+  /** Rows come in runs within one word of 32, and blocks hold whole words: a run never spans two. */
+  private next(count = 1): void {
+    this.rows += count;
     if (this.onBlock !== undefined && this.recorder.isFull()) {
       this.onBlock(this.recorder.columns());
       this.recorder = this.block(this.rows);

@@ -1,75 +1,76 @@
+// Indexes read here are in range by construction (inputs and their slots), so `!` marks them.
 /**
- * Expected functions over words of vectors (docs/semantics.md §4, §2.10): each expression evaluated
- * for 32 two-valued vectors at once, so the bit-parallel sweep can send a vector whose output
- * disagrees to the scalar engine, which writes the mismatch finding. Expressions that can expect Z
- * or read an output's held value are left to the scalar engine (null).
+ * Expected functions over words of vectors (docs/semantics.md §4, §2.10): each expression becomes
+ * operations of the sweep's word program (wordProgram.ts), so the bit-parallel sweep can send a
+ * vector whose output disagrees to the scalar engine, which writes the mismatch finding. Expressions
+ * that can expect Z or read an output's held value are left to the scalar engine (null).
  */
 import type { CompiledNetlist } from '../compile/compile.ts';
 import { expressionNames } from '../expect/names.ts';
 import { parseExpectation, type Expr } from '../expect/parse.ts';
-
-/** An expression's word: bit j is its value in vector j, from the nets' words in `high`. */
-type WordExpr = (high: Int32Array) => number;
+import { ONES, ZERO, type WordProgram } from './wordProgram.ts';
 
 export interface WordExpectations {
-  /** The lanes where some output differs from its expected value. */
-  mismatch(high: Int32Array): number;
+  /** Adds to `fallback` the lanes where some output differs from its expected value. */
+  mismatch(program: WordProgram, netSlots: Int32Array, fallback: number): void;
 }
 
+/** The expected functions as word functions, or null when one can expect Z or reads an output. */
 export function wordExpectations(
   c: CompiledNetlist,
   expectations: Readonly<Record<string, string>>,
 ): WordExpectations | null {
   const names = expressionNames(c.netlist);
-  const checks: [number, WordExpr][] = [];
+  const checks: [number, Expr][] = [];
   for (const [output, text] of Object.entries(expectations)) {
     const net = c.netIndex.get(output);
-    const word = wordExpr(parseExpectation(output, text, names), c);
-    if (net === undefined || word === null) return null;
-    checks.push([net, word]);
+    const e = parseExpectation(output, text, names);
+    if (net === undefined || !wordReadable(e, c)) return null;
+    checks.push([net, e]);
   }
   return {
-    mismatch(high) {
-      let differs = 0;
-      for (const [net, word] of checks) differs |= word(high) ^ (high[net] as number);
-      return differs;
+    mismatch(program, netSlots, fallback) {
+      program.beginGroup();
+      for (const [net, e] of checks)
+        program.orInto(fallback, program.xor(wordOf(e, c, program, netSlots), netSlots[net]!));
+      program.endGroup();
     },
   };
 }
 
-/** The expression as a word function, or null when it can expect Z or reads an output. */
-function wordExpr(e: Expr, c: CompiledNetlist): WordExpr | null {
+/** Whether the expression reads only inputs and never expects Z. */
+function wordReadable(e: Expr, c: CompiledNetlist): boolean {
   switch (e.kind) {
     case 'const':
-      return e.value === 'Z' ? null : e.value === '1' ? () => -1 : () => 0;
-    case 'name': {
-      const input = c.netlist.inputs.indexOf(e.name);
-      const net = c.inputNets[input];
-      return input < 0 || net === undefined ? null : (high) => high[net] as number;
-    }
-    case 'not': {
-      const arg = wordExpr(e.arg, c);
-      return arg === null ? null : (high) => ~arg(high);
-    }
+      return e.value !== 'Z';
+    case 'name':
+      return c.netlist.inputs.includes(e.name);
+    case 'not':
+      return wordReadable(e.arg, c);
+    case 'choose':
+      return wordReadable(e.select, c) && wordReadable(e.whenTrue, c) && wordReadable(e.whenFalse, c);
+    default:
+      return wordReadable(e.left, c) && wordReadable(e.right, c);
+  }
+}
+
+/** The slot of the expression's word, its operations added to the program. */
+function wordOf(e: Expr, c: CompiledNetlist, program: WordProgram, netSlots: Int32Array): number {
+  const of = (x: Expr): number => wordOf(x, c, program, netSlots);
+  switch (e.kind) {
+    case 'const':
+      return e.value === '1' ? ONES : ZERO;
+    case 'name':
+      return netSlots[c.inputNets[c.netlist.inputs.indexOf(e.name)]!]!;
+    case 'not':
+      return program.not(of(e.arg));
     case 'and':
+      return program.and(of(e.left), of(e.right));
     case 'or':
-    case 'xor': {
-      const left = wordExpr(e.left, c);
-      const right = wordExpr(e.right, c);
-      if (left === null || right === null) return null;
-      if (e.kind === 'and') return (high) => left(high) & right(high);
-      if (e.kind === 'or') return (high) => left(high) | right(high);
-      return (high) => left(high) ^ right(high);
-    }
-    case 'choose': {
-      const select = wordExpr(e.select, c);
-      const yes = wordExpr(e.whenTrue, c);
-      const no = wordExpr(e.whenFalse, c);
-      if (select === null || yes === null || no === null) return null;
-      return (high) => {
-        const s = select(high);
-        return (s & yes(high)) | (~s & no(high));
-      };
-    }
+      return program.or(of(e.left), of(e.right));
+    case 'xor':
+      return program.xor(of(e.left), of(e.right));
+    case 'choose':
+      return program.mux(of(e.select), of(e.whenFalse), of(e.whenTrue));
   }
 }

@@ -1,6 +1,7 @@
+// Slots and words are in range by construction, so `!` marks them (no run-time cost).
 /**
  * The bit-parallel sweep (docs/semantics.md §2.10): 32 vectors a word, every group evaluated from its
- * component table in topological order; a vector that reaches anything the tables do not call clean
+ * component table in topological order, as one word program run over 4,096 vectors at a time; a vector that reaches anything the tables do not call clean
  * (X, a level off the rails, a flagged or floating observed net, a static current) or whose output
  * differs from its expected function is solved by the scalar engine instead, so every row is what
  * the scalar engine writes. Clean vectors have no findings, no current and plain voltages.
@@ -9,15 +10,16 @@ import type { Simulator, SolveResult } from '../solver/simulator.ts';
 import { ComponentTables } from '../tables/componentTables.ts';
 import type { PassProgress } from './pass.ts';
 import { sweepVector } from './vectors.ts';
-import { wordExpectations, type WordExpectations } from './vectorsWordExpect.ts';
-import { WordEvaluator, wordPlan, wordPlanRefusal, type WordPlan } from './vectorsWordPlan.ts';
+import { wordExpectations } from './vectorsWordExpect.ts';
+import { wordPlan, wordPlanRefusal, type WordPlan } from './vectorsWordPlan.ts';
+import { ONES, runWordProgram } from './wordProgram.ts';
 
 /** Where the pass writes its rows, in order. */
 export interface WordRows {
   /** Called first for each word: two level words per reported net (code bits 0 and 1), fast lanes. */
   addWord(levels: Int32Array, fast: number): void;
-  /** A row the tables decided: no findings, no current, levels as given to addWord. */
-  addPlain(index: number): void;
+  /** The next `count` rows, which the tables decided: no findings, no current, levels as given to addWord. */
+  addPlains(count: number): void;
   /** A row the scalar engine solved. */
   add(result: SolveResult, index: number): void;
 }
@@ -25,24 +27,25 @@ export interface WordRows {
 /** Bit j of PATTERNS[p] is bit p of j: an input that changes within a word of 32 vectors. */
 const PATTERNS = [0xaaaaaaaa, 0xcccccccc, 0xf0f0f0f0, 0xff00ff00, 0xffff0000].map((x) => x | 0);
 
+/** Words of 32 vectors per run of the program: 4,096 vectors, one block of a streamed sweep. */
+const BLOCK_WORDS = 128;
+
 export class WordSweep {
-  private readonly high: Int32Array;
-  private readonly floating: Int32Array;
+  private readonly ops: Int32Array;
+  private readonly words: number;
+  private readonly mem: Int32Array;
   private readonly levels: Int32Array;
-  private readonly controls = new Int32Array(32);
-  private readonly evaluator = new WordEvaluator();
 
   private constructor(
     private readonly simulator: Simulator,
     private readonly plan: WordPlan,
-    private readonly reported: Int32Array,
-    private readonly expect: WordExpectations | null,
+    total: number,
   ) {
-    const { netCount } = simulator.compiled;
-    this.high = new Int32Array(netCount);
-    this.floating = new Int32Array(netCount);
-    this.levels = new Int32Array(2 * reported.length);
-    for (const n of plan.highRails) this.high[n] = -1;
+    this.ops = plan.program.compiled();
+    this.words = Math.min(BLOCK_WORDS, total / 32);
+    this.mem = new Int32Array(plan.program.slotCount * this.words);
+    this.mem.fill(-1, ONES * this.words, (ONES + 1) * this.words);
+    this.levels = new Int32Array(2 * plan.highSlots.length);
   }
 
   /**
@@ -62,59 +65,67 @@ export class WordSweep {
     const tables = new ComponentTables(c);
     if (wordPlanRefusal(c, tables, vectors) !== null) return null;
     const plan = wordPlan(c, tables, reported);
-    return plan === null ? null : new WordSweep(simulator, plan, reported, expect);
+    if (plan === null) return null;
+    expect?.mismatch(plan.program, plan.netSlots, plan.fallback);
+    return new WordSweep(simulator, plan, vectors);
   }
 
   /** Every vector in truth-table order; returns how many were done. */
   run(rows: WordRows, onProgress?: PassProgress): number {
     const inputs = this.simulator.compiled.netlist.inputs;
     const total = 2 ** inputs.length;
-    for (let first = 0; first < total; first += 32) {
-      const lanes = Math.min(32, total - first);
-      const fast = ~this.evaluate(first) & ((2 ** lanes - 1) | 0);
-      rows.addWord(this.levelWords(), fast);
-      for (let lane = 0; lane < lanes; lane++) {
-        const k = first + lane;
-        if ((fast >>> lane) & 1) rows.addPlain(k);
-        else rows.add(this.simulator.solveFresh(sweepVector(inputs, k), { recycle: true }), k);
-      }
-      if (onProgress?.(first + lanes, total) === false) return first + lanes;
+    const { words, mem, plan } = this;
+    const block = 32 * words;
+    for (let first = 0; first < total; first += block) {
+      this.loadInputs(first);
+      mem.fill(0, plan.fallback * words, (plan.fallback + 1) * words);
+      runWordProgram(this.ops, mem, words);
+      for (let w = 0; w < words; w++) this.writeWord(rows, w, first + 32 * w);
+      if (onProgress?.(first + block, total) === false) return first + block;
     }
     return total;
   }
 
-  /** Loads the word of vectors from `first` and evaluates every group; returns the lanes to solve. */
-  private evaluate(first: number): number {
-    const { high, floating, controls, evaluator } = this;
-    const c = this.simulator.compiled;
-    const n = c.inputNets.length;
+  /** The inputs' words for the block from vector `first`: the low five change within a word. */
+  private loadInputs(first: number): void {
+    const { words, mem } = this;
+    const { inputSlots } = this.plan;
+    const n = inputSlots.length;
     for (let i = 0; i < n; i++) {
       const p = n - 1 - i;
-      high[c.inputNets[i] as number] = p < 5 ? (PATTERNS[p] as number) : (first >> p) & 1 ? -1 : 0;
+      const at = inputSlots[i]! * words;
+      if (p < 5) mem.fill(PATTERNS[p]!, at, at + words);
+      else for (let w = 0; w < words; w++) mem[at + w] = ((first >>> 5) + w) & (1 << (p - 5)) ? -1 : 0;
     }
-    let fallback = 0;
-    for (const step of this.plan.steps) {
-      const k = step.controls.length;
-      for (let i = 0; i < k; i++) controls[i] = high[step.controls[i] as number] as number;
-      evaluator.begin(controls, k);
-      fallback |= evaluator.value(step.fallback);
-      for (let i = 0; i < step.nets.length; i++) {
-        const net = step.nets[i] as number;
-        high[net] = evaluator.value(step.high[i]!);
-        const f = step.floating[i];
-        floating[net] = f === null || f === undefined ? 0 : evaluator.value(f);
-      }
-    }
-    return this.expect === null ? fallback : fallback | this.expect.mismatch(high);
   }
 
-  /** Level codes as two bits: 0 → 00, 1 → 01, Z → 11 (X never reaches a fast lane). */
-  private levelWords(): Int32Array {
-    const { levels, reported, high, floating } = this;
-    for (let j = 0; j < reported.length; j++) {
-      const n = reported[j] as number;
-      const z = floating[n] as number;
-      levels[2 * j] = (high[n] as number) | z;
+  /** Word w of the block: its levels, then its rows in order, plain runs at once. */
+  private writeWord(rows: WordRows, w: number, first: number): void {
+    const fast = ~this.mem[this.plan.fallback * this.words + w]!;
+    rows.addWord(this.levelWords(w), fast);
+    if (fast === -1) return rows.addPlains(32);
+    const inputs = this.simulator.compiled.netlist.inputs;
+    let plain = 0;
+    for (let lane = 0; lane < 32; lane++) {
+      if ((fast >>> lane) & 1) {
+        plain++;
+        continue;
+      }
+      if (plain > 0) rows.addPlains(plain);
+      plain = 0;
+      const k = first + lane;
+      rows.add(this.simulator.solveFresh(sweepVector(inputs, k), { recycle: true }), k);
+    }
+    if (plain > 0) rows.addPlains(plain);
+  }
+
+  /** Level codes of word w as two bits: 0 → 00, 1 → 01, Z → 11 (X never reaches a fast lane). */
+  private levelWords(w: number): Int32Array {
+    const { levels, mem, words } = this;
+    const { highSlots, floatingSlots } = this.plan;
+    for (let j = 0; j < highSlots.length; j++) {
+      const z = mem[floatingSlots[j]! * words + w]!;
+      levels[2 * j] = mem[highSlots[j]! * words + w]! | z;
       levels[2 * j + 1] = z;
     }
     return levels;
