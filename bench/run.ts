@@ -158,7 +158,7 @@ async function wordSweepRows(): Promise<CpuRow[]> {
   progress('bit-parallel sweep and check of the 16-input bank');
   const bank = sweepCircuit();
   const rows = [
-    measureWordSweep('words/adder-bank-16-inputs', bank),
+    ...measureWordSweep('words/adder-bank-16-inputs', bank),
     measureCheckCpu('check-sweep/adder-bank-16-inputs (words)', bank, true),
     measureCheckCpu('check-sweep/adder-bank-16-inputs (scalar)', bank, false),
   ];

@@ -7,6 +7,11 @@ import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { ONES, runWordProgram, WordProgram, ZERO } from '../../src/core/analysis/wordProgram.ts';
 
+/** The word a reference names: a slot's, or its complement's (negative references). */
+function wordAt(mem: Int32Array, ref: number, words: number, w: number): number {
+  return ref < 0 ? ~mem[~ref * words + w]! : mem[ref * words + w]!;
+}
+
 /** Control i's word over 4 words of 32 vectors: bit j of word w is bit i of vector 32w + j. */
 function controlWords(i: number, words: number): number[] {
   return Array.from({ length: words }, (_, w) => {
@@ -29,7 +34,7 @@ function evaluate(leaves: readonly number[], k: number): number[] {
   mem.fill(-1, ONES * words, (ONES + 1) * words);
   controls.forEach((slot, i) => mem.set(controlWords(i, words), slot * words));
   runWordProgram(program.compiled(), mem, words);
-  return Array.from({ length: 32 * words }, (_, v) => (mem[out * words + (v >> 5)]! >>> (v & 31)) & 1);
+  return Array.from({ length: 32 * words }, (_, v) => (wordAt(mem, out, words, v >> 5) >>> (v & 31)) & 1);
 }
 
 /** Leaf of each vector: its low k bits select the entry. */
@@ -49,7 +54,7 @@ describe('word program', () => {
     expect(evaluate(sum, 3)).toEqual(expected(sum, 3));
   });
 
-  it('folds constants and single controls into no operation at all', () => {
+  it('folds constants, single controls and their complements into no operation at all', () => {
     const program = new WordProgram();
     const [a, b] = [program.slot(), program.slot()];
     const controls = Int32Array.of(a, b);
@@ -57,6 +62,7 @@ describe('word program', () => {
     expect(program.fromLeaves(Int32Array.of(0, 0, 0, 0), controls)).toBe(ZERO);
     expect(program.fromLeaves(Int32Array.of(-1, -1, -1, -1), controls)).toBe(ONES);
     expect(program.fromLeaves(Int32Array.of(0, 0, -1, -1), controls)).toBe(b);
+    expect(program.fromLeaves(Int32Array.of(-1, -1, 0, 0), controls)).toBe(~b);
     expect(program.compiled()).toHaveLength(0);
   });
 
@@ -84,13 +90,17 @@ describe('word program', () => {
     expect(program.and(a, ZERO)).toBe(ZERO);
     expect(program.or(a, ONES)).toBe(ONES);
     expect(program.xor(a, ZERO)).toBe(a);
-    const x = program.xor(a, ONES);
+    expect(program.xor(a, ONES)).toBe(~a);
+    const b = program.slot();
+    const nor = program.and(program.not(a), program.not(b));
+    const x = program.xor(nor, b);
     program.keep(x);
     program.endGroup();
     const mem = new Int32Array(program.slotCount);
     mem[ONES] = -1;
     mem[a] = 0x0f0f0f0f;
+    mem[b] = 0x00ff00ff;
     runWordProgram(program.compiled(), mem, 1);
-    expect(mem[x]).toBe(~0x0f0f0f0f);
+    expect(wordAt(mem, x, 1, 0)).toBe(~(0x0f0f0f0f | 0x00ff00ff) ^ 0x00ff00ff);
   });
 });

@@ -43,7 +43,7 @@ function split(
   if (sweep === null) return null;
   const counts = { fast: 0, scalar: 0 };
   const rows: WordRows = {
-    addWord: () => {},
+    addWords: () => {},
     addPlains: (n) => (counts.fast += n),
     add: () => counts.scalar++,
   };

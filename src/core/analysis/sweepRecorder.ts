@@ -89,19 +89,21 @@ export class SweepRecorder {
   }
 
   /**
-   * Levels of the 32 rows from the next one (which starts a word) where `lanes` has a bit: two words
-   * per reported net, code bits 0 and 1, as the bit-parallel sweep writes them (vectorsWordPass.ts).
+   * Levels of the rows from the next one (which starts a word), `count` words of 32: two runs of
+   * words per reported net, code bits 0 and 1 (`levels[(2j + bit) * count + w]`), as the bit-parallel
+   * sweep writes them (vectorsWordPass.ts); only the lanes set in `lanes[w]` are written.
    */
-  orLevels(levels: Int32Array, lanes: number): void {
-    const { words } = this;
-    const w = this.count >> 5;
-    for (let j = 0; 2 * j < levels.length; j++) {
-      this.levels[2 * j * words + w]! |= levels[2 * j]! & lanes;
-      this.levels[(2 * j + 1) * words + w]! |= levels[2 * j + 1]! & lanes;
+  orLevelBlock(levels: Int32Array, count: number, lanes: Int32Array): void {
+    const w0 = this.count >> 5;
+    const runs = levels.length / count;
+    for (let r = 0; r < runs; r++) {
+      const from = r * count;
+      const to = r * this.words + w0;
+      for (let w = 0; w < count; w++) this.levels[to + w]! |= levels[from + w]! & lanes[w]!;
     }
   }
 
-  /** The next rows, plain (no findings, no current, voltages as their levels imply); levels by orLevels. */
+  /** The next rows, plain (no findings, no current, voltages as their levels imply); levels by orLevelBlock. */
   addPlains(count: number): void {
     this.count += count;
   }

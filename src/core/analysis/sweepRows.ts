@@ -2,7 +2,7 @@
  * The rows of one sweep as they are solved, in columns (sweepColumns.ts): one block kept for the
  * report, or blocks of SWEEP_BLOCK vectors handed on as they fill, so a streamed sweep of millions of
  * vectors never holds its rows. Both passes write here: the scalar one row by row (`add`), the
- * bit-parallel one a word of levels at a time (`addWord`, `addPlains`).
+ * bit-parallel one a word of levels at a time (`addWords`, `addPlains`).
  */
 import type { CompiledNetlist } from '../compile/compile.ts';
 import type { Netlist } from '../model/netlist.ts';
@@ -11,11 +11,10 @@ import type { SolveObserver } from './pass.ts';
 import type { Finding } from './report.ts';
 import type { SweepColumns } from './sweepColumns.ts';
 import { reportedNets, SweepRecorder, type RecorderShape } from './sweepRecorder.ts';
-import { sweepSize } from './vectors.ts';
+import { SWEEP_BLOCK, sweepSize } from './vectors.ts';
 import type { WordRows } from './vectorsWordPass.ts';
 
-/** Rows per block handed to `onBlock`: a multiple of 32, the vectors one bit-plane word holds. */
-export const SWEEP_BLOCK = 4096;
+export { SWEEP_BLOCK };
 
 /** What the rows read of the check: the cell, what is reported, and each solved vector's findings. */
 export interface RowSource {
@@ -55,8 +54,8 @@ export class SweepRows implements SolveObserver, WordRows {
     this.next();
   }
 
-  addWord(levels: Int32Array, fast: number): void {
-    this.recorder.orLevels(levels, fast);
+  addWords(levels: Int32Array, count: number, fast: Int32Array): void {
+    this.recorder.orLevelBlock(levels, count, fast);
   }
 
   addPlains(count: number): void {

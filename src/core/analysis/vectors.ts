@@ -21,6 +21,12 @@ export class SweepLimitError extends Error {
   }
 }
 
+/**
+ * Rows per block of a streamed sweep, and vectors per run of the bit-parallel program: a multiple of
+ * 32, the vectors one bit-plane word holds, so a block always holds whole words.
+ */
+export const SWEEP_BLOCK = 4096;
+
 /** How many vectors a sweep has: 2^n, or 3^n when each input may also be left undriven. */
 export function sweepSize(inputs: readonly string[], undriven = false): number {
   return (undriven ? 3 : 2) ** inputs.length;

@@ -9,15 +9,18 @@
 import type { Simulator, SolveResult } from '../solver/simulator.ts';
 import { ComponentTables } from '../tables/componentTables.ts';
 import type { PassProgress } from './pass.ts';
-import { sweepVector } from './vectors.ts';
+import { SWEEP_BLOCK, sweepVector } from './vectors.ts';
 import { wordExpectations } from './vectorsWordExpect.ts';
 import { wordPlan, wordPlanRefusal, type WordPlan } from './vectorsWordPlan.ts';
 import { ONES, runWordProgram } from './wordProgram.ts';
 
 /** Where the pass writes its rows, in order. */
 export interface WordRows {
-  /** Called first for each word: two level words per reported net (code bits 0 and 1), fast lanes. */
-  addWord(levels: Int32Array, fast: number): void;
+  /**
+   * Called first for each block of `count` words: per reported net two runs of level words (code
+   * bits 0 and 1, `levels[(2j + bit) * count + w]`), and per word its fast lanes.
+   */
+  addWords(levels: Int32Array, count: number, fast: Int32Array): void;
   /** The next `count` rows, which the tables decided: no findings, no current, levels as given to addWord. */
   addPlains(count: number): void;
   /** A row the scalar engine solved. */
@@ -27,14 +30,20 @@ export interface WordRows {
 /** Bit j of PATTERNS[p] is bit p of j: an input that changes within a word of 32 vectors. */
 const PATTERNS = [0xaaaaaaaa, 0xcccccccc, 0xf0f0f0f0, 0xff00ff00, 0xffff0000].map((x) => x | 0);
 
-/** Words of 32 vectors per run of the program: 4,096 vectors, one block of a streamed sweep. */
-const BLOCK_WORDS = 128;
+/** Words of 32 vectors per run of the program: one block of a streamed sweep. */
+const BLOCK_WORDS = SWEEP_BLOCK / 32;
 
 export class WordSweep {
   private readonly ops: Int32Array;
   private readonly words: number;
   private readonly mem: Int32Array;
   private readonly levels: Int32Array;
+  private readonly fast: Int32Array;
+  /** Per reported net: the slots of its words and -1 where a word is the slot's complement. */
+  private readonly highSlot: Int32Array;
+  private readonly highFlip: Int32Array;
+  private readonly floatingSlot: Int32Array;
+  private readonly floatingFlip: Int32Array;
 
   private constructor(
     private readonly simulator: Simulator,
@@ -45,7 +54,12 @@ export class WordSweep {
     this.words = Math.min(BLOCK_WORDS, total / 32);
     this.mem = new Int32Array(plan.program.slotCount * this.words);
     this.mem.fill(-1, ONES * this.words, (ONES + 1) * this.words);
-    this.levels = new Int32Array(2 * plan.highSlots.length);
+    this.levels = new Int32Array(2 * plan.high.length * this.words);
+    this.fast = new Int32Array(this.words);
+    this.highSlot = plan.high.map(slotOf);
+    this.highFlip = plan.high.map(flipOf);
+    this.floatingSlot = plan.floating.map(slotOf);
+    this.floatingFlip = plan.floating.map(flipOf);
   }
 
   /**
@@ -62,7 +76,7 @@ export class WordSweep {
     if (vectors < 1024) return null;
     const expect = Object.keys(expectations).length === 0 ? null : wordExpectations(c, expectations);
     if (expect === null && Object.keys(expectations).length > 0) return null;
-    const tables = new ComponentTables(c);
+    const tables = new ComponentTables(c, { schedule: simulator.drivenSchedule() });
     if (wordPlanRefusal(c, tables, vectors) !== null) return null;
     const plan = wordPlan(c, tables, reported);
     if (plan === null) return null;
@@ -80,7 +94,8 @@ export class WordSweep {
       this.loadInputs(first);
       mem.fill(0, plan.fallback * words, (plan.fallback + 1) * words);
       runWordProgram(this.ops, mem, words);
-      for (let w = 0; w < words; w++) this.writeWord(rows, w, first + 32 * w);
+      this.writeLevels(rows);
+      for (let w = 0; w < words; w++) this.writeRows(rows, this.fast[w]!, first + 32 * w);
       if (onProgress?.(first + block, total) === false) return first + block;
     }
     return total;
@@ -99,10 +114,30 @@ export class WordSweep {
     }
   }
 
-  /** Word w of the block: its levels, then its rows in order, plain runs at once. */
-  private writeWord(rows: WordRows, w: number, first: number): void {
-    const fast = ~this.mem[this.plan.fallback * this.words + w]!;
-    rows.addWord(this.levelWords(w), fast);
+  /** The block's fast lanes and level words, handed to the rows. */
+  private writeLevels(rows: WordRows): void {
+    const { levels, mem, words, fast, highSlot, highFlip, floatingSlot, floatingFlip } = this;
+    const fallback = this.plan.fallback * words;
+    for (let w = 0; w < words; w++) fast[w] = ~mem[fallback + w]!;
+    for (let j = 0; j < highSlot.length; j++) {
+      const [high, hf, z, zf] = [
+        highSlot[j]! * words,
+        highFlip[j]!,
+        floatingSlot[j]! * words,
+        floatingFlip[j]!,
+      ];
+      const [bit0, bit1] = [2 * j * words, (2 * j + 1) * words];
+      for (let w = 0; w < words; w++) {
+        const floats = mem[z + w]! ^ zf;
+        levels[bit0 + w] = (mem[high + w]! ^ hf) | floats; // 0 → 00, 1 → 01, Z → 11 (X never fast)
+        levels[bit1 + w] = floats;
+      }
+    }
+    rows.addWords(levels, words, fast);
+  }
+
+  /** The rows of one word in order: plain runs at once, the other lanes solved by the scalar engine. */
+  private writeRows(rows: WordRows, fast: number, first: number): void {
     if (fast === -1) return rows.addPlains(32);
     const inputs = this.simulator.compiled.netlist.inputs;
     let plain = 0;
@@ -118,16 +153,7 @@ export class WordSweep {
     }
     if (plain > 0) rows.addPlains(plain);
   }
-
-  /** Level codes of word w as two bits: 0 → 00, 1 → 01, Z → 11 (X never reaches a fast lane). */
-  private levelWords(w: number): Int32Array {
-    const { levels, mem, words } = this;
-    const { highSlots, floatingSlots } = this.plan;
-    for (let j = 0; j < highSlots.length; j++) {
-      const z = mem[floatingSlots[j]! * words + w]!;
-      levels[2 * j] = mem[highSlots[j]! * words + w]! | z;
-      levels[2 * j + 1] = z;
-    }
-    return levels;
-  }
 }
+
+const slotOf = (ref: number): number => (ref < 0 ? ~ref : ref);
+const flipOf = (ref: number): number => (ref < 0 ? -1 : 0);

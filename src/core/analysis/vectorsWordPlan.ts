@@ -17,12 +17,12 @@ export interface WordPlan {
   readonly program: WordProgram;
   /** The slot of each input, in `inputNets` order. */
   readonly inputSlots: Int32Array;
-  /** Per reported net: the slots of its "at VDD" and "floating" words. */
-  readonly highSlots: Int32Array;
-  readonly floatingSlots: Int32Array;
+  /** Per reported net: references (wordProgram.ts) to its "at VDD" and "floating" words. */
+  readonly high: Int32Array;
+  readonly floating: Int32Array;
   /** The slot whose bits are the vectors the scalar engine must solve. */
   readonly fallback: number;
-  /** The slot of each net's "at VDD" word, -1 where no word is kept (for expected functions). */
+  /** The reference to each needed net's "at VDD" word (for expected functions). */
   readonly netSlots: Int32Array;
 }
 
@@ -50,47 +50,89 @@ export function wordPlan(c: CompiledNetlist, tables: ComponentTables, wanted: In
   const needed = reported.slice();
   for (const shape of tables.shapes) for (const n of shape.controls) needed[n] = 1;
   const program = new WordProgram();
-  const netSlots = new Int32Array(c.netCount).fill(-1);
-  const floating = new Int32Array(c.netCount).fill(ZERO);
+  const known = new Uint8Array(c.netCount);
+  const netSlots = new Int32Array(c.netCount);
+  const floating = new Int32Array(c.netCount);
   for (let n = 0; n < c.netCount; n++) {
     const v = c.railVolts[n]!;
-    if (!Number.isNaN(v)) netSlots[n] = v === c.tech.vdd && v > 0 ? ONES : ZERO;
+    if (Number.isNaN(v)) continue;
+    netSlots[n] = v === c.tech.vdd && v > 0 ? ONES : ZERO;
+    known[n] = 1;
   }
-  const inputSlots = Int32Array.from(c.inputNets, (n) => (netSlots[n] = program.slot()));
+  const inputSlots = Int32Array.from(c.inputNets, (n) => ((known[n] = 1), (netSlots[n] = program.slot())));
   const fallback = program.slot();
+  const leaves = new LeafCache(c, reported);
   for (const shape of tables.shapes) {
+    if (shape.controls.some((n) => known[n] !== 1)) return null; // a gate no group or input drives
     const controls = Int32Array.from(shape.controls, (n) => netSlots[n]!);
-    if (controls.some((s) => s < 0)) return null; // a gate no group or input drives
     const table = tables.binary(shape.index);
     if (table.kind === 'none') return null;
     program.beginGroup();
-    program.orInto(fallback, program.fromLeaves(fallbackLeaves(c, table, reported), controls));
+    program.orInto(fallback, program.fromLeaves(leaves.fallback(table), controls));
     for (const [i, n] of shape.nets.entries()) {
       if (needed[n] !== 1) continue;
-      const high = program.fromLeaves(levelLeaves(table, i, LEVEL_1), controls);
-      netSlots[n] = kept(program, high);
-      floating[n] = kept(program, program.fromLeaves(levelLeaves(table, i, LEVEL_Z), controls));
+      netSlots[n] = kept(program, program.fromLeaves(leaves.level(table, i, LEVEL_1), controls));
+      floating[n] = kept(program, program.fromLeaves(leaves.level(table, i, LEVEL_Z), controls));
+      known[n] = 1;
     }
     program.endGroup();
   }
-  if (wanted.some((n) => netSlots[n]! < 0)) return null;
-  const highSlots = Int32Array.from(wanted, (n) => netSlots[n]!);
-  const floatingSlots = Int32Array.from(wanted, (n) => floating[n]!);
-  return { program, inputSlots, highSlots, floatingSlots, fallback, netSlots };
+  if (wanted.some((n) => known[n] !== 1)) return null;
+  const high = Int32Array.from(wanted, (n) => netSlots[n]!);
+  const float = Int32Array.from(wanted, (n) => floating[n]!);
+  return { program, inputSlots, high, floating: float, fallback, netSlots };
 }
 
-/** A function's slot kept past its group: a temporary becomes the net's own, anything else is shared. */
-function kept(program: WordProgram, slot: number): number {
-  program.keep(slot);
-  return slot;
+/** A function's reference kept past its group: a temporary becomes the net's own. */
+function kept(program: WordProgram, ref: number): number {
+  program.keep(ref);
+  return ref;
+}
+
+/**
+ * The leaves of each table's functions, worked out once per table: groups identical up to renaming
+ * share one table (core/tables), and so their leaves. A group's fallback also depends on which of
+ * its nets are reported, so those leaves are kept per pattern of reported positions.
+ */
+class LeafCache {
+  private readonly levels = new WeakMap<GroupTable['states'], Map<number, Int32Array>>();
+  private readonly fallbacks = new WeakMap<GroupTable['states'], Map<string, Int32Array>>();
+
+  constructor(
+    private readonly c: CompiledNetlist,
+    private readonly reported: Uint8Array,
+  ) {}
+
+  level(table: GroupTable, i: number, level: number): Int32Array {
+    return remembered(this.levels, table, 4 * i + level, () => levelLeaves(table, i, level));
+  }
+
+  fallback(table: GroupTable): Int32Array {
+    const pattern = Array.from(table.shape.nets, (n) => this.reported[n]).join('');
+    return remembered(this.fallbacks, table, pattern, () => fallbackLeaves(this.c, table, this.reported));
+  }
+}
+
+function remembered<K>(
+  cache: WeakMap<GroupTable['states'], Map<K, Int32Array>>,
+  table: GroupTable,
+  key: K,
+  make: () => Int32Array,
+): Int32Array {
+  let byKey = cache.get(table.states);
+  if (byKey === undefined) cache.set(table.states, (byKey = new Map()));
+  let leaves = byKey.get(key);
+  if (leaves === undefined) byKey.set(key, (leaves = make()));
+  return leaves;
 }
 
 /** Per entry, -1 where net position i of the group is at `level` (the table's level bits). */
 function levelLeaves(table: GroupTable, i: number, level: number): Int32Array {
   const { entries, states, shape } = table;
   const width = shape.nets.length;
+  const mask = STATE_LEVEL;
   const leaves = new Int32Array(entries);
-  for (let e = 0; e < entries; e++) leaves[e] = (states[e * width + i]! & STATE_LEVEL) === level ? -1 : 0;
+  for (let e = 0; e < entries; e++) leaves[e] = (states[e * width + i]! & mask) === level ? -1 : 0;
   return leaves;
 }
 
@@ -111,18 +153,26 @@ function quietNets(c: CompiledNetlist, table: GroupTable, reported: Uint8Array):
   const { observed } = observationOf(c);
   const { shape, states, flags, volts } = table;
   const width = shape.nets.length;
+  // Read once: the loop below runs for every entry of every group.
+  const [degraded, exactBit, levelMask, levelZ, vdd] = [
+    FLAG_DEGRADED,
+    STATE_EXACT,
+    STATE_LEVEL,
+    LEVEL_Z,
+    c.tech.vdd,
+  ];
   return (e) => {
     for (let i = 0; i < width; i++) {
       const n = shape.nets[i]!;
       const at = e * width + i;
       const flag = flags[at]!;
-      const exact = (states[at]! & STATE_EXACT) !== 0;
+      const exact = (states[at]! & exactBit) !== 0;
       const seen = observed[n] === 1;
-      if ((flag & ~FLAG_DEGRADED) !== 0 || (seen && (flag !== 0 || !exact))) return false;
+      if ((flag & ~degraded) !== 0 || (seen && (flag !== 0 || !exact))) return false;
       const v = volts[at]!;
-      const floatingUnknown = (states[at]! & STATE_LEVEL) === LEVEL_Z && Number.isNaN(v);
+      const floatingUnknown = (states[at]! & levelMask) === levelZ && Number.isNaN(v);
       // A report writes 0 V for a 0 level: -0 would not read back as plain (Object.is).
-      const plain = exact && (Object.is(v, 0) || v === c.tech.vdd);
+      const plain = exact && (Object.is(v, 0) || v === vdd);
       if (reported[n] === 1 && !plain && !floatingUnknown) return false;
     }
     return true;

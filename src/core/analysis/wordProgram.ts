@@ -10,7 +10,10 @@
  * shared), and each node becomes one operation, simplified where a side is constant.
  */
 
-/** Slot 0 holds zeros, slot 1 ones. */
+/**
+ * A function's word is named by a reference: a slot s (s >= 0), or its complement ~s (negative), so
+ * an inverter costs no operation. Slot 0 holds zeros, slot 1 ones.
+ */
 export const ZERO = 0;
 export const ONES = 1;
 
@@ -29,6 +32,11 @@ const OP_OR_INTO = 7;
 
 /** Numbers per operation: code, destination, three operands. */
 const STRIDE = 5;
+
+/** The reference to the complement of `ref`; constants stay slots 0 and 1. */
+export function complement(ref: number): number {
+  return ref === ZERO ? ONES : ref === ONES ? ZERO : ~ref;
+}
 
 export class WordProgram {
   private readonly ops: number[] = [];
@@ -59,17 +67,15 @@ export class WordProgram {
     this.temps.length = 0;
   }
 
-  /** Keeps a temporary of the current group (a net's word lives in it from now on). */
-  keep(slot: number): boolean {
-    const i = this.temps.indexOf(slot);
-    if (i < 0) return false;
-    this.temps.splice(i, 1);
-    return true;
+  /** Keeps the slot of a reference past its group (a net's word lives in it from now on). */
+  keep(ref: number): void {
+    const i = this.temps.indexOf(ref < 0 ? ~ref : ref);
+    if (i >= 0) this.temps.splice(i, 1);
   }
 
   /**
    * The function whose value at entry e is `leaves[e]` (0 or -1), entry bit i being control i, whose
-   * word is in slot `controls[i]`: the slot that holds it (a constant, a control, or a temporary).
+   * word `controls[i]` refers to: a reference to a constant, a control, or a temporary.
    */
   fromLeaves(leaves: Int32Array, controls: Int32Array): number {
     return this.build(leaves, 0, controls.length, controls);
@@ -83,54 +89,66 @@ export class WordProgram {
     return this.mux(controls[vars - 1]!, low, high);
   }
 
-  /** c ? high : low, with constant sides folded and identical nodes of the group shared. */
+  /** c ? high : low, with complements and constant sides folded and identical nodes shared. */
   mux(c: number, low: number, high: number): number {
+    if (c < 0) return this.mux(~c, high, low);
+    if (c === ZERO || c === ONES) return c === ONES ? high : low;
     if (low === high) return low;
-    if (low === ZERO && high === ONES) return c;
     const key = `${c},${low},${high}`;
-    let slot = this.nodes.get(key);
-    if (slot === undefined) {
-      slot = this.emitMux(c, low, high);
-      this.nodes.set(key, slot);
+    let ref = this.nodes.get(key);
+    if (ref === undefined) {
+      ref = this.muxOf(c, low, high);
+      this.nodes.set(key, ref);
     }
-    return slot;
+    return ref;
   }
 
-  private emitMux(c: number, low: number, high: number): number {
-    if (low === ONES && high === ZERO) return this.emit(OP_NOT, c, ZERO, ZERO);
-    if (low === ZERO) return this.emit(OP_AND, c, high, ZERO);
-    if (high === ZERO) return this.emit(OP_AND_NOT, low, c, ZERO);
-    if (low === ONES) return this.emit(OP_OR_NOT, high, c, ZERO);
-    if (high === ONES) return this.emit(OP_OR, c, low, ZERO);
-    return this.emit(OP_MUX, low, high, c);
+  private muxOf(c: number, low: number, high: number): number {
+    if (low === ZERO && high === ONES) return c;
+    if (low === ONES && high === ZERO) return ~c;
+    if (low === complement(high)) return this.xor(c, low);
+    if (low === ZERO) return this.and(c, high);
+    if (high === ZERO) return this.and(complement(c), low);
+    if (low === ONES) return this.or(complement(c), high);
+    if (high === ONES) return this.or(c, low);
+    if (low < 0 && high < 0) return ~this.emit(OP_MUX, ~low, ~high, c);
+    return this.emit(OP_MUX, this.positive(low), this.positive(high), c);
   }
 
   not(a: number): number {
-    return a === ZERO ? ONES : a === ONES ? ZERO : this.emit(OP_NOT, a, ZERO, ZERO);
+    return complement(a);
   }
 
   and(a: number, b: number): number {
     if (a === ZERO || b === ZERO) return ZERO;
     if (a === ONES) return b;
-    return b === ONES ? a : this.emit(OP_AND, a, b, ZERO);
+    if (b === ONES) return a;
+    if (a >= 0 && b >= 0) return this.emit(OP_AND, a, b, ZERO);
+    if (a < 0 && b < 0) return ~this.emit(OP_OR, ~a, ~b, ZERO);
+    return a >= 0 ? this.emit(OP_AND_NOT, a, ~b, ZERO) : this.emit(OP_AND_NOT, b, ~a, ZERO);
   }
 
   or(a: number, b: number): number {
-    if (a === ONES || b === ONES) return ONES;
-    if (a === ZERO) return b;
-    return b === ZERO ? a : this.emit(OP_OR, a, b, ZERO);
+    return complement(this.and(complement(a), complement(b)));
   }
 
   xor(a: number, b: number): number {
     if (a === ZERO) return b;
     if (b === ZERO) return a;
-    if (a === ONES) return this.not(b);
-    return b === ONES ? this.not(a) : this.emit(OP_XOR, a, b, ZERO);
+    if (a === ONES) return complement(b);
+    if (b === ONES) return complement(a);
+    const word = this.emit(OP_XOR, a < 0 ? ~a : a, b < 0 ? ~b : b, ZERO);
+    return a < 0 !== b < 0 ? ~word : word;
   }
 
   /** Adds `a` into the kept slot `into` (an accumulator); nothing for a constant zero. */
   orInto(into: number, a: number): void {
-    if (a !== ZERO) this.ops.push(OP_OR_INTO, into, a, ZERO, ZERO);
+    if (a !== ZERO) this.ops.push(OP_OR_INTO, into, this.positive(a), ZERO, ZERO);
+  }
+
+  /** The slot holding the reference's word: a complement is computed into a temporary. */
+  private positive(ref: number): number {
+    return ref >= 0 ? ref : this.emit(OP_NOT, ~ref, ZERO, ZERO);
   }
 
   private emit(code: number, a: number, b: number, c: number): number {

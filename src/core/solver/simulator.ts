@@ -91,12 +91,24 @@ export class Simulator {
     return this.run(inputs, previous, false, false);
   }
 
+  /**
+   * The schedule of vectors that drive every input, as the sweep's solves use it: the component
+   * tables of a sweep evaluate their groups with it (core/tables), so nothing is built twice.
+   */
+  drivenSchedule(): Schedule {
+    return this.scheduleFor([]);
+  }
+
   private schedule(inputs: InputVector): Schedule {
     const names = this.compiled.netlist.inputs;
     // Nearly every vector drives all inputs: find that out without building the key.
     let anyUndriven = false;
     for (const name of names) if ((inputs[name] ?? 'Z') === 'Z') anyUndriven = true;
-    const undriven = anyUndriven ? names.filter((name) => (inputs[name] ?? 'Z') === 'Z') : [];
+    return this.scheduleFor(anyUndriven ? names.filter((name) => (inputs[name] ?? 'Z') === 'Z') : []);
+  }
+
+  /** The schedule with these inputs undriven, built once. */
+  private scheduleFor(undriven: readonly string[]): Schedule {
     const key = undriven.join('\u0000');
     let s = this.schedules.get(key);
     if (!s) {

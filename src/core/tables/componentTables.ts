@@ -2,7 +2,7 @@ import type { CompiledNetlist } from '../compile/compile.ts';
 import { Schedule } from '../solver/schedule.ts';
 import { TableBench } from './build.ts';
 import { groupShapes, groupsOfNets, type GroupShape } from './shape.ts';
-import { GroupSignatures } from './signature.ts';
+import { GroupSignatures, SignatureMap } from './signature.ts';
 import {
   MAX_TABLE_CONTROLS,
   MAX_TABLE_WORK,
@@ -18,6 +18,8 @@ export interface TableOptions {
   readonly maxControls?: number;
   /** Bound on a ternary table's controls; default MAX_TERNARY_CONTROLS. */
   readonly maxTernaryControls?: number;
+  /** The schedule to evaluate groups with, when the caller has one for these undriven inputs. */
+  readonly schedule?: Schedule;
 }
 
 /**
@@ -37,8 +39,8 @@ export class ComponentTables {
   private readonly ternaryTables = new Map<number, GroupTable | NoTable>();
   private readonly signatures: GroupSignatures;
   /** Per signature, the first group built with it, for each kind of table: identical groups share it. */
-  private readonly builtBinary = new Map<string, GroupTable | NoTable>();
-  private readonly builtTernary = new Map<string, GroupTable | NoTable>();
+  private readonly builtBinary = new SignatureMap<GroupTable | NoTable>();
+  private readonly builtTernary = new SignatureMap<GroupTable | NoTable>();
   /** Tables a group received from an identical group instead of evaluating its own. */
   shared = 0;
   private readonly maxControls: number;
@@ -48,10 +50,10 @@ export class ComponentTables {
     readonly compiled: CompiledNetlist,
     options: TableOptions = {},
   ) {
-    this.schedule = Schedule.build(compiled, options.undriven ?? new Set());
+    this.schedule = options.schedule ?? Schedule.build(compiled, options.undriven ?? new Set());
     const { topology } = this.schedule;
-    this.shapes = groupShapes(compiled, topology, (s) => !this.schedule.isSimpleGroup(s));
     this.groupOfNet = groupsOfNets(topology);
+    this.shapes = groupShapes(compiled, topology, (s) => !this.schedule.isSimpleGroup(s), this.groupOfNet);
     this.bench = new TableBench(compiled, this.schedule);
     this.signatures = new GroupSignatures(compiled, topology);
     this.maxControls = options.maxControls ?? MAX_TABLE_CONTROLS;
@@ -70,7 +72,7 @@ export class ComponentTables {
 
   private lookup(
     cache: Map<number, GroupTable | NoTable>,
-    bySignature: Map<string, GroupTable | NoTable>,
+    bySignature: SignatureMap<GroupTable | NoTable>,
     s: number,
     ternary: boolean,
     bound: number,
