@@ -69,7 +69,8 @@ export function wordPlan(c: CompiledNetlist, tables: ComponentTables, wanted: In
     if (table.kind === 'none') return null;
     program.beginGroup();
     program.orInto(fallback, program.fromLeaves(leaves.fallback(table), controls));
-    for (const [i, n] of shape.nets.entries()) {
+    for (let i = 0; i < shape.nets.length; i++) {
+      const n = shape.nets[i]!;
       if (needed[n] !== 1) continue;
       netSlots[n] = kept(program, program.fromLeaves(leaves.level(table, i, LEVEL_1), controls));
       floating[n] = kept(program, program.fromLeaves(leaves.level(table, i, LEVEL_Z), controls));
@@ -108,7 +109,8 @@ class LeafCache {
   }
 
   fallback(table: GroupTable): Int32Array {
-    const pattern = Array.from(table.shape.nets, (n) => this.reported[n]).join('');
+    let pattern = '';
+    for (const n of table.shape.nets) pattern += this.reported[n] === 1 ? '1' : '0';
     return remembered(this.fallbacks, table, pattern, () => fallbackLeaves(this.c, table, this.reported));
   }
 }
