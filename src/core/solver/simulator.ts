@@ -20,6 +20,12 @@ import type { Topology } from './topology.ts';
 
 export { SETTLE_ROUNDS_BASE, SETTLE_ROUNDS_PER_COMPONENT } from './schedule.ts';
 
+/** What an incremental solve changed: the base it started from, and the nets that may differ. */
+interface Changes {
+  readonly base: SolveResult;
+  readonly nets: Int32Array;
+}
+
 export interface SolveResult {
   readonly compiled: CompiledNetlist;
   readonly topology: Topology;
@@ -171,7 +177,11 @@ export class Simulator {
       state.flags[n] = 0;
     }
     schedule.propagate(sourceVolts, state, dirty, fresh);
-    return this.finish(inputs, schedule, sourceVolts, state, reuse ? base : null);
+    // Only the nets of re-evaluated groups and the sources can have changed: levels and conduction
+    // are then updated there alone, from the base's.
+    const nets = dirty === 'all' ? null : schedule.touchedNets(dirty);
+    const changes = nets === null || base === null ? null : { base, nets };
+    return this.finish(inputs, schedule, sourceVolts, state, reuse ? base : null, changes);
   }
 
   /**
@@ -206,12 +216,21 @@ export class Simulator {
    * Conduction of every element from its gate's voltage (a floating gate reads its stored charge); a
    * self-gated element conducts when it is forward-biased.
    */
-  private conductionAll(topology: Topology, volts: Float64Array, into: Uint8Array): Uint8Array {
-    const { chKind, chGate, chA, chB, tech } = this.compiled;
-    for (let e = 0; e < into.length; e++) {
+  private conductionAll(
+    topology: Topology,
+    volts: Float64Array,
+    into: Uint8Array,
+    changes: Changes | null,
+  ): Uint8Array {
+    const { chKind, chGate, chA, chB, tech, netGates } = this.compiled;
+    const update = (e: number): void => {
       const gate = chGate[e]!;
       into[e] = conductionFor(chKind[e]!, gate >= 0 ? volts[gate]! : NaN, tech.vil, tech.vih);
-    }
+    };
+    if (changes === null) for (let e = 0; e < into.length; e++) update(e);
+    else
+      for (const n of changes.nets)
+        for (let p = netGates.start[n]!; p < netGates.start[n + 1]!; p++) update(netGates.items[p]!);
     for (const e of topology.selfGatedElements) {
       const [gateEnd, other] = topology.selfGate[e] === GATE_TIED_A ? [chA[e]!, chB[e]!] : [chB[e]!, chA[e]!];
       into[e] = clampConduction(chKind[e]!, volts[gateEnd]!, volts[other]!);
@@ -219,13 +238,36 @@ export class Simulator {
     return into;
   }
 
-  /** Derives levels, conduction and source currents; `recycled` lends its arrays for them. */
+  /** Each net's level from its voltage: every net, or only the changed ones over the base's levels. */
+  private levelsOf(
+    topology: Topology,
+    state: NetState,
+    into: Uint8Array,
+    changes: Changes | null,
+  ): Uint8Array {
+    const { volts, driven } = state;
+    const { vil, vih } = this.compiled.tech;
+    const update = (n: number): void => {
+      const v = volts[n]!;
+      into[n] =
+        driven[n] || topology.isSource[n] ? (v <= vil ? LEVEL_0 : v >= vih ? LEVEL_1 : LEVEL_X) : LEVEL_Z;
+    };
+    if (changes === null) for (let n = 0; n < into.length; n++) update(n);
+    else for (const n of changes.nets) update(n);
+    return into;
+  }
+
+  /**
+   * Derives levels, conduction and source currents; `recycled` lends its arrays for them, and with
+   * `changes` only the changed nets' levels and the conduction of what they gate are worked out.
+   */
   private finish(
     inputs: InputVector,
     schedule: Schedule,
     sourceVolts: Float64Array,
     state: NetState,
     recycled: SolveResult | null,
+    changes: Changes | null,
   ): SolveResult {
     const c = this.compiled;
     const { topology, frame } = schedule;
@@ -235,15 +277,16 @@ export class Simulator {
       const dv = sourceVolts[c.chA[e]!]! - sourceVolts[c.chB[e]!]!;
       chCurrent[e] = on && Number.isFinite(dv) ? dv / c.chOhms[e]! : 0;
     }
-    const { vil, vih } = c.tech;
-    const levels = recycled ? recycled.levels : new Uint8Array(c.netCount);
+    const from = (a: Uint8Array | undefined, size: number): Uint8Array =>
+      recycled ? a! : changes === null ? new Uint8Array(size) : a!.slice();
+    const levels = this.levelsOf(
+      topology,
+      state,
+      from(changes?.base.levels ?? recycled?.levels, c.netCount),
+      changes,
+    );
     let settled = true;
-    for (let n = 0; n < c.netCount; n++) {
-      const v = volts[n]!;
-      levels[n] =
-        driven[n] || topology.isSource[n] ? (v <= vil ? LEVEL_0 : v >= vih ? LEVEL_1 : LEVEL_X) : LEVEL_Z;
-      if (flags[n]! & FLAG_OSCILLATING) settled = false;
-    }
+    for (let n = 0; n < flags.length; n++) if (flags[n]! & FLAG_OSCILLATING) settled = false;
     // Only source nets ever hold a current, so a recycled array needs only those cleared.
     const sourceOut = recycled ? recycled.sourceOut : new Float64Array(c.netCount);
     if (recycled) for (const n of schedule.sourceNets) sourceOut[n] = 0;
@@ -270,7 +313,8 @@ export class Simulator {
       conduction: this.conductionAll(
         topology,
         volts,
-        recycled ? recycled.conduction : new Uint8Array(c.chCount),
+        from(changes?.base.conduction ?? recycled?.conduction, c.chCount),
+        changes,
       ),
       chCurrent,
       sourceOut,
