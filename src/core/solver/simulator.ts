@@ -2,29 +2,13 @@
 import type { CompiledNetlist } from '../compile/compile.ts';
 import type { InputVector } from '../model/design.ts';
 import { currentPaths, type PathIndices } from './currentPaths.ts';
-import { conductionFor, conductionOf } from './evaluate.ts';
-import {
-  FLAG_CHARGE_SHARED,
-  FLAG_MAYBE,
-  FLAG_OSCILLATING,
-  FLAG_STATES,
-  LEVEL_0,
-  LEVEL_1,
-  LEVEL_X,
-  LEVEL_Z,
-  ON,
-} from './levels.ts';
+import { conductionOf } from './evaluate.ts';
+import { FLAG_CHARGE_SHARED, FLAG_MAYBE, FLAG_OSCILLATING, FLAG_STATES, ON } from './levels.ts';
+import { conductionOfAll, levelsOf, type Changes } from './finishArrays.ts';
 import { sameVolts, Schedule, type NetState } from './schedule.ts';
-import { clampConduction, GATE_TIED_A } from './selfGated.ts';
 import type { Topology } from './topology.ts';
 
 export { SETTLE_ROUNDS_BASE, SETTLE_ROUNDS_PER_COMPONENT } from './schedule.ts';
-
-/** What an incremental solve changed: the base it started from, and the nets that may differ. */
-interface Changes {
-  readonly base: SolveResult;
-  readonly nets: Int32Array;
-}
 
 export interface SolveResult {
   readonly compiled: CompiledNetlist;
@@ -213,51 +197,6 @@ export class Simulator {
   }
 
   /**
-   * Conduction of every element from its gate's voltage (a floating gate reads its stored charge); a
-   * self-gated element conducts when it is forward-biased.
-   */
-  private conductionAll(
-    topology: Topology,
-    volts: Float64Array,
-    into: Uint8Array,
-    changes: Changes | null,
-  ): Uint8Array {
-    const { chKind, chGate, chA, chB, tech, netGates } = this.compiled;
-    const update = (e: number): void => {
-      const gate = chGate[e]!;
-      into[e] = conductionFor(chKind[e]!, gate >= 0 ? volts[gate]! : NaN, tech.vil, tech.vih);
-    };
-    if (changes === null) for (let e = 0; e < into.length; e++) update(e);
-    else
-      for (const n of changes.nets)
-        for (let p = netGates.start[n]!; p < netGates.start[n + 1]!; p++) update(netGates.items[p]!);
-    for (const e of topology.selfGatedElements) {
-      const [gateEnd, other] = topology.selfGate[e] === GATE_TIED_A ? [chA[e]!, chB[e]!] : [chB[e]!, chA[e]!];
-      into[e] = clampConduction(chKind[e]!, volts[gateEnd]!, volts[other]!);
-    }
-    return into;
-  }
-
-  /** Each net's level from its voltage: every net, or only the changed ones over the base's levels. */
-  private levelsOf(
-    topology: Topology,
-    state: NetState,
-    into: Uint8Array,
-    changes: Changes | null,
-  ): Uint8Array {
-    const { volts, driven } = state;
-    const { vil, vih } = this.compiled.tech;
-    const update = (n: number): void => {
-      const v = volts[n]!;
-      into[n] =
-        driven[n] || topology.isSource[n] ? (v <= vil ? LEVEL_0 : v >= vih ? LEVEL_1 : LEVEL_X) : LEVEL_Z;
-    };
-    if (changes === null) for (let n = 0; n < into.length; n++) update(n);
-    else for (const n of changes.nets) update(n);
-    return into;
-  }
-
-  /**
    * Derives levels, conduction and source currents; `recycled` lends its arrays for them, and with
    * `changes` only the changed nets' levels and the conduction of what they gate are worked out.
    */
@@ -279,7 +218,8 @@ export class Simulator {
     }
     const from = (a: Uint8Array | undefined, size: number): Uint8Array =>
       recycled ? a! : changes === null ? new Uint8Array(size) : a!.slice();
-    const levels = this.levelsOf(
+    const levels = levelsOf(
+      c,
       topology,
       state,
       from(changes?.base.levels ?? recycled?.levels, c.netCount),
@@ -310,7 +250,8 @@ export class Simulator {
       levels,
       flags,
       limiter: state.limiter,
-      conduction: this.conductionAll(
+      conduction: conductionOfAll(
+        c,
         topology,
         volts,
         from(changes?.base.conduction ?? recycled?.conduction, c.chCount),
