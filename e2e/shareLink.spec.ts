@@ -2,11 +2,12 @@ import { expect, test } from '@playwright/test';
 import { encodeDesignFragment } from '../src/app/shareLink.ts';
 import { serializeDesign } from '../src/core/format/designFile.ts';
 import { starterById } from '../src/core/starters/index.ts';
+import { designOfCell } from '../src/core/hierarchy/cellDesign.ts';
 import { RailwisePage } from './pages/RailwisePage.ts';
 
 test('a shared link opens the design it carries; a damaged one changes nothing', async ({ page }) => {
   const app = new RailwisePage(page);
-  const fragment = await encodeDesignFragment(serializeDesign(starterById('tristate-inverter')!.design));
+  const fragment = await encodeDesignFragment(serializeDesign(designOfCell(starterById('tristate-inverter')!.design)));
 
   await app.open(`/${fragment}`);
   await expect(app.message).toContainText('from a shared link');

@@ -5,7 +5,7 @@
  */
 import type { Design } from '../core/model/design.ts';
 import { parseDesignFile, serializeDesign } from '../core/format/designFile.ts';
-import { store } from '../state/store.ts';
+import { currentDesign, store } from '../state/store.ts';
 
 export const AUTOSAVE_KEY = 'railwise.autosave.v1';
 export const RESCUE_KEY = 'railwise.autosave.unreadable';
@@ -38,10 +38,10 @@ export function startAutosave(storage: Storage = localStorage): () => void {
   let savedRevision = store.getState().revision;
   const write = (): void => {
     timer = null;
-    const { design, revision } = store.getState();
+    const { revision } = store.getState();
     if (revision === savedRevision) return;
     try {
-      storage.setItem(AUTOSAVE_KEY, serializeDesign(design));
+      storage.setItem(AUTOSAVE_KEY, serializeDesign(currentDesign()));
       savedRevision = revision;
     } catch {
       // Storage full or blocked: keep editing; the next change tries again.

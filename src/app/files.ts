@@ -2,7 +2,7 @@
  * Opening, saving, importing and exporting. Every read is validated first; a bad file gives a
  * message naming the file and the line or field, and the open design is left exactly as it was.
  */
-import type { Design } from '../core/model/design.ts';
+import type { CellDesign } from '../core/model/design.ts';
 import { DEFAULT_TECHNOLOGY } from '../core/model/technology.ts';
 import { DesignFileError, parseDesignFile, serializeDesign } from '../core/format/designFile.ts';
 import { SpiceImportError } from '../core/netlist-io/spiceImport.ts';
@@ -14,7 +14,7 @@ import { checkDesign } from '../core/analysis/check.ts';
 import { sheetToSvg } from '../core/sheet/svg.ts';
 import { EMPTY_SHEET } from '../core/sheet/edits.ts';
 import { flushSync } from 'react-dom';
-import { loadDesign, offerCells, setViewport, showMessage, store } from '../state/store.ts';
+import { currentDesign, loadDesign, offerCells, setViewport, showMessage, store } from '../state/store.ts';
 import { currentStage } from '../editor/stageRef.ts';
 import { fitToView } from '../state/view.ts';
 import { downloadText, downloadUrl, safeFileName } from './download.ts';
@@ -29,7 +29,7 @@ export const isSpiceFile = isSpiceFileName;
 
 export interface SpiceDesigns {
   /** One design per readable cell, in file order. */
-  readonly designs: readonly Design[];
+  readonly designs: readonly CellDesign[];
   /** Cells of a library that could not be read, each with its reason (file and line). */
   readonly failed: readonly string[];
 }
@@ -37,7 +37,7 @@ export interface SpiceDesigns {
 /** Reads a SPICE text into designs, one per cell; throws when no cell at all can be read. */
 export function designsFromSpice(text: string, fileName: string): SpiceDesigns {
   const loaded = cellsFromText(text, fileName).cells;
-  const designs = loaded.flatMap((c): Design[] =>
+  const designs = loaded.flatMap((c): CellDesign[] =>
     'job' in c
       ? [
           {
@@ -61,7 +61,7 @@ export function designsFromSpice(text: string, fileName: string): SpiceDesigns {
 }
 
 /** Loads one imported cell and says where it came from. */
-export function loadImportedCell(design: Design, fileName: string, failed: readonly string[]): void {
+export function loadImportedCell(design: CellDesign, fileName: string, failed: readonly string[]): void {
   loadDesign(design);
   fitToView();
   const note = failed.length ? `. Not readable: ${failed.join('; ')}` : '';
@@ -104,7 +104,7 @@ export function pickAndOpen(): void {
 }
 
 export function saveDesign(): void {
-  const { design } = store.getState();
+  const design = currentDesign();
   downloadText(safeFileName(design.name, DESIGN_EXTENSION), serializeDesign(design), 'application/json');
 }
 

@@ -7,7 +7,7 @@
 import type { Design } from '../core/model/design.ts';
 import { parseDesignFile, serializeDesign } from '../core/format/designFile.ts';
 import { fitToView } from '../state/view.ts';
-import { loadDesign, showMessage, store } from '../state/store.ts';
+import { currentDesign, loadDesign, showMessage } from '../state/store.ts';
 
 export const LINK_PREFIX = '#design=';
 /** Name used in messages about a link, in place of a file name. */
@@ -86,7 +86,7 @@ export async function openSharedLink(): Promise<void> {
  * instead (a reload there reopens the shared version, with undo back to the autosaved one).
  */
 export async function shareCurrentDesign(): Promise<void> {
-  const fragment = await encodeDesignFragment(serializeDesign(store.getState().design));
+  const fragment = await encodeDesignFragment(serializeDesign(currentDesign()));
   const link = `${location.origin}${location.pathname}${fragment}`;
   try {
     await navigator.clipboard.writeText(link);

@@ -9,13 +9,19 @@
  */
 import { createStore } from 'zustand/vanilla';
 import { useStore as useZustand } from 'zustand';
-import type { Design } from '../core/model/design.ts';
+import type { Cell, CellDesign, Design } from '../core/model/design.ts';
 import type { ItemIds } from '../core/sheet/selection.ts';
 import type { SheetIssue } from '../core/sheet/toNetlist.ts';
 import type { Clip } from '../core/sheet/clipboard.ts';
 import type { PartKind, Point } from '../core/sheet/types.ts';
 import { NO_ITEMS } from '../core/sheet/selection.ts';
-import { deriveDesign, documentFromDesign, type SheetDocument, type SheetGeometry } from './document.ts';
+import {
+  deriveDesign,
+  designOfDocument,
+  documentFromDesign,
+  type SheetDocument,
+  type SheetGeometry,
+} from './document.ts';
 import { EMPTY_HISTORY, recordStep, redoStep, undoStep, type HistoryState } from './history.ts';
 import { EMPTY_SELECTION, pruneSelection, type SelectionState } from './selection.ts';
 import { DEFAULT_VIEWPORT, type Viewport } from './viewport.ts';
@@ -45,14 +51,16 @@ export interface Message {
 /** The cells of an imported library, waiting for the designer to pick one (nothing loaded yet). */
 export interface CellChoice {
   readonly fileName: string;
-  readonly designs: readonly Design[];
+  readonly designs: readonly CellDesign[];
   readonly failed: readonly string[];
 }
 
 export interface RailwiseState {
   readonly doc: SheetDocument;
-  /** Derived from `doc` by applyDoc; never edited directly. */
-  readonly design: Design;
+  /** The open cell, derived from `doc` by applyDoc (instances flattened); never edited directly. */
+  readonly design: CellDesign;
+  /** The open cell as the design holds it (own devices, instances), derived with `design`. */
+  readonly openCell: Cell;
   readonly geometry: SheetGeometry;
   readonly issues: readonly SheetIssue[];
   /** +1 on every committed document change (edit, undo, redo, open, end or cancel of a drag). */
@@ -192,8 +200,17 @@ export function redo(): boolean {
   return r !== null;
 }
 
-/** Opens a design (file, starter, import) as one undoable step, so nothing drawn is lost. */
-export function loadDesign(design: Design): void {
+/** The whole design as it would be saved: every cell, the open one as drawn. */
+export function currentDesign(): Design {
+  const s = store.getState();
+  return designOfDocument(s.doc, s.openCell);
+}
+
+/**
+ * Opens a design (file, starter, import; one cell alone is a design of its own) as one undoable
+ * step, so nothing drawn is lost.
+ */
+export function loadDesign(design: Design | CellDesign): void {
   const doc = documentFromDesign(design);
   commitDoc(() => doc);
   store.setState({ selection: EMPTY_SELECTION, gesture: null });
@@ -272,7 +289,11 @@ export function setClipboard(clipboard: Clip | null): void {
 }
 
 /** Offers the cells of a library file; nothing is loaded until one is chosen. */
-export function offerCells(fileName: string, designs: readonly Design[], failed: readonly string[]): void {
+export function offerCells(
+  fileName: string,
+  designs: readonly CellDesign[],
+  failed: readonly string[],
+): void {
   store.setState({ cellChoice: { fileName, designs, failed } });
 }
 

@@ -3,13 +3,13 @@
  * it was computed for; the page drops results whose job is no longer the lane's current one.
  */
 import type { CheckReport } from '../core/analysis/report.ts';
-import type { Design, InputVector } from '../core/model/design.ts';
+import type { CellDesign, InputVector } from '../core/model/design.ts';
 import type { PowerCounts } from '../core/power/tally.ts';
 import type { SizingReport } from '../core/sizing/types.ts';
 import type { StepLevel } from '../core/view/levelStrip.ts';
 
 /** What a job analyses: the cell as derived at one revision, without its drawing. */
-export type CellInput = Pick<Design, 'netlist' | 'technology' | 'expectations'>;
+export type CellInput = Pick<CellDesign, 'netlist' | 'technology' | 'expectations'>;
 
 /** Every vector once: the table, the findings and the power counts for random activity. */
 export interface SweepJob {

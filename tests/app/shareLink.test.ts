@@ -3,6 +3,7 @@
 import { describe, expect, it } from 'vitest';
 import { parseDesignFile, serializeDesign } from '../../src/core/format/designFile.ts';
 import { starterById } from '../../src/core/starters/index.ts';
+import { designOfCell } from '../../src/core/hierarchy/cellDesign.ts';
 import {
   decodeDesignFragment,
   designFromFragment,
@@ -12,7 +13,7 @@ import {
 } from '../../src/app/shareLink.ts';
 import { DesignFileError } from '../../src/core/format/designFile.ts';
 
-const latch = starterById('tg-d-latch')!.design;
+const latch = designOfCell(starterById('tg-d-latch')!.design);
 
 describe('share links', () => {
   it('carry a design file and give it back unchanged', async () => {

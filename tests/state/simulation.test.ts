@@ -19,7 +19,7 @@ import { setJobRunnerFactory, type JobRunner } from '../../src/worker/runner.ts'
 import { runJob } from '../../src/worker/jobs.ts';
 import { JobCancelled } from '../../src/worker/client.ts';
 import type { AnalysisJob, JobResult } from '../../src/worker/protocol.ts';
-import type { Design } from '../../src/core/model/design.ts';
+import type { CellDesign } from '../../src/core/model/design.ts';
 import { design, inverter, nand2, nand2MissingPullUp, nandLatch, resistorLoadInverter } from '../cells.ts';
 
 /** Runs jobs in-process but lets the test decide when each one finishes. */
@@ -64,7 +64,7 @@ const LATCH_STEPS = [
   { SN: '1', RN: '1' },
 ] as const;
 
-function withLatchSteps(d: Design): Design {
+function withLatchSteps(d: CellDesign): CellDesign {
   return { ...d, sequences: [{ name: 'set, hold', steps: LATCH_STEPS }] };
 }
 

@@ -1,7 +1,7 @@
 import { compile, type CompiledNetlist } from '../compile/compile.ts';
 import { evaluateExpression, type ExpectedValue } from '../expect/evaluate.ts';
 import { ExpressionError, parseExpression, type Expr } from '../expect/parse.ts';
-import type { Design, InputVector } from '../model/design.ts';
+import type { CellDesign, InputVector } from '../model/design.ts';
 import type { Netlist } from '../model/netlist.ts';
 import { DEFAULT_TECHNOLOGY, type Technology } from '../model/technology.ts';
 import { levelName } from '../solver/levels.ts';
@@ -169,7 +169,7 @@ export function checkSequence(
 
 /** Checks a design: its sweep with its own technology and expected functions. */
 export function checkDesign(
-  design: Design,
+  design: CellDesign,
   options: Omit<CheckOptions, 'technology' | 'expectations'> = {},
 ): CheckReport {
   return checkSweep(design.netlist, {

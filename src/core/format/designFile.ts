@@ -3,9 +3,17 @@
  * Text in, text out: the caller (browser or command line) reads and writes the bytes.
  */
 import type { z } from 'zod';
-import type { Design } from '../model/design.ts';
-import { CURRENT_DESIGN_VERSION, documentVersion, migrateToCurrent, type RawDocument } from './migrations.ts';
-import { DESIGN_FORMAT_TAG, designFileV1Schema } from './schema.ts';
+import type { Cell, Design } from '../model/design.ts';
+import {
+  CURRENT_DESIGN_VERSION,
+  documentVersion,
+  migrateToCurrent,
+  pathInVersion,
+  type RawDocument,
+} from './migrations.ts';
+import { DESIGN_FORMAT_TAG } from './schema.ts';
+import { designFileV2Schema, type DesignFileV2 } from './cellsSchema.ts';
+import { designSizer } from '../hierarchy/flatten.ts';
 
 export { CURRENT_DESIGN_VERSION } from './migrations.ts';
 
@@ -42,18 +50,43 @@ export function parseDesignFile(text: string, fileName: string): Design {
       `written by a newer Railwise (version ${version}); this build reads up to version ${CURRENT_DESIGN_VERSION}`,
     );
   }
-  const result = designFileV1Schema.safeParse(migrateToCurrent(raw, version));
+  const result = designFileV2Schema.safeParse(migrateToCurrent(raw, version));
   if (!result.success) throw schemaError(fileName, raw, version, result.error);
-  const { name, technology, netlist, expectations, sequences, sheet, notes } = result.data;
-  return {
+  const { name, technology, open, cells, notes } = result.data;
+  const design: Design = {
     name,
     technology,
-    netlist,
+    cells: cells.map(cellOfFile),
+    open,
+    ...(notes === undefined ? {} : { notes }),
+  };
+  refuseLoops(design, fileName);
+  return design;
+}
+
+/** A cell as the file has it; its netlist takes the cell's name. */
+function cellOfFile(c: DesignFileV2['cells'][number]): Cell {
+  const { name, netlist, instances, expectations, sequences, sheet, globals } = c;
+  return {
+    name,
+    netlist: netlist.name === name ? netlist : { ...netlist, name },
+    instances,
     expectations,
     sequences,
     ...(sheet === undefined ? {} : { sheet }),
-    ...(notes === undefined ? {} : { notes }),
+    ...(globals === undefined ? {} : { globals }),
   };
+}
+
+/** A cell that places itself, directly or through others, is refused with the chain named. */
+function refuseLoops(design: Design, fileName: string): void {
+  const cells = new Map(design.cells.map((c) => [c.name, c]));
+  const sizer = designSizer(cells);
+  for (const [i, cell] of design.cells.entries()) {
+    const problem = sizer.problem(cell);
+    if (problem?.kind === 'cycle')
+      throw new DesignFileError(fileName, `cells[${i}].instances`, problem.message);
+  }
 }
 
 /** Stable key order and two-space indentation, so saved files diff well under version control. */
@@ -63,10 +96,16 @@ export function serializeDesign(design: Design): string {
     version: CURRENT_DESIGN_VERSION,
     name: design.name,
     technology: design.technology,
-    netlist: design.netlist,
-    expectations: design.expectations,
-    sequences: design.sequences,
-    ...(design.sheet === undefined ? {} : { sheet: design.sheet }),
+    open: design.open,
+    cells: design.cells.map((c) => ({
+      name: c.name,
+      netlist: c.netlist,
+      instances: c.instances,
+      expectations: c.expectations,
+      sequences: c.sequences,
+      ...(c.sheet === undefined ? {} : { sheet: c.sheet }),
+      ...(c.globals === undefined ? {} : { globals: c.globals }),
+    })),
     ...(design.notes === undefined ? {} : { notes: design.notes }),
   };
   return `${JSON.stringify(doc, null, 2)}\n`;
@@ -104,8 +143,8 @@ function schemaError(
 ): DesignFileError {
   const [first, ...rest] = error.issues;
   if (first === undefined) return new DesignFileError(fileName, '', 'invalid design');
-  // A migrated bare netlist sits under `netlist`; report paths as the file has them.
-  const path = version === 0 && first.path[0] === 'netlist' ? first.path.slice(1) : first.path;
+  // A migrated file holds its fields elsewhere than the current version: report paths as the file has them.
+  const path = pathInVersion(first.path, version);
   const field = path
     .map((k, i) => (typeof k === 'number' ? `[${k}]` : i === 0 ? String(k) : `.${String(k)}`))
     .join('');

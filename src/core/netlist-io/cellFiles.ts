@@ -4,7 +4,9 @@
  * A file or cell that cannot be used becomes a failure entry; the others still load.
  */
 import { DesignFileError, parseDesignFile } from '../format/designFile.ts';
-import type { Sequence } from '../model/design.ts';
+import type { CellDesign, Sequence } from '../model/design.ts';
+import { cellDesign } from '../hierarchy/cellDesign.ts';
+import { HierarchyError } from '../hierarchy/flatten.ts';
 import type { Netlist } from '../model/netlist.ts';
 import { DEFAULT_TECHNOLOGY, withVdd, type Technology } from '../model/technology.ts';
 import { ExpressionError, parseExpression } from '../expect/parse.ts';
@@ -98,23 +100,37 @@ function unreadable(failure: CellFailure): FileCells {
   return { cells: [{ failure }], library: false, available: [] };
 }
 
+/** Every cell of a design file, each flattened; several cells are checked as a library. */
 function designCells(text: string, file: string, options: LoadOptions): FileCells {
   const design = parseDesignFile(text, file);
-  const cell = design.netlist.name || design.name;
-  if (options.cell !== undefined && options.cell.toLowerCase() !== cell.toLowerCase())
-    return { cells: [], library: false, available: [cell] };
-  const job: CellJob = {
-    file,
-    cell,
-    netlist: design.netlist,
-    technology: technologyOf(design.technology, options.vdd),
-    expectations: design.expectations,
-    expectationLines: {},
-    pinsNamed: true,
-    sequences: design.sequences,
-    notes: [],
-  };
-  return { cells: [{ job }], library: false, available: [cell] };
+  const available = design.cells.map((c) => c.name);
+  const wanted =
+    options.cell === undefined
+      ? design.cells
+      : design.cells.filter((c) => c.name.toLowerCase() === options.cell?.toLowerCase());
+  const technology = technologyOf(design.technology, options.vdd);
+  const cells = wanted.map((c): LoadedCell => {
+    let one: CellDesign;
+    try {
+      one = cellDesign(design, c.name);
+    } catch (e) {
+      if (!(e instanceof HierarchyError)) throw e;
+      return { failure: { file, cell: c.name, message: `${file}: ${e.message}`, field: 'cells' } };
+    }
+    const job: CellJob = {
+      file,
+      cell: c.name,
+      netlist: one.netlist,
+      technology,
+      expectations: one.expectations,
+      expectationLines: {},
+      pinsNamed: true,
+      sequences: one.sequences,
+      notes: [],
+    };
+    return { job };
+  });
+  return { cells, library: design.cells.length > 1 && options.cell === undefined, available };
 }
 
 function spiceCells(text: string, file: string, options: LoadOptions): FileCells {

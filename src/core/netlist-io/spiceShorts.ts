@@ -5,7 +5,7 @@
  * then the first written. When both ends must keep their names (two ports, a port and a rail, two
  * rails) the link is kept as a resistor of the smallest resistance in range, so nothing is renamed.
  */
-import type { Device } from '../model/netlist.ts';
+import { mapDeviceNets, type Device } from '../model/netlist.ts';
 import type { CellBuilder, FlatSource } from './spiceFlatten.ts';
 import { VALUE_RANGES } from './valueRanges.ts';
 
@@ -61,24 +61,9 @@ export function joinShorts(b: CellBuilder, ports: ReadonlySet<string>): Joined {
       : []),
   ];
   return {
-    devices: devices.map((d) => renamed(d, find)),
+    devices: devices.map((d) => mapDeviceNets(d, find)),
     sources: b.sources.map((s) => ({ ...s, plus: find(s.plus), minus: find(s.minus) })),
     nets: nets.filter((n) => find(n) === n),
     notes,
   };
-}
-
-function renamed(d: Device, find: (net: string) => string): Device {
-  switch (d.kind) {
-    case 'nmos':
-    case 'pmos': {
-      const base = { ...d, gate: find(d.gate), drain: find(d.drain), source: find(d.source) };
-      return d.bulk === undefined ? base : { ...base, bulk: find(d.bulk) };
-    }
-    case 'resistor':
-    case 'capacitor':
-      return { ...d, a: find(d.a), b: find(d.b) };
-    case 'diode':
-      return { ...d, anode: find(d.anode), cathode: find(d.cathode) };
-  }
 }

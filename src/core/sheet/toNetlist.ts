@@ -9,7 +9,7 @@ import { isDevicePart, partSpec, type NetRole } from './parts/index.ts';
 import { pinKey, sheetConnectivity, wireKey, type UnionFind } from './connectivity.ts';
 
 export interface SheetIssue {
-  readonly kind: 'name-conflict' | 'duplicate-device' | 'shorted-pins';
+  readonly kind: 'name-conflict' | 'duplicate-device' | 'shorted-pins' | 'hierarchy';
   readonly parts: readonly string[];
   readonly message: string;
 }

@@ -1,0 +1,84 @@
+/**
+ * Edits that keep a design's hierarchy whole: renaming a cell or one of its pins updates every
+ * instance that places it, in every cell (docs/semantics.md §1, hierarchy).
+ */
+import type { Cell, Design, Instance } from '../model/design.ts';
+import { mapDeviceNets, type Netlist } from '../model/netlist.ts';
+
+/** Thrown when an edit would break the design (a name taken, a pin that does not exist). */
+export class HierarchyEditError extends Error {
+  override readonly name = 'HierarchyEditError';
+}
+
+function placing(design: Design, cell: string, edit: (i: Instance) => Instance): Design {
+  return {
+    ...design,
+    cells: design.cells.map((c) =>
+      c.instances.some((i) => i.cell === cell)
+        ? { ...c, instances: c.instances.map((i) => (i.cell === cell ? edit(i) : i)) }
+        : c,
+    ),
+  };
+}
+
+/** Renames a cell; instances of it follow, and so does `open`. */
+export function renameCell(design: Design, from: string, to: string): Design {
+  if (from === to) return design;
+  if (to === '') throw new HierarchyEditError('a cell needs a name');
+  if (design.cells.some((c) => c.name === to)) throw new HierarchyEditError(`a cell is already named ${to}`);
+  const renamed = placing(design, from, (i) => ({ ...i, cell: to }));
+  return {
+    ...renamed,
+    open: design.open === from ? to : design.open,
+    cells: renamed.cells.map((c) =>
+      c.name === from ? { ...c, name: to, netlist: { ...c.netlist, name: to } } : c,
+    ),
+  };
+}
+
+/**
+ * Renames a pin (an input, output or rail net) of one cell: its own netlist, its expected functions'
+ * keys, and the pin key of every instance that places it.
+ */
+export function renamePin(design: Design, cellName: string, from: string, to: string): Design {
+  const cell = design.cells.find((c) => c.name === cellName);
+  if (cell === undefined) throw new HierarchyEditError(`no cell named ${cellName}`);
+  if (from === to) return design;
+  const nets = new Set([
+    ...cell.netlist.inputs,
+    ...cell.netlist.outputs,
+    ...cell.netlist.rails.map((r) => r.net),
+  ]);
+  if (!nets.has(from)) throw new HierarchyEditError(`${cellName} has no pin ${from}`);
+  if (nets.has(to)) throw new HierarchyEditError(`${cellName} already has a pin ${to}`);
+  const withPin = placing(design, cellName, (i) => {
+    if (!Object.hasOwn(i.pins, from)) return i;
+    const { [from]: net, ...rest } = i.pins;
+    return { ...i, pins: { ...rest, [to]: net as string } };
+  });
+  return {
+    ...withPin,
+    cells: withPin.cells.map((c) => (c.name === cellName ? renamedPinCell(c, from, to) : c)),
+  };
+}
+
+function renamedPinCell(cell: Cell, from: string, to: string): Cell {
+  const rename = (n: string): string => (n === from ? to : n);
+  const netlist: Netlist = {
+    ...cell.netlist,
+    devices: cell.netlist.devices.map((d) => mapDeviceNets(d, rename)),
+    rails: cell.netlist.rails.map((r) => ({ ...r, net: rename(r.net) })),
+    inputs: cell.netlist.inputs.map(rename),
+    outputs: cell.netlist.outputs.map(rename),
+  };
+  const expectations = Object.fromEntries(Object.entries(cell.expectations).map(([k, v]) => [rename(k), v]));
+  return {
+    ...cell,
+    netlist,
+    expectations,
+    instances: cell.instances.map((i) => ({
+      ...i,
+      pins: Object.fromEntries(Object.entries(i.pins).map(([p, n]) => [p, rename(n)])),
+    })),
+  };
+}
