@@ -198,8 +198,8 @@ X2 mid Y VDD GND inv
   it('flattens X instances with hierarchical device and net names', () => {
     const n = only(BUFFER);
     expect(n.name).toBe('buf');
-    expect(n.devices.map((d) => d.name)).toEqual(['X1/MP', 'X1/MN', 'X2/MP', 'X2/MN']);
-    expect(mos(n, 'X2/MN')).toMatchObject({ gate: 'mid', drain: 'Y', source: 'GND' });
+    expect(n.devices.map((d) => d.name)).toEqual(['X1.MP', 'X1.MN', 'X2.MP', 'X2.MN']);
+    expect(mos(n, 'X2.MN')).toMatchObject({ gate: 'mid', drain: 'Y', source: 'GND' });
   });
 
   it('reads the CDL form of an instance, with a / before the subcircuit name', () => {
@@ -220,7 +220,7 @@ X7 A Y VDD GND leaf
 .subckt top A Y VDD GND
 X3 A Y VDD GND mid
 .ends`);
-    expect(mos(n, 'X3/X7/M1').drain).toBe('X3/X7/n');
+    expect(mos(n, 'X3.X7.M1').drain).toBe('X3.X7.n');
   });
 
   it('keeps rail names and .global nets global inside subcircuits', () => {
@@ -235,7 +235,7 @@ X1 A Y leaf
 .ends`,
       { supplyNames: ['vpwr'] },
     );
-    expect(mos(n, 'X1/M2').source).toBe('vpwr!');
+    expect(mos(n, 'X1.M2').source).toBe('vpwr!');
     expect(n.rails).toEqual([
       { net: 'gnd', role: 'ground' },
       { net: 'vpwr!', role: 'supply' },

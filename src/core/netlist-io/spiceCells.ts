@@ -1,17 +1,23 @@
 /**
- * Turns one flattened cell into a Netlist: which nets are rails (by name or by a `V` line), which
- * ports are inputs (those that only reach gates) and outputs (the other non-rail ports), and what
- * the `* railwise:` directives inside the cell add (expected functions, pin directions).
+ * Turns subcircuits into cells of a design: which nets are rails (by name or by a `V` line), which
+ * ports are inputs (those that only reach gates, through instances too) and outputs (the other
+ * non-rail ports), and what the `* railwise:` directives inside the cell add (expected functions,
+ * pin directions). Each cell keeps the instances it places; the flat netlist the checks read is made
+ * by the one design flattener (`core/hierarchy/flatten.ts`), with hierarchical names (`X1.MP`).
  */
-import type { Device, Netlist, Rail } from '../model/netlist.ts';
+import type { Cell } from '../model/design.ts';
+import type { Netlist, Rail } from '../model/netlist.ts';
 import type { Body, Directive } from './spiceParse.ts';
-import { flattenCell, type FlatCell, type FlattenContext, type FlatSource } from './spiceFlatten.ts';
+import { readBody, type BodyCell, type FlattenContext, type FlatSource } from './spiceBodies.ts';
 import type { Hierarchy } from './spiceHierarchy.ts';
 import { SpiceImportError } from './spiceErrors.ts';
 import { assignPins, PinError } from './pins.ts';
+import { flattenCell, HierarchyError } from '../hierarchy/flatten.ts';
+import { portUse, GATE, CHANNEL, type NetUse } from './portUse.ts';
 
 export interface ImportedCell {
   readonly name: string;
+  /** Flat: every instance expanded, devices and nets named by their instance path. */
   readonly netlist: Netlist;
   /** Expected functions from `* railwise: expect Y = …` lines, by output. */
   readonly expectations: Readonly<Record<string, string>>;
@@ -20,12 +26,18 @@ export interface ImportedCell {
   /** True when `* railwise: inputs` or `outputs` lines named the pins. */
   readonly pinsNamed: boolean;
   readonly notes: readonly string[];
+  /** The cell and every cell it places, as a design holds them (the cell itself last). */
+  readonly cells: readonly Cell[];
 }
 
 export interface CellContext extends FlattenContext {
   /** Role of a net by its name, or null. */
   readonly railRole: (net: string) => Rail['role'] | null;
   readonly hierarchy: Hierarchy;
+  /** Bodies read so far and cells finished so far, so each subcircuit is read once per file. */
+  readonly bodies: Map<Body, BodyCell>;
+  readonly finished: Map<Body, FinishedCell>;
+  readonly uses: Map<Body, NetUse>;
 }
 
 export interface CellSpec {
@@ -39,42 +51,120 @@ export interface CellSpec {
   readonly line: number;
 }
 
+interface FinishedCell {
+  readonly cell: Cell;
+  readonly expectationLines: Record<string, number>;
+  readonly pinsNamed: boolean;
+  readonly notes: readonly string[];
+}
+
 export function buildCell(spec: CellSpec, ctx: CellContext): ImportedCell {
   ctx.hierarchy.check(spec.name, spec.body, spec.line);
-  const flat = flattenCell(spec.body, spec.ports ?? [], ctx);
-  const rails = cellRails(flat, spec.sharedSources, ctx);
+  const placed = placedBodies(spec.body, ctx);
+  const finished = [...placed.map((b) => finish(subSpec(b, spec), ctx)), finish(spec, ctx)];
+  const cells = finished.map((f) => f.cell);
+  const top = finished[finished.length - 1] as FinishedCell;
+  let netlist: Netlist;
+  try {
+    netlist = flattenCell(new Map(cells.map((c) => [c.name, c])), spec.name);
+  } catch (e) {
+    if (e instanceof HierarchyError) throw new SpiceImportError(ctx.fileName, spec.line, e.message);
+    throw e;
+  }
+  const notes = [...new Set(finished.flatMap((f) => f.notes))];
+  const diodes = netlist.devices.filter((d) => d.kind === 'diode').map((d) => d.name);
+  if (diodes.length > 0)
+    notes.push(`protection diodes kept, never conducting in steady state: ${diodes.join(', ')}`);
+  const { expectations } = top.cell;
+  const { expectationLines, pinsNamed } = top;
+  return { name: spec.name, netlist, expectations, expectationLines, pinsNamed, notes, cells };
+}
+
+function subSpec(body: Body, root: CellSpec): CellSpec {
+  const sub = body as Body & { name: string; ports: readonly string[]; line: number };
+  return { name: sub.name, body, ports: sub.ports, sharedSources: root.sharedSources, line: sub.line };
+}
+
+function readOnce(body: Body, ports: readonly string[], ctx: CellContext): BodyCell {
+  let read = ctx.bodies.get(body);
+  if (read === undefined) {
+    read = readBody(body, ports, ctx);
+    ctx.bodies.set(body, read);
+  }
+  return read;
+}
+
+/** Every subcircuit the body places, directly or deeper, children before the cells that place them. */
+function placedBodies(root: Body, ctx: CellContext): Body[] {
+  const order: Body[] = [];
+  const seen = new Set<Body>([root]);
+  const stack: { body: Body; children: Body[]; next: number }[] = [];
+  const push = (body: Body): void => {
+    const read = readOnce(body, 'ports' in body ? (body.ports as string[]) : [], ctx);
+    const children = read.instances.map((i) => ctx.file.subcktByName.get(i.cell.toLowerCase()) as Body);
+    stack.push({ body, children, next: 0 });
+  };
+  push(root);
+  while (stack.length > 0) {
+    const f = stack[stack.length - 1] as (typeof stack)[number];
+    const child = f.children[f.next++];
+    if (child === undefined) {
+      stack.pop();
+      if (f.body !== root) order.push(f.body);
+    } else if (!seen.has(child)) {
+      seen.add(child);
+      push(child);
+    }
+  }
+  return order;
+}
+
+/** One cell finished: rails, pins, directives; each body once per file. */
+function finish(spec: CellSpec, ctx: CellContext): FinishedCell {
+  const known = ctx.finished.get(spec.body);
+  if (known !== undefined) return known;
+  const read = readOnce(spec.body, spec.ports ?? [], ctx);
+  const rails = cellRails(read.nets, [...spec.sharedSources, ...read.sources], ctx);
   const railNets = new Set(rails.map((r) => r.net));
-  const notes = [...flat.notes];
-  const byLower = new Map(flat.nets.map((n) => [n.toLowerCase(), n]));
+  const notes = [...read.notes];
+  const byLower = new Map(read.nets.map((n) => [n.toLowerCase(), n]));
   const resolveNet = (name: string): string => byLower.get(name.toLowerCase()) ?? name;
-  const ports = (spec.ports ?? topLevelPorts(flat)).map(resolveNet).filter((p) => !railNets.has(p));
-  const pins = inferPins(flat.devices, ports, spec.ports === null);
+  const ports = (spec.ports ?? read.nets).map(resolveNet).filter((p) => !railNets.has(p));
+  const pins = inferPins(portUse(spec.body, read, ctx), ports, spec.ports === null);
   if (spec.ports === null && pins.outputs.length > 0) {
     notes.push(
       `a flat netlist has no ports: outputs taken as the nets that reach no gate (${pins.outputs.join(', ')})`,
     );
   }
-  const diodes = flat.devices.filter((d) => d.kind === 'diode').map((d) => d.name);
-  if (diodes.length > 0)
-    notes.push(`protection diodes kept, never conducting in steady state: ${diodes.join(', ')}`);
-  let netlist: Netlist = { name: spec.name, devices: flat.devices, rails, ...pins };
+  let netlist: Netlist = { name: spec.name, devices: read.devices, rails, ...pins };
   netlist = applyPinDirectives(netlist, spec.body.directives, ctx.fileName);
   const { expectations, lines } = readExpectations(netlist, spec.body.directives, notes);
   const pinsNamed = spec.body.directives.some((d) => d.key === 'inputs' || d.key === 'outputs');
-  return { name: spec.name, netlist, expectations, expectationLines: lines, pinsNamed, notes };
+  const globals = read.nets.filter((n) => !railNets.has(n) && ctx.isGlobal(n.toLowerCase()));
+  const cell: Cell = {
+    name: spec.name,
+    netlist,
+    instances: read.instances,
+    expectations,
+    sequences: [],
+    ...(globals.length === 0 ? {} : { globals }),
+  };
+  const done = { cell, expectationLines: lines, pinsNamed, notes };
+  ctx.finished.set(spec.body, done);
+  return done;
 }
 
 /** Rails in order of first appearance: named rails, then nets a `V` line holds. */
-function cellRails(flat: FlatCell, shared: readonly FlatSource[], ctx: CellContext): Rail[] {
+function cellRails(nets: readonly string[], sources: readonly FlatSource[], ctx: CellContext): Rail[] {
   const held = new Map<string, Rail>();
-  const inCell = new Map(flat.nets.map((n) => [n.toLowerCase(), n]));
-  for (const s of [...shared, ...flat.sources]) {
+  const inCell = new Map(nets.map((n) => [n.toLowerCase(), n]));
+  for (const s of sources) {
     const rail = sourceRail(s, ctx);
     const net = inCell.get(rail.net.toLowerCase());
     if (net !== undefined) held.set(net, { ...rail, net });
   }
   const rails: Rail[] = [];
-  for (const net of flat.nets) {
+  for (const net of nets) {
     const role = ctx.railRole(net);
     const fromSource = held.get(net);
     if (fromSource !== undefined) rails.push(fromSource);
@@ -111,27 +201,16 @@ function sourceRail(s: FlatSource, ctx: CellContext): Rail {
   return volts === 0 ? { net, role: 'ground' } : { net, role: 'supply', volts };
 }
 
-/** A flat netlist's candidate pins: the nets of the top level itself, not inside an instance. */
-function topLevelPorts(flat: FlatCell): string[] {
-  return flat.nets.filter((n) => !n.includes('/'));
-}
-
 /**
- * Inputs are ports that reach gates and no channel (drain, source or resistor end). The rest are
- * outputs; for a flat netlist, only those that reach no gate (internal nodes cannot be told apart).
+ * Inputs are ports that reach gates and no channel (drain, source or resistor end), inside placed
+ * cells too. The rest are outputs; for a flat netlist, only those that reach no gate (internal nodes
+ * cannot be told apart).
  */
-function inferPins(devices: readonly Device[], ports: readonly string[], flat: boolean) {
-  const gates = new Set<string>();
-  const channels = new Set<string>();
-  for (const d of devices) {
-    if (d.kind === 'nmos' || d.kind === 'pmos') {
-      gates.add(d.gate);
-      channels.add(d.drain).add(d.source);
-    } else if (d.kind === 'resistor') channels.add(d.a).add(d.b);
-  }
-  const inputs = ports.filter((p) => gates.has(p) && !channels.has(p));
+function inferPins(use: NetUse, ports: readonly string[], flat: boolean) {
+  const has = (p: string, flag: number): boolean => ((use.get(p) ?? 0) & flag) !== 0;
+  const inputs = ports.filter((p) => has(p, GATE) && !has(p, CHANNEL));
   const isInput = new Set(inputs);
-  const outputs = ports.filter((p) => !isInput.has(p) && (!flat || (channels.has(p) && !gates.has(p))));
+  const outputs = ports.filter((p) => !isInput.has(p) && (!flat || (has(p, CHANNEL) && !has(p, GATE))));
   return { inputs, outputs };
 }
 

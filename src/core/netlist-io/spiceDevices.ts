@@ -9,7 +9,7 @@ import { mosTypeFromName, STAND_IN_TERMINALS, standInByRule, type StandIn } from
 import { spiceValue } from './spiceNumber.ts';
 import { scaledMicrons } from './spiceScale.ts';
 import { rangeProblem, VALUE_RANGES } from './valueRanges.ts';
-import type { CellBuilder, Scope } from './spiceFlatten.ts';
+import type { CellBuilder, Scope } from './spiceBodies.ts';
 
 export interface DeviceNotes {
   readonly ignoredParams: Set<string>;

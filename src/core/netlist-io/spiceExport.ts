@@ -23,23 +23,50 @@ export interface SpiceExportOptions {
 
 export function exportSpice(netlist: Netlist, tech: Technology, options: SpiceExportOptions = {}): string {
   const cell = token(netlist.name || 'cell');
-  const ports = unique([...netlist.inputs, ...netlist.outputs, ...netlist.rails.map((r) => r.net)]);
   const lines = [
     `* ${cell}: exported by Railwise. ${CAUTION}`,
-    `* Level-1 models from: ${tech.source}`,
-    `.model ${NMOS_MODEL} nmos (level=1 vto=${tech.vtn} kp=${formatSpiceNumber(tech.kpn)})`,
-    `.model ${PMOS_MODEL} pmos (level=1 vto=${-tech.vtp} kp=${formatSpiceNumber(tech.kpp)})`,
-    ...(netlist.devices.some((d) => d.kind === 'diode') ? [`.model ${DIODE_MODEL} d`] : []),
-    `.subckt ${cell} ${ports.map(token).join(' ')}`,
-    `* railwise: inputs ${netlist.inputs.map(token).join(' ')}`.trimEnd(),
-    `* railwise: outputs ${netlist.outputs.map(token).join(' ')}`.trimEnd(),
-    ...railLines(netlist),
-    ...Object.entries(options.expectations ?? {}).map(([out, expr]) => `* railwise: expect ${out} = ${expr}`),
-    ...netlist.devices.map((d) => deviceLine(d, netlist)),
-    `.ends ${cell}`,
+    ...modelLines(
+      tech,
+      netlist.devices.some((d) => d.kind === 'diode'),
+    ),
+    ...subcktLines(netlist, options.expectations ?? {}),
     '.end',
   ];
   return `${lines.join('\n')}\n`;
+}
+
+/** Level-1 model cards from the technology (and the diode's, when a cell has one). */
+export function modelLines(tech: Technology, diode: boolean): string[] {
+  return [
+    `* Level-1 models from: ${tech.source}`,
+    `.model ${NMOS_MODEL} nmos (level=1 vto=${tech.vtn} kp=${formatSpiceNumber(tech.kpn)})`,
+    `.model ${PMOS_MODEL} pmos (level=1 vto=${-tech.vtp} kp=${formatSpiceNumber(tech.kpp)})`,
+    ...(diode ? [`.model ${DIODE_MODEL} d`] : []),
+  ];
+}
+
+/** The ports of a cell's `.subckt` line, in order: inputs, outputs, rails. */
+export function subcktPorts(netlist: Netlist): string[] {
+  return unique([...netlist.inputs, ...netlist.outputs, ...netlist.rails.map((r) => r.net)]);
+}
+
+/** One cell as `.subckt` … `.ends`, with its directives, devices and any further lines (instances). */
+export function subcktLines(
+  netlist: Netlist,
+  expectations: Readonly<Record<string, string>>,
+  more: readonly string[] = [],
+): string[] {
+  const cell = token(netlist.name || 'cell');
+  return [
+    `.subckt ${cell} ${subcktPorts(netlist).map(token).join(' ')}`.trimEnd(),
+    `* railwise: inputs ${netlist.inputs.map(token).join(' ')}`.trimEnd(),
+    `* railwise: outputs ${netlist.outputs.map(token).join(' ')}`.trimEnd(),
+    ...railLines(netlist),
+    ...Object.entries(expectations).map(([out, expr]) => `* railwise: expect ${out} = ${expr}`),
+    ...netlist.devices.map((d) => deviceLine(d, netlist)),
+    ...more,
+    `.ends ${cell}`,
+  ];
 }
 
 /** Directives for rails the importer would not recognise by name, and V lines for explicit voltages. */
@@ -77,7 +104,7 @@ function mosLine(d: MosDevice, netlist: Netlist): string {
 }
 
 /** SPICE knows an element by its first letter: `N1` becomes `MN1`. */
-function elementName(letter: string, name: string): string {
+export function elementName(letter: string, name: string): string {
   const t = token(name);
   return t.charAt(0).toUpperCase() === letter ? t : `${letter}${t}`;
 }
@@ -89,7 +116,7 @@ function microns(value: number): string {
 }
 
 /** SPICE splits on white space and reads `= ( ) , $ ;` as syntax: those become `_`. */
-function token(name: string): string {
+export function token(name: string): string {
   const t = name.replace(/[\s=(),$;]/g, '_');
   return /^[*+.]/.test(t) ? `_${t}` : t;
 }

@@ -23,8 +23,7 @@ export class Hierarchy {
     this.sizer = new HierarchySizer<Body>({
       noun: 'subcircuit',
       nameOf: (body) => names.get(body) ?? 'top level',
-      ownDevices: (body) =>
-        body.elements.filter((e) => e.kind !== 'source' && e.kind !== 'instance').length,
+      ownDevices: (body) => body.elements.filter((e) => e.kind !== 'source' && e.kind !== 'instance').length,
       placements: (body) =>
         body.elements.flatMap((e): Placement<Body>[] =>
           e.kind === 'instance'

@@ -9,7 +9,7 @@
 import type { Rail } from '../model/netlist.ts';
 import { parseSpice, type Body, type SpiceFile, type Subckt } from './spiceParse.ts';
 import { buildCell, type CellContext, type CellSpec, type ImportedCell } from './spiceCells.ts';
-import type { FlatSource } from './spiceFlatten.ts';
+import type { FlatSource } from './spiceBodies.ts';
 import { SpiceImportError } from './spiceErrors.ts';
 import { Hierarchy } from './spiceHierarchy.ts';
 import { resolveScale } from './spiceSizes.ts';
@@ -230,7 +230,19 @@ function cellContext(
   options.standIns?.forEach((kind, name) => standIns.set(name.toLowerCase(), kind));
   const scale = resolveScale(file, options.scale, notes);
   const hierarchy = new Hierarchy(file, fileName);
-  return { file, fileName, railRole, isGlobal, scale, standIns, hierarchy };
+  return {
+    file,
+    fileName,
+    railRole,
+    isGlobal,
+    scale,
+    standIns,
+    hierarchy,
+    globalSpelling: new Map(),
+    bodies: new Map(),
+    finished: new Map(),
+    uses: new Map(),
+  };
 }
 
 function topLevelSources(top: Body): FlatSource[] {

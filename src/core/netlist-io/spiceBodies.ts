@@ -1,11 +1,13 @@
 /**
- * Flattens one cell: every `X` instance is replaced by the contents of its subcircuit, with device
- * and net names prefixed by the instance path (`X1/X2/M3`, `X1/n5`). Rails, `0`, `.global` nets and
- * names ending in `!` are global and keep their name at every depth. The walk keeps its own stack,
- * so depth costs no JavaScript stack; the hierarchy was sized before (`spiceHierarchy.ts`).
- * Instances of subcircuits the file does not define stand for devices by the rules of
- * `deviceNames.ts`; `short` links join their nets afterwards (`spiceShorts.ts`).
+ * Reads one subcircuit (or the flat top level) into a body of its own: its devices, the instances of
+ * the subcircuits it places, its `V` lines and its nets, nothing expanded (docs/semantics.md §6;
+ * flattening is the analysis' job, `core/hierarchy/flatten.ts`). Net names match case-blind and
+ * keep the first spelling; rails, `0`, `.global` nets and names ending in `!` keep one spelling in
+ * the whole file, so they join across instances. Instances of subcircuits the file does not define
+ * stand for devices by the rules of `deviceNames.ts`; `short` links join their nets
+ * (`spiceShorts.ts`).
  */
+import type { Instance } from '../model/design.ts';
 import type { Device, MosKind } from '../model/netlist.ts';
 import type { Body, SpiceFile } from './spiceParse.ts';
 import type { Element, InstanceElement, SourceElement } from './spiceElements.ts';
@@ -15,7 +17,7 @@ import type { StandIn } from './deviceNames.ts';
 import { instanceDevice, mosDevice, type DeviceNotes } from './spiceDevices.ts';
 import { joinShorts, type ShortLink } from './spiceShorts.ts';
 
-/** A `V` line after flattening: its nets resolved. */
+/** A `V` line with its nets resolved in its body. */
 export interface FlatSource {
   readonly name: string;
   readonly line: number;
@@ -24,10 +26,12 @@ export interface FlatSource {
   readonly volts: number;
 }
 
-export interface FlatCell {
+/** One subcircuit as read: nothing of the subcircuits it places is copied in. */
+export interface BodyCell {
   readonly devices: Device[];
+  readonly instances: Instance[];
   readonly sources: FlatSource[];
-  /** Every net in order of first appearance, spelled as first written. */
+  /** Every net in order of first appearance (ports first), spelled as first written. */
   readonly nets: string[];
   readonly notes: string[];
 }
@@ -41,6 +45,8 @@ export interface FlattenContext {
   readonly scale: Scale | null;
   /** Explicit stand-ins for undefined subcircuits, by lower-case name. */
   readonly standIns: ReadonlyMap<string, StandIn>;
+  /** The one spelling of each global net in the file, by lower case (filled as bodies are read). */
+  readonly globalSpelling: Map<string, string>;
 }
 
 export interface Scope {
@@ -53,6 +59,7 @@ export interface Scope {
 
 export class CellBuilder {
   readonly devices: Device[] = [];
+  readonly instances: Instance[] = [];
   readonly sources: FlatSource[] = [];
   readonly shorts: ShortLink[] = [];
   readonly notes = new DeviceNotesCollector();
@@ -77,9 +84,22 @@ export class CellBuilder {
     const key = info.global ? info.lower : scope.lowerPrefix + info.lower;
     const known = this.byLower.get(key);
     if (known !== undefined) return known;
-    const full = info.global ? local : scope.prefix + local;
+    const full = info.global ? this.globalName(info.lower, local) : scope.prefix + local;
     this.byLower.set(key, full);
     return full;
+  }
+
+  /** How a subcircuit's port is spelled as a net of that subcircuit (globals have one spelling). */
+  portName(port: string): string {
+    const lower = port.toLowerCase();
+    return this.ctx.isGlobal(lower) ? this.globalName(lower, port) : port;
+  }
+
+  private globalName(lower: string, local: string): string {
+    const known = this.ctx.globalSpelling.get(lower);
+    if (known !== undefined) return known;
+    this.ctx.globalSpelling.set(lower, local);
+    return local;
   }
 
   get nets(): string[] {
@@ -115,35 +135,18 @@ export class DeviceNotesCollector implements DeviceNotes {
   }
 }
 
-/** Flattens a body; `ports` are the cell's own port names (registered first, in order). */
-export function flattenCell(body: Body, ports: readonly string[], ctx: FlattenContext): FlatCell {
+/** Reads a body; `ports` are the cell's own port names (registered first, in order). */
+export function readBody(body: Body, ports: readonly string[], ctx: FlattenContext): BodyCell {
+  if (body.error) throw body.error;
   const b = new CellBuilder(ctx);
   const root: Scope = { prefix: '', lowerPrefix: '', ports: new Map() };
   ports.forEach((p) => b.net(p, root));
-  expand(b, body, root);
+  for (const e of body.elements) {
+    if (e.kind !== 'instance') addElement(b, e, root);
+    else place(b, e, root);
+  }
   const joined = joinShorts(b, new Set(ports.map((p) => p.toLowerCase())));
   return { ...joined, notes: [...b.notes.lines(), ...joined.notes] };
-}
-
-interface Frame {
-  readonly body: Body;
-  readonly scope: Scope;
-  next: number;
-}
-
-function expand(b: CellBuilder, body: Body, root: Scope): void {
-  if (body.error) throw body.error;
-  const stack: Frame[] = [{ body, scope: root, next: 0 }];
-  while (stack.length > 0) {
-    const f = stack[stack.length - 1] as Frame;
-    const e = f.body.elements[f.next++];
-    if (e === undefined) stack.pop();
-    else if (e.kind !== 'instance') addElement(b, e, f.scope);
-    else {
-      const child = enter(b, e, f.scope);
-      if (child !== null) stack.push(child);
-    }
-  }
 }
 
 function addElement(b: CellBuilder, e: Exclude<Element, InstanceElement>, scope: Scope): void {
@@ -180,14 +183,13 @@ function flatSource(b: CellBuilder, e: SourceElement, name: string, scope: Scope
   return { name, line: e.line, plus: b.net(e.plus, scope), minus: b.net(e.minus, scope), volts: e.volts };
 }
 
-/** The frame for a defined subcircuit; an undefined one is added as the device it stands for. */
-function enter(b: CellBuilder, x: InstanceElement, scope: Scope): Frame | null {
+/** An instance of a defined subcircuit, its pins by the subcircuit's port names; else a stand-in device. */
+function place(b: CellBuilder, x: InstanceElement, scope: Scope): void {
   const sub = b.ctx.file.subcktByName.get(x.subckt.toLowerCase());
   if (sub === undefined) {
     instanceDevice(b, x, scope);
-    return null;
+    return;
   }
-  if (sub.error) throw sub.error;
   if (x.nets.length !== sub.ports.length) {
     b.fail(
       x.line,
@@ -195,7 +197,7 @@ function enter(b: CellBuilder, x: InstanceElement, scope: Scope): Frame | null {
     );
   }
   x.params.forEach((_, p) => b.notes.ignoredParams.add(p));
-  const ports = new Map(sub.ports.map((p, i) => [p.toLowerCase(), b.net(x.nets[i] as string, scope)]));
-  const prefix = `${scope.prefix}${x.name}/`;
-  return { body: sub, scope: { prefix, lowerPrefix: prefix.toLowerCase(), ports }, next: 0 };
+  const pins: Record<string, string> = {};
+  sub.ports.forEach((p, i) => (pins[b.portName(p)] = b.net(x.nets[i] as string, scope)));
+  b.instances.push({ name: x.name, cell: sub.name, pins });
 }
