@@ -9,6 +9,7 @@ import { cellDesign } from '../../src/core/hierarchy/cellDesign.ts';
 import type { Cell, Design } from '../../src/core/model/design.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import { exportSpiceDesign } from '../../src/core/netlist-io/spiceDesignExport.ts';
+import { exportVerilogDesign } from '../../src/core/netlist-io/verilogDesignExport.ts';
 import { designFromImport } from '../../src/core/netlist-io/spiceDesign.ts';
 import { importSpice } from '../../src/core/netlist-io/spiceImport.ts';
 import { netlistArb } from './arbitraries.ts';
@@ -38,6 +39,17 @@ function meaning(d: Design) {
     expectations: c.expectations,
   }));
 }
+
+describe('structural Verilog of a design', () => {
+  it('writes one module per cell, placed cells first, instances connected by port name', () => {
+    const text = exportVerilogDesign(designOf(BUFFER));
+    expect(text.indexOf('module tide_inv')).toBeLessThan(text.indexOf('module tide_buf'));
+    expect(text).toContain('tide_inv X1 (.A(A), .Y(mid));');
+    expect(text).toContain('tide_inv X2 (.A(mid), .Y(Y));');
+    expect(text.match(/^endmodule$/gm)).toHaveLength(2);
+    // IEEE Std 1364-2005 clause 12.3.6: named port connections `.port(net)`.
+  });
+});
 
 describe('import keeps the hierarchy', () => {
   const d = designOf(BUFFER);

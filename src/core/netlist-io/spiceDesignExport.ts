@@ -40,7 +40,7 @@ function wiredNet(i: Instance, pin: string, placed: Cell): string {
 }
 
 /** Cells in an order where every cell comes after the cells it places (depth first, no recursion). */
-function placedFirst(cells: readonly Cell[], byName: ReadonlyMap<string, Cell>): Cell[] {
+export function placedFirst(cells: readonly Cell[], byName: ReadonlyMap<string, Cell>): Cell[] {
   const order: Cell[] = [];
   const seen = new Set<Cell>();
   for (const root of cells) {

@@ -20,14 +20,30 @@ interface Hops {
 }
 
 export function exportVerilog(netlist: Netlist): string {
-  const hops = channelHops(netlist);
-  const pins = new Set([...netlist.inputs, ...netlist.outputs]);
-  const rails = new Set(netlist.rails.map((r) => r.net));
-  const internal = netNames(netlist).filter((n) => !pins.has(n) && !rails.has(n));
-  const outputs = netlist.outputs.filter((n) => !netlist.inputs.includes(n));
   const lines = [
     `// ${netlist.name}: switch-level model exported by Railwise (IEEE Std 1364-2005 clause 7 primitives).`,
     `// ${CAUTION}`,
+    ...moduleLines(netlist),
+  ];
+  return `${lines.join('\n')}\n`;
+}
+
+/** What a module holds besides its own devices: the instances of other modules and the nets only they touch. */
+export interface ModuleExtras {
+  readonly nets: readonly string[];
+  readonly lines: readonly string[];
+}
+
+/** One cell as a module: ports (inputs, then outputs), rails as supply nets, wires, primitives, extras. */
+export function moduleLines(netlist: Netlist, extras: ModuleExtras = { nets: [], lines: [] }): string[] {
+  const hops = channelHops(netlist);
+  const pins = new Set([...netlist.inputs, ...netlist.outputs]);
+  const rails = new Set(netlist.rails.map((r) => r.net));
+  const internal = [...new Set([...netNames(netlist), ...extras.nets])].filter(
+    (n) => !pins.has(n) && !rails.has(n),
+  );
+  const outputs = netlist.outputs.filter((n) => !netlist.inputs.includes(n));
+  return [
     `module ${identifier(netlist.name || 'cell')} (${[...netlist.inputs, ...outputs].map(identifier).join(', ')});`,
     ...declaration('input', netlist.inputs),
     ...declaration('output', outputs),
@@ -37,9 +53,9 @@ export function exportVerilog(netlist: Netlist): string {
     ),
     ...declaration('wire', internal),
     ...netlist.devices.map((d) => `  ${instance(d, hops)}`),
+    ...extras.lines.map((l) => `  ${l}`),
     'endmodule',
   ];
-  return `${lines.join('\n')}\n`;
 }
 
 function declaration(keyword: string, nets: readonly string[]): string[] {
