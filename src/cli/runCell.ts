@@ -14,6 +14,7 @@ import { powerFromCounts } from '../core/power/powerReport.ts';
 import { DEFAULT_POWER_SETTINGS, PowerOptionsError, type PowerSettings } from '../core/power/settings.ts';
 import type { PowerReport } from '../core/power/types.ts';
 import { sizingReport } from '../core/sizing/sizingReport.ts';
+import { foundFunctions, type FoundFunction } from '../core/expect/foundFunction.ts';
 import type { SizingReport } from '../core/sizing/types.ts';
 import { compile } from '../core/compile/compile.ts';
 import { TransferError, type TransferReport } from '../core/dc/transfer.ts';
@@ -31,6 +32,8 @@ export interface RunOptions {
   /** Power settings given on the command line; the rest are the core's defaults. */
   readonly power?: Partial<PowerSettings>;
   readonly sizing: boolean;
+  /** Add the function each output computes, read off the sweep (`--found`). */
+  readonly found?: boolean;
   /** Output load for sizing, farads. */
   readonly load: number;
   readonly transfer?: TransferChoice;
@@ -51,6 +54,7 @@ interface Extras {
   readonly sizing?: SizingReport | undefined;
   readonly transfer?: TransferReport | undefined;
   readonly dc?: readonly VectorDc[] | undefined;
+  readonly found?: readonly FoundFunction[] | undefined;
 }
 
 export interface CellJson extends Omit<CheckReport, 'vectors' | 'steps'> {
@@ -61,6 +65,8 @@ export interface CellJson extends Omit<CheckReport, 'vectors' | 'steps'> {
   readonly power?: PowerReport;
   readonly sizing?: SizingReport;
   readonly transfer?: TransferReport;
+  /** With --found: per output, the function it computes as a minimal sum of products. */
+  readonly found?: readonly FoundFunction[];
   readonly caution: string;
 }
 
@@ -90,7 +96,8 @@ export function runCell(job: CellJob, options: RunOptions): CellResult {
     const powerJson =
       counts === null || power === undefined ? undefined : powerFromCounts(counts, power.settings);
     const transfer = options.transfer === undefined ? undefined : cellTransfer(job, options.transfer);
-    return { json: cellJson(job, report, { power: powerJson, sizing, transfer, dc: dc?.rows }) };
+    const found = options.found === true && report.vectors !== undefined ? foundFunctions(report) : undefined;
+    return { json: cellJson(job, report, { power: powerJson, sizing, transfer, dc: dc?.rows, found }) };
   } catch (e) {
     return { failure: { file: job.file, cell: job.cell, ...failureOf(e) } };
   }
@@ -141,7 +148,7 @@ export function failureOf(e: unknown): { message: string; field?: string } {
 }
 
 function cellJson(job: CellJob, report: CheckReport, extras: Extras): CellJson {
-  const { power, sizing, transfer, dc } = extras;
+  const { power, sizing, transfer, dc, found } = extras;
   const rows = (list: readonly VectorReport[]): VectorJson[] =>
     list.map((v, i) => (dc?.[i] === undefined ? vectorJson(v) : { ...vectorJson(v), dc: dc[i] }));
   return {
@@ -158,6 +165,7 @@ function cellJson(job: CellJob, report: CheckReport, extras: Extras): CellJson {
     ...(power === undefined ? {} : { power }),
     ...(sizing === undefined ? {} : { sizing }),
     ...(transfer === undefined ? {} : { transfer }),
+    ...(found === undefined ? {} : { found }),
     caution: CAUTION,
   };
 }

@@ -3,6 +3,7 @@
  * paths, and a summary line per cell. Built from the same JSON object `--json` prints.
  */
 import type { Finding } from '../core/analysis/report.ts';
+import { foundFunctionText } from '../core/expect/foundFunction.ts';
 import { formatSi, type Colour } from './colour.ts';
 import { dcLines, transferLines } from './dcText.ts';
 import type { CellFailure, CellSkip } from './loadCells.ts';
@@ -100,7 +101,7 @@ function findingLines(findings: readonly Finding[], c: Colour): string[] {
 }
 
 function extraLines(json: CellJson): string[] {
-  const out: string[] = [];
+  const out: string[] = (json.found ?? []).map((f) => `  found: ${foundFunctionText(f)}`);
   if (json.power !== undefined) {
     const p = json.power;
     out.push(
