@@ -12,8 +12,8 @@ import { PropertiesForm } from './PropertiesForm.tsx';
 import { MessageBar } from './MessageBar.tsx';
 import { HelpOverlay } from './HelpOverlay.tsx';
 import { AboutBox } from './AboutBox.tsx';
-import { CellChooser } from './CellChooser.tsx';
 import { handleKey } from './keyboard.ts';
+import { LibraryView } from './LibraryView.tsx';
 import { commandById } from './commands.ts';
 import { OPEN_ACCEPT, OPEN_INPUT_ID, openFile } from './files.ts';
 import './app.css';
@@ -67,7 +67,7 @@ export function App() {
       <OpenFileInput />
       {overlay === 'help' ? <HelpOverlay /> : null}
       {overlay === 'about' ? <AboutBox /> : null}
-      <CellChooser />
+      <LibraryView />
     </div>
   );
 }

@@ -4,6 +4,7 @@
  * first nine in shelf order, Q turns, F flips, J joins (wires), V views all; the usual system
  * shortcuts for clipboard and history.
  */
+import { openLibraryView } from '../state/library.ts';
 import type { PartKind } from '../core/sheet/types.ts';
 import { PART_KINDS, partSpec } from '../core/sheet/parts/index.ts';
 import {
@@ -213,6 +214,13 @@ export const COMMANDS: readonly Command[] = [
     group: 'File',
     keys: [{ key: 'o', ctrl: true }],
     run: pickAndOpen,
+  },
+  {
+    id: 'cells',
+    label: 'Cells of this design, each checked',
+    group: 'File',
+    keys: [],
+    run: openLibraryView,
   },
   { id: 'save', label: 'Save design file', group: 'File', keys: [{ key: 's', ctrl: true }], run: saveDesign },
   {

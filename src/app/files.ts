@@ -2,11 +2,13 @@
  * Opening, saving, importing and exporting. Every read is validated first; a bad file gives a
  * message naming the file and the line or field, and the open design is left exactly as it was.
  */
-import type { CellDesign } from '../core/model/design.ts';
+import type { Design } from '../core/model/design.ts';
 import { DEFAULT_TECHNOLOGY } from '../core/model/technology.ts';
 import { DesignFileError, parseDesignFile, serializeDesign } from '../core/format/designFile.ts';
-import { SpiceImportError } from '../core/netlist-io/spiceImport.ts';
-import { cellsFromText, isSpiceFileName, SPICE_EXTENSIONS } from '../core/netlist-io/cellFiles.ts';
+import { importSpice, SpiceImportError } from '../core/netlist-io/spiceImport.ts';
+import { designFromImport } from '../core/netlist-io/spiceDesign.ts';
+import { openLibraryView } from '../state/library.ts';
+import { isSpiceFileName, SPICE_EXTENSIONS } from '../core/netlist-io/cellFiles.ts';
 import { exportSpice } from '../core/netlist-io/spiceExport.ts';
 import { exportVerilog } from '../core/netlist-io/verilogExport.ts';
 import { exportTruthTableCsv } from '../core/netlist-io/csvExport.ts';
@@ -14,7 +16,7 @@ import { checkDesign } from '../core/analysis/check.ts';
 import { sheetToSvg } from '../core/sheet/svg.ts';
 import { EMPTY_SHEET } from '../core/sheet/edits.ts';
 import { flushSync } from 'react-dom';
-import { currentDesign, loadDesign, offerCells, setViewport, showMessage, store } from '../state/store.ts';
+import { currentDesign, loadDesign, setViewport, showMessage, store } from '../state/store.ts';
 import { currentStage } from '../editor/stageRef.ts';
 import { fitToView } from '../state/view.ts';
 import { downloadText, downloadUrl, safeFileName } from './download.ts';
@@ -27,52 +29,35 @@ export type ExportKind = 'spice' | 'verilog' | 'csv' | 'svg' | 'png';
 
 export const isSpiceFile = isSpiceFileName;
 
-export interface SpiceDesigns {
-  /** One design per readable cell, in file order. */
-  readonly designs: readonly CellDesign[];
+export interface SpiceDesign {
+  /** Every cell of the file, each keeping the instances it places, in file order. */
+  readonly design: Design;
   /** Cells of a library that could not be read, each with its reason (file and line). */
   readonly failed: readonly string[];
 }
 
-/** Reads a SPICE text into designs, one per cell; throws when no cell at all can be read. */
-export function designsFromSpice(text: string, fileName: string): SpiceDesigns {
-  const loaded = cellsFromText(text, fileName).cells;
-  const designs = loaded.flatMap((c): CellDesign[] =>
-    'job' in c
-      ? [
-          {
-            name: c.job.cell,
-            technology: DEFAULT_TECHNOLOGY,
-            netlist: c.job.netlist,
-            expectations: c.job.expectations,
-            sequences: [],
-          },
-        ]
-      : [],
-  );
-  const failed = loaded.flatMap((c) => ('failure' in c ? [c.failure] : []));
-  if (designs.length === 0) {
-    const first = failed[0];
-    const line = first?.line ?? 1;
-    const detail = (first?.message ?? 'no cell could be read').replace(`${fileName}:${line}: `, '');
-    throw new SpiceImportError(fileName, line, detail);
+/** Reads a SPICE text into one design of all its cells; throws when no cell at all can be read. */
+export function designFromSpice(text: string, fileName: string): SpiceDesign {
+  const imported = importSpice(text, fileName);
+  const failed = imported.failed.map((f) => `${f.name} (${f.error.message})`);
+  if (imported.cells.length === 0) {
+    const first = imported.failed[0]?.error;
+    if (first !== undefined) throw first;
+    throw new SpiceImportError(fileName, 1, 'no cell could be read');
   }
-  return { designs, failed: failed.map((f) => (f.cell === null ? f.message : `${f.cell} (${f.message})`)) };
-}
-
-/** Loads one imported cell and says where it came from. */
-export function loadImportedCell(design: CellDesign, fileName: string, failed: readonly string[]): void {
-  loadDesign(design);
-  fitToView();
-  const note = failed.length ? `. Not readable: ${failed.join('; ')}` : '';
-  showMessage('info', `Imported ${design.name} from ${fileName}${note}`);
+  const name = fileName.replace(/^.*[\\/]/, '').replace(/\.[^.]+$/, '') || 'design';
+  return { design: designFromImport(imported, DEFAULT_TECHNOLOGY, name), failed };
 }
 
 function openSpice(text: string, fileName: string): void {
-  const { designs, failed } = designsFromSpice(text, fileName);
-  // A library: let the designer pick the cell; nothing changes until they do.
-  if (designs.length > 1) offerCells(fileName, designs, failed);
-  else loadImportedCell(designs[0]!, fileName, failed);
+  const { design, failed } = designFromSpice(text, fileName);
+  loadDesign(design);
+  fitToView();
+  const note = failed.length ? `. Not readable: ${failed.join('; ')}` : '';
+  const what = design.cells.length > 1 ? `${design.cells.length} cells` : design.open;
+  showMessage('info', `Imported ${what} from ${fileName}${note}`);
+  // A library: the table of its cells, where any one opens onto the sheet.
+  if (design.cells.length > 1) openLibraryView();
 }
 
 /** Opens text as a design file or a SPICE netlist. Returns false when the file was refused. */

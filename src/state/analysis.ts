@@ -7,6 +7,7 @@
  * by serialising: the document slice keeps unchanged netlists, expectations and sequences as the
  * same objects, and numbers their changes.
  */
+import { followLibrary } from './library.ts';
 import { powerFromCounts } from '../core/power/powerReport.ts';
 import { LiveSession } from '../core/view/liveSession.ts';
 import { completeVector } from '../core/view/vectorControl.ts';
@@ -147,8 +148,10 @@ export function startAnalysis(): () => void {
   };
   react(store.getState(), null);
   const unsubscribe = store.subscribe((s, previous) => react(s, previous));
+  const stopLibrary = followLibrary();
   return () => {
     unsubscribe();
+    stopLibrary();
     if (timer !== null) clearTimeout(timer);
   };
 }

@@ -1,6 +1,6 @@
 /**
  * The application store: one vanilla zustand store of slices (document, history, selection,
- * viewport, interaction, simulation, cell choice, messages), a thin React hook, and actions as
+ * viewport, interaction, simulation, messages), a thin React hook, and actions as
  * module functions. Its API for panels, the overlay and tests is documented in ./README.md.
  *
  * Everything that changes the document goes through `commitDoc` (one undo step) or a gesture
@@ -48,13 +48,6 @@ export interface Message {
   readonly text: string;
 }
 
-/** The cells of an imported library, waiting for the designer to pick one (nothing loaded yet). */
-export interface CellChoice {
-  readonly fileName: string;
-  readonly designs: readonly CellDesign[];
-  readonly failed: readonly string[];
-}
-
 export interface RailwiseState {
   readonly doc: SheetDocument;
   /** The open cell, derived from `doc` by applyDoc (instances flattened); never edited directly. */
@@ -78,7 +71,6 @@ export interface RailwiseState {
   /** Size of the sheet area in pixels, kept by the canvas for fit-to-view. */
   readonly screen: { readonly width: number; readonly height: number };
   readonly simulation: SimulationState;
-  readonly cellChoice: CellChoice | null;
 }
 
 export const BLANK_DOCUMENT: SheetDocument = {
@@ -106,7 +98,6 @@ function initialState(doc: SheetDocument): RailwiseState {
     overlay: null,
     screen: { width: 800, height: 600 },
     simulation: INITIAL_SIMULATION,
-    cellChoice: null,
   };
 }
 
@@ -139,6 +130,20 @@ function applyDoc(doc: SheetDocument, history: HistoryState): void {
     netlistRevision: circuitChanged ? revision : s.netlistRevision,
     selection: { ...s.selection, selected: pruneSelection(s.selection.selected, doc.sheet) },
   });
+}
+
+/**
+ * Puts another cell of the design on the sheet. Navigation, not an edit: nothing is recorded, so
+ * undo still takes back the last edit (and with it the cell it was made in).
+ */
+export function openCellOnSheet(name: string): boolean {
+  const s = store.getState();
+  if (s.history.gestureStart !== null) cancelGesture();
+  const design = currentDesign();
+  if (design.open === name || !design.cells.some((c) => c.name === name)) return false;
+  applyDoc(documentFromDesign({ ...design, open: name }), store.getState().history);
+  store.setState({ selection: EMPTY_SELECTION, gesture: null });
+  return true;
 }
 
 /** The one way to change the document as a single undo step. Returns false when nothing changed. */
@@ -286,19 +291,6 @@ export function setOverlay(overlay: RailwiseState['overlay']): void {
 
 export function setClipboard(clipboard: Clip | null): void {
   store.setState({ clipboard });
-}
-
-/** Offers the cells of a library file; nothing is loaded until one is chosen. */
-export function offerCells(
-  fileName: string,
-  designs: readonly CellDesign[],
-  failed: readonly string[],
-): void {
-  store.setState({ cellChoice: { fileName, designs, failed } });
-}
-
-export function closeCellChoice(): void {
-  store.setState({ cellChoice: null });
 }
 
 export function setScreen(width: number, height: number): void {

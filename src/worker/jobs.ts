@@ -6,6 +6,7 @@
 import { DEFAULT_MAX_INPUTS } from '../core/analysis/check.ts';
 import { analyseCell } from '../core/power/cellAnalysis.ts';
 import { sizingReport } from '../core/sizing/sizingReport.ts';
+import { checkLibraryCell } from '../core/analysis/libraryCheck.ts';
 import { expressionProblem } from '../core/view/expectation.ts';
 import { StepLevelRecorder } from '../core/view/sequenceLevels.ts';
 import { MAX_INPUTS_WITH_UNDRIVEN } from './protocol.ts';
@@ -15,6 +16,8 @@ import type {
   CheckResult,
   JobProgress,
   JobResult,
+  LibraryJob,
+  LibraryResult,
   SequenceJob,
   SizingJob,
   SizingResult,
@@ -93,6 +96,17 @@ function sizing(job: SizingJob): Pick<SizingResult, 'sizing' | 'error'> {
   }
 }
 
+function library(job: LibraryJob, onProgress: (p: JobProgress) => void): Pick<LibraryResult, 'rows'> {
+  const progress = throttled(onProgress);
+  const { cells } = job.design;
+  const rows = cells.map((c, i) => {
+    const row = checkLibraryCell(job.design, c.name);
+    progress(i + 1, cells.length);
+    return row;
+  });
+  return { rows };
+}
+
 export function runJob(job: AnalysisJob, onProgress: (p: JobProgress) => void = () => {}): JobResult {
   const started = performance.now();
   const elapsed = (): number => performance.now() - started;
@@ -103,5 +117,7 @@ export function runJob(job: AnalysisJob, onProgress: (p: JobProgress) => void = 
       return { kind: 'sequence', revision: job.revision, ...sequence(job, onProgress), elapsedMs: elapsed() };
     case 'sizing':
       return { kind: 'sizing', revision: job.revision, ...sizing(job), elapsedMs: elapsed() };
+    case 'library':
+      return { kind: 'library', revision: job.revision, ...library(job, onProgress), elapsedMs: elapsed() };
   }
 }

@@ -3,7 +3,8 @@
  * it was computed for; the page drops results whose job is no longer the lane's current one.
  */
 import type { CheckReport } from '../core/analysis/report.ts';
-import type { CellDesign, InputVector } from '../core/model/design.ts';
+import type { CellDesign, Design, InputVector } from '../core/model/design.ts';
+import type { LibraryRow } from '../core/analysis/libraryCheck.ts';
 import type { PowerCounts } from '../core/power/tally.ts';
 import type { SizingReport } from '../core/sizing/types.ts';
 import type { StepLevel } from '../core/view/levelStrip.ts';
@@ -37,7 +38,15 @@ export interface SizingJob {
   readonly load: number;
 }
 
-export type AnalysisJob = SweepJob | SequenceJob | SizingJob;
+/** Every cell of a design checked on its own (the library view): one row per cell. */
+export interface LibraryJob {
+  readonly kind: 'library';
+  readonly revision: number;
+  /** The design without its drawings. */
+  readonly design: Design;
+}
+
+export type AnalysisJob = SweepJob | SequenceJob | SizingJob | LibraryJob;
 
 export interface JobProgress {
   readonly done: number;
@@ -64,7 +73,14 @@ export interface SizingResult {
   readonly elapsedMs: number;
 }
 
-export type JobResult = CheckResult | SizingResult;
+export interface LibraryResult {
+  readonly kind: 'library';
+  readonly revision: number;
+  readonly rows: readonly LibraryRow[];
+  readonly elapsedMs: number;
+}
+
+export type JobResult = CheckResult | SizingResult | LibraryResult;
 
 /** A job as the panels see it, whatever its kind. */
 export type JobStatus = 'idle' | 'running' | 'done' | 'cancelled' | 'failed';
@@ -102,13 +118,15 @@ export const MAX_INPUTS_WITH_UNDRIVEN = 10;
 /** Sweeps with more vectors than this show a progress bar and a cancel button. */
 export const PROGRESS_THRESHOLD_VECTORS = 4096;
 
-/** Solves a job takes: vectors of a sweep, steps of a sequence, none for sizing. */
+/** Solves a job takes: vectors of a sweep, steps of a sequence, none for sizing; cells of a library. */
 export function jobSize(job: AnalysisJob): number {
   switch (job.kind) {
     case 'sequence':
       return job.steps.length;
     case 'sizing':
       return 0;
+    case 'library':
+      return job.design.cells.length;
     case 'sweep':
       return (job.undrivenInputs === true ? 3 : 2) ** job.cell.netlist.inputs.length;
   }
