@@ -7,7 +7,9 @@ import { RailwisePage } from './pages/RailwisePage.ts';
 
 test('a shared link opens the design it carries; a damaged one changes nothing', async ({ page }) => {
   const app = new RailwisePage(page);
-  const fragment = await encodeDesignFragment(serializeDesign(designOfCell(starterById('tristate-inverter')!.design)));
+  const fragment = await encodeDesignFragment(
+    serializeDesign(designOfCell(starterById('tristate-inverter')!.design)),
+  );
 
   await app.open(`/${fragment}`);
   await expect(app.message).toContainText('from a shared link');

@@ -125,11 +125,10 @@ export class RailwisePage {
     await this.page.waitForFunction(() => {
       const api = window.__railwise!;
       const saved = localStorage.getItem(api.autosaveKey);
-      return (
-        saved !== null &&
-        JSON.parse(saved).netlist !== undefined &&
-        JSON.stringify(JSON.parse(saved).sheet) === JSON.stringify(api.state().doc.sheet)
-      );
+      if (saved === null) return false;
+      const file = JSON.parse(saved) as { open: string; cells: { name: string; sheet?: unknown }[] };
+      const open = file.cells.find((c) => c.name === file.open);
+      return JSON.stringify(open?.sheet) === JSON.stringify(api.state().doc.sheet);
     });
   }
 }
