@@ -11,6 +11,8 @@ import { openLibraryView } from '../state/library.ts';
 import { isSpiceFileName, SPICE_EXTENSIONS } from '../core/netlist-io/cellFiles.ts';
 import { exportSpice } from '../core/netlist-io/spiceExport.ts';
 import { exportVerilog } from '../core/netlist-io/verilogExport.ts';
+import { exportSpiceDesign } from '../core/netlist-io/spiceDesignExport.ts';
+import { exportVerilogDesign } from '../core/netlist-io/verilogDesignExport.ts';
 import { exportTruthTableCsv } from '../core/netlist-io/csvExport.ts';
 import { checkDesign } from '../core/analysis/check.ts';
 import { sheetToSvg } from '../core/sheet/svg.ts';
@@ -105,19 +107,29 @@ export function newDesign(): void {
   });
 }
 
+/** A design of several cells keeps its hierarchy (one `.subckt` per cell); one cell exports alone. */
+function spiceText(): string {
+  const whole = currentDesign();
+  if (whole.cells.length > 1) return exportSpiceDesign(whole);
+  const { design } = store.getState();
+  return exportSpice(design.netlist, design.technology, { expectations: design.expectations });
+}
+
+/** One module per cell for a design of several cells, else the one cell's module. */
+function verilogText(): string {
+  const whole = currentDesign();
+  return whole.cells.length > 1 ? exportVerilogDesign(whole) : exportVerilog(store.getState().design.netlist);
+}
+
 /** Writes the export; problems (e.g. too many inputs for a truth table) become a message. */
 export function exportDesign(kind: ExportKind): void {
   const { design } = store.getState();
   try {
     switch (kind) {
       case 'spice':
-        return downloadText(
-          safeFileName(design.name, '.sp'),
-          exportSpice(design.netlist, design.technology, { expectations: design.expectations }),
-          'text/plain',
-        );
+        return downloadText(safeFileName(design.name, '.sp'), spiceText(), 'text/plain');
       case 'verilog':
-        return downloadText(safeFileName(design.name, '.v'), exportVerilog(design.netlist), 'text/plain');
+        return downloadText(safeFileName(design.name, '.v'), verilogText(), 'text/plain');
       case 'csv':
         return downloadText(
           safeFileName(design.name, '.csv'),

@@ -11,6 +11,7 @@ import { autoPlace } from '../core/sheet/autoPlace.ts';
 import { samePlainData } from '../core/model/plainData.ts';
 import { designOfCell } from '../core/hierarchy/cellDesign.ts';
 import { flattenCell, HierarchyError } from '../core/hierarchy/flatten.ts';
+import { followCellChange } from '../core/hierarchy/edits.ts';
 
 /**
  * The open cell's fields at the top (what the editor and the panels read), the design's other
@@ -116,6 +117,19 @@ function flattened(doc: SheetDocument, open: Cell): { netlist: Netlist; issue: S
     if (!(e instanceof HierarchyError)) throw e;
     return { netlist: open.netlist, issue: { kind: 'hierarchy', parts: [], message: e.message } };
   }
+}
+
+/**
+ * A change to the open cell that other cells place: when its name or a pin's name changed, every
+ * instance of it follows, in the same document (so in the same undo step).
+ */
+export function followOpenCell(before: SheetDocument, next: SheetDocument, open: Cell): SheetDocument {
+  const cells = next.cells ?? [];
+  if (next === before || (next.sheet === before.sheet && next.name === before.name)) return next;
+  if (!cells.some((c) => c.instances.some((i) => i.cell === open.name))) return next;
+  const after = { name: next.name, netlist: sheetToNetlist(next.sheet, next.name).netlist };
+  const followed = followCellChange(cells, open, after);
+  return followed === cells ? next : { ...next, cells: followed };
 }
 
 /** Every cell of the document's design in order, the open one as derived. */

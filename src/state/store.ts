@@ -19,6 +19,7 @@ import {
   deriveDesign,
   designOfDocument,
   documentFromDesign,
+  followOpenCell,
   type SheetDocument,
   type SheetGeometry,
 } from './document.ts';
@@ -150,7 +151,7 @@ export function openCellOnSheet(name: string): boolean {
 export function commitDoc(update: (doc: SheetDocument) => SheetDocument): boolean {
   const s = store.getState();
   const base = s.history.gestureStart ?? s.doc;
-  const next = update(s.doc);
+  const next = followOpenCell(s.doc, update(s.doc), s.openCell);
   if (next === s.doc && s.history.gestureStart === null) return false;
   applyDoc(next, recordStep(s.history, base));
   return true;

@@ -3,7 +3,12 @@
  * instances by their hierarchical names (docs/semantics.md §1, §5), and `--found` prints the
  * function each cell computes.
  */
+import { mkdtempSync, writeFileSync } from 'node:fs';
+import { tmpdir } from 'node:os';
+import { join } from 'node:path';
 import { describe, expect, it } from 'vitest';
+import { serializeDesign } from '../../src/core/format/designFile.ts';
+import { bufferDesign } from '../hierarchy/cells.ts';
 import { json, railwise } from './inProcess.ts';
 
 const FILE = 'tests/cli/fixtures/quay-hierarchy.sp';
@@ -17,6 +22,19 @@ describe('hierarchical names in the report', () => {
     expect(current[0]?.path).toEqual(['VDD', 'X2.RL', 'Y', 'X2.MN', 'GND']);
     // A = 1: X1 draws through its own load and NMOS.
     expect(current[1]?.path).toEqual(['VDD', 'X1.RL', 'mid', 'X1.MN', 'GND']);
+  });
+});
+
+describe('a design file of several cells', () => {
+  it('is checked cell by cell, each flattened, as a library', async () => {
+    const dir = mkdtempSync(join(tmpdir(), 'railwise-'));
+    const file = join(dir, 'quay.railwise.json');
+    writeFileSync(file, serializeDesign(bufferDesign));
+    const { status, body } = await json('check', file);
+    const cells = body['cells'] as { cell: string; vectors: { outputs: Record<string, string> }[] }[];
+    expect(status).toBe(0);
+    expect(cells.map((c) => c.cell)).toEqual(['inv', 'buf']);
+    expect(cells[1]?.vectors.map((v) => v.outputs['Y'])).toEqual(['0', '1']); // two inverters: Y = A
   });
 });
 

@@ -112,6 +112,31 @@ describe('the library view in the store', () => {
     expect(store.getState().doc.expectations).toEqual({});
   });
 
+  it('renaming a pin or the open cell on the sheet renames it in every instance, in one undo step', () => {
+    openCellOnSheet('inv');
+    const renamePart = (from: string, to: string) =>
+      commitDoc((doc) => ({
+        ...doc,
+        sheet: {
+          ...doc.sheet,
+          parts: doc.sheet.parts.map((p) => (p.kind === 'input' && p.name === from ? { ...p, name: to } : p)),
+        },
+      }));
+    renamePart('A', 'IN');
+    commitDoc((doc) => ({ ...doc, name: 'tide_inv' }));
+    const buf = currentDesign().cells.find((c) => c.name === 'buf');
+    expect(buf?.instances.map((i) => [i.cell, Object.keys(i.pins).sort()])).toEqual([
+      ['tide_inv', ['IN', 'Y']],
+      ['tide_inv', ['IN', 'Y']],
+    ]);
+    openCellOnSheet('buf');
+    expect(store.getState().issues).toEqual([]);
+    expect(store.getState().design.netlist.devices).toHaveLength(4);
+    undo();
+    undo();
+    expect(currentDesign().cells.find((c) => c.name === 'buf')?.instances[0]?.cell).toBe('inv');
+  });
+
   it('checks the library again after an edit while the view is open', async () => {
     const stop = followLibrary();
     openLibraryView();

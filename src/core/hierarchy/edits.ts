@@ -82,3 +82,48 @@ function renamedPinCell(cell: Cell, from: string, to: string): Cell {
     })),
   };
 }
+
+/**
+ * Old → new names of the pins that changed in place: same count of inputs (and of outputs), a name
+ * at one position that is new. A pin added or removed is no rename.
+ */
+export function renamedPins(before: Netlist, after: Netlist): Map<string, string> {
+  const renames = new Map<string, string>();
+  const old = new Set([...before.inputs, ...before.outputs]);
+  for (const [a, b] of [
+    [before.inputs, after.inputs],
+    [before.outputs, after.outputs],
+  ] as const) {
+    if (a.length !== b.length) continue;
+    a.forEach((name, i) => {
+      const next = b[i] as string;
+      if (next !== name && !old.has(next)) renames.set(name, next);
+    });
+  }
+  return renames;
+}
+
+/**
+ * The other cells of a design after one cell changed its name or renamed pins in place: every
+ * instance of it follows. Returns `cells` itself when nothing places the cell or nothing changed.
+ */
+export function followCellChange(
+  cells: readonly Cell[],
+  before: Pick<Cell, 'name' | 'netlist'>,
+  after: Pick<Cell, 'name' | 'netlist'>,
+): readonly Cell[] {
+  const renames = renamedPins(before.netlist, after.netlist);
+  if (renames.size === 0 && before.name === after.name) return cells;
+  const follow = (i: Instance): Instance => ({
+    ...i,
+    cell: after.name,
+    pins: Object.fromEntries(Object.entries(i.pins).map(([pin, net]) => [renames.get(pin) ?? pin, net])),
+  });
+  let changed = false;
+  const out = cells.map((c) => {
+    if (!c.instances.some((i) => i.cell === before.name)) return c;
+    changed = true;
+    return { ...c, instances: c.instances.map((i) => (i.cell === before.name ? follow(i) : i)) };
+  });
+  return changed ? out : cells;
+}
