@@ -14,6 +14,7 @@ import { HelpOverlay } from './HelpOverlay.tsx';
 import { AboutBox } from './AboutBox.tsx';
 import { handleKey } from './keyboard.ts';
 import { LibraryView } from './LibraryView.tsx';
+import { InstanceList, SheetPath } from './Hierarchy.tsx';
 import { commandById } from './commands.ts';
 import { OPEN_ACCEPT, OPEN_INPUT_ID, openFile } from './files.ts';
 import './app.css';
@@ -50,9 +51,11 @@ export function App() {
       <nav className="rw-left" aria-label="Shelves">
         <PartsShelf />
         <PropertiesForm />
+        <InstanceList />
         <StarterShelf />
       </nav>
       <main className="rw-centre">
+        <SheetPath />
         <SheetCanvas
           controller={controller}
           onFirstLayout={fitToView}

@@ -15,7 +15,8 @@ import {
   startLibraryCheck,
 } from '../state/library.ts';
 import { useSimulation } from '../state/simulation.ts';
-import { openCellOnSheet, useStore } from '../state/store.ts';
+import { useStore } from '../state/store.ts';
+import { openCellOnSheet } from '../state/navigation.ts';
 import { fitToView } from '../state/view.ts';
 import { Dialog } from './Dialog.tsx';
 import { attachLibertyFile, LIBERTY_INPUT_ID } from './libraryFiles.ts';

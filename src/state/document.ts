@@ -3,15 +3,13 @@
  * stored here; it is derived from the sheet on every change, so the two cannot disagree.
  */
 import type { Cell, CellDesign, Design, Instance, Sequence } from '../core/model/design.ts';
-import type { Netlist } from '../core/model/netlist.ts';
 import type { Technology } from '../core/model/technology.ts';
 import type { Sheet } from '../core/sheet/types.ts';
 import { sheetToNetlist, type SheetIssue } from '../core/sheet/toNetlist.ts';
 import { autoPlace } from '../core/sheet/autoPlace.ts';
 import { samePlainData } from '../core/model/plainData.ts';
 import { designOfCell } from '../core/hierarchy/cellDesign.ts';
-import { flattenCell, HierarchyError } from '../core/hierarchy/flatten.ts';
-import { followCellChange } from '../core/hierarchy/edits.ts';
+import { flattened, openCellOf, seenFrom } from './documentCells.ts';
 
 /**
  * The open cell's fields at the top (what the editor and the panels read), the design's other
@@ -33,6 +31,16 @@ export interface SheetDocument {
   readonly openAt?: number;
   /** The design's own name (the file name on save); the open cell's name when absent. */
   readonly designName?: string;
+  /**
+   * The open cell seen inside another (descended into): the cell analysed, and the instance names
+   * from it down to the open cell. Levels and findings are then the top cell's, named as it names them.
+   */
+  readonly context?: SheetContext;
+}
+
+export interface SheetContext {
+  readonly top: string;
+  readonly instances: readonly string[];
 }
 
 /** Drawing facts the analysis overlay needs to paint levels onto the sheet. */
@@ -66,87 +74,36 @@ export interface DerivedDesign {
  */
 export function deriveDesign(doc: SheetDocument, before: CellDesign | null = null): DerivedDesign {
   const d = sheetToNetlist(doc.sheet, doc.name);
-  const deviceParts: Record<string, string> = {};
-  for (const [partId, device] of Object.entries(d.partDevices)) deviceParts[device] ??= partId;
   const openCell = openCellOf(doc, d.netlist);
-  const flat = flattened(doc, openCell);
+  const seen = seenFrom(doc, openCell);
+  const flat = flattened(doc, openCell, seen.top.name);
   const design: CellDesign = {
-    name: doc.name,
+    name: seen.top.name,
     technology: kept(before?.technology, doc.technology),
     netlist: kept(before?.netlist, flat.netlist),
-    expectations: doc.expectations,
-    sequences: doc.sequences,
+    expectations: seen.top.expectations,
+    sequences: seen.top.sequences,
     sheet: doc.sheet,
     ...(doc.notes === undefined ? {} : { notes: doc.notes }),
   };
+  const names = seen.placement;
+  const rename = <T extends string>(record: Readonly<Record<string, T>>, f: (n: string) => string) =>
+    names === null ? record : Object.fromEntries(Object.entries(record).map(([k, v]) => [k, f(v)]));
+  const partDevices = rename(d.partDevices, (n) => names?.device(n) ?? n);
+  const deviceParts: Record<string, string> = {};
+  for (const [partId, device] of Object.entries(partDevices)) deviceParts[device] ??= partId;
   return {
     design,
     geometry: {
-      wireNets: d.wireNets,
-      pinNets: d.pinNets,
-      partDevices: d.partDevices,
+      wireNets: rename(d.wireNets, (n) => names?.net(n) ?? n),
+      pinNets: rename(d.pinNets, (n) => names?.net(n) ?? n),
+      partDevices,
       deviceParts,
       junctions: d.junctions,
       openEnds: d.openEnds,
     },
     issues: flat.issue === null ? d.issues : [...d.issues, flat.issue],
     openCell,
-  };
-}
-
-function openCellOf(doc: SheetDocument, netlist: Netlist): Cell {
-  return {
-    name: doc.name,
-    netlist,
-    instances: doc.instances ?? [],
-    expectations: doc.expectations,
-    sequences: doc.sequences,
-    sheet: doc.sheet,
-    ...(doc.globals === undefined ? {} : { globals: doc.globals }),
-  };
-}
-
-/** The open cell with its instances expanded; a hierarchy that cannot be flattened is an issue. */
-function flattened(doc: SheetDocument, open: Cell): { netlist: Netlist; issue: SheetIssue | null } {
-  if (open.instances.length === 0) return { netlist: open.netlist, issue: null };
-  const cells = new Map((doc.cells ?? []).map((c) => [c.name, c]));
-  cells.set(open.name, open);
-  try {
-    return { netlist: flattenCell(cells, open.name), issue: null };
-  } catch (e) {
-    if (!(e instanceof HierarchyError)) throw e;
-    return { netlist: open.netlist, issue: { kind: 'hierarchy', parts: [], message: e.message } };
-  }
-}
-
-/**
- * A change to the open cell that other cells place: when its name or a pin's name changed, every
- * instance of it follows, in the same document (so in the same undo step).
- */
-export function followOpenCell(before: SheetDocument, next: SheetDocument, open: Cell): SheetDocument {
-  const cells = next.cells ?? [];
-  if (next === before || (next.sheet === before.sheet && next.name === before.name)) return next;
-  if (!cells.some((c) => c.instances.some((i) => i.cell === open.name))) return next;
-  const after = { name: next.name, netlist: sheetToNetlist(next.sheet, next.name).netlist };
-  const followed = followCellChange(cells, open, after);
-  return followed === cells ? next : { ...next, cells: followed };
-}
-
-/** Every cell of the document's design in order, the open one as derived. */
-export function documentCells(doc: SheetDocument, openCell: Cell): Cell[] {
-  const others = doc.cells ?? [];
-  const at = Math.min(doc.openAt ?? others.length, others.length);
-  return [...others.slice(0, at), openCell, ...others.slice(at)];
-}
-
-/** The whole design the document holds, as saved. */
-export function designOfDocument(doc: SheetDocument, openCell: Cell): Design {
-  return {
-    name: doc.designName ?? doc.name,
-    technology: doc.technology,
-    cells: documentCells(doc, openCell),
-    open: doc.name,
-    ...(doc.notes === undefined ? {} : { notes: doc.notes }),
   };
 }
 

@@ -15,14 +15,8 @@ import type { SheetIssue } from '../core/sheet/toNetlist.ts';
 import type { Clip } from '../core/sheet/clipboard.ts';
 import type { PartKind, Point } from '../core/sheet/types.ts';
 import { NO_ITEMS } from '../core/sheet/selection.ts';
-import {
-  deriveDesign,
-  designOfDocument,
-  documentFromDesign,
-  followOpenCell,
-  type SheetDocument,
-  type SheetGeometry,
-} from './document.ts';
+import { deriveDesign, documentFromDesign, type SheetDocument, type SheetGeometry } from './document.ts';
+import { designOfDocument, followOpenCell } from './documentCells.ts';
 import { EMPTY_HISTORY, recordStep, redoStep, undoStep, type HistoryState } from './history.ts';
 import { EMPTY_SELECTION, pruneSelection, type SelectionState } from './selection.ts';
 import { DEFAULT_VIEWPORT, type Viewport } from './viewport.ts';
@@ -134,17 +128,13 @@ function applyDoc(doc: SheetDocument, history: HistoryState): void {
 }
 
 /**
- * Puts another cell of the design on the sheet. Navigation, not an edit: nothing is recorded, so
- * undo still takes back the last edit (and with it the cell it was made in).
+ * Shows another document without an undo step: navigation between cells, not an edit, so undo
+ * still takes back the last edit (and with it the cell it was made in).
  */
-export function openCellOnSheet(name: string): boolean {
-  const s = store.getState();
-  if (s.history.gestureStart !== null) cancelGesture();
-  const design = currentDesign();
-  if (design.open === name || !design.cells.some((c) => c.name === name)) return false;
-  applyDoc(documentFromDesign({ ...design, open: name }), store.getState().history);
+export function showDocument(doc: SheetDocument): void {
+  if (store.getState().history.gestureStart !== null) cancelGesture();
+  applyDoc(doc, store.getState().history);
   store.setState({ selection: EMPTY_SELECTION, gesture: null });
-  return true;
 }
 
 /** The one way to change the document as a single undo step. Returns false when nothing changed. */
@@ -226,8 +216,23 @@ export type DesignFields = Partial<
   Pick<SheetDocument, 'name' | 'technology' | 'expectations' | 'sequences' | 'notes'>
 >;
 
+/**
+ * Changes the open cell's fields. Descended into an instance, expected functions and sequences are
+ * the top cell's (the one analysed), so those go to it.
+ */
 export function setDesignFields(patch: DesignFields): void {
-  commitDoc((doc) => ({ ...doc, ...patch }));
+  commitDoc((doc) => {
+    const { expectations, sequences, ...own } = patch;
+    const top = doc.context?.top;
+    if (top === undefined || (expectations === undefined && sequences === undefined))
+      return { ...doc, ...patch };
+    const toTop = {
+      ...(expectations === undefined ? {} : { expectations }),
+      ...(sequences === undefined ? {} : { sequences }),
+    };
+    const cells = (doc.cells ?? []).map((c) => (c.name === top ? { ...c, ...toTop } : c));
+    return { ...doc, ...own, cells };
+  });
 }
 
 export function setSelection(selected: ItemIds): void {

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { deriveDesign, designOfDocument, documentFromDesign } from '../../src/state/document.ts';
+import { deriveDesign, documentFromDesign } from '../../src/state/document.ts';
+import { designOfDocument } from '../../src/state/documentCells.ts';
 import { cellDesign } from '../../src/core/hierarchy/cellDesign.ts';
 import { parseDesignFile, serializeDesign } from '../../src/core/format/designFile.ts';
 import { STARTERS } from '../../src/core/starters/index.ts';

@@ -49,3 +49,45 @@ export function locateName(cells: ReadonlyMap<string, Cell>, top: string, name: 
 function holds(cell: Cell, name: string): boolean {
   return cell.netlist.devices.some((d) => d.name === name) || cellNets(cell).includes(name);
 }
+
+/** How a cell's own names read in the flat netlist of `top`, seen through one instance path. */
+export interface Placement {
+  /** The cell the path ends in. */
+  readonly cell: string;
+  readonly path: readonly Instance[];
+  readonly net: (local: string) => string;
+  readonly device: (local: string) => string;
+}
+
+/**
+ * The flat names of the nets and devices of the cell that `instances` (names, from `top` down) lead
+ * to, by the flattener's rules (docs/semantics.md §1): a pin takes the net above, a rail or global
+ * net keeps its name, anything else takes the path as prefix. Null when the path leads nowhere.
+ */
+export function placementOf(
+  cells: ReadonlyMap<string, Cell>,
+  top: string,
+  instances: readonly string[],
+): Placement | null {
+  let cell: Cell | undefined = cells.get(top);
+  if (cell === undefined) return null;
+  let above = (local: string): string => local;
+  const path: Instance[] = [];
+  for (const name of instances) {
+    const step: Instance | undefined = cell.instances.find((i) => i.name === name);
+    const child: Cell | undefined = step === undefined ? undefined : cells.get(step.cell);
+    if (step === undefined || child === undefined) return null;
+    path.push(step);
+    const outer = above;
+    const prefix = flatName(path, '');
+    const globals = new Set([...child.netlist.rails.map((r) => r.net), ...(child.globals ?? [])]);
+    above = (local) => {
+      const wired = Object.hasOwn(step.pins, local) ? step.pins[local] : undefined;
+      if (wired !== undefined) return outer(wired);
+      return globals.has(local) ? local : prefix + local;
+    };
+    cell = child;
+  }
+  const prefix = flatName(path, '');
+  return { cell: cell.name, path, net: above, device: (local) => prefix + local };
+}

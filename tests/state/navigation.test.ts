@@ -1,0 +1,99 @@
+/**
+ * Descending into instances (docs/semantics.md §1, hierarchy): the sheet shows the placed cell while
+ * the top cell stays analysed, its nets named as the top cell names them; a path goes back up; a
+ * hierarchical name takes the sheet to its cell; an edit inside reaches every instance.
+ */
+import { beforeEach, describe, expect, it } from 'vitest';
+import { ascendTo, descendInto, goToName, openCellOnSheet, sheetPath } from '../../src/state/navigation.ts';
+import {
+  commitDoc,
+  currentDesign,
+  loadDesign,
+  resetStore,
+  setDesignFields,
+  store,
+  undo,
+} from '../../src/state/store.ts';
+import { flipFlopDesign } from '../hierarchy/cells.ts';
+
+const nets = () => new Set(Object.values(store.getState().geometry.wireNets));
+
+describe('descending into an instance', () => {
+  beforeEach(() => {
+    resetStore();
+    loadDesign(flipFlopDesign);
+  });
+
+  it('shows the placed cell, analyses the top one, and names the nets as the top cell does', () => {
+    const devices = store.getState().design.netlist.devices.length;
+    expect(descendInto('XS')).toBe(true);
+    const s = store.getState();
+    expect(s.doc.name).toBe('tg_d_latch');
+    expect(s.design.name).toBe('dff');
+    expect(s.design.netlist.devices).toHaveLength(devices);
+    // The slave latch's D is wired to M and its CLK to CLK; its storage node is its own.
+    expect(nets().has('M')).toBe(true);
+    expect(nets().has('XS.n1')).toBe(true);
+    expect(nets().has('D')).toBe(false);
+    expect(s.geometry.deviceParts['XS.NT1']).toBeDefined();
+    expect(sheetPath()).toEqual([
+      { instance: null, cell: 'dff' },
+      { instance: 'XS', cell: 'tg_d_latch' },
+    ]);
+  });
+
+  it('goes back up the path, with no undo step either way', () => {
+    const past = store.getState().history.past.length;
+    descendInto('XM');
+    expect(ascendTo(0)).toBe(true);
+    expect(store.getState().doc.name).toBe('dff');
+    expect(store.getState().doc.context).toBeUndefined();
+    expect(sheetPath()).toHaveLength(1);
+    expect(store.getState().history.past).toHaveLength(past);
+  });
+
+  it('takes the sheet to where a hierarchical name lives', () => {
+    expect(goToName('XM.NT1')).toBe(true);
+    expect(store.getState().doc.context).toEqual({ top: 'dff', instances: ['XM'] });
+    expect(goToName('XM.NT1')).toBe(false); // already here
+    expect(goToName('CLKN')).toBe(true); // back up to the top cell
+    expect(store.getState().doc.name).toBe('dff');
+    expect(goToName('XQ.nowhere')).toBe(false);
+  });
+
+  it('an edit inside reaches every instance of the cell, and undo takes it back', () => {
+    descendInto('XS');
+    const widthOf = (name: string) => {
+      const d = store.getState().design.netlist.devices.find((x) => x.name === name);
+      return d !== undefined && 'w' in d ? d.w : null;
+    };
+    commitDoc((doc) => ({
+      ...doc,
+      sheet: {
+        ...doc.sheet,
+        parts: doc.sheet.parts.map((p) => (p.kind === 'nmos' && p.name === 'NT1' ? { ...p, w: 3 } : p)),
+      },
+    }));
+    expect(widthOf('XS.NT1')).toBe(3);
+    expect(widthOf('XM.NT1')).toBe(3);
+    ascendTo(0);
+    expect(widthOf('XM.NT1')).toBe(3);
+    undo();
+    expect(widthOf('XM.NT1')).toBe(0.5);
+  });
+
+  it('puts expected functions set while descended on the top cell, which is the one analysed', () => {
+    descendInto('XS');
+    setDesignFields({ expectations: { Q: 'D' } });
+    expect(store.getState().design.expectations).toEqual({ Q: 'D' });
+    expect(currentDesign().cells.find((c) => c.name === 'dff')?.expectations).toEqual({ Q: 'D' });
+    expect(currentDesign().cells.find((c) => c.name === 'tg_d_latch')?.expectations).toEqual({});
+  });
+
+  it('opening a cell on its own leaves any instance it was seen in', () => {
+    descendInto('XS');
+    expect(openCellOnSheet('tg_d_latch')).toBe(true);
+    expect(store.getState().doc.context).toBeUndefined();
+    expect(store.getState().design.name).toBe('tg_d_latch');
+  });
+});
