@@ -1,5 +1,6 @@
 import { expect, test } from '@playwright/test';
 import { RailwisePage } from './pages/RailwisePage.ts';
+import { WorkspacePanel } from './pages/workspace.ts';
 import { tidewaterLibrary as library } from '../bench/generators/library.ts';
 
 test('a library opens as a table; failing cells filter, and one opens onto the sheet', async ({ page }) => {
@@ -34,4 +35,42 @@ test('an 80-cell library of about 2,000 transistors shows every row', async ({ p
   info.annotations.push({ type: 'library-open-ms', description: String(ms) });
   console.log(`80-cell library: every row shown ${ms} ms after the file was given`);
   await expect(view.locator('tbody tr')).toHaveCount(80);
+});
+
+test('descend into an instance to see its cell with the levels it has there, and come back', async ({
+  page,
+}) => {
+  const app = new RailwisePage(page);
+  await app.open();
+  const buffer = [
+    '* Tidewater buffer: two inverter instances',
+    '.subckt tw_inv A Y vdd gnd',
+    'mp Y A vdd vdd pmos w=2u l=0.25u',
+    'mn Y A gnd gnd nmos w=1u l=0.25u',
+    '.ends',
+    '.subckt tw_buf A Z vdd gnd',
+    'X1 A mid vdd gnd tw_inv',
+    'X2 mid Z vdd gnd tw_inv',
+    '.ends',
+    '',
+  ].join('\n');
+  await app.openFile('buffer.sp', buffer);
+  await expect(page.getByRole('dialog', { name: 'Cells of buffer' })).toBeHidden();
+  expect((await app.netlist()).devices.map((d) => d.name)).toEqual(['X1.mp', 'X1.mn', 'X2.mp', 'X2.mn']);
+  const bit = new WorkspacePanel(page).bit('A');
+  await bit.click();
+  const a = (await bit.textContent())?.includes('1') ? '1' : '0';
+  const mid = a === '1' ? '0' : '1'; // mid is the first inverter's output
+  await expect.poll(() => page.evaluate(() => window.__railwise!.overlayLevel('mid'))).toBe(mid);
+  await page.getByRole('region', { name: 'Instances' }).getByRole('button', { name: /^X2/ }).click();
+  const path = page.getByRole('navigation', { name: 'Cell path' });
+  await expect(path).toContainText('tw_buf › X2 (tw_inv)');
+  // Inside X2 the inverter's input is the buffer's net mid, at the level it has for the same vector.
+  await expect.poll(() => page.evaluate(() => window.__railwise!.overlayLevel('mid'))).toBe(mid);
+  const pins = await page.evaluate(() => Object.values(window.__railwise!.state().geometry.pinNets));
+  expect(pins).toContain('mid'); // X2's input pin is the buffer's net mid
+  expect(pins).toContain('Z');
+  await path.getByRole('button', { name: 'tw_buf' }).click();
+  await expect(path).toBeHidden();
+  expect(await page.evaluate(() => window.__railwise!.state().doc.name)).toBe('tw_buf');
 });

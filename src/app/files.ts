@@ -36,6 +36,8 @@ export interface SpiceDesign {
   readonly design: Design;
   /** Cells of a library that could not be read, each with its reason (file and line). */
   readonly failed: readonly string[];
+  /** Several top-level cells: shown as a library. */
+  readonly library: boolean;
 }
 
 /** Reads a SPICE text into one design of all its cells; throws when no cell at all can be read. */
@@ -48,18 +50,22 @@ export function designFromSpice(text: string, fileName: string): SpiceDesign {
     throw new SpiceImportError(fileName, 1, 'no cell could be read');
   }
   const name = fileName.replace(/^.*[\\/]/, '').replace(/\.[^.]+$/, '') || 'design';
-  return { design: designFromImport(imported, DEFAULT_TECHNOLOGY, name), failed };
+  return {
+    design: designFromImport(imported, DEFAULT_TECHNOLOGY, name),
+    failed,
+    library: imported.isLibrary,
+  };
 }
 
 function openSpice(text: string, fileName: string): void {
-  const { design, failed } = designFromSpice(text, fileName);
+  const { design, failed, library } = designFromSpice(text, fileName);
   loadDesign(design);
   fitToView();
   const note = failed.length ? `. Not readable: ${failed.join('; ')}` : '';
   const what = design.cells.length > 1 ? `${design.cells.length} cells` : design.open;
   showMessage('info', `Imported ${what} from ${fileName}${note}`);
   // A library: the table of its cells, where any one opens onto the sheet.
-  if (design.cells.length > 1) openLibraryView();
+  if (library) openLibraryView();
 }
 
 /** Opens text as a design file or a SPICE netlist. Returns false when the file was refused. */

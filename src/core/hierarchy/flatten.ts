@@ -157,7 +157,12 @@ function enter(b: FlatBuilder, parent: Frame, instance: Instance): Frame {
   const prefix = `${parent.prefix}${instance.name}${PATH_SEPARATOR}`;
   const names = p.nets.map((local, i) => {
     const above = Object.hasOwn(instance.pins, local) ? instance.pins[local] : undefined;
-    if (above !== undefined) return parent.names[parent.prepared.index.get(above) as number] as string;
+    if (above !== undefined) {
+      const name = parent.names[parent.prepared.index.get(above) as number] as string;
+      // A rail pin wired to the net of its own name is that rail: it keeps its role above.
+      const rail = p.rail[i] ?? null;
+      return rail !== null && name === local ? b.net(name, true, rail, chain) : name;
+    }
     const global = p.global[i] as boolean;
     return b.net(global ? local : prefix + local, global, p.rail[i] ?? null, chain);
   });
