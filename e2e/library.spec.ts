@@ -3,7 +3,9 @@ import { RailwisePage } from './pages/RailwisePage.ts';
 import { WorkspacePanel } from './pages/workspace.ts';
 import { tidewaterLibrary as library } from '../bench/generators/library.ts';
 
-test('a library opens as a table; failing cells filter, and one opens onto the sheet', async ({ page }) => {
+test('a library opens as a table; a failing cell opens, is placed in a new cell, descended into and left', async ({
+  page,
+}) => {
   const app = new RailwisePage(page);
   await app.open();
   await app.openFile('tidewater.sp', library(12, 2));
@@ -20,6 +22,19 @@ test('a library opens as a table; failing cells filter, and one opens onto the s
   expect((await app.netlist()).devices).toHaveLength(7);
   await page.getByRole('button', { name: 'Cells of this design, each checked' }).click();
   await expect(view.locator('tr[aria-current="true"]')).toHaveAttribute('data-cell', 'tw_chain3');
+  await view.getByRole('button', { name: 'Close' }).click();
+
+  // A new cell of the design places the failing cell as an instance; descend into it and come back.
+  const instances = page.getByRole('region', { name: 'Instances' });
+  await instances.getByRole('button', { name: 'New cell in this design' }).click();
+  await instances.getByLabel('Place a cell as an instance').selectOption('tw_chain3');
+  expect((await app.netlist()).devices.map((d) => d.name)).toContain('X1.mnb0');
+  await instances.getByRole('button', { name: /^X1/ }).click();
+  const path = page.getByRole('navigation', { name: 'Cell path' });
+  await expect(path).toContainText('cell1 › X1 (tw_chain3)');
+  await path.getByRole('button', { name: 'cell1' }).click();
+  await expect(path).toBeHidden();
+  expect(await page.evaluate(() => window.__railwise!.state().doc.name)).toBe('cell1');
 });
 
 test('an 80-cell library of about 2,000 transistors shows every row', async ({ page }, info) => {

@@ -1,5 +1,6 @@
 import { useStore } from '../state/store.ts';
 import { ascendTo, descendInto, sheetPath } from '../state/navigation.ts';
+import { addCell, placeInstance } from '../state/cells.ts';
 import { fitToView } from '../state/view.ts';
 import './library.css';
 
@@ -39,10 +40,15 @@ export function SheetPath() {
   );
 }
 
-/** The instances the open cell places, each a way down into the cell it places. */
+/**
+ * The instances the open cell places, each a way down into the cell it places; a cell of the design
+ * placed as a new instance (wired by name until instances are drawn); a new cell in the design.
+ */
 export function InstanceList() {
   const instances = useStore((s) => s.openCell.instances);
-  if (instances.length === 0) return null;
+  const open = useStore((s) => s.doc.name);
+  const cells = useStore((s) => s.doc.cells);
+  const others = (cells ?? []).filter((c) => c.name !== open);
   return (
     <section className="rw-shelf" aria-label="Instances">
       <h2>Instances</h2>
@@ -62,6 +68,33 @@ export function InstanceList() {
           </li>
         ))}
       </ul>
+      {others.length > 0 ? (
+        <select
+          aria-label="Place a cell as an instance"
+          value=""
+          onChange={(e) => {
+            const cell = e.target.value;
+            e.target.value = '';
+            if (cell) placeInstance(cell);
+          }}
+        >
+          <option value="">Place a cell…</option>
+          {others.map((c) => (
+            <option key={c.name} value={c.name}>
+              {c.name}
+            </option>
+          ))}
+        </select>
+      ) : null}
+      <button
+        type="button"
+        onClick={() => {
+          addCell();
+          fitToView();
+        }}
+      >
+        New cell in this design
+      </button>
     </section>
   );
 }

@@ -15,6 +15,7 @@ import {
   undo,
 } from '../../src/state/store.ts';
 import { flipFlopDesign } from '../hierarchy/cells.ts';
+import { addCell, placeInstance } from '../../src/state/cells.ts';
 
 const nets = () => new Set(Object.values(store.getState().geometry.wireNets));
 
@@ -95,5 +96,34 @@ describe('descending into an instance', () => {
     expect(openCellOnSheet('tg_d_latch')).toBe(true);
     expect(store.getState().doc.context).toBeUndefined();
     expect(store.getState().design.name).toBe('tg_d_latch');
+  });
+});
+
+describe('adding to the hierarchy', () => {
+  beforeEach(() => {
+    resetStore();
+    loadDesign(flipFlopDesign);
+  });
+
+  it('a new cell joins the design and opens; a cell placed in it is wired by name and checks', () => {
+    const name = addCell();
+    expect(store.getState().doc.name).toBe(name);
+    expect(currentDesign().cells.map((c) => c.name)).toEqual(['tg_d_latch', 'dff', name]);
+    const x = placeInstance('dff');
+    expect(x).toEqual({ name: 'X1', cell: 'dff', pins: { D: 'D', CLK: 'CLK', Q: 'Q' } });
+    expect(store.getState().design.netlist.devices.some((d) => d.name === 'X1.XM.NT1')).toBe(true);
+    expect(descendInto('X1')).toBe(true);
+    expect(descendInto('XS')).toBe(true);
+    expect(sheetPath().map((p) => p.cell)).toEqual([name, 'dff', 'tg_d_latch']);
+    expect(ascendTo(0)).toBe(true);
+    undo();
+    expect(store.getState().openCell.instances).toEqual([]);
+  });
+
+  it('refuses a placement that would make a cell place itself, naming the loop', () => {
+    openCellOnSheet('tg_d_latch');
+    expect(placeInstance('dff')).toBeNull();
+    expect(store.getState().message?.text).toMatch(/tg_d_latch → dff → tg_d_latch|instantiates itself/);
+    expect(placeInstance('tg_d_latch')).toBeNull();
   });
 });
