@@ -5,19 +5,15 @@
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';
-import { DesignFileError, parseDesignFile, serializeDesign } from '../../src/core/format/designFile.ts';
+import { designFileError } from './refusal.ts';
+import type { DesignFileError } from '../../src/core/format/designFile.ts';
+import { parseDesignFile, serializeDesign } from '../../src/core/format/designFile.ts';
 import type { Cell, Design } from '../../src/core/model/design.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import { inverter } from '../cells.ts';
 
 function errorOf(text: string): DesignFileError {
-  try {
-    parseDesignFile(text, 'tide.railwise.json');
-  } catch (e) {
-    if (e instanceof DesignFileError) return e;
-    throw e;
-  }
-  throw new Error('expected a DesignFileError');
+  return designFileError(text, 'tide.railwise.json');
 }
 
 const inv: Cell = {

@@ -5,9 +5,10 @@
 import { readFileSync } from 'node:fs';
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import { designFileError } from './refusal.ts';
+import type { DesignFileError } from '../../src/core/format/designFile.ts';
 import {
   CURRENT_DESIGN_VERSION,
-  DesignFileError,
   parseDesignFile,
   serializeDesign,
 } from '../../src/core/format/designFile.ts';
@@ -30,13 +31,7 @@ const lamp: CellDesign = {
 const design: Design = designOfCell(lamp);
 
 function errorOf(text: string): DesignFileError {
-  try {
-    parseDesignFile(text, 'lamp.railwise.json');
-  } catch (e) {
-    if (e instanceof DesignFileError) return e;
-    throw e;
-  }
-  throw new Error('expected a DesignFileError');
+  return designFileError(text, 'lamp.railwise.json');
 }
 
 /** A saved cell, loosely typed so a test can break one field. */
