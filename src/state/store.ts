@@ -142,6 +142,10 @@ export function commitDoc(update: (doc: SheetDocument) => SheetDocument): boolea
   const s = store.getState();
   const base = s.history.gestureStart ?? s.doc;
   const next = followOpenCell(s.doc, update(s.doc), s.openCell);
+  if (next.name !== s.doc.name && (next.cells ?? []).some((c) => c.name === next.name)) {
+    showMessage('error', `Another cell of this design is named ${next.name}: the open cell keeps its name.`);
+    return false;
+  }
   if (next === s.doc && s.history.gestureStart === null) return false;
   applyDoc(next, recordStep(s.history, base));
   return true;

@@ -127,3 +127,14 @@ describe('adding to the hierarchy', () => {
     expect(placeInstance('tg_d_latch')).toBeNull();
   });
 });
+
+describe('cell names stay unique', () => {
+  it('renaming the open cell to the name of another cell is refused, and nothing changes', () => {
+    resetStore();
+    loadDesign(flipFlopDesign);
+    const before = store.getState().doc;
+    commitDoc((doc) => ({ ...doc, name: 'tg_d_latch' }));
+    expect(store.getState().doc).toBe(before);
+    expect(store.getState().message?.text).toMatch(/already|Another cell/);
+  });
+});
