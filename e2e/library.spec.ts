@@ -88,4 +88,41 @@ test('descend into an instance to see its cell with the levels it has there, and
   await path.getByRole('button', { name: 'tw_buf' }).click();
   await expect(path).toBeHidden();
   expect(await page.evaluate(() => window.__railwise!.state().doc.name)).toBe('tw_buf');
+
+  // Figures for the report, not timed assertions: down and back up, each until the page has
+  // committed it (the path appears, then goes), with a pause between so autosave and analysis settle.
+  const trips = await page.evaluate(async () => {
+    const shown = (present: boolean) =>
+      new Promise<void>((done) => {
+        const ok = () => (document.querySelector('[aria-label="Cell path"]') !== null) === present;
+        if (ok()) return done();
+        const watch = new MutationObserver(() => {
+          if (!ok()) return;
+          watch.disconnect();
+          done();
+        });
+        watch.observe(document.body, { subtree: true, childList: true });
+      });
+    const click = (selector: string, text: string) =>
+      [...document.querySelectorAll<HTMLButtonElement>(selector)]
+        .find((b) => b.textContent?.startsWith(text))
+        ?.click();
+    const pause = () => new Promise((done) => setTimeout(done, 300));
+    const out: string[] = [];
+    for (let i = 0; i < 3; i++) {
+      let started = performance.now();
+      click('[aria-label="Instances"] button', 'X2');
+      await shown(true);
+      const down = performance.now() - started;
+      await pause();
+      started = performance.now();
+      click('[aria-label="Cell path"] button', 'tw_buf');
+      await shown(false);
+      out.push(`${down.toFixed(0)} + ${(performance.now() - started).toFixed(0)} ms`);
+      await pause();
+    }
+    return out.join(', ');
+  });
+  console.log(`descend into X2 and back up, each until committed: ${trips}`);
+  expect(await page.evaluate(() => window.__railwise!.state().doc.name)).toBe('tw_buf');
 });
