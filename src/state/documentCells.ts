@@ -91,3 +91,23 @@ export function seenFrom(doc: SheetDocument, open: Cell): { top: Cell; placement
     return { top: open, placement: null };
   return { top, placement };
 }
+
+/**
+ * The document with the open cell's fields changed. Descended into an instance, expected functions
+ * and sequences are the top cell's (the one analysed), so those go to it.
+ */
+export function withFields(
+  doc: SheetDocument,
+  patch: Partial<Pick<SheetDocument, 'name' | 'technology' | 'expectations' | 'sequences' | 'notes'>>,
+): SheetDocument {
+  const { expectations, sequences, ...own } = patch;
+  const top = doc.context?.top;
+  if (top === undefined || (expectations === undefined && sequences === undefined))
+    return { ...doc, ...patch };
+  const toTop = {
+    ...(expectations === undefined ? {} : { expectations }),
+    ...(sequences === undefined ? {} : { sequences }),
+  };
+  const cells = (doc.cells ?? []).map((c) => (c.name === top ? { ...c, ...toTop } : c));
+  return { ...doc, ...own, cells };
+}

@@ -16,7 +16,7 @@ import type { Clip } from '../core/sheet/clipboard.ts';
 import type { PartKind, Point } from '../core/sheet/types.ts';
 import { NO_ITEMS } from '../core/sheet/selection.ts';
 import { deriveDesign, documentFromDesign, type SheetDocument, type SheetGeometry } from './document.ts';
-import { designOfDocument, followOpenCell } from './documentCells.ts';
+import { designOfDocument, followOpenCell, withFields } from './documentCells.ts';
 import { EMPTY_HISTORY, recordStep, redoStep, undoStep, type HistoryState } from './history.ts';
 import { EMPTY_SELECTION, pruneSelection, type SelectionState } from './selection.ts';
 import { DEFAULT_VIEWPORT, type Viewport } from './viewport.ts';
@@ -220,23 +220,9 @@ export type DesignFields = Partial<
   Pick<SheetDocument, 'name' | 'technology' | 'expectations' | 'sequences' | 'notes'>
 >;
 
-/**
- * Changes the open cell's fields. Descended into an instance, expected functions and sequences are
- * the top cell's (the one analysed), so those go to it.
- */
+/** Changes the open cell's fields (descended, expected functions and sequences go to the top cell). */
 export function setDesignFields(patch: DesignFields): void {
-  commitDoc((doc) => {
-    const { expectations, sequences, ...own } = patch;
-    const top = doc.context?.top;
-    if (top === undefined || (expectations === undefined && sequences === undefined))
-      return { ...doc, ...patch };
-    const toTop = {
-      ...(expectations === undefined ? {} : { expectations }),
-      ...(sequences === undefined ? {} : { sequences }),
-    };
-    const cells = (doc.cells ?? []).map((c) => (c.name === top ? { ...c, ...toTop } : c));
-    return { ...doc, ...own, cells };
-  });
+  commitDoc((doc) => withFields(doc, patch));
 }
 
 export function setSelection(selected: ItemIds): void {
