@@ -12,6 +12,7 @@ import { PropertiesForm } from './PropertiesForm.tsx';
 import { MessageBar } from './MessageBar.tsx';
 import { HelpOverlay } from './HelpOverlay.tsx';
 import { AboutBox } from './AboutBox.tsx';
+import { RecoveryOffer } from './RecoveryOffer.tsx';
 import { handleKey } from './keyboard.ts';
 import { LibraryView } from './LibraryView.tsx';
 import { InstanceList, SheetPath } from './Hierarchy.tsx';
@@ -71,6 +72,7 @@ export function App() {
       {overlay === 'help' ? <HelpOverlay /> : null}
       {overlay === 'about' ? <AboutBox /> : null}
       <LibraryView />
+      <RecoveryOffer />
     </div>
   );
 }

@@ -1,4 +1,5 @@
 import { Component, type ReactNode } from 'react';
+import { openingFailed } from './autosave.ts';
 
 interface State {
   readonly error: Error | null;
@@ -15,12 +16,17 @@ export class ErrorBoundary extends Component<{ children: ReactNode }, State> {
     return { error };
   }
 
+  /** A design that breaks the page is never saved over the last one that worked. */
+  override componentDidCatch(): void {
+    openingFailed();
+  }
+
   override render() {
     if (!this.state.error) return this.props.children;
     return (
       <div className="rw-crash" role="alert">
         <h1>Something in the page went wrong</h1>
-        <p>Your design was autosaved in this browser. Reload to continue where you were.</p>
+        <p>Your last working design is autosaved in this browser. Reload to continue from it.</p>
         <pre>{this.state.error.message}</pre>
         <button type="button" onClick={() => location.reload()}>
           Reload

@@ -89,6 +89,11 @@ export function PropertiesForm() {
           {fieldsFor(part).map((f) => (
             <Field key={f.key} part={part} field={f} />
           ))}
+          {'model' in part && part.model !== undefined && (
+            <p className="rw-hint" data-testid="part-model">
+              Model card {part.model}: its level-1 values set this transistor's DC model.
+            </p>
+          )}
         </form>
       ) : (
         <>

@@ -5,7 +5,7 @@
 import { starterById, STARTERS } from '../core/starters/index.ts';
 import { documentFromDesign } from '../state/document.ts';
 import { resetStore, showMessage } from '../state/store.ts';
-import { restoreAutosave } from './autosave.ts';
+import { keepAside, openingDone, recovery, RESCUE_KEY, restoreAutosave, whenShown } from './autosave.ts';
 
 export const DEMO_STARTER = 'nand2';
 
@@ -16,15 +16,18 @@ export function openFirstDesign(storage: Storage = localStorage): void {
     resetStore(documentFromDesign(restored.design ?? demo));
   } catch (e) {
     // A stored design that cannot even be placed must not keep the page from opening.
+    keepAside(storage);
     resetStore(documentFromDesign(demo));
     showMessage(
       'error',
-      `The autosaved design could not be shown (${e instanceof Error ? e.message : String(e)}).`,
+      `The autosaved design could not be shown (${e instanceof Error ? e.message : String(e)}); its text is kept under "${RESCUE_KEY}" in this browser's storage.`,
     );
     return;
   }
+  const { opening } = restored;
+  if (opening !== undefined) whenShown(() => openingDone(opening, storage));
   if (restored.problem) showMessage('error', restored.problem);
-  else if (!restored.design) {
+  else if (!restored.design && recovery.getState().suspect === null) {
     showMessage(
       'info',
       'Welcome: this NAND2 is a starter cell. Press H for keys, or pick a part on the left and click the sheet.',

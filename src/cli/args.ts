@@ -5,6 +5,7 @@
 import { parseArgs, type ParseArgsConfig } from 'node:util';
 import { MARGIN_CONVENTIONS, type MarginConvention } from '../core/dc/figures.ts';
 import { DEFAULT_TRANSFER_POINTS, MAX_TRANSFER_POINTS } from '../core/dc/transfer.ts';
+import { nameRecord } from '../core/model/records.ts';
 import { spiceValue } from '../core/netlist-io/spiceNumber.ts';
 import { parseStandIns, type StandIn } from '../core/netlist-io/deviceNames.ts';
 import { rangeProblem } from '../core/netlist-io/valueRanges.ts';
@@ -232,7 +233,7 @@ function transferChoice(v: {
 
 /** `--expect "Y = !(A & B)"`, repeatable; the first `=` splits output from expression. */
 function expectations(texts: readonly string[]): Record<string, string> {
-  const out: Record<string, string> = {};
+  const out = nameRecord<string>(); // an output may be called __proto__
   for (const text of texts) {
     const eq = text.indexOf('=');
     const output = text.slice(0, Math.max(eq, 0)).trim();
@@ -288,7 +289,7 @@ export function frequency(text: string): number {
   if (hz) {
     const scale = { '': 1, k: 1e3, m: 1e6, g: 1e9 }[hz[2].toLowerCase() as '' | 'k' | 'm' | 'g'];
     const value = Number(hz[1]) * scale;
-    if (value > 0) return value;
+    if (value > 0 && Number.isFinite(value)) return value;
   }
   return positiveNumber('--freq', text);
 }

@@ -1,21 +1,40 @@
 /**
  * `railwise check`: load the cells, run them (in worker threads when that pays), print the human
  * report or JSON, and return the exit status: 0 clean, 1 error findings, 2 something unusable.
+ *
+ * Output goes out cell by cell, and a big sweep row by row: a cell of more than STREAM_ROWS vectors
+ * runs on this thread while it is written (streamCell.ts), its rows never held together and its
+ * findings spooled (findingSpool.ts), so memory stays bounded whatever the sweep. The JSON is one
+ * document in every case (jsonWriter.ts).
  */
+import { CAUTION } from '../core/caution.ts';
+import type { Summary } from '../core/analysis/report.ts';
+import { brief, printable } from '../core/format/printable.ts';
 import { DEFAULT_POWER_SETTINGS } from '../core/power/settings.ts';
 import type { CheckArgs } from './args.ts';
-import { makeColour } from './colour.ts';
-import { loadCells, type CellFailure, type CellSkip } from './loadCells.ts';
+import { makeColour, terminalSafe, type Colour } from './colour.ts';
+import { FindingSpool } from './findingSpool.ts';
+import { Later, Stream, writeJson } from './jsonWriter.ts';
+import { loadCells, type CellFailure, type CellJob, type CellSkip } from './loadCells.ts';
 import { runCells } from './parallel.ts';
-import type { CellJson, CellResult, RunOptions } from './runCell.ts';
-import { CAUTION } from '../core/caution.ts';
-import { count, formatCell, formatFailure, formatSkipped } from './textReport.ts';
+import type { CellResult, RunOptions, VectorJson } from './runCell.ts';
+import { isStreamed, prepareStreamedCell, type CellTail } from './streamCell.ts';
+import { count, formatCell, formatFailure, formatSkipped, TextDigest } from './textReport.ts';
 import { EXIT_FINDINGS, EXIT_OK, EXIT_UNUSABLE, UsageError } from './usage.ts';
 
 export interface Output {
   readonly out: (text: string) => void;
   readonly colour: boolean;
 }
+
+/** A cell already checked (or refused, or skipped), or one to run while it is written. */
+type CellSource = { readonly result: CellResult } | { readonly job: CellJob };
+
+/** What the closing totals and the exit status need of each cell. */
+type Outcome =
+  | { readonly cell: string; readonly summary: Summary }
+  | { readonly failure: CellFailure }
+  | { readonly skipped: CellSkip };
 
 export async function checkCommand(args: CheckArgs, io: Output): Promise<number> {
   const loaded = loadCells(args.files, args);
@@ -32,32 +51,34 @@ export async function checkCommand(args: CheckArgs, io: Output): Promise<number>
     ...(args.sequence === undefined ? {} : { sequence: args.sequence }),
     ...(args.power === undefined ? {} : { power: args.power }),
   };
-  const jobs = loaded.cells.flatMap((c) => ('job' in c ? [c.job] : []));
-  const ran = await runCells(jobs, options, args.jobs);
-  // Keep the cells in file order: failures at load time sit where their cell would.
-  let next = 0;
-  const results: CellResult[] = loaded.cells.map((c) => ('job' in c ? (ran[next++] as CellResult) : c));
-  const status = Math.max(EXIT_OK, ...results.map(exitOf));
-  if (args.json)
-    io.out(
-      JSON.stringify(loaded.asLibrary ? libraryJson(results, loaded.notes) : singleJson(results), null, 2),
-    );
-  else io.out(humanReport(results, loaded.asLibrary, loaded.notes, makeColour(io.colour)));
-  return status;
+  const collected = loaded.cells.flatMap((c) => ('job' in c && !isStreamed(c.job, options) ? [c.job] : []));
+  const results = await runCells(collected, options, args.jobs);
+  const ran = new Map(collected.map((job, i) => [job, results[i] as CellResult]));
+  // Cells stay in file order: failures at load time and streamed cells sit where their cell would.
+  const cells = loaded.cells.map((c): CellSource => {
+    if (!('job' in c)) return { result: c };
+    const result = ran.get(c.job);
+    return result === undefined ? { job: c.job } : { result };
+  });
+  const outcomes: Outcome[] = [];
+  const run = { cells, options, outcomes, notes: loaded.notes, asLibrary: loaded.asLibrary };
+  if (args.json) writeJson(jsonDocument(run), io.out);
+  else textReport(run, io);
+  return Math.max(EXIT_OK, ...outcomes.map(exitOf));
 }
 
-function exitOf(r: CellResult): number {
-  if ('failure' in r) return EXIT_UNUSABLE;
-  if ('skipped' in r) return EXIT_OK;
-  return r.json.summary.errors > 0 ? EXIT_FINDINGS : EXIT_OK;
+interface Run {
+  readonly cells: readonly CellSource[];
+  readonly options: RunOptions;
+  readonly outcomes: Outcome[];
+  readonly notes: readonly string[];
+  readonly asLibrary: boolean;
 }
 
-function skippedJson(s: CellSkip): object {
-  return { cell: s.cell, file: s.file, skipped: s.reason };
-}
-
-function resultJson(r: CellResult): object {
-  return 'json' in r ? r.json : 'failure' in r ? failureJson(r.failure) : skippedJson(r.skipped);
+function exitOf(o: Outcome): number {
+  if ('failure' in o) return EXIT_UNUSABLE;
+  if ('skipped' in o) return EXIT_OK;
+  return o.summary.errors > 0 ? EXIT_FINDINGS : EXIT_OK;
 }
 
 function failureJson(f: CellFailure): object {
@@ -65,70 +86,117 @@ function failureJson(f: CellFailure): object {
     cell: f.cell,
     file: f.file,
     error: {
-      message: f.message,
+      message: brief(f.message, 2000),
       ...(f.line === undefined ? {} : { line: f.line }),
       ...(f.field === undefined ? {} : { field: f.field }),
     },
   };
 }
 
-function singleJson(results: readonly CellResult[]): object {
-  const [only] = results;
-  if (only === undefined) return { error: { message: 'no cells found' } };
-  return resultJson(only);
-}
-
-export function librarySummary(results: readonly CellResult[]): Record<string, number> {
-  const checked = results.flatMap((r) => ('json' in r ? [r.json] : []));
-  const skipped = results.filter((r) => 'skipped' in r).length;
+function jsonDocument(run: Run): unknown {
+  if (!run.asLibrary) {
+    const [only] = run.cells;
+    return only === undefined ? { error: { message: 'no cells found' } } : cellValue(only, run);
+  }
   return {
-    cells: results.length,
-    passed: checked.filter((j) => j.summary.errors === 0).length,
-    failed: checked.filter((j) => j.summary.errors > 0).length,
-    unusable: results.length - checked.length - skipped,
-    ...(skipped > 0 ? { skipped } : {}),
-    errors: sum(checked.map((j) => j.summary.errors)),
-    warnings: sum(checked.map((j) => j.summary.warnings)),
-  };
-}
-
-function libraryJson(results: readonly CellResult[], notes: readonly string[]): object {
-  const cells = results.map(resultJson);
-  return {
-    cells,
-    summary: librarySummary(results),
-    ...(notes.length > 0 ? { notes } : {}),
+    cells: new Stream<unknown>((emit) => run.cells.forEach((c) => emit(cellValue(c, run)))),
+    summary: new Later(() => librarySummary(run.outcomes)),
+    ...(run.notes.length > 0 ? { notes: run.notes } : {}),
     caution: CAUTION,
   };
 }
 
-function humanReport(
-  results: readonly CellResult[],
-  asLibrary: boolean,
-  notes: readonly string[],
-  c: ReturnType<typeof makeColour>,
-): string {
-  const blocks = results.map((r) =>
-    'json' in r
-      ? formatCell(r.json as CellJson, c)
-      : 'failure' in r
-        ? formatFailure(r.failure, c)
-        : formatSkipped(r.skipped, c),
-  );
-  const s = librarySummary(results);
-  const total = asLibrary ? [libraryTotals(results, s)] : [];
-  const runNotes = notes.map((n) => c.dim(`note: ${n}`));
-  return [...blocks, ...runNotes, ...total, c.dim(CAUTION)].join('\n\n');
+/** One cell's JSON: as collected, or written while its rows are solved. */
+function cellValue(source: CellSource, run: Run): unknown {
+  if ('result' in source) {
+    const r = source.result;
+    if ('failure' in r) return (run.outcomes.push(r), failureJson(r.failure));
+    if ('skipped' in r)
+      return (
+        run.outcomes.push(r),
+        { cell: r.skipped.cell, file: r.skipped.file, skipped: r.skipped.reason }
+      );
+    return (run.outcomes.push({ cell: r.json.cell, summary: r.json.summary }), r.json);
+  }
+  const prepared = prepareStreamedCell(source.job, run.options);
+  if ('failure' in prepared) return (run.outcomes.push(prepared), failureJson(prepared.failure));
+  const { sizing, transfer, technology, ...names } = prepared.head;
+  const spool = new FindingSpool();
+  let tail: CellTail | null = null;
+  const done = (): CellTail =>
+    tail ?? { structural: [], summary: { vectors: 0, errors: 0, warnings: 0 }, notes: [] };
+  return {
+    ...names,
+    vectors: new Stream<VectorJson>((emit) => {
+      tail = prepared.rows((row) => {
+        row.findings.forEach((f) => spool.add(f));
+        emit(row);
+      });
+      run.outcomes.push({ cell: names.cell, summary: tail.summary });
+    }),
+    findings: new Stream<unknown>((emit) => {
+      done().structural.forEach(emit);
+      spool.replay(emit);
+    }),
+    summary: new Later(() => done().summary),
+    notes: new Later(() => done().notes),
+    technology,
+    power: run.options.power === undefined ? undefined : new Later(() => done().power),
+    sizing,
+    transfer,
+    caution: CAUTION,
+  };
+}
+
+function textReport(run: Run, io: Output): void {
+  const c = makeColour(io.colour);
+  const say = (text: string): void => io.out(terminalSafe(text, io.colour));
+  for (const source of run.cells) say(`${cellText(source, run, c)}\n`);
+  for (const n of run.notes) say(`${c.dim(`note: ${brief(n)}`)}\n`);
+  if (run.asLibrary) say(`${libraryTotals(run.outcomes)}\n`);
+  say(c.dim(CAUTION));
+}
+
+function cellText(source: CellSource, run: Run, c: Colour): string {
+  if ('result' in source) {
+    const r = source.result;
+    if ('failure' in r) return (run.outcomes.push(r), formatFailure(r.failure, c));
+    if ('skipped' in r) return (run.outcomes.push(r), formatSkipped(r.skipped, c));
+    run.outcomes.push({ cell: r.json.cell, summary: r.json.summary });
+    return formatCell(TextDigest.of(r.json), c);
+  }
+  const prepared = prepareStreamedCell(source.job, run.options);
+  if ('failure' in prepared) return (run.outcomes.push(prepared), formatFailure(prepared.failure, c));
+  const digest = new TextDigest();
+  const tail = prepared.rows((row) => digest.add(row));
+  run.outcomes.push({ cell: prepared.head.cell, summary: tail.summary });
+  return formatCell(digest.view(prepared.head, tail), c);
+}
+
+export function librarySummary(outcomes: readonly Outcome[]): Record<string, number> {
+  const checked = outcomes.flatMap((o) => ('summary' in o ? [o.summary] : []));
+  const skipped = outcomes.filter((o) => 'skipped' in o).length;
+  return {
+    cells: outcomes.length,
+    passed: checked.filter((s) => s.errors === 0).length,
+    failed: checked.filter((s) => s.errors > 0).length,
+    unusable: outcomes.length - checked.length - skipped,
+    ...(skipped > 0 ? { skipped } : {}),
+    errors: sum(checked.map((s) => s.errors)),
+    warnings: sum(checked.map((s) => s.warnings)),
+  };
 }
 
 /** The closing lines a CI log is read by: counts, then which cells need attention. */
-function libraryTotals(results: readonly CellResult[], s: Record<string, number>): string {
-  const failing = results.flatMap((r) => ('json' in r && r.json.summary.errors > 0 ? [r.json.cell] : []));
-  const unusable = results.flatMap((r) => ('failure' in r ? [r.failure.cell ?? r.failure.file] : []));
+function libraryTotals(outcomes: readonly Outcome[]): string {
+  const s = librarySummary(outcomes);
+  const failing = outcomes.flatMap((o) => ('summary' in o && o.summary.errors > 0 ? [o.cell] : []));
+  const unusable = outcomes.flatMap((o) => ('failure' in o ? [o.failure.cell ?? o.failure.file] : []));
+  const list = (names: readonly string[]): string => names.map(printable).join(', ');
   return [
     `${count(s['cells'] ?? 0, 'cell')}: ${s['passed']} pass, ${s['failed']} with errors, ${s['unusable']} unusable${s['skipped'] ? `, ${s['skipped']} skipped` : ''}; ${count(s['errors'] ?? 0, 'error')}, ${count(s['warnings'] ?? 0, 'warning')}`,
-    ...(failing.length > 0 ? [`  with errors: ${failing.join(', ')}`] : []),
-    ...(unusable.length > 0 ? [`  unusable: ${unusable.join(', ')}`] : []),
+    ...(failing.length > 0 ? [`  with errors: ${list(failing)}`] : []),
+    ...(unusable.length > 0 ? [`  unusable: ${list(unusable)}`] : []),
   ].join('\n');
 }
 

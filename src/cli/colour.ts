@@ -36,3 +36,19 @@ export function colourWanted(isTty: boolean, env: Readonly<Record<string, string
 
 /** Engineering notation with an SI prefix: 1.23e-3 A → "1.23 mA" (the panels' formatter). */
 export { engineering as formatSi } from '../core/view/format.ts';
+
+/** The only escape sequences the report writes itself: the colours above and the reset. */
+const OWN_SEQUENCE = new RegExp(`^${String.fromCharCode(27)}\\[(?:38;5;\\d{1,3}|1|0)m`);
+
+/**
+ * The last guard before a terminal or a log: every control character but line breaks and tabs is
+ * shown escaped, except the colour sequences the report wrote itself when colour is on. Names are
+ * escaped where they are printed; this catches anything that slipped through.
+ */
+export function terminalSafe(text: string, colour: boolean): string {
+  return text.replace(/[\p{Cc}\u2028\u2029\u202a-\u202e\u2066-\u2069]/gu, (ch, at: number) => {
+    if (ch === '\n' || ch === '\t') return ch;
+    if (colour && ch === '\u001b' && OWN_SEQUENCE.test(text.slice(at, at + 12))) return ch;
+    return `\\u${ch.charCodeAt(0).toString(16).padStart(4, '0')}`;
+  });
+}

@@ -5,6 +5,7 @@
  */
 import { readFileSync } from 'node:fs';
 import type { Netlist } from '../core/model/netlist.ts';
+import { recordOf } from '../core/model/records.ts';
 import { assignPins, PinError } from '../core/netlist-io/pins.ts';
 import {
   cellsFromText,
@@ -15,6 +16,7 @@ import {
   type LoadOptions,
 } from '../core/netlist-io/cellFiles.ts';
 import type { CellChoice } from './args.ts';
+import { binaryRefusal } from './fileText.ts';
 import { UsageError } from './usage.ts';
 import { libraryFunctions, type FunctionSource } from './functionsFrom.ts';
 
@@ -70,6 +72,13 @@ function readCells(file: string, options: LoadOptions): FileCells {
       available: [],
     };
   }
+  const binary = binaryRefusal(file, text);
+  if (binary !== null)
+    return {
+      cells: [{ failure: { file, cell: null, message: binary, line: 1 } }],
+      library: false,
+      available: [],
+    };
   return cellsFromText(text, file, options);
 }
 
@@ -114,8 +123,8 @@ function applyChoice(job: CellJob, choice: CellChoice): LoadedCell {
     };
     return { failure };
   }
-  const expectations: Record<string, string> = { ...job.expectations };
-  const expectationLines: Record<string, number> = { ...job.expectationLines };
+  const expectations = recordOf(Object.entries(job.expectations));
+  const expectationLines = recordOf(Object.entries(job.expectationLines));
   for (const [output, text] of Object.entries(choice.expect)) {
     const net = netlist.outputs.find((o) => o.toLowerCase() === output.toLowerCase()) ?? output;
     expectations[net] = text;

@@ -6,6 +6,7 @@ import { parseCheckArgs, parseExportArgs } from './args.ts';
 import { checkCommand } from './checkCommand.ts';
 import { colourWanted } from './colour.ts';
 import { exportCommand } from './exportCommand.ts';
+import { brief } from '../core/format/printable.ts';
 import { CHECK_HELP, EXIT_OK, EXIT_UNUSABLE, EXPORT_HELP, MAIN_HELP, UsageError } from './usage.ts';
 
 export interface Io {
@@ -14,33 +15,49 @@ export interface Io {
   readonly colour: boolean;
 }
 
+/**
+ * Runs one command. Every failure becomes exit status 2 with a message on standard error; with
+ * `--json`, standard output then holds one JSON document `{"error": {"message"}}` unless the report
+ * itself was already written (it then carries the error), so the output always parses.
+ */
 export async function run(argv: readonly string[], io: Io = processIo()): Promise<number> {
-  const [command, ...rest] = argv;
+  let wrote = false;
+  const tracked: Io = { ...io, out: (text) => ((wrote = true), io.out(text)) };
+  const json = argv[0] === 'check' && argv.includes('--json');
   try {
-    switch (command) {
-      case 'check': {
-        const args = parseCheckArgs(rest);
-        if (args.help) return help(io, CHECK_HELP);
-        return await checkCommand(args, io);
-      }
-      case 'export': {
-        const args = parseExportArgs(rest);
-        if (args.help) return help(io, EXPORT_HELP);
-        return exportCommand(args, io);
-      }
-      case 'help':
-        return help(io, rest[0] === 'check' ? CHECK_HELP : rest[0] === 'export' ? EXPORT_HELP : MAIN_HELP);
-      case undefined:
-      case '--help':
-      case '-h':
-        return help(io, MAIN_HELP);
-      default:
-        throw new UsageError(`unknown command "${command}": use check or export`);
-    }
+    return await dispatch(argv, tracked);
   } catch (e) {
-    if (!(e instanceof UsageError)) throw e;
-    io.err(`railwise: ${e.message}\nSee railwise --help.`);
+    const usage = e instanceof UsageError;
+    const message = usage
+      ? e.message
+      : `internal error (please report it): ${e instanceof Error ? (e.stack ?? e.message) : String(e)}`;
+    io.err(`railwise: ${brief(message, 4000)}${usage ? '\nSee railwise --help.' : ''}`);
+    if (json && !wrote) io.out(JSON.stringify({ error: { message: brief(message, 4000) } }, null, 2));
     return EXIT_UNUSABLE;
+  }
+}
+
+async function dispatch(argv: readonly string[], io: Io): Promise<number> {
+  const [command, ...rest] = argv;
+  switch (command) {
+    case 'check': {
+      const args = parseCheckArgs(rest);
+      if (args.help) return help(io, CHECK_HELP);
+      return await checkCommand(args, io);
+    }
+    case 'export': {
+      const args = parseExportArgs(rest);
+      if (args.help) return help(io, EXPORT_HELP);
+      return exportCommand(args, io);
+    }
+    case 'help':
+      return help(io, rest[0] === 'check' ? CHECK_HELP : rest[0] === 'export' ? EXPORT_HELP : MAIN_HELP);
+    case undefined:
+    case '--help':
+    case '-h':
+      return help(io, MAIN_HELP);
+    default:
+      throw new UsageError(`unknown command "${command}": use check or export`);
   }
 }
 

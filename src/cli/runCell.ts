@@ -9,6 +9,7 @@ import { CAUTION } from '../core/caution.ts';
 import { CompileError } from '../core/compile/compile.ts';
 import { ExpressionError } from '../core/expect/parse.ts';
 import type { InputValue, InputVector } from '../core/model/design.ts';
+import { recordOf } from '../core/model/records.ts';
 import { analyseCell, type PowerRequest } from '../core/power/cellAnalysis.ts';
 import { powerFromCounts } from '../core/power/powerReport.ts';
 import { DEFAULT_POWER_SETTINGS, PowerOptionsError, type PowerSettings } from '../core/power/settings.ts';
@@ -123,7 +124,7 @@ export function sequenceSteps(job: CellJob, text: string): readonly InputVector[
  * Settings as given, else the core's defaults (the app's too); with --sequence the activity is that
  * sequence's unless --activity says otherwise, and --activity sequence alone uses the first saved one.
  */
-function powerSettings(
+export function powerSettings(
   job: CellJob,
   given: Partial<PowerSettings>,
   steps: readonly InputVector[] | undefined,
@@ -136,7 +137,12 @@ function powerSettings(
 
 /** Errors that mean "this cell cannot be checked as asked", each tied to what the user should fix. */
 export function failureOf(e: unknown): { message: string; field?: string } {
-  if (e instanceof ExpressionError) return { message: `expected function: ${e.message}`, field: 'expect' };
+  if (e instanceof ExpressionError) {
+    return {
+      message: `expected function${e.output === undefined ? ':' : ' of'} ${e.message}`,
+      field: 'expect',
+    };
+  }
   if (e instanceof SequenceError) return { message: `--sequence: ${e.message}`, field: 'sequence' };
   if (e instanceof TransferError) return { message: `--transfer: ${e.message}`, field: 'transfer' };
   if (e instanceof PowerOptionsError) return { message: `--power: ${e.message}`, field: e.field };
@@ -170,8 +176,8 @@ function cellJson(job: CellJob, report: CheckReport, extras: Extras): CellJson {
   };
 }
 
-function vectorJson(v: VectorReport): VectorJson {
-  const inputs = Object.fromEntries(Object.entries(v.inputs).map(([k, x]) => [k, inputNumber(x)]));
+export function vectorJson(v: VectorReport): VectorJson {
+  const inputs = recordOf(Object.entries(v.inputs).map(([k, x]) => [k, inputNumber(x)] as const));
   return { ...v, inputs };
 }
 

@@ -3,11 +3,12 @@ import { SequenceSection } from './SequenceSection.tsx';
 import { TableSection } from './TableSection.tsx';
 import { VectorSection } from './VectorSection.tsx';
 import { PowerSection } from './PowerSection.tsx';
+import { TransferSection } from './TransferSection.tsx';
 import './panels.css';
 
 /**
  * The analysis workspace beside the sheet: the selected vector, every vector, expected functions,
- * structure checks, sequences, power and sizing. It only renders the simulation slice, which the
+ * structure checks, sequences, the DC transfer curve, power and sizing. It only renders the simulation slice, which the
  * analysis wiring (src/state/analysis.ts, started at start-up) keeps up to date.
  */
 export function AnalysisPanel() {
@@ -18,6 +19,7 @@ export function AnalysisPanel() {
       <ExpectationSection />
       <RuleSection />
       <SequenceSection />
+      <TransferSection />
       <PowerSection />
     </aside>
   );

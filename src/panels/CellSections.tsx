@@ -1,4 +1,5 @@
 import { useCallback, useMemo } from 'react';
+import { expressionNames } from '../core/analysis/check.ts';
 import { expressionProblem } from '../core/view/expectation.ts';
 import { setDesignFields, useStore } from '../state/store.ts';
 import { useSimulation } from '../state/simulation.ts';
@@ -10,8 +11,11 @@ import { Section } from './Section.tsx';
 /** Expected functions per output, saved into the design as one undoable step each. */
 export function ExpectationSection() {
   const design = useStore((s) => s.design);
-  const inputs = design.netlist.inputs;
-  const validate = useCallback((text: string) => expressionProblem(text, inputs), [inputs]);
+  const netlist = design.netlist;
+  const validate = useCallback(
+    (text: string) => expressionProblem(text, expressionNames(netlist)),
+    [netlist],
+  );
   const commit = (output: string, text: string): void => {
     const next: Record<string, string> = { ...design.expectations };
     if (text === '') delete next[output];

@@ -11,6 +11,7 @@ const PROBLEMS: readonly [ProblemMark, string][] = [
   ['degraded', 'degraded: arrived through a threshold drop'],
   ['charge-shared', 'charge shared with another floating net'],
   ['oscillating', 'no steady state'],
+  ['stored-state', 'holds stored state: several steady states (a latch in a sweep), shown as X'],
 ];
 
 /** What the marks on the sheet mean: every look has a dash pattern and a text mark, not colour alone. */
@@ -47,6 +48,10 @@ export function Legend() {
             {PROBLEM_GLYPHS[mark]} {text}
           </li>
         ))}
+        <li>
+          An output at X for a 0/1 vector is an <em>unknown</em> finding: an error unless its expected
+          function allows it (naming the output there means it holds its value).
+        </li>
         <li>Point at a wire to read its estimated voltage.</li>
         <li>Double-click an input pin, or click its bit above, to flip it; [ and ] step through vectors.</li>
       </ul>

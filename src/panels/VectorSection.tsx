@@ -11,6 +11,7 @@ import { NetList } from './NetList.tsx';
 import { pickFinding, pickNet, pickTargets } from './pick.ts';
 import { Section } from './Section.tsx';
 import { Legend } from './Legend.tsx';
+import { VectorDcFigures } from './VectorDcFigures.tsx';
 
 /** The report row behind what the sheet shows: the picked sequence step, else the sweep's vector. */
 function shownReport(s: SimulationState): VectorReport | null {
@@ -114,6 +115,7 @@ export function VectorSection() {
           static power <strong data-testid="static-power">{formatPower(live.staticPower)}</strong>
         </p>
       )}
+      <VectorDcFigures />
       <h4>Static current paths</h4>
       <CurrentPaths />
       <h4>Findings</h4>

@@ -20,6 +20,7 @@ import {
   startSizing,
   startSweep,
 } from './simulation.ts';
+import { startTransfer, startVectorDc } from './dc.ts';
 import type { AnalysedInputs, SimulationState } from './simulationSlice.ts';
 import { store, type RailwiseState } from './store.ts';
 
@@ -27,6 +28,12 @@ import { store, type RailwiseState } from './store.ts';
 export const AUTO_SWEEP_VECTORS = 1024;
 /** Waits for edits to pause before starting jobs by themselves. */
 export const SWEEP_DEBOUNCE_MS = 120;
+
+/**
+ * The shown vector's level-1 answer starts by itself for cells of up to this many devices; a larger
+ * cell waits for a click (one operating point of a large cell can take seconds).
+ */
+export const AUTO_VECTOR_DC_DEVICES = 2000;
 
 /** Which lanes a change made stale. */
 interface Staleness {
@@ -36,6 +43,8 @@ interface Staleness {
   readonly sequence: boolean;
   readonly sizing: boolean;
   readonly activity: boolean;
+  readonly transfer: boolean;
+  readonly vectorDc: boolean;
 }
 
 function analysedNow(s: RailwiseState): AnalysedInputs {
@@ -48,6 +57,9 @@ function analysedNow(s: RailwiseState): AnalysedInputs {
     undrivenInputs: sim.undrivenInputs,
     load: sim.powerSettings.load,
     activity: sim.powerSettings.activity,
+    transferRequest: sim.transferRequest,
+    vector: sim.vector,
+    selectedStep: sim.selectedStep,
   };
 }
 
@@ -56,13 +68,17 @@ function staleness(s: RailwiseState): Staleness {
   const now = analysedNow(s);
   const netlist = now.netlistRevision !== a.netlistRevision;
   const check = netlist || now.expectations !== a.expectations;
+  const sequence = check || now.sequences !== a.sequences || now.sequenceIndex !== a.sequenceIndex;
+  const shown = now.vector !== a.vector || now.selectedStep !== a.selectedStep;
   return {
     netlist,
     check,
     sweep: check || now.undrivenInputs !== a.undrivenInputs,
-    sequence: check || now.sequences !== a.sequences || now.sequenceIndex !== a.sequenceIndex,
+    sequence,
     sizing: netlist || now.load !== a.load,
     activity: now.activity !== a.activity,
+    transfer: netlist || now.transferRequest !== a.transferRequest,
+    vectorDc: netlist || shown || (now.selectedStep !== null && sequence),
   };
 }
 
@@ -103,6 +119,8 @@ function follow(s: RailwiseState): Staleness {
     ...(stale.sweep ? { sweep: IDLE_JOB } : {}),
     ...(stale.sequence ? { sequence: IDLE_JOB, selectedStep: null } : {}),
     ...(stale.sizing ? { sizing: IDLE_JOB } : {}),
+    ...(stale.transfer ? { transfer: IDLE_JOB } : {}),
+    ...(stale.vectorDc ? { vectorDc: IDLE_JOB } : {}),
   });
   if (stale.netlist) followNetlist(store.getState());
   return stale;
@@ -127,6 +145,19 @@ function autoRun(stale: Staleness): void {
     void runSequence();
 }
 
+/** The level-1 DC jobs whatever the cell's vector count: the curve once asked for, the shown vector's answer. */
+function autoRunDc(stale: Staleness): void {
+  const s = store.getState();
+  const sim = s.simulation;
+  if (stale.transfer && sim.transfer.status === 'idle' && sim.transferRequest !== null) void startTransfer();
+  if (
+    stale.vectorDc &&
+    sim.vectorDc.status === 'idle' &&
+    s.design.netlist.devices.length <= AUTO_VECTOR_DC_DEVICES
+  )
+    void startVectorDc();
+}
+
 /** Follows the store from now on; returns the function that stops following. */
 export function startAnalysis(): () => void {
   let timer: ReturnType<typeof setTimeout> | null = null;
@@ -140,7 +171,10 @@ export function startAnalysis(): () => void {
         timer = null;
         const due = pending;
         pending = null;
-        if (due !== null) autoRun(due);
+        if (due !== null) {
+          autoRunDc(due);
+          autoRun(due);
+        }
       }, SWEEP_DEBOUNCE_MS);
     }
     const sim = store.getState().simulation;
@@ -174,5 +208,7 @@ function merge(a: Staleness, b: Staleness): Staleness {
     sequence: a.sequence || b.sequence,
     sizing: a.sizing || b.sizing,
     activity: a.activity || b.activity,
+    transfer: a.transfer || b.transfer,
+    vectorDc: a.vectorDc || b.vectorDc,
   };
 }

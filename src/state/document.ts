@@ -10,6 +10,7 @@ import { autoPlace } from '../core/sheet/autoPlace.ts';
 import { samePlainData } from '../core/model/plainData.ts';
 import { designOfCell } from '../core/hierarchy/cellDesign.ts';
 import { flattened, openCellOf, seenFrom } from './documentCells.ts';
+import { nameRecord, recordOf } from '../core/model/records.ts';
 
 /**
  * The open cell's fields at the top (what the editor and the panels read), the design's other
@@ -88,9 +89,9 @@ export function deriveDesign(doc: SheetDocument, before: CellDesign | null = nul
   };
   const names = seen.placement;
   const rename = <T extends string>(record: Readonly<Record<string, T>>, f: (n: string) => string) =>
-    names === null ? record : Object.fromEntries(Object.entries(record).map(([k, v]) => [k, f(v)]));
+    names === null ? record : recordOf(Object.entries(record).map(([k, v]) => [k, f(v)] as const));
   const partDevices = rename(d.partDevices, (n) => names?.device(n) ?? n);
-  const deviceParts: Record<string, string> = {};
+  const deviceParts = nameRecord<string>(); // a device may be called __proto__
   for (const [partId, device] of Object.entries(partDevices)) deviceParts[device] ??= partId;
   return {
     design,

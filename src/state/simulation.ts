@@ -113,7 +113,7 @@ export function setPowerSettings(powerSettings: PowerSettings): void {
   setSimulation({ powerSettings });
 }
 
-type LaneName = 'sweep' | 'sequence' | 'sizing';
+type LaneName = 'sweep' | 'sequence' | 'sizing' | 'transfer' | 'vector-dc';
 
 function checkHost(lane: 'sweep' | 'sequence'): LaneHost<CheckResult> {
   return {
@@ -130,7 +130,7 @@ const sizingHost: LaneHost<SizingResult> = {
 };
 
 /** The cell as the jobs see it: the derived design without its drawing. */
-function cell(): CellInput {
+export function cell(): CellInput {
   const { netlist, technology, expectations } = store.getState().design;
   return { netlist, technology, expectations };
 }

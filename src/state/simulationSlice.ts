@@ -1,7 +1,7 @@
 /**
  * The simulation slice of the store: the selected input vector, the live solve of the sheet for it,
- * the jobs run in the worker (sweep, sequence, sizing) and the power figures finished from their
- * counts. Plain state only: the actions are in ./simulation.ts, the wiring that follows the document
+ * the jobs run in the worker (sweep, sequence, sizing, the transfer curve and the shown vector's
+ * level-1 answer) and the power figures finished from their counts. Plain state only: the actions are in ./simulation.ts, the wiring that follows the document
  * in ./analysis.ts. Nothing here copies the design: the document slice holds it once.
  */
 import type { InputVector } from '../core/model/design.ts';
@@ -10,12 +10,15 @@ import type { ActivitySource, PowerReport } from '../core/power/types.ts';
 import type { LiveSession } from '../core/view/liveSession.ts';
 import type { SolvedView } from '../core/view/solvedView.ts';
 import type { TableView } from '../core/view/vectorTable.ts';
+import type { MarginConvention } from '../core/dc/figures.ts';
 import {
   IDLE_JOB,
   type CheckResult,
   type JobState,
   type LibraryResult,
   type SizingResult,
+  type TransferResult,
+  type VectorDcResult,
 } from '../worker/protocol.ts';
 import type { LibraryTableView } from '../core/view/libraryTable.ts';
 
@@ -28,6 +31,23 @@ export interface AnalysedInputs {
   readonly undrivenInputs: boolean;
   readonly load: number;
   readonly activity: ActivitySource;
+  readonly transferRequest: TransferRequest | null;
+  /** The shown vector and step, which the level-1 answer beside them follows. */
+  readonly vector: InputVector | null;
+  readonly selectedStep: number | null;
+}
+
+/** The transfer curve asked for: the swept input and the inputs the designer held. */
+export interface TransferRequest {
+  readonly input: string;
+  readonly hold: InputVector;
+}
+
+/** How the chart reads a curve, without solving again. */
+export interface TransferView {
+  readonly convention: MarginConvention;
+  /** The output whose figures are marked; null: the first. */
+  readonly output: string | null;
 }
 
 export interface SimulationState {
@@ -57,6 +77,12 @@ export interface SimulationState {
   readonly selectedRow: number | null;
   /** Sweeps also leave each input undriven (Z), for pins a bus may release. */
   readonly undrivenInputs: boolean;
+  /** Null until the transfer view is first opened. */
+  readonly transferRequest: TransferRequest | null;
+  readonly transfer: JobState<TransferResult>;
+  readonly transferView: TransferView;
+  /** The shown vector's level-1 operating point beside its switch-level estimate. */
+  readonly vectorDc: JobState<VectorDcResult>;
 }
 
 export const NOTHING_ANALYSED: AnalysedInputs = {
@@ -67,6 +93,9 @@ export const NOTHING_ANALYSED: AnalysedInputs = {
   undrivenInputs: false,
   load: DEFAULT_POWER_SETTINGS.load,
   activity: DEFAULT_POWER_SETTINGS.activity,
+  transferRequest: null,
+  vector: null,
+  selectedStep: null,
 };
 
 export const INITIAL_SIMULATION: SimulationState = {
@@ -90,4 +119,8 @@ export const INITIAL_SIMULATION: SimulationState = {
   table: { sort: 'vector', direction: 'ascending', filter: 'all' },
   selectedRow: null,
   undrivenInputs: false,
+  transferRequest: null,
+  transfer: IDLE_JOB,
+  transferView: { convention: 'unity-gain', output: null },
+  vectorDc: IDLE_JOB,
 };

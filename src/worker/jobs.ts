@@ -3,12 +3,14 @@
  * command line makes): the worker exposes them, tests call them directly. Nothing here knows about
  * workers or the page.
  */
-import { DEFAULT_MAX_INPUTS } from '../core/analysis/check.ts';
+import { DEFAULT_MAX_INPUTS, expressionNames } from '../core/analysis/check.ts';
+import { nameRecord } from '../core/model/records.ts';
 import { analyseCell } from '../core/power/cellAnalysis.ts';
 import { sizingReport } from '../core/sizing/sizingReport.ts';
 import { checkLibraryCell } from '../core/analysis/libraryCheck.ts';
 import { expressionProblem } from '../core/view/expectation.ts';
 import { StepLevelRecorder } from '../core/view/sequenceLevels.ts';
+import { transfer, vectorDc } from './dcJobs.ts';
 import { MAX_INPUTS_WITH_UNDRIVEN } from './protocol.ts';
 import type {
   AnalysisJob,
@@ -35,12 +37,13 @@ export function usableExpectations(cell: CellInput): {
   expectations: Record<string, string>;
   notes: string[];
 } {
-  const { inputs, outputs } = cell.netlist;
-  const expectations: Record<string, string> = {};
+  const { outputs } = cell.netlist;
+  const names = expressionNames(cell.netlist);
+  const expectations = nameRecord<string>(); // an output may be called __proto__
   const notes: string[] = [];
   for (const [output, text] of Object.entries(cell.expectations)) {
     const problem = outputs.includes(output)
-      ? expressionProblem(text, inputs)
+      ? expressionProblem(text, names)
       : { message: 'not an output', position: 0 };
     if (problem === null) expectations[output] = text;
     else notes.push(`expected function of ${output} ignored: ${problem.message}`);
@@ -119,5 +122,11 @@ export function runJob(job: AnalysisJob, onProgress: (p: JobProgress) => void = 
       return { kind: 'sizing', revision: job.revision, ...sizing(job), elapsedMs: elapsed() };
     case 'library':
       return { kind: 'library', revision: job.revision, ...library(job, onProgress), elapsedMs: elapsed() };
+    case 'transfer': {
+      const outcome = transfer(job, throttled(onProgress));
+      return { kind: 'transfer', revision: job.revision, ...outcome, elapsedMs: elapsed() };
+    }
+    case 'vector-dc':
+      return { kind: 'vector-dc', revision: job.revision, ...vectorDc(job), elapsedMs: elapsed() };
   }
 }

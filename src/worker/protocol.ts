@@ -3,6 +3,8 @@
  * it was computed for; the page drops results whose job is no longer the lane's current one.
  */
 import type { CheckReport } from '../core/analysis/report.ts';
+import type { TransferReport } from '../core/dc/transfer.ts';
+import type { DcComparison } from '../core/dc/vectorCompare.ts';
 import type { CellDesign, Design, InputVector } from '../core/model/design.ts';
 import type { LibraryRow } from '../core/analysis/libraryCheck.ts';
 import type { PowerCounts } from '../core/power/tally.ts';
@@ -38,6 +40,26 @@ export interface SizingJob {
   readonly load: number;
 }
 
+/** The level-1 transfer curve of every output as one input sweeps from 0 to VDD. */
+export interface TransferJob {
+  readonly kind: 'transfer';
+  readonly revision: number;
+  readonly cell: CellInput;
+  readonly input: string;
+  /** Inputs the designer held; the others are chosen so that an output follows the swept one. */
+  readonly hold: InputVector;
+  readonly points: number;
+}
+
+/** One vector's level-1 operating point beside its switch-level estimate. */
+export interface VectorDcJob {
+  readonly kind: 'vector-dc';
+  readonly revision: number;
+  readonly cell: CellInput;
+  /** Solved in order; the last is the vector shown, with the charge the steps before it left. */
+  readonly steps: readonly InputVector[];
+}
+
 /** Every cell of a design checked on its own (the library view): one row per cell. */
 export interface LibraryJob {
   readonly kind: 'library';
@@ -46,7 +68,7 @@ export interface LibraryJob {
   readonly design: Design;
 }
 
-export type AnalysisJob = SweepJob | SequenceJob | SizingJob | LibraryJob;
+export type AnalysisJob = SweepJob | SequenceJob | SizingJob | TransferJob | VectorDcJob | LibraryJob;
 
 export interface JobProgress {
   readonly done: number;
@@ -73,6 +95,23 @@ export interface SizingResult {
   readonly elapsedMs: number;
 }
 
+export interface TransferResult {
+  readonly kind: 'transfer';
+  readonly revision: number;
+  readonly report: TransferReport | null;
+  /** A request the core refused (an input that no longer exists…), in words. */
+  readonly error: string | null;
+  readonly elapsedMs: number;
+}
+
+export interface VectorDcResult {
+  readonly kind: 'vector-dc';
+  readonly revision: number;
+  readonly comparison: DcComparison | null;
+  readonly error: string | null;
+  readonly elapsedMs: number;
+}
+
 export interface LibraryResult {
   readonly kind: 'library';
   readonly revision: number;
@@ -80,7 +119,7 @@ export interface LibraryResult {
   readonly elapsedMs: number;
 }
 
-export type JobResult = CheckResult | SizingResult | LibraryResult;
+export type JobResult = CheckResult | SizingResult | TransferResult | VectorDcResult | LibraryResult;
 
 /** A job as the panels see it, whatever its kind. */
 export type JobStatus = 'idle' | 'running' | 'done' | 'cancelled' | 'failed';
@@ -118,11 +157,14 @@ export const MAX_INPUTS_WITH_UNDRIVEN = 10;
 /** Sweeps with more vectors than this show a progress bar and a cancel button. */
 export const PROGRESS_THRESHOLD_VECTORS = 4096;
 
-/** Solves a job takes: vectors of a sweep, steps of a sequence, none for sizing; cells of a library. */
+/** Solves a job takes: vectors of a sweep, steps of a sequence, points of a curve, cells of a library, none for sizing. */
 export function jobSize(job: AnalysisJob): number {
   switch (job.kind) {
     case 'sequence':
+    case 'vector-dc':
       return job.steps.length;
+    case 'transfer':
+      return job.points;
     case 'sizing':
       return 0;
     case 'library':

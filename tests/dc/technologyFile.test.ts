@@ -43,3 +43,56 @@ describe('level-1 parameters in the design file', () => {
     expect((error as DesignFileError).field).toBe('technology.lambdan');
   });
 });
+
+describe('model cards in the design file', () => {
+  const base = (): { technology: Record<string, unknown>; netlist: { devices: Record<string, unknown>[] } } =>
+    JSON.parse(readFileSync(EXAMPLE, 'utf8')) as never;
+  const withCards = () => {
+    const file = base();
+    file.technology = { ...file.technology, models: { hvt: { type: 'nmos', vt0: 0.6, kp: 90e-6 } } };
+    const nmos = file.netlist.devices.findIndex((d) => d['kind'] === 'nmos');
+    file.netlist.devices[nmos] = { ...file.netlist.devices[nmos], model: 'hvt' };
+    return { file, nmos };
+  };
+  const refusal = (file: unknown): DesignFileError => {
+    try {
+      parseDesignFile(JSON.stringify(file), 'cards.json');
+    } catch (e) {
+      if (e instanceof DesignFileError) return e;
+      throw e;
+    }
+    throw new Error('expected a DesignFileError');
+  };
+
+  it('a file without cards loads with none', () => {
+    expect(parseDesignFile(readFileSync(EXAMPLE, 'utf8'), EXAMPLE).technology.models).toBeUndefined();
+  });
+
+  it('cards and the devices that name them round-trip', () => {
+    const { file, nmos } = withCards();
+    const design = parseDesignFile(JSON.stringify(file), 'cards.json');
+    expect(design.technology.models).toEqual({ hvt: { type: 'nmos', vt0: 0.6, kp: 90e-6 } });
+    expect(design.cells[0]?.netlist.devices[nmos]).toMatchObject({ model: 'hvt' });
+    expect(parseDesignFile(serializeDesign(design), 'again.json')).toEqual(design);
+  });
+
+  it('a device naming a card the technology lacks is refused, naming the field', () => {
+    const { file, nmos } = withCards();
+    file.technology = { ...file.technology, models: {} };
+    const error = refusal(file);
+    expect(error.field).toBe(`netlist.devices[${nmos}].model`);
+    expect(error.message).toMatch(/no model card 'hvt'/);
+  });
+
+  it('a PMOS card named by an NMOS is refused', () => {
+    const { file } = withCards();
+    file.technology = { ...file.technology, models: { hvt: { type: 'pmos' } } };
+    expect(refusal(file).message).toMatch(/'hvt' is a pmos card, not nmos/);
+  });
+
+  it("'constructor' is no card", () => {
+    const { file, nmos } = withCards();
+    file.netlist.devices[nmos] = { ...file.netlist.devices[nmos], model: 'constructor' };
+    expect(refusal(file).field).toBe(`netlist.devices[${nmos}].model`);
+  });
+});

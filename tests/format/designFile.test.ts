@@ -48,7 +48,10 @@ function edited(edit: (doc: Doc, top: Record<string, unknown>) => void): string 
   return JSON.stringify(top, null, 2);
 }
 
-const sizeArb = fc.double({ min: 1e-15, max: 1e9, noNaN: true });
+/** Sizes anywhere in their physical ranges (RANGES in model/ranges.ts). */
+const between = (min: number, max: number) => fc.double({ min, max, noNaN: true });
+/** Sheet coordinates span ±1,000,000 grid units (RANGES.coordinate). */
+const coordinateArb = fc.integer({ min: -1e6, max: 1e6 });
 
 /** Any kind of part, with whichever sizes its kind has. */
 const partArb: fc.Arbitrary<SheetPart> = fc
@@ -60,12 +63,17 @@ const partArb: fc.Arbitrary<SheetPart> = fc
     y: fc.integer({ min: -500, max: 500 }),
     rotation: fc.constantFrom(0 as const, 1 as const, 2 as const, 3 as const),
     mirror: fc.boolean(),
-    sizes: fc.record({ w: sizeArb, l: sizeArb, ohms: sizeArb, farads: sizeArb }),
+    sizes: fc.record({
+      w: between(1e-3, 9999),
+      l: between(1e-3, 9999),
+      ohms: between(1e-3, 1e12),
+      farads: between(1e-21, 1e-6),
+    }),
   })
   .map(({ kind, sizes, ...placement }) => makeSheetPart(kind, placement, sizes));
 
-/** Record keys as a user might type them; `__proto__` is dropped by zod's record (a guard against prototype pollution). */
-const keyArb = fc.string({ minLength: 1 }).filter((k) => k !== '__proto__');
+/** Record keys as a user might type them, names of Object's own members among them. */
+const keyArb = fc.oneof(fc.string({ minLength: 1 }), fc.constantFrom('__proto__', 'constructor', 'toString'));
 
 const cellArb: fc.Arbitrary<CellDesign> = fc.record(
   {
@@ -82,7 +90,10 @@ const cellArb: fc.Arbitrary<CellDesign> = fc.record(
     sheet: fc.record({
       parts: fc.array(partArb, { maxLength: 5 }),
       wires: fc.array(
-        fc.record({ id: fc.uuid(), points: fc.array(fc.record({ x: fc.integer(), y: fc.integer() })) }),
+        fc.record({
+          id: fc.uuid(),
+          points: fc.array(fc.record({ x: coordinateArb, y: coordinateArb })),
+        }),
         { maxLength: 3 },
       ),
     }),

@@ -1,5 +1,6 @@
 /** fast-check generators of netlists whose names SPICE can carry (no white space, distinct ignoring case). */
 import fc from 'fast-check';
+import { HOSTILE_NAMES, RAIL_LIKE_NAMES } from '../fixtures/hostileNames.ts';
 import type { Device, Netlist, Rail } from '../../src/core/model/netlist.ts';
 
 const SIGNALS = ['A', 'B', 'C', 'EN', 'Y', 'Q', 'QB', 'n1', 'n2', 'mid', 'X1/n3', 'bit_7'];
@@ -56,3 +57,58 @@ export const netlistArb: fc.Arbitrary<Netlist> = fc
       outputs: pins.slice(split),
     }));
   });
+
+/**
+ * Netlists as any design may hold them: hostile names for the cell, nets, rails and devices
+ * (repeats included), rails named like the other role, devices with and without a bulk, supplies at
+ * their own voltage with or without a ground, nets that are both input and output, observed rails.
+ * Only what a design file refuses is left out (an input that is a rail, a pin listed twice).
+ */
+export const hostileNetlistArb: fc.Arbitrary<Netlist> = fc
+  .record({
+    name: fc.oneof(fc.constantFrom('', ...HOSTILE_NAMES), fc.string()),
+    pool: fc.shuffledSubarray([...new Set([...HOSTILE_NAMES, ...RAIL_LIKE_NAMES, ...SIGNALS])], {
+      minLength: 3,
+      maxLength: 12,
+    }),
+    railCount: fc.integer({ min: 0, max: 3 }),
+    railRoles: fc.array(fc.constantFrom('supply', 'ground'), { minLength: 3, maxLength: 3 }),
+    railVolts: fc.array(fc.option(fc.constantFrom(1.2, 1.8, 3.3), { nil: undefined }), {
+      minLength: 3,
+      maxLength: 3,
+    }),
+    inputCount: fc.nat(4),
+    outputPicks: fc.array(fc.nat(20), { maxLength: 4 }),
+    deviceCount: fc.integer({ min: 0, max: 8 }),
+  })
+  .chain((p) => {
+    const rails: Rail[] = p.pool.slice(0, p.railCount).map((net, i) => {
+      const role = p.railRoles[i] as Rail['role'];
+      const volts = role === 'supply' ? p.railVolts[i] : undefined;
+      return volts === undefined ? { net, role } : { net, role, volts };
+    });
+    const signals = p.pool.slice(p.railCount);
+    const inputs = signals.slice(0, p.inputCount);
+    // Outputs may repeat an input (a bidirectional pin) or be a rail (an observed rail).
+    const outputs = [...new Set(p.outputPicks.map((k) => p.pool[k % p.pool.length] as string))];
+    const nets = p.pool;
+    const devices = fc.tuple(
+      ...Array.from({ length: p.deviceCount }, (_, i) =>
+        fc.tuple(deviceArb(nets, i + 1), fc.constantFrom(...HOSTILE_NAMES, `D${i}`), fc.boolean()),
+      ),
+    );
+    return devices.map((ds): Netlist => ({
+      name: p.name,
+      devices: ds.map(([d, name, keepBulk]) => withoutBulk({ ...d, name }, keepBulk)),
+      rails,
+      inputs,
+      outputs,
+    }));
+  });
+
+function withoutBulk(d: Device, keep: boolean): Device {
+  if (keep || (d.kind !== 'nmos' && d.kind !== 'pmos')) return d;
+  const copy = { ...d };
+  delete copy.bulk;
+  return copy;
+}

@@ -59,13 +59,15 @@ describe('SPICE round trip', () => {
     expect(text).toContain('MN1 Y A GND GND rw_nmos W=1u L=0.25u');
   });
 
-  it('writes level-1 model cards from the technology (Shichman–Hodges: VTO and KP)', () => {
+  it('writes level-1 model cards from the technology (Shichman–Hodges: VTO, KP, GAMMA, PHI, LAMBDA)', () => {
     const text = exportSpice(
       { name: 'c', devices: [], rails: [], inputs: [], outputs: [] },
       DEFAULT_TECHNOLOGY,
     );
-    // RCN 0.25 µm process, tables 3.2–3.3 (from memory): VT0 0.43 / −0.4 V, k' 115 / 30 µA/V².
-    expect(text).toContain('.model rw_nmos nmos (level=1 vto=0.43 kp=115u)');
-    expect(text).toContain('.model rw_pmos pmos (level=1 vto=-0.4 kp=30u)');
+    // RCN 0.25 µm process, tables 3.2–3.3 (from memory): VT0 0.43 / −0.4 V, k' 115 / 30 µA/V²,
+    // γ 0.4 V^½, 2φF 0.6 V, λ 0.06 / 0.1 V⁻¹.
+    expect(text).toContain('* railwise: technology rw_nmos rw_pmos');
+    expect(text).toContain('.model rw_nmos nmos (level=1 vto=0.43 kp=115u gamma=0.4 phi=0.6 lambda=0.06)');
+    expect(text).toContain('.model rw_pmos pmos (level=1 vto=-0.4 kp=30u gamma=0.4 phi=0.6 lambda=0.1)');
   });
 });

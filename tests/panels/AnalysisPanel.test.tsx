@@ -1,51 +1,11 @@
 // @vitest-environment happy-dom
 import { act } from 'react';
-import { createRoot, type Root } from 'react-dom/client';
-import { afterEach, beforeEach, describe, expect, it } from 'vitest';
-import { AnalysisPanel } from '../../src/panels/AnalysisPanel.tsx';
-import { loadDesign, resetStore, store } from '../../src/state/store.ts';
-import { SWEEP_DEBOUNCE_MS, startAnalysis } from '../../src/state/analysis.ts';
-import { setJobRunnerFactory } from '../../src/worker/runner.ts';
-import { runJob } from '../../src/worker/jobs.ts';
+import { describe, expect, it } from 'vitest';
+import { loadDesign, store } from '../../src/state/store.ts';
 import { design, nand2MissingPullUp, resistorLoadInverter } from '../cells.ts';
+import { byTestId, click, host, mount, usePanelHarness } from './panelHarness.tsx';
 
-(globalThis as { IS_REACT_ACT_ENVIRONMENT?: boolean }).IS_REACT_ACT_ENVIRONMENT = true;
-
-let root: Root;
-let host: HTMLElement;
-
-const byTestId = (id: string): HTMLElement | null => host.querySelector(`[data-testid="${id}"]`);
-const wait = (ms: number) => new Promise((r) => setTimeout(r, ms));
-
-async function click(el: Element | null): Promise<void> {
-  if (el === null) throw new Error('nothing to click');
-  await act(async () => {
-    (el as HTMLElement).click();
-  });
-}
-
-async function mount(): Promise<void> {
-  host = document.createElement('div');
-  document.body.append(host);
-  root = createRoot(host);
-  await act(async () => root.render(<AnalysisPanel />));
-  // Let the debounced sweep start and its in-process runner answer.
-  await act(async () => wait(SWEEP_DEBOUNCE_MS + 30));
-}
-
-let stopAnalysis: () => void;
-
-beforeEach(() => {
-  resetStore();
-  stopAnalysis = startAnalysis();
-  setJobRunnerFactory(() => ({ run: (job) => Promise.resolve(runJob(job)), cancel: () => {} }));
-});
-
-afterEach(async () => {
-  stopAnalysis();
-  await act(async () => root.unmount());
-  host.remove();
-});
+usePanelHarness();
 
 describe('analysis panel', () => {
   // Resistor-load inverter, A = 1: 2.5 V / (40 kΩ + 3.25 kΩ) = 57.8 µA (Ohm's law with RCN's Rn = 13 kΩ

@@ -1,6 +1,6 @@
 import fc from 'fast-check';
 import { circuit, type CircuitBuilder } from '../../src/core/model/builder.ts';
-import type { Netlist } from '../../src/core/model/netlist.ts';
+import type { Device, Netlist } from '../../src/core/model/netlist.ts';
 
 /** A series-parallel switch network over named inputs. */
 export type SpTree =
@@ -90,14 +90,50 @@ export function randomNetlist(): fc.Arbitrary<Netlist> {
       farads: fc.double({ min: 1e-16, max: 1e-12, noNaN: true }),
     }),
   );
-  return fc.array(device, { minLength: 1, maxLength: 12 }).map((devices) => ({
-    name: 'random',
-    devices: devices.map((d, i) => ({ ...d, name: `D${i}` })),
+  return fc
+    .array(device, { minLength: 1, maxLength: 12 })
+    .map((devices) => poolNetlist('random', devices, ['Y', 'n1']));
+}
+
+/** Devices over the nets of a pool, named D0, D1…, with rails VDD and GND and inputs A and B. */
+function poolNetlist(name: string, devices: readonly Omit<Device, 'name'>[], outputs: string[]): Netlist {
+  return {
+    name,
+    devices: devices.map((d, i) => ({ ...d, name: `D${i}` }) as Device),
     rails: [
-      { net: 'VDD', role: 'supply' as const },
-      { net: 'GND', role: 'ground' as const },
+      { net: 'VDD', role: 'supply' },
+      { net: 'GND', role: 'ground' },
     ],
     inputs: ['A', 'B'],
-    outputs: ['Y', 'n1'],
-  }));
+    outputs,
+  };
+}
+
+/**
+ * Pass networks: transistors whose gates sit at a rail or an input (so every device is definitely on
+ * or off) and resistors, wired at random between inputs, rails and internal nets. Levels reach nets
+ * along several paths of different lengths with threshold drops, which is where a degraded level's
+ * limiter is chosen.
+ */
+export function passNetwork(): fc.Arbitrary<Netlist> {
+  const nets = ['VDD', 'GND', 'A', 'B', 'Y', 'n1', 'n2', 'n3'];
+  const net = fc.constantFrom(...nets);
+  const transistor = fc.record({
+    kind: fc.constantFrom('nmos' as const, 'pmos' as const),
+    gate: fc.constantFrom('VDD', 'GND', 'A', 'B'),
+    drain: net,
+    source: net,
+    w: fc.constantFrom(0.5, 1, 2),
+    l: fc.constant(0.25),
+  });
+  const resistor = fc.record({
+    kind: fc.constant('resistor' as const),
+    a: net,
+    b: net,
+    ohms: fc.constantFrom(1e3, 1e5),
+  });
+  const device = fc.oneof({ weight: 3, arbitrary: transistor }, { weight: 2, arbitrary: resistor });
+  return fc
+    .array(device, { minLength: 4, maxLength: 14 })
+    .map((devices) => poolNetlist('pass', devices, ['Y', 'n1', 'n2', 'n3']));
 }

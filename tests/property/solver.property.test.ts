@@ -4,7 +4,7 @@ import { checkSequence, checkSweep } from '../../src/core/analysis/check.ts';
 import type { CheckReport } from '../../src/core/analysis/report.ts';
 import type { Netlist } from '../../src/core/model/netlist.ts';
 import { STARTERS } from '../../src/core/starters/index.ts';
-import { complementaryGate, conducts, randomNetlist, spTree } from './generators.ts';
+import { complementaryGate, conducts, passNetwork, randomNetlist, spTree } from './generators.ts';
 
 const INPUTS = ['A', 'B', 'C', 'D'];
 
@@ -108,6 +108,23 @@ describe('determinism', () => {
         );
       }),
       { numRuns: 200 },
+    );
+  });
+});
+
+describe('the limiting transistor of a degraded level', () => {
+  // docs/semantics.md §2: among the paths that reach a net's best level, the device that made the last
+  // drop, the smallest name where they disagree. Our own rule: no published source applies.
+  it('does not depend on device order in pass networks', () => {
+    const limiters = (report: CheckReport): string[] =>
+      report.findings.filter((f) => f.kind === 'degraded').map((f) => `${f.vector}|${f.nets}|${f.devices}`);
+    fc.assert(
+      fc.property(passNetwork(), fc.array(fc.nat(), { minLength: 1, maxLength: 12 }), (netlist, order) => {
+        const a = limiters(checkSweep(shuffled(netlist, order)));
+        const b = limiters(checkSweep(netlist));
+        expect(a.sort()).toEqual(b.sort());
+      }),
+      { numRuns: 300, seed: 9 },
     );
   });
 });

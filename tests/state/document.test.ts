@@ -5,22 +5,8 @@ import { cellDesign } from '../../src/core/hierarchy/cellDesign.ts';
 import { parseDesignFile, serializeDesign } from '../../src/core/format/designFile.ts';
 import { STARTERS } from '../../src/core/starters/index.ts';
 import { resetStore, selectDevices, selectNets, store } from '../../src/state/store.ts';
-import { AUTOSAVE_KEY, RESCUE_KEY, restoreAutosave } from '../../src/app/autosave.ts';
-
-/** A Storage in memory, as the browser's would behave. */
-function memoryStorage(): Storage {
-  const data = new Map<string, string>();
-  return {
-    get length() {
-      return data.size;
-    },
-    clear: () => data.clear(),
-    getItem: (k) => data.get(k) ?? null,
-    key: (i) => [...data.keys()][i] ?? null,
-    removeItem: (k) => void data.delete(k),
-    setItem: (k, v) => void data.set(k, String(v)),
-  };
-}
+import { AUTOSAVE_KEY, RESCUE_KEY, openingDone, restoreAutosave } from '../../src/app/autosave.ts';
+import { memoryStorage } from '../memoryStorage.ts';
 
 describe('the document and its derived design', () => {
   const nand2 = STARTERS.find((s) => s.id === 'nand2')!.design;
@@ -45,7 +31,9 @@ describe('the document and its derived design', () => {
     const doc = documentFromDesign(nand2);
     const { design, openCell } = deriveDesign(doc);
     storage.setItem(AUTOSAVE_KEY, serializeDesign(designOfDocument(doc, openCell)));
-    expect(restoreAutosave(storage).design?.cells[0]?.sheet).toEqual(design.sheet);
+    const restored = restoreAutosave(storage);
+    expect(restored.design?.cells[0]?.sheet).toEqual(design.sheet);
+    openingDone(restored.opening, storage); // the page showed it: the next start is a fresh one
     storage.setItem(AUTOSAVE_KEY, '{"format": "railwise-design", "version": 1, "name": 3');
     const bad = restoreAutosave(storage);
     expect(bad.design).toBeNull();

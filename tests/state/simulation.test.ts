@@ -2,8 +2,8 @@
  * The simulation slice of the one store, driven by the analysis wiring as the app starts it, with
  * jobs run in-process by a runner the test finishes by hand.
  */
-import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
-import { SWEEP_DEBOUNCE_MS, startAnalysis } from '../../src/state/analysis.ts';
+import { describe, expect, it, vi } from 'vitest';
+import { SWEEP_DEBOUNCE_MS } from '../../src/state/analysis.ts';
 import {
   cancelJob,
   pickStep,
@@ -14,50 +14,14 @@ import {
   stepVector,
   toggleInput,
 } from '../../src/state/simulation.ts';
-import { loadDesign, resetStore, setDesignFields, store } from '../../src/state/store.ts';
-import { setJobRunnerFactory, type JobRunner } from '../../src/worker/runner.ts';
+import { loadDesign, setDesignFields, store } from '../../src/state/store.ts';
 import { runJob } from '../../src/worker/jobs.ts';
-import { JobCancelled } from '../../src/worker/client.ts';
-import type { AnalysisJob, JobResult } from '../../src/worker/protocol.ts';
 import type { CellDesign } from '../../src/core/model/design.ts';
 import { design, inverter, nand2, nand2MissingPullUp, nandLatch, resistorLoadInverter } from '../cells.ts';
-
-/** Runs jobs in-process but lets the test decide when each one finishes. */
-class HeldRunner implements JobRunner {
-  pending: { job: AnalysisJob; resolve: (r: JobResult) => void; reject: (e: Error) => void }[] = [];
-  run(job: AnalysisJob): Promise<JobResult> {
-    return new Promise((resolve, reject) => this.pending.push({ job, resolve, reject }));
-  }
-  cancel(): void {
-    for (const p of this.pending.splice(0)) p.reject(new JobCancelled('cancelled'));
-  }
-  finishAll(): void {
-    for (const p of this.pending.splice(0)) p.resolve(runJob(p.job));
-  }
-}
+import { runner, settle, useHeldRunner } from './heldRunner.ts';
 
 const state = () => store.getState().simulation;
-let runner: HeldRunner;
-let stop: () => void;
-
-beforeEach(() => {
-  vi.useFakeTimers();
-  resetStore();
-  runner = new HeldRunner();
-  setJobRunnerFactory(() => runner);
-  stop = startAnalysis();
-});
-
-afterEach(() => {
-  stop();
-  vi.useRealTimers();
-});
-
-async function settle(): Promise<void> {
-  vi.advanceTimersByTime(SWEEP_DEBOUNCE_MS + 1);
-  runner.finishAll();
-  await vi.runAllTimersAsync();
-}
+useHeldRunner();
 
 const LATCH_STEPS = [
   { SN: '0', RN: '1' },

@@ -1,7 +1,9 @@
 import { compile, type CompiledNetlist } from '../compile/compile.ts';
 import { evaluateExpression, type ExpectedValue } from '../expect/evaluate.ts';
-import { ExpressionError, parseExpression, type Expr } from '../expect/parse.ts';
-import type { CellDesign, InputVector } from '../model/design.ts';
+import { expressionNames } from '../expect/names.ts';
+import { ExpressionError, parseExpectation, type Expr } from '../expect/parse.ts';
+import type { CellDesign, InputValue, InputVector } from '../model/design.ts';
+import { recordOf } from '../model/records.ts';
 import type { Netlist } from '../model/netlist.ts';
 import { DEFAULT_TECHNOLOGY, type Technology } from '../model/technology.ts';
 import { levelName } from '../solver/levels.ts';
@@ -30,6 +32,12 @@ export interface CheckOptions {
   readonly simulator?: Simulator;
   /** Further readers of each solved vector (power counters, level strips): one solve feeds all. */
   readonly observers?: readonly SolveObserver[];
+  /**
+   * Rows go here as they are found and are not kept, so a 65,536-vector sweep never holds its rows:
+   * the report then has no rows and only the structural findings, while its summary still counts
+   * every finding.
+   */
+  readonly onRow?: (row: VectorReport, index: number) => void;
 }
 
 export const FINDING_KINDS: readonly FindingKind[] = [
@@ -41,9 +49,12 @@ export const FINDING_KINDS: readonly FindingKind[] = [
   'charge-sharing',
   'no-steady-state',
   'mismatch',
+  'unknown',
   'rule',
   'limit',
 ];
+
+export { expressionNames };
 
 /** `A=1 B=0` */
 export function vectorLabel(v: InputVector, inputs: readonly string[]): string {
@@ -55,25 +66,40 @@ class Checker implements SolveObserver {
   readonly simulator: Simulator;
   readonly rows: VectorReport[] = [];
   private readonly expectations: [number, Expr][];
+  /** Some expected function names an output (its held value). */
+  private readonly refersToHeld: boolean;
+  /** The last row made: the held values of the next step in a sequence (rows may be streamed). */
+  private previous: VectorReport | undefined;
 
   constructor(
     readonly netlist: Netlist,
     readonly options: CheckOptions,
+    /** A sweep's vectors each start from an unknown state; a sequence's steps follow each other. */
+    readonly mode: 'vectors' | 'steps',
   ) {
     this.simulator =
       options.simulator ?? new Simulator(compile(netlist, options.technology ?? DEFAULT_TECHNOLOGY));
     this.compiled = this.simulator.compiled;
-    this.expectations = Object.entries(options.expectations ?? {}).map(([output, text]) => {
-      const n = this.compiled.netIndex.get(output);
-      if (n === undefined || !netlist.outputs.includes(output)) {
-        throw new ExpressionError(`'${output}' is not an output`, `${output} = ${text}`, 0);
-      }
-      return [n, parseExpression(text, netlist.inputs)];
-    });
+    this.expectations = parsedExpectations(netlist, options.expectations).map(([output, e]) => [
+      this.compiled.netIndex.get(output) as number,
+      e,
+    ]);
+    const outputs = new Set(netlist.outputs);
+    this.refersToHeld = this.expectations.some(([, e]) => namesIn(e).some((name) => outputs.has(name)));
   }
 
+  /** Rows handed to `onRow` rather than kept, and their findings counted by kind. */
+  private readonly streamed = { rows: 0, counts: summarize(0, []) as Record<string, number> };
+
   add(r: SolveResult, index: number): void {
-    this.rows.push(this.vectorReport(r, index));
+    // In a sequence an output's held value is its level at the previous step; a sweep has none.
+    const held = this.mode === 'steps' && index > 0 ? this.previous : undefined;
+    const row = this.vectorReport(r, index, held);
+    this.previous = row;
+    if (this.options.onRow === undefined) return void this.rows.push(row);
+    this.streamed.rows++;
+    countFindings(this.streamed.counts, row.findings);
+    this.options.onRow(row, index);
   }
 
   /** Every reader of this pass: the checker's own rows first. */
@@ -81,11 +107,18 @@ class Checker implements SolveObserver {
     return [this, ...(this.options.observers ?? [])];
   }
 
-  vectorReport(r: SolveResult, index: number): VectorReport {
+  /**
+   * One vector's report. `held` is the previous step's report in a sequence; without it (a sweep, or a
+   * sequence's first step) the outputs' held values are unknown.
+   */
+  vectorReport(r: SolveResult, index: number, held?: VectorReport): VectorReport {
     const { netlist } = this;
     const c = this.compiled;
+    const values = this.refersToHeld
+      ? recordOf([...Object.entries(heldValues(netlist.outputs, held)), ...Object.entries(r.inputs)])
+      : r.inputs;
     const expected = new Map<number, ExpectedValue>(
-      this.expectations.map(([n, e]) => [n, evaluateExpression(e, r.inputs)]),
+      this.expectations.map(([n, e]) => [n, evaluateExpression(e, values)]),
     );
     const voltageNets = this.options.allNets ? c.netNames : netlist.outputs;
     const volts = (name: string): number | null => {
@@ -121,31 +154,85 @@ class Checker implements SolveObserver {
 
   report(kind: 'vectors' | 'steps', rows: VectorReport[], notes: string[]): CheckReport {
     const findings = [...structuralFindings(this.compiled), ...rows.flatMap((v) => v.findings)];
+    const summary = countFindings({ ...this.streamed.counts }, findings);
     return {
       cell: this.netlist.name,
       inputs: this.netlist.inputs,
       outputs: this.netlist.outputs,
       [kind]: rows,
       findings,
-      summary: summarize(rows.length, findings),
+      summary: { ...summary, vectors: rows.length + this.streamed.rows },
       notes,
     };
   }
 }
 
+/** Each output's level in the previous report, read as an input value (X where not 0 or 1). */
+function heldValues(outputs: readonly string[], held: VectorReport | undefined): Record<string, InputValue> {
+  return recordOf(
+    outputs.map((o) => {
+      const level = held?.outputs[o];
+      return [o, level === '0' || level === '1' ? level : 'X'];
+    }),
+  );
+}
+
+/** The names an expression reads, walked with a list rather than the call stack. */
+function namesIn(root: Expr): string[] {
+  const names: string[] = [];
+  const todo: Expr[] = [root];
+  for (let e = todo.pop(); e !== undefined; e = todo.pop()) {
+    if (e.kind === 'name') names.push(e.name);
+    else if (e.kind === 'not') todo.push(e.arg);
+    else if (e.kind === 'choose') todo.push(e.select, e.whenTrue, e.whenFalse);
+    else if (e.kind !== 'const') todo.push(e.left, e.right);
+  }
+  return names;
+}
+
+/**
+ * The expected functions parsed against the names they may read (inputs, and outputs for held
+ * values), by output; throws ExpressionError
+ * naming the output for one that is not an output or does not parse. A check refuses these before
+ * it solves anything (`refusalBeforeCheck`).
+ */
+function parsedExpectations(
+  netlist: Netlist,
+  expectations: Readonly<Record<string, string>> = {},
+): [string, Expr][] {
+  return Object.entries(expectations).map(([output, text]) => {
+    if (!netlist.outputs.includes(output)) throw new ExpressionError('not an output', text, 0, output);
+    return [output, parseExpectation(output, text, expressionNames(netlist))];
+  });
+}
+
+/**
+ * Throws what a check with these options would refuse before solving a vector (an expected function
+ * that does not parse, too many inputs for a sweep), so a caller can refuse a cell before it starts
+ * writing the cell's report.
+ */
+export function refusalBeforeCheck(netlist: Netlist, options: CheckOptions, sweep: boolean): void {
+  parsedExpectations(netlist, options.expectations);
+  if (sweep) checkSweepLimit(netlist.inputs, options.maxInputs);
+}
+
 export function summarize(vectors: number, findings: readonly Finding[]): Summary {
   const counts: Record<string, number> = { vectors, errors: 0, warnings: 0 };
   for (const k of FINDING_KINDS) counts[k] = 0;
+  return countFindings(counts, findings);
+}
+
+function countFindings(counts: Record<string, number>, findings: readonly Finding[]): Summary {
   for (const f of findings) {
     counts[f.severity === 'error' ? 'errors' : 'warnings']++;
-    counts[f.kind]++;
+    counts[f.kind] = (counts[f.kind] ?? 0) + 1;
   }
   return counts as Summary;
 }
 
 /** Checks every input combination, each solved from an unknown state (docs/semantics.md §2.9, sweep mode). */
 export function checkSweep(netlist: Netlist, options: CheckOptions = {}): CheckReport {
-  const checker = new Checker(netlist, options);
+  const checker = new Checker(netlist, options, 'vectors');
   checkSweepLimit(netlist.inputs, options.maxInputs);
   const total = sweepSize(netlist.inputs, options.undrivenInputs);
   const done = sweepPass(checker.simulator, checker.observers(), options);
@@ -162,7 +249,7 @@ export function checkSequence(
   steps: readonly InputVector[],
   options: CheckOptions = {},
 ): CheckReport {
-  const checker = new Checker(netlist, options);
+  const checker = new Checker(netlist, options, 'steps');
   sequencePass(checker.simulator, steps, checker.observers(), options.onProgress);
   return checker.report('steps', checker.rows, []);
 }

@@ -13,6 +13,7 @@ export type FindingKind =
   | 'charge-sharing'
   | 'no-steady-state'
   | 'mismatch'
+  | 'unknown'
   | 'rule'
   | 'limit';
 

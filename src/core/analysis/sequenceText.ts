@@ -12,6 +12,7 @@
  * Bad text throws a SequenceTextError naming the line and column of the problem.
  */
 import type { InputValue, InputVector } from '../model/design.ts';
+import { nameRecord } from '../model/records.ts';
 import { SequenceError } from './pass.ts';
 
 /** How the format is shown next to a step field and in the command's help. */
@@ -74,7 +75,7 @@ function parseStep(source: StepSource, inputs: ReadonlySet<string>, text: string
     return null;
   }
   if (tokens.length === 1 && tokens[0]?.[0] === HOLD_STEP) return {};
-  const step: Record<string, InputValue> = {};
+  const step = nameRecord<InputValue>(); // an input may be called __proto__
   for (const token of tokens) {
     const at = token.index ?? 0;
     const [name = '', value, extra] = token[0].split('=');

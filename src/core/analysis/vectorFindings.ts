@@ -1,47 +1,23 @@
 import { RESISTOR } from '../compile/compile.ts';
 import type { ExpectedValue } from '../expect/evaluate.ts';
-import type { PathIndices } from '../solver/currentPaths.ts';
 import {
   FLAG_BOUND,
   FLAG_CHARGE_SHARED,
   FLAG_CONTENTION,
   FLAG_DEGRADED,
+  FLAG_ILL_CONDITIONED,
   FLAG_OSCILLATING,
+  FLAG_STATES,
+  LEVEL_0,
   LEVEL_X,
   LEVEL_Z,
   levelName,
 } from '../solver/levels.ts';
 import type { SolveResult } from '../solver/simulator.ts';
 import { engineering } from '../view/format.ts';
+import { channelDevices, finding, Namer } from './findingParts.ts';
 import type { Finding, FindingKind, Severity } from './report.ts';
-
-/** Names of a result's nets and devices, for messages. */
-class Namer {
-  constructor(private readonly r: SolveResult) {}
-  net(n: number): string {
-    return this.r.compiled.netNames[n];
-  }
-  element(e: number): string {
-    const c = this.r.compiled;
-    return c.netlist.devices[c.chDevice[e]].name;
-  }
-  chain(p: PathIndices): string[] {
-    return p.nets.flatMap((n, i) =>
-      i < p.elements.length ? [this.net(n), this.element(p.elements[i])] : [this.net(n)],
-    );
-  }
-}
-
-function finding(
-  kind: FindingKind,
-  severity: Severity,
-  vector: number,
-  nets: string[],
-  devices: string[],
-  message: string,
-): Finding {
-  return { kind, severity, vector, nets, devices, path: null, message };
-}
+import { unknownFindings } from './unknownFindings.ts';
 
 /**
  * Everything worth warning about in one solved vector (docs/semantics.md §3), except structural rules.
@@ -56,12 +32,13 @@ export function vectorFindings(
   // The label is only needed when there is something to report, which most vectors do not have.
   let cached: string | null = null;
   const label = (): string => (cached ??= labelOf());
-  return [
+  const found = [
     ...currentFindings(r, vector, label),
     ...flaggedFindings(r, vector, label),
     ...floatingFindings(r, vector, label, expected),
     ...mismatchFindings(r, vector, label, expected),
   ];
+  return [...found, ...unknownFindings(r, vector, label, expected, found)];
 }
 
 /**
@@ -92,105 +69,110 @@ function currentFindings(r: SolveResult, vector: number, label: () => string): F
   });
 }
 
-/** Devices whose channel ends on any of the nets, sorted by name; only conducting ones if asked. */
-function channelDevices(r: SolveResult, nets: readonly number[], conductingOnly: boolean): string[] {
-  const c = r.compiled;
-  const name = new Namer(r);
-  const devices = new Set<string>();
-  for (const n of nets) {
-    for (let p = c.netChannels.start[n]; p < c.netChannels.start[n + 1]; p++) {
-      const e = c.netChannels.items[p];
-      if (!conductingOnly || r.conduction[e] !== 0) devices.add(name.element(e));
-    }
-  }
-  return [...devices].sort();
-}
-
 /** Nets that feed a gate or are outputs: the ones whose level matters to the cell. */
 function observed(r: SolveResult, n: number): boolean {
   const c = r.compiled;
   return c.netGates.start[n + 1] > c.netGates.start[n] || c.outputNets.includes(n);
 }
 
+/** Nets flagged in one result, and the finding helpers that read them. */
+class Flagged {
+  readonly name: Namer;
+  private readonly flagged: number[] = [];
+
+  constructor(
+    readonly r: SolveResult,
+    readonly vector: number,
+    readonly label: () => string,
+  ) {
+    this.name = new Namer(r);
+    // One pass over the nets; most vectors flag none, so this is the whole cost of a clean vector.
+    for (let n = 0; n < r.compiled.netCount; n++)
+      if (r.flags[n] !== 0 && !r.topology.isSource[n]) this.flagged.push(n);
+  }
+
+  nets(flag: number, onlyObserved = false): number[] {
+    return this.flagged.filter(
+      (n) => (this.r.flags[n] & flag) !== 0 && (!onlyObserved || observed(this.r, n)),
+    );
+  }
+
+  /** One finding over a list of nets (none when the list is empty); `say` writes the message. */
+  group(kind: FindingKind, severity: Severity, nets: number[], say: (names: string) => string): Finding[] {
+    if (nets.length === 0) return [];
+    const names = nets.map((n) => this.name.net(n));
+    const devices = channelDevices(this.r, nets, true);
+    return [finding(kind, severity, this.vector, names, devices, say(names.join(', ')))];
+  }
+}
+
 function flaggedFindings(r: SolveResult, vector: number, label: () => string): Finding[] {
-  const name = new Namer(r);
-  const c = r.compiled;
-  const out: Finding[] = [];
-  // One pass over the nets; most vectors flag none, so this is the whole cost of a clean vector.
-  const flagged: number[] = [];
-  for (let n = 0; n < c.netCount; n++) if (r.flags[n] !== 0 && !r.topology.isSource[n]) flagged.push(n);
-  const nets = (flag: number, onlyObserved: boolean): number[] =>
-    flagged.filter((n) => (r.flags[n] & flag) !== 0 && (!onlyObserved || observed(r, n)));
-  const touching = (list: number[]): string[] => channelDevices(r, list, true);
-  for (const n of nets(FLAG_CONTENTION, false)) {
-    const v = r.volts[n];
-    out.push(
+  const f = new Flagged(r, vector, label);
+  const at = label;
+  const racing = f.nets(FLAG_OSCILLATING);
+  const race = racing.length > 0 && racing.every((n) => (r.flags[n] & FLAG_STATES) !== 0);
+  return [
+    ...contentionFindings(f),
+    ...degradedFindings(f),
+    ...f.group('charge-sharing', 'warning', f.nets(FLAG_CHARGE_SHARED), () => {
+      const list = f.nets(FLAG_CHARGE_SHARED).map((n) => {
+        const v = r.volts[n];
+        return `${f.name.net(n)} ${Number.isNaN(v) ? 'unknown' : `${v.toFixed(2)} V`}`;
+      });
+      return `charge sharing at ${at()}: ${list.join(', ')}`;
+    }),
+    ...f.group('no-steady-state', 'error', racing, (names) =>
+      race
+        ? `no steady state at ${at()}: ${names} kept changing between several steady states (a race) and are shown as X`
+        : `no steady state at ${at()}: ${names} kept changing, or no definite level on them is a steady state (an oscillator, or a level held between the thresholds); shown as X`,
+    ),
+    ...f.group(
+      'limit',
+      'warning',
+      f.nets(FLAG_BOUND),
+      (names) =>
+        `too many unknowns to enumerate exactly at ${at()} (devices with gates at X, or undecided feedback nets): ${names} set to X conservatively`,
+    ),
+    ...f.group(
+      'limit',
+      'warning',
+      f.nets(FLAG_ILL_CONDITIONED),
+      (names) =>
+        `ill-conditioned nodal solve at ${at()}: the resistances joining ${names} span too many orders of magnitude for a trustworthy result; set to X`,
+    ),
+  ];
+}
+
+function contentionFindings(f: Flagged): Finding[] {
+  return f
+    .nets(FLAG_CONTENTION)
+    .map((n) =>
       finding(
         'contention',
         'error',
-        vector,
-        [name.net(n)],
-        touching([n]),
-        `contention at ${label()}: ${name.net(n)} sits at ${v.toFixed(2)} V, between the input thresholds, fought over by drivers of both levels`,
+        f.vector,
+        [f.name.net(n)],
+        channelDevices(f.r, [n], true),
+        `contention at ${f.label()}: ${f.name.net(n)} sits at ${f.r.volts[n].toFixed(2)} V, between the input thresholds, fought over by drivers of both levels`,
       ),
     );
-  }
-  for (const n of nets(FLAG_DEGRADED, true)) {
+}
+
+function degradedFindings(f: Flagged): Finding[] {
+  const { r, name } = f;
+  return f.nets(FLAG_DEGRADED, true).map((n) => {
     const by = r.limiter[n] >= 0 ? [name.element(r.limiter[n])] : [];
-    out.push(
-      finding(
-        'degraded',
-        'warning',
-        vector,
-        [name.net(n)],
-        by,
-        `degraded level at ${label()}: ${name.net(n)} reaches only ${r.volts[n].toFixed(2)} V (a threshold drop${by.length ? ` through ${by[0]}` : ''})`,
-      ),
+    const verb = r.levels[n] === LEVEL_0 ? 'falls only to' : 'reaches only';
+    const through = by.length ? ` through ${by[0]}` : '';
+    return finding(
+      'degraded',
+      'warning',
+      f.vector,
+      [name.net(n)],
+      by,
+      `degraded level at ${f.label()}: ${name.net(n)} ${verb} ${r.volts[n].toFixed(2)} V (a threshold drop${through})`,
     );
-  }
-  const shared = nets(FLAG_CHARGE_SHARED, false);
-  if (shared.length > 0) {
-    const list = shared.map(
-      (n) => `${name.net(n)} ${Number.isNaN(r.volts[n]) ? 'unknown' : `${r.volts[n].toFixed(2)} V`}`,
-    );
-    out.push(
-      finding(
-        'charge-sharing',
-        'warning',
-        vector,
-        shared.map((n) => name.net(n)),
-        touching(shared),
-        `charge sharing at ${label()}: ${list.join(', ')}`,
-      ),
-    );
-  }
-  const racing = nets(FLAG_OSCILLATING, false);
-  if (racing.length > 0) {
-    out.push(
-      finding(
-        'no-steady-state',
-        'error',
-        vector,
-        racing.map((n) => name.net(n)),
-        touching(racing),
-        `no steady state at ${label()}: ${racing.map((n) => name.net(n)).join(', ')} kept changing (a race or an oscillator) and are shown as X`,
-      ),
-    );
-  }
-  const bounded = nets(FLAG_BOUND, false);
-  if (bounded.length > 0) {
-    out.push(
-      finding(
-        'limit',
-        'warning',
-        vector,
-        bounded.map((n) => name.net(n)),
-        touching(bounded),
-        `too many devices with gates at X at ${label()}: ${bounded.map((n) => name.net(n)).join(', ')} set to X conservatively`,
-      ),
-    );
-  }
-  return out;
+  });
 }
 
 /**

@@ -1,4 +1,5 @@
 import type { InputValue, InputVector } from '../model/design.ts';
+import { nameRecord } from '../model/records.ts';
 
 /** Exhaustive sweeps stop here by default: 2^16 = 65,536 vectors. */
 export const DEFAULT_MAX_INPUTS = 16;
@@ -30,7 +31,7 @@ export function* sweepVectors(inputs: readonly string[], undriven = false): Gene
   const base = values.length;
   const total = sweepSize(inputs, undriven);
   for (let k = 0; k < total; k++) {
-    const vector: Record<string, InputValue> = {};
+    const vector = nameRecord<InputValue>(); // an input may be called __proto__
     let rest = k;
     for (let i = inputs.length - 1; i >= 0; i--) {
       vector[inputs[i]] = values[rest % base];

@@ -23,6 +23,31 @@ export interface TransferFigures {
   readonly nmh: number | null;
 }
 
+/** The output levels as each convention reads them. */
+export interface OutputLevels {
+  readonly vol: number | null;
+  readonly voh: number | null;
+}
+
+/** Figures in one convention, and the levels of both, so a view can switch without solving again. */
+export interface CurveFigures extends TransferFigures {
+  readonly levels: Readonly<Record<MarginConvention, OutputLevels>>;
+}
+
+/** The figures of a curve in another convention: VM, VIL and VIH stay; VOL, VOH and the margins follow. */
+export function inConvention(figures: CurveFigures, convention: MarginConvention): CurveFigures {
+  return { ...figures, ...margins(figures.vil, figures.vih, figures.levels[convention]) };
+}
+
+function margins(vil: number | null, vih: number | null, { vol, voh }: OutputLevels) {
+  return {
+    vol,
+    voh,
+    nml: vil === null || vol === null ? null : vil - vol,
+    nmh: voh === null || vih === null ? null : voh - vih,
+  };
+}
+
 /** The curve at one input voltage: the output and its slope dVout/dVin. */
 export interface CurvePoint {
   readonly vout: number;
@@ -44,24 +69,35 @@ export interface SampledCurve {
  */
 export const MIN_SWING = 0.5;
 
-const NONE: TransferFigures = { vm: null, vil: null, vih: null, vol: null, voh: null, nml: null, nmh: null };
+const NO_LEVELS: OutputLevels = { vol: null, voh: null };
+/** Figures of a curve that has none (an output that does not switch, or has no voltage). */
+export const NO_FIGURES: CurveFigures = {
+  vm: null,
+  vil: null,
+  vih: null,
+  vol: null,
+  voh: null,
+  nml: null,
+  nmh: null,
+  levels: { 'unity-gain': NO_LEVELS, rails: NO_LEVELS },
+};
 
 /** Figures of a curve whose every sample has a voltage; notes say why a figure is missing. */
 export function curveFigures(
   curve: SampledCurve,
   convention: MarginConvention,
   notes: string[],
-): TransferFigures {
+): CurveFigures {
   const { vin, vout, slope } = curve;
   const last = vin.length - 1;
-  if (last < 1) return NONE;
+  if (last < 1) return NO_FIGURES;
   const inverting = vout[0] > vout[last];
   const swing = Math.abs(vout[0] - vout[last]);
   if (swing < MIN_SWING * (vin[last] - vin[0])) {
     notes.push(
       `the output moves only ${swing.toFixed(3)} V over the sweep: it does not switch with this hold`,
     );
-    return NONE;
+    return NO_FIGURES;
   }
   const vm = refine(
     curve,
@@ -79,23 +115,13 @@ export function curveFigures(
     notes.push('the gain never rises through 1 and back: no unity-gain points');
   const outAt = (v: number | null): number | null =>
     v === null ? null : (curve.at(v, nearest(vin, v))?.vout ?? null);
-  const [low, high] =
-    convention === 'rails'
-      ? [vout[inverting ? last : 0], vout[inverting ? 0 : last]]
-      : inverting
-        ? [outAt(vih), outAt(vil)]
-        : [outAt(vil), outAt(vih)];
-  const vol = low ?? null;
-  const voh = high ?? null;
-  return {
-    vm,
-    vil,
-    vih,
-    vol,
-    voh,
-    nml: vil === null || vol === null ? null : vil - vol,
-    nmh: voh === null || vih === null ? null : voh - vih,
+  const atUnity = inverting ? [outAt(vih), outAt(vil)] : [outAt(vil), outAt(vih)];
+  const atRails = [vout[inverting ? last : 0], vout[inverting ? 0 : last]];
+  const levels = {
+    'unity-gain': { vol: atUnity[0] ?? null, voh: atUnity[1] ?? null },
+    rails: { vol: atRails[0] ?? null, voh: atRails[1] ?? null },
   };
+  return { vm, vil, vih, ...margins(vil, vih, levels[convention]), levels };
 }
 
 /** Sample indices k where f changes sign between k and k + 1. */

@@ -4,6 +4,7 @@ import type { InputValue, InputVector } from '../model/design.ts';
 import { LEVEL_0, LEVEL_1 } from '../solver/levels.ts';
 import { Simulator } from '../solver/simulator.ts';
 import { TransferError } from './errors.ts';
+import { nameRecord } from '../model/records.ts';
 
 /** Free held inputs searched for a sensitising vector; beyond this they are held at 0 (noted). */
 export const MAX_HOLD_SEARCH = 12;
@@ -71,7 +72,7 @@ function flippingOutputs(c: CompiledNetlist, simulator: Simulator, input: string
  * regardless of case); a TransferError names a bad item.
  */
 export function parseHold(text: string, inputs: readonly string[]): InputVector {
-  const hold: Record<string, InputValue> = {};
+  const hold = nameRecord<InputValue>();
   for (const item of text.split(/[\s,]+/).filter((s) => s !== '')) {
     const m = /^([^=\s]+)=([01])$/.exec(item);
     if (!m) throw new TransferError(`held '${item}' is not NAME=0 or NAME=1`);

@@ -1,6 +1,6 @@
 import { NMOS, RESISTOR, type CompiledNetlist } from '../compile/compile.ts';
 import type { MosDevice } from '../model/netlist.ts';
-import type { Technology } from '../model/technology.ts';
+import { modelCard, technologyValue, type ModelField, type Technology } from '../model/technology.ts';
 import { buildTopology, type Topology } from '../solver/topology.ts';
 import { NodalSystem } from './assemble.ts';
 import type { Level1Device } from './level1.ts';
@@ -94,18 +94,22 @@ export class DcNetwork {
 }
 
 /**
- * Level-1 parameters of one transistor from the design's technology. The one place a per-model
- * parameter set (a SPICE `.model` card) would be looked up.
+ * Level-1 parameters of one transistor: its model card's values (`Technology.models`, from a SPICE
+ * `.model` card), and the technology's own for what the card leaves out or when it names none. The
+ * one place the DC model reads parameters (docs/semantics.md §1, "Model cards").
  */
 export function level1Device(d: MosDevice, tech: Technology): Level1Device {
-  const n = d.kind === 'nmos';
+  const named = modelCard(tech, d.model);
+  // The design-file reader refuses a card of the other type; a hand-built netlist gets the defaults.
+  const card = named?.type === d.kind ? named : undefined;
+  const value = (field: ModelField): number => card?.[field] ?? technologyValue(tech, d.kind, field);
   return {
-    polarity: n ? 1 : -1,
-    beta: (n ? tech.kpn : tech.kpp) * (d.w / d.l),
-    vt0: n ? tech.vtn : tech.vtp,
-    gamma: n ? tech.gamman : tech.gammap,
-    phi: n ? tech.phin : tech.phip,
-    lambda: n ? tech.lambdan : tech.lambdap,
+    polarity: d.kind === 'nmos' ? 1 : -1,
+    beta: value('kp') * (d.w / d.l),
+    vt0: value('vt0'),
+    gamma: value('gamma'),
+    phi: value('phi'),
+    lambda: value('lambda'),
   };
 }
 

@@ -5,7 +5,13 @@ import type { Technology } from '../model/technology.ts';
 import { Simulator } from '../solver/simulator.ts';
 import { TransferError } from './errors.ts';
 import { whyUnknown } from './explain.ts';
-import { curveFigures, type CurvePoint, type MarginConvention, type TransferFigures } from './figures.ts';
+import {
+  curveFigures,
+  NO_FIGURES,
+  type CurveFigures,
+  type CurvePoint,
+  type MarginConvention,
+} from './figures.ts';
 import { chooseHold } from './holdVector.ts';
 import { DcSolver, slopeAt, sourcesFor, type OperatingPoint, type Sources } from './operatingPoint.ts';
 import { storedVolts } from './start.ts';
@@ -28,7 +34,7 @@ export interface TransferOptions {
   readonly onProgress?: (done: number, total: number) => boolean | void;
 }
 
-export interface TransferCurve extends TransferFigures {
+export interface TransferCurve extends CurveFigures {
   /** [Vin, Vout] pairs, volts; Vout null where the output has no DC voltage. */
   readonly points: readonly (readonly [number, number | null])[];
   /** True when the output falls as the input rises; null when it has no voltage at an end. */
@@ -165,18 +171,7 @@ function outputCurve(
       const where = `at ${count} of ${vout.length} points, from Vin = ${sweep.vin[missing]?.toFixed(3)} V`;
       notes.push(`no DC voltage ${where}: ${whyUnknown(sweep.samples[missing] as OperatingPoint, output)}`);
     }
-    return {
-      points,
-      inverting,
-      notes,
-      vm: null,
-      vil: null,
-      vih: null,
-      vol: null,
-      voh: null,
-      nml: null,
-      nmh: null,
-    };
+    return { points, inverting, notes, ...NO_FIGURES };
   }
   const at = (v: number, near: number): CurvePoint | null => {
     const p = sweep.solveAt(v, near);

@@ -1,4 +1,5 @@
 import type { InputValue } from '../model/design.ts';
+import { own } from '../model/records.ts';
 import type { Expr } from './parse.ts';
 
 export type ExpectedValue = '0' | '1' | 'X' | 'Z';
@@ -12,7 +13,7 @@ export function evaluateExpression(e: Expr, inputs: Readonly<Record<string, Inpu
     case 'const':
       return e.value;
     case 'name': {
-      const v = inputs[e.name];
+      const v = own(inputs, e.name);
       return v === '0' || v === '1' ? v : 'X';
     }
     case 'not': {

@@ -83,6 +83,6 @@ export function foundFunction(report: CheckReport, output: string): FoundFunctio
 export function foundFunctionText(f: FoundFunction): string {
   const body = f.expression ?? f.note ?? 'no function';
   const x = f.undecided === 0 ? '' : ` (X for ${f.undecided} vector${f.undecided === 1 ? '' : 's'})`;
-  const approx = f.minimal ? '' : ' (a cover, not proven minimal)';
+  const approx = f.minimal || f.expression === null ? '' : ' (a cover, not proven minimal)';
   return `${f.output} = ${body}${x}${approx}`;
 }

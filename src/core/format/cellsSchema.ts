@@ -5,21 +5,31 @@
  */
 import { z } from 'zod';
 import { DEFAULT_TECHNOLOGY } from '../model/technology.ts';
-import { DESIGN_FORMAT_TAG, netlistSchema, sequenceSchema, sheetSchema, technologySchema } from './schema.ts';
+import { nameRecord } from '../model/records.ts';
+import {
+  DESIGN_FORMAT_TAG,
+  namedRecord,
+  netlistSchema,
+  sequenceSchema,
+  sheetSchema,
+  technologySchema,
+} from './schema.ts';
+import { modelProblems, netlistProblem } from './designChecks.ts';
 
 const name = z.string().min(1, 'a name cannot be empty');
 
 export const instanceSchema = z.object({
   name,
   cell: name,
-  pins: z.record(z.string(), z.string().min(1, 'a net name cannot be empty')),
+  // Keyed by the placed cell's pin names, which may be any name (`__proto__` too).
+  pins: namedRecord(z.string().min(1, 'a net name cannot be empty')),
 });
 
 export const cellSchema = z.object({
   name,
   netlist: netlistSchema,
   instances: z.array(instanceSchema).default([]),
-  expectations: z.record(z.string(), z.string()).default({}),
+  expectations: namedRecord(z.string()).default(nameRecord<string>()),
   sequences: z.array(sequenceSchema).default([]),
   sheet: sheetSchema.optional(),
   globals: z.array(z.string().min(1)).optional(),
@@ -46,6 +56,11 @@ export const designFileV2Schema = z
           message: `cell ${c.name} is already defined as cells[${first}]`,
         });
       seen.set(c.name, i);
+    });
+    d.cells.forEach((c, i) => {
+      const problems = [netlistProblem(c.netlist), ...modelProblems(d.technology, c.netlist, c.sheet?.parts)];
+      for (const p of problems)
+        if (p !== null) ctx.addIssue({ code: 'custom', path: ['cells', i, ...p.path], message: p.message });
     });
     if (!seen.has(d.open))
       ctx.addIssue({ code: 'custom', path: ['open'], message: `no cell is named ${d.open}` });

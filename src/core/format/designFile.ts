@@ -14,6 +14,7 @@ import {
 import { DESIGN_FORMAT_TAG } from './schema.ts';
 import { designFileV2Schema, type DesignFileV2 } from './cellsSchema.ts';
 import { designSizer } from '../hierarchy/flatten.ts';
+import { printable } from './printable.ts';
 
 export { CURRENT_DESIGN_VERSION } from './migrations.ts';
 
@@ -27,13 +28,21 @@ export class DesignFileError extends Error {
     /** 1-based line of a JSON syntax error, when known. */
     readonly line?: number,
   ) {
+    // Names and JSON excerpts in the detail come from the file: shown escaped, never raw.
     super(
-      `${file}${line === undefined ? '' : `:${line}`}: ${field === '' ? '' : `field ${field}: `}${detail}`,
+      printable(
+        `${file}${line === undefined ? '' : `:${line}`}: ${field === '' ? '' : `field ${field}: `}${detail}`,
+      ),
     );
   }
 }
 
 export function parseDesignFile(text: string, fileName: string): Design {
+  return readDesignFile(text, fileName).design;
+}
+
+/** The design and the version the file was written in (its fields are spelled as that version's). */
+export function readDesignFile(text: string, fileName: string): { design: Design; version: number } {
   const raw = parseJson(text, fileName);
   const version = documentVersion(raw);
   if (version === null) {
@@ -61,7 +70,7 @@ export function parseDesignFile(text: string, fileName: string): Design {
     ...(notes === undefined ? {} : { notes }),
   };
   refuseLoops(design, fileName);
-  return design;
+  return { design, version };
 }
 
 /** A cell as the file has it; its netlist takes the cell's name. */
@@ -145,12 +154,21 @@ function schemaError(
   if (first === undefined) return new DesignFileError(fileName, '', 'invalid design');
   // A migrated file holds its fields elsewhere than the current version: report paths as the file has them.
   const path = pathInVersion(first.path, version);
-  const field = path
-    .map((k, i) => (typeof k === 'number' ? `[${k}]` : i === 0 ? String(k) : `.${String(k)}`))
-    .join('');
+  const field = fieldText(path);
   const named = namedElement(path, raw);
   const more = rest.length > 0 ? ` (and ${rest.length} more problem${rest.length > 1 ? 's' : ''})` : '';
   return new DesignFileError(fileName, field, `${first.message}${named}${more}`);
+}
+
+/** A field of the current version as a file of `version` spells it: `cells[1].netlist.devices[3].w`. */
+export function fieldInFile(path: readonly PropertyKey[], version: number): string {
+  return fieldText(pathInVersion(path, version));
+}
+
+function fieldText(path: readonly PropertyKey[]): string {
+  return path
+    .map((k, i) => (typeof k === 'number' ? `[${k}]` : i === 0 ? String(k) : `.${String(k)}`))
+    .join('');
 }
 
 /** ` (in M7)` when the path runs through an array element that has a name. */

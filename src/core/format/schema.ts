@@ -5,12 +5,37 @@
  * represent.
  */
 import { z } from 'zod';
+import { nameRecord } from '../model/records.ts';
+import { inRange, RANGES, rangeText } from '../model/ranges.ts';
+import { coordinate, farads, length, ohms, quantity } from './quantity.ts';
 import { DEFAULT_TECHNOLOGY, withVdd } from '../model/technology.ts';
 import { sheetPartSchema } from './sheetPartSchema.ts';
 
 const netName = z.string().min(1, 'a net name cannot be empty');
 const deviceName = z.string().min(1, 'a device name cannot be empty');
-const positive = z.number().positive();
+
+/**
+ * An object keyed by names (expected functions by output, step values by input). Unlike
+ * `z.record`, a key such as `__proto__` is kept, in a record without a prototype, because a net
+ * may be called that and dropping it would silently skip its check.
+ */
+export function namedRecord<T extends z.ZodType>(value: T) {
+  return z.unknown().transform((raw, ctx) => {
+    const out = nameRecord<z.output<T>>();
+    if (typeof raw !== 'object' || raw === null || Array.isArray(raw)) {
+      ctx.addIssue({ code: 'custom', message: 'expected an object keyed by names' });
+      return out;
+    }
+    for (const key of Object.keys(raw)) {
+      const result = value.safeParse((raw as Record<string, unknown>)[key]);
+      if (result.success) out[key] = result.data;
+      else
+        for (const issue of result.error.issues)
+          ctx.addIssue({ ...issue, path: [key, ...issue.path] } as never);
+    }
+    return out;
+  });
+}
 
 const mosSchema = z.object({
   kind: z.enum(['nmos', 'pmos']),
@@ -19,8 +44,9 @@ const mosSchema = z.object({
   drain: netName,
   source: netName,
   bulk: netName.optional(),
-  w: positive,
-  l: positive,
+  w: length,
+  l: length,
+  model: z.string().min(1).optional(),
 });
 
 const resistorSchema = z.object({
@@ -28,7 +54,7 @@ const resistorSchema = z.object({
   name: deviceName,
   a: netName,
   b: netName,
-  ohms: positive,
+  ohms,
 });
 
 const capacitorSchema = z.object({
@@ -36,7 +62,7 @@ const capacitorSchema = z.object({
   name: deviceName,
   a: netName,
   b: netName,
-  farads: positive,
+  farads,
 });
 
 const diodeSchema = z.object({
@@ -53,11 +79,25 @@ export const deviceSchema = z.discriminatedUnion('kind', [
   diodeSchema,
 ]);
 
-export const railSchema = z.object({
-  net: netName,
-  role: z.enum(['supply', 'ground']),
-  volts: z.number().optional(),
-});
+/**
+ * A supply may carry its own voltage; a ground is always 0 V, so a `volts` of 0 on it is dropped and
+ * any other value refused (it would be silently ignored).
+ */
+export const railSchema = z
+  .object({
+    net: netName,
+    role: z.enum(['supply', 'ground']),
+    volts: quantity(RANGES.volts).optional(),
+  })
+  .superRefine((rail, ctx) => {
+    if (rail.role === 'ground' && rail.volts !== undefined && rail.volts !== 0)
+      ctx.addIssue({ code: 'custom', path: ['volts'], message: 'a ground rail is at 0 V; leave volts out' });
+    if (rail.role === 'supply' && rail.volts !== undefined && !inRange(rail.volts, RANGES.supply))
+      ctx.addIssue({ code: 'custom', path: ['volts'], message: rangeText(RANGES.supply) });
+  })
+  .transform(({ volts, ...rail }) =>
+    volts === undefined || rail.role === 'ground' ? rail : { ...rail, volts },
+  );
 
 export const netlistSchema = z.object({
   name: z.string(),
@@ -68,31 +108,46 @@ export const netlistSchema = z.object({
 });
 
 /**
+ * One model card's level-1 values (docs/semantics.md §1, "Model cards"): what it leaves out, the
+ * technology gives. `vt0` is VTO for NMOS and −VTO for PMOS, as the technology keeps `vtp`.
+ */
+const deviceModelSchema = z.object({
+  type: z.enum(['nmos', 'pmos']),
+  vt0: quantity({ min: -10, max: 10, words: '−10 to 10 V' }).optional(),
+  kp: quantity(RANGES.transconductance).optional(),
+  gamma: quantity(RANGES.bodyEffect).optional(),
+  phi: quantity(RANGES.surfacePotential).optional(),
+  lambda: quantity(RANGES.channelModulation).optional(),
+});
+
+/**
  * Each field may be left out of a hand-written file; missing ones take the textbook defaults, and
  * missing input thresholds follow the file's VDD at 0.35 and 0.65 of it (as `withVdd` does).
  */
 export const technologySchema = z
   .object({
     source: z.string().default(DEFAULT_TECHNOLOGY.source),
-    vdd: positive.default(DEFAULT_TECHNOLOGY.vdd),
-    rn: positive.default(DEFAULT_TECHNOLOGY.rn),
-    rp: positive.default(DEFAULT_TECHNOLOGY.rp),
-    vtn: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.vtn),
-    vtp: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.vtp),
-    vil: z.number().nonnegative().optional(),
-    vih: z.number().nonnegative().optional(),
-    cgPerArea: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.cgPerArea),
-    cdPerWidth: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.cdPerWidth),
-    ioffPerWidth: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.ioffPerWidth),
-    kpn: positive.default(DEFAULT_TECHNOLOGY.kpn),
-    kpp: positive.default(DEFAULT_TECHNOLOGY.kpp),
+    vdd: quantity(RANGES.supply).default(DEFAULT_TECHNOLOGY.vdd),
+    rn: ohms.default(DEFAULT_TECHNOLOGY.rn),
+    rp: ohms.default(DEFAULT_TECHNOLOGY.rp),
+    vtn: quantity(RANGES.volts).default(DEFAULT_TECHNOLOGY.vtn),
+    vtp: quantity(RANGES.volts).default(DEFAULT_TECHNOLOGY.vtp),
+    vil: quantity(RANGES.volts).optional(),
+    vih: quantity(RANGES.volts).optional(),
+    cgPerArea: quantity(RANGES.capacitancePerArea).default(DEFAULT_TECHNOLOGY.cgPerArea),
+    cdPerWidth: quantity(RANGES.capacitancePerWidth).default(DEFAULT_TECHNOLOGY.cdPerWidth),
+    ioffPerWidth: quantity(RANGES.currentPerWidth).default(DEFAULT_TECHNOLOGY.ioffPerWidth),
+    kpn: quantity(RANGES.transconductance).default(DEFAULT_TECHNOLOGY.kpn),
+    kpp: quantity(RANGES.transconductance).default(DEFAULT_TECHNOLOGY.kpp),
     // Level-1 DC model (added after version 1 files were written, so optional with defaults).
-    gamman: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.gamman),
-    gammap: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.gammap),
-    phin: positive.default(DEFAULT_TECHNOLOGY.phin),
-    phip: positive.default(DEFAULT_TECHNOLOGY.phip),
-    lambdan: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.lambdan),
-    lambdap: z.number().nonnegative().default(DEFAULT_TECHNOLOGY.lambdap),
+    gamman: quantity(RANGES.bodyEffect).default(DEFAULT_TECHNOLOGY.gamman),
+    gammap: quantity(RANGES.bodyEffect).default(DEFAULT_TECHNOLOGY.gammap),
+    phin: quantity(RANGES.surfacePotential).default(DEFAULT_TECHNOLOGY.phin),
+    phip: quantity(RANGES.surfacePotential).default(DEFAULT_TECHNOLOGY.phip),
+    lambdan: quantity(RANGES.channelModulation).default(DEFAULT_TECHNOLOGY.lambdan),
+    lambdap: quantity(RANGES.channelModulation).default(DEFAULT_TECHNOLOGY.lambdap),
+    // Model cards the devices name (added to version 1 as an optional field).
+    models: z.record(z.string().min(1), deviceModelSchema).optional(),
   })
   .transform(({ vil, vih, ...t }) => {
     const { vil: lowDefault, vih: highDefault } = withVdd(DEFAULT_TECHNOLOGY, t.vdd);
@@ -108,10 +163,10 @@ const inputValueSchema = z
 
 export const sequenceSchema = z.object({
   name: z.string(),
-  steps: z.array(z.record(z.string(), inputValueSchema)),
+  steps: z.array(namedRecord(inputValueSchema)),
 });
 
-const pointSchema = z.object({ x: z.number(), y: z.number() });
+const pointSchema = z.object({ x: coordinate, y: coordinate });
 
 export const sheetSchema = z.object({
   parts: z.array(sheetPartSchema),
@@ -120,17 +175,3 @@ export const sheetSchema = z.object({
 
 /** The marker that tells a Railwise design file from any other JSON. */
 export const DESIGN_FORMAT_TAG = 'railwise-design';
-
-export const designFileV1Schema = z.object({
-  format: z.literal(DESIGN_FORMAT_TAG),
-  version: z.literal(1),
-  name: z.string(),
-  technology: technologySchema.default(DEFAULT_TECHNOLOGY),
-  netlist: netlistSchema,
-  expectations: z.record(z.string(), z.string()).default({}),
-  sequences: z.array(sequenceSchema).default([]),
-  sheet: sheetSchema.optional(),
-  notes: z.string().optional(),
-});
-
-export type DesignFileV1 = z.infer<typeof designFileV1Schema>;

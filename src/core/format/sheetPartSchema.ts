@@ -14,20 +14,23 @@ import {
   type SheetPart,
 } from '../sheet/parts/index.ts';
 import type { PartPlacement } from '../sheet/types.ts';
+import { coordinate, partField } from './quantity.ts';
 
 const placement = {
   name: z.string(),
-  x: z.number(),
-  y: z.number(),
+  x: coordinate,
+  y: coordinate,
   rotation: z.union([z.literal(0), z.literal(1), z.literal(2), z.literal(3)]),
   mirror: z.boolean(),
 };
 
-/** A kind's record: its placement and its own properties, each a positive number or absent. */
+/** A kind's record: its placement and its own properties, each in its physical range (or text) or absent. */
 function kindSchema(kind: PartKind) {
-  const props: Record<string, z.ZodOptional<z.ZodNumber>> = Object.fromEntries(
-    partSpec(kind).fields.map((f) => [f.key, z.number().positive().optional()]),
-  );
+  const spec = partSpec(kind);
+  const props: Record<string, z.ZodOptional<z.ZodType<number> | z.ZodString>> = Object.fromEntries([
+    ...spec.fields.map((f) => [f.key, partField(f.key).optional()]),
+    ...(spec.textProps ?? []).map((key) => [key, z.string().min(1).optional()]),
+  ]);
   return z.object({ id: z.string().min(1), kind: z.literal(kind), ...placement }).extend(props);
 }
 

@@ -7,6 +7,7 @@
 import { netNames, type Netlist } from '../model/netlist.ts';
 import type { LibertyCell, LibertyLibrary, LibertyPin } from './libertyCells.ts';
 import { LibertyFunctionError, namesIn, parseLibertyFunction, toExpectation } from './libertyFunction.ts';
+import { nameRecord } from '../model/records.ts';
 
 export interface CellFunctions {
   readonly inputs: readonly string[];
@@ -28,7 +29,7 @@ export function cellFunctions(cell: LibertyCell, netlist: Netlist, source: strin
   const inputs = cell.pins.filter((p) => p.direction === 'input').flatMap((p) => resolve(p) ?? []);
   const outputPins = cell.pins.filter((p) => p.direction === 'output' || p.direction === 'inout');
   const outputs: string[] = [];
-  const expectations: Record<string, string> = {};
+  const expectations = nameRecord<string>();
   for (const pin of outputPins) {
     const net = resolve(pin);
     if (net === null) continue;

@@ -9,6 +9,8 @@ interface MosTerminals {
   readonly w?: number;
   /** Length in µm (default 0.25). */
   readonly l?: number;
+  /** Model card name (`Technology.models`). */
+  readonly model?: string;
 }
 
 /** One step of a builder: a persistent list, newest first, so adding is O(1) and never copies. */
@@ -82,7 +84,8 @@ export class CircuitBuilder {
 
   private mos(kind: 'nmos' | 'pmos', name: string, t: MosTerminals): CircuitBuilder {
     const base = { kind, name, gate: t.g, drain: t.d, source: t.s, w: t.w ?? 1, l: t.l ?? 0.25 };
-    return this.add(t.b === undefined ? base : { ...base, bulk: t.b });
+    const withBulk = t.b === undefined ? base : { ...base, bulk: t.b };
+    return this.add(t.model === undefined ? withBulk : { ...withBulk, model: t.model });
   }
 
   resistor(name: string, a: string, b: string, ohms: number): CircuitBuilder {

@@ -17,6 +17,11 @@ export interface MosDevice {
   readonly w: number;
   /** Channel length, µm. */
   readonly l: number;
+  /**
+   * The model card whose level-1 values this device takes (`Technology.models`); absent: the
+   * technology's own values for its type.
+   */
+  readonly model?: string;
 }
 
 export interface ResistorDevice {

@@ -1,3 +1,5 @@
+import type { MosKind } from './netlist.ts';
+
 /**
  * Per-design technology settings. Units: volts, ohms, µm, farads, amperes.
  *
@@ -45,6 +47,55 @@ export interface Technology {
   /** Channel-length modulation λ, 1/V (NMOS, PMOS magnitude): ID grows by (1 + λ·VDS). */
   readonly lambdan: number;
   readonly lambdap: number;
+  /**
+   * Level-1 values of the SPICE model cards that devices name (`MosDevice.model`), by card name.
+   * Absent or empty in most designs: every device then takes the fields above.
+   */
+  readonly models?: Readonly<Record<string, DeviceModel>>;
+}
+
+/**
+ * The level-1 values one model card gives (docs/semantics.md §1, "Model cards"), in the units and
+ * sign convention of the technology's own fields: `vt0` is VTO for NMOS and −VTO for PMOS (so an
+ * enhancement PMOS card's −0.4 V reads 0.4, like `vtp`), `kp` A/V², `gamma` V^½, `phi` volts (2φF),
+ * `lambda` 1/V. A field the card leaves out takes the technology's value for the type.
+ */
+export interface DeviceModel {
+  readonly type: MosKind;
+  readonly vt0?: number;
+  readonly kp?: number;
+  readonly gamma?: number;
+  readonly phi?: number;
+  readonly lambda?: number;
+}
+
+/** The level-1 parameters a model card can set, in the order cards are written. */
+export const MODEL_FIELDS = ['vt0', 'kp', 'gamma', 'phi', 'lambda'] as const;
+export type ModelField = (typeof MODEL_FIELDS)[number];
+
+/** The technology's own value of a model field for one device type. */
+export function technologyValue(tech: Technology, type: MosKind, field: ModelField): number {
+  const n = type === 'nmos';
+  switch (field) {
+    case 'vt0':
+      return n ? tech.vtn : tech.vtp;
+    case 'kp':
+      return n ? tech.kpn : tech.kpp;
+    case 'gamma':
+      return n ? tech.gamman : tech.gammap;
+    case 'phi':
+      return n ? tech.phin : tech.phip;
+    case 'lambda':
+      return n ? tech.lambdan : tech.lambdap;
+  }
+}
+
+/** The card a model name stands for, or undefined (own keys only: a name like `constructor` is no card). */
+export function modelCard(tech: Technology, name: string | undefined): DeviceModel | undefined {
+  const models = tech.models;
+  return name === undefined || models === undefined || !Object.hasOwn(models, name)
+    ? undefined
+    : models[name];
 }
 
 /**
@@ -82,4 +133,19 @@ export const DEFAULT_TECHNOLOGY: Technology = {
 /** A technology at another supply: thresholds follow VDD as VIL_FRACTION and VIH_FRACTION. */
 export function withVdd(tech: Technology, vdd: number): Technology {
   return { ...tech, vdd, vil: VIL_FRACTION * vdd, vih: VIH_FRACTION * vdd };
+}
+
+/** The technology with one card's values as its own for the card's type (the fields the card gives). */
+export function withCardValues(tech: Technology, card: DeviceModel): Technology {
+  const n = card.type === 'nmos';
+  const set = (field: ModelField, nmosKey: keyof Technology, pmosKey: keyof Technology) =>
+    card[field] === undefined ? {} : { [n ? nmosKey : pmosKey]: card[field] };
+  return {
+    ...tech,
+    ...set('vt0', 'vtn', 'vtp'),
+    ...set('kp', 'kpn', 'kpp'),
+    ...set('gamma', 'gamman', 'gammap'),
+    ...set('phi', 'phin', 'phip'),
+    ...set('lambda', 'lambdan', 'lambdap'),
+  };
 }

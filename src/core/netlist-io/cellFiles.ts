@@ -3,14 +3,16 @@
  * only reads files and applies its flags): design files hold one cell, SPICE files one or a library.
  * A file or cell that cannot be used becomes a failure entry; the others still load.
  */
-import { DesignFileError, parseDesignFile } from '../format/designFile.ts';
+import { DesignFileError, fieldInFile, readDesignFile } from '../format/designFile.ts';
 import type { CellDesign, Sequence } from '../model/design.ts';
 import { cellDesign } from '../hierarchy/cellDesign.ts';
 import { HierarchyError } from '../hierarchy/flatten.ts';
 import type { Netlist } from '../model/netlist.ts';
 import { DEFAULT_TECHNOLOGY, withVdd, type Technology } from '../model/technology.ts';
+import { expressionNames } from '../expect/names.ts';
 import { ExpressionError, parseExpression } from '../expect/parse.ts';
 import { importSpice, SpiceImportError, type SpiceImportOptions } from './spiceImport.ts';
+import { withCellModels, withTechnologyCards } from './spiceDesign.ts';
 
 /** Extensions read as SPICE-compatible netlists, everywhere (docs/semantics.md §6). */
 export const SPICE_EXTENSIONS: readonly string[] = ['.sp', '.spi', '.spice', '.cir', '.net', '.cdl', '.ckt'];
@@ -19,6 +21,10 @@ export const DESIGN_EXTENSIONS: readonly string[] = ['.json'];
 /** One cell, ready to check; plain data so it can cross to a worker thread. */
 export interface CellJob {
   readonly file: string;
+  /** A design file names its fields (`expectations.Y`); a netlist its lines and flags. */
+  readonly source: 'design' | 'netlist';
+  /** Where a design file holds this cell's expected functions (`cells[2].expectations`). */
+  readonly expectationsField?: string;
   readonly cell: string;
   readonly netlist: Netlist;
   readonly technology: Technology;
@@ -102,7 +108,7 @@ function unreadable(failure: CellFailure): FileCells {
 
 /** Every cell of a design file, each flattened; several cells are checked as a library. */
 function designCells(text: string, file: string, options: LoadOptions): FileCells {
-  const design = parseDesignFile(text, file);
+  const { design, version } = readDesignFile(text, file);
   const available = design.cells.map((c) => c.name);
   const wanted =
     options.cell === undefined
@@ -110,15 +116,19 @@ function designCells(text: string, file: string, options: LoadOptions): FileCell
       : design.cells.filter((c) => c.name.toLowerCase() === options.cell?.toLowerCase());
   const technology = technologyOf(design.technology, options.vdd);
   const cells = wanted.map((c): LoadedCell => {
+    const at = design.cells.indexOf(c);
     let one: CellDesign;
     try {
       one = cellDesign(design, c.name);
     } catch (e) {
       if (!(e instanceof HierarchyError)) throw e;
-      return { failure: { file, cell: c.name, message: `${file}: ${e.message}`, field: 'cells' } };
+      const field = fieldInFile(['cells', at, 'instances'], version);
+      return { failure: { file, cell: c.name, message: `${file}: ${e.message}`, field } };
     }
     const job: CellJob = {
       file,
+      source: 'design',
+      expectationsField: fieldInFile(['cells', at, 'expectations'], version),
       cell: c.name,
       netlist: one.netlist,
       technology,
@@ -135,15 +145,16 @@ function designCells(text: string, file: string, options: LoadOptions): FileCell
 
 function spiceCells(text: string, file: string, options: LoadOptions): FileCells {
   const imported = importSpice(text, file, options);
-  const technology = technologyOf(DEFAULT_TECHNOLOGY, options.vdd);
+  const base = withTechnologyCards(technologyOf(DEFAULT_TECHNOLOGY, options.vdd), imported);
   const position = new Map(imported.order.map((name, i) => [name, i]));
   const cells: { at: number; cell: LoadedCell }[] = [];
   for (const c of imported.cells) {
     const job: CellJob = {
       file,
+      source: 'netlist',
       cell: c.name,
       netlist: c.netlist,
-      technology,
+      technology: withCellModels(base, [c]),
       expectations: c.expectations,
       expectationLines: c.expectationLines,
       pinsNamed: c.pinsNamed,
@@ -170,14 +181,15 @@ export function expectationProblem(job: CellJob): CellFailure | null {
     const line = job.expectationLines[output];
     const where =
       line === undefined ? `expected function for ${output}` : `${job.file}:${line}: expect ${output}`;
-    const base = { file: job.file, cell: job.cell, ...(line === undefined ? { field: 'expect' } : { line }) };
+    const field = job.source === 'design' ? `${job.expectationsField ?? 'expectations'}.${output}` : 'expect';
+    const base = { file: job.file, cell: job.cell, ...(line === undefined ? { field } : { line }) };
     if (!job.netlist.outputs.includes(output))
       return {
         ...base,
         message: `${where}: '${output}' is not an output (outputs: ${job.netlist.outputs.join(', ') || 'none'})`,
       };
     try {
-      parseExpression(text, job.netlist.inputs);
+      parseExpression(text, expressionNames(job.netlist));
     } catch (e) {
       if (e instanceof ExpressionError) return { ...base, message: `${where}: ${e.message}` };
       throw e;

@@ -21,23 +21,39 @@ export interface PinChoice {
   readonly outputs?: readonly string[];
 }
 
+export interface PinRules {
+  /**
+   * A net in both lists is a pin that is driven and observed, and a rail may be observed as an
+   * output (the pin directives of our own export say so); otherwise both are refused.
+   */
+  readonly bidirectional?: boolean;
+}
+
 /**
  * Given inputs replace the inferred ones, and the other inferred pins become outputs unless outputs
  * are given too. Given outputs replace the inferred ones and leave the inputs that remain.
  */
-export function assignPins(netlist: Netlist, choice: PinChoice): Netlist {
+export function assignPins(netlist: Netlist, choice: PinChoice, rules: PinRules = {}): Netlist {
   if (choice.inputs === undefined && choice.outputs === undefined) return netlist;
-  const inputs = choice.inputs === undefined ? undefined : resolve(netlist, choice.inputs, 'inputs');
-  const outputs = choice.outputs === undefined ? undefined : resolve(netlist, choice.outputs, 'outputs');
+  const lenient = rules.bidirectional === true;
+  const inputs = choice.inputs === undefined ? undefined : resolve(netlist, choice.inputs, 'inputs', false);
+  const outputs =
+    choice.outputs === undefined ? undefined : resolve(netlist, choice.outputs, 'outputs', lenient);
   const both = inputs?.find((n) => outputs?.includes(n));
-  if (both !== undefined) throw new PinError('outputs', `${both} is named both as an input and as an output`);
+  if (both !== undefined && !lenient)
+    throw new PinError('outputs', `${both} is named both as an input and as an output`);
   const nextInputs = inputs ?? netlist.inputs.filter((n) => !outputs?.includes(n));
   const nextOutputs =
     outputs ?? [...netlist.outputs, ...netlist.inputs].filter((n) => !nextInputs.includes(n));
   return { ...netlist, inputs: nextInputs, outputs: nextOutputs };
 }
 
-function resolve(netlist: Netlist, names: readonly string[], what: 'inputs' | 'outputs'): string[] {
+function resolve(
+  netlist: Netlist,
+  names: readonly string[],
+  what: 'inputs' | 'outputs',
+  railsAllowed: boolean,
+): string[] {
   const byLower = new Map(netNames(netlist).map((n) => [n.toLowerCase(), n]));
   const rails = new Set(netlist.rails.map((r) => r.net));
   const out: string[] = [];
@@ -47,7 +63,8 @@ function resolve(netlist: Netlist, names: readonly string[], what: 'inputs' | 'o
       const ports = [...netlist.inputs, ...netlist.outputs].join(', ') || 'none';
       throw new PinError(what, `cell ${netlist.name} has no net "${name}" (its pins: ${ports})`);
     }
-    if (rails.has(net)) throw new PinError(what, `${net} is a rail of cell ${netlist.name}, not a pin`);
+    if (rails.has(net) && !railsAllowed)
+      throw new PinError(what, `${net} is a rail of cell ${netlist.name}, not a pin`);
     if (!out.includes(net)) out.push(net);
   }
   return out;

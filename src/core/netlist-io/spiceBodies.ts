@@ -8,14 +8,16 @@
  * (`spiceShorts.ts`).
  */
 import type { Instance } from '../model/design.ts';
-import type { Device, MosKind } from '../model/netlist.ts';
+import type { Device } from '../model/netlist.ts';
+import type { DeviceModel } from '../model/technology.ts';
 import type { Body, SpiceFile } from './spiceParse.ts';
 import type { Element, InstanceElement, SourceElement } from './spiceElements.ts';
 import { SpiceImportError } from './spiceErrors.ts';
 import type { Scale } from './spiceScale.ts';
 import type { StandIn } from './deviceNames.ts';
-import { instanceDevice, mosDevice, type DeviceNotes } from './spiceDevices.ts';
+import { instanceDevice, mosDevice, type DeviceNotes, type ModelUse } from './spiceDevices.ts';
 import { joinShorts, type ShortLink } from './spiceShorts.ts';
+import { nameRecord } from '../model/records.ts';
 
 /** A `V` line with its nets resolved in its body. */
 export interface FlatSource {
@@ -34,6 +36,8 @@ export interface BodyCell {
   /** Every net in order of first appearance (ports first), spelled as first written. */
   readonly nets: string[];
   readonly notes: string[];
+  /** Level-1 values of the cards the devices name, by card name. */
+  readonly models: ReadonlyMap<string, DeviceModel>;
 }
 
 export interface FlattenContext {
@@ -47,6 +51,8 @@ export interface FlattenContext {
   readonly standIns: ReadonlyMap<string, StandIn>;
   /** The one spelling of each global net in the file, by lower case (filled as bodies are read). */
   readonly globalSpelling: Map<string, string>;
+  /** Lower-case names of the cards that are the technology's own (`* railwise: technology`). */
+  readonly technologyCards: ReadonlySet<string>;
 }
 
 export interface Scope {
@@ -66,8 +72,10 @@ export class CellBuilder {
   private readonly byLower = new Map<string, string>();
   /** Local names repeat in every instance: their lower case and whether they are global, once. */
   private readonly locals = new Map<string, { lower: string; global: boolean }>();
-  /** Caches for the device readers: a model's type and a size text's value, per cell. */
-  readonly modelKinds = new Map<string, MosKind>();
+  /** Caches for the device readers: what a model name gives and a size text's value, per cell. */
+  readonly modelUses = new Map<string, ModelUse>();
+  /** The level-1 values of the cards this cell's devices name. */
+  readonly models = new Map<string, DeviceModel>();
   readonly sizes = new Map<string, number>();
 
   constructor(readonly ctx: FlattenContext) {}
@@ -118,6 +126,7 @@ export class DeviceNotesCollector implements DeviceNotes {
   readonly sized: string[] = [];
   /** Undefined subcircuit → what it was read as, how many, and whether by rule. */
   readonly standIns = new Map<string, { kind: StandIn; count: number; byRule: boolean }>();
+  readonly models = new Set<string>();
 
   lines(): string[] {
     const out: string[] = [];
@@ -131,6 +140,7 @@ export class DeviceNotesCollector implements DeviceNotes {
       );
       out.push(`subcircuits not defined in this file read as devices: ${list.join(', ')}`);
     }
+    out.push(...this.models);
     return out;
   }
 }
@@ -141,12 +151,13 @@ export function readBody(body: Body, ports: readonly string[], ctx: FlattenConte
   const b = new CellBuilder(ctx);
   const root: Scope = { prefix: '', lowerPrefix: '', ports: new Map() };
   ports.forEach((p) => b.net(p, root));
+  const unwired = unwiredPins(body);
   for (const e of body.elements) {
     if (e.kind !== 'instance') addElement(b, e, root);
-    else place(b, e, root);
+    else place(b, e, root, unwired.get(e.name));
   }
   const joined = joinShorts(b, new Set(ports.map((p) => p.toLowerCase())));
-  return { ...joined, notes: [...b.notes.lines(), ...joined.notes] };
+  return { ...joined, notes: [...b.notes.lines(), ...joined.notes], models: b.models };
 }
 
 function addElement(b: CellBuilder, e: Exclude<Element, InstanceElement>, scope: Scope): void {
@@ -183,8 +194,28 @@ function flatSource(b: CellBuilder, e: SourceElement, name: string, scope: Scope
   return { name, line: e.line, plus: b.net(e.plus, scope), minus: b.net(e.minus, scope), volts: e.volts };
 }
 
-/** An instance of a defined subcircuit, its pins by the subcircuit's port names; else a stand-in device. */
-function place(b: CellBuilder, x: InstanceElement, scope: Scope): void {
+/**
+ * `* railwise: unwired XNAME PORT…`: pins our export had to give a net although the design leaves
+ * them unwired (an open pin, or a rail joined by name); they are read as unwired again.
+ */
+function unwiredPins(body: Body): Map<string, Set<string>> {
+  const out = new Map<string, Set<string>>();
+  for (const d of body.directives) {
+    if (d.key !== 'unwired') continue;
+    const [instance, ...ports] = d.value.split(/\s+/).filter(Boolean);
+    if (instance === undefined) continue;
+    const set = out.get(instance) ?? new Set<string>();
+    ports.forEach((p) => set.add(p.toLowerCase()));
+    out.set(instance, set);
+  }
+  return out;
+}
+
+/**
+ * An instance of a defined subcircuit, its pins by the subcircuit's port names (less those the
+ * file marks unwired); else a stand-in device.
+ */
+function place(b: CellBuilder, x: InstanceElement, scope: Scope, unwired?: ReadonlySet<string>): void {
   const sub = b.ctx.file.subcktByName.get(x.subckt.toLowerCase());
   if (sub === undefined) {
     instanceDevice(b, x, scope);
@@ -197,7 +228,9 @@ function place(b: CellBuilder, x: InstanceElement, scope: Scope): void {
     );
   }
   x.params.forEach((_, p) => b.notes.ignoredParams.add(p));
-  const pins: Record<string, string> = {};
-  sub.ports.forEach((p, i) => (pins[b.portName(p)] = b.net(x.nets[i] as string, scope)));
+  const pins = nameRecord<string>(); // a pin may be called __proto__
+  sub.ports.forEach((p, i) => {
+    if (unwired?.has(p.toLowerCase()) !== true) pins[b.portName(p)] = b.net(x.nets[i] as string, scope);
+  });
   b.instances.push({ name: x.name, cell: sub.name, pins });
 }

@@ -7,13 +7,16 @@
  */
 import type { Cell } from '../model/design.ts';
 import type { Netlist, Rail } from '../model/netlist.ts';
-import type { Body, Directive } from './spiceParse.ts';
+import type { DeviceModel } from '../model/technology.ts';
+import type { Body } from './spiceParse.ts';
 import { readBody, type BodyCell, type FlattenContext, type FlatSource } from './spiceBodies.ts';
 import type { Hierarchy } from './spiceHierarchy.ts';
 import { SpiceImportError } from './spiceErrors.ts';
-import { assignPins, PinError } from './pins.ts';
 import { flattenCell, HierarchyError } from '../hierarchy/flatten.ts';
 import { portUse, GATE, CHANNEL, type NetUse } from './portUse.ts';
+import { readExportedNames, restoreExportedNames, restoreInstance } from './spiceRestore.ts';
+import { applyPinDirectives, readExpectations } from './spiceDirectives.ts';
+import { recordOf } from '../model/records.ts';
 
 export interface ImportedCell {
   readonly name: string;
@@ -25,6 +28,8 @@ export interface ImportedCell {
   readonly expectationLines: Readonly<Record<string, number>>;
   /** True when `* railwise: inputs` or `outputs` lines named the pins. */
   readonly pinsNamed: boolean;
+  /** Level-1 values of the model cards the devices name (`MosDevice.model`), by card name. */
+  readonly models: Readonly<Record<string, DeviceModel>>;
   readonly notes: readonly string[];
   /** The cell and every cell it places, as a design holds them (the cell itself last). */
   readonly cells: readonly Cell[];
@@ -53,9 +58,12 @@ export interface CellSpec {
 
 interface FinishedCell {
   readonly cell: Cell;
-  readonly expectationLines: Record<string, number>;
+  readonly expectationLines: Readonly<Record<string, number>>;
   readonly pinsNamed: boolean;
   readonly notes: readonly string[];
+  /** The cell's nets as the design names them, from the names the file spells. */
+  readonly net: (name: string) => string;
+  readonly models: ReadonlyMap<string, DeviceModel>;
 }
 
 export function buildCell(spec: CellSpec, ctx: CellContext): ImportedCell {
@@ -66,7 +74,7 @@ export function buildCell(spec: CellSpec, ctx: CellContext): ImportedCell {
   const top = finished[finished.length - 1] as FinishedCell;
   let netlist: Netlist;
   try {
-    netlist = flattenCell(new Map(cells.map((c) => [c.name, c])), spec.name);
+    netlist = flattenCell(new Map(cells.map((c) => [c.name, c])), top.cell.name);
   } catch (e) {
     if (e instanceof HierarchyError) throw new SpiceImportError(ctx.fileName, spec.line, e.message);
     throw e;
@@ -75,9 +83,10 @@ export function buildCell(spec: CellSpec, ctx: CellContext): ImportedCell {
   const diodes = netlist.devices.filter((d) => d.kind === 'diode').map((d) => d.name);
   if (diodes.length > 0)
     notes.push(`protection diodes kept, never conducting in steady state: ${diodes.join(', ')}`);
-  const { expectations } = top.cell;
+  const { name, expectations } = top.cell;
   const { expectationLines, pinsNamed } = top;
-  return { name: spec.name, netlist, expectations, expectationLines, pinsNamed, notes, cells };
+  const models = recordOf(finished.flatMap((f) => [...f.models]));
+  return { name, netlist, expectations, expectationLines, pinsNamed, models, notes, cells };
 }
 
 function subSpec(body: Body, root: CellSpec): CellSpec {
@@ -140,18 +149,28 @@ function finish(spec: CellSpec, ctx: CellContext): FinishedCell {
   netlist = applyPinDirectives(netlist, spec.body.directives, ctx.fileName);
   const { expectations, lines } = readExpectations(netlist, spec.body.directives, notes);
   const pinsNamed = spec.body.directives.some((d) => d.key === 'inputs' || d.key === 'outputs');
-  const globals = read.nets.filter((n) => !railNets.has(n) && ctx.isGlobal(n.toLowerCase()));
+  const names = readExportedNames(spec.body.directives, notes);
+  const restored = restoreExportedNames({ netlist, expectations, expectationLines: lines }, names);
+  const globals = read.nets.filter((n) => !railNets.has(n) && ctx.isGlobal(n.toLowerCase())).map(names.net);
   const cell: Cell = {
-    name: spec.name,
-    netlist,
-    instances: read.instances,
-    expectations,
+    name: restored.netlist.name,
+    netlist: restored.netlist,
+    instances: read.instances.map((i) => restoreInstance(i, names, placedNames(i.cell, ctx))),
+    expectations: restored.expectations,
     sequences: [],
     ...(globals.length === 0 ? {} : { globals }),
   };
-  const done = { cell, expectationLines: lines, pinsNamed, notes };
+  const { expectationLines } = restored;
+  const done = { cell, expectationLines, pinsNamed, notes, net: names.net, models: read.models };
   ctx.finished.set(spec.body, done);
   return done;
+}
+
+/** How a placed subcircuit's cell is named, and its pins, once it is finished (it always is first). */
+function placedNames(subckt: string, ctx: CellContext): { cell: string; net: (name: string) => string } {
+  const body = ctx.file.subcktByName.get(subckt.toLowerCase());
+  const done = body === undefined ? undefined : ctx.finished.get(body);
+  return done === undefined ? { cell: subckt, net: (n) => n } : { cell: done.cell.name, net: done.net };
 }
 
 /** Rails in order of first appearance: named rails, then nets a `V` line holds. */
@@ -212,45 +231,4 @@ function inferPins(use: NetUse, ports: readonly string[], flat: boolean) {
   const isInput = new Set(inputs);
   const outputs = ports.filter((p) => !isInput.has(p) && (!flat || (has(p, CHANNEL) && !has(p, GATE))));
   return { inputs, outputs };
-}
-
-function applyPinDirectives(netlist: Netlist, directives: readonly Directive[], fileName: string): Netlist {
-  let result = netlist;
-  for (const d of directives) {
-    if (d.key !== 'inputs' && d.key !== 'outputs') continue;
-    const names = d.value.split(/[\s,]+/).filter((n) => n !== '');
-    try {
-      result = assignPins(result, d.key === 'inputs' ? { inputs: names } : { outputs: names });
-    } catch (e) {
-      if (e instanceof PinError) throw new SpiceImportError(fileName, d.line, `${d.key}: ${e.message}`);
-      throw e;
-    }
-  }
-  return result;
-}
-
-const KNOWN_DIRECTIVES = new Set(['expect', 'inputs', 'outputs', 'supply', 'ground', 'treat-as']);
-
-function readExpectations(
-  netlist: Netlist,
-  directives: readonly Directive[],
-  notes: string[],
-): { expectations: Record<string, string>; lines: Record<string, number> } {
-  const expectations: Record<string, string> = {};
-  const lines: Record<string, number> = {};
-  for (const d of directives) {
-    if (!KNOWN_DIRECTIVES.has(d.key))
-      notes.push(`line ${d.line}: unknown railwise directive "${d.key}" ignored`);
-    if (d.key !== 'expect') continue;
-    const eq = d.value.indexOf('=');
-    const output = d.value.slice(0, Math.max(eq, 0)).trim();
-    if (eq < 0 || output === '') {
-      notes.push(`line ${d.line}: an expect line reads "expect OUTPUT = EXPRESSION"; ignored`);
-      continue;
-    }
-    const net = netlist.outputs.find((o) => o.toLowerCase() === output.toLowerCase()) ?? output;
-    expectations[net] = d.value.slice(eq + 1).trim();
-    lines[net] = d.line;
-  }
-  return { expectations, lines };
 }

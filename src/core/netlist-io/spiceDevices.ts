@@ -10,12 +10,16 @@ import { spiceValue } from './spiceNumber.ts';
 import { scaledMicrons } from './spiceScale.ts';
 import { rangeProblem, VALUE_RANGES } from './valueRanges.ts';
 import type { CellBuilder, Scope } from './spiceBodies.ts';
+import { readCard } from './spiceModels.ts';
+import type { ModelCard } from './spiceParse.ts';
 
 export interface DeviceNotes {
   readonly ignoredParams: Set<string>;
   readonly folded: string[];
   readonly sized: string[];
   readonly standIns: Map<string, { kind: StandIn; count: number; byRule: boolean }>;
+  /** About model cards: other levels, bins, fields left to the technology. */
+  readonly models: Set<string>;
 }
 
 /** Widest total width of one device after `m` is folded in, µm (1 m). */
@@ -28,7 +32,8 @@ export function mosDevice(
   scope: Scope,
   kind: MosKind | null,
 ): MosDevice {
-  const type = kind ?? mosKind(b, e);
+  const use = kind === null ? modelUse(b, e) : { kind };
+  const type = use.kind;
   let w = micronsParam(b, e, 'w');
   const l = micronsParam(b, e, 'l');
   if (!e.params.has('w') || !e.params.has('l')) b.notes.sized.push(name);
@@ -46,6 +51,7 @@ export function mosDevice(
     source: b.net(e.source, scope),
     w,
     l,
+    ...(use.model === undefined ? {} : { model: use.model }),
   };
   return e.bulk === undefined ? device : { ...device, bulk: b.net(e.bulk, scope) };
 }
@@ -95,34 +101,60 @@ export function implausible(text: string, microns: number): string {
   return `is ${metres}, more than 1 cm: ${scale}`;
 }
 
-/** From the model card; failing that, from the model's name (nch, pfet, …). */
-function mosKind(b: CellBuilder, e: MosElement): MosKind {
-  const known = b.modelKinds.get(e.model);
-  if (known !== undefined) return known;
-  const kind = modelKind(b, e);
-  b.modelKinds.set(e.model, kind);
-  return kind;
+/** What a device line's model gives it: its type, and the card whose level-1 values it takes. */
+export interface ModelUse {
+  readonly kind: MosKind;
+  readonly model?: string;
 }
 
-function modelKind(b: CellBuilder, e: MosElement): MosKind {
+/** From the model card; failing that, from the model's name (nch, pfet, …). Once per model a cell. */
+function modelUse(b: CellBuilder, e: MosElement): ModelUse {
+  const known = b.modelUses.get(e.model);
+  if (known !== undefined) return known;
+  const use = resolveModel(b, e);
+  b.modelUses.set(e.model, use);
+  return use;
+}
+
+function resolveModel(b: CellBuilder, e: MosElement): ModelUse {
   const lower = e.model.toLowerCase();
   const models = b.ctx.file.models;
+  const exact = models.get(lower);
   // Binned model sets name their bins `nch.1`, `nch.2`…; any bin gives the type.
-  const card = models.get(lower) ?? [...models].find(([k]) => k.startsWith(`${lower}.`))?.[1];
+  const card = exact ?? [...models].find(([k]) => k.startsWith(`${lower}.`))?.[1];
   if (card !== undefined) {
-    if (card.type === 'nmos' || card.type === 'pmos') return card.type;
-    b.fail(
-      e.line,
-      `${e.name}: model ${e.model} is a ${card.type} model (line ${card.line}), not nmos or pmos`,
+    if (card.type !== 'nmos' && card.type !== 'pmos')
+      b.fail(
+        e.line,
+        `${e.name}: model ${e.model} is a ${card.type} model (line ${card.line}), not nmos or pmos`,
+      );
+    if (exact !== undefined) return cardUse(b, e, exact, card.type);
+    b.notes.models.add(
+      `model ${e.model} is binned (${card.name}, …): bins are not read, so its devices take the technology's level-1 values`,
     );
+    return { kind: card.type };
   }
-  return (
-    mosTypeFromName(lower) ??
-    b.fail(
-      e.line,
-      `${e.name}: cannot tell whether model ${e.model} is nmos or pmos; add ".model ${e.model} nmos" (or pmos)`,
-    )
-  );
+  return {
+    kind:
+      mosTypeFromName(lower) ??
+      b.fail(
+        e.line,
+        `${e.name}: cannot tell whether model ${e.model} is nmos or pmos; add ".model ${e.model} nmos" (or pmos)`,
+      ),
+  };
+}
+
+/**
+ * A device that names a MOS card takes its level-1 values; the cards a `* railwise: technology`
+ * line names are the technology's own, so their devices name no card.
+ */
+function cardUse(b: CellBuilder, e: MosElement, card: ModelCard, kind: MosKind): ModelUse {
+  if (b.ctx.technologyCards.has(card.name.toLowerCase())) return { kind };
+  const reading = readCard(card, kind, (line, detail) => b.fail(line, `${e.name} uses ${detail}`));
+  reading.notes.forEach((n) => b.notes.models.add(n));
+  if (reading.model === null) return { kind };
+  b.models.set(card.name, reading.model);
+  return { kind, model: card.name };
 }
 
 /** An instance of a subcircuit the file does not define: the device it stands for, or a refusal. */

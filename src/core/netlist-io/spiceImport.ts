@@ -7,6 +7,7 @@
  * problem throws.
  */
 import type { Rail } from '../model/netlist.ts';
+import type { DeviceModel } from '../model/technology.ts';
 import { parseSpice, type Body, type SpiceFile, type Subckt } from './spiceParse.ts';
 import { buildCell, type CellContext, type CellSpec, type ImportedCell } from './spiceCells.ts';
 import type { FlatSource } from './spiceBodies.ts';
@@ -14,6 +15,7 @@ import { SpiceImportError } from './spiceErrors.ts';
 import { Hierarchy } from './spiceHierarchy.ts';
 import { resolveScale } from './spiceSizes.ts';
 import { parseStandIns, type StandIn } from './deviceNames.ts';
+import { technologyCards } from './spiceModels.ts';
 
 export { SpiceImportError } from './spiceErrors.ts';
 export type { ImportedCell } from './spiceCells.ts';
@@ -50,6 +52,8 @@ export interface SpiceImport {
   readonly order: readonly string[];
   /** Every cell name the file offers to `cell`. */
   readonly available: readonly string[];
+  /** Level-1 values of the cards `* railwise: technology` names: the technology's own, per type. */
+  readonly technologyCards: readonly DeviceModel[];
 }
 
 /** Net names that are rails in every file, compared lower-case with a trailing `!` dropped. */
@@ -66,7 +70,8 @@ export function importSpice(text: string, fileName: string, options: SpiceImport
     const built = isLibrary
       ? buildEach(specs, ctx)
       : { cells: specs.map((s) => buildCell(s, ctx)), failed: [] };
-    return { file: fileName, isLibrary, ...built, notes, order: specs.map((s) => s.name), available };
+    const order = specs.map((s) => s.name);
+    return { file: fileName, isLibrary, ...built, notes, order, available, technologyCards: ctx.technology };
   };
   const shared = topLevelSources(file.top);
   const used = instantiatedNames(file);
@@ -167,7 +172,7 @@ function strayDirectiveNotes(top: Body): string[] {
 }
 
 /** Directives that speak for the whole file wherever they stand. */
-const FILE_DIRECTIVES = new Set(['supply', 'ground', 'treat-as']);
+const FILE_DIRECTIVES = new Set(['supply', 'ground', 'treat-as', 'technology']);
 
 /** Every cell of a library; one that cannot be built is set aside with its error. */
 function buildEach(
@@ -187,13 +192,13 @@ function buildEach(
   return { cells, failed };
 }
 
-/** Rail names, scale and stand-ins: what holds for every cell of the file. */
+/** Rail names, scale, stand-ins and the technology's cards: what holds for every cell of the file. */
 function cellContext(
   file: SpiceFile,
   fileName: string,
   options: SpiceImportOptions,
   notes: string[],
-): CellContext {
+): CellContext & { readonly technology: readonly DeviceModel[] } {
   const bare = (n: string): string => n.toLowerCase().replace(/!$/, '');
   const directives = [file.top, ...file.subckts].flatMap((b) => b.directives);
   const directiveNames = (key: string): string[] =>
@@ -230,6 +235,8 @@ function cellContext(
   options.standIns?.forEach((kind, name) => standIns.set(name.toLowerCase(), kind));
   const scale = resolveScale(file, options.scale, notes);
   const hierarchy = new Hierarchy(file, fileName);
+  const cards = technologyCards(file, fileName, directives);
+  notes.push(...cards.notes);
   return {
     file,
     fileName,
@@ -238,6 +245,8 @@ function cellContext(
     scale,
     standIns,
     hierarchy,
+    technologyCards: cards.names,
+    technology: cards.models,
     globalSpelling: new Map(),
     bodies: new Map(),
     finished: new Map(),

@@ -29,9 +29,15 @@ export interface Subckt extends Body {
 }
 
 export interface ModelCard {
+  /** The name as written. */
+  readonly name: string;
   /** Lower-case device type as written: nmos, pmos, d, npn… */
   readonly type: string;
   readonly line: number;
+  /** Parameters by lower-case name, values as written (`spiceModels.ts` reads them). */
+  readonly params: ReadonlyMap<string, string>;
+  /** Words that are not `key=value`: refused only when a device's card is read. */
+  readonly stray: readonly string[];
 }
 
 export interface SpiceFile {
@@ -231,15 +237,38 @@ function openSubckt(state: ParseState, t: readonly string[], line: number, fail:
   if (ports.length < rest.length)
     state.file.notes.push(`line ${line}: parameters of .subckt ${name} ignored`);
   const sub: Subckt = { name: name as string, line, ports, elements: [], directives: [] };
+  // A port named twice would make one net two pins: this cell cannot be read, the others still can.
+  const seen = new Set<string>();
+  const twice = ports.find((p) => seen.size === seen.add(p.toLowerCase()).size);
+  if (twice !== undefined)
+    sub.error = new SpiceImportError(state.fileName, line, `.subckt ${name}: port ${twice} is listed twice`);
   state.file.subckts.push(sub);
   state.file.subcktByName.set(lower, sub);
   state.current = sub;
 }
 
+/**
+ * `.model NAME TYPE (key=value …)`: parentheses and commas are optional, as `tokens` reads them. A
+ * name given twice keeps its later card, as the last definition wins in SPICE decks; a note says so.
+ */
 function addModel(state: ParseState, t: readonly string[], line: number, fail: (d: string) => never): void {
-  const [, name, type] = t;
+  const [, name, type, ...rest] = t;
   if (name === undefined || type === undefined) fail('.model needs a name and a type');
-  state.file.models.set((name as string).toLowerCase(), { type: (type as string).toLowerCase(), line });
+  const params = new Map<string, string>();
+  const stray: string[] = [];
+  for (const item of rest) {
+    const eq = item.indexOf('=');
+    if (eq > 0) params.set(item.slice(0, eq).toLowerCase(), item.slice(eq + 1));
+    else stray.push(item);
+  }
+  const key = (name as string).toLowerCase();
+  const before = state.file.models.get(key);
+  if (before !== undefined)
+    state.file.notes.push(
+      `line ${line}: .model ${name} given again (first on line ${before.line}); this card is used`,
+    );
+  const card = { name: name as string, type: (type as string).toLowerCase(), line, params, stray };
+  state.file.models.set(key, card);
 }
 
 /** `.option scale=1e-6` (other options stay ignored, with the note every analysis command gets). */

@@ -12,6 +12,8 @@
 import { CAUTION } from '../caution.ts';
 import type { Device, MosDevice, Netlist } from '../model/netlist.ts';
 import { channelNets, netNames } from '../model/netlist.ts';
+import { printable } from '../format/printable.ts';
+import { verilogNames, type VerilogNames } from './verilogNames.ts';
 
 interface Hops {
   readonly ground: ReadonlyMap<string, number>;
@@ -21,72 +23,77 @@ interface Hops {
 
 export function exportVerilog(netlist: Netlist): string {
   const lines = [
-    `// ${netlist.name}: switch-level model exported by Railwise (IEEE Std 1364-2005 clause 7 primitives).`,
+    `// ${printable(netlist.name)}: switch-level model exported by Railwise (IEEE Std 1364-2005 clause 7 primitives).`,
     `// ${CAUTION}`,
     ...moduleLines(netlist),
   ];
   return `${lines.join('\n')}\n`;
 }
 
-/** What a module holds besides its own devices: the instances of other modules and the nets only they touch. */
-export interface ModuleExtras {
-  readonly nets: readonly string[];
-  readonly lines: readonly string[];
-}
-
-/** One cell as a module: ports (inputs, then outputs), rails as supply nets, wires, primitives, extras. */
-export function moduleLines(netlist: Netlist, extras: ModuleExtras = { nets: [], lines: [] }): string[] {
+/**
+ * One cell as a module: renamed names, ports (inputs, then outputs), rails as supply nets, wires,
+ * primitives, then any further lines (a design's instances, written with the same `names`).
+ */
+export function moduleLines(
+  netlist: Netlist,
+  names: VerilogNames = verilogNames(netlist),
+  more: readonly string[] = [],
+  extraNets: readonly string[] = [],
+): string[] {
   const hops = channelHops(netlist);
+  const id = names.net;
   const pins = new Set([...netlist.inputs, ...netlist.outputs]);
   const rails = new Set(netlist.rails.map((r) => r.net));
-  const internal = [...new Set([...netNames(netlist), ...extras.nets])].filter(
+  const internal = [...new Set([...netNames(netlist), ...extraNets])].filter(
     (n) => !pins.has(n) && !rails.has(n),
   );
   const outputs = netlist.outputs.filter((n) => !netlist.inputs.includes(n));
   return [
-    `module ${identifier(netlist.name || 'cell')} (${[...netlist.inputs, ...outputs].map(identifier).join(', ')});`,
-    ...declaration('input', netlist.inputs),
-    ...declaration('output', outputs),
+    ...names.comments,
+    `module ${names.module} (${[...netlist.inputs, ...outputs].map(id).join(', ')});`,
+    ...declaration('input', netlist.inputs.map(id)),
+    ...declaration('output', outputs.map(id)),
     ...netlist.rails.map(
       (r) =>
-        `  ${r.role === 'supply' ? 'supply1' : 'supply0'} ${identifier(r.net)};${r.volts === undefined ? '' : ` // ${r.volts} V`}`,
+        `  ${r.role === 'supply' ? 'supply1' : 'supply0'} ${id(r.net)};${r.volts === undefined ? '' : ` // ${r.volts} V`}`,
     ),
-    ...declaration('wire', internal),
-    ...netlist.devices.map((d) => `  ${instance(d, hops)}`),
-    ...extras.lines.map((l) => `  ${l}`),
+    ...declaration('wire', internal.map(id)),
+    ...netlist.devices.map((d, i) => `  ${instance(d, names.instance(i), id, hops)}`),
+    ...more.map((l) => `  ${l}`),
     'endmodule',
   ];
 }
 
-function declaration(keyword: string, nets: readonly string[]): string[] {
-  return nets.length === 0 ? [] : [`  ${keyword} ${nets.map(identifier).join(', ')};`];
+function declaration(keyword: string, identifiers: readonly string[]): string[] {
+  return identifiers.length === 0 ? [] : [`  ${keyword} ${identifiers.join(', ')};`];
 }
 
-function instance(d: Device, hops: Hops): string {
-  const name = identifier(d.name);
+type Identify = (net: string) => string;
+
+function instance(d: Device, name: string, id: Identify, hops: Hops): string {
   switch (d.kind) {
     case 'nmos':
     case 'pmos':
-      return mosInstance(d, name, hops);
+      return mosInstance(d, name, id, hops);
     case 'resistor':
-      return `rtran ${name} (${identifier(d.a)}, ${identifier(d.b)}); // ${d.ohms} ohm`;
+      return `rtran ${name} (${id(d.a)}, ${id(d.b)}); // ${d.ohms} ohm`;
     case 'capacitor':
-      return `// ${d.name}: ${d.farads} F between ${d.a} and ${d.b} (no switch-level primitive; charge is held by the nets)`;
+      return `// ${printable(d.name)}: ${d.farads} F between ${printable(d.a)} and ${printable(d.b)} (no switch-level primitive; charge is held by the nets)`;
     case 'diode':
-      return `// ${d.name}: protection diode from ${d.anode} to ${d.cathode} (does not conduct in steady state)`;
+      return `// ${printable(d.name)}: protection diode from ${printable(d.anode)} to ${printable(d.cathode)} (does not conduct in steady state)`;
   }
 }
 
-function mosInstance(d: MosDevice, name: string, hops: Hops): string {
+function mosInstance(d: MosDevice, name: string, id: Identify, hops: Hops): string {
   const rail = d.kind === 'nmos' ? hops.ground : hops.supply;
   const order = nearerEnd(d, rail) || nearerEnd(d, hops.input);
-  const gate = identifier(d.gate);
+  const gate = id(d.gate);
   if (order === 0) {
     const primitive = d.kind === 'nmos' ? 'tranif1' : 'tranif0';
-    return `${primitive} ${name} (${identifier(d.drain)}, ${identifier(d.source)}, ${gate});`;
+    return `${primitive} ${name} (${id(d.drain)}, ${id(d.source)}, ${gate});`;
   }
   const [output, data] = order > 0 ? [d.drain, d.source] : [d.source, d.drain];
-  return `${d.kind} ${name} (${identifier(output)}, ${identifier(data)}, ${gate});`;
+  return `${d.kind} ${name} (${id(output)}, ${id(data)}, ${gate});`;
 }
 
 /** +1 when the source end is nearer (it is the data input), -1 when the drain is, 0 for a tie. */
@@ -129,26 +136,4 @@ function channelHops(netlist: Netlist): Hops {
   };
 }
 
-/** Reserved words of IEEE Std 1364-2005 (Annex B) that a net or device name might collide with. */
-const KEYWORDS = new Set(
-  (
-    'always and assign begin buf bufif0 bufif1 case casex casez cmos deassign default defparam disable edge else end ' +
-    'endcase endfunction endmodule endprimitive endspecify endtable endtask event for force forever fork function ' +
-    'highz0 highz1 if ifnone initial inout input integer join large macromodule medium module nand negedge nmos nor ' +
-    'not notif0 notif1 or output parameter pmos posedge primitive pull0 pull1 pulldown pullup rcmos real realtime reg ' +
-    'release repeat rnmos rpmos rtran rtranif0 rtranif1 scalared small specify specparam strong0 strong1 supply0 ' +
-    'supply1 table task time tran tranif0 tranif1 tri tri0 tri1 triand trior trireg vectored wait wand weak0 weak1 ' +
-    'while wire wor xnor xor generate endgenerate genvar localparam signed unsigned automatic cell config design ' +
-    'endconfig incdir include instance liblist library noshowcancelled pulsestyle_ondetect pulsestyle_onevent ' +
-    'showcancelled use uwire'
-  ).split(' '),
-);
-
-/**
- * A simple identifier when the name is one (IEEE Std 1364-2005 3.7), otherwise an escaped
- * identifier: a backslash, the name, and a terminating space (3.7.1).
- */
-export function identifier(name: string): string {
-  if (/^[A-Za-z_][A-Za-z0-9_$]*$/.test(name) && !KEYWORDS.has(name)) return name;
-  return `\\${name.replace(/\s/g, '_')} `;
-}
+export { identifier } from './verilogNames.ts';

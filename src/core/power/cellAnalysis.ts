@@ -5,7 +5,7 @@
  * vectors than the check's (random activity beside a sequence check, or the other way round) takes
  * a pass of its own on the same compiled netlist.
  */
-import { checkSequence, checkSweep, type CheckOptions } from '../analysis/check.ts';
+import { checkSequence, checkSweep, refusalBeforeCheck, type CheckOptions } from '../analysis/check.ts';
 import { sequencePass, sweepPass } from '../analysis/pass.ts';
 import type { CheckReport } from '../analysis/report.ts';
 import { compile } from '../compile/compile.ts';
@@ -36,6 +36,18 @@ export interface CellAnalysis {
 }
 
 export function analyseCell(netlist: Netlist, options: CellAnalysisOptions = {}): CellAnalysis {
+  return prepareAnalysis(netlist, options).run();
+}
+
+/**
+ * Everything that can refuse the analysis (the power settings, the expected functions, the input
+ * limit) is checked here, before a vector is solved, so a caller that writes rows as they come
+ * (`onRow`) never has to abandon a report it has begun.
+ */
+export function prepareAnalysis(
+  netlist: Netlist,
+  options: CellAnalysisOptions = {},
+): { readonly run: () => CellAnalysis } {
   const { steps, power } = options;
   const shared = power !== undefined && sharesPass(power, steps);
   // A shared sweep is bounded by the check's own limit, which it reports in its own words.
@@ -44,21 +56,25 @@ export function analyseCell(netlist: Netlist, options: CellAnalysisOptions = {})
       sequence: power.sequence ?? steps ?? [],
       ...(shared ? { maxInputs: Infinity } : {}),
     });
-  const simulator =
-    options.simulator ?? new Simulator(compile(netlist, options.technology ?? DEFAULT_TECHNOLOGY));
-  const tally = power === undefined ? null : new PowerTally(simulator.compiled, power.activity);
-  const checkOptions: CheckOptions = {
-    ...options,
-    simulator,
-    observers: [...(options.observers ?? []), ...(shared && tally !== null ? [tally] : [])],
+  refusalBeforeCheck(netlist, options, steps === undefined);
+  const run = (): CellAnalysis => {
+    const simulator =
+      options.simulator ?? new Simulator(compile(netlist, options.technology ?? DEFAULT_TECHNOLOGY));
+    const tally = power === undefined ? null : new PowerTally(simulator.compiled, power.activity);
+    const checkOptions: CheckOptions = {
+      ...options,
+      simulator,
+      observers: [...(options.observers ?? []), ...(shared && tally !== null ? [tally] : [])],
+    };
+    const report =
+      steps === undefined ? checkSweep(netlist, checkOptions) : checkSequence(netlist, steps, checkOptions);
+    if (tally !== null && !shared) {
+      if (tally.activitySource === 'random') sweepPass(simulator, [tally]);
+      else sequencePass(simulator, power?.sequence ?? [], [tally]);
+    }
+    return { report, power: tally?.counts() ?? null };
   };
-  const report =
-    steps === undefined ? checkSweep(netlist, checkOptions) : checkSequence(netlist, steps, checkOptions);
-  if (tally !== null && !shared) {
-    if (tally.activitySource === 'random') sweepPass(simulator, [tally]);
-    else sequencePass(simulator, power?.sequence ?? [], [tally]);
-  }
-  return { report, power: tally?.counts() ?? null };
+  return { run };
 }
 
 /** Whether the power counts can ride on the check's own pass: the same vectors in the same order. */

@@ -57,7 +57,12 @@ export class LeakageEstimator {
     return { current: watts / c.tech.vdd, watts };
   }
 
-  /** Leakage through off transistors that touch an undriven net, after solving those nets. */
+  /**
+   * Leakage through off transistors that touch an undriven net, after solving those nets. The
+   * undriven nets are those at the ends of such transistors and every undriven net joined to them
+   * by a conducting device: a floating stack joint two conducting devices away still carries the
+   * leakage current through.
+   */
   private undrivenWatts(
     result: SolveResult,
     pending: readonly Stamp[],
@@ -72,19 +77,20 @@ export class LeakageEstimator {
       mark(s.a);
       mark(s.b);
     }
-    // Undriven nets joined by a conducting device share one voltage: stamp its on-conductance too.
-    const stamps = [...pending];
-    for (const n of free) {
+    const joins: [number, number][] = [];
+    // `free` grows while it is walked: a breadth-first search through conducting devices.
+    for (let i = 0; i < free.length; i++) {
+      const n = free[i];
       for (let k = c.netChannels.start[n]; k < c.netChannels.start[n + 1]; k++) {
         const e = c.netChannels.items[k];
         const other = c.chA[e] === n ? c.chB[e] : c.chA[e];
-        if (result.conduction[e] !== OFF && other > n && this.localOf[other] >= 0) {
-          stamps.push({ a: n, b: other, g: 1 / c.chOhms[e] });
-        }
+        if (result.conduction[e] === OFF || fixed(other)) continue;
+        mark(other);
+        joins.push([n, other]);
       }
     }
     const volts = result.volts.slice();
-    solveFreeNets(stamps, volts, free, this.localOf);
+    solveFreeNets(pending, joins, volts, free, this.localOf);
     for (const n of free) this.localOf[n] = -1;
     let watts = 0;
     for (const s of pending) {

@@ -8,108 +8,155 @@ export interface Stamp {
 }
 
 /**
- * Sets the voltage of every free net from Kirchhoff's current law over the stamped conductances,
+ * Sets the voltage of every free net from Kirchhoff's current law over the leakage conductances,
  * the other nets' voltages held fixed. `localOf[net]` numbers the free nets 0..free.length−1 (−1 for
- * fixed nets). Free nets fall into small groups (a stack's internal nodes), so each connected group is
- * solved on its own: a lone net directly as the conductance-weighted mean of its neighbours, a pair
- * (the joints of a stack of three off transistors) in closed form, a larger group by ml-matrix's LU.
- * The small cases matter: a 16-input sweep of a 1,800-transistor block meets some 100 per vector.
- * A group tied to no fixed net carries no current and is left at 0 V.
+ * fixed nets); `joins` pairs free nets joined by a conducting device, which share one voltage.
+ *
+ * Joined nets are merged into one node before anything is solved: a conducting device is some
+ * 10^6 times stronger than a leaking one, and kept as a conductance it would make the matrix
+ * nearly singular. What is left is a network of leakage conductances of like size. Each connected
+ * group of nodes is solved on its own: a lone node as the conductance-weighted mean of its
+ * neighbours, a pair (the joints of a stack of three off transistors) in closed form, a larger
+ * group by ml-matrix's LU. A group with no conductance to a fixed net carries no current; its nets
+ * are set to 0 V. Every other group's matrix is a weighted Laplacian plus positive ties to fixed
+ * nets, so it is symmetric positive definite and the LU never meets a zero pivot.
  */
 export function solveFreeNets(
   stamps: readonly Stamp[],
+  joins: readonly (readonly [number, number])[],
   volts: Float64Array,
   free: readonly number[],
   localOf: Int32Array,
 ): void {
-  const touching: Stamp[][] = free.map(() => []);
-  const parent = Int32Array.from(free, (_, i) => i);
-  const root = (i: number): number => {
-    while (parent[i] !== i) i = parent[i] = parent[parent[i]];
-    return i;
-  };
+  const node = mergeJoined(
+    free.length,
+    joins.map(([a, b]) => [localOf[a], localOf[b]] as const),
+  );
+  const nodeCount = node.reduce((m, v) => Math.max(m, v + 1), 0);
+  const touching: Stamp[][] = Array.from({ length: nodeCount }, () => []);
+  const group = new DisjointSets(nodeCount);
+  const tied = new Uint8Array(nodeCount);
   for (const s of stamps) {
-    if (s.a === s.b) continue;
-    const la = localOf[s.a];
-    const lb = localOf[s.b];
-    if (la >= 0) touching[la].push(s);
-    if (lb >= 0) touching[lb].push(s);
-    if (la >= 0 && lb >= 0) parent[root(la)] = root(lb);
+    const na = localOf[s.a] >= 0 ? node[localOf[s.a]] : -1;
+    const nb = localOf[s.b] >= 0 ? node[localOf[s.b]] : -1;
+    if (na === nb) continue; // both ends on one node (or both fixed): no current through the network
+    if (na >= 0) touching[na].push(s);
+    if (nb >= 0) touching[nb].push(s);
+    if (na >= 0 && nb >= 0) group.union(na, nb);
+    else tied[na >= 0 ? na : nb] = 1;
   }
-  const groups: number[][] = free.map(() => []);
-  free.forEach((_, i) => groups[root(i)].push(i));
-  for (const group of groups) {
-    if (group.length === 1) solveLone(free[group[0]], touching[group[0]], volts);
-    else if (group.length === 2)
-      solvePair(free[group[0]], free[group[1]], touching[group[0]], touching[group[1]], volts);
-    else if (group.length > 2) solveGroup(group, free, touching, localOf, volts);
+  const members: number[][] = Array.from({ length: nodeCount }, () => []);
+  for (let k = 0; k < nodeCount; k++) members[group.find(k)].push(k);
+  const nodeVolts = new Float64Array(nodeCount);
+  const view: NodeView = { touching, node, localOf, volts, nodeVolts };
+  for (const nodes of members) {
+    if (nodes.length === 0 || !nodes.some((k) => tied[k] === 1)) continue; // floats: stays at 0 V
+    if (nodes.length === 1) solveLone(nodes[0], view);
+    else if (nodes.length === 2) solvePair(nodes[0], nodes[1], view);
+    else solveGroup(nodes, view);
   }
+  free.forEach((net, local) => (volts[net] = nodeVolts[node[local]]));
 }
 
-function solveLone(net: number, stamps: readonly Stamp[], volts: Float64Array): void {
+/** What the group solvers read: stamps per node, and how nets map onto nodes. */
+interface NodeView {
+  readonly touching: readonly (readonly Stamp[])[];
+  /** Node of each free net's local number. */
+  readonly node: Int32Array;
+  readonly localOf: Int32Array;
+  /** Voltages of the fixed nets. */
+  readonly volts: Float64Array;
+  /** Voltages being found, one per node. */
+  readonly nodeVolts: Float64Array;
+}
+
+/** The node at the far end of a stamp from `k`: a node number, or −1 with the fixed net's voltage. */
+function farEnd(s: Stamp, k: number, view: NodeView): { node: number; volts: number } {
+  const la = view.localOf[s.a];
+  const nodeA = la >= 0 ? view.node[la] : -1;
+  const other = nodeA === k ? s.b : s.a;
+  const lo = view.localOf[other];
+  return lo >= 0 ? { node: view.node[lo], volts: 0 } : { node: -1, volts: view.volts[other] };
+}
+
+function solveLone(k: number, view: NodeView): void {
   let weighted = 0;
   let total = 0;
-  for (const s of stamps) {
-    weighted += s.g * volts[s.a === net ? s.b : s.a];
+  for (const s of view.touching[k]) {
+    weighted += s.g * farEnd(s, k, view).volts;
     total += s.g;
   }
-  volts[net] = total > 0 ? weighted / total : 0;
+  view.nodeVolts[k] = weighted / total;
 }
 
-/** Two coupled nets: [gx+gxy, −gxy; −gxy, gy+gxy]·v = b solved by Cramer's rule. */
-function solvePair(
-  x: number,
-  y: number,
-  atX: readonly Stamp[],
-  atY: readonly Stamp[],
-  volts: Float64Array,
-): void {
+/** Two coupled nodes: [gx+gxy, −gxy; −gxy, gy+gxy]·v = b solved by Cramer's rule. */
+function solvePair(x: number, y: number, view: NodeView): void {
   let gx = 0;
   let gy = 0;
   let gxy = 0;
   let bx = 0;
   let by = 0;
-  for (const s of atX) {
-    const other = s.a === x ? s.b : s.a;
-    if (other === y) gxy += s.g;
+  for (const s of view.touching[x]) {
+    const far = farEnd(s, x, view);
+    if (far.node === y) gxy += s.g;
     else {
       gx += s.g;
-      bx += s.g * volts[other];
+      bx += s.g * far.volts;
     }
   }
-  for (const s of atY) {
-    const other = s.a === y ? s.b : s.a;
-    if (other === x) continue; // counted from x's side
+  for (const s of view.touching[y]) {
+    const far = farEnd(s, y, view);
+    if (far.node === x) continue; // counted from x's side
     gy += s.g;
-    by += s.g * volts[other];
+    by += s.g * far.volts;
   }
   const det = (gx + gxy) * (gy + gxy) - gxy * gxy;
-  volts[x] = det > 0 ? (bx * (gy + gxy) + gxy * by) / det : 0;
-  volts[y] = det > 0 ? (by * (gx + gxy) + gxy * bx) / det : 0;
+  view.nodeVolts[x] = (bx * (gy + gxy) + gxy * by) / det;
+  view.nodeVolts[y] = (by * (gx + gxy) + gxy * bx) / det;
 }
 
-function solveGroup(
-  group: readonly number[],
-  free: readonly number[],
-  touching: readonly Stamp[][],
-  localOf: Int32Array,
-  volts: Float64Array,
-): void {
-  const position = new Map(group.map((local, p) => [local, p]));
-  const g = Matrix.zeros(group.length, group.length);
-  const b = Matrix.zeros(group.length, 1);
-  group.forEach((local, p) => {
-    const net = free[local];
-    for (const s of touching[local]) {
-      const other = s.a === net ? s.b : s.a;
+function solveGroup(nodes: readonly number[], view: NodeView): void {
+  const position = new Map(nodes.map((k, p) => [k, p]));
+  const g = Matrix.zeros(nodes.length, nodes.length);
+  const b = Matrix.zeros(nodes.length, 1);
+  nodes.forEach((k, p) => {
+    for (const s of view.touching[k]) {
+      const far = farEnd(s, k, view);
       g.set(p, p, g.get(p, p) + s.g);
-      const q = localOf[other] >= 0 ? position.get(localOf[other]) : undefined;
-      if (q === undefined) b.set(p, 0, b.get(p, 0) + s.g * volts[other]);
-      else g.set(p, q, g.get(p, q) - s.g);
+      if (far.node < 0) b.set(p, 0, b.get(p, 0) + s.g * far.volts);
+      else g.set(p, position.get(far.node) as number, g.get(p, position.get(far.node) as number) - s.g);
     }
   });
-  // A group tied to nothing fixed is singular; a negligible conductance to 0 V keeps it defined.
-  for (let p = 0; p < group.length; p++) g.set(p, p, g.get(p, p) + 1e-30);
   const x = new LuDecomposition(g).solve(b);
-  group.forEach((local, p) => (volts[free[local]] = x.get(p, 0)));
+  nodes.forEach((k, p) => (view.nodeVolts[k] = x.get(p, 0)));
+}
+
+/** Numbers the classes of `count` items joined by `pairs`: 0, 1, … in order of first item. */
+function mergeJoined(count: number, pairs: readonly (readonly [number, number])[]): Int32Array {
+  const sets = new DisjointSets(count);
+  for (const [a, b] of pairs) sets.union(a, b);
+  const node = new Int32Array(count).fill(-1);
+  const numberOf = new Int32Array(count).fill(-1);
+  let next = 0;
+  for (let i = 0; i < count; i++) {
+    const r = sets.find(i);
+    if (numberOf[r] < 0) numberOf[r] = next++;
+    node[i] = numberOf[r];
+  }
+  return node;
+}
+
+class DisjointSets {
+  private readonly parent: Int32Array;
+  constructor(count: number) {
+    this.parent = Int32Array.from({ length: count }, (_, i) => i);
+  }
+  find(i: number): number {
+    const p = this.parent;
+    while (p[i] !== i) i = p[i] = p[p[i]];
+    return i;
+  }
+  union(a: number, b: number): void {
+    this.parent[this.find(a)] = this.find(b);
+  }
 }

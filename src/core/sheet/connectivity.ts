@@ -1,6 +1,8 @@
 /**
- * Which pins and wires form one net. Coordinates are integers, so a wire is indexed by every grid
- * point it covers and joins are exact look-ups, linear in the drawn length.
+ * Which pins and wires form one net. Joins happen only at wire ends, bends and pins, so only those
+ * points are looked at: each segment finds the ones lying on it by binary search in its row or
+ * column. The work grows with the number of segments and points, never with how long a wire is (a
+ * wire a million grid units long costs what a short one does).
  *
  * Rules (the usual ones on a schematic sheet):
  * - the points of one wire are one net;
@@ -10,7 +12,7 @@
  */
 import type { Sheet } from './types.ts';
 import { pinPositions, pointKey, type PlacedPin } from './geometry.ts';
-import { segmentGridPoints } from './routing.ts';
+import type { Point } from './types.ts';
 
 export class UnionFind {
   private readonly parent = new Map<string, string>();
@@ -54,22 +56,79 @@ export interface SheetConnectivity {
   readonly openEnds: readonly { readonly x: number; readonly y: number }[];
 }
 
-/** Grid point → wires covering it, and how many segment ends arrive there. */
-function indexWires(sheet: Sheet): { covering: Map<string, Set<string>>; arms: Map<string, number> } {
+/** Points sorted along one row (by x) or one column (by y), for range look-ups. */
+class Line {
+  readonly at: number[] = [];
+  add(v: number): void {
+    this.at.push(v);
+  }
+  /** Every value from lo to hi, both included (the list is sorted first). */
+  *within(lo: number, hi: number): Generator<number> {
+    let i = lowerBound(this.at, lo);
+    while (i < this.at.length && (this.at[i] as number) <= hi) yield this.at[i++] as number;
+  }
+}
+
+function lowerBound(sorted: readonly number[], v: number): number {
+  let [lo, hi] = [0, sorted.length];
+  while (lo < hi) {
+    const mid = (lo + hi) >>> 1;
+    if ((sorted[mid] as number) < v) lo = mid + 1;
+    else hi = mid;
+  }
+  return lo;
+}
+
+function linesOf(points: Iterable<Point>): { rows: Map<number, Line>; columns: Map<number, Line> } {
+  const rows = new Map<number, Line>();
+  const columns = new Map<number, Line>();
+  const seen = new Set<string>();
+  for (const p of points) {
+    const k = pointKey(p);
+    if (seen.has(k)) continue;
+    seen.add(k);
+    if (!rows.has(p.y)) rows.set(p.y, new Line());
+    if (!columns.has(p.x)) columns.set(p.x, new Line());
+    rows.get(p.y)?.add(p.x);
+    columns.get(p.x)?.add(p.y);
+  }
+  for (const line of [...rows.values(), ...columns.values()]) line.at.sort((a, b) => a - b);
+  return { rows, columns };
+}
+
+/**
+ * At each wire end, bend and pin point: the wires covering it, and how many segment ends arrive
+ * there (an interior point of a segment counts two arms, an end one). A segment that is neither
+ * horizontal nor vertical (the editor never draws one) covers only its two ends.
+ */
+function indexWires(
+  sheet: Sheet,
+  pins: readonly Point[],
+): { covering: Map<string, Set<string>>; arms: Map<string, number> } {
   const covering = new Map<string, Set<string>>();
   const arms = new Map<string, number>();
-  const bump = (k: string, n: number): void => void arms.set(k, (arms.get(k) ?? 0) + n);
+  const { rows, columns } = linesOf([...sheet.wires.flatMap((w) => w.points), ...pins]);
+  const touch = (wire: string, p: Point, end: boolean): void => {
+    const k = pointKey(p);
+    let set = covering.get(k);
+    if (!set) covering.set(k, (set = new Set()));
+    set.add(wire);
+    arms.set(k, (arms.get(k) ?? 0) + (end ? 1 : 2));
+  };
   for (const wire of sheet.wires) {
     for (let i = 1; i < wire.points.length; i++) {
-      const pts = segmentGridPoints(wire.points[i - 1]!, wire.points[i]!);
-      pts.forEach((p, j) => {
-        const k = pointKey(p);
-        let set = covering.get(k);
-        if (!set) covering.set(k, (set = new Set()));
-        set.add(wire.id);
-        // An interior point of a segment has two arms; an end of a segment has one.
-        bump(k, j === 0 || j === pts.length - 1 ? 1 : 2);
-      });
+      const [a, b] = [wire.points[i - 1] as Point, wire.points[i] as Point];
+      if (a.x === b.x && a.y === b.y) touch(wire.id, a, true);
+      else if (a.y === b.y) {
+        for (const x of rows.get(a.y)?.within(Math.min(a.x, b.x), Math.max(a.x, b.x)) ?? [])
+          touch(wire.id, { x, y: a.y }, x === a.x || x === b.x);
+      } else if (a.x === b.x) {
+        for (const y of columns.get(a.x)?.within(Math.min(a.y, b.y), Math.max(a.y, b.y)) ?? [])
+          touch(wire.id, { x: a.x, y }, y === a.y || y === b.y);
+      } else {
+        touch(wire.id, a, true);
+        touch(wire.id, b, true);
+      }
     }
   }
   return { covering, arms };
@@ -77,8 +136,8 @@ function indexWires(sheet: Sheet): { covering: Map<string, Set<string>>; arms: M
 
 export function sheetConnectivity(sheet: Sheet): SheetConnectivity {
   const groups = new UnionFind();
-  const { covering, arms } = indexWires(sheet);
   const pins = sheet.parts.flatMap(pinPositions);
+  const { covering, arms } = indexWires(sheet, pins);
   const pinsAt = new Map<string, PlacedPin[]>();
   for (const pin of pins) {
     const k = pointKey(pin);

@@ -70,7 +70,7 @@ export function updatePart(sheet: Sheet, partId: string, patch: PartPatch): Shee
   for (const [key, value] of Object.entries(values)) {
     const field = spec.fields.find((f) => f.key === key);
     if (field === undefined) throw new SheetEditError(`a ${spec.title} has no ${key}`);
-    const problem = value === undefined ? null : field.quantity.check(value);
+    const problem = typeof value === 'number' ? field.quantity.check(value) : null;
     if (problem !== null) throw new SheetEditError(`${field.label} ${problem}`);
   }
   const next = makeSheetPart(

@@ -1,7 +1,9 @@
 /**
  * What is under a point, and what lies inside a box: pure geometry over the document, so the
  * canvas is never asked. An index buckets parts and wire segments by grid cell; it is rebuilt
- * from the sheet whenever the sheet changes (cheap: linear in parts and segments).
+ * from the sheet whenever the sheet changes (cheap: linear in parts and segments). A segment that
+ * would fill more than MAX_CELLS_PER_SEGMENT buckets is kept in a short list tested on every query
+ * instead, so the index never grows with how long (or how slanted) a wire is.
  */
 import type { Point, Sheet, SheetPart, SheetWire } from './types.ts';
 import {
@@ -32,9 +34,20 @@ const DEFAULTS: HitOptions = { pinRadius: 0.45, wireRadius: 0.35 };
 /** Bucket size in grid units: a few symbols wide, so a query touches a handful of buckets. */
 const CELL = 8;
 
+/** Beyond this many buckets a segment goes to the index's list of long wires. */
+const MAX_CELLS_PER_SEGMENT = 64;
+
 export interface SheetIndex {
   readonly sheet: Sheet;
   readonly buckets: ReadonlyMap<string, { parts: SheetPart[]; wires: SheetWire[]; pins: PlacedPin[] }>;
+  /** Wires with a segment too long to bucket: tested on every query. */
+  readonly long: readonly SheetWire[];
+}
+
+function cellCount(r: Rect): number {
+  const across = Math.floor(r.x1 / CELL) - Math.floor(r.x0 / CELL) + 1;
+  const down = Math.floor(r.y1 / CELL) - Math.floor(r.y0 / CELL) + 1;
+  return across * down;
 }
 
 function cellsOf(r: Rect): string[] {
@@ -57,17 +70,24 @@ export function buildIndex(sheet: Sheet): SheetIndex {
     for (const pin of pinPositions(part))
       bucket(cellsOf({ x0: pin.x, y0: pin.y, x1: pin.x, y1: pin.y })[0]!).pins.push(pin);
   }
+  const long = new Set<SheetWire>();
   for (const wire of sheet.wires) {
-    const box = pointsBounds(wire.points);
-    if (box) for (const k of cellsOf(box)) bucket(k).wires.push(wire);
+    for (let i = 1; i < wire.points.length; i++) {
+      const box = pointsBounds([wire.points[i - 1] as Point, wire.points[i] as Point]);
+      if (box === null) continue;
+      if (cellCount(box) > MAX_CELLS_PER_SEGMENT) long.add(wire);
+      else for (const k of cellsOf(box)) bucket(k).wires.push(wire);
+    }
+    if (wire.points.length === 1)
+      for (const k of cellsOf(pointsBounds(wire.points) as Rect)) bucket(k).wires.push(wire);
   }
-  return { sheet, buckets };
+  return { sheet, buckets, long: [...long] };
 }
 
 function near(index: SheetIndex, p: Point, radius: number) {
   const keys = cellsOf({ x0: p.x - radius, y0: p.y - radius, x1: p.x + radius, y1: p.y + radius });
   const parts = new Set<SheetPart>();
-  const wires = new Set<SheetWire>();
+  const wires = new Set<SheetWire>(index.long);
   const pins: PlacedPin[] = [];
   for (const k of keys) {
     const b = index.buckets.get(k);

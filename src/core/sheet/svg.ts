@@ -6,6 +6,7 @@ import type { Sheet, SheetPart } from './types.ts';
 import { partSpec, type PartText, type Primitive } from './parts/index.ts';
 import { TEXT_SIZE } from './parts/text.ts';
 import { partBounds, pointsBounds, toWorld, unionRects } from './geometry.ts';
+import { printable } from '../format/printable.ts';
 import { sheetConnectivity } from './connectivity.ts';
 
 export interface SvgOptions {
@@ -18,8 +19,13 @@ export interface SvgOptions {
 
 const DEFAULTS: SvgOptions = { scale: 20, margin: 2, ink: '#2b2d33', background: '#ffffff' };
 
+/**
+ * Text as XML 1.0 character data or an attribute value: markup characters as entities, and every
+ * character XML forbids (controls, lone surrogates, U+FFFE/FFFF) or a reader would not see (format
+ * characters, separators) as a visible escape (printable.ts), so the file always parses.
+ */
 function escapeXml(text: string): string {
-  return text.replace(
+  return printable(text).replace(
     /[<>&"']/g,
     (c) => ({ '<': '&lt;', '>': '&gt;', '&': '&amp;', '"': '&quot;', "'": '&apos;' })[c]!,
   );

@@ -7,6 +7,7 @@ import type { Device, Netlist, Rail } from '../model/netlist.ts';
 import type { Sheet, SheetPart } from './types.ts';
 import { isDevicePart, partSpec, type NetRole } from './parts/index.ts';
 import { pinKey, sheetConnectivity, wireKey, type UnionFind } from './connectivity.ts';
+import { nameRecord } from '../model/records.ts';
 
 export interface SheetIssue {
   readonly kind: 'name-conflict' | 'duplicate-device' | 'shorted-pins' | 'hierarchy';
@@ -144,8 +145,8 @@ export function sheetToNetlist(sheet: Sheet, name = 'cell'): DerivedNetlist {
   const { groups, junctions, openEnds } = sheetConnectivity(sheet);
   joinEqualNames(sheet, groups);
   const nameOf = nameGroups(sheet, groups, issues);
-  const pinNets: Record<string, string> = {};
-  const partDevices: Record<string, string> = {};
+  const pinNets = nameRecord<string>();
+  const partDevices = nameRecord<string>();
   const found: Contributions = { devices: [], rails: [], inputs: [], outputs: [] };
   for (const part of sheet.parts) {
     const netOf = (pin: string): string => nameOf(groups.find(pinKey(part.id, pin)));
@@ -154,7 +155,7 @@ export function sheetToNetlist(sheet: Sheet, name = 'cell'): DerivedNetlist {
     contribute(part, netOf, found);
   }
   reportDuplicateDevices(sheet, issues);
-  const wireNets: Record<string, string> = {};
+  const wireNets = nameRecord<string>();
   for (const wire of sheet.wires) wireNets[wire.id] = nameOf(groups.find(wireKey(wire.id)));
   const railNets = new Set(found.rails.map((r) => r.net));
   const netlist: Netlist = {

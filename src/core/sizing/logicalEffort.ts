@@ -1,6 +1,7 @@
 import type { Netlist } from '../model/netlist.ts';
 import type { Technology } from '../model/technology.ts';
 import type { EquivalentInverter } from './types.ts';
+import { nameRecord } from '../model/records.ts';
 
 /** The shortest drawn channel length in the cell, µm: the length the reference inverter is drawn at. */
 export function referenceLength(netlist: Netlist): number | null {
@@ -25,7 +26,7 @@ export function equivalentInverter(
 
 /** Gate capacitance each input drives, farads: every transistor gate on that net, W · L · Cox. */
 export function inputCapacitance(netlist: Netlist, tech: Technology): Record<string, number> {
-  const cin: Record<string, number> = {};
+  const cin = nameRecord<number>();
   for (const input of netlist.inputs) cin[input] = 0;
   for (const d of netlist.devices) {
     if ((d.kind === 'nmos' || d.kind === 'pmos') && d.gate in cin) cin[d.gate] += tech.cgPerArea * d.w * d.l;
@@ -42,7 +43,7 @@ export function logicalEffort(
   cin: Readonly<Record<string, number>>,
   inverter: EquivalentInverter,
 ): Record<string, number | null> {
-  const g: Record<string, number | null> = {};
+  const g = nameRecord<number | null>();
   for (const [input, c] of Object.entries(cin))
     g[input] = c > 0 && inverter.cin > 0 ? c / inverter.cin : null;
   return g;
@@ -88,8 +89,8 @@ export function edgeEfforts(
   const cinvRise = tech.cgPerArea * l * wp * (1 + 1 / gamma);
   const cinvFall = tech.cgPerArea * l * wn * (1 + gamma);
   const ratio = (c: number, cinv: number): number | null => (c > 0 && cinv > 0 ? c / cinv : null);
-  const rise: Record<string, number | null> = {};
-  const fall: Record<string, number | null> = {};
+  const rise = nameRecord<number | null>();
+  const fall = nameRecord<number | null>();
   for (const [input, c] of Object.entries(cin)) {
     rise[input] = ratio(c, cinvRise);
     fall[input] = ratio(c, cinvFall);

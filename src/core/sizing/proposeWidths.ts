@@ -2,6 +2,7 @@ import type { Device, Netlist } from '../model/netlist.ts';
 import type { Technology } from '../model/technology.ts';
 import { referenceLength } from './logicalEffort.ts';
 import { extractStage, type Stage } from './stage.ts';
+import { nameRecord } from '../model/records.ts';
 
 /** The inverter whose drive every output should match: widths and length in µm. */
 export interface ReferenceInverter {
@@ -42,7 +43,7 @@ export function proposeWidths(
     if (!chainDepths(stage, depth))
       notes.push(`${output}: too many paths to enumerate; widths left as drawn.`);
   }
-  const widths: Record<string, { from: number; to: number }> = {};
+  const widths = nameRecord<{ from: number; to: number }>();
   const devices = netlist.devices.map((d): Device => {
     const n = depth.get(d.name);
     if (n === undefined || (d.kind !== 'nmos' && d.kind !== 'pmos')) return d;

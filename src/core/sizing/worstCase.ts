@@ -1,6 +1,7 @@
 import { evaluate, type Direction, type Evaluation } from './rcNetwork.ts';
 import type { Stage } from './stage.ts';
 import type { ControlValue, DelayEstimate, NetworkDrive } from './types.ts';
+import { nameRecord } from '../model/records.ts';
 
 /**
  * Exact enumeration bound: a stage with more independent gate signals than this is not searched
@@ -20,7 +21,7 @@ export class ControlLimitError extends Error {
 }
 
 function controlValues(stage: Stage, code: number): Record<string, ControlValue> {
-  const values: Record<string, ControlValue> = {};
+  const values = nameRecord<ControlValue>();
   stage.controls.forEach((net, k) => (values[net] = (code >> k) & 1 ? '1' : '0'));
   return values;
 }

@@ -87,7 +87,28 @@ function setConduction(frame: Frame, snapVolts: Float64Array, sourceVolts: Float
     sourceEndVolts[j] = vs;
     if (state === MAYBE || (sourceEnd >= 0 && vs !== vs)) unknown = true;
   }
-  return unknown;
+  const self = topo.cccSelfGated;
+  return self.start[frame.k] === self.start[frame.k + 1] ? unknown : trySelfGatedOn(frame);
+}
+
+/**
+ * A self-gated element is tried as on whatever its gate reads (the trial switches it off when it is
+ * not forward-biased), so it is never an unknown. Returns whether anything else still is. Kept out of
+ * setConduction's loop: few components have one.
+ */
+function trySelfGatedOn(frame: Frame): boolean {
+  const { start, items } = frame.topo.cccSelfGated;
+  for (let p = start[frame.k]; p < start[frame.k + 1]; p++) {
+    frame.on[items[p]] = 1;
+    frame.maybe[items[p]] = 0;
+  }
+  for (let j = 0; j < frame.elemCount; j++) {
+    if (frame.maybe[j] || Number.isNaN(frame.sourceEndVolts[j])) {
+      const e = frame.element(j);
+      if (frame.maybe[j] || frame.topo.elemLocalA[e] < 0 || frame.topo.elemLocalB[e] < 0) return true;
+    }
+  }
+  return false;
 }
 
 /** The unknowns setConduction found: maybe devices and ties to inputs driven to X. */

@@ -34,6 +34,9 @@ export class Frame {
   readonly srcNext: Int32Array;
   /** Per component root: bit 1 when a conducting NMOS is inside, bit 2 for a PMOS. */
   readonly kinds: Uint8Array;
+  /** Per local net: name rank of its limiter while the limiters are found (bottleneck.ts). */
+  readonly labelRank: Int32Array;
+  private ranks: Int32Array | null = null;
 
   k = 0;
   netStart = 0;
@@ -68,6 +71,20 @@ export class Frame {
     this.srcHead = new Int32Array(maxNets);
     this.srcNext = new Int32Array(maxElems);
     this.kinds = new Uint8Array(maxNets);
+    this.labelRank = new Int32Array(maxNets);
+  }
+
+  /** Per global element: its position when elements are sorted by device name (built on first use). */
+  nameRanks(): Int32Array {
+    if (this.ranks === null) {
+      const { c } = this;
+      const name = (e: number): string => c.netlist.devices[c.chDevice[e]].name;
+      const order = Array.from({ length: c.chCount }, (_, e) => e);
+      order.sort((x, y) => (name(x) < name(y) ? -1 : name(x) > name(y) ? 1 : x - y));
+      this.ranks = new Int32Array(c.chCount);
+      order.forEach((e, r) => (this.ranks![e] = r));
+    }
+    return this.ranks;
   }
 
   select(k: number): void {

@@ -13,8 +13,15 @@ export const FLAG_CHARGE_SHARED = 4;
 export const FLAG_OSCILLATING = 8;
 /** The value depends on maybe-conducting devices (gates at X). */
 export const FLAG_MAYBE = 16;
-/** More maybe-conducting devices than the exact bound: set to X conservatively. */
+/** More unknowns than an exact bound (maybe devices, undecided feedback nets): set to X conservatively. */
 export const FLAG_BOUND = 32;
+/**
+ * A feedback group has several steady states that disagree on this net (stored state: a latch or
+ * memory cell holding its value, or, with FLAG_OSCILLATING, a race): it is X.
+ */
+export const FLAG_STATES = 64;
+/** The nodal solve of this net's group was too ill-conditioned to trust: set to X. */
+export const FLAG_ILL_CONDITIONED = 128;
 
 /** Per channel element conduction codes. */
 export const OFF = 0;

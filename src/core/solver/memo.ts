@@ -50,7 +50,8 @@ export class OutcomeMemo {
       };
       for (let i = cccElements.start[k]; i < cccElements.start[k + 1]; i++) {
         const e = cccElements.items[i];
-        if (c.chGate[e] >= 0) add(c.chGate[e]);
+        // A self-gated element's gate is one of the component's own nets, which it solves itself.
+        if (c.chGate[e] >= 0 && topology.selfGate[e] === 0) add(c.chGate[e]);
         if (topology.isSource[c.chA[e]]) add(c.chA[e]);
         if (topology.isSource[c.chB[e]]) add(c.chB[e]);
       }

@@ -1,5 +1,6 @@
 import type { CompiledNetlist } from '../compile/compile.ts';
 import { evaluateCcc, type EvaluationTarget } from './evaluate.ts';
+import { FeedbackSearch } from './feedback.ts';
 import { Frame } from './frame.ts';
 import { FLAG_OSCILLATING } from './levels.ts';
 import { OutcomeMemo } from './memo.ts';
@@ -34,6 +35,7 @@ export class Schedule {
   readonly sourceNets: Int32Array;
   readonly sourceTies: Int32Array;
   private readonly memo: OutcomeMemo;
+  private readonly feedback: FeedbackSearch;
   private readonly saved: Float64Array;
   private readonly savedDriven: Uint8Array;
 
@@ -72,6 +74,8 @@ export class Schedule {
       if (topology.isSource[c.chA[e]] || topology.isSource[c.chB[e]]) ties.push(e);
     this.sourceTies = Int32Array.from(ties);
     this.memo = new OutcomeMemo(c, topology);
+    // The search evaluates a guess into `next` and copies it out before the Jacobi rounds use it again.
+    this.feedback = new FeedbackSearch(c, topology, this.frame, this.sccOf, this.next);
     this.saved = new Float64Array(c.netCount);
     this.savedDriven = new Uint8Array(c.netCount);
   }
@@ -167,8 +171,14 @@ export class Schedule {
    * Jacobi rounds over one feedback group: every dirty component is evaluated against the same
    * snapshot, then all results are committed at once, so the outcome never depends on the order of
    * components (a race shows up as a no-steady-state result rather than a winner picked by order).
+   * Feedback nets the rounds leave at X are then resolved by the steady-state search (feedback.ts).
    */
   private settle(s: number, members: number[], sourceVolts: Float64Array, state: NetState): void {
+    this.jacobi(s, members, sourceVolts, state);
+    this.feedback.resolve(s, members, sourceVolts, state, () => this.jacobi(s, members, sourceVolts, state));
+  }
+
+  private jacobi(s: number, members: number[], sourceVolts: Float64Array, state: NetState): void {
     const { topology, next } = this;
     const frozen = new Set<number>();
     const limit = SETTLE_ROUNDS_BASE + SETTLE_ROUNDS_PER_COMPONENT * members.length;

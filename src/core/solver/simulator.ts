@@ -6,6 +6,7 @@ import {
   FLAG_CHARGE_SHARED,
   FLAG_MAYBE,
   FLAG_OSCILLATING,
+  FLAG_STATES,
   LEVEL_0,
   LEVEL_1,
   LEVEL_X,
@@ -13,6 +14,7 @@ import {
   ON,
 } from './levels.ts';
 import { sameVolts, Schedule, type NetState } from './schedule.ts';
+import { clampConduction, GATE_TIED_A } from './selfGated.ts';
 import type { Topology } from './topology.ts';
 
 export { SETTLE_ROUNDS_BASE, SETTLE_ROUNDS_PER_COMPONENT } from './schedule.ts';
@@ -162,7 +164,8 @@ export class Simulator {
   /**
    * What an incremental solve must re-evaluate: components touched by a source whose voltage changed
    * and, when carrying state, those whose last result was an event rather than a state (charge just
-   * shared, a loop that did not settle, a value made unknown by maybe devices), since evaluating them
+   * shared, a loop that did not settle, a value made unknown by maybe devices or by several steady
+   * states), since evaluating them
    * again from the state they left need not repeat it.
    */
   private markChanged(
@@ -178,17 +181,27 @@ export class Simulator {
     if (fresh) return;
     const { cccOfNet } = schedule.topology;
     for (let n = 0; n < base.flags.length; n++) {
-      if (cccOfNet[n] >= 0 && base.flags[n] & (FLAG_CHARGE_SHARED | FLAG_OSCILLATING | FLAG_MAYBE))
+      if (
+        cccOfNet[n] >= 0 &&
+        base.flags[n] & (FLAG_CHARGE_SHARED | FLAG_OSCILLATING | FLAG_MAYBE | FLAG_STATES)
+      )
         dirty[cccOfNet[n]] = 1;
     }
   }
 
-  /** Conduction of every element from its gate's voltage (a floating gate reads its stored charge). */
-  private conductionAll(volts: Float64Array, into: Uint8Array): Uint8Array {
-    const { chKind, chGate, tech } = this.compiled;
+  /**
+   * Conduction of every element from its gate's voltage (a floating gate reads its stored charge); a
+   * self-gated element conducts when it is forward-biased.
+   */
+  private conductionAll(topology: Topology, volts: Float64Array, into: Uint8Array): Uint8Array {
+    const { chKind, chGate, chA, chB, tech } = this.compiled;
     for (let e = 0; e < into.length; e++) {
       const gate = chGate[e];
       into[e] = conductionFor(chKind[e], gate >= 0 ? volts[gate] : NaN, tech.vil, tech.vih);
+    }
+    for (const e of topology.selfGatedElements) {
+      const [gateEnd, other] = topology.selfGate[e] === GATE_TIED_A ? [chA[e], chB[e]] : [chB[e], chA[e]];
+      into[e] = clampConduction(chKind[e], volts[gateEnd], volts[other]);
     }
     return into;
   }
@@ -241,7 +254,11 @@ export class Simulator {
       levels,
       flags,
       limiter: state.limiter,
-      conduction: this.conductionAll(volts, recycled ? recycled.conduction : new Uint8Array(c.chCount)),
+      conduction: this.conductionAll(
+        topology,
+        volts,
+        recycled ? recycled.conduction : new Uint8Array(c.chCount),
+      ),
       chCurrent,
       sourceOut,
       paths: currentPaths(c, topology.isSource, schedule.sourceNets, volts, chCurrent, sourceOut),

@@ -1,5 +1,6 @@
 import type { CompiledNetlist } from '../compile/compile.ts';
 import { csr, csrFrom, type Csr } from '../compile/csr.ts';
+import { GATE_NOT_TIED, selfGateEnds } from './selfGated.ts';
 
 /**
  * The static structure the scheduler walks, for one choice of which nets are sources (rails and
@@ -24,6 +25,12 @@ export interface Topology {
   readonly elemLocal: Int32Array;
   /** Elements joining two sources directly. */
   readonly bridges: Int32Array;
+  /** Per element: which channel end its gate is tied to (GATE_TIED_A/B), when not a source. */
+  readonly selfGate: Uint8Array;
+  /** Per CCC: local indices of its self-gated elements (usually none). */
+  readonly cccSelfGated: Csr;
+  /** Every self-gated element inside a CCC, by global index. */
+  readonly selfGatedElements: Int32Array;
   /** Strongly connected groups of CCCs (feedback), in evaluation order: a group only gates later ones. */
   readonly sccOrder: Csr;
   /** CCCs whose elements are gated by a net of this CCC (may include itself). */
@@ -102,7 +109,17 @@ export function buildTopology(c: CompiledNetlist, undriven: ReadonlySet<number> 
     }
   }
 
-  const dependents = cccDependencies(c, cccOfNet, cccElements, cccCount);
+  const selfGate = selfGateEnds(c, isSource);
+  const selfRows: number[] = [];
+  const selfItems: number[] = [];
+  const selfElements: number[] = [];
+  for (let e = 0; e < c.chCount; e++) {
+    if (selfGate[e] === GATE_NOT_TIED || elemLocal[e] < 0) continue;
+    selfRows.push(cccOfNet[c.chA[e]] >= 0 ? cccOfNet[c.chA[e]] : cccOfNet[c.chB[e]]);
+    selfItems.push(elemLocal[e]);
+    selfElements.push(e);
+  }
+  const dependents = cccDependencies(c, cccOfNet, cccElements, cccCount, selfGate);
   return {
     isSource,
     cccOfNet,
@@ -114,19 +131,33 @@ export function buildTopology(c: CompiledNetlist, undriven: ReadonlySet<number> 
     elemLocalB,
     elemLocal,
     bridges: Int32Array.from(bridges),
+    selfGate,
+    cccSelfGated: csrFrom(cccCount, selfRows, selfItems),
+    selfGatedElements: Int32Array.from(selfElements),
     sccOrder: stronglyConnectedOrder(cccCount, dependents),
     cccDependents: dependents,
   };
 }
 
-function cccDependencies(c: CompiledNetlist, cccOfNet: Int32Array, elements: Csr, count: number): Csr {
+/**
+ * Which CCCs gate which. A self-gated element is left out: its conduction follows from its own
+ * channel nets within the evaluation (see selfGated.ts), not from the previous round.
+ */
+function cccDependencies(
+  c: CompiledNetlist,
+  cccOfNet: Int32Array,
+  elements: Csr,
+  count: number,
+  selfGate: Uint8Array,
+): Csr {
   const rows: number[] = [];
   const items: number[] = [];
   // lastFor[j] === k when "j gates k" is already listed; k rises, so each row's items come sorted.
   const lastFor = new Int32Array(count).fill(-1);
   for (let k = 0; k < count; k++) {
     for (let i = elements.start[k]; i < elements.start[k + 1]; i++) {
-      const g = c.chGate[elements.items[i]];
+      const e = elements.items[i];
+      const g = selfGate[e] === GATE_NOT_TIED ? c.chGate[e] : -1;
       const j = g < 0 ? -1 : cccOfNet[g];
       if (j < 0 || lastFor[j] === k) continue;
       lastFor[j] = k;

@@ -1,11 +1,21 @@
 import { NMOS, PMOS } from '../compile/compile.ts';
 import { bottleneck } from './bottleneck.ts';
 import type { Frame } from './frame.ts';
-import { classify, FLAG_CHARGE_SHARED, FLAG_CONTENTION, FLAG_DEGRADED, LEVEL_X } from './levels.ts';
+import {
+  classify,
+  FLAG_CHARGE_SHARED,
+  FLAG_CONTENTION,
+  FLAG_DEGRADED,
+  FLAG_ILL_CONDITIONED,
+  LEVEL_X,
+} from './levels.ts';
 import { solveNodal } from './nodal.ts';
+import { conductsForward, GATE_TIED_A } from './selfGated.ts';
 
 const HAS_NMOS = 1;
 const HAS_PMOS = 2;
+/** A self-gated element is inside: levels need the path search in both directions. */
+const HAS_SELF = 4;
 
 /** Smallest capacitance a net is given for charge sharing, so capacitance-free nets still average. */
 const MIN_NET_CAP = 1e-18;
@@ -20,6 +30,36 @@ const CHARGE_SHARE_FRACTION = 0.1;
  * from `snapVolts` (global, the previous round) and writes the frame's output arrays.
  */
 export function solveTrial(frame: Frame, snapVolts: Float64Array): void {
+  const { start, items } = frame.topo.cccSelfGated;
+  const first = start[frame.k];
+  const end = start[frame.k + 1];
+  for (let p = first; p < end; p++) frame.on[items[p]] = 1;
+  solveGroups(frame, snapVolts);
+  // Self-gated elements left without forward voltage are switched off and the trial solved again;
+  // every pass switches at least one off, so this ends.
+  while (first < end && switchOffReverse(frame, first, end)) solveGroups(frame, snapVolts);
+}
+
+/** Switches off the self-gated elements of the trial that are not forward-biased; true if any. */
+function switchOffReverse(frame: Frame, first: number, end: number): boolean {
+  const { topo, c } = frame;
+  let changed = false;
+  for (let p = first; p < end; p++) {
+    const j = topo.cccSelfGated.items[p];
+    if (!frame.on[j]) continue;
+    const e = frame.element(j);
+    const tiedA = topo.selfGate[e] === GATE_TIED_A;
+    const other = tiedA ? topo.elemLocalB[e] : topo.elemLocalA[e];
+    const vGate = frame.volts[tiedA ? topo.elemLocalA[e] : topo.elemLocalB[e]];
+    const vOther = other >= 0 ? frame.volts[other] : frame.sourceEndVolts[j];
+    if (conductsForward(c.chKind[e], vGate, vOther)) continue;
+    frame.on[j] = 0;
+    changed = true;
+  }
+  return changed;
+}
+
+function solveGroups(frame: Frame, snapVolts: Float64Array): void {
   groupNets(frame);
   frame.current.fill(0, 0, frame.elemCount);
   for (let i = 0; i < frame.netCount; i++) {
@@ -61,6 +101,14 @@ function groupNets(frame: Frame): void {
     if (a >= 0 && b >= 0) continue;
     frame.srcNext[j] = frame.srcHead[r];
     frame.srcHead[r] = j;
+  }
+  const self = topo.cccSelfGated;
+  for (let p = self.start[frame.k]; p < self.start[frame.k + 1]; p++) {
+    const j = self.items[p];
+    if (!frame.on[j]) continue;
+    const e = frame.element(j);
+    const a = topo.elemLocalA[e];
+    frame.kinds[parent[a >= 0 ? a : topo.elemLocalB[e]]] |= HAS_SELF;
   }
 }
 
@@ -109,7 +157,7 @@ function shareCharge(frame: Frame, root: number, snapVolts: Float64Array): void 
  */
 function driveSingle(frame: Frame, root: number, snapVolts: Float64Array, vs: number): void {
   const high = vs >= frame.c.tech.vdd / 2;
-  if ((frame.kinds[root] & (high ? HAS_NMOS : HAS_PMOS)) === 0) {
+  if ((frame.kinds[root] & ((high ? HAS_NMOS : HAS_PMOS) | HAS_SELF)) === 0) {
     for (let i = frame.head[root]; i >= 0; i = frame.next[i]) {
       frame.volts[i] = vs;
       frame.driven[i] = 1;
@@ -121,9 +169,12 @@ function driveSingle(frame: Frame, root: number, snapVolts: Float64Array, vs: nu
   bottleneck(frame, root, snapVolts, high);
   for (let i = frame.head[root]; i >= 0; i = frame.next[i]) {
     const v = frame.best[i];
-    frame.volts[i] = v;
-    frame.driven[i] = 1;
-    frame.flags[i] = Math.abs(v - vs) > 1e-9 ? FLAG_DEGRADED : 0;
+    // Unreached: only a self-gated element's blocked direction leads here, and the trial switches it
+    // off and solves again.
+    const reached = Number.isFinite(v);
+    frame.volts[i] = reached ? v : NaN;
+    frame.driven[i] = reached ? 1 : 0;
+    frame.flags[i] = reached && Math.abs(v - vs) > 1e-9 ? FLAG_DEGRADED : 0;
   }
 }
 
@@ -134,7 +185,7 @@ function driveSingle(frame: Frame, root: number, snapVolts: Float64Array, vs: nu
  */
 function driveMixed(frame: Frame, root: number, snapVolts: Float64Array): void {
   const { c } = frame;
-  solveNodal(frame, root);
+  if (!solveNodal(frame, root)) return markIllConditioned(frame, root);
   const resistive = new Map<number, number>();
   for (let i = frame.head[root]; i >= 0; i = frame.next[i]) resistive.set(i, frame.volts[i]);
   const highLimit = new Map<number, [number, number]>();
@@ -147,13 +198,25 @@ function driveMixed(frame: Frame, root: number, snapVolts: Float64Array): void {
     let v = resistive.get(i) as number;
     let limiter = -1;
     const [cap, capBy] = highLimit.get(i) ?? [Infinity, -1];
-    if (v > cap) [v, limiter] = [cap, capBy];
-    if (hasLow && v < frame.best[i]) [v, limiter] = [frame.best[i], frame.limiter[i]];
+    // A limit is infinite where a self-gated element blocks every path from that side.
+    if (Number.isFinite(cap) && v > cap) [v, limiter] = [cap, capBy];
+    const floor = frame.best[i];
+    if (hasLow && Number.isFinite(floor) && v < floor) [v, limiter] = [floor, frame.limiter[i]];
     frame.volts[i] = v;
     frame.driven[i] = 1;
     frame.limiter[i] = limiter;
     let flags = limiter >= 0 ? FLAG_DEGRADED : 0;
     if (classify(v, c.tech.vil, c.tech.vih) === LEVEL_X) flags |= FLAG_CONTENTION;
     frame.flags[i] = flags;
+  }
+}
+
+/** A group the nodal solve could not trust: its nets are X, flagged, and carry no current. */
+function markIllConditioned(frame: Frame, root: number): void {
+  for (let i = frame.head[root]; i >= 0; i = frame.next[i]) {
+    frame.volts[i] = NaN;
+    frame.driven[i] = 1;
+    frame.flags[i] = FLAG_ILL_CONDITIONED;
+    frame.limiter[i] = -1;
   }
 }

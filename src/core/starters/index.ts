@@ -84,7 +84,8 @@ export const STARTERS: readonly StarterCell[] = [
     'Cross-coupled NAND latch',
     'Active-low set and reset; holds when both are 1.',
     seq.nandLatch,
-    {},
+    // An output named in its own expected function is the value it held (docs/semantics.md §4).
+    { Q: '!Sb | Rb & Q', Qb: '!Rb | Sb & Qb' },
     [
       {
         name: 'set, hold, reset, hold',
@@ -97,7 +98,7 @@ export const STARTERS: readonly StarterCell[] = [
     'Transmission-gate D latch',
     'Transparent while CLK = 1, holds while CLK = 0.',
     seq.tgDLatch,
-    {},
+    { Q: 'CLK ? D : Q' },
     [
       {
         name: 'capture 1, hold, capture 0, hold',
@@ -110,7 +111,7 @@ export const STARTERS: readonly StarterCell[] = [
     'Six-transistor memory cell',
     'Write through the bit lines; read with them precharged and left at Z.',
     seq.sixTransistorCell,
-    {},
+    { Q: 'WL & (BL ^ BLB) ? BL : Q', Qb: 'WL & (BL ^ BLB) ? BLB : Qb' },
     [
       {
         name: 'write 1, write 0, read',
@@ -130,7 +131,7 @@ export const STARTERS: readonly StarterCell[] = [
     'Precharged AND2',
     'Dynamic AND: precharge at CLK = 0, evaluate at CLK = 1.',
     seq.prechargedAnd2,
-    {},
+    { Y: 'CLK & (A & B | Y)' },
     [
       {
         name: 'discharge, precharge, evaluate with B = 0 (charge sharing)',

@@ -8,10 +8,13 @@ export interface ExpressionProblem {
   readonly position: number;
 }
 
-/** Null when the text parses over these inputs; otherwise the first problem and where it is. */
-export function expressionProblem(text: string, inputs: readonly string[]): ExpressionProblem | null {
+/**
+ * Null when the text parses over these names (a cell's inputs and outputs: `expressionNames`);
+ * otherwise the first problem and where it is.
+ */
+export function expressionProblem(text: string, names: readonly string[]): ExpressionProblem | null {
   try {
-    parseExpression(text, inputs);
+    parseExpression(text, names);
     return null;
   } catch (error) {
     if (!(error instanceof ExpressionError)) throw error;

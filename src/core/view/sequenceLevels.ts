@@ -7,12 +7,13 @@ import type { SolveObserver } from '../analysis/pass.ts';
 import { FLAG_DEGRADED, levelName } from '../solver/levels.ts';
 import type { SolveResult } from '../solver/simulator.ts';
 import type { StepLevel } from './levelStrip.ts';
+import { nameRecord } from '../model/records.ts';
 
 export class StepLevelRecorder implements SolveObserver {
   readonly steps: Record<string, StepLevel>[] = [];
 
   add(result: SolveResult): void {
-    const levels: Record<string, StepLevel> = {};
+    const levels = nameRecord<StepLevel>();
     result.compiled.netNames.forEach((name, n) => {
       levels[name] = {
         level: levelName(result.levels[n]),

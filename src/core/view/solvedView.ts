@@ -9,6 +9,7 @@ import {
   FLAG_DEGRADED,
   FLAG_MAYBE,
   FLAG_OSCILLATING,
+  FLAG_STATES,
   MAYBE,
   ON,
   levelName,
@@ -61,6 +62,7 @@ export function netState(result: SolvedArrays, net: number): NetState {
     contention: (flags & FLAG_CONTENTION) !== 0,
     chargeShared: (flags & FLAG_CHARGE_SHARED) !== 0,
     oscillating: (flags & FLAG_OSCILLATING) !== 0,
+    stored: (flags & FLAG_STATES) !== 0,
     maybe: (flags & FLAG_MAYBE) !== 0,
   };
 }

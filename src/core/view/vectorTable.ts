@@ -26,6 +26,7 @@ export const FINDING_ORDER: readonly FindingKind[] = [
   'contention',
   'no-steady-state',
   'mismatch',
+  'unknown',
   'floating',
   'static-current',
   'degraded',

@@ -13,6 +13,8 @@ export interface NetState {
   readonly contention: boolean;
   readonly chargeShared: boolean;
   readonly oscillating: boolean;
+  /** Several steady states disagree on it: it holds stored state (a latch in a sweep), shown as X. */
+  readonly stored: boolean;
   /** The level holds only under some on/off choice of maybe-conducting devices. */
   readonly maybe: boolean;
 }
@@ -78,12 +80,14 @@ export function lookOf(state: Pick<NetState, 'level' | 'degraded'>): Look {
 /** Static current: an ember trace, distinct from every level colour, always with arrows and its value. */
 export const STATIC_CURRENT_COLOUR = '#ff5a1f';
 
-export type ProblemMark = 'floating' | 'contention' | 'degraded' | 'charge-shared' | 'oscillating';
+export type ProblemMark =
+  'floating' | 'contention' | 'degraded' | 'charge-shared' | 'oscillating' | 'stored-state';
 
 /** Problem badges for a net, most serious first; an empty list for a clean level. */
 export function problemMarks(state: NetState): ProblemMark[] {
   const marks: ProblemMark[] = [];
   if (state.oscillating) marks.push('oscillating');
+  else if (state.stored) marks.push('stored-state');
   if (state.contention) marks.push('contention');
   if (state.level === 'Z') marks.push('floating');
   if (state.degraded) marks.push('degraded');
@@ -94,6 +98,7 @@ export function problemMarks(state: NetState): ProblemMark[] {
 /** Badge glyphs: distinct shapes, readable without colour. */
 export const PROBLEM_GLYPHS: Readonly<Record<ProblemMark, string>> = {
   oscillating: '∿',
+  'stored-state': '‖',
   contention: '⚔',
   floating: '◌',
   degraded: '▽',

@@ -25,7 +25,8 @@ describe.each(PART_KINDS.map((k) => [k] as [PartKind]))('part kind %s', (kind) =
   });
 
   it('has one field per property, each with a default its own check accepts', () => {
-    const defaults: Record<string, number> = { ...spec.defaults };
+    // Defaults are numbers only: text properties (a model card name) have none.
+    const defaults = { ...spec.defaults } as Record<string, number>;
     expect(spec.fields.map((f) => f.key)).toEqual(Object.keys(defaults));
     for (const f of spec.fields) expect(f.quantity.check(defaults[f.key]!)).toBeNull();
   });

@@ -38,9 +38,13 @@ type PartOfSpec<S> = S extends PartSpec<infer P> ? P : never;
 /** A part on the sheet: one record type per kind, told apart by `kind`. */
 export type SheetPart = PartOfSpec<(typeof SPECS)[number]>;
 export type PartKind = SheetPart['kind'];
-/** The numeric properties of any kind ('w', 'l', 'ohms', …), in model units. */
+/** The properties of any kind ('w', 'l', 'ohms', …, and the text 'model'). */
 export type PartPropKey = PropKey<SheetPart>;
-export type PartProps = Readonly<Partial<Record<PartPropKey, number>>>;
+/** Text properties (see `PartSpec.textProps`); every other property is a number in model units. */
+export type TextPropKey = 'model';
+export type PartProps = Readonly<
+  Partial<Record<Exclude<PartPropKey, TextPropKey>, number> & Record<TextPropKey, string>>
+>;
 
 /** A spec seen over every kind. Each spec's functions are only ever given parts of its own kind. */
 export type AnyPartSpec = PartSpec<SheetPart>;
@@ -74,10 +78,14 @@ export function isDevicePart(kind: PartKind): boolean {
  */
 export function makeSheetPart(kind: PartKind, placement: PartPlacement, props: PartProps = {}): SheetPart {
   const spec = partSpec(kind);
-  const values: Record<string, number> = { ...spec.defaults };
+  const values: Record<string, number | string> = { ...spec.defaults };
   for (const field of spec.fields) {
-    const v = props[field.key];
-    if (v !== undefined) values[field.key] = v;
+    const v: unknown = Reflect.get(props, field.key);
+    if (typeof v === 'number') values[field.key] = v;
+  }
+  for (const key of spec.textProps ?? []) {
+    const v: unknown = Reflect.get(props, key);
+    if (typeof v === 'string' && v !== '') values[key] = v;
   }
   const { id, name, x, y, rotation, mirror } = placement;
   return { id, kind, name, x, y, rotation, mirror, ...values } as SheetPart;

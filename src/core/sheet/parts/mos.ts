@@ -13,6 +13,8 @@ export interface MosPart<K extends MosKind = MosKind> extends PartPlacement {
   /** Channel width and length, µm. */
   readonly w: number;
   readonly l: number;
+  /** The model card an imported device named (`MosDevice.model`); kept, never edited. */
+  readonly model?: string;
 }
 
 const BODY: readonly Primitive[] = [
@@ -69,6 +71,7 @@ export function mosSpec<K extends MosKind>(kind: K): PartSpec<MosPart<K>> {
       { key: 'w', label: 'W', quantity: MICROMETRES },
       { key: 'l', label: 'L', quantity: MICROMETRES },
     ],
+    textProps: ['model'],
     defaults: { w: nmos ? 1 : 2, l: 0.25 },
     valueLabel: sizeLabel,
     texts: nameAndValue({ x: 0.6, y: -0.9 }, sizeLabel),
@@ -82,8 +85,9 @@ export function mosSpec<K extends MosKind>(kind: K): PartSpec<MosPart<K>> {
         source: netOf('source'),
         w: part.w,
         l: part.l,
+        ...(part.model === undefined ? {} : { model: part.model }),
       }),
-      fromDevice: (d) => ({ w: d.w, l: d.l }),
+      fromDevice: (d) => ({ w: d.w, l: d.l, ...(d.model === undefined ? {} : { model: d.model }) }),
     }),
   };
 }

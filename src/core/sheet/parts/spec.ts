@@ -23,7 +23,7 @@ export interface PinSpec extends Point {
 /** The smallest shape of a part record: a placement and a kind. */
 export type AnyPart = PartPlacement & { readonly kind: string };
 
-/** A part's own properties: everything but its placement and kind (all numbers, in model units). */
+/** A part's own properties: everything but its placement and kind (numbers in model units, and text). */
 export type PartProps<P> = P extends unknown ? Omit<P, keyof PartPlacement | 'kind'> : never;
 export type PropKey<P> = P extends unknown ? Exclude<keyof P, keyof PartPlacement | 'kind'> : never;
 
@@ -85,6 +85,11 @@ export interface PartSpec<P extends AnyPart> {
   readonly symbol: readonly Primitive[];
   /** The editable properties beyond the name, in form order. */
   readonly fields: readonly FieldSpec<PropKey<P> & string>[];
+  /**
+   * Text properties the part keeps as they came and never edits (a transistor's model card name,
+   * from an imported netlist); absent when the part has none.
+   */
+  readonly textProps?: readonly (PropKey<P> & string)[];
   readonly defaults: PartProps<P>;
   /** The part's size as one short line ("2/0.25", "10 kΩ"), '' when it has none. */
   readonly valueLabel: (part: P) => string;

@@ -1,0 +1,124 @@
+/**
+ * Fuzzing the whole command with mutated netlists, design files and share links (fast-check, fixed
+ * seeds): every case exits 0, 1 or 2; on 2 the one JSON document names the file and a line or a
+ * field; nothing ends in an internal error; and whatever loads exports to SPICE and reads back as
+ * the same netlist. Robustness of our own tool: no published source applies.
+ * `RAILWISE_FUZZ_RUNS=5000` runs the longer campaign by hand and prints the tally.
+ */
+import { readFileSync } from 'node:fs';
+import { isDeepStrictEqual } from 'node:util';
+import fc from 'fast-check';
+import { afterAll, describe, expect, it } from 'vitest';
+import { designFromFragment, encodeDesignFragment, ShareLinkError } from '../../src/app/shareLink.ts';
+import { DesignFileError, serializeDesign } from '../../src/core/format/designFile.ts';
+import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
+import { cellsFromText } from '../../src/core/netlist-io/cellFiles.ts';
+import { exportSpice } from '../../src/core/netlist-io/spiceExport.ts';
+import { importSpice } from '../../src/core/netlist-io/spiceImport.ts';
+import { starterById } from '../../src/core/starters/index.ts';
+import { designOfCell } from '../../src/core/hierarchy/cellDesign.ts';
+import { hostileNetlistArb } from '../netlist-io/arbitraries.ts';
+import { checkCase, fuzzFile, mutation, removeFuzzFiles, Tally, type Case } from './fuzzHarness.ts';
+
+const RUNS = Number(process.env['RAILWISE_FUZZ_RUNS'] ?? 40);
+const campaign = process.env['RAILWISE_FUZZ_RUNS'] !== undefined;
+afterAll(removeFuzzFiles);
+
+const read = (path: string): string => readFileSync(path, 'utf8');
+const NETLISTS = [
+  'public/examples/tidewater-cells.sp',
+  'public/examples/buffer-x2.sp',
+  'public/examples/nand2-miswired.sp',
+  'tests/cli/fixtures/divider.sp',
+  'tests/cli/fixtures/tg.sp',
+].map(read);
+const hostile = fc.sample(hostileNetlistArb, { seed: 42, numRuns: 5 });
+NETLISTS.push(
+  ...hostile.map((n) =>
+    exportSpice(n, DEFAULT_TECHNOLOGY, { expectations: { [n.outputs[0] ?? 'Y']: '!A' } }),
+  ),
+);
+const DESIGNS = [
+  'public/examples/lamp-inverter.railwise.json',
+  'public/examples/beacon-sr-latch.railwise.json',
+].map(read);
+DESIGNS.push(serializeDesign(designOfCell({ ...starterById('nand2')!.design, netlist: hostile[0]! })));
+
+/** Loads what the text holds and checks that each readable cell exports and reads back unchanged. */
+function exportsBack(text: string, file: string): Case {
+  for (const c of cellsFromText(text, file).cells) {
+    if (!('job' in c)) continue;
+    const { netlist, expectations, technology } = c.job;
+    // The cell's own technology: it holds the model cards its transistors name.
+    const again = importSpice(exportSpice(netlist, technology, { expectations }), 'again.sp');
+    const back = again.cells[0];
+    if (again.cells.length !== 1 || !isDeepStrictEqual(back?.netlist, netlist))
+      return { outcome: 'bad', why: `export → import changed ${c.job.cell}` };
+  }
+  return { outcome: 'clean', why: '' };
+}
+
+function report(name: string, tally: Tally): void {
+  if (campaign)
+    console.log(
+      `${name}: ${tally.runs} runs, ${tally.counts.clean} clean, ${tally.counts.refusal} clear refusals, ${tally.counts.bad} bad`,
+      tally.bad,
+    );
+  expect(tally.bad).toEqual([]);
+}
+
+const mutated = (seeds: readonly string[]) =>
+  fc
+    .tuple(fc.nat(seeds.length - 1), fc.array(mutation, { minLength: 1, maxLength: 4 }))
+    .map(([i, ms]) => ms.reduce((t, m) => m(t), seeds[i] as string));
+
+describe('fuzzing the command line', () => {
+  /** Checks each mutated file, and each clean one's export → import. */
+  async function fuzzFiles(seeds: readonly string[], extension: string, seed: number): Promise<Tally> {
+    const tally = new Tally();
+    await fc.assert(
+      fc.asyncProperty(mutated(seeds), fc.boolean(), async (text, power) => {
+        const file = fuzzFile(extension, text);
+        const result = await checkCase(file, ...(power ? ['--power', '--sizing'] : []));
+        tally.add(result, file);
+        if (result.outcome === 'clean') tally.add(exportsBack(text, file), `${file} (export)`);
+      }),
+      { seed, numRuns: RUNS },
+    );
+    return tally;
+  }
+
+  it('mutated netlists', async () => {
+    report('netlists', await fuzzFiles(NETLISTS, '.sp', 1601));
+  }, 600_000);
+
+  it('mutated design files', async () => {
+    report('design files', await fuzzFiles(DESIGNS, '.json', 1602));
+  }, 600_000);
+
+  it('mutated share links', async () => {
+    const tally = new Tally();
+    const links = await Promise.all(DESIGNS.map(encodeDesignFragment));
+    await fc.assert(
+      fc.asyncProperty(fc.oneof(mutated(links), mutated(DESIGNS)), async (text) => {
+        const fragment = text.startsWith('#design=')
+          ? text
+          : await encodeDesignFragment(text).catch(() => text);
+        tally.add(await linkCase(fragment), fragment.slice(0, 60));
+      }),
+      { seed: 1603, numRuns: RUNS },
+    );
+    report('share links', tally);
+  }, 600_000);
+});
+
+async function linkCase(fragment: string): Promise<Case> {
+  try {
+    await designFromFragment(fragment);
+    return { outcome: 'clean', why: '' };
+  } catch (e) {
+    const located =
+      e instanceof DesignFileError ? e.message.startsWith('shared link') : e instanceof ShareLinkError;
+    return located ? { outcome: 'refusal', why: '' } : { outcome: 'bad', why: String(e) };
+  }
+}
