@@ -113,7 +113,7 @@ export const netlistSchema = z.object({
  */
 const deviceModelSchema = z.object({
   type: z.enum(['nmos', 'pmos']),
-  vt0: quantity({ min: -10, max: 10, words: '−10 to 10 V' }).optional(),
+  vt0: quantity(RANGES.threshold).optional(),
   kp: quantity(RANGES.transconductance).optional(),
   gamma: quantity(RANGES.bodyEffect).optional(),
   phi: quantity(RANGES.surfacePotential).optional(),
