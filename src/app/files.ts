@@ -43,18 +43,16 @@ export interface SpiceDesign {
 /** Reads a SPICE text into one design of all its cells; throws when no cell at all can be read. */
 export function designFromSpice(text: string, fileName: string): SpiceDesign {
   const imported = importSpice(text, fileName);
+  // A cell only the checks cannot flatten is kept; its check says why.
   const failed = imported.failed.map((f) => `${f.name} (${f.error.message})`);
-  if (imported.cells.length === 0) {
+  const name = fileName.replace(/^.*[\\/]/, '').replace(/\.[^.]+$/, '') || 'design';
+  const design = designFromImport(imported, DEFAULT_TECHNOLOGY, name);
+  if (design.cells.length === 0) {
     const first = imported.failed[0]?.error;
     if (first !== undefined) throw first;
     throw new SpiceImportError(fileName, 1, 'no cell could be read');
   }
-  const name = fileName.replace(/^.*[\\/]/, '').replace(/\.[^.]+$/, '') || 'design';
-  return {
-    design: designFromImport(imported, DEFAULT_TECHNOLOGY, name),
-    failed,
-    library: imported.isLibrary,
-  };
+  return { design, failed, library: imported.isLibrary };
 }
 
 function openSpice(text: string, fileName: string): void {

@@ -11,7 +11,7 @@ import type { DeviceModel } from '../model/technology.ts';
 import type { Body } from './spiceParse.ts';
 import { readBody, type BodyCell, type FlattenContext, type FlatSource } from './spiceBodies.ts';
 import type { Hierarchy } from './spiceHierarchy.ts';
-import { SpiceImportError } from './spiceErrors.ts';
+import { SpiceImportError, UnflattenedCellError } from './spiceErrors.ts';
 import { flattenCell, HierarchyError } from '../hierarchy/flatten.ts';
 import { portUse, GATE, CHANNEL, type NetUse } from './portUse.ts';
 import { readExportedNames, restoreExportedNames, restoreInstance } from './spiceRestore.ts';
@@ -43,6 +43,8 @@ export interface CellContext extends FlattenContext {
   readonly bodies: Map<Body, BodyCell>;
   readonly finished: Map<Body, FinishedCell>;
   readonly uses: Map<Body, NetUse>;
+  /** Each subcircuit's cell name as restored, by its lower-case name in the file. */
+  readonly cellNames: ReadonlyMap<string, string>;
 }
 
 export interface CellSpec {
@@ -76,7 +78,8 @@ export function buildCell(spec: CellSpec, ctx: CellContext): ImportedCell {
   try {
     netlist = flattenCell(new Map(cells.map((c) => [c.name, c])), top.cell.name);
   } catch (e) {
-    if (e instanceof HierarchyError) throw new SpiceImportError(ctx.fileName, spec.line, e.message);
+    if (e instanceof HierarchyError)
+      throw new UnflattenedCellError(ctx.fileName, spec.line, e.message, cells);
     throw e;
   }
   const notes = [...new Set(finished.flatMap((f) => f.notes))];
@@ -87,6 +90,11 @@ export function buildCell(spec: CellSpec, ctx: CellContext): ImportedCell {
   const { expectationLines, pinsNamed } = top;
   const models = recordOf(finished.flatMap((f) => [...f.models]));
   return { name, netlist, expectations, expectationLines, pinsNamed, models, notes, cells };
+}
+
+/** The level-1 values of every card a device of any cell read so far names, by card name. */
+export function cardsNamed(ctx: CellContext): Record<string, DeviceModel> {
+  return recordOf([...ctx.finished.values()].flatMap((f) => [...f.models]));
 }
 
 function subSpec(body: Body, root: CellSpec): CellSpec {
@@ -149,7 +157,8 @@ function finish(spec: CellSpec, ctx: CellContext): FinishedCell {
   netlist = applyPinDirectives(netlist, spec.body.directives, ctx.fileName);
   const { expectations, lines } = readExpectations(netlist, spec.body.directives, notes);
   const pinsNamed = spec.body.directives.some((d) => d.key === 'inputs' || d.key === 'outputs');
-  const names = readExportedNames(spec.body.directives, notes);
+  const parsed = readExportedNames(spec.body.directives, notes, netsOf(read, expectations));
+  const names = { ...parsed, cell: ctx.cellNames.get(spec.name.toLowerCase()) ?? spec.name };
   const restored = restoreExportedNames({ netlist, expectations, expectationLines: lines }, names);
   const globals = read.nets.filter((n) => !railNets.has(n) && ctx.isGlobal(n.toLowerCase())).map(names.net);
   const cell: Cell = {
@@ -164,6 +173,12 @@ function finish(spec: CellSpec, ctx: CellContext): FinishedCell {
   const done = { cell, expectationLines, pinsNamed, notes, net: names.net, models: read.models };
   ctx.finished.set(spec.body, done);
   return done;
+}
+
+/** A cell's nets as the file spells them, with those only instances and expected functions name. */
+function netsOf(read: BodyCell, expectations: Readonly<Record<string, string>>): string[] {
+  const pins = read.instances.flatMap((i) => Object.values(i.pins));
+  return [...new Set([...read.nets, ...pins, ...Object.keys(expectations)])];
 }
 
 /** How a placed subcircuit's cell is named, and its pins, once it is finished (it always is first). */

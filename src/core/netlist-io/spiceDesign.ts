@@ -11,14 +11,19 @@ import type { ImportedCell, SpiceImport } from './spiceImport.ts';
 
 export function designFromImport(imported: SpiceImport, base: Technology, name: string): Design {
   const byName = new Map<string, Cell>();
-  for (const c of imported.cells)
-    for (const cell of c.cells) if (!byName.has(cell.name)) byName.set(cell.name, cell);
+  // Cells that only the checks could not flatten are cells of the design all the same.
+  for (const c of [...imported.cells, ...imported.failed])
+    for (const cell of c.cells ?? []) if (!byName.has(cell.name)) byName.set(cell.name, cell);
   const position = new Map(imported.available.map((n, i) => [n.toLowerCase(), i]));
   const cells = [...byName.values()].sort(
     (a, b) => (position.get(a.name.toLowerCase()) ?? 0) - (position.get(b.name.toLowerCase()) ?? 0),
   );
-  const open = imported.cells[0]?.name ?? cells[0]?.name ?? name;
-  const technology = withCellModels(withTechnologyCards(base, imported), imported.cells);
+  const open =
+    imported.cells[0]?.name ??
+    imported.failed.find((f) => f.cells)?.cells?.at(-1)?.name ??
+    cells[0]?.name ??
+    name;
+  const technology = withCellModels(withTechnologyCards(base, imported), [imported]);
   return { name, technology, cells, open };
 }
 

@@ -11,7 +11,7 @@ import type { Instance } from '../model/design.ts';
 import type { Device, Netlist } from '../model/netlist.ts';
 import { recordOf } from '../model/records.ts';
 import { unquoted } from '../format/printable.ts';
-import type { Directive } from './spiceParse.ts';
+import type { Directive, Subckt } from './spiceParse.ts';
 
 export interface RestoredCell {
   readonly netlist: Netlist;
@@ -36,7 +36,45 @@ export interface ExportedNames {
   readonly none: boolean;
 }
 
-export function readExportedNames(directives: readonly Directive[], notes: string[]): ExportedNames {
+/**
+ * The names one subcircuit's directives give. `cellNets` are the subcircuit's nets as the file spells
+ * them: a net directive that would give two of them one name (a hand-edited file) is ignored, noted.
+ */
+export function readExportedNames(
+  directives: readonly Directive[],
+  notes: string[],
+  cellNets: readonly string[] = [],
+): ExportedNames {
+  const { nets, elements, cell } = parseRenames(directives, notes);
+  const words = (key: string): Set<string> =>
+    new Set(directives.filter((d) => d.key === key).flatMap((d) => d.value.split(/\s+/).filter(Boolean)));
+  const impliedBulk = words('implied-bulk');
+  const impliedGround = words('implied-ground');
+  // The node 0 a V line needed is dropped: it takes no name from the cell's nets.
+  keepDistinct(
+    nets,
+    cellNets.filter((n) => !impliedGround.has(n)),
+    notes,
+  );
+  return {
+    net: (n) => nets.get(n.toLowerCase()) ?? n,
+    element: (n) => elements.get(n) ?? n,
+    cell,
+    impliedBulk,
+    impliedGround,
+    none: nets.size + elements.size + impliedBulk.size + impliedGround.size === 0 && cell === null,
+  };
+}
+
+interface Renames {
+  /** By lower-case identifier: SPICE nets match without case. */
+  readonly nets: Map<string, string>;
+  /** Devices and instances by element name as written. */
+  readonly elements: Map<string, string>;
+  readonly cell: string | null;
+}
+
+function parseRenames(directives: readonly Directive[], notes: string[]): Renames {
   const nets = new Map<string, string>();
   const elements = new Map<string, string>();
   let cell: string | null = null;
@@ -55,18 +93,59 @@ export function readExportedNames(directives: readonly Directive[], notes: strin
     else if (what === 'cell') cell = original;
     else elements.set(id, original);
   }
-  const words = (key: string): Set<string> =>
-    new Set(directives.filter((d) => d.key === key).flatMap((d) => d.value.split(/\s+/).filter(Boolean)));
-  const impliedBulk = words('implied-bulk');
-  const impliedGround = words('implied-ground');
-  return {
-    net: (n) => nets.get(n.toLowerCase()) ?? n,
-    element: (n) => elements.get(n) ?? n,
-    cell,
-    impliedBulk,
-    impliedGround,
-    none: nets.size + elements.size + impliedBulk.size + impliedGround.size === 0 && cell === null,
-  };
+  return { nets, elements, cell };
+}
+
+/** Drops net renames until no two nets of the cell share a name. */
+function keepDistinct(renames: Map<string, string>, cellNets: readonly string[], notes: string[]): void {
+  for (let pass = 0; pass <= renames.size; pass++) {
+    const owner = new Map<string, string>();
+    let clash: readonly [string, string, string] | null = null;
+    for (const n of cellNets) {
+      const name = renames.get(n.toLowerCase()) ?? n;
+      const before = owner.get(name);
+      if (before !== undefined && before.toLowerCase() !== n.toLowerCase()) {
+        clash = [name, before, n];
+        break;
+      }
+      owner.set(name, n);
+    }
+    if (clash === null) return;
+    const [name, ...nets] = clash;
+    // Undo whichever of the two was renamed (both, when both were).
+    for (const n of nets)
+      if (renames.delete(n.toLowerCase()))
+        notes.push(`a name directive would call two nets ${JSON.stringify(name)}; ${n} keeps its own name`);
+  }
+}
+
+/**
+ * Each subcircuit's cell name, by its lower-case name in the file: the one its `name cell`
+ * directive gives, unless two cells would then share a name (that directive is ignored, noted).
+ */
+export function restoredCellNames(subckts: readonly Subckt[], notes: string[]): Map<string, string> {
+  const names = subckts.map((s) => {
+    const d = [...s.directives].reverse().find((x) => x.key === 'name' && /^cell\s/.test(x.value));
+    const m = d === undefined ? null : /^cell\s+\S+\s+(".*")$/.exec(d.value);
+    return (m === null ? null : unquoted(m[1] as string)) ?? s.name;
+  });
+  // Each pass gives at least one cell back its name in the file; those are distinct.
+  for (let pass = 0; pass < subckts.length; pass++) {
+    const count = new Map<string, number>();
+    names.forEach((n) => count.set(n, (count.get(n) ?? 0) + 1));
+    const clashing = subckts.flatMap((s, i) =>
+      count.get(names[i] as string) === 1 || names[i] === s.name ? [] : [i],
+    );
+    if (clashing.length === 0) break;
+    for (const i of clashing) {
+      const s = subckts[i] as Subckt;
+      notes.push(
+        `${s.name}: its name directive would give two cells the name ${JSON.stringify(names[i])}; ignored`,
+      );
+      names[i] = s.name;
+    }
+  }
+  return new Map(subckts.map((s, i) => [s.name.toLowerCase(), names[i] as string]));
 }
 
 /** One cell under the names its directives give. */
