@@ -105,6 +105,6 @@ test('the key map is in the help overlay and the About box carries the caution',
   await expect(help).toContainText('Place NMOS');
   await app.press('Escape');
   await expect(help).toBeHidden();
-  await app.toolbarButton('About Railwise').click();
+  await app.toolbarButton('About').click();
   await expect(page.getByRole('dialog', { name: 'About Railwise' })).toContainText('not sign-off');
 });

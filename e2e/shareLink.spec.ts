@@ -30,7 +30,7 @@ test('Share link gives a link that reopens the design', async ({ page }) => {
   await app.open();
   await app.starter('AOI21');
   const drawn = await app.netlist();
-  await app.toolbarButton('Share a link to this design').click();
+  await app.toolbarButton('Share link').click();
   await expect(app.message).toContainText('link to this design');
   // Where the browser refuses the clipboard the link goes to the address bar instead.
   const link = page.url().includes('#design=')

@@ -5,21 +5,28 @@ import { ErrorBoundary } from './app/ErrorBoundary.tsx';
 import { openFirstDesign } from './app/startup.ts';
 import { openSharedLink } from './app/shareLink.ts';
 import { startAutosave } from './app/autosave.ts';
+import { restoreSessionHistory, startSessionHistory } from './app/sessionHistory.ts';
 import { installTestApi } from './app/testApi.ts';
 import { startAnalysis } from './state/analysis.ts';
 
-openFirstDesign();
-startAnalysis();
-void openSharedLink();
-startAutosave();
-installTestApi();
+/** Opens the design (the autosaved one, expanded first when it was stored packed), then the page. */
+async function start(root: HTMLElement): Promise<void> {
+  await openFirstDesign();
+  restoreSessionHistory();
+  startAnalysis();
+  void openSharedLink();
+  startAutosave();
+  startSessionHistory();
+  installTestApi();
+  createRoot(root).render(
+    <StrictMode>
+      <ErrorBoundary>
+        <App />
+      </ErrorBoundary>
+    </StrictMode>,
+  );
+}
 
 const root = document.getElementById('root');
 if (!root) throw new Error('index.html has no #root element');
-createRoot(root).render(
-  <StrictMode>
-    <ErrorBoundary>
-      <App />
-    </ErrorBoundary>
-  </StrictMode>,
-);
+void start(root);

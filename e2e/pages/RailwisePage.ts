@@ -28,7 +28,7 @@ export class RailwisePage {
   }
 
   async newSheet(): Promise<void> {
-    await this.toolbarButton('New empty sheet').click();
+    await this.toolbarButton('New').click();
     await this.dismissMessage();
   }
 
@@ -98,6 +98,28 @@ export class RailwisePage {
     }, name);
   }
 
+  /** Clicks a device's body (between its gate and its channel, clear of its pins), which selects it. */
+  async selectDevice(name: string): Promise<void> {
+    const at = await this.devicePosition(name);
+    await this.clickAt(at.x - 0.8, at.y + 0.6);
+    await expect
+      .poll(() => this.page.evaluate(() => window.__railwise!.state().selection.selected.parts.length))
+      .toBe(1);
+  }
+
+  /** Net of every pin (`partId.pin`), as plain data. */
+  async pinNets(): Promise<Record<string, string>> {
+    return this.page.evaluate(() => Object.fromEntries(window.__railwise!.state().geometry.pinNets));
+  }
+
+  /** Where the last edit made or refused a contact, as drawn on the sheet. */
+  async contactMarks(): Promise<{ kind: string; at: { x: number; y: number }[] } | null> {
+    return this.page.evaluate(() => {
+      const m = window.__railwise!.state().contactMarks;
+      return m === null ? null : { kind: m.kind, at: [...m.at] };
+    });
+  }
+
   async undoDepth(): Promise<number> {
     return this.page.evaluate(() => window.__railwise!.state().history.past.length);
   }
@@ -120,15 +142,8 @@ export class RailwisePage {
       .click();
   }
 
-  /** Waits until the autosave has caught up with the current revision. */
+  /** Waits until the autosave holds the design as it is now. */
   async waitForAutosave(): Promise<void> {
-    await this.page.waitForFunction(() => {
-      const api = window.__railwise!;
-      const saved = localStorage.getItem(api.autosaveKey);
-      if (saved === null) return false;
-      const file = JSON.parse(saved) as { open: string; cells: { name: string; sheet?: unknown }[] };
-      const open = file.cells.find((c) => c.name === file.open);
-      return JSON.stringify(open?.sheet) === JSON.stringify(api.state().doc.sheet);
-    });
+    await this.page.waitForFunction(() => window.__railwise!.autosaveCaughtUp());
   }
 }

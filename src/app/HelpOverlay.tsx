@@ -16,6 +16,14 @@ const MOUSE: readonly [string, string][] = [
   ['Esc', 'cancel the wire, drag or placement in progress; else clear the selection'],
 ];
 
+/** How connections are made and kept (docs/semantics.md §1, "No silent connections"). */
+export const CONNECTION_RULE: readonly string[] = [
+  'Only a wire, a net name (rail, pin or label), or a pin dropped on a pin or a wire end connects.',
+  'Turn, Flip, arrow nudges and drags keep every connection (wires follow; pins that touched get a short wire) and make no new one: one that would join or cut nets is not done, the nets are named and the place is marked on the sheet.',
+  'Duplicate and paste land where they touch nothing; copied pins, rails and labels still join their nets by name.',
+  'A contact made on purpose is marked on the sheet until the next change, and is one undo away.',
+];
+
 /** The key map, read from the command registry so it can never disagree with the keys. */
 export function HelpOverlay() {
   return (
@@ -34,6 +42,14 @@ export function HelpOverlay() {
             </dl>
           </section>
         ))}
+        <section data-testid="connection-rule">
+          <h3>Connections</h3>
+          <ul>
+            {CONNECTION_RULE.map((line) => (
+              <li key={line}>{line}</li>
+            ))}
+          </ul>
+        </section>
         <section>
           <h3>Mouse</h3>
           <dl>

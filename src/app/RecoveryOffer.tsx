@@ -25,8 +25,8 @@ export function RecoveryOffer() {
       `The design was set aside; its text is kept under "${RESCUE_KEY}" in this browser's storage.`,
     );
   };
-  const open = (): void => {
-    const design = suspectDesign();
+  const open = async (): Promise<void> => {
+    const design = await suspectDesign();
     settleSuspect(design === null ? 'discarded' : 'opened');
     if (design === null) return showMessage('error', 'The set-aside design could not be read.');
     const opening = beginOpening('autosave', design.name);
@@ -41,7 +41,7 @@ export function RecoveryOffer() {
         instead. The design may be too large or damaged.
       </p>
       <div className="rw-dialog-actions">
-        <button type="button" onClick={open}>
+        <button type="button" onClick={() => void open()}>
           Open it anyway
         </button>
         <button type="button" onClick={discard}>

@@ -1,20 +1,27 @@
 import { useStore } from '../state/store.ts';
 import { commandById, describeKey } from './commands.ts';
 
+/**
+ * A toolbar button: its visible word is its accessible name (so speech and search find what is
+ * seen); the command's full label and key are its tooltip (read as its description). A button that shows
+ * only a symbol (+, −) is named by the command's label.
+ */
 function CommandButton({ id, text, disabled }: { id: string; text?: string; disabled?: boolean }) {
   const c = commandById(id);
   const key = c.keys[0];
   const title = key ? `${c.label} (${describeKey(key)})` : c.label;
+  const shown = text ?? c.label;
+  const wordless = !/\p{L}/u.test(shown);
   return (
     <button
       type="button"
       title={title}
-      aria-label={c.label}
+      aria-label={wordless ? c.label : undefined}
       data-command={id}
       disabled={disabled}
       onClick={c.run}
     >
-      {text ?? c.label}
+      {shown}
     </button>
   );
 }

@@ -9,12 +9,18 @@
  * answering (`openingDone`); while the mark stands nothing is written. A mark found at start-up
  * means the last opening never finished (the tab froze or crashed): the autosaved design is then
  * set aside and the designer is offered to open it anyway or discard it (`RecoveryOffer`).
+ *
+ * Saving never holds up the page: it runs when the page is idle (`whenIdle`), and a long design
+ * (a few thousand transistors) is stored gzip-compressed (`storedText.ts`), compressed and expanded
+ * off the page's thread; a packed value is expanded before it is read (`autosavedText`).
  */
 import { createStore } from 'zustand/vanilla';
 import { useStore as useZustand } from 'zustand';
 import type { Design } from '../core/model/design.ts';
 import { parseDesignFile, serializeDesign } from '../core/format/designFile.ts';
 import { currentDesign, store } from '../state/store.ts';
+import { whenIdle } from './idle.ts';
+import { isPacked, PACK_ABOVE, packForStorage, unpackFromStorage } from './storedText.ts';
 
 export const AUTOSAVE_KEY = 'railwise.autosave.v1';
 export const RESCUE_KEY = 'railwise.autosave.unreadable';
@@ -23,6 +29,8 @@ export const SUSPECT_KEY = 'railwise.autosave.unopened';
 /** Present while a design is being opened. */
 export const OPENING_KEY = 'railwise.opening';
 const DELAY_MS = 250;
+/** At most this long after a change, the page idle or not. */
+const IDLE_WITHIN_MS = 1000;
 
 export interface RestoreResult {
   readonly design: Design | null;
@@ -89,11 +97,31 @@ export function useRecovery(): Suspect | null {
   return useZustand(recovery, (s) => s.suspect);
 }
 
+/** A stored value's design text (expanded when packed); null when it cannot be expanded. */
+export async function storedDesignText(stored: string | null): Promise<string | null> {
+  if (stored === null || !isPacked(stored)) return stored;
+  try {
+    return await unpackFromStorage(stored);
+  } catch {
+    return null;
+  }
+}
+
+/** The autosaved design's text, expanded: what `restoreAutosave` reads. */
+export function autosavedText(storage: Storage = localStorage): Promise<string | null> {
+  return storedDesignText(storage.getItem(AUTOSAVE_KEY));
+}
+
 /**
  * The autosaved design, if any. An unreadable one is moved to RESCUE_KEY and explained. When the
  * last start did not finish opening it, it is moved to SUSPECT_KEY and offered instead of opened.
+ * `readable` is its text as `autosavedText` expanded it (the stored text itself by default); the
+ * copies set aside are of the value as stored.
  */
-export function restoreAutosave(storage: Storage = localStorage): RestoreResult {
+export function restoreAutosave(
+  storage: Storage = localStorage,
+  readable: string | null = storage.getItem(AUTOSAVE_KEY),
+): RestoreResult {
   const unfinished = readOpening(storage);
   storage.removeItem(OPENING_KEY);
   const text = storage.getItem(AUTOSAVE_KEY);
@@ -109,7 +137,8 @@ export function restoreAutosave(storage: Storage = localStorage): RestoreResult 
       : '';
   if (text === null) return { design: null, problem: linkNote === '' ? null : linkNote.trim() };
   try {
-    const design = parseDesignFile(text, 'autosave');
+    if (readable === null) throw new Error('its compressed text is damaged');
+    const design = parseDesignFile(readable, 'autosave');
     const opening = beginOpening('autosave', design.name, storage);
     return { design, problem: linkNote === '' ? null : `${linkNote}Your own design is shown.`, opening };
   } catch (e) {
@@ -130,8 +159,8 @@ export function keepAside(storage: Storage = localStorage): void {
 }
 
 /** The set-aside design, read again for "open it anyway"; null when it is gone or unreadable. */
-export function suspectDesign(storage: Storage = localStorage): Design | null {
-  const text = storage.getItem(SUSPECT_KEY);
+export async function suspectDesign(storage: Storage = localStorage): Promise<Design | null> {
+  const text = await storedDesignText(storage.getItem(SUSPECT_KEY));
   if (text === null) return null;
   try {
     return parseDesignFile(text, 'autosave');
@@ -148,29 +177,47 @@ export function settleSuspect(outcome: 'opened' | 'discarded', storage: Storage 
   recovery.setState({ suspect: null });
 }
 
+/** Stores a design's text; false when the storage refused it (full or blocked). */
+function keepText(storage: Storage, text: string): boolean {
+  try {
+    storage.setItem(AUTOSAVE_KEY, text);
+    return true;
+  } catch {
+    return false;
+  }
+}
+
 /** Starts saving on every document change; returns a function that stops it. */
 export function startAutosave(storage: Storage = localStorage): () => void {
-  let timer: ReturnType<typeof setTimeout> | null = null;
+  let cancel: (() => void) | null = null;
   let savedRevision = store.getState().revision;
-  const write = (): void => {
-    timer = null;
+  /** `now`: the page is going away, so a long text is stored as it is rather than packed later. */
+  const write = (now = false): void => {
+    cancel = null;
     const { revision } = store.getState();
     if (revision === savedRevision || failed) return;
     // A design still being opened is not written yet: try again shortly.
-    if (readOpening(storage) !== null) return void (timer = setTimeout(write, DELAY_MS));
-    try {
-      storage.setItem(AUTOSAVE_KEY, serializeDesign(currentDesign()));
-      savedRevision = revision;
-    } catch {
+    if (readOpening(storage) !== null && !now) return void (cancel = later(DELAY_MS));
+    const text = serializeDesign(currentDesign());
+    if (text.length <= PACK_ABOVE || now) {
       // Storage full or blocked: keep editing; the next change tries again.
+      if (keepText(storage, text)) savedRevision = revision;
+      return;
     }
+    void packForStorage(text).then((packed) => {
+      if (!failed && revision > savedRevision && keepText(storage, packed)) savedRevision = revision;
+    });
+  };
+  const later = (ms: number): (() => void) => {
+    const id = setTimeout(() => (cancel = whenIdle(() => write(), IDLE_WITHIN_MS)), ms);
+    return () => clearTimeout(id);
   };
   const unsubscribe = store.subscribe((s, prev) => {
-    if (s.revision !== prev.revision && timer === null) timer = setTimeout(write, DELAY_MS);
+    if (s.revision !== prev.revision && cancel === null) cancel = whenIdle(() => write(), IDLE_WITHIN_MS);
   });
   const flush = (): void => {
-    if (timer !== null) clearTimeout(timer);
-    write();
+    cancel?.();
+    write(true);
   };
   // A page that can still run this is not frozen: whatever it was opening, it opened.
   const hide = (): void => {

@@ -22,6 +22,9 @@ import { currentDesign, loadDesign, setViewport, showMessage, store } from '../s
 import { currentStage } from '../editor/stageRef.ts';
 import { fitToView } from '../state/view.ts';
 import { downloadText, downloadUrl, safeFileName } from './download.ts';
+import { countOf } from '../core/view/plural.ts';
+import { binaryRefusal } from '../core/format/binaryText.ts';
+import { brief } from '../core/format/printable.ts';
 
 export const DESIGN_EXTENSION = '.railwise.json';
 export const OPEN_ACCEPT = ['.json', ...SPICE_EXTENSIONS].join(',');
@@ -40,34 +43,55 @@ export interface SpiceDesign {
   readonly library: boolean;
 }
 
+/**
+ * What an import changed or left out, as the design's notes (one per line under a heading naming
+ * the file), kept with the design until the designer dismisses them: the same notes the command
+ * line prints for each cell.
+ */
+export function importNotes(fileName: string, notes: readonly string[]): string | undefined {
+  return notes.length === 0 ? undefined : [`Imported from ${fileName}:`, ...notes].join('\n');
+}
+
 /** Reads a SPICE text into one design of all its cells; throws when no cell at all can be read. */
 export function designFromSpice(text: string, fileName: string): SpiceDesign {
   const imported = importSpice(text, fileName);
   // A cell only the checks cannot flatten is kept; its check says why.
   const failed = imported.failed.map((f) => `${f.name} (${f.error.message})`);
   const name = fileName.replace(/^.*[\\/]/, '').replace(/\.[^.]+$/, '') || 'design';
-  const design = designFromImport(imported, DEFAULT_TECHNOLOGY, name);
-  if (design.cells.length === 0) {
+  const read = designFromImport(imported, DEFAULT_TECHNOLOGY, name);
+  if (read.cells.length === 0) {
     const first = imported.failed[0]?.error;
     if (first !== undefined) throw first;
     throw new SpiceImportError(fileName, 1, 'no cell could be read');
   }
+  // Each cell's notes, named by the cell when the file holds several.
+  const several = imported.cells.length > 1;
+  const cellNotes = imported.cells.flatMap((c) => c.notes.map((n) => (several ? `${c.name}: ${n}` : n)));
+  const unread = failed.map((f) => `not readable: ${f}`);
+  const notes = importNotes(fileName, [...new Set([...imported.notes, ...cellNotes]), ...unread]);
+  const design = notes === undefined ? read : { ...read, notes };
   return { design, failed, library: imported.isLibrary };
 }
 
 function openSpice(text: string, fileName: string): void {
-  const { design, failed, library } = designFromSpice(text, fileName);
+  const { design, library } = designFromSpice(text, fileName);
   loadDesign(design);
   fitToView();
-  const note = failed.length ? `. Not readable: ${failed.join('; ')}` : '';
+  const kept = design.notes === undefined ? 0 : design.notes.split('\n').length - 1;
+  const where = kept === 0 ? '' : `; ${countOf(kept, 'note')} on what the import changed, under the sheet`;
   const what = design.cells.length > 1 ? `${design.cells.length} cells` : design.open;
-  showMessage('info', `Imported ${what} from ${fileName}${note}`);
+  showMessage('info', `Imported ${what} from ${fileName}${where}`);
   // A library: the table of its cells, where any one opens onto the sheet.
   if (library) openLibraryView();
 }
 
 /** Opens text as a design file or a SPICE netlist. Returns false when the file was refused. */
 export function openText(text: string, fileName: string): boolean {
+  const binary = binaryRefusal(fileName, text);
+  if (binary !== null) {
+    showMessage('error', `Could not open ${binary}. Your design is unchanged.`);
+    return false;
+  }
   try {
     if (isSpiceFile(fileName)) return (openSpice(text, fileName), true);
     loadDesign(parseDesignFile(text, fileName));
@@ -77,7 +101,8 @@ export function openText(text: string, fileName: string): boolean {
   } catch (e) {
     // Known errors name the file and line or field; anything else is still a message, never a crash.
     const known = e instanceof DesignFileError || e instanceof SpiceImportError;
-    const detail = e instanceof Error ? e.message : String(e);
+    // A short, printable excerpt: whatever the file held, the message stays one readable line.
+    const detail = brief(e instanceof Error ? e.message : String(e));
     showMessage(
       'error',
       `Could not open${known ? '' : ` ${fileName}`}: ${detail}. Your design is unchanged.`,
@@ -116,7 +141,10 @@ function spiceText(): string {
   const whole = currentDesign();
   if (whole.cells.length > 1) return exportSpiceDesign(whole);
   const { design } = store.getState();
-  return exportSpice(design.netlist, design.technology, { expectations: design.expectations });
+  return exportSpice(design.netlist, design.technology, {
+    expectations: design.expectations,
+    ...(design.sheet === undefined ? {} : { sheet: design.sheet }),
+  });
 }
 
 /** One module per cell for a design of several cells, else the one cell's module. */

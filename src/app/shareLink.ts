@@ -5,6 +5,7 @@
  * message and leaves the open design as it was.
  */
 import type { Design } from '../core/model/design.ts';
+import { countOf } from '../core/view/plural.ts';
 import { parseDesignFile, serializeDesign } from '../core/format/designFile.ts';
 import { fitToView } from '../state/view.ts';
 import { currentDesign, loadDesign, showMessage } from '../state/store.ts';
@@ -145,12 +146,12 @@ export async function shareCurrentDesign(): Promise<void> {
   const link = `${location.origin}${location.pathname}${fragment}`;
   try {
     await navigator.clipboard.writeText(link);
-    showMessage('info', `A link to this design (${link.length} characters) is on the clipboard.`);
+    showMessage('info', `A link to this design (${countOf(link.length, 'character')}) is on the clipboard.`);
   } catch {
     history.replaceState(null, '', link);
     showMessage(
       'info',
-      `A link to this design (${link.length} characters) is in the address bar: copy it from there.`,
+      `A link to this design (${countOf(link.length, 'character')}) is in the address bar: copy it from there.`,
     );
   }
 }

@@ -5,12 +5,24 @@
 import { starterById, STARTERS } from '../core/starters/index.ts';
 import { documentFromDesign } from '../state/document.ts';
 import { resetStore, showMessage } from '../state/store.ts';
-import { keepAside, openingDone, recovery, RESCUE_KEY, restoreAutosave, whenShown } from './autosave.ts';
+import {
+  autosavedText,
+  keepAside,
+  openingDone,
+  recovery,
+  RESCUE_KEY,
+  restoreAutosave,
+  whenShown,
+} from './autosave.ts';
 
 export const DEMO_STARTER = 'nand2';
 
-export function openFirstDesign(storage: Storage = localStorage): void {
-  const restored = restoreAutosave(storage);
+/**
+ * Opens the first design. Asynchronous only for a long autosaved design, which is stored packed
+ * and expanded off the page's thread before it is read.
+ */
+export async function openFirstDesign(storage: Storage = localStorage): Promise<void> {
+  const restored = restoreAutosave(storage, await autosavedText(storage));
   const demo = (starterById(DEMO_STARTER) ?? STARTERS[0]!).design;
   try {
     resetStore(documentFromDesign(restored.design ?? demo));

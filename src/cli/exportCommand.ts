@@ -43,7 +43,10 @@ export function exportCommand(args: ExportArgs, io: ExportOutput): number {
 function exported(job: CellJob, args: ExportArgs): string {
   switch (args.to) {
     case 'spice':
-      return exportSpice(job.netlist, job.technology, { expectations: job.expectations });
+      return exportSpice(job.netlist, job.technology, {
+        expectations: job.expectations,
+        ...(job.sheet === undefined ? {} : { sheet: job.sheet }),
+      });
     case 'verilog':
       return exportVerilog(job.netlist);
     case 'csv': {

@@ -16,7 +16,7 @@ import {
   type LoadOptions,
 } from '../core/netlist-io/cellFiles.ts';
 import type { CellChoice } from './args.ts';
-import { binaryRefusal } from './fileText.ts';
+import { binaryRefusal } from '../core/format/binaryText.ts';
 import { UsageError } from './usage.ts';
 import { libraryFunctions, type FunctionSource } from './functionsFrom.ts';
 

@@ -1,29 +1,54 @@
-import { Circle, Layer, Line, Rect } from 'react-konva';
-import { useStore } from '../state/store.ts';
-import { normalizeRect, partBounds } from '../core/sheet/geometry.ts';
+import { Circle, Group, Line, Rect, Shape } from 'react-konva';
+import { useStore, type ContactMarks } from '../state/store.ts';
+import type { Point } from '../core/sheet/types.ts';
+import { normalizeRect } from '../core/sheet/geometry.ts';
 import { makePart } from '../core/sheet/edits.ts';
-import { PART_VIEWS } from './devices/index.ts';
+import { paintParts } from './paint/scenePaint.ts';
 import { SHEET_THEME, WIRE_STROKE } from './theme.ts';
 
-/** Selection outlines and the gesture in progress: box, wire preview, part ghost. */
+/**
+ * Where the last edit connected on purpose (a ring with a plus) or was refused because it would have
+ * joined or cut nets (a ring with a cross): shapes, so they read without colour.
+ */
+function ContactMark({ at, kind }: { at: Point; kind: ContactMarks['kind'] }) {
+  const colour = kind === 'made' ? SHEET_THEME.selected : SHEET_THEME.refused;
+  const r = 0.55;
+  const arm =
+    kind === 'made'
+      ? [0, -0.3, 0, 0.3, -0.3, 0, 0.3, 0]
+      : [-0.25, -0.25, 0.25, 0.25, -0.25, 0.25, 0.25, -0.25];
+  return (
+    <>
+      <Circle
+        x={at.x}
+        y={at.y}
+        radius={r}
+        stroke={colour}
+        strokeWidth={0.1}
+        dash={kind === 'made' ? [] : [0.2, 0.12]}
+      />
+      <Line
+        points={[at.x + arm[0]!, at.y + arm[1]!, at.x + arm[2]!, at.y + arm[3]!]}
+        stroke={colour}
+        strokeWidth={0.1}
+      />
+      <Line
+        points={[at.x + arm[4]!, at.y + arm[5]!, at.x + arm[6]!, at.y + arm[7]!]}
+        stroke={colour}
+        strokeWidth={0.1}
+      />
+    </>
+  );
+}
+
+/** Contact marks and the gesture in progress: box, wire preview, pin ring, part ghost. */
 export function InteractionLayer() {
   const gesture = useStore((s) => s.gesture);
-  const sheet = useStore((s) => s.doc.sheet);
-  const selected = useStore((s) => s.selection.selected);
-  const outlines = sheet.parts.filter((p) => selected.parts.includes(p.id)).map(partBounds);
+  const marks = useStore((s) => s.contactMarks);
   return (
-    <Layer listening={false}>
-      {outlines.map((b, i) => (
-        <Rect
-          key={i}
-          x={b.x0 - 0.3}
-          y={b.y0 - 0.3}
-          width={b.x1 - b.x0 + 0.6}
-          height={b.y1 - b.y0 + 0.6}
-          stroke={SHEET_THEME.selected}
-          strokeWidth={0.05}
-          dash={[0.3, 0.2]}
-        />
+    <Group listening={false}>
+      {marks?.at.map((p, i) => (
+        <ContactMark key={`mark-${i}`} at={p} kind={marks.kind} />
       ))}
       {gesture?.type === 'box' ? <BoxGesture from={gesture.from} to={gesture.to} /> : null}
       {gesture?.type === 'wiring' ? (
@@ -53,7 +78,7 @@ export function InteractionLayer() {
         />
       ) : null}
       {gesture?.type === 'ghost' ? <Ghost kind={gesture.kind} x={gesture.at.x} y={gesture.at.y} /> : null}
-    </Layer>
+    </Group>
   );
 }
 
@@ -72,9 +97,20 @@ function BoxGesture({ from, to }: { from: { x: number; y: number }; to: { x: num
   );
 }
 
+/** The part about to be placed, in the ghost colour, drawn by its kind's painter. */
 function Ghost({ kind, x, y }: { kind: Parameters<typeof makePart>[1]['kind']; x: number; y: number }) {
   const sheet = useStore((s) => s.doc.sheet);
   const part = makePart(sheet, { kind, at: { x, y } });
-  const View = PART_VIEWS[kind];
-  return <View part={part} color={SHEET_THEME.ghost} />;
+  const scale = useStore((s) => s.viewport.scale);
+  return (
+    <Shape
+      sceneFunc={(ctx) => {
+        const c = ctx._context;
+        c.lineCap = 'round';
+        c.lineJoin = 'round';
+        paintParts(c, [part], scale, SHEET_THEME.ghost, () => SHEET_THEME.ghost);
+      }}
+      listening={false}
+    />
+  );
 }

@@ -1,12 +1,13 @@
-import { useEffect, useMemo, useRef, type RefObject } from 'react';
-import { Stage } from 'react-konva';
+import { useCallback, useEffect, useMemo, useRef, type RefObject } from 'react';
+import { Layer, Stage } from 'react-konva';
 import type Konva from 'konva';
 import type { KonvaEventObject } from 'konva/lib/Node';
 import { setScreen, setViewport, store, useStore } from '../state/store.ts';
 import { screenToSheet, zoomAt } from '../state/viewport.ts';
-import { SimulationOverlay } from './overlay/SimulationOverlay.tsx';
+import { zoomFloor } from '../state/view.ts';
+import { PointerLayer, SimulationOverlay } from './overlay/SimulationOverlay.tsx';
 import { GridLayer } from './GridLayer.tsx';
-import { SceneLayer } from './SceneLayer.tsx';
+import { EmphasisLayer, SceneLayer } from './SceneLayer.tsx';
 import { InteractionLayer } from './InteractionLayer.tsx';
 import { createEditorController, type EditorController } from './tools/controller.ts';
 import type { ToolPointer } from './tools/types.ts';
@@ -63,24 +64,46 @@ export function SheetCanvas({
   const viewport = useStore((s) => s.viewport);
   const screen = useStore((s) => s.screen);
   const tool = useStore((s) => s.tool);
+  // The same elements every render: a pan or zoom re-renders the stage's transform, never the
+  // drawing (each part reads the store itself and draws the view when Konva asks). Everything but
+  // the pointer's tooltip shares one Konva layer, so a frame composites two canvases.
+  const layers = useMemo(
+    () => (
+      <>
+        <Layer listening={false}>
+          <GridLayer />
+          <SceneLayer />
+          <EmphasisLayer />
+          <SimulationOverlay />
+          <InteractionLayer />
+        </Layer>
+        <PointerLayer />
+      </>
+    ),
+    [],
+  );
   useElementSize(box, onFirstLayout);
   useEffect(() => {
     setStage(stageRef.current);
     return () => setStage(null);
   }, []);
-  const route = (fn: (e: ToolPointer) => void) => (e: KonvaEventObject<MouseEvent>) => {
-    const stage = e.target.getStage();
-    const p = stage && toPointer(stage, e.evt);
-    if (p) fn(p);
-  };
-  const onWheel = (e: KonvaEventObject<WheelEvent>) => {
+  // Handlers made once, so a re-render of the stage never rebinds its events.
+  const handlers = useMemo(() => {
+    const route = (fn: (e: ToolPointer) => void) => (e: KonvaEventObject<MouseEvent>) => {
+      const stage = e.target.getStage();
+      const p = stage && toPointer(stage, e.evt);
+      if (p) fn(p);
+    };
+    return { down: route(ctl.down), move: route(ctl.move), up: route(ctl.up) };
+  }, [ctl]);
+  const onWheel = useCallback((e: KonvaEventObject<WheelEvent>) => {
     e.evt.preventDefault();
     const p = e.target.getStage()?.getPointerPosition();
     if (!p) return;
     // Trackpads send many small deltas; scale the factor by the delta so both feel alike.
     const factor = Math.exp(-e.evt.deltaY * 0.0015);
-    setViewport(zoomAt(store.getState().viewport, p, factor));
-  };
+    setViewport(zoomAt(store.getState().viewport, p, factor, zoomFloor()));
+  }, []);
   return (
     <div
       ref={box}
@@ -116,15 +139,12 @@ export function SheetCanvas({
         y={viewport.y}
         scaleX={viewport.scale}
         scaleY={viewport.scale}
-        onMouseDown={route(ctl.down)}
-        onMouseMove={route(ctl.move)}
-        onMouseUp={route(ctl.up)}
+        onMouseDown={handlers.down}
+        onMouseMove={handlers.move}
+        onMouseUp={handlers.up}
         onWheel={onWheel}
       >
-        <GridLayer />
-        <SceneLayer />
-        <SimulationOverlay />
-        <InteractionLayer />
+        {layers}
       </Stage>
     </div>
   );

@@ -9,6 +9,8 @@ export const SHEET_THEME = {
   wire: '#3a4150',
   selected: '#0f8a7e',
   highlight: '#7a3fb8',
+  /** Marks where an edit was refused because it would have joined or cut nets. */
+  refused: '#c2410c',
   pinDot: '#8a8f99',
   boxFill: 'rgba(15, 138, 126, 0.08)',
   boxStroke: '#0f8a7e',

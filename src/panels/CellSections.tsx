@@ -1,5 +1,6 @@
 import { useCallback, useMemo } from 'react';
 import { expressionNames } from '../core/analysis/check.ts';
+import { severityCounts, summaryBadge } from '../core/view/summary.ts';
 import { expressionProblem } from '../core/view/expectation.ts';
 import { setDesignFields, useStore } from '../state/store.ts';
 import { useSimulation } from '../state/simulation.ts';
@@ -43,7 +44,7 @@ export function RuleSection() {
       title="Structure checks"
       testId="rule-section"
       open={false}
-      badge={findings === null ? undefined : findings.length}
+      badge={findings === null ? undefined : summaryBadge(severityCounts(findings))}
     >
       {findings === null ? (
         <p className="rw-muted">Shown once the cell is checked.</p>

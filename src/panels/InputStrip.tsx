@@ -1,5 +1,5 @@
 import type { InputVector } from '../core/model/design.ts';
-import { indexOfVector } from '../core/view/vectorControl.ts';
+import { vectorPositionText } from '../core/view/vectorControl.ts';
 
 interface InputStripProps {
   readonly inputs: readonly string[];
@@ -11,7 +11,6 @@ interface InputStripProps {
 /** The selected vector as a row of bits: click a bit to flip it, arrows step through combinations. */
 export function InputStrip({ inputs, vector, onToggle, onStep }: InputStripProps) {
   if (inputs.length === 0) return <p className="rw-muted">This cell has no input pins.</p>;
-  const index = indexOfVector(inputs, vector);
   return (
     <div className="rw-input-strip" data-testid="input-strip">
       <button
@@ -43,7 +42,7 @@ export function InputStrip({ inputs, vector, onToggle, onStep }: InputStripProps
         ▶
       </button>
       <span className="rw-muted" data-testid="vector-number">
-        {index === null ? 'custom vector' : `vector ${index} of ${2 ** inputs.length}`}
+        {vectorPositionText(inputs, vector)}
       </span>
     </div>
   );

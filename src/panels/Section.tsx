@@ -22,7 +22,11 @@ export function Section({ title, testId, open = true, badge, onToggle, children 
     >
       <summary>
         <span className="rw-section-title">{title}</span>
-        {badge !== undefined && <span className="rw-section-badge">{badge}</span>}
+        {badge !== undefined && (
+          <span className="rw-section-badge" data-testid={`${testId}-badge`}>
+            {badge}
+          </span>
+        )}
       </summary>
       <div className="rw-section-body">{children}</div>
     </details>

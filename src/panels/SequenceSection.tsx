@@ -1,4 +1,5 @@
 import { useMemo } from 'react';
+import { countOf } from '../core/view/plural.ts';
 import type { InputVector } from '../core/model/design.ts';
 import { levelStrips } from '../core/view/levelStrip.ts';
 import { setDesignFields, useStore } from '../state/store.ts';
@@ -102,7 +103,7 @@ export function SequenceSection() {
           {sequences.length === 0 && <option value={0}>new sequence</option>}
           {sequences.map((s, i) => (
             <option key={`${s.name}-${i}`} value={i}>
-              {s.name} ({s.steps.length} steps)
+              {s.name} ({countOf(s.steps.length, 'step')})
             </option>
           ))}
         </select>

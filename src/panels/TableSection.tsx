@@ -1,4 +1,6 @@
 import { useMemo } from 'react';
+import { countOf } from '../core/view/plural.ts';
+import { summaryBadge, summaryLine } from '../core/view/summary.ts';
 import { MAX_INPUTS_WITH_UNDRIVEN, PROGRESS_THRESHOLD_VECTORS, jobSize } from '../worker/protocol.ts';
 import { DEFAULT_MAX_INPUTS } from '../core/analysis/check.ts';
 import { arrangeRows, kindCounts, vectorRows } from '../core/view/vectorTable.ts';
@@ -25,31 +27,31 @@ function SweepStatus() {
   if (design.netlist.inputs.length > limit) {
     return (
       <p className="rw-muted" data-testid="sweep-limit">
-        {design.netlist.inputs.length} inputs: more than the {limit} an exhaustive check allows. Check the
-        cell with sequences, or split it.
+        {countOf(design.netlist.inputs.length, 'input')}: more than the {limit} an exhaustive check allows.
+        Check the cell with sequences, or split it.
       </p>
     );
   }
   if (sweep.status === 'running' && sweep.long) {
     return (
       <JobBar
-        label={`Checking ${sweep.progress.total} vectors`}
+        label={`Checking ${countOf(sweep.progress.total, 'vector')}`}
         progress={sweep.progress}
         onCancel={() => cancelJob('sweep')}
       />
     );
   }
-  if (sweep.status === 'running') return <p className="rw-muted">Checking {size} vectors…</p>;
+  if (sweep.status === 'running') return <p className="rw-muted">Checking {countOf(size, 'vector')}…</p>;
   const start = (
     <button type="button" data-testid="sweep-start" onClick={() => void startSweep()}>
-      Check all {size} vectors
+      Check {size === 1 ? 'the' : 'all'} {countOf(size, 'vector')}
     </button>
   );
   switch (sweep.status) {
     case 'idle':
       return (
         <p className="rw-muted">
-          {size > AUTO_SWEEP_VECTORS ? `${size} vectors: checked on request. ` : ''}
+          {size > AUTO_SWEEP_VECTORS ? `${countOf(size, 'vector')}: checked on request. ` : ''}
           {start}
           {size > PROGRESS_THRESHOLD_VECTORS ? ' (runs in the background; you can cancel)' : ''}
         </p>
@@ -86,9 +88,7 @@ function SweepTable() {
   return (
     <>
       <p className="rw-figures" data-testid="sweep-summary">
-        {report.summary.vectors} vectors: <strong>{report.summary.errors}</strong> errors,{' '}
-        <strong>{report.summary.warnings}</strong> {report.summary.warnings === 1 ? 'warning' : 'warnings'} ·{' '}
-        {result.elapsedMs.toFixed(0)} ms
+        {summaryLine(report.summary)} · {result.elapsedMs.toFixed(0)} ms
       </p>
       {report.notes.map((n) => (
         <p key={n} className="rw-muted">
@@ -108,7 +108,7 @@ function SweepTable() {
       />
       {shown.length > ROW_LIMIT && (
         <p className="rw-muted" data-testid="table-limit">
-          Showing the first {ROW_LIMIT} of {shown.length} rows: sort or filter to bring others up.
+          Showing the first {ROW_LIMIT} of {countOf(shown.length, 'row')}: sort or filter to bring others up.
         </p>
       )}
     </>
@@ -127,14 +127,14 @@ function UndrivenChoice() {
 
 /** Every vector: sweep status, the sortable, filterable table; a row click selects that vector. */
 export function TableSection() {
-  const errors = useSimulation((s) =>
-    s.sweep.status === 'done' ? s.sweep.result?.report.summary.errors : undefined,
+  const summary = useSimulation((s) =>
+    s.sweep.status === 'done' ? s.sweep.result?.report.summary : undefined,
   );
   return (
     <Section
       title="Every vector"
       testId="table-section"
-      badge={errors === undefined ? undefined : errors === 0 ? '✓ clean' : `◆ ${errors}`}
+      badge={summary === undefined ? undefined : summaryBadge(summary)}
     >
       <UndrivenChoice />
       <SweepStatus />

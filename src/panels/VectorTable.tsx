@@ -1,4 +1,6 @@
-import type { FindingKind } from '../core/analysis/report.ts';
+import type { FindingKind, Level } from '../core/analysis/report.ts';
+import { lookOf } from '../core/view/visualLanguage.ts';
+import { countOf } from '../core/view/plural.ts';
 import { formatCurrent, formatPower } from '../core/view/format.ts';
 import type { RowFilter, SortDirection, SortKey, TableView, VectorRow } from '../core/view/vectorTable.ts';
 
@@ -48,7 +50,7 @@ function FilterChoice({
         value={view.filter}
         onChange={(e) => onView({ ...view, filter: e.target.value as RowFilter })}
       >
-        <option value="all">all {total} vectors</option>
+        <option value="all">all {countOf(total, 'vector')}</option>
         <option value="problems">problem vectors{counts.size === 0 ? ' (none)' : ''}</option>
         <option value="errors">vectors with errors</option>
         {[...counts].map(([kind, n]) => (
@@ -58,6 +60,21 @@ function FilterChoice({
         ))}
       </select>
     </label>
+  );
+}
+
+/**
+ * An output's level as the sheet marks it: a degraded level carries its arrow in the cell itself
+ * ("1↓" a high one threshold short of VDD, "0↑" a low one above ground), not only in the flags.
+ */
+function LevelText({ level, degraded }: { level: Level | undefined; degraded: boolean }) {
+  if (level === undefined) return <>?</>;
+  if (!degraded) return <>{level}</>;
+  const look = lookOf({ level, degraded });
+  return (
+    <span className="rw-degraded" title={`degraded: ${look.description}`}>
+      {look.mark}
+    </span>
   );
 }
 
@@ -75,11 +92,15 @@ function RowView({
       aria-selected={selected}
       onClick={() => onSelect(row.index)}
     >
-      <td>{row.index}</td>
+      <td>{row.index + 1}</td>
       <td className="rw-mono">{inputs.map((n) => row.inputs[n] ?? '·').join('')}</td>
       {outputs.map((o) => (
-        <td key={o} className={`rw-mono rw-level-${row.outputs[o] ?? 'X'}`}>
-          {row.outputs[o] ?? '?'}
+        <td
+          key={o}
+          className={`rw-mono rw-level-${row.outputs[o] ?? 'X'}`}
+          data-testid={`level-${row.index}-${o}`}
+        >
+          <LevelText level={row.outputs[o]} degraded={row.degraded.includes(o)} />
           {row.mismatched.includes(o) && (
             <span className="rw-mismatch" title="differs from the expected function">
               ≠

@@ -5,7 +5,7 @@
 import type { Cell, CellDesign, Design, Instance, Sequence } from '../core/model/design.ts';
 import type { Technology } from '../core/model/technology.ts';
 import type { Sheet } from '../core/sheet/types.ts';
-import { sheetToNetlist, type SheetIssue } from '../core/sheet/toNetlist.ts';
+import { sheetToNetlist, type DerivedNetlist, type SheetIssue } from '../core/sheet/toNetlist.ts';
 import { autoPlace } from '../core/sheet/autoPlace.ts';
 import { samePlainData } from '../core/model/plainData.ts';
 import { designOfCell } from '../core/hierarchy/cellDesign.ts';
@@ -49,7 +49,7 @@ export interface SheetGeometry {
   /** Net name of every wire, by wire id. */
   readonly wireNets: Readonly<Record<string, string>>;
   /** Net name of every part pin, keyed `partId.pin` (pins: gate, drain, source, a, b, net). */
-  readonly pinNets: Readonly<Record<string, string>>;
+  readonly pinNets: ReadonlyMap<string, string>;
   /** Device name of every device part, by part id. */
   readonly partDevices: Readonly<Record<string, string>>;
   /** The inverse: part id of every device name. */
@@ -69,12 +69,26 @@ export interface DerivedDesign {
 }
 
 /**
+ * The netlist of a sheet, remembered per sheet object: an edit that is judged before it is committed
+ * (docs/semantics.md §1) derives its result once, and the commit reuses it.
+ */
+const derivedSheets = new WeakMap<Sheet, { readonly name: string; readonly derived: DerivedNetlist }>();
+
+export function derivedSheet(sheet: Sheet, name: string): DerivedNetlist {
+  const known = derivedSheets.get(sheet);
+  if (known !== undefined && known.name === name) return known.derived;
+  const derived = sheetToNetlist(sheet, name);
+  derivedSheets.set(sheet, { name, derived });
+  return derived;
+}
+
+/**
  * The design of a document: the netlist derived from the sheet. With the design derived before, an
  * unchanged netlist or technology keeps its old object, so "did the circuit change?" is one identity
  * test for everything downstream (moving a part re-derives an equal netlist).
  */
 export function deriveDesign(doc: SheetDocument, before: CellDesign | null = null): DerivedDesign {
-  const d = sheetToNetlist(doc.sheet, doc.name);
+  const d = derivedSheet(doc.sheet, doc.name);
   const openCell = openCellOf(doc, d.netlist);
   const seen = seenFrom(doc, openCell);
   const flat = flattened(doc, openCell, seen.top.name);
@@ -97,7 +111,7 @@ export function deriveDesign(doc: SheetDocument, before: CellDesign | null = nul
     design,
     geometry: {
       wireNets: rename(d.wireNets, (n) => names?.net(n) ?? n),
-      pinNets: rename(d.pinNets, (n) => names?.net(n) ?? n),
+      pinNets: names === null ? d.pinNets : new Map([...d.pinNets].map(([k, v]) => [k, names.net(v)])),
       partDevices,
       deviceParts,
       junctions: d.junctions,

@@ -38,9 +38,20 @@ export type Gesture =
   | { readonly type: 'ghost'; readonly kind: PartKind; readonly at: Point }
   | { readonly type: 'pin'; readonly at: Point };
 
+/**
+ * A line for the designer under the sheet. Errors stay until dismissed (they say what was left
+ * unchanged); warnings and information are about the document as it was, so the next change of the
+ * document clears them.
+ */
 export interface Message {
-  readonly kind: 'error' | 'info';
+  readonly kind: 'error' | 'warning' | 'info';
   readonly text: string;
+}
+
+/** Where an edit made contacts on purpose, or would have made or cut them and was refused. */
+export interface ContactMarks {
+  readonly kind: 'made' | 'refused';
+  readonly at: readonly Point[];
 }
 
 export interface RailwiseState {
@@ -62,6 +73,8 @@ export interface RailwiseState {
   readonly gesture: Gesture | null;
   readonly clipboard: Clip | null;
   readonly message: Message | null;
+  /** Drawn on the sheet until the document next changes (docs/semantics.md §1). */
+  readonly contactMarks: ContactMarks | null;
   readonly overlay: 'help' | 'about' | null;
   /** Size of the sheet area in pixels, kept by the canvas for fit-to-view. */
   readonly screen: { readonly width: number; readonly height: number };
@@ -90,6 +103,7 @@ function initialState(doc: SheetDocument): RailwiseState {
     gesture: null,
     clipboard: null,
     message: null,
+    contactMarks: null,
     overlay: null,
     screen: { width: 800, height: 600 },
     simulation: INITIAL_SIMULATION,
@@ -124,6 +138,8 @@ function applyDoc(doc: SheetDocument, history: HistoryState): void {
     revision,
     netlistRevision: circuitChanged ? revision : s.netlistRevision,
     selection: { ...s.selection, selected: pruneSelection(s.selection.selected, doc.sheet) },
+    message: s.message?.kind === 'error' ? s.message : null,
+    contactMarks: null,
   });
 }
 
@@ -200,6 +216,11 @@ export function redo(): boolean {
   return r !== null;
 }
 
+/** Puts back an undo history kept across a reload (the document itself is already in place). */
+export function restoreHistory(past: readonly SheetDocument[], future: readonly SheetDocument[]): void {
+  store.setState({ history: { past, future, gestureStart: null } });
+}
+
 /** The whole design as it would be saved: every cell, the open one as drawn. */
 export function currentDesign(): Design {
   const s = store.getState();
@@ -244,9 +265,7 @@ export function selectNets(names: readonly string[]): void {
   const { geometry } = store.getState();
   const nets = new Set(names);
   const wires = Object.entries(geometry.wireNets).flatMap(([id, net]) => (nets.has(net) ? [id] : []));
-  const parts = Object.entries(geometry.pinNets).flatMap(([key, net]) =>
-    nets.has(net) ? [key.split('.')[0]!] : [],
-  );
+  const parts = [...geometry.pinNets].flatMap(([key, net]) => (nets.has(net) ? [key.split('.')[0]!] : []));
   setSelection({ parts: [...new Set(parts)], wires });
 }
 
@@ -278,7 +297,11 @@ export function showMessage(kind: Message['kind'], text: string): void {
 }
 
 export function dismissMessage(): void {
-  store.setState({ message: null });
+  store.setState({ message: null, contactMarks: null });
+}
+
+export function setContactMarks(marks: ContactMarks | null): void {
+  store.setState({ contactMarks: marks });
 }
 
 export function setOverlay(overlay: RailwiseState['overlay']): void {

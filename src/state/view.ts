@@ -6,14 +6,35 @@
 import { partBounds, pointsBounds, unionRects, type Rect } from '../core/sheet/geometry.ts';
 import type { ItemIds } from '../core/sheet/selection.ts';
 import { setViewport, store } from './store.ts';
-import { fitRect, zoomAt } from './viewport.ts';
+import { fitRect, minScaleFor, zoomAt } from './viewport.ts';
+import type { Sheet, SheetPart, SheetWire } from '../core/sheet/types.ts';
+
+/** The whole sheet's box, remembered per sheet object: zooming asks for it on every wheel step. */
+const wholeSheetBounds = new WeakMap<Sheet, Rect | null>();
 
 /** The box around the given items, or around the whole sheet; null when there is nothing. */
 export function sheetBounds(ids?: ItemIds): Rect | null {
   const sheet = store.getState().doc.sheet;
-  const parts = ids ? sheet.parts.filter((p) => ids.parts.includes(p.id)) : sheet.parts;
-  const wires = ids ? sheet.wires.filter((w) => ids.wires.includes(w.id)) : sheet.wires;
+  if (!ids) {
+    if (!wholeSheetBounds.has(sheet)) wholeSheetBounds.set(sheet, boundsOf(sheet.parts, sheet.wires));
+    return wholeSheetBounds.get(sheet) ?? null;
+  }
+  const parts = new Set(ids.parts);
+  const wires = new Set(ids.wires);
+  return boundsOf(
+    sheet.parts.filter((p) => parts.has(p.id)),
+    sheet.wires.filter((w) => wires.has(w.id)),
+  );
+}
+
+function boundsOf(parts: readonly SheetPart[], wires: readonly SheetWire[]): Rect | null {
   return unionRects([...parts.map(partBounds), ...wires.flatMap((w) => pointsBounds(w.points) ?? [])]);
+}
+
+/** How far out the wheel and the zoom buttons may go: far enough to see the whole cell. */
+export function zoomFloor(): number {
+  const { screen } = store.getState();
+  return minScaleFor(sheetBounds(), screen.width, screen.height);
 }
 
 export function fitToView(): void {
@@ -35,5 +56,5 @@ export function revealItems(ids: ItemIds): void {
 
 export function zoomBy(factor: number): void {
   const { screen, viewport } = store.getState();
-  setViewport(zoomAt(viewport, { x: screen.width / 2, y: screen.height / 2 }, factor));
+  setViewport(zoomAt(viewport, { x: screen.width / 2, y: screen.height / 2 }, factor, zoomFloor()));
 }

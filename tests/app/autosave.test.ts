@@ -43,14 +43,14 @@ describe('opening the autosaved design', () => {
     expect(storage.getItem(OPENING_KEY)).toBeNull();
   });
 
-  it('sets aside a design whose opening never finished and offers it, losing nothing', () => {
+  it('sets aside a design whose opening never finished and offers it, losing nothing', async () => {
     storage.setItem(AUTOSAVE_KEY, serializeDesign(inverter));
     restoreAutosave(storage); // the page froze here: the mark was never cleared
     const next = restoreAutosave(storage);
     expect(next.design).toBeNull();
     expect(recovery.getState().suspect).toEqual({ name: inverter.name, what: 'autosave' });
     expect(storage.getItem(AUTOSAVE_KEY)).toBeNull();
-    expect(suspectDesign(storage)?.name).toBe(inverter.name);
+    expect((await suspectDesign(storage))?.name).toBe(inverter.name);
     settleSuspect('discarded', storage);
     expect(storage.getItem(SUSPECT_KEY)).toBeNull();
     expect(storage.getItem(RESCUE_KEY)).toBe(serializeDesign(inverter));

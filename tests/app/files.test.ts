@@ -1,6 +1,7 @@
 // Behaviour of our own file handling, not published values: no source applies.
 import { beforeEach, describe, expect, it } from 'vitest';
 import { designFromSpice, openText } from '../../src/app/files.ts';
+import { isPrintable } from '../../src/core/format/printable.ts';
 import { documentFromDesign } from '../../src/state/document.ts';
 import { currentDesign, resetStore, store } from '../../src/state/store.ts';
 import { STARTERS } from '../../src/core/starters/index.ts';
@@ -53,5 +54,49 @@ describe('opening files', () => {
     expect(store.getState().doc.name).toBe('inv');
     expect(store.getState().simulation.libraryView).not.toBeNull();
     expect(store.getState().history.past).toHaveLength(1);
+  });
+
+  it('keeps what the import ignored or folded with the design, as the command line reports it', () => {
+    const text = [
+      '* cell',
+      '.subckt inv a y vdd gnd',
+      'mp y a vdd vdd pmos w=2u l=0.25u m=2 ad=1p as=1p',
+      'mn y a gnd gnd nmos w=1u l=0.25u',
+      '.tran 1n 10n',
+      '.ends',
+    ].join('\n');
+    expect(openText(text, 'inv.sp')).toBe(true);
+    const notes = store.getState().doc.notes!.split('\n');
+    expect(notes[0]).toBe('Imported from inv.sp:');
+    expect(notes.some((n) => n.includes('.tran'))).toBe(true);
+    expect(notes.some((n) => n.includes('ad, as'))).toBe(true);
+    expect(notes.some((n) => n.startsWith('m=') && n.includes('mp'))).toBe(true);
+    expect(store.getState().message?.text).toContain('3 notes');
+    // m=2 folds two 2 µm devices into one of 4 µm (docs/semantics.md §6).
+    expect(store.getState().design.netlist.devices[0]).toMatchObject({ name: 'mp', w: 4 });
+    // The notes are saved with the design and go when dismissed, as one undo step.
+    expect(store.getState().design.notes).toBe(store.getState().doc.notes);
+  });
+
+  it('an import with nothing to say keeps no notes', () => {
+    expect(openText(INVERTER_CELL.join('\n'), 'inv.sp')).toBe(true);
+    expect(store.getState().doc.notes).toBeUndefined();
+  });
+
+  it('refuses a binary file with one readable line, and shows no raw bytes', () => {
+    const before = store.getState().doc;
+    const bytes = Array.from({ length: 300 }, (_, i) => String.fromCharCode((i * 37 + 11) % 256)).join('');
+    expect(openText(`\u0000${bytes}`, 'garbage.sp')).toBe(false);
+    const text = store.getState().message!.text;
+    expect(text).toContain('garbage.sp: not a text file');
+    expect(isPrintable(text)).toBe(true);
+    expect(store.getState().doc).toBe(before);
+  });
+
+  it('quotes a broken line as a short, printable excerpt', () => {
+    expect(openText('{"format": "railwise-design", \u000b "x": 1', 'broken.railwise.json')).toBe(false);
+    const text = store.getState().message!.text;
+    expect(text).toContain('broken.railwise.json');
+    expect(isPrintable(text)).toBe(true);
   });
 });

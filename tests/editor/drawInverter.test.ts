@@ -76,7 +76,7 @@ describe('drawing an inverter with the headless editor', () => {
     expect(wire.points[0]).toEqual({ x: 0, y: -2 });
     expect(wire.points[wire.points.length - 1]).toEqual({ x: 6, y: 4 });
     expect(ed.state().design.netlist.devices[0]).toMatchObject({ drain: 'net1' });
-    expect(ed.state().geometry.pinNets['p2.net']).toBe('net1');
+    expect(ed.state().geometry.pinNets.get('p2.net')).toBe('net1');
   });
 
   it('pressing on an open wire end carries the wire on from there', () => {

@@ -16,8 +16,8 @@ describe('sheetToNetlist', () => {
   it('maps every wire and pin to its net and every device part to its device', () => {
     const d = sheetToNetlist(drawnInverter());
     expect(d.wireNets).toEqual({ w1: 'Y', w2: 'Y', w3: 'A', w4: 'A' });
-    expect(d.pinNets['p1.gate']).toBe('A');
-    expect(d.pinNets['p2.source']).toBe('GND');
+    expect(d.pinNets.get('p1.gate')).toBe('A');
+    expect(d.pinNets.get('p2.source')).toBe('GND');
     expect(d.partDevices).toEqual({ p1: 'P1', p2: 'N1' });
   });
 
@@ -131,5 +131,23 @@ describe('sheetToNetlist', () => {
     const copy = structuredClone(sheet);
     sheetToNetlist(sheet);
     expect(sheet).toEqual(copy);
+  });
+});
+
+describe('connectivity of unusual wires', () => {
+  /** A wire through the given points. */
+  const wire = (id: string, ...xy: [number, number][]) => ({ id, points: xy.map(([x, y]) => ({ x, y })) });
+
+  it('joins a pin in the middle of a wire a million units long, and a slanted segment only at its ends', () => {
+    const sheet = {
+      parts: [part('a', 'label', 'FAR', 500_000, 0), part('b', 'label', 'MID', 3, 3)],
+      // A file may hold a slanted segment; it passes (1,1) and (2,2) without touching them.
+      wires: [wire('long', [-500_000, 0], [700_000, 0]), wire('slant', [0, 0], [3, 3])],
+    };
+    const d = sheetToNetlist(sheet);
+    expect(d.wireNets).toEqual({ long: 'FAR', slant: 'FAR' });
+    expect(d.pinNets.get('b.net')).toBe('FAR');
+    const off = sheetToNetlist({ ...sheet, parts: [part('c', 'label', 'OFF', 1, 1)] });
+    expect(off.wireNets.slant).not.toBe('OFF');
   });
 });

@@ -63,7 +63,7 @@ describe('trace route', () => {
 
   it('gives null when a device of the chain is not drawn', () => {
     expect(
-      traceRoute({ parts: [], wires: [] }, { wireNets: {}, pinNets: {}, deviceParts: {} }, [
+      traceRoute({ parts: [], wires: [] }, { wireNets: {}, pinNets: new Map(), deviceParts: {} }, [
         'VDD',
         'P1',
         'GND',

@@ -24,7 +24,7 @@ describe('vector stepping', () => {
 
   it('round-trips a vector through its index', () => {
     for (let k = 0; k < 8; k++)
-      expect(indexOfVector(['A', 'B', 'C'], vectorOfIndex(['A', 'B', 'C'], k))).toBe(k);
+      expect(indexOfVector(['A', 'B', 'C'], vectorOfIndex(['A', 'B', 'C'], k))).toBe(BigInt(k));
   });
 
   it('wraps forward and back', () => {
@@ -47,6 +47,17 @@ describe('vector stepping', () => {
 
   it('cycles a step cell through 0, 1, Z, X', () => {
     expect(['0', '1', 'Z', 'X'].map((v) => cycledValue(v as '0'))).toEqual(['1', 'Z', 'X', '0']);
+  });
+
+  it('steps exactly on a 65-input cell, past the 2^53 a double holds', () => {
+    const wide = Array.from({ length: 65 }, (_, i) => `I${i}`);
+    const allOnes = Object.fromEntries(wide.map((n) => [n, '1' as const]));
+    // 2^65 − 1 + 1 wraps to 0; the step below it is 2^65 − 2, whose last bit alone is 0.
+    expect(Object.values(stepVector(wide, allOnes, 1)).every((v) => v === '0')).toBe(true);
+    const below = stepVector(wide, allOnes, -1);
+    expect(below.I64).toBe('0');
+    expect(wide.slice(0, 64).every((n) => below[n] === '1')).toBe(true);
+    expect(indexOfVector(wide, below)).toBe(2n ** 65n - 2n);
   });
 
   it('fills missing inputs with 0', () => {

@@ -8,6 +8,7 @@ import type { CellDesign, Sequence } from '../model/design.ts';
 import { cellDesign } from '../hierarchy/cellDesign.ts';
 import { HierarchyError } from '../hierarchy/flatten.ts';
 import type { Netlist } from '../model/netlist.ts';
+import type { Sheet } from '../sheet/types.ts';
 import { DEFAULT_TECHNOLOGY, withVdd, type Technology } from '../model/technology.ts';
 import { expressionNames } from '../expect/names.ts';
 import { ExpressionError, parseExpression } from '../expect/parse.ts';
@@ -35,6 +36,8 @@ export interface CellJob {
   readonly pinsNamed: boolean;
   /** A design file's saved sequences. */
   readonly sequences: readonly Sequence[];
+  /** The drawing, when the file holds one (a design file, or a Railwise export's comment lines). */
+  readonly sheet?: Sheet;
   readonly notes: readonly string[];
 }
 
@@ -136,6 +139,8 @@ function designCells(text: string, file: string, options: LoadOptions): FileCell
       expectationLines: {},
       pinsNamed: true,
       sequences: one.sequences,
+      // The drawing derives the cell's own netlist: the flat one only when it places nothing.
+      ...(c.sheet === undefined || c.instances.length > 0 ? {} : { sheet: c.sheet }),
       notes: [],
     };
     return { job };
@@ -159,6 +164,7 @@ function spiceCells(text: string, file: string, options: LoadOptions): FileCells
       expectationLines: c.expectationLines,
       pinsNamed: c.pinsNamed,
       sequences: [],
+      ...(c.sheet === undefined ? {} : { sheet: c.sheet }),
       notes: [...imported.notes, ...c.notes],
     };
     cells.push({ at: position.get(c.name) ?? 0, cell: { job } });

@@ -17,6 +17,8 @@ import { portUse, GATE, CHANNEL, type NetUse } from './portUse.ts';
 import { readExportedNames, restoreExportedNames, restoreInstance } from './spiceRestore.ts';
 import { applyPinDirectives, readExpectations } from './spiceDirectives.ts';
 import { recordOf } from '../model/records.ts';
+import { readPlacement } from './placementComments.ts';
+import type { Sheet } from '../sheet/types.ts';
 
 export interface ImportedCell {
   readonly name: string;
@@ -30,6 +32,8 @@ export interface ImportedCell {
   readonly pinsNamed: boolean;
   /** Level-1 values of the model cards the devices name (`MosDevice.model`), by card name. */
   readonly models: Readonly<Record<string, DeviceModel>>;
+  /** The drawing a Railwise export carried (placementComments.ts), when it still fits the netlist. */
+  readonly sheet?: Sheet;
   readonly notes: readonly string[];
   /** The cell and every cell it places, as a design holds them (the cell itself last). */
   readonly cells: readonly Cell[];
@@ -89,7 +93,9 @@ export function buildCell(spec: CellSpec, ctx: CellContext): ImportedCell {
   const { name, expectations } = top.cell;
   const { expectationLines, pinsNamed } = top;
   const models = recordOf(finished.flatMap((f) => [...f.models]));
-  return { name, netlist, expectations, expectationLines, pinsNamed, models, notes, cells };
+  const { sheet } = top.cell;
+  const drawn = sheet === undefined ? {} : { sheet };
+  return { name, netlist, expectations, expectationLines, pinsNamed, models, ...drawn, notes, cells };
 }
 
 /** The level-1 values of every card a device of any cell read so far names, by card name. */
@@ -160,6 +166,8 @@ function finish(spec: CellSpec, ctx: CellContext): FinishedCell {
   const parsed = readExportedNames(spec.body.directives, notes, netsOf(read, expectations));
   const names = { ...parsed, cell: ctx.cellNames.get(spec.name.toLowerCase()) ?? spec.name };
   const restored = restoreExportedNames({ netlist, expectations, expectationLines: lines }, names);
+  // The drawing a Railwise export carried, when it still derives the cell's own netlist.
+  const sheet = readPlacement(spec.body.directives, restored.netlist, notes);
   const globals = read.nets.filter((n) => !railNets.has(n) && ctx.isGlobal(n.toLowerCase())).map(names.net);
   const cell: Cell = {
     name: restored.netlist.name,
@@ -168,6 +176,7 @@ function finish(spec: CellSpec, ctx: CellContext): FinishedCell {
     expectations: restored.expectations,
     sequences: [],
     ...(globals.length === 0 ? {} : { globals }),
+    ...(sheet === null ? {} : { sheet }),
   };
   const { expectationLines } = restored;
   const done = { cell, expectationLines, pinsNamed, notes, net: names.net, models: read.models };

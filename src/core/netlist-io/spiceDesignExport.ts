@@ -40,6 +40,7 @@ export function exportSpiceDesign(design: Design): string {
         names: names.get(c) as SpiceNames,
         modelOf: cards.modelOf,
         instances: instanceLines(c, { names, byName, fileNets }),
+        ...(c.sheet === undefined ? {} : { sheet: c.sheet }),
       }),
     ),
     '.end',

@@ -15,6 +15,8 @@ import { modelCards, type ExportCards } from './spiceModelExport.ts';
 
 export { NMOS_MODEL, PMOS_MODEL } from './spiceModelExport.ts';
 import { formatSpiceNumber } from './spiceNumber.ts';
+import type { Sheet } from '../sheet/types.ts';
+import { placementLines } from './placementComments.ts';
 import {
   bareRailName,
   DEFAULT_RAIL_NAMES,
@@ -28,6 +30,8 @@ export const DIODE_MODEL = 'rw_diode';
 export interface SpiceExportOptions {
   /** Expected functions to carry as directives. */
   readonly expectations?: Readonly<Record<string, string>>;
+  /** The drawing, carried in comment lines of our own (placementComments.ts). */
+  readonly sheet?: Sheet;
 }
 
 export function exportSpice(netlist: Netlist, tech: Technology, options: SpiceExportOptions = {}): string {
@@ -37,7 +41,13 @@ export function exportSpice(netlist: Netlist, tech: Technology, options: SpiceEx
   const lines = [
     `* ${names.cell}: exported by Railwise. ${CAUTION}`,
     ...modelLines(tech, cards, netlist.devices),
-    ...subcktLines({ netlist, expectations, names, modelOf: cards.modelOf }),
+    ...subcktLines({
+      netlist,
+      expectations,
+      names,
+      modelOf: cards.modelOf,
+      ...(options.sheet === undefined ? {} : { sheet: options.sheet }),
+    }),
     '.end',
   ];
   return `${lines.join('\n')}\n`;
@@ -70,6 +80,8 @@ export interface SubcktSource {
   readonly modelOf: (d: MosDevice) => string;
   /** Lines after the devices (a design's instances) and the directives they need. */
   readonly instances?: { readonly lines: readonly string[]; readonly directives: readonly string[] };
+  /** The drawing, carried in comment lines of our own (placementComments.ts). */
+  readonly sheet?: Sheet;
 }
 
 /** One cell as `.subckt` … `.ends`: its directives, its devices, then any instances. */
@@ -86,6 +98,7 @@ export function subcktLines(source: SubcktSource): string[] {
     ...impliedBulkLines(netlist, names),
     ...(source.instances?.directives ?? []),
     ...expectations.map(([out, text]) => `* railwise: expect ${net(out)} = ${expressionText(text)}`),
+    ...(source.sheet === undefined ? [] : placementLines(source.sheet)),
     ...netlist.devices.map((d, i) => deviceLine(d, names.device(i), netlist, net, source.modelOf)),
     ...(source.instances?.lines ?? []),
     `.ends ${names.cell}`,

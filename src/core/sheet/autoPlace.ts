@@ -48,19 +48,27 @@ function rowOf(d: Device, dist: ReadonlyMap<string, number>, deepest: number): n
   return Number.isFinite(r) ? r : deepest;
 }
 
-/** Rows counted from the rail; within a row, a device takes the column of one it shares a net with. */
+/**
+ * Rows counted from the rail; within a row, a device takes the column of the first device of the
+ * row before (in placing order) that it shares a channel net with and whose column is still free.
+ * Devices of the row before are found through their nets, so a wide row costs what its nets share,
+ * not the product of the two rows.
+ */
 function assignColumns(slots: Slot[]): void {
-  const rows = [...new Set(slots.map((s) => s.row))].sort((a, b) => a - b);
-  for (const row of rows) {
-    const here = slots.filter((s) => s.row === row);
-    const prev = slots.filter((s) => s.row === row - 1);
+  const byRow = new Map<number, Slot[]>();
+  for (const s of slots) (byRow.get(s.row) ?? byRow.set(s.row, []).get(s.row)!).push(s);
+  for (const row of [...byRow.keys()].sort((a, b) => a - b)) {
+    const before = new Map<string, number[]>();
+    const prev = byRow.get(row - 1) ?? [];
+    prev.forEach((p, i) => {
+      for (const n of channelNets(p.device) ?? []) (before.get(n) ?? before.set(n, []).get(n)!).push(i);
+    });
     const used = new Set<number>();
-    for (const slot of here) {
-      const mine: readonly string[] = channelNets(slot.device) ?? [];
-      const below = prev.find(
-        (p) => !used.has(p.column) && (channelNets(p.device) ?? []).some((n) => mine.includes(n)),
-      );
-      let col = below ? below.column : 0;
+    for (const slot of byRow.get(row)!) {
+      let first = Infinity;
+      for (const n of channelNets(slot.device) ?? [])
+        for (const i of before.get(n) ?? []) if (i < first && !used.has(prev[i]!.column)) first = i;
+      let col = first === Infinity ? 0 : prev[first]!.column;
       while (used.has(col)) col++;
       slot.column = col;
       used.add(col);
@@ -229,19 +237,30 @@ class SheetBuilder {
     }
   }
 
+  /** Pins by row (y), for the clear-run test of output wires; built once all but the outputs are placed. */
+  private rowPins: Map<number, { x: number; part: SheetPart }[]> | null = null;
+
+  private pinsOnRow(y: number): readonly { x: number; part: SheetPart }[] {
+    if (this.rowPins === null) {
+      this.rowPins = new Map();
+      for (const part of this.parts)
+        for (const q of pinPositions(part))
+          (this.rowPins.get(q.y) ?? this.rowPins.set(q.y, []).get(q.y)!).push({ x: q.x, part });
+    }
+    return this.rowPins.get(y) ?? [];
+  }
+
   /**
    * Draws the output pin's wire when a label of its net sits on the pin's row with a clear run to
    * it (no other pin on the way, which would join a foreign net); otherwise the name joins them.
+   * Output pins stand right of everything else, so the ones placed meanwhile never block a run.
    */
   wireToOutput(net: string, at: Point): void {
-    const start = this.parts
-      .filter((p) => p.kind === 'label' && p.name === net && p.y === at.y && p.x < at.x)
-      .sort((a, b) => b.x - a.x)[0];
+    const row = this.pinsOnRow(at.y);
+    const labels = row.filter(({ part: p }) => p.kind === 'label' && p.name === net && p.x < at.x);
+    const start = labels.map((l) => l.part).sort((a, b) => b.x - a.x)[0];
     if (!start) return;
-    const blocked = this.parts.some(
-      (part) =>
-        part !== start && pinPositions(part).some((q) => q.y === at.y && q.x >= start.x && q.x < at.x),
-    );
+    const blocked = row.some(({ x, part }) => part !== start && x >= start.x && x < at.x);
     if (blocked) return;
     this.wires.push({ id: `w${this.wires.length + 1}`, points: [{ x: start.x, y: at.y }, at] });
     // The label turns to the left so its text does not sit on the new wire.

@@ -6,7 +6,7 @@
 import type { Device, Netlist, Rail } from '../model/netlist.ts';
 import type { Sheet, SheetPart } from './types.ts';
 import { isDevicePart, partSpec, type NetRole } from './parts/index.ts';
-import { pinKey, sheetConnectivity, wireKey, type UnionFind } from './connectivity.ts';
+import { sheetConnectivity, type SheetConnectivity } from './connectivity.ts';
 import { nameRecord } from '../model/records.ts';
 
 export interface SheetIssue {
@@ -19,8 +19,8 @@ export interface DerivedNetlist {
   readonly netlist: Netlist;
   /** Net of every wire, by wire id. */
   readonly wireNets: Readonly<Record<string, string>>;
-  /** Net of every pin, keyed `partId.pin`. */
-  readonly pinNets: Readonly<Record<string, string>>;
+  /** Net of every pin, keyed `partId.pin` (a map: a big sheet has tens of thousands of pins). */
+  readonly pinNets: ReadonlyMap<string, string>;
   /** Device name of every device part, by part id. */
   readonly partDevices: Readonly<Record<string, string>>;
   readonly junctions: readonly { readonly x: number; readonly y: number }[];
@@ -42,23 +42,25 @@ function namingRole(part: SheetPart): NetRole | null {
 }
 
 /** Joins every group that carries the same name: equal labels, pins and rails are one net. */
-function joinEqualNames(sheet: Sheet, groups: UnionFind): void {
-  const firstWithName = new Map<string, string>();
-  for (const part of sheet.parts) {
-    if (namingRole(part) === null || part.name === '') continue;
-    const key = pinKey(part.id, 'net');
+function joinEqualNames(sheet: Sheet, c: SheetConnectivity): void {
+  const firstWithName = new Map<string, number>();
+  sheet.parts.forEach((part, i) => {
+    if (namingRole(part) === null || part.name === '') return;
+    // A naming part has the one pin `net`.
+    const item = c.firstPin[i]!;
     const first = firstWithName.get(part.name);
-    if (first === undefined) firstWithName.set(part.name, key);
-    else groups.union(first, key);
-  }
+    if (first === undefined) firstWithName.set(part.name, item);
+    else c.groups.union(first, item);
+  });
 }
 
-function collectClaims(sheet: Sheet, groups: UnionFind): Map<string, NameClaim[]> {
-  const claims = new Map<string, NameClaim[]>();
-  for (const part of sheet.parts) {
+function collectClaims(sheet: Sheet, c: SheetConnectivity): Map<number, NameClaim[]> {
+  const claims = new Map<number, NameClaim[]>();
+  for (let i = 0; i < sheet.parts.length; i++) {
+    const part = sheet.parts[i]!;
     const role = namingRole(part);
     if (role === null || part.name === '') continue;
-    const root = groups.find(pinKey(part.id, 'net'));
+    const root = c.groups.find(c.firstPin[i]!);
     const claim = { name: part.name, role, partId: part.id };
     const list = claims.get(root);
     if (list) list.push(claim);
@@ -87,13 +89,13 @@ function pickName(claims: readonly NameClaim[], issues: SheetIssue[]): NameClaim
 }
 
 /** Names every group: a function from group root to net name, numbering unnamed nets lazily. */
-function nameGroups(sheet: Sheet, groups: UnionFind, issues: SheetIssue[]): (root: string) => string {
-  const claims = collectClaims(sheet, groups);
-  const names = new Map<string, string>();
+function nameGroups(sheet: Sheet, c: SheetConnectivity, issues: SheetIssue[]): (root: number) => string {
+  const claims = collectClaims(sheet, c);
+  const names = new Map<number, string>();
   for (const [root, list] of claims) names.set(root, pickName(list, issues).name);
   const taken = new Set(names.values());
   let counter = 0;
-  const nameOf = (root: string): string => {
+  const nameOf = (root: number): string => {
     let n = names.get(root);
     if (n === undefined) {
       do n = `net${++counter}`;
@@ -142,21 +144,28 @@ function contribute(part: SheetPart, netOf: (pin: string) => string, into: Contr
 
 export function sheetToNetlist(sheet: Sheet, name = 'cell'): DerivedNetlist {
   const issues: SheetIssue[] = [];
-  const { groups, junctions, openEnds } = sheetConnectivity(sheet);
-  joinEqualNames(sheet, groups);
-  const nameOf = nameGroups(sheet, groups, issues);
-  const pinNets = nameRecord<string>();
+  const c = sheetConnectivity(sheet);
+  const { groups, junctions, openEnds } = c;
+  joinEqualNames(sheet, c);
+  const nameOf = nameGroups(sheet, c, issues);
+  const pinNets = new Map<string, string>();
   const partDevices = nameRecord<string>();
   const found: Contributions = { devices: [], rails: [], inputs: [], outputs: [] };
-  for (const part of sheet.parts) {
-    const netOf = (pin: string): string => nameOf(groups.find(pinKey(part.id, pin)));
-    for (const pin of partSpec(part.kind).pins) pinNets[`${part.id}.${pin.name}`] = netOf(pin.name);
+  sheet.parts.forEach((part, i) => {
+    const pins = partSpec(part.kind).pins;
+    const first = c.firstPin[i]!;
+    for (let k = 0; k < pins.length; k++)
+      pinNets.set(`${part.id}.${pins[k]!.name}`, nameOf(groups.find(first + k)));
     if (isDevicePart(part.kind)) partDevices[part.id] = part.name;
+    const netOf = (pin: string): string => {
+      const k = pins.findIndex((p) => p.name === pin);
+      return k < 0 ? unknownPin(part, pin) : nameOf(groups.find(first + k));
+    };
     contribute(part, netOf, found);
-  }
+  });
   reportDuplicateDevices(sheet, issues);
   const wireNets = nameRecord<string>();
-  for (const wire of sheet.wires) wireNets[wire.id] = nameOf(groups.find(wireKey(wire.id)));
+  sheet.wires.forEach((wire, w) => (wireNets[wire.id] = nameOf(groups.find(c.wireBase + w))));
   const railNets = new Set(found.rails.map((r) => r.net));
   const netlist: Netlist = {
     name,
@@ -166,6 +175,10 @@ export function sheetToNetlist(sheet: Sheet, name = 'cell'): DerivedNetlist {
     outputs: uniqueInOrder(found.outputs),
   };
   return { netlist, wireNets, pinNets, partDevices, junctions, openEnds, issues };
+}
+
+function unknownPin(part: SheetPart, pin: string): never {
+  throw new Error(`a ${part.kind} has no pin ${pin}`);
 }
 
 function reportDuplicateDevices(sheet: Sheet, issues: SheetIssue[]): void {

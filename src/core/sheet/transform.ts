@@ -1,14 +1,18 @@
 /**
- * Moving, rotating and mirroring a selection. Wires that are not selected but end on a moved pin
- * (or on the end of a moved wire) follow: their end moves and the path stays orthogonal. Rails,
- * pins and labels sitting directly on a moved part's pin travel with it, so a move never silently
- * cuts a connection made by touching pins.
+ * Moving, rotating and mirroring a selection, keeping every connection (docs/semantics.md §1).
+ * Wires that are not selected but end on a moved pin, or along a moved wire, follow: their end
+ * moves and the path stays orthogonal. Rails, pins and labels sitting directly on a moved part's
+ * pin travel with it. A staying pin, or the middle of a staying wire, that touched something moved
+ * gets a short wire from the old spot to the new one (keepContacts.ts). Whether the result makes a
+ * new contact is for the caller to judge (netChanges.ts).
  */
 import type { Point, Sheet, SheetPart, SheetWire } from './types.ts';
 import type { ItemIds } from './selection.ts';
 import { nextRotation, partBounds, pinPositions, pointKey, pointsBounds, unionRects } from './geometry.ts';
-import { normalizePath } from './routing.ts';
+import { elbowRoute, normalizePath } from './routing.ts';
 import { isDevicePart } from './parts/index.ts';
+import { stayingContacts } from './keepContacts.ts';
+import { nextWireId } from './naming.ts';
 
 type PointMap = (p: Point) => Point;
 
@@ -19,9 +23,11 @@ function transformItems(
   mapPart: (p: SheetPart) => SheetPart,
   mapPoint: PointMap,
 ): Sheet {
-  const partSet = withAttachedNames(sheet, ids.parts);
+  const partSet = movingParts(sheet, ids);
   const wireSet = new Set(ids.wires);
+  const contacts = stayingContacts(sheet, partSet, wireSet);
   const moves = new Map<string, Point>();
+  for (const p of contacts.follow) moves.set(pointKey(p), mapPoint(p));
   const parts = sheet.parts.map((part) => {
     if (!partSet.has(part.id)) return part;
     const next = mapPart(part);
@@ -35,7 +41,23 @@ function transformItems(
     for (const i of [0, wire.points.length - 1]) moves.set(pointKey(wire.points[i]!), points[i]!);
     return { ...wire, points };
   });
-  return { parts, wires: wires.map((w) => (wireSet.has(w.id) ? w : followEnds(w, moves))) };
+  const followed = wires.map((w) => (wireSet.has(w.id) ? w : followEnds(w, moves)));
+  return { parts, wires: [...followed, ...tethers(sheet, contacts.tether, mapPoint)] };
+}
+
+/** A short wire from each spot that stays to where it moved, so the contact holds. */
+function tethers(sheet: Sheet, spots: readonly Point[], mapPoint: PointMap): SheetWire[] {
+  return spots
+    .flatMap((p) => {
+      const q = mapPoint(p);
+      return p.x === q.x && p.y === q.y ? [] : [elbowRoute(p, q, true)];
+    })
+    .map((points, i) => ({ id: nextWireId(sheet, i), points }));
+}
+
+/** What a selection moves: its parts plus the names that sit on their pins (see withAttachedNames). */
+export function movingParts(sheet: Sheet, ids: ItemIds): ReadonlySet<string> {
+  return withAttachedNames(sheet, ids.parts);
 }
 
 /** The selected parts plus every single-pin naming part whose pin sits on one of their pins. */

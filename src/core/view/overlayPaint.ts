@@ -7,7 +7,7 @@
  * drawing and is built once per edit; painting a vector then only looks up each net's state.
  */
 import type { Point, Sheet } from '../sheet/types.ts';
-import { toWorld } from '../sheet/geometry.ts';
+import { toWorld, type Rect } from '../sheet/geometry.ts';
 import { pinLeads } from './pinLeads.ts';
 import {
   lookOf,
@@ -21,7 +21,7 @@ import {
 /** The editor's derived facts the overlay reads. */
 export interface PaintGeometry {
   readonly wireNets: Readonly<Record<string, string>>;
-  readonly pinNets: Readonly<Record<string, string>>;
+  readonly pinNets: ReadonlyMap<string, string>;
   readonly partDevices: Readonly<Record<string, string>>;
 }
 
@@ -54,11 +54,21 @@ export interface PaintedDevice {
   readonly conduction: Conduction;
 }
 
+/** A drawn net's look and mark text for one vector. */
+export interface NetPaint {
+  readonly look: LookName;
+  readonly text: string;
+}
+
 export interface OverlayPaint {
   /** Polylines per look. */
   readonly strokes: ReadonlyMap<LookName, readonly (readonly number[])[]>;
   readonly marks: readonly PaintedMark[];
   readonly devices: readonly PaintedDevice[];
+  /** Each layout net's paint (null: not solved), by its position in `layout.nets`. */
+  readonly nets: readonly (NetPaint | null)[];
+  /** Each layout device's state, by its position in `layout.devices`. */
+  readonly conduction: readonly (Conduction | undefined)[];
 }
 
 /** In the empty corner between the gate lead and the drain lead of the MOS symbol (local units). */
@@ -103,7 +113,7 @@ export function paintLayout(sheet: Sheet, geometry: PaintGeometry): PaintLayout 
   layWires(b, sheet, geometry);
   for (const part of sheet.parts) {
     for (const lead of pinLeads(part)) {
-      const net = geometry.pinNets[`${part.id}.${lead.pin}`];
+      const net = geometry.pinNets.get(`${part.id}.${lead.pin}`);
       if (net === undefined) continue;
       b.segments.push({ net: b.id(net), points: [lead.from.x, lead.from.y, lead.to.x, lead.to.y] });
       if (NAMING_KINDS.has(part.kind))
@@ -128,7 +138,7 @@ export function overlayPaint(
   device: (name: string) => Conduction | undefined,
 ): OverlayPaint {
   // Each drawn net's look and mark, worked out once: a net has many segments.
-  const looks = layout.nets.map((name) => {
+  const looks = layout.nets.map((name): NetPaint | null => {
     const state = net(name);
     return state === undefined ? null : { look: lookOf(state).name, text: markText(state) };
   });
@@ -147,9 +157,58 @@ export function overlayPaint(
       marks.push({ x: m.x, y: m.y, text: entry.text, look: entry.look });
   }
   const devices: PaintedDevice[] = [];
-  for (const d of layout.devices) {
-    const conduction = device(d.name);
-    if (conduction !== undefined) devices.push({ x: d.x, y: d.y, conduction });
+  const conduction = layout.devices.map((d) => device(d.name));
+  layout.devices.forEach((d, i) => {
+    const c = conduction[i];
+    if (c !== undefined) devices.push({ x: d.x, y: d.y, conduction: c });
+  });
+  return { strokes, marks, devices, nets: looks, conduction };
+}
+
+/** The box around a flat x, y list. */
+export function segmentBox(points: readonly number[]): Rect {
+  let [x0, y0, x1, y1] = [Infinity, Infinity, -Infinity, -Infinity];
+  for (let i = 0; i + 1 < points.length; i += 2) {
+    [x0, x1] = [Math.min(x0, points[i]!), Math.max(x1, points[i]!)];
+    [y0, y1] = [Math.min(y0, points[i + 1]!), Math.max(y1, points[i + 1]!)];
   }
-  return { strokes, marks, devices };
+  return { x0, y0, x1, y1 };
+}
+
+/** How far a level mark's text reaches from its anchor (bold, 0.55 units high; generous). */
+const MARK_REACH = { x: 3, y: 1 };
+/** A device mark's radius, with its stroke. */
+const DEVICE_REACH = 0.45;
+
+function sameNetPaint(a: NetPaint | null | undefined, b: NetPaint | null | undefined): boolean {
+  return a === b || (a != null && b != null && a.look === b.look && a.text === b.text);
+}
+
+/**
+ * Where two paints of one layout differ: the segments and marks of every net whose look or mark
+ * changed, and every device whose state changed (sheet units). A toggle that changes a few nets
+ * repaints a few small areas.
+ */
+export function changedPaintAreas(layout: PaintLayout, before: OverlayPaint, after: OverlayPaint): Rect[] {
+  const changed = layout.nets.map((_, i) => !sameNetPaint(before.nets[i], after.nets[i]));
+  const areas: Rect[] = [];
+  for (const segment of layout.segments) if (changed[segment.net]) areas.push(segmentBox(segment.points));
+  for (const m of layout.marks)
+    if (changed[m.net])
+      areas.push({
+        x0: m.x - 0.5,
+        y0: m.y - MARK_REACH.y / 2,
+        x1: m.x + MARK_REACH.x,
+        y1: m.y + MARK_REACH.y,
+      });
+  layout.devices.forEach((d, i) => {
+    if (before.conduction[i] !== after.conduction[i])
+      areas.push({
+        x0: d.x - DEVICE_REACH,
+        y0: d.y - DEVICE_REACH,
+        x1: d.x + DEVICE_REACH,
+        y1: d.y + DEVICE_REACH,
+      });
+  });
+  return areas;
 }

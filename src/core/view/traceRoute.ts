@@ -9,7 +9,7 @@ import type { Point, Sheet, SheetPart } from '../sheet/types.ts';
 /** The parts of the editor's derived geometry the route needs. */
 export interface RouteGeometry {
   readonly wireNets: Readonly<Record<string, string>>;
-  readonly pinNets: Readonly<Record<string, string>>;
+  readonly pinNets: ReadonlyMap<string, string>;
   readonly deviceParts: Readonly<Record<string, string>>;
 }
 
@@ -87,7 +87,7 @@ function pinOnNet(
   not?: string,
 ): { pin: string; at: Point } | null {
   for (const pin of CHANNEL_PINS) {
-    if (pin === not || geometry.pinNets[`${part.id}.${pin}`] !== net) continue;
+    if (pin === not || geometry.pinNets.get(`${part.id}.${pin}`) !== net) continue;
     const at = pinPosition(part, pin);
     if (at !== null) return { pin, at };
   }
@@ -98,7 +98,7 @@ function pinOnNet(
 function sourcePins(sheet: Sheet, geometry: RouteGeometry, net: string): Point[] {
   return sheet.parts.flatMap((p) => {
     const at =
-      SOURCE_KINDS.has(p.kind) && geometry.pinNets[`${p.id}.net`] === net ? pinPosition(p, 'net') : null;
+      SOURCE_KINDS.has(p.kind) && geometry.pinNets.get(`${p.id}.net`) === net ? pinPosition(p, 'net') : null;
     return at === null ? [] : [at];
   });
 }

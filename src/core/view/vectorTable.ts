@@ -16,6 +16,8 @@ export interface VectorRow {
   readonly warnings: number;
   /** Outputs that differ from their expected function. */
   readonly mismatched: readonly string[];
+  /** Outputs whose level arrives through a threshold drop (a `degraded` finding names them). */
+  readonly degraded: readonly string[];
   readonly supplyCurrent: number;
   readonly staticPower: number;
 }
@@ -58,7 +60,10 @@ function countSeverity(vector: VectorReport, severity: Severity): number {
 
 export function vectorRow(vector: VectorReport, index: number): VectorRow {
   const present = new Set(vector.findings.map((f) => f.kind));
-  const mismatched = new Set(vector.findings.filter((f) => f.kind === 'mismatch').flatMap((f) => f.nets));
+  const named = (kind: FindingKind): Set<string> =>
+    new Set(vector.findings.filter((f) => f.kind === kind).flatMap((f) => f.nets));
+  const mismatched = named('mismatch');
+  const degraded = named('degraded');
   return {
     index,
     inputs: vector.inputs,
@@ -67,6 +72,7 @@ export function vectorRow(vector: VectorReport, index: number): VectorRow {
     errors: countSeverity(vector, 'error'),
     warnings: countSeverity(vector, 'warning'),
     mismatched: Object.keys(vector.outputs).filter((o) => mismatched.has(o)),
+    degraded: Object.keys(vector.outputs).filter((o) => degraded.has(o)),
     supplyCurrent: vector.supplyCurrent,
     staticPower: vector.staticPower,
   };

@@ -1,40 +1,49 @@
 import { useEffect, useMemo, useRef, useState } from 'react';
-import { Label, Layer, Tag, Text } from 'react-konva';
+import { Group, Label, Layer, Tag, Text } from 'react-konva';
 import type Konva from 'konva';
 import { hitTest, type Hit } from '../../core/sheet/hitTest.ts';
 import type { Point, Sheet } from '../../core/sheet/types.ts';
 import { formatVolts } from '../../core/view/format.ts';
-import { overlayPaint, paintLayout } from '../../core/view/overlayPaint.ts';
+import {
+  changedPaintAreas,
+  overlayPaint,
+  paintLayout,
+  type OverlayPaint,
+  type PaintLayout,
+} from '../../core/view/overlayPaint.ts';
+import type { Rect } from '../../core/sheet/geometry.ts';
 import { traceRoute } from '../../core/view/traceRoute.ts';
-import { lookOf, type LookName } from '../../core/view/visualLanguage.ts';
+import { lookOf } from '../../core/view/visualLanguage.ts';
 import { toggleInput, useSimulation } from '../../state/simulation.ts';
 import type { SheetGeometry } from '../../state/document.ts';
 import { useStore } from '../../state/store.ts';
 import { indexFor } from '../tools/sheetIndex.ts';
 import { CurrentTrace } from './CurrentTraces.tsx';
-import { DevicePainter, MarkPainter, StrokePainter } from './Painters.tsx';
+import { CachedShape } from '../canvas/CachedShape.tsx';
+import { sheetInk } from '../canvas/inkBounds.ts';
+import { paintOverlay } from './overlayPainter.ts';
 
 type Hover = { readonly net: string; readonly at: Point } | null;
 
 function netOfHit(hit: Hit | null, geometry: SheetGeometry): string | undefined {
   if (hit === null) return undefined;
   if (hit.type === 'wire') return geometry.wireNets[hit.wireId];
-  if (hit.type === 'pin') return geometry.pinNets[`${hit.partId}.${hit.pin}`];
-  return geometry.pinNets[`${hit.partId}.net`];
+  if (hit.type === 'pin') return geometry.pinNets.get(`${hit.partId}.${hit.pin}`);
+  return geometry.pinNets.get(`${hit.partId}.net`);
 }
 
 /** The input pin under the pointer, if any: double-clicking it flips that input. */
 function inputOfHit(hit: Hit | null, sheet: Sheet, geometry: SheetGeometry): string | undefined {
   if (hit === null || hit.type === 'wire') return undefined;
   const part = sheet.parts.find((p) => p.id === hit.partId);
-  return part?.kind === 'input' ? geometry.pinNets[`${part.id}.net`] : undefined;
+  return part?.kind === 'input' ? geometry.pinNets.get(`${part.id}.net`) : undefined;
 }
 
 /**
  * Pointer on the sheet, found by pure hit testing: the estimated voltage of the wire or pin under
  * it, and a double-click on an input pin flips that input (the same action as its bit in the panel).
  */
-function PointerLayer() {
+export function PointerLayer() {
   const layer = useRef<Konva.Layer>(null);
   const sheet = useStore((s) => s.doc.sheet);
   const geometry = useStore((s) => s.geometry);
@@ -78,6 +87,32 @@ function PointerLayer() {
   );
 }
 
+/** What changed since the last paint: only the nets and devices a toggle moved, or all of it. */
+function usePaintChanges(layout: PaintLayout | null, paint: OverlayPaint | null): readonly Rect[] | 'all' {
+  const last = useRef<{ layout: PaintLayout | null; paint: OverlayPaint | null }>({
+    layout: null,
+    paint: null,
+  });
+  return useMemo(() => {
+    const before = last.current;
+    last.current = { layout, paint };
+    if (layout === null || paint === null || before.layout !== layout || before.paint === null) return 'all';
+    return changedPaintAreas(layout, before.paint, paint);
+  }, [layout, paint]);
+}
+
+/** The levels as a cached bitmap: a toggle repaints the areas of the nets it changed. */
+function LevelLayer({ layout, paint, sheet }: { layout: PaintLayout; paint: OverlayPaint; sheet: Sheet }) {
+  const changed = usePaintChanges(layout, paint);
+  const painter = useMemo(
+    () => (ctx: CanvasRenderingContext2D, area: Rect, scale: number) =>
+      paintOverlay(ctx, area, scale, { layout, paint }),
+    [layout, paint],
+  );
+  const bounds = useMemo(() => sheetInk(sheet), [sheet]);
+  return <CachedShape paint={painter} bounds={bounds} changed={changed} />;
+}
+
 /**
  * The simulation drawn over the sheet for the selected vector: every wire and pin lead in its
  * level's look with a mark, each transistor's on/off/maybe shape, static current paths as glowing
@@ -87,7 +122,6 @@ export function SimulationOverlay() {
   const live = useSimulation((s) => s.live);
   const sheet = useStore((s) => s.doc.sheet);
   const geometry = useStore((s) => s.geometry);
-  const scale = useStore((s) => s.viewport.scale);
   // While a drag is in progress the levels are stale until it ends (the design is re-derived then),
   // so the overlay steps aside rather than re-laying every wire on every frame.
   const dragging = useStore((s) => s.history.gestureStart !== null);
@@ -111,22 +145,17 @@ export function SimulationOverlay() {
         : live.traces.map((t) => ({ trace: t, route: traceRoute(sheet, geometry, t.chain) })),
     [live, dragging, sheet, geometry],
   );
-  if (paint === null) return null;
+  if (paint === null || layout === null) return null;
   return (
     <>
-      <Layer listening={false}>
-        {[...paint.strokes].map(([look, lines]) => (
-          <StrokePainter key={look} look={look as LookName} lines={lines} scale={scale} />
-        ))}
-        <DevicePainter devices={paint.devices} />
+      <LevelLayer layout={layout} paint={paint} sheet={sheet} />
+      <Group listening={false}>
         {routes.map(({ trace, route }, i) =>
           route === null ? null : (
             <CurrentTrace key={`${trace.chain.join('>')}-${i}`} route={route} current={trace.current} />
           ),
         )}
-        <MarkPainter marks={paint.marks} />
-      </Layer>
-      <PointerLayer />
+      </Group>
     </>
   );
 }

@@ -1,11 +1,14 @@
 /**
  * Placing a part: a ghost follows the pointer (snapped); a click places the part and selects it.
- * Shift-click keeps the tool for another of the same kind; otherwise the select tool returns.
+ * Its pins connect to the pins and wires they land on (marked on the sheet); a spot where a pin
+ * would join two nets is refused (../arrange.ts). Shift-click keeps the tool for another of the same
+ * kind; otherwise the select tool returns.
  */
 import type { PartKind } from '../../core/sheet/types.ts';
 import { snapPoint } from '../../core/sheet/geometry.ts';
 import { addPart } from '../../core/sheet/edits.ts';
-import { commitDoc, setGesture, setSelection, store } from '../../state/store.ts';
+import { setGesture, setSelection, store } from '../../state/store.ts';
+import { placePart } from '../arrange.ts';
 import type { ToolMachine } from './types.ts';
 
 export function createPlaceTool(kind: PartKind, onDone: () => void): ToolMachine {
@@ -18,9 +21,10 @@ export function createPlaceTool(kind: PartKind, onDone: () => void): ToolMachine
     },
     up(e) {
       if (e.button !== 0) return;
-      commitDoc((doc) => ({ ...doc, sheet: addPart(doc.sheet, { kind, at: snapPoint(e.at) }) }));
-      const parts = store.getState().doc.sheet.parts;
-      setSelection({ parts: [parts[parts.length - 1]!.id], wires: [] });
+      const next = addPart(store.getState().doc.sheet, { kind, at: snapPoint(e.at) });
+      const placed = next.parts[next.parts.length - 1]!.id;
+      if (!placePart(next, placed)) return;
+      setSelection({ parts: [placed], wires: [] });
       if (!e.shift) {
         setGesture(null);
         onDone();

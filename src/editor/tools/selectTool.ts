@@ -12,10 +12,10 @@ import { indexFor } from './sheetIndex.ts';
 import { moveItems } from '../../core/sheet/transform.ts';
 import { toggleItems } from '../../state/selection.ts';
 import type { SheetDocument } from '../../state/document.ts';
+import { finishMove } from '../arrange.ts';
 import {
   beginGesture,
   cancelGesture,
-  endGesture,
   previewDoc,
   setGesture,
   setSelection,
@@ -121,7 +121,7 @@ export function createSelectTool(startWire: (at: Point) => void): ToolMachine {
       }
     },
     up(e) {
-      if (s.name === 'dragging') endGesture();
+      if (s.name === 'dragging') finishMove(s.ids);
       if (s.name === 'boxing') {
         const found = itemsInRect(store.getState().doc.sheet, normalizeRect(s.start, e.at));
         const sel = store.getState().selection.selected;

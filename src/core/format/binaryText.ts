@@ -1,10 +1,11 @@
 /**
  * Tells a binary file from text before any reader sees it, so a wrong file (an executable, an
  * archive, a picture) gets one clear line instead of a parser's complaint about its first bytes.
+ * The command line and the app refuse such a file alike.
  * Text files never hold NUL characters; a file read as UTF-8 that is mostly U+FFFD was not UTF-8
  * text (common practice, no source).
  */
-import { printable } from '../core/format/printable.ts';
+import { printable } from './printable.ts';
 
 const SAMPLE = 8192;
 

@@ -1,0 +1,121 @@
+/**
+ * The levels of one vector painted into an area (sheet units): every wire and pin lead in its
+ * level's look, the level marks with their problem badges, each transistor's on/off/maybe shape.
+ * One path and one stroke per look, so a big sheet costs a few canvas calls; what to paint comes
+ * from the pure paint model (core/view/overlayPaint.ts), which tests read without a canvas.
+ */
+import type { Rect } from '../../core/sheet/geometry.ts';
+import { segmentBox, type OverlayPaint, type PaintLayout } from '../../core/view/overlayPaint.ts';
+import { LOOKS, type Conduction, type LookName } from '../../core/view/visualLanguage.ts';
+import { SHEET_THEME } from '../theme.ts';
+
+/** Level strokes sit over the scene's wires, a little wider so the ink shows as an outline. */
+export const LEVEL_STROKE = 0.2;
+const MARK_FONT = 0.55;
+const RADIUS = 0.28;
+const DEVICE_STYLE: Readonly<Record<Conduction, { fill: string; stroke: string; text: string }>> = {
+  on: { fill: '#2f6b3a', stroke: '#2f6b3a', text: '' },
+  off: { fill: SHEET_THEME.background, stroke: '#8d8d8d', text: '' },
+  maybe: { fill: SHEET_THEME.background, stroke: '#b3243c', text: '?' },
+};
+
+function meets(points: readonly number[], area: Rect): boolean {
+  const b = segmentBox(points);
+  return b.x0 <= area.x1 && area.x0 <= b.x1 && b.y0 <= area.y1 && area.y0 <= b.y1;
+}
+
+/** What the overlay paints: the drawing's layout and one vector's paint on it. */
+export interface LevelScene {
+  readonly layout: PaintLayout;
+  readonly paint: OverlayPaint;
+}
+
+function paintStrokes(
+  ctx: CanvasRenderingContext2D,
+  area: Rect,
+  scale: number,
+  { layout, paint }: LevelScene,
+): void {
+  const byLook = new Map<LookName, (readonly number[])[]>();
+  for (const segment of layout.segments) {
+    const entry = paint.nets[segment.net];
+    if (entry == null || !meets(segment.points, area)) continue;
+    const list = byLook.get(entry.look);
+    if (list) list.push(segment.points);
+    else byLook.set(entry.look, [segment.points]);
+  }
+  ctx.lineCap = 'butt';
+  ctx.lineJoin = 'round';
+  ctx.lineWidth = LEVEL_STROKE;
+  ctx.globalAlpha = 0.9;
+  for (const [look, lines] of byLook) {
+    const style = LOOKS[look];
+    ctx.beginPath();
+    for (const l of lines) {
+      ctx.moveTo(l[0]!, l[1]!);
+      for (let i = 2; i + 1 < l.length; i += 2) ctx.lineTo(l[i]!, l[i + 1]!);
+    }
+    // Dash lengths are in pixels, so they read the same at every zoom.
+    ctx.setLineDash(style.dash.map((d) => d / scale));
+    ctx.strokeStyle = style.colour;
+    ctx.stroke();
+  }
+  ctx.setLineDash([]);
+  ctx.globalAlpha = 1;
+}
+
+/** Level marks and problem badges as text, haloed in the sheet colour so they read over ink. */
+function paintMarks(ctx: CanvasRenderingContext2D, area: Rect, paint: OverlayPaint): void {
+  ctx.font = `bold ${MARK_FONT}px sans-serif`;
+  ctx.textBaseline = 'top';
+  ctx.textAlign = 'left';
+  ctx.lineWidth = 0.12;
+  ctx.strokeStyle = SHEET_THEME.background;
+  for (const m of paint.marks) {
+    if (m.x > area.x1 || m.y > area.y1 || m.x + 3 < area.x0 || m.y + 1 < area.y0) continue;
+    ctx.strokeText(m.text, m.x, m.y);
+    ctx.fillStyle = LOOKS[m.look].colour;
+    ctx.fillText(m.text, m.x, m.y);
+  }
+}
+
+/**
+ * Transistor states as shapes: filled dot = conducting, hollow ring = off, ring with "?" = maybe
+ * (its gate is unknown). Colour repeats the shape; it never carries the meaning alone.
+ */
+function paintDevices(ctx: CanvasRenderingContext2D, area: Rect, paint: OverlayPaint): void {
+  ctx.lineWidth = 0.08;
+  ctx.font = 'bold 0.42px sans-serif';
+  ctx.textAlign = 'center';
+  ctx.textBaseline = 'middle';
+  for (const d of paint.devices) {
+    if (d.x + RADIUS < area.x0 || d.x - RADIUS > area.x1 || d.y + RADIUS < area.y0 || d.y - RADIUS > area.y1)
+      continue;
+    const style = DEVICE_STYLE[d.conduction];
+    ctx.beginPath();
+    ctx.arc(d.x, d.y, RADIUS, 0, 2 * Math.PI, false);
+    ctx.fillStyle = style.fill;
+    ctx.strokeStyle = style.stroke;
+    ctx.fill();
+    ctx.stroke();
+    if (style.text !== '') {
+      ctx.fillStyle = style.stroke;
+      ctx.fillText(style.text, d.x, d.y + 0.02);
+    }
+  }
+}
+
+/** Below these zooms (pixels per grid unit) device marks, then level marks, would be specks: left out. */
+const DEVICES_FROM_PX = 3;
+const MARKS_FROM_PX = 6;
+
+export function paintOverlay(
+  ctx: CanvasRenderingContext2D,
+  area: Rect,
+  scale: number,
+  scene: LevelScene,
+): void {
+  paintStrokes(ctx, area, scale, scene);
+  if (scale >= DEVICES_FROM_PX) paintDevices(ctx, area, scene.paint);
+  if (scale >= MARKS_FROM_PX) paintMarks(ctx, area, scene.paint);
+}
