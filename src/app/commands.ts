@@ -6,7 +6,7 @@
  */
 import { openLibraryView } from '../state/library.ts';
 import type { PartKind } from '../core/sheet/types.ts';
-import { PART_KINDS, partSpec } from '../core/sheet/parts/index.ts';
+import { SHELF_KINDS, partSpec } from '../core/sheet/parts/index.ts';
 import {
   copySelection,
   cutSelection,
@@ -59,7 +59,7 @@ function focusPartSearch(): void {
 
 /** The number keys place the first nine kinds in shelf order; every kind is found by the search. */
 export function placeKeyOf(kind: PartKind): string | null {
-  const index = PART_KINDS.indexOf(kind);
+  const index = SHELF_KINDS.indexOf(kind);
   return index >= 0 && index < 9 ? String(index + 1) : null;
 }
 
@@ -92,7 +92,7 @@ export const COMMANDS: readonly Command[] = [
     keys: [{ key: '/' }],
     run: focusPartSearch,
   },
-  ...PART_KINDS.map(placeCommand),
+  ...SHELF_KINDS.map(placeCommand),
   {
     id: 'vector-previous',
     label: 'Previous input vector',

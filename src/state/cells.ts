@@ -1,13 +1,15 @@
 /**
  * Adding to the hierarchy from the app, each an undo step (docs/semantics.md §1): a new empty cell
- * in the open design, and an instance of another cell placed in the open one. Until instances have
- * symbols of their own on the sheet, a placed instance is wired by name: each of its pins to the net
- * of the same name in this cell (draw a net label or pin of that name to connect it).
+ * in the open design, and an instance of another cell placed in the open one as a symbol on its
+ * sheet (core/hierarchy/instanceParts.ts).
  */
 import type { Cell, Instance } from '../core/model/design.ts';
 import { designSizer } from '../core/hierarchy/flatten.ts';
 import { EMPTY_SHEET } from '../core/sheet/edits.ts';
-import { commitDoc, currentDesign, loadDesign, showMessage, store } from './store.ts';
+import { commitDoc, currentDesign, loadDesign, setSelection, showMessage, store } from './store.ts';
+import { revealItems } from './view.ts';
+import { freeSpot, instancePart, symbolPins } from '../core/hierarchy/instanceParts.ts';
+import { nextPartId } from '../core/sheet/naming.ts';
 
 function unusedName(prefix: string, taken: ReadonlySet<string>): string {
   let n = 1;
@@ -32,8 +34,9 @@ export function addCell(): string {
 }
 
 /**
- * Places an instance of `cellName` in the open cell, its pins wired to the nets of the same names.
- * A placement that would make a cell place itself is refused with the loop named.
+ * Places an instance of `cellName` in the open cell: its symbol, generated from the cell's pins, at
+ * a free spot of the sheet (touching nothing), its pins unwired until the designer wires them as for
+ * any part. A placement that would make a cell place itself is refused with the loop named.
  */
 export function placeInstance(cellName: string): Instance | null {
   const { doc, openCell } = store.getState();
@@ -43,13 +46,9 @@ export function placeInstance(cellName: string): Instance | null {
   const taken = new Set([
     ...openCell.instances.map((i) => i.name),
     ...openCell.netlist.devices.map((d) => d.name),
+    ...doc.sheet.parts.map((p) => p.name),
   ]);
-  const pins = [...placed.netlist.inputs, ...placed.netlist.outputs];
-  const instance: Instance = {
-    name: unusedName('X', taken),
-    cell: cellName,
-    pins: Object.fromEntries(pins.map((p) => [p, p])),
-  };
+  const instance: Instance = { name: unusedName('X', taken), cell: cellName, pins: {} };
   const open: Cell = { ...openCell, instances: [...openCell.instances, instance] };
   const cells = new Map(design.cells.map((c) => [c.name, c.name === open.name ? open : c]));
   const problem = designSizer(cells).problem(open);
@@ -57,10 +56,15 @@ export function placeInstance(cellName: string): Instance | null {
     showMessage('error', `Not placed: ${problem.message}.`);
     return null;
   }
-  commitDoc((d) => (d === doc ? { ...d, instances: open.instances } : d));
+  const pins = symbolPins(placed.netlist);
+  const first = instancePart(nextPartId(doc.sheet), instance.name, placed, { x: 0, y: 0 }, pins);
+  const part = { ...first, ...freeSpot(doc.sheet, first) };
+  commitDoc((d) => (d === doc ? { ...d, sheet: { ...d.sheet, parts: [...d.sheet.parts, part] } } : d));
+  setSelection({ parts: [part.id], wires: [] });
+  revealItems({ parts: [part.id], wires: [] });
   showMessage(
     'info',
-    `Placed ${instance.name} (${cellName}); its pins join the nets named ${pins.join(', ') || 'nothing'}`,
+    `Placed ${instance.name} (${cellName}): wire its pins as for any part; double-click it to descend`,
   );
   return instance;
 }

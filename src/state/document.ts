@@ -8,7 +8,8 @@ import type { Sheet } from '../core/sheet/types.ts';
 import { sheetToNetlist, type DerivedNetlist, type SheetIssue } from '../core/sheet/toNetlist.ts';
 import { autoPlace } from '../core/sheet/autoPlace.ts';
 import { samePlainData } from '../core/model/plainData.ts';
-import { designOfCell } from '../core/hierarchy/cellDesign.ts';
+import { cellsByName, designOfCell } from '../core/hierarchy/cellDesign.ts';
+import { drawInstances, refreshSymbols } from '../core/hierarchy/instanceParts.ts';
 import { flattened, openCellOf, seenFrom } from './documentCells.ts';
 import { nameRecord, recordOf } from '../core/model/records.ts';
 
@@ -89,7 +90,7 @@ export function derivedSheet(sheet: Sheet, name: string): DerivedNetlist {
  */
 export function deriveDesign(doc: SheetDocument, before: CellDesign | null = null): DerivedDesign {
   const d = derivedSheet(doc.sheet, doc.name);
-  const openCell = openCellOf(doc, d.netlist);
+  const openCell = openCellOf(doc, d.netlist, d.instances);
   const seen = seenFrom(doc, openCell);
   const flat = flattened(doc, openCell, seen.top.name);
   const design: CellDesign = {
@@ -140,7 +141,7 @@ export function documentFromDesign(given: Design | CellDesign): SheetDocument {
   const open = design.cells[at] as Cell;
   const others = design.cells.filter((_, i) => i !== at);
   return {
-    ...cellFields(open),
+    ...cellFields(open, cellsByName(design)),
     technology: design.technology,
     ...(design.notes === undefined ? {} : { notes: design.notes }),
     ...(others.length === 0 ? {} : { cells: others, openAt: at }),
@@ -148,16 +149,24 @@ export function documentFromDesign(given: Design | CellDesign): SheetDocument {
   };
 }
 
-/** The open-cell fields of a document for one cell. */
-export function cellFields(
+/**
+ * The open-cell fields of a document for one cell: its drawing with a symbol for every instance it
+ * places (core/hierarchy/instanceParts.ts), each showing its cell's pins as they are now.
+ */
+function cellFields(
   cell: Cell,
+  cells: ReadonlyMap<string, Cell>,
 ): Pick<SheetDocument, 'name' | 'expectations' | 'sequences' | 'sheet' | 'instances' | 'globals'> {
+  const drawing = refreshSymbols(cell.sheet ?? autoPlace(cell.netlist), (c) => cells.get(c)?.netlist);
+  const sheet = drawInstances(drawing, cell.instances, cells);
+  // An instance of a cell the design lacks cannot be drawn: it stays, and flattening names it.
+  const undrawn = cell.instances.filter((i) => !cells.has(i.cell));
   return {
     name: cell.name,
     expectations: cell.expectations,
     sequences: cell.sequences,
-    sheet: cell.sheet ?? autoPlace(cell.netlist),
-    ...(cell.instances.length === 0 ? {} : { instances: cell.instances }),
+    sheet,
+    ...(undrawn.length === 0 ? {} : { instances: undrawn }),
     ...(cell.globals === undefined ? {} : { globals: cell.globals }),
   };
 }

@@ -2,7 +2,7 @@
  * The document's cells beside the open one: the design they make, the open cell flattened (or the
  * cell it is seen inside, when descended), and what follows an edit of a cell other cells place.
  */
-import type { Cell, Design } from '../core/model/design.ts';
+import type { Cell, Design, Instance } from '../core/model/design.ts';
 import type { Netlist } from '../core/model/netlist.ts';
 import type { SheetIssue } from '../core/sheet/toNetlist.ts';
 import { sheetToNetlist } from '../core/sheet/toNetlist.ts';
@@ -11,11 +11,12 @@ import { followCellChange } from '../core/hierarchy/edits.ts';
 import { placementOf, type Placement } from '../core/hierarchy/paths.ts';
 import type { SheetDocument } from './document.ts';
 
-export function openCellOf(doc: SheetDocument, netlist: Netlist): Cell {
+/** The open cell: its own netlist, the instances drawn on its sheet, then any it cannot draw. */
+export function openCellOf(doc: SheetDocument, netlist: Netlist, drawn: readonly Instance[]): Cell {
   return {
     name: doc.name,
     netlist,
-    instances: doc.instances ?? [],
+    instances: [...drawn, ...(doc.instances ?? [])],
     expectations: doc.expectations,
     sequences: doc.sequences,
     sheet: doc.sheet,

@@ -16,6 +16,8 @@ import {
 } from '../../src/state/store.ts';
 import { flipFlopDesign } from '../hierarchy/cells.ts';
 import { addCell, placeInstance } from '../../src/state/cells.ts';
+import { pinPositions } from '../../src/core/sheet/geometry.ts';
+import { makeSheetPart } from '../../src/core/sheet/parts/index.ts';
 
 const nets = () => new Set(Object.values(store.getState().geometry.wireNets));
 
@@ -105,17 +107,50 @@ describe('adding to the hierarchy', () => {
     loadDesign(flipFlopDesign);
   });
 
-  it('a new cell joins the design and opens; a cell placed in it is wired by name and checks', () => {
+  it('a new cell joins the design and opens; a cell placed in it is a symbol wired as any part', () => {
     const name = addCell();
     expect(store.getState().doc.name).toBe(name);
     expect(currentDesign().cells.map((c) => c.name)).toEqual(['tg_d_latch', 'dff', name]);
     const x = placeInstance('dff');
-    expect(x).toEqual({ name: 'X1', cell: 'dff', pins: { D: 'D', CLK: 'CLK', Q: 'Q' } });
+    expect(x).toEqual({ name: 'X1', cell: 'dff', pins: {} });
+    // The symbol: inputs D and CLK on the left, the output Q on the right; rails not drawn.
+    const symbol = store.getState().doc.sheet.parts.find((p) => p.kind === 'instance')!;
+    const leads = pinPositions(symbol).map((p) => [p.pin, p.x - symbol.x, p.y - symbol.y]);
+    expect(leads).toEqual([
+      ['D', 0, 0],
+      ['CLK', 0, 2],
+      ['Q', 8, 0],
+    ]);
     expect(store.getState().design.netlist.devices.some((d) => d.name === 'X1.XM.NT1')).toBe(true);
+    // Pins on its leads wire it, as for any part.
+    commitDoc((doc) => ({
+      ...doc,
+      sheet: {
+        ...doc.sheet,
+        parts: [
+          ...doc.sheet.parts,
+          ...leads.map(([pin, dx, dy], k) =>
+            makeSheetPart(pin === 'Q' ? 'output' : 'input', {
+              id: `pin${k}`,
+              name: pin === 'D' ? 'data' : String(pin),
+              x: symbol.x + Number(dx),
+              y: symbol.y + Number(dy),
+              rotation: pin === 'Q' ? 0 : 2,
+              mirror: false,
+            }),
+          ),
+        ],
+      },
+    }));
+    expect(store.getState().openCell.instances).toEqual([
+      { name: 'X1', cell: 'dff', pins: { D: 'data', CLK: 'CLK', Q: 'Q' } },
+    ]);
+    expect(store.getState().design.netlist.inputs).toEqual(['data', 'CLK']);
     expect(descendInto('X1')).toBe(true);
     expect(descendInto('XS')).toBe(true);
     expect(sheetPath().map((p) => p.cell)).toEqual([name, 'dff', 'tg_d_latch']);
     expect(ascendTo(0)).toBe(true);
+    undo();
     undo();
     expect(store.getState().openCell.instances).toEqual([]);
   });

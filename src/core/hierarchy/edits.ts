@@ -4,6 +4,7 @@
  */
 import type { Cell, Design, Instance } from '../model/design.ts';
 import { mapDeviceNets, type Netlist } from '../model/netlist.ts';
+import { refreshSymbols } from './instanceParts.ts';
 
 /** Thrown when an edit would break the design (a name taken, a pin that does not exist). */
 export class HierarchyEditError extends Error {
@@ -21,19 +22,31 @@ function placing(design: Design, cell: string, edit: (i: Instance) => Instance):
   };
 }
 
+/** Every cell's symbols showing the cells as they now are, `from` renamed `to` (instanceParts.ts). */
+function withSymbols(
+  cells: readonly Cell[],
+  from: string,
+  to: string,
+  netlists: ReadonlyMap<string, Netlist> = new Map(cells.map((c) => [c.name, c.netlist])),
+): Cell[] {
+  const rename = (name: string): string => (name === from ? to : name);
+  return cells.map((c) => {
+    if (c.sheet === undefined || !c.instances.some((i) => i.cell === to)) return c;
+    const sheet = refreshSymbols(c.sheet, (name) => netlists.get(name), rename);
+    return sheet === c.sheet ? c : { ...c, sheet };
+  });
+}
+
 /** Renames a cell; instances of it follow, and so does `open`. */
 export function renameCell(design: Design, from: string, to: string): Design {
   if (from === to) return design;
   if (to === '') throw new HierarchyEditError('a cell needs a name');
   if (design.cells.some((c) => c.name === to)) throw new HierarchyEditError(`a cell is already named ${to}`);
   const renamed = placing(design, from, (i) => ({ ...i, cell: to }));
-  return {
-    ...renamed,
-    open: design.open === from ? to : design.open,
-    cells: renamed.cells.map((c) =>
-      c.name === from ? { ...c, name: to, netlist: { ...c.netlist, name: to } } : c,
-    ),
-  };
+  const cells = renamed.cells.map((c) =>
+    c.name === from ? { ...c, name: to, netlist: { ...c.netlist, name: to } } : c,
+  );
+  return { ...renamed, open: design.open === from ? to : design.open, cells: withSymbols(cells, from, to) };
 }
 
 /**
@@ -56,10 +69,8 @@ export function renamePin(design: Design, cellName: string, from: string, to: st
     const { [from]: net, ...rest } = i.pins;
     return { ...i, pins: { ...rest, [to]: net as string } };
   });
-  return {
-    ...withPin,
-    cells: withPin.cells.map((c) => (c.name === cellName ? renamedPinCell(c, from, to) : c)),
-  };
+  const cells = withPin.cells.map((c) => (c.name === cellName ? renamedPinCell(c, from, to) : c));
+  return { ...withPin, cells: withSymbols(cells, cellName, cellName) };
 }
 
 function renamedPinCell(cell: Cell, from: string, to: string): Cell {
@@ -125,5 +136,7 @@ export function followCellChange(
     changed = true;
     return { ...c, instances: c.instances.map((i) => (i.cell === before.name ? follow(i) : i)) };
   });
-  return changed ? out : cells;
+  if (!changed) return cells;
+  const netlists = new Map([...cells.map((c) => [c.name, c.netlist] as const), [after.name, after.netlist]]);
+  return withSymbols(out, before.name, after.name, netlists);
 }

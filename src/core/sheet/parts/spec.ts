@@ -70,7 +70,19 @@ export interface NetNameRole {
   readonly role: NetRole;
 }
 
-export type PartRole<P> = DeviceRole<P> | NetNameRole;
+/** An instance of another cell: it contributes an instance of that cell, wired by its pins. */
+export interface InstanceRole {
+  readonly type: 'instance';
+}
+
+export type PartRole<P> = DeviceRole<P> | NetNameRole | InstanceRole;
+
+/** Pins, body box and symbol of one part, in local units (see `PartSpec.shape`). */
+export interface PartShape {
+  readonly pins: readonly PinSpec[];
+  readonly box: { readonly x0: number; readonly y0: number; readonly x1: number; readonly y1: number };
+  readonly symbol: readonly Primitive[];
+}
 
 export interface PartSpec<P extends AnyPart> {
   readonly kind: P['kind'];
@@ -83,6 +95,10 @@ export interface PartSpec<P extends AnyPart> {
   /** Body box for hit testing and box select, local units. */
   readonly box: { readonly x0: number; readonly y0: number; readonly x1: number; readonly y1: number };
   readonly symbol: readonly Primitive[];
+  /** A kind whose pins depend on the part (an instance's cell) gives them per part. */
+  readonly shape?: (part: P) => PartShape;
+  /** False for a kind placed by other means than the parts shelf (an instance, from its cell). */
+  readonly onShelf?: false;
   /** The editable properties beyond the name, in form order. */
   readonly fields: readonly FieldSpec<PropKey<P> & string>[];
   /**
