@@ -18,6 +18,7 @@ import { readExportedNames, restoreExportedNames, restoreInstance } from './spic
 import { applyPinDirectives, readExpectations } from './spiceDirectives.ts';
 import { recordOf } from '../model/records.ts';
 import { readPlacement } from './placementComments.ts';
+import { checkDrawnInstances, symbolProps } from './drawnInstances.ts';
 import type { Sheet } from '../sheet/types.ts';
 
 export interface ImportedCell {
@@ -166,13 +167,17 @@ function finish(spec: CellSpec, ctx: CellContext): FinishedCell {
   const parsed = readExportedNames(spec.body.directives, notes, netsOf(read, expectations));
   const names = { ...parsed, cell: ctx.cellNames.get(spec.name.toLowerCase()) ?? spec.name };
   const restored = restoreExportedNames({ netlist, expectations, expectationLines: lines }, names);
-  // The drawing a Railwise export carried, when it still derives the cell's own netlist.
-  const sheet = readPlacement(spec.body.directives, restored.netlist, notes);
+  const instances = read.instances.map((i) => restoreInstance(i, names, placedNames(i.cell, ctx)));
+  // The drawing a Railwise export carried, when it still derives the cell's own netlist and instances.
+  const netlistOf = (name: string): Netlist | undefined => placedNetlist(name, ctx);
+  const symbols = symbolProps(instances, netlistOf);
+  const drawing = readPlacement(spec.body.directives, restored.netlist, notes, symbols);
+  const sheet = checkDrawnInstances(drawing, instances, netlistOf, notes);
   const globals = read.nets.filter((n) => !railNets.has(n) && ctx.isGlobal(n.toLowerCase())).map(names.net);
   const cell: Cell = {
     name: restored.netlist.name,
     netlist: restored.netlist,
-    instances: read.instances.map((i) => restoreInstance(i, names, placedNames(i.cell, ctx))),
+    instances,
     expectations: restored.expectations,
     sequences: [],
     ...(globals.length === 0 ? {} : { globals }),
@@ -195,6 +200,12 @@ function placedNames(subckt: string, ctx: CellContext): { cell: string; net: (na
   const body = ctx.file.subcktByName.get(subckt.toLowerCase());
   const done = body === undefined ? undefined : ctx.finished.get(body);
   return done === undefined ? { cell: subckt, net: (n) => n } : { cell: done.cell.name, net: done.net };
+}
+
+/** The netlist of a cell finished so far, by its name in the design. */
+function placedNetlist(cell: string, ctx: CellContext): Netlist | undefined {
+  for (const done of ctx.finished.values()) if (done.cell.name === cell) return done.cell.netlist;
+  return undefined;
 }
 
 /** Rails in order of first appearance: named rails, then nets a `V` line holds. */
