@@ -10,6 +10,7 @@ import { renamePin } from '../../src/core/hierarchy/edits.ts';
 import { cellsByName } from '../../src/core/hierarchy/cellDesign.ts';
 import { pinPositions } from '../../src/core/sheet/geometry.ts';
 import { sheetToNetlist } from '../../src/core/sheet/toNetlist.ts';
+import { paintLayout } from '../../src/core/view/overlayPaint.ts';
 import { instancePins } from '../../src/core/sheet/parts/instance.ts';
 import { EMPTY_SHEET } from '../../src/core/sheet/edits.ts';
 import type { SheetPart } from '../../src/core/sheet/types.ts';
@@ -45,6 +46,24 @@ describe('an instance symbol', () => {
     // Every symbol sits clear of the others: no pin of one touches another.
     const leads = symbolsOf(sheet.parts).flatMap((p) => pinPositions(p).map((q) => `${q.x},${q.y}`));
     expect(new Set(leads).size).toBe(leads.length);
+  });
+
+  it('shows the level of each pin: a lead and a level mark on the net the pin is wired to', () => {
+    resetStore();
+    loadDesign(bufferDesign);
+    const { doc, geometry } = store.getState();
+    const layout = paintLayout(doc.sheet, geometry);
+    const marked = new Set(
+      layout.marks.map((m) => `${Math.round(m.x - 0.2)},${Math.round(m.y - 0.25)}:${layout.nets[m.net]}`),
+    );
+    for (const symbol of symbolsOf(doc.sheet.parts))
+      for (const lead of pinPositions(symbol)) {
+        const net = geometry.pinNets.get(`${symbol.id}.${lead.pin}`)!;
+        expect(marked.has(`${lead.x},${lead.y}:${net}`)).toBe(true);
+      }
+    // The first inverter's output and the second's input are one net, mid.
+    const [x1, x2] = store.getState().openCell.instances;
+    expect(x1!.pins['Y']).toBe(x2!.pins['A']);
   });
 
   it('follows a renamed pin of its cell on every sheet that draws it', () => {

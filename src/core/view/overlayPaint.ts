@@ -116,7 +116,8 @@ export function paintLayout(sheet: Sheet, geometry: PaintGeometry): PaintLayout 
       const net = geometry.pinNets.get(`${part.id}.${lead.pin}`);
       if (net === undefined) continue;
       b.segments.push({ net: b.id(net), points: [lead.from.x, lead.from.y, lead.to.x, lead.to.y] });
-      if (NAMING_KINDS.has(part.kind))
+      // Pins, rails, labels and an instance's pins show their level as a mark beside the lead.
+      if (NAMING_KINDS.has(part.kind) || part.kind === 'instance')
         b.marks.push({ net: b.id(net), x: lead.from.x + 0.2, y: lead.from.y + 0.25 });
     }
     const device = geometry.partDevices[part.id];

@@ -33,6 +33,6 @@ export function pinLeads(part: SheetPart): PinLead[] {
   return spec.pins.map((pin) => ({
     pin: pin.name,
     from: toWorld(part, pin),
-    to: toWorld(part, towardBody(pin, spec.box)),
+    to: toWorld(part, pin.lead ?? towardBody(pin, spec.box)),
   }));
 }

@@ -17,6 +17,8 @@ import { lookOf } from '../../core/view/visualLanguage.ts';
 import { toggleInput, useSimulation } from '../../state/simulation.ts';
 import type { SheetGeometry } from '../../state/document.ts';
 import { useStore } from '../../state/store.ts';
+import { descendInto } from '../../state/navigation.ts';
+import { fitToView } from '../../state/view.ts';
 import { indexFor } from '../tools/sheetIndex.ts';
 import { CurrentTrace } from './CurrentTraces.tsx';
 import { CachedShape } from '../canvas/CachedShape.tsx';
@@ -39,9 +41,17 @@ function inputOfHit(hit: Hit | null, sheet: Sheet, geometry: SheetGeometry): str
   return part?.kind === 'input' ? geometry.pinNets.get(`${part.id}.net`) : undefined;
 }
 
+/** The instance whose symbol is under the pointer, if any: double-clicking it descends into it. */
+function instanceOfHit(hit: Hit | null, sheet: Sheet): string | undefined {
+  if (hit === null || hit.type === 'wire') return undefined;
+  const part = sheet.parts.find((p) => p.id === hit.partId);
+  return part?.kind === 'instance' ? part.name : undefined;
+}
+
 /**
  * Pointer on the sheet, found by pure hit testing: the estimated voltage of the wire or pin under
- * it, and a double-click on an input pin flips that input (the same action as its bit in the panel).
+ * it; a double-click on an input pin flips that input (the same action as its bit in the panel),
+ * on an instance's symbol descends into it (as its line in the Instances list does).
  */
 export function PointerLayer() {
   const layer = useRef<Konva.Layer>(null);
@@ -60,8 +70,11 @@ export function PointerLayer() {
     };
     const onDoubleClick = (): void => {
       const at = layer.current?.getRelativePointerPosition();
-      const input = at ? inputOfHit(hitTest(index, at), sheet, geometry) : undefined;
-      if (input !== undefined) toggleInput(input);
+      const hit = at ? hitTest(index, at) : null;
+      const input = inputOfHit(hit, sheet, geometry);
+      if (input !== undefined) return toggleInput(input);
+      const instance = instanceOfHit(hit, sheet);
+      if (instance !== undefined && descendInto(instance)) fitToView();
     };
     stage.on('mousemove.rwOverlay', onMove);
     stage.on('dblclick.rwOverlay', onDoubleClick);

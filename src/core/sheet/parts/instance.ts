@@ -59,8 +59,13 @@ function shape(part: InstancePart): PartShape {
   const pins = instancePins(part);
   const bottom = (rows(pins) - 1) * PITCH + 1;
   const leads: PinSpec[] = [
-    ...pins.inputs.map((name, k) => ({ name, x: 0, y: k * PITCH })),
-    ...pins.outputs.map((name, k) => ({ name, x: WIDTH, y: k * PITCH })),
+    ...pins.inputs.map((name, k) => ({ name, x: 0, y: k * PITCH, lead: { x: 1, y: k * PITCH } })),
+    ...pins.outputs.map((name, k) => ({
+      name,
+      x: WIDTH,
+      y: k * PITCH,
+      lead: { x: WIDTH - 1, y: k * PITCH },
+    })),
   ];
   const symbol: Primitive[] = [
     { type: 'polygon', points: [1.7, -1, 7, -1, 7, bottom, 1, bottom, 1, -0.3], filled: false },

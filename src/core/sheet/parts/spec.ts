@@ -18,6 +18,8 @@ export type Primitive =
 export interface PinSpec extends Point {
   /** Terminal name as the netlist knows it (gate, drain, source, a, b, anode, cathode), or `net`. */
   readonly name: string;
+  /** Where the pin's lead meets the body, when not the usual (core/view/pinLeads.ts). */
+  readonly lead?: Point;
 }
 
 /** The smallest shape of a part record: a placement and a kind. */
