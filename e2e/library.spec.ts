@@ -29,12 +29,24 @@ test('a library opens as a table; a failing cell opens, is placed in a new cell,
   await instances.getByRole('button', { name: 'New cell in this design' }).click();
   await instances.getByLabel('Place a cell as an instance').selectOption('tw_chain3');
   expect((await app.netlist()).devices.map((d) => d.name)).toContain('X1.mnb0');
-  await instances.getByRole('button', { name: /^X1/ }).click();
+  // Its symbol is on the sheet, a lead for each pin; a double-click on it descends.
+  const symbol = await page.evaluate(() => {
+    const part = window.__railwise!.state().doc.sheet.parts.find((p) => p.kind === 'instance');
+    return part === undefined ? null : { name: part.name, x: part.x, y: part.y };
+  });
+  expect(symbol?.name).toBe('X1');
+  const at = await app.toPage({ x: symbol!.x + 4, y: symbol!.y });
+  await page.mouse.dblclick(at.x, at.y);
   const path = page.getByRole('navigation', { name: 'Cell path' });
   await expect(path).toContainText('cell1 › X1 (tw_chain3)');
   await path.getByRole('button', { name: 'cell1' }).click();
   await expect(path).toBeHidden();
   expect(await page.evaluate(() => window.__railwise!.state().doc.name)).toBe('cell1');
+  // The Instances list goes down too.
+  await instances.getByRole('button', { name: /^X1/ }).click();
+  await expect(path).toContainText('cell1 › X1 (tw_chain3)');
+  await path.getByRole('button', { name: 'cell1' }).click();
+  await expect(path).toBeHidden();
 });
 
 test('an 80-cell library of about 2,000 transistors shows every row', async ({ page }, info) => {

@@ -16,6 +16,8 @@ import {
 } from '../../src/state/store.ts';
 import { flipFlopDesign } from '../hierarchy/cells.ts';
 import { addCell, placeInstance } from '../../src/state/cells.ts';
+import { pickFinding } from '../../src/panels/pick.ts';
+import type { Finding } from '../../src/core/analysis/report.ts';
 import { pinPositions } from '../../src/core/sheet/geometry.ts';
 import { makeSheetPart } from '../../src/core/sheet/parts/index.ts';
 
@@ -62,6 +64,25 @@ describe('descending into an instance', () => {
     expect(goToName('CLKN')).toBe(true); // back up to the top cell
     expect(store.getState().doc.name).toBe('dff');
     expect(goToName('XQ.nowhere')).toBe(false);
+  });
+
+  it('a click on a finding inside an instance descends to it and selects the device there', () => {
+    const finding: Finding = {
+      kind: 'floating',
+      severity: 'warning',
+      vector: 0,
+      nets: ['XS.n1'],
+      devices: ['XS.NT1'],
+      path: null,
+      message: 'for the test',
+    };
+    pickFinding(finding);
+    expect(store.getState().doc.context).toEqual({ top: 'dff', instances: ['XS'] });
+    expect(store.getState().doc.name).toBe('tg_d_latch');
+    // Inside, the device is drawn under its own name and named as the top cell names it.
+    const part = store.getState().geometry.deviceParts['XS.NT1'];
+    expect(part).toBeDefined();
+    expect(store.getState().selection.selected.parts).toContain(part);
   });
 
   it('an edit inside reaches every instance of the cell, and undo takes it back', () => {
