@@ -13,6 +13,7 @@ import { sheetToNetlist } from '../../src/core/sheet/toNetlist.ts';
 import { paintLayout } from '../../src/core/view/overlayPaint.ts';
 import { instancePins } from '../../src/core/sheet/parts/instance.ts';
 import { EMPTY_SHEET } from '../../src/core/sheet/edits.ts';
+import { copyItems, pasteClip } from '../../src/core/sheet/clipboard.ts';
 import type { SheetPart } from '../../src/core/sheet/types.ts';
 import { exportSpiceDesign } from '../../src/core/netlist-io/spiceDesignExport.ts';
 import { currentDesign, loadDesign, resetStore, store } from '../../src/state/store.ts';
@@ -64,6 +65,17 @@ describe('an instance symbol', () => {
     // The first inverter's output and the second's input are one net, mid.
     const [x1, x2] = store.getState().openCell.instances;
     expect(x1!.pins['Y']).toBe(x2!.pins['A']);
+  });
+
+  it('pasted, is a new instance of the same cell under the next free name', () => {
+    resetStore();
+    loadDesign(bufferDesign);
+    const { sheet } = store.getState().doc;
+    const first = symbolsOf(sheet.parts)[0]!;
+    const pasted = pasteClip(sheet, copyItems(sheet, { parts: [first.id], wires: [] }), 0, 30).sheet;
+    const names = symbolsOf(pasted.parts).map((p) => p.name);
+    expect(new Set(names).size).toBe(names.length);
+    expect(sheetToNetlist(pasted).instances.map((i) => i.cell)).toEqual(['inv', 'inv', 'inv']);
   });
 
   it('follows a renamed pin of its cell on every sheet that draws it', () => {

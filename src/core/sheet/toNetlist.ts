@@ -6,7 +6,7 @@
 import type { Device, Netlist, Rail } from '../model/netlist.ts';
 import type { Instance } from '../model/design.ts';
 import type { Sheet, SheetPart } from './types.ts';
-import { isDevicePart, partShape, partSpec, type NetRole } from './parts/index.ts';
+import { isDevicePart, isNamedOnce, partShape, partSpec, type NetRole } from './parts/index.ts';
 import type { InstancePart } from './parts/instance.ts';
 import { sheetConnectivity, type SheetConnectivity } from './connectivity.ts';
 import { nameRecord, recordOf } from '../model/records.ts';
@@ -219,7 +219,7 @@ function unknownPin(part: SheetPart, pin: string): never {
 function reportDuplicateDevices(sheet: Sheet, issues: SheetIssue[]): void {
   const byName = new Map<string, string[]>();
   for (const p of sheet.parts) {
-    if (!isDevicePart(p.kind)) continue;
+    if (!isNamedOnce(p.kind)) continue;
     const ids = byName.get(p.name);
     if (ids) ids.push(p.id);
     else byName.set(p.name, [p.id]);

@@ -102,6 +102,11 @@ export function partShape(part: SheetPart): PartShape {
   return spec.shape === undefined ? spec : spec.shape(part);
 }
 
+/** Parts whose name is theirs alone on a sheet: devices and instances (not a net's name). */
+export function isNamedOnce(kind: PartKind): boolean {
+  return partSpec(kind).role.type !== 'net-name';
+}
+
 /** A part's value of one property, undefined when its kind has no such property. */
 export function partProp(part: SheetPart, key: PartPropKey): number | undefined {
   const value: unknown = Reflect.get(part, key);
