@@ -15,6 +15,7 @@ import { instancePins } from '../../src/core/sheet/parts/instance.ts';
 import { EMPTY_SHEET } from '../../src/core/sheet/edits.ts';
 import { copyItems, pasteClip } from '../../src/core/sheet/clipboard.ts';
 import type { SheetPart } from '../../src/core/sheet/types.ts';
+import { parseDesignFile, serializeDesign } from '../../src/core/format/designFile.ts';
 import { exportSpiceDesign } from '../../src/core/netlist-io/spiceDesignExport.ts';
 import { currentDesign, loadDesign, resetStore, store } from '../../src/state/store.ts';
 import { designOfSpice } from '../netlist-io/designCarried.ts';
@@ -90,6 +91,16 @@ describe('an instance symbol', () => {
     const before = sheetToNetlist(drawn.cells.find((c) => c.name === 'buf')!.sheet!).instances;
     const after = sheetToNetlist(buf.sheet!).instances;
     expect(after.map((i) => i.pins['IN'])).toEqual(before.map((i) => i.pins['A']));
+  });
+
+  it('is saved in the design file and read back as drawn', () => {
+    resetStore();
+    loadDesign(bufferDesign);
+    const design = currentDesign();
+    const back = parseDesignFile(serializeDesign(design), 'buffer.railwise.json');
+    expect(back.cells.find((c) => c.name === 'buf')!.sheet).toEqual(
+      design.cells.find((c) => c.name === 'buf')!.sheet,
+    );
   });
 
   it('reads back from the SPICE export as drawn, and the cell computes the same', () => {
