@@ -6,7 +6,7 @@
 import { readFileSync } from 'node:fs';
 import type { Netlist } from '../core/model/netlist.ts';
 import { recordOf } from '../core/model/records.ts';
-import { assignPins, PinError } from '../core/netlist-io/pins.ts';
+import { assignPins, inputsReadByExpectations, PinError } from '../core/netlist-io/pins.ts';
 import {
   cellsFromText,
   expectationProblem,
@@ -105,12 +105,18 @@ function pickCell(
   );
 }
 
-/** Pins and expected functions from the flags, over what the file says; then every one checked. */
+/**
+ * Pins and expected functions from the flags, over what the file says; then every one checked.
+ * Without pin flags, a port that `--expect` reads but does not describe is an input.
+ */
 function applyChoice(job: CellJob, choice: CellChoice): LoadedCell {
   let netlist: Netlist;
+  const pinsGiven = choice.inputs !== undefined || choice.outputs !== undefined;
+  const read = pinsGiven ? [] : inputsReadByExpectations(job.netlist, choice.expect);
+  const inputs = read.length > 0 ? [...job.netlist.inputs, ...read] : choice.inputs;
   try {
     netlist = assignPins(job.netlist, {
-      ...(choice.inputs === undefined ? {} : { inputs: choice.inputs }),
+      ...(inputs === undefined ? {} : { inputs }),
       ...(choice.outputs === undefined ? {} : { outputs: choice.outputs }),
     });
   } catch (e) {

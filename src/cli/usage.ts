@@ -32,7 +32,8 @@ supply-to-ground current paths and findings. A file with several top-level subci
 instantiates is a library: each subcircuit that holds devices is checked as its own cell.
 
 Pins and expectations (one cell: a single-cell file, or a library with --cell):
-  --inputs A,B          input pins, in truth-table order (default: ports that only reach gates)
+  --inputs A,B          input pins, in truth-table order (default: ports that only reach gates,
+                        and ports an --expect reads without describing)
   --outputs Y           output pins (default: the other ports that are not rails)
   --expect "Y = EXPR"   expected function, repeatable: ! & | ^ ( ) 0 1, S ? A : B, and Z
   --sequence STEPS      apply these steps in order, carrying stored charge, instead of the sweep:

@@ -90,6 +90,17 @@ describe('check', () => {
     expect(bad.out).toMatch(/--inputs: cell tg has no net "Q"/);
   });
 
+  it('a port that --expect reads but does not describe is an input', async () => {
+    // The carry of a full adder is the majority of A, B and CI (common practice, no source); A
+    // drives pass-gate channels, so without the expectation it would be taken for an output.
+    const tgc = 'tests/cli/fixtures/tgc-bare.sp';
+    const { status, body } = await json('check', tgc, '--expect', 'CO = A & B | A & CI | B & CI');
+    expect([...(body['inputs'] as string[])].sort()).toEqual(['A', 'B', 'CI']);
+    expect(body['outputs']).toEqual(['CO']);
+    expect((body['vectors'] as unknown[]).length).toBe(8);
+    expect(status).toBe(0);
+  });
+
   it('--supply and --ground name rails, and --vdd sets the supply voltage', async () => {
     const unnamed = await json('check', 'tests/cli/fixtures/inv-vpwr.sp');
     expect(unnamed.body['outputs']).toEqual(['Y', 'VPWR', 'VGND']);

@@ -1,7 +1,7 @@
 /** Naming pins over what the importer inferred (docs/semantics.md §6: "flags override"). */
 import { describe, expect, it } from 'vitest';
 import { circuit } from '../../src/core/model/builder.ts';
-import { assignPins, PinError } from '../../src/core/netlist-io/pins.ts';
+import { assignPins, inputsReadByExpectations, PinError } from '../../src/core/netlist-io/pins.ts';
 
 // As imported: a transmission gate's data port D reaches a channel, so it was taken as an output.
 const tg = circuit('tg')
@@ -45,5 +45,17 @@ describe('assignPins', () => {
       expect((e as PinError).field).toBe(field);
       expect((e as PinError).message).toMatch(message);
     }
+  });
+});
+
+describe('inputsReadByExpectations', () => {
+  // A transmission gate passes D to Y when EN is high (common practice, no source).
+  it('a port the expected function reads and does not describe is an input', () => {
+    expect(inputsReadByExpectations(tg, { Y: 'EN ? D : Z' })).toEqual(['D']);
+  });
+
+  it('an output read in its own expression keeps holding, and a bad expression names nothing', () => {
+    expect(inputsReadByExpectations(tg, { Y: 'EN ? D : Y', D: 'D' })).toEqual([]);
+    expect(inputsReadByExpectations(tg, { Y: 'EN & (' })).toEqual([]);
   });
 });

@@ -3,6 +3,7 @@
  * `* railwise: inputs …` directive), over what the importer inferred. Names match nets
  * case-insensitively, as SPICE does, and come back in the netlist's own spelling.
  */
+import { ExpressionError, parseExpression, type Expr } from '../expect/parse.ts';
 import { netNames, type Netlist } from '../model/netlist.ts';
 
 export class PinError extends Error {
@@ -68,4 +69,52 @@ function resolve(
     if (!out.includes(net)) out.push(net);
   }
   return out;
+}
+
+/**
+ * Pins that expected functions show to be inputs: a port the importer took for an output (it reaches
+ * a channel, as the data input of a pass gate does) that an expected function reads but that has no
+ * expected function of its own. `CO = A & B | CI & (A ^ B)` makes A, B and CI inputs whatever they
+ * drive. An output named in its own expression (`Q = S | !R & Q`, docs/semantics.md §4) stays an
+ * output. Expressions that do not parse are left to the check, which reports them with their place.
+ */
+export function inputsReadByExpectations(
+  netlist: Netlist,
+  expectations: Readonly<Record<string, string>>,
+): string[] {
+  const names = [...netlist.inputs, ...netlist.outputs];
+  const read = new Set<string>();
+  for (const text of Object.values(expectations)) {
+    try {
+      namesIn(parseExpression(text, names), read);
+    } catch (e) {
+      if (!(e instanceof ExpressionError)) throw e;
+    }
+  }
+  const described = new Set(Object.keys(expectations).map((o) => o.toLowerCase()));
+  return netlist.outputs.filter((o) => read.has(o) && !described.has(o.toLowerCase()));
+}
+
+function namesIn(e: Expr, into: Set<string>): void {
+  switch (e.kind) {
+    case 'const':
+      return;
+    case 'name':
+      into.add(e.name);
+      return;
+    case 'not':
+      namesIn(e.arg, into);
+      return;
+    case 'and':
+    case 'or':
+    case 'xor':
+      namesIn(e.left, into);
+      namesIn(e.right, into);
+      return;
+    case 'choose':
+      namesIn(e.select, into);
+      namesIn(e.whenTrue, into);
+      namesIn(e.whenFalse, into);
+      return;
+  }
 }
