@@ -53,7 +53,7 @@ const between = (min: number, max: number) => fc.double({ min, max, noNaN: true 
 /** Sheet coordinates span ±1,000,000 grid units (RANGES.coordinate). */
 const coordinateArb = fc.integer({ min: -1e6, max: 1e6 });
 
-/** Any kind of part, with whichever sizes its kind has. */
+/** Any kind of part, with whichever sizes (and text) its kind has. */
 const partArb: fc.Arbitrary<SheetPart> = fc
   .record({
     id: fc.uuid(),
@@ -69,8 +69,10 @@ const partArb: fc.Arbitrary<SheetPart> = fc
       ohms: between(1e-3, 1e12),
       farads: between(1e-21, 1e-6),
     }),
+    // An instance's cell and pins are text (read tolerantly: any text shows some pins).
+    text: fc.record({ cell: fc.string({ minLength: 1 }), pins: fc.string({ minLength: 1 }) }),
   })
-  .map(({ kind, sizes, ...placement }) => makeSheetPart(kind, placement, sizes));
+  .map(({ kind, sizes, text, ...placement }) => makeSheetPart(kind, placement, { ...sizes, ...text }));
 
 /** Record keys as a user might type them, names of Object's own members among them. */
 const keyArb = fc.oneof(fc.string({ minLength: 1 }), fc.constantFrom('__proto__', 'constructor', 'toString'));
