@@ -186,7 +186,9 @@ describe('the key map', () => {
     const place = COMMANDS.filter((c) => c.id.startsWith('place-'));
     expect(place.map((c) => c.id)).toEqual(SHELF_KINDS.map((k) => `place-${k}`));
     place.forEach((c, i) => expect(c.keys).toEqual(i < 9 ? [{ key: String(i + 1) }] : []));
-    expect(SHELF_KINDS.map(placeKeyOf).filter((k) => k !== null)).toHaveLength(Math.min(9, SHELF_KINDS.length));
+    expect(SHELF_KINDS.map(placeKeyOf).filter((k) => k !== null)).toHaveLength(
+      Math.min(9, SHELF_KINDS.length),
+    );
   });
 
   it('tells Ctrl+Z from Ctrl+Shift+Z and V from Ctrl+V', () => {
