@@ -24,7 +24,6 @@ import { carriedCells, designOfSpice, findableCells } from '../netlist-io/design
 import { checkCase, fuzzFile, mutation, removeFuzzFiles, Tally, type Case } from './fuzzHarness.ts';
 
 const RUNS = Number(process.env['RAILWISE_FUZZ_RUNS'] ?? 40);
-const campaign = process.env['RAILWISE_FUZZ_RUNS'] !== undefined;
 afterAll(removeFuzzFiles);
 
 const read = (path: string): string => readFileSync(path, 'utf8');
@@ -86,13 +85,14 @@ function designExportsBack(text: string, file: string): string | null {
   return same ? null : 'export → import changed the design';
 }
 
-function report(name: string, tally: Tally): void {
-  if (campaign)
-    console.log(
-      `${name}: ${tally.runs} runs, ${tally.counts.clean} clean, ${tally.counts.refusal} clear refusals, ${tally.counts.bad} bad`,
-      tally.bad,
-    );
-  expect(tally.bad).toEqual([]);
+/** The counts, printed on a campaign run; any bad case fails the test. */
+function report(name: string, tally: Tally, exports?: Tally): void {
+  const back =
+    exports === undefined
+      ? ''
+      : `; ${exports.runs} export → import round trips, ${exports.counts.bad} changed`;
+  tally.print(name, back);
+  expect([...tally.bad, ...(exports?.bad ?? [])]).toEqual([]);
 }
 
 const mutated = (seeds: readonly string[]) =>
@@ -101,27 +101,28 @@ const mutated = (seeds: readonly string[]) =>
     .map(([i, ms]) => ms.reduce((t, m) => m(t), seeds[i] as string));
 
 describe('fuzzing the command line', () => {
-  /** Checks each mutated file, and each clean one's export → import. */
-  async function fuzzFiles(seeds: readonly string[], extension: string, seed: number): Promise<Tally> {
+  /** Checks each mutated file, and each clean one's export → import (tallied apart). */
+  async function fuzzFiles(name: string, seeds: readonly string[], extension: string, seed: number) {
     const tally = new Tally();
+    const exports = new Tally();
     await fc.assert(
       fc.asyncProperty(mutated(seeds), fc.boolean(), async (text, power) => {
         const file = fuzzFile(extension, text);
         const result = await checkCase(file, ...(power ? ['--power', '--sizing'] : []));
         tally.add(result, file);
-        if (result.outcome === 'clean') tally.add(exportsBack(text, file), `${file} (export)`);
+        if (result.outcome === 'clean') exports.add(exportsBack(text, file), `${file} (export)`);
       }),
       { seed, numRuns: RUNS },
     );
-    return tally;
+    report(name, tally, exports);
   }
 
   it('mutated netlists', async () => {
-    report('netlists', await fuzzFiles(NETLISTS, '.sp', 1601));
+    await fuzzFiles('netlists', NETLISTS, '.sp', 1601);
   }, 600_000);
 
   it('mutated design files', async () => {
-    report('design files', await fuzzFiles(DESIGNS, '.json', 1602));
+    await fuzzFiles('design files', DESIGNS, '.json', 1602);
   }, 600_000);
 
   it('mutated share links', async () => {
