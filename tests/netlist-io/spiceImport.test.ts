@@ -79,8 +79,8 @@ MN Y A GND GND nch W=1u L=0.25u
   });
 
   it('reads devices that repeat one parameter list each with its own values', () => {
-    // Lines that give the same parameters share one reading (our own memory rule, §7): a later
-    // line with other values must not see an earlier line's, nor change it.
+    // Lines that give the same parameters share one reading (kept once to save memory; our own
+    // rule, no source): a line with other values must not see an earlier line's, nor change it.
     const n = only(`.subckt two A Y VDD GND
 MP1 Y A VDD VDD pch W=2u L=0.5u
 MP2 Y A VDD VDD pch W=2u L=0.5u
