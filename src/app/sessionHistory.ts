@@ -1,14 +1,16 @@
 /**
  * The undo history kept across a reload within the same browser session (docs/semantics.md §8): the
- * steps are stored as patches (state/historyPatch.ts) in sessionStorage, written when the page is
- * idle, at most MAX_STORED_STEPS of them and MAX_STORED_CHARS of text (the oldest go first). They
- * are tied to the document they lead back from by a fingerprint, so after a reload they are used
- * only if the design restored is that very document.
+ * steps are stored as patches (state/historyPatch.ts) in sessionStorage, written as the design is
+ * (about a second after a change, once the page is idle, and as the page goes away), at most
+ * MAX_STORED_STEPS of them and MAX_STORED_CHARS of text (the oldest go first). They are tied to the
+ * document they lead back from by a fingerprint, so after a reload they are used only if the design
+ * restored is that very document.
  */
 import type { SheetDocument } from '../state/document.ts';
 import { applyDocPatch, docPatch, type DocPatch } from '../state/historyPatch.ts';
 import { restoreHistory, store } from '../state/store.ts';
-import { whenIdle } from './idle.ts';
+import { afterPause } from './idle.ts';
+import { SAVE_AFTER_MS } from './autosave.ts';
 
 export const HISTORY_KEY = 'railwise.history.v1';
 export const MAX_STORED_STEPS = 100;
@@ -23,22 +25,34 @@ interface StoredHistory {
 }
 
 /** FNV-1a, one step per character. */
-function mixText(h: number, text: string): number {
+function mixChars(h: number, text: string): number {
   for (let i = 0; i < text.length; i++) h = Math.imul(h ^ text.charCodeAt(i), 0x01000193);
-  return Math.imul(h ^ 0x1f, 0x01000193); // a separator, so "ab","c" and "a","bc" differ
+  return h;
 }
 
-/** Mixes a plain value in: arrays in order, objects by sorted key, so key order never matters. */
+/** A text, then a separator, so "ab","c" and "a","bc" differ. */
+function mixText(h: number, text: string): number {
+  return Math.imul(mixChars(h, text) ^ 0x1f, 0x01000193);
+}
+
+/**
+ * Mixes a plain value in: arrays in order, objects by sorted key, so key order never matters; a
+ * leaf as the text `type:value`. Plain loops, as it runs over the whole document at start-up.
+ */
 function mixValue(h: number, v: unknown): number {
-  if (Array.isArray(v)) return v.reduce((acc: number, x) => mixValue(acc, x), mixText(h, '['));
+  if (Array.isArray(v)) {
+    let acc = mixText(h, '[');
+    for (const item of v as unknown[]) acc = mixValue(acc, item);
+    return acc;
+  }
   if (v !== null && typeof v === 'object') {
     const record = v as Record<string, unknown>;
-    return Object.keys(record)
-      .filter((k) => record[k] !== undefined) // as JSON leaves them out
-      .sort()
-      .reduce((acc, k) => mixValue(mixText(acc, k), record[k]), mixText(h, '{'));
+    const keys = Object.keys(record).sort();
+    let acc = mixText(h, '{');
+    for (const k of keys) if (record[k] !== undefined) acc = mixValue(mixText(acc, k), record[k]); // as JSON leaves them out
+    return acc;
   }
-  return mixText(h, `${typeof v}:${String(v)}`);
+  return mixText(mixChars(mixChars(h, typeof v), ':'), String(v));
 }
 
 /**
@@ -109,7 +123,7 @@ export function restoreSessionHistory(storage: Storage = sessionStorage): boolea
   return found !== null;
 }
 
-/** Keeps the stored history up to date, writing when the page is idle or goes away; returns the stop function. */
+/** Keeps the stored history up to date, written as the autosave is; returns the stop function. */
 export function startSessionHistory(storage: Storage = sessionStorage): () => void {
   let cancel: (() => void) | null = null;
   const write = (): void => {
@@ -123,7 +137,7 @@ export function startSessionHistory(storage: Storage = sessionStorage): () => vo
     }
   };
   const unsubscribe = store.subscribe((s, prev) => {
-    if (s.history !== prev.history && cancel === null) cancel = whenIdle(write);
+    if (s.history !== prev.history && cancel === null) cancel = afterPause(write, SAVE_AFTER_MS);
   });
   // A reload right after an edit: the step is kept as the page goes, as the autosave keeps the design.
   const flush = (): void => {

@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useMemo, useRef, type RefObject } from 'react';
+import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState, type RefObject } from 'react';
 import { Layer, Stage } from 'react-konva';
 import type Konva from 'konva';
 import type { KonvaEventObject } from 'konva/lib/Node';
@@ -16,9 +16,14 @@ import { hitTest } from '../core/sheet/hitTest.ts';
 import { indexFor } from './tools/sheetIndex.ts';
 import { SHEET_THEME } from './theme.ts';
 
-/** Keeps the store told of the sheet area's size (for fit-to-view and the grid). */
-function useElementSize(ref: RefObject<HTMLDivElement | null>, onFirstLayout?: () => void): void {
-  useEffect(() => {
+/**
+ * Keeps the store told of the sheet area's size (for fit-to-view and the grid); true once it has
+ * been measured. Measured before the first paint, so the stage is made at its size and in its first
+ * view: a Konva stage draws every layer as it is made and again as it is resized.
+ */
+function useElementSize(ref: RefObject<HTMLDivElement | null>, onFirstLayout?: () => void): boolean {
+  const [measured, setMeasured] = useState(false);
+  useLayoutEffect(() => {
     const el = ref.current;
     if (!el) return;
     let first = true;
@@ -30,10 +35,12 @@ function useElementSize(ref: RefObject<HTMLDivElement | null>, onFirstLayout?: (
       }
     };
     update();
+    setMeasured(true);
     const observer = new ResizeObserver(update);
     observer.observe(el);
     return () => observer.disconnect();
   }, [ref, onFirstLayout]);
+  return measured;
 }
 
 function toPointer(stage: Konva.Stage, evt: MouseEvent): ToolPointer | null {
@@ -82,11 +89,11 @@ export function SheetCanvas({
     ),
     [],
   );
-  useElementSize(box, onFirstLayout);
+  const measured = useElementSize(box, onFirstLayout);
   useEffect(() => {
     setStage(stageRef.current);
     return () => setStage(null);
-  }, []);
+  }, [measured]);
   // Handlers made once, so a re-render of the stage never rebinds its events.
   const handlers = useMemo(() => {
     const route = (fn: (e: ToolPointer) => void) => (e: KonvaEventObject<MouseEvent>) => {
@@ -131,21 +138,23 @@ export function SheetCanvas({
         }
       }}
     >
-      <Stage
-        ref={stageRef}
-        width={screen.width}
-        height={screen.height}
-        x={viewport.x}
-        y={viewport.y}
-        scaleX={viewport.scale}
-        scaleY={viewport.scale}
-        onMouseDown={handlers.down}
-        onMouseMove={handlers.move}
-        onMouseUp={handlers.up}
-        onWheel={onWheel}
-      >
-        {layers}
-      </Stage>
+      {measured && (
+        <Stage
+          ref={stageRef}
+          width={screen.width}
+          height={screen.height}
+          x={viewport.x}
+          y={viewport.y}
+          scaleX={viewport.scale}
+          scaleY={viewport.scale}
+          onMouseDown={handlers.down}
+          onMouseMove={handlers.move}
+          onMouseUp={handlers.up}
+          onWheel={onWheel}
+        >
+          {layers}
+        </Stage>
+      )}
     </div>
   );
 }

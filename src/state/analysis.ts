@@ -12,6 +12,7 @@ import { powerFromCounts } from '../core/power/powerReport.ts';
 import { LiveSession } from '../core/view/liveSession.ts';
 import { completeVector } from '../core/view/vectorControl.ts';
 import { IDLE_JOB, jobSize } from '../worker/protocol.ts';
+import { jobRunner } from '../worker/runner.ts';
 import {
   currentSteps,
   runSequence,
@@ -121,20 +122,33 @@ function follow(s: RailwiseState): Staleness {
     ...(stale.sizing ? { sizing: IDLE_JOB } : {}),
     ...(stale.transfer ? { transfer: IDLE_JOB } : {}),
     ...(stale.vectorDc ? { vectorDc: IDLE_JOB } : {}),
+    ...(stale.check ? { proof: IDLE_JOB } : {}),
+    ...(stale.netlist ? { comparison: IDLE_JOB } : {}),
   });
   if (stale.netlist) followNetlist(store.getState());
   return stale;
 }
 
-/** Starts, once edits pause, the jobs a small cell needs to show everything. */
+/** Whether the cell is small enough to be checked by itself after each edit. */
+function checkedByItself(s: RailwiseState): boolean {
+  const cell = { netlist: s.design.netlist, technology: s.design.technology, expectations: {} };
+  const job = { kind: 'sweep', revision: 0, cell, undrivenInputs: s.simulation.undrivenInputs } as const;
+  return jobSize(job) <= AUTO_SWEEP_VECTORS;
+}
+
+/** Starts a small cell's check once edits pause; the promise settles once it answered (null: none started). */
+function autoCheck(stale: Staleness): Promise<void> | null {
+  const s = store.getState();
+  if (!checkedByItself(s) || !stale.sweep || s.simulation.sweep.status !== 'idle') return null;
+  return startSweep();
+}
+
+/** Starts, once edits pause, the other jobs a small cell needs to show everything. */
 function autoRun(stale: Staleness): void {
   const s = store.getState();
   const sim = s.simulation;
-  const cell = { netlist: s.design.netlist, technology: s.design.technology, expectations: {} };
-  if (jobSize({ kind: 'sweep', revision: 0, cell, undrivenInputs: sim.undrivenInputs }) > AUTO_SWEEP_VECTORS)
-    return;
+  if (!checkedByItself(s)) return;
   const bySequence = sim.powerSettings.activity === 'sequence';
-  if (stale.sweep && sim.sweep.status === 'idle') void startSweep();
   if (stale.sizing && sim.sizing.status === 'idle') void startSizing();
   if (
     (stale.sequence || stale.activity) &&
@@ -145,45 +159,77 @@ function autoRun(stale: Staleness): void {
     void runSequence();
 }
 
-/** The level-1 DC jobs whatever the cell's vector count: the curve once asked for, the shown vector's answer. */
-function autoRunDc(stale: Staleness): void {
-  const s = store.getState();
-  const sim = s.simulation;
+/** The transfer curve, once asked for, whatever the cell's vector count. */
+function autoRunTransfer(stale: Staleness): void {
+  const sim = store.getState().simulation;
   if (stale.transfer && sim.transfer.status === 'idle' && sim.transferRequest !== null) void startTransfer();
+}
+
+/** The shown vector's level-1 answer, whatever the cell's vector count. */
+function autoRunVectorDc(stale: Staleness): void {
+  const s = store.getState();
   if (
     stale.vectorDc &&
-    sim.vectorDc.status === 'idle' &&
+    s.simulation.vectorDc.status === 'idle' &&
     s.design.netlist.devices.length <= AUTO_VECTOR_DC_DEVICES
   )
     void startVectorDc();
 }
 
+/** Starts the worker the first check runs in, so its script loads while the page opens its design. */
+export function warmAnalysis(): void {
+  jobRunner('sweep').warm?.();
+}
+
+export interface StartOptions {
+  /**
+   * Start the opened design's jobs at once rather than after the edit pause: the page at start-up,
+   * where nothing is being edited yet.
+   */
+  readonly startNow?: boolean;
+}
+
 /** Follows the store from now on; returns the function that stops following. */
-export function startAnalysis(): () => void {
+export function startAnalysis(options: StartOptions = {}): () => void {
   let timer: ReturnType<typeof setTimeout> | null = null;
   let pending: Staleness | null = null;
+  let stopped = false;
+  const runDue = (): void => {
+    timer = null;
+    const due = pending;
+    pending = null;
+    if (due === null) return;
+    autoRunTransfer(due);
+    // The check before the jobs that start by themselves: it is what the panel waits for, and they
+    // start once it has answered, so their workers do not compete with it for the processor.
+    const check = autoCheck(due);
+    const rest = (): void => {
+      if (stopped) return;
+      autoRun(due);
+      autoRunVectorDc(due);
+    };
+    if (check === null) rest();
+    else void check.then(rest);
+  };
   const react = (s: RailwiseState, previous: RailwiseState | null): void => {
     const stale = follow(s);
     if (Object.values(stale).some(Boolean)) {
       pending = pending === null ? stale : merge(pending, stale);
       if (timer !== null) clearTimeout(timer);
-      timer = setTimeout(() => {
-        timer = null;
-        const due = pending;
-        pending = null;
-        if (due !== null) {
-          autoRunDc(due);
-          autoRun(due);
-        }
-      }, SWEEP_DEBOUNCE_MS);
+      timer = setTimeout(runDue, SWEEP_DEBOUNCE_MS);
     }
     const sim = store.getState().simulation;
     if (previous === null || powerInputsChanged(sim, previous.simulation)) setSimulation(finishedPower(sim));
   };
   react(store.getState(), null);
+  if (options.startNow === true && timer !== null) {
+    clearTimeout(timer);
+    runDue();
+  }
   const unsubscribe = store.subscribe((s, previous) => react(s, previous));
   const stopLibrary = followLibrary();
   return () => {
+    stopped = true;
     unsubscribe();
     stopLibrary();
     if (timer !== null) clearTimeout(timer);

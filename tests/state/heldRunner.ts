@@ -46,9 +46,14 @@ export function useHeldRunner(): void {
   });
 }
 
-/** Lets debounced jobs start, finishes them all, and lets their answers land. */
+/**
+ * Lets debounced jobs start, finishes them all, and lets their answers land; again for the jobs
+ * that start once the check has answered.
+ */
 export async function settle(): Promise<void> {
   vi.advanceTimersByTime(SWEEP_DEBOUNCE_MS + 1);
-  runner.finishAll();
-  await vi.runAllTimersAsync();
+  do {
+    runner.finishAll();
+    await vi.runAllTimersAsync();
+  } while (runner.pending.length > 0);
 }

@@ -98,8 +98,12 @@ function refuseLoops(design: Design, fileName: string): void {
   }
 }
 
-/** Stable key order and two-space indentation, so saved files diff well under version control. */
-export function serializeDesign(design: Design): string {
+/**
+ * Stable key order and two-space indentation, so saved files diff well under version control;
+ * `compact` (no whitespace, half the characters, a fraction of the time) for text only Railwise
+ * reads back, such as the browser's autosave.
+ */
+export function serializeDesign(design: Design, layout: 'readable' | 'compact' = 'readable'): string {
   const doc = {
     format: DESIGN_FORMAT_TAG,
     version: CURRENT_DESIGN_VERSION,
@@ -117,7 +121,7 @@ export function serializeDesign(design: Design): string {
     })),
     ...(design.notes === undefined ? {} : { notes: design.notes }),
   };
-  return `${JSON.stringify(doc, null, 2)}\n`;
+  return layout === 'compact' ? JSON.stringify(doc) : `${JSON.stringify(doc, null, 2)}\n`;
 }
 
 function parseJson(text: string, fileName: string): RawDocument {
