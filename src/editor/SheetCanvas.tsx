@@ -1,4 +1,4 @@
-import { useCallback, useEffect, useMemo, useRef, type RefObject } from 'react';
+import { useCallback, useEffect, useLayoutEffect, useMemo, useRef, useState, type RefObject } from 'react';
 import { Layer, Stage } from 'react-konva';
 import type Konva from 'konva';
 import type { KonvaEventObject } from 'konva/lib/Node';
@@ -16,9 +16,15 @@ import { hitTest } from '../core/sheet/hitTest.ts';
 import { indexFor } from './tools/sheetIndex.ts';
 import { SHEET_THEME } from './theme.ts';
 
-/** Keeps the store told of the sheet area's size (for fit-to-view and the grid). */
-function useElementSize(ref: RefObject<HTMLDivElement | null>, onFirstLayout?: () => void): void {
-  useEffect(() => {
+/**
+ * Keeps the store told of the sheet area's size (for fit-to-view and the grid). The first size is
+ * read before the browser paints (a layout effect), so the stage is made once at its real size and
+ * in its fitted view: making it at a guessed size and then resizing it drew the whole sheet twice
+ * and allocated its canvases twice. Returns whether that first size is known.
+ */
+function useElementSize(ref: RefObject<HTMLDivElement | null>, onFirstLayout?: () => void): boolean {
+  const [measured, setMeasured] = useState(false);
+  useLayoutEffect(() => {
     const el = ref.current;
     if (!el) return;
     let first = true;
@@ -30,10 +36,12 @@ function useElementSize(ref: RefObject<HTMLDivElement | null>, onFirstLayout?: (
       }
     };
     update();
+    setMeasured(true);
     const observer = new ResizeObserver(update);
     observer.observe(el);
     return () => observer.disconnect();
   }, [ref, onFirstLayout]);
+  return measured;
 }
 
 function toPointer(stage: Konva.Stage, evt: MouseEvent): ToolPointer | null {
@@ -82,11 +90,12 @@ export function SheetCanvas({
     ),
     [],
   );
-  useElementSize(box, onFirstLayout);
+  const measured = useElementSize(box, onFirstLayout);
   useEffect(() => {
+    if (!measured) return;
     setStage(stageRef.current);
     return () => setStage(null);
-  }, []);
+  }, [measured]);
   // Handlers made once, so a re-render of the stage never rebinds its events.
   const handlers = useMemo(() => {
     const route = (fn: (e: ToolPointer) => void) => (e: KonvaEventObject<MouseEvent>) => {
@@ -131,21 +140,23 @@ export function SheetCanvas({
         }
       }}
     >
-      <Stage
-        ref={stageRef}
-        width={screen.width}
-        height={screen.height}
-        x={viewport.x}
-        y={viewport.y}
-        scaleX={viewport.scale}
-        scaleY={viewport.scale}
-        onMouseDown={handlers.down}
-        onMouseMove={handlers.move}
-        onMouseUp={handlers.up}
-        onWheel={onWheel}
-      >
-        {layers}
-      </Stage>
+      {measured ? (
+        <Stage
+          ref={stageRef}
+          width={screen.width}
+          height={screen.height}
+          x={viewport.x}
+          y={viewport.y}
+          scaleX={viewport.scale}
+          scaleY={viewport.scale}
+          onMouseDown={handlers.down}
+          onMouseMove={handlers.move}
+          onMouseUp={handlers.up}
+          onWheel={onWheel}
+        >
+          {layers}
+        </Stage>
+      ) : null}
     </div>
   );
 }

@@ -26,7 +26,7 @@ import { store, type RailwiseState } from './store.ts';
 
 /** Cells with up to this many vectors are checked by themselves after each edit; larger ones on a click. */
 export const AUTO_SWEEP_VECTORS = 1024;
-/** Waits for edits to pause before starting jobs by themselves. */
+/** Changes closer together than this wait for edits to pause before jobs start by themselves. */
 export const SWEEP_DEBOUNCE_MS = 120;
 
 /**
@@ -158,24 +158,37 @@ function autoRunDc(stale: Staleness): void {
     void startVectorDc();
 }
 
-/** Follows the store from now on; returns the function that stops following. */
+/**
+ * Follows the store from now on; returns the function that stops following. Jobs wait for edits
+ * to pause: a change after a quiet spell (a design opened, the page started, a first edit) starts
+ * them at once, in a microtask after the change that made them stale; changes that come closer
+ * together than SWEEP_DEBOUNCE_MS wait until they pause, so typing or a run of nudges starts one job.
+ */
 export function startAnalysis(): () => void {
   let timer: ReturnType<typeof setTimeout> | null = null;
   let pending: Staleness | null = null;
+  let lastChange = -Infinity;
+  let stopped = false;
+  const runPending = (): void => {
+    if (timer !== null) clearTimeout(timer); // a change queued behind the microtask is served now
+    timer = null;
+    const due = pending;
+    pending = null;
+    if (due !== null && !stopped) {
+      autoRunDc(due);
+      autoRun(due);
+    }
+  };
   const react = (s: RailwiseState, previous: RailwiseState | null): void => {
     const stale = follow(s);
     if (Object.values(stale).some(Boolean)) {
       pending = pending === null ? stale : merge(pending, stale);
+      const now = Date.now();
+      const quiet = timer === null && now - lastChange >= SWEEP_DEBOUNCE_MS;
+      lastChange = now;
       if (timer !== null) clearTimeout(timer);
-      timer = setTimeout(() => {
-        timer = null;
-        const due = pending;
-        pending = null;
-        if (due !== null) {
-          autoRunDc(due);
-          autoRun(due);
-        }
-      }, SWEEP_DEBOUNCE_MS);
+      if (quiet) queueMicrotask(runPending);
+      else timer = setTimeout(runPending, SWEEP_DEBOUNCE_MS);
     }
     const sim = store.getState().simulation;
     if (previous === null || powerInputsChanged(sim, previous.simulation)) setSimulation(finishedPower(sim));
@@ -184,6 +197,7 @@ export function startAnalysis(): () => void {
   const unsubscribe = store.subscribe((s, previous) => react(s, previous));
   const stopLibrary = followLibrary();
   return () => {
+    stopped = true;
     unsubscribe();
     stopLibrary();
     if (timer !== null) clearTimeout(timer);

@@ -46,9 +46,17 @@ export function useHeldRunner(): void {
   });
 }
 
-/** Lets debounced jobs start, finishes them all, and lets their answers land. */
+/**
+ * Lets queued jobs start (at once after a quiet spell, in a microtask; otherwise once edits pause),
+ * finishes them all, and lets their answers land.
+ */
 export async function settle(): Promise<void> {
-  vi.advanceTimersByTime(SWEEP_DEBOUNCE_MS + 1);
+  await startQueued();
   runner.finishAll();
   await vi.runAllTimersAsync();
+}
+
+/** Lets queued jobs start without finishing them. */
+export async function startQueued(): Promise<void> {
+  await vi.advanceTimersByTimeAsync(SWEEP_DEBOUNCE_MS + 1);
 }
