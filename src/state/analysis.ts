@@ -126,30 +126,47 @@ function follow(s: RailwiseState): Staleness {
   return stale;
 }
 
-/** Starts, once edits pause, the jobs a small cell needs to show everything. */
+/** Starts, once edits pause, the table's jobs a small cell needs: the sweep and the chosen sequence. */
 function autoRun(stale: Staleness): void {
   const s = store.getState();
   const sim = s.simulation;
-  const cell = { netlist: s.design.netlist, technology: s.design.technology, expectations: {} };
-  if (jobSize({ kind: 'sweep', revision: 0, cell, undrivenInputs: sim.undrivenInputs }) > AUTO_SWEEP_VECTORS)
-    return;
-  const bySequence = sim.powerSettings.activity === 'sequence';
+  if (!checkedByItself(s)) return;
   if (stale.sweep && sim.sweep.status === 'idle') void startSweep();
-  if (stale.sizing && sim.sizing.status === 'idle') void startSizing();
   if (
     (stale.sequence || stale.activity) &&
-    bySequence &&
+    sim.powerSettings.activity === 'sequence' &&
     sim.sequence.status === 'idle' &&
     currentSteps().length > 0
   )
     void runSequence();
 }
 
-/** The level-1 DC jobs whatever the cell's vector count: the curve once asked for, the shown vector's answer. */
-function autoRunDc(stale: Staleness): void {
+/** Whether the cell is small enough to be checked after every edit without a click. */
+function checkedByItself(s: RailwiseState): boolean {
+  const cell = { netlist: s.design.netlist, technology: s.design.technology, expectations: {} };
+  const sweep = { kind: 'sweep', revision: 0, cell, undrivenInputs: s.simulation.undrivenInputs } as const;
+  return jobSize(sweep) <= AUTO_SWEEP_VECTORS;
+}
+
+/** The curve once asked for: the designer is looking at it, so it never waits. */
+function autoRunTransfer(stale: Staleness): void {
+  const sim = store.getState().simulation;
+  if (stale.transfer && sim.transfer.status === 'idle' && sim.transferRequest !== null) void startTransfer();
+}
+
+/**
+ * The jobs that come after the table (docs/semantics.md §8): sizing for a small cell, and the shown
+ * vector's level-1 answer whatever the cell's vector count. They wait while a short sweep (one
+ * without a progress bar) runs, so on two cores the table and the level colours come first.
+ */
+function afterTable(s: RailwiseState): boolean {
+  return s.simulation.sweep.status !== 'running' || s.simulation.sweep.long;
+}
+
+function autoRunAfterTable(stale: Staleness): void {
   const s = store.getState();
   const sim = s.simulation;
-  if (stale.transfer && sim.transfer.status === 'idle' && sim.transferRequest !== null) void startTransfer();
+  if (stale.sizing && sim.sizing.status === 'idle' && checkedByItself(s)) void startSizing();
   if (
     stale.vectorDc &&
     sim.vectorDc.status === 'idle' &&
@@ -166,7 +183,16 @@ function autoRunDc(stale: Staleness): void {
  */
 export function startAnalysis(): () => void {
   let timer: ReturnType<typeof setTimeout> | null = null;
+  /** What went stale since jobs last started. */
   let pending: Staleness | null = null;
+  /** What went stale for the jobs that come after the table, until the table is done. */
+  let later: Staleness | null = null;
+  const runLater = (): void => {
+    if (later === null || pending !== null || !afterTable(store.getState())) return;
+    const due = later;
+    later = null;
+    autoRunAfterTable(due);
+  };
   let lastChange = -Infinity;
   let stopped = false;
   const runPending = (): void => {
@@ -174,10 +200,11 @@ export function startAnalysis(): () => void {
     timer = null;
     const due = pending;
     pending = null;
-    if (due !== null && !stopped) {
-      autoRunDc(due);
-      autoRun(due);
-    }
+    if (due === null || stopped) return;
+    autoRunTransfer(due);
+    autoRun(due);
+    later = later === null ? due : merge(later, due);
+    runLater();
   };
   const react = (s: RailwiseState, previous: RailwiseState | null): void => {
     const stale = follow(s);
@@ -192,6 +219,7 @@ export function startAnalysis(): () => void {
     }
     const sim = store.getState().simulation;
     if (previous === null || powerInputsChanged(sim, previous.simulation)) setSimulation(finishedPower(sim));
+    if (!stopped) runLater();
   };
   react(store.getState(), null);
   const unsubscribe = store.subscribe((s, previous) => react(s, previous));

@@ -48,12 +48,16 @@ export function useHeldRunner(): void {
 
 /**
  * Lets queued jobs start (at once after a quiet spell, in a microtask; otherwise once edits pause),
- * finishes them all, and lets their answers land.
+ * finishes them all, and lets their answers land; jobs that wait for the table start and finish in
+ * a further round.
  */
 export async function settle(): Promise<void> {
   await startQueued();
-  runner.finishAll();
-  await vi.runAllTimersAsync();
+  for (let round = 0; round < 4; round++) {
+    runner.finishAll();
+    await vi.runAllTimersAsync();
+    if (runner.pending.length === 0) return;
+  }
 }
 
 /** Lets queued jobs start without finishing them. */

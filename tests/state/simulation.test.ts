@@ -90,6 +90,18 @@ describe('sweep jobs and revisions', () => {
     expect(state().sweep.status).toBe('running');
   });
 
+  it('starts sizing and the level-1 answer once the table is done', async () => {
+    loadDesign(design(nand2));
+    await startQueued();
+    expect(new Set(runner.kinds())).toEqual(new Set(['sweep'])); // the start-up's and this design's
+    expect(state().sizing.status).toBe('idle');
+    expect(state().vectorDc.status).toBe('idle');
+    runner.finishAll();
+    await vi.advanceTimersByTimeAsync(0);
+    expect(state().sweep.status).toBe('done');
+    expect(runner.kinds().sort()).toEqual(['sizing', 'vector-dc']);
+  });
+
   it('drops a result computed for an older revision', async () => {
     loadDesign(design(nand2MissingPullUp));
     await startQueued();
