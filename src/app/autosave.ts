@@ -17,7 +17,7 @@
 import { createStore } from 'zustand/vanilla';
 import { useStore as useZustand } from 'zustand';
 import type { Design } from '../core/model/design.ts';
-import { parseDesignFile, serializeDesign } from '../core/format/designFile.ts';
+import { parseDesignFile, serializeDesignCompact } from '../core/format/designFile.ts';
 import { currentDesign, store } from '../state/store.ts';
 import { whenIdle } from './idle.ts';
 import { isPacked, PACK_ABOVE, packForStorage, unpackFromStorage } from './storedText.ts';
@@ -177,6 +177,11 @@ export function settleSuspect(outcome: 'opened' | 'discarded', storage: Storage 
   recovery.setState({ suspect: null });
 }
 
+/** The text the autosave keeps of a design: the design file without indentation. */
+export function autosaveText(design: Design): string {
+  return serializeDesignCompact(design);
+}
+
 /** Stores a design's text; false when the storage refused it (full or blocked). */
 function keepText(storage: Storage, text: string): boolean {
   try {
@@ -198,7 +203,7 @@ export function startAutosave(storage: Storage = localStorage): () => void {
     if (revision === savedRevision || failed) return;
     // A design still being opened is not written yet: try again shortly.
     if (readOpening(storage) !== null && !now) return void (cancel = later(DELAY_MS));
-    const text = serializeDesign(currentDesign());
+    const text = autosaveText(currentDesign());
     if (text.length <= PACK_ABOVE || now) {
       // Storage full or blocked: keep editing; the next change tries again.
       if (keepText(storage, text)) savedRevision = revision;

@@ -10,9 +10,8 @@ import { toggleInput } from '../state/simulation.ts';
 import { AUTO_SWEEP_VECTORS } from '../state/analysis.ts';
 import { currentStage } from '../editor/stageRef.ts';
 import type { Point } from '../core/sheet/types.ts';
-import { AUTOSAVE_KEY, autosavedText } from './autosave.ts';
+import { AUTOSAVE_KEY, autosavedText, autosaveText } from './autosave.ts';
 import { HISTORY_KEY, historyFor, MAX_STORED_STEPS } from './sessionHistory.ts';
-import { serializeDesign } from '../core/format/designFile.ts';
 
 export interface RailwiseTestApi {
   state: typeof store.getState;
@@ -73,7 +72,7 @@ export function installTestApi(): void {
     undo,
     redo,
     autosaveKey: AUTOSAVE_KEY,
-    autosaveCaughtUp: async () => (await autosavedText()) === serializeDesign(currentDesign()),
+    autosaveCaughtUp: async () => (await autosavedText()) === autosaveText(currentDesign()),
     historyCaughtUp: () => {
       const { doc, history } = store.getState();
       const kept = historyFor(doc, sessionStorage.getItem(HISTORY_KEY));

@@ -7,6 +7,7 @@ import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import {
   AUTOSAVE_KEY,
   autosavedText,
+  autosaveText,
   openingDone,
   RESCUE_KEY,
   restoreAutosave,
@@ -40,7 +41,10 @@ describe('autosave of a long design', () => {
     stop();
     expect(isPacked(stored)).toBe(true);
     const text = await autosavedText(storage);
-    expect(text).toBe(serializeDesign(currentDesign()));
+    expect(text).toBe(autosaveText(currentDesign()));
+    // The design file without its indentation: the same document as a saved file.
+    expect(JSON.parse(text!)).toEqual(JSON.parse(serializeDesign(currentDesign())));
+    expect(text!.length).toBeLessThan(serializeDesign(currentDesign()).length / 2);
     expect(stored.length).toBeLessThan(text!.length / 5);
     const restored = restoreAutosave(storage, text);
     expect(restored.design?.cells[0]?.sheet).toEqual(design.sheet);
