@@ -157,7 +157,8 @@ function autoRunTransfer(stale: Staleness): void {
 /**
  * The jobs that come after the table (docs/semantics.md §8): sizing for a small cell, and the shown
  * vector's level-1 answer whatever the cell's vector count. They wait while a short sweep (one
- * without a progress bar) runs, so on two cores the table and the level colours come first.
+ * without a progress bar) runs, and then for the page to paint the table, so on two cores the
+ * table and the level colours come first.
  */
 function afterTable(s: RailwiseState): boolean {
   return s.simulation.sweep.status !== 'running' || s.simulation.sweep.long;
@@ -175,6 +176,12 @@ function autoRunAfterTable(stale: Staleness): void {
     void startVectorDc();
 }
 
+/** Runs `work` once the page has painted what the store holds now (at once where nothing paints). */
+function afterNextPaint(work: () => void): void {
+  if (typeof requestAnimationFrame === 'function') requestAnimationFrame(() => setTimeout(work, 0));
+  else setTimeout(work, 0);
+}
+
 /**
  * Follows the store from now on; returns the function that stops following. Jobs wait for edits
  * to pause: a change after a quiet spell (a design opened, the page started, a first edit) starts
@@ -187,11 +194,16 @@ export function startAnalysis(): () => void {
   let pending: Staleness | null = null;
   /** What went stale for the jobs that come after the table, until the table is done. */
   let later: Staleness | null = null;
+  let laterQueued = false;
   const runLater = (): void => {
-    if (later === null || pending !== null || !afterTable(store.getState())) return;
-    const due = later;
-    later = null;
-    autoRunAfterTable(due);
+    if (later === null || pending !== null || laterQueued || !afterTable(store.getState())) return;
+    laterQueued = true;
+    afterNextPaint(() => {
+      laterQueued = false;
+      const due = later;
+      later = null;
+      if (due !== null && !stopped) autoRunAfterTable(due);
+    });
   };
   let lastChange = -Infinity;
   let stopped = false;
