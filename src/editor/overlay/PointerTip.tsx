@@ -59,14 +59,15 @@ export function PointerTip({ box }: { readonly box: RefObject<HTMLDivElement | n
   useEffect(() => {
     const el = box.current;
     if (!el) return;
-    const index = indexFor(sheet); // the editor's cached index of this very sheet
+    // The editor's cached index of this very sheet, built when the pointer first needs it.
+    const hitAt = (at: Point): Hit | null => hitTest(indexFor(sheet), at);
     const onMove = (e: MouseEvent): void => {
       const at = sheetPointOf(el, e);
-      const net = netOfHit(hitTest(index, at), geometry);
+      const net = netOfHit(hitAt(at), geometry);
       setHover(net !== undefined ? { net, at } : null);
     };
     const onDoubleClick = (e: MouseEvent): void => {
-      const hit = hitTest(index, sheetPointOf(el, e));
+      const hit = hitAt(sheetPointOf(el, e));
       const input = inputOfHit(hit, sheet, geometry);
       if (input !== undefined) return toggleInput(input);
       const instance = instanceOfHit(hit, sheet);
