@@ -64,14 +64,18 @@ function assignColumns(slots: Slot[]): void {
       for (const n of channelNets(p.device) ?? []) (before.get(n) ?? before.set(n, []).get(n)!).push(i);
     });
     const used = new Set<number>();
+    // The lowest column still free: where a device that stacks on nothing goes. Columns are only
+    // ever taken, so it only moves right, and a wide row of such devices stays linear.
+    let lowestFree = 0;
     for (const slot of byRow.get(row)!) {
       let first = Infinity;
       for (const n of channelNets(slot.device) ?? [])
         for (const i of before.get(n) ?? []) if (i < first && !used.has(prev[i]!.column)) first = i;
-      let col = first === Infinity ? 0 : prev[first]!.column;
+      let col = first === Infinity ? lowestFree : prev[first]!.column;
       while (used.has(col)) col++;
       slot.column = col;
       used.add(col);
+      while (used.has(lowestFree)) lowestFree++;
     }
   }
 }
