@@ -1,3 +1,4 @@
+// Indexes read here are in range by construction, so `!` marks them (no run-time cost).
 /**
  * The floor: the least work any switch-level solver must do per vector, which is to look at every
  * transistor's gate once. The loop reads each transistor's gate-net level and writes one byte per
@@ -18,7 +19,7 @@ export interface FloorFrame {
 export function floorFrame(compiled: CompiledNetlist): FloorFrame {
   const gates: number[] = [];
   for (let c = 0; c < compiled.chCount; c++) {
-    if (compiled.chKind[c] === NMOS || compiled.chKind[c] === PMOS) gates.push(compiled.chGate[c]);
+    if (compiled.chKind[c] === NMOS || compiled.chKind[c] === PMOS) gates.push(compiled.chGate[c]!);
   }
   return {
     gates: Int32Array.from(gates),
@@ -38,9 +39,9 @@ export function floorLoop(frame: FloorFrame, vectors: number): number {
   const n = gates.length;
   let checksum = 0;
   for (let v = 0; v < vectors; v++) {
-    for (let i = 0; i < inputs.length; i++) levels[inputs[i]] = (v >>> (i % 31)) & 1;
-    for (let t = 0; t < n; t++) out[t] = levels[gates[t]];
-    checksum = (checksum + out[v % n]) | 0;
+    for (let i = 0; i < inputs.length; i++) levels[inputs[i]!] = (v >>> (i % 31)) & 1;
+    for (let t = 0; t < n; t++) out[t] = levels[gates[t]!]!;
+    checksum = (checksum + out[v % n]!) | 0;
   }
   return checksum;
 }

@@ -1,3 +1,4 @@
+// Indexes read here are in range by construction, so `!` marks them (no run-time cost).
 /** Plain-text tables for the terminal: text columns left-aligned, numbers right-aligned. */
 
 export type Cell = string | number;
@@ -20,7 +21,7 @@ export function formatTable(headers: readonly string[], rows: readonly (readonly
   const numeric = headers.map((_, i) => rows.length > 0 && rows.every((r) => typeof r[i] === 'number'));
   const line = (cells: readonly string[]): string =>
     cells
-      .map((c, i) => (numeric[i] ? c.padStart(widths[i]) : c.padEnd(widths[i])))
+      .map((c, i) => (numeric[i] ? c.padStart(widths[i]!) : c.padEnd(widths[i]!)))
       .join('  ')
       .trimEnd();
   return [line(headers), line(widths.map((w) => '-'.repeat(w))), ...text.map(line)].join('\n');

@@ -1,5 +1,6 @@
 import { expect, test } from '@playwright/test';
 import { RailwisePage } from './pages/RailwisePage.ts';
+import { watchErrors } from './pages/errors.ts';
 
 /**
  * A new user draws the static CMOS inverter from an empty sheet with mouse and keyboard.
@@ -7,9 +8,7 @@ import { RailwisePage } from './pages/RailwisePage.ts';
  * no source.
  */
 test('draw an inverter, check the derived netlist, undo and redo it all', async ({ page }) => {
-  const errors: string[] = [];
-  page.on('pageerror', (e) => errors.push(String(e)));
-  page.on('console', (m) => m.type() === 'error' && errors.push(m.text()));
+  const errors = watchErrors(page);
   const app = new RailwisePage(page);
   await app.open();
   await app.newSheet();

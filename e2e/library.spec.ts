@@ -83,7 +83,10 @@ test('descend into an instance to see its cell with the levels it has there, and
   ].join('\n');
   await app.openFile('buffer.sp', buffer);
   await expect(page.getByRole('dialog', { name: 'Cells of buffer' })).toBeHidden();
-  expect((await app.netlist()).devices.map((d) => d.name)).toEqual(['X1.mp', 'X1.mn', 'X2.mp', 'X2.mn']);
+  // The file readers load on first use, so the design arrives a moment after the file is given.
+  await expect
+    .poll(async () => (await app.netlist()).devices.map((d) => d.name))
+    .toEqual(['X1.mp', 'X1.mn', 'X2.mp', 'X2.mn']);
   const bit = new WorkspacePanel(page).bit('A');
   await bit.click();
   const a = (await bit.textContent())?.includes('1') ? '1' : '0';

@@ -1,13 +1,13 @@
 import { expect, test } from '@playwright/test';
 import { RailwisePage } from './pages/RailwisePage.ts';
+import { watchErrors } from './pages/errors.ts';
 
 /**
  * A kind past the nine number keys is placed through the shelf's search. The diode's netlist record
  * (anode, cathode) is the model's own; no published source applies.
  */
 test('find the diode by name, place it, wire it and see it in the derived netlist', async ({ page }) => {
-  const errors: string[] = [];
-  page.on('pageerror', (e) => errors.push(String(e)));
+  const errors = watchErrors(page);
   const app = new RailwisePage(page);
   await app.open();
   await app.newSheet();

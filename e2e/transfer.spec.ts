@@ -1,13 +1,13 @@
 import { expect, test } from '@playwright/test';
 import { DEFAULT_TECHNOLOGY as T } from '../src/core/model/technology.ts';
 import { RailwisePage } from './pages/RailwisePage.ts';
+import { watchErrors } from './pages/errors.ts';
 import { TransferView } from './pages/transfer.ts';
 
 test('the DC transfer curve of the inverter starter: VM, the convention, the points as CSV', async ({
   page,
 }) => {
-  const errors: string[] = [];
-  page.on('pageerror', (e) => errors.push(String(e)));
+  const errors = watchErrors(page);
   const app = new RailwisePage(page);
   await app.open();
   await app.starter('Inverter');

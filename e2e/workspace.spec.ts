@@ -4,14 +4,8 @@ import type { SheetPart } from '../src/core/sheet/types.ts';
 import { DEFAULT_TECHNOLOGY } from '../src/core/model/technology.ts';
 import { formatCurrent } from '../src/core/view/format.ts';
 import { RailwisePage } from './pages/RailwisePage.ts';
+import { watchErrors } from './pages/errors.ts';
 import { WorkspacePanel } from './pages/workspace.ts';
-
-function watchErrors(page: Page): string[] {
-  const errors: string[] = [];
-  page.on('pageerror', (e) => errors.push(String(e)));
-  page.on('console', (m) => m.type() === 'error' && errors.push(m.text()));
-  return errors;
-}
 
 async function start(page: Page): Promise<{ app: RailwisePage; ws: WorkspacePanel }> {
   const app = new RailwisePage(page);
@@ -40,7 +34,7 @@ test('the resistor-load inverter: pick the vector that draws current and read it
   await header.click();
   await header.click();
   const [top] = await ws.rowIndices();
-  await ws.row(top).click();
+  await ws.row(top!).click();
   await expect(ws.bit('A')).toContainText('1');
 
   // With A = 1 the NMOS is its on-resistance Rn·L/W (Rn = 13 kΩ at W/L = 1: RCN 2nd ed., table 3.3,
@@ -94,7 +88,8 @@ test('a floating output: find its vectors in the table, fix the cell on the shee
   await ws.showOnly('problems');
   // With A = 1 and B = 0 the only conducting pull-up drives Yq, not Y, and the NMOS stack is open:
   // Y has no path to either rail (series-parallel duality of the NAND; common practice, no source).
-  expect(await ws.rowIndices()).toEqual([2]);
+  // The table fills from the worker after the import: poll rather than read once.
+  await expect.poll(() => ws.rowIndices()).toEqual([2]);
   await expect(ws.row(2)).toContainText('floating');
   await expect(ws.row(2)).toContainText('Z');
 
@@ -106,7 +101,7 @@ test('a floating output: find its vectors in the table, fix the cell on the shee
   await expect(ws.root.getByTestId('table-empty')).toBeVisible();
   await ws.showOnly('all');
   await expect(ws.tableSummary).toContainText('no findings');
-  expect(await ws.rowIndices()).toEqual([0, 1, 2, 3]);
+  await expect.poll(() => ws.rowIndices()).toEqual([0, 1, 2, 3]);
   expect(errors).toEqual([]);
 });
 

@@ -7,13 +7,14 @@ import { openSharedLink } from './app/shareLink.ts';
 import { startAutosave } from './app/autosave.ts';
 import { restoreSessionHistory, startSessionHistory } from './app/sessionHistory.ts';
 import { installTestApi } from './app/testApi.ts';
-import { startAnalysis } from './state/analysis.ts';
+import { startAnalysis, warmAnalysis } from './state/analysis.ts';
 
 /** Opens the design (the autosaved one, expanded first when it was stored packed), then the page. */
 async function start(root: HTMLElement): Promise<void> {
+  warmAnalysis();
   await openFirstDesign();
   restoreSessionHistory();
-  startAnalysis();
+  startAnalysis({ startNow: true });
   void openSharedLink();
   startAutosave();
   startSessionHistory();

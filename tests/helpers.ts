@@ -14,13 +14,13 @@ export class Solved {
     return n;
   }
   level(net: string): '0' | '1' | 'X' | 'Z' {
-    return levelName(this.result.levels[this.index(net)]);
+    return levelName(this.result.levels[this.index(net)]!);
   }
   volts(net: string): number {
-    return this.result.volts[this.index(net)];
+    return this.result.volts[this.index(net)]!;
   }
   flags(net: string): number {
-    return this.result.flags[this.index(net)];
+    return this.result.flags[this.index(net)]!;
   }
 }
 
@@ -44,4 +44,12 @@ export function solveSteps(
     out.push(new Solved(previous));
   }
   return out;
+}
+
+type Leading<T, N extends number, R extends T[] = []> = R['length'] extends N ? R : Leading<T, N, [...R, T]>;
+
+/** The first `count` items of a list, typed as present; throws (failing the test) when it is shorter. */
+export function leading<T, N extends number>(list: readonly T[], count: N): Leading<T, N> {
+  if (list.length < count) throw new Error(`expected at least ${count} items, got ${list.length}`);
+  return list.slice(0, count) as Leading<T, N>;
 }

@@ -1,3 +1,4 @@
+// Indexes read here are in range by construction, so `!` marks them (no run-time cost).
 /**
  * The exhaustive-sweep circuit: 16 inputs (A0…A7, B0…B7) feeding eight 8-bit mirror ripple adders
  * with their carry-in tied to GND. Adder r adds A to B rotated left by r bits, so the eight adders
@@ -14,7 +15,7 @@ export const BANK_BITS = 8;
 /** `nets` rotated left by r places: bit i of the result is bit (i − r) mod n of the input. */
 export function rotateLeft<T>(nets: readonly T[], r: number): T[] {
   const n = nets.length;
-  return nets.map((_, i) => nets[(((i - r) % n) + n) % n]);
+  return nets.map((_, i) => nets[(((i - r) % n) + n) % n]!);
 }
 
 export function adderBank(adders = 8): Netlist {

@@ -1,3 +1,4 @@
+// Indexes read here are in range by construction, so `!` marks them (no run-time cost).
 /**
  * A transmission-gate multiplexer tree: 2^k data inputs D0…, k select lines S0… (S0 least
  * significant), one output Y = D[S]. Each select line has its own static inverter for the
@@ -35,7 +36,7 @@ export function muxTree(selectBits: number): Netlist {
     const last = i === selectBits - 1;
     const next = Array.from({ length: level.length / 2 }, (_, j) => (last ? 'Y' : `m${i + 1}_${j}`));
     next.forEach((y, j) =>
-      cells.push(mux2(`M${i + 1}_${j}.`, level[2 * j], level[2 * j + 1], y, `S${i}`, `SB${i}`)),
+      cells.push(mux2(`M${i + 1}_${j}.`, level[2 * j]!, level[2 * j + 1]!, y, `S${i}`, `SB${i}`)),
     );
     level = next;
   }

@@ -7,6 +7,7 @@
  * from the browser's own counter around the whole batch (it ticks in 10 ms steps, too coarse for
  * one frame), and given per step.
  */
+import { writeFileSync } from 'node:fs';
 import type { CDPSession, Page } from '@playwright/test';
 
 export interface Batch {
@@ -123,4 +124,19 @@ export async function markImportStart(page: Page): Promise<void> {
 
 export async function importStart(page: Page): Promise<number> {
   return page.evaluate(() => (window as { importStart?: number }).importStart ?? Number.NaN);
+}
+
+/**
+ * Runs `step` under the page's CPU profiler when `file` is given and writes the profile there (a
+ * `.cpuprofile` to open in a browser's developer tools); otherwise just runs it. A profiled step
+ * carries the profiler's own cost.
+ */
+export async function profiled<T>(cdp: CDPSession, file: string | null, step: () => Promise<T>): Promise<T> {
+  if (file === null) return step();
+  await cdp.send('Profiler.enable');
+  await cdp.send('Profiler.start');
+  const result = await step();
+  const { profile } = await cdp.send('Profiler.stop');
+  writeFileSync(file, JSON.stringify(profile));
+  return result;
 }

@@ -1,11 +1,16 @@
 /**
- * Sums a sampling CPU profile (the DevTools `.cpuprofile` shape) by function: time of its own
- * ("self") and time with everything it called ("total", a recursive function counted once per
- * sample).
+ * `node --import tsx bench/sheet/profileSummary.ts FILE.cpuprofile…`: sums a sampling CPU profile
+ * (the DevTools `.cpuprofile` shape, as `npm run bench:sheet -- --profile DIR` writes them) by
+ * function: time of its own ("self") and time with everything it called ("total", a recursive
+ * function counted once per sample), the largest first. Names read best from a build made without
+ * minifying (`npx vite build --minify false`, then `bench:sheet -- --no-build --profile DIR`).
  */
+import { readFileSync } from 'node:fs';
+import { basename } from 'node:path';
+import { formatTable } from '../table.ts';
 
 /** The parts of a DevTools `.cpuprofile` read here (the protocol's `Profiler.Profile`). */
-export interface CpuProfile {
+interface CpuProfile {
   readonly nodes: readonly ProfileNode[];
   readonly startTime: number;
   readonly endTime: number;
@@ -19,12 +24,12 @@ interface ProfileNode {
   readonly children?: readonly number[];
 }
 
-export interface ProfileRow {
+interface ProfileRow {
   readonly name: string;
   readonly ms: number;
 }
 
-export interface ProfileSummary {
+interface ProfileSummary {
   readonly totalMs: number;
   readonly idleMs: number;
   readonly self: readonly ProfileRow[];
@@ -48,7 +53,7 @@ function top(map: Map<string, number>, rows: number): ProfileRow[] {
     .map(([name, us]) => ({ name, ms: us / 1000 }));
 }
 
-export function profileSummary(profile: CpuProfile, rows = 30): ProfileSummary {
+function profileSummary(profile: CpuProfile, rows = 30): ProfileSummary {
   const byId = new Map(profile.nodes.map((n) => [n.id, n]));
   const parent = new Map<number, number>();
   for (const n of profile.nodes) for (const c of n.children ?? []) parent.set(c, n.id);
@@ -77,3 +82,24 @@ export function profileSummary(profile: CpuProfile, rows = 30): ProfileSummary {
   });
   return { totalMs: all / 1000, idleMs: idle / 1000, self: top(self, rows), total: top(total, rows) };
 }
+
+function printSummary(file: string): void {
+  const summary = profileSummary(JSON.parse(readFileSync(file, 'utf8')) as CpuProfile);
+  console.log(
+    `\n${basename(file)}: ${summary.totalMs.toFixed(0)} ms sampled, ${summary.idleMs.toFixed(0)} ms idle`,
+  );
+  console.log(
+    formatTable(
+      ['self ms', 'function'],
+      summary.self.map((r) => [r.ms.toFixed(1), r.name]),
+    ),
+  );
+  console.log(
+    formatTable(
+      ['total ms', 'function'],
+      summary.total.map((r) => [r.ms.toFixed(1), r.name]),
+    ),
+  );
+}
+
+for (const file of process.argv.slice(2)) printSummary(file);

@@ -2,11 +2,13 @@
  * `npm run bench:sheet`: the app in a real browser (Debian's chromium, headless, software
  * rendering) on auto-placed imports of 1,000 and 5,000 transistors. Reports pan and zoom frame
  * times (95th percentile), a toggle to the repainted sheet, reload to a settled panel and import.
- * Builds the app first unless `--no-build`; `--json` adds one JSON line at the end. Figures from
- * one run on a shared machine: read them as ratios and orders of magnitude, not as tests.
+ * Builds the app first unless `--no-build`; `--json` adds one JSON line at the end; `--profile DIR`
+ * writes the page's CPU profile of each import and reload to DIR. Figures from one run on a shared
+ * machine: read them as ratios and orders of magnitude, not as tests.
  */
 import { spawnSync } from 'node:child_process';
-import { resolve } from 'node:path';
+import { mkdirSync } from 'node:fs';
+import { join, resolve } from 'node:path';
 import { chromium, type CDPSession, type Page } from '@playwright/test';
 import { exportSpice } from '../../src/core/netlist-io/spiceExport.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
@@ -19,6 +21,7 @@ import {
   markImportStart,
   panZoomFrames,
   processCpuMs,
+  profiled,
   settledAt,
   toggleTimes,
   type Batch,
@@ -64,20 +67,32 @@ function both(b: Batch, stat: (v: readonly number[]) => number): Pair {
   return { wall: stat(b.wallMs), cpu: b.cpuMsPerStep };
 }
 
-async function importCell(page: Page, cdp: CDPSession, netlist: Netlist): Promise<Pair> {
+/** Where a step's CPU profile goes, or null when not profiling. */
+type ProfileFile = (step: string) => string | null;
+
+async function importCell(
+  page: Page,
+  cdp: CDPSession,
+  netlist: Netlist,
+  profile: ProfileFile,
+): Promise<Pair> {
   await markImportStart(page);
   const text = exportSpice(netlist, DEFAULT_TECHNOLOGY);
   const cpu0 = await processCpuMs(cdp);
-  await page.getByTestId('open-file').setInputFiles({
-    name: `${netlist.name}.sp`,
-    mimeType: 'text/plain',
-    buffer: Buffer.from(text),
+  const done = await profiled(cdp, profile('import'), async () => {
+    await page.getByTestId('open-file').setInputFiles({
+      name: `${netlist.name}.sp`,
+      mimeType: 'text/plain',
+      buffer: Buffer.from(text),
+    });
+    return settledAt(page, netlist.name);
   });
-  const done = await settledAt(page, netlist.name);
   return { wall: done - (await importStart(page)), cpu: (await processCpuMs(cdp)) - cpu0 };
 }
 
-async function measureSheet(page: Page, netlist: Netlist): Promise<SheetFigures> {
+async function measureSheet(page: Page, netlist: Netlist, profileDir: string | null): Promise<SheetFigures> {
+  const profile: ProfileFile = (step) =>
+    profileDir === null ? null : join(profileDir, `${netlist.name}-${step}.cpuprofile`);
   await page.goto(`http://127.0.0.1:${PORT}/`);
   await page.evaluate(() => localStorage.clear());
   await page.reload();
@@ -85,7 +100,7 @@ async function measureSheet(page: Page, netlist: Netlist): Promise<SheetFigures>
   const cdp = await page.context().newCDPSession(page);
   await cdp.send('Performance.enable');
   progress(`${netlist.name}: import`);
-  const imported = await importCell(page, cdp, netlist);
+  const imported = await importCell(page, cdp, netlist, profile);
   await page.evaluate(() =>
     window.__railwise!.frame(() =>
       document.querySelector<HTMLButtonElement>('[data-command="fit"]')?.click(),
@@ -98,8 +113,10 @@ async function measureSheet(page: Page, netlist: Netlist): Promise<SheetFigures>
   progress(`${netlist.name}: reload`);
   await page.waitForTimeout(2500); // the autosave writes once the page is idle after the last change
   const cpu0 = await processCpuMs(cdp);
-  await page.reload();
-  const reloadWall = await settledAt(page, netlist.name);
+  const reloadWall = await profiled(cdp, profile('reload'), async () => {
+    await page.reload();
+    return settledAt(page, netlist.name);
+  });
   const cpu1 = await processCpuMs(cdp);
   await cdp.detach();
   const p95 = (v: readonly number[]): number => percentile(v, 0.95);
@@ -120,7 +137,11 @@ async function measureSheet(page: Page, netlist: Netlist): Promise<SheetFigures>
 const pair = (p: Pair): string => `${p.wall.toFixed(1)} / ${p.cpu.toFixed(1)}`;
 
 async function main(): Promise<void> {
-  const args = new Set(process.argv.slice(2));
+  const argv = process.argv.slice(2);
+  const args = new Set(argv);
+  const profileAt = argv.indexOf('--profile');
+  const profileDir = profileAt < 0 ? null : resolve(argv[profileAt + 1] ?? '.');
+  if (profileDir !== null) mkdirSync(profileDir, { recursive: true });
   if (!args.has('--no-build')) {
     progress('building the app');
     if (spawnSync('npx', ['vite', 'build', '--logLevel', 'warn'], { stdio: 'inherit' }).status !== 0)
@@ -138,7 +159,7 @@ async function main(): Promise<void> {
       { ...rippleAdder(179), name: 'adder179' },
     ];
     const figures: SheetFigures[] = [];
-    for (const netlist of cells) figures.push(await measureSheet(page, netlist));
+    for (const netlist of cells) figures.push(await measureSheet(page, netlist, profileDir));
     console.log(
       'milliseconds: wall time in the page / CPU time of its renderer process (per step, over the batch)',
     );

@@ -1,4 +1,4 @@
-import { useEffect, useMemo } from 'react';
+import { lazy, Suspense, useEffect, useMemo } from 'react';
 import { CAUTION } from '../core/caution.ts';
 import { SheetCanvas } from '../editor/SheetCanvas.tsx';
 import { createEditorController } from '../editor/tools/controller.ts';
@@ -10,15 +10,18 @@ import { PartsShelf } from './PartsShelf.tsx';
 import { StarterShelf } from './StarterShelf.tsx';
 import { PropertiesForm } from './PropertiesForm.tsx';
 import { MessageBar } from './MessageBar.tsx';
-import { HelpOverlay } from './HelpOverlay.tsx';
-import { AboutBox } from './AboutBox.tsx';
 import { RecoveryOffer } from './RecoveryOffer.tsx';
 import { handleKey } from './keyboard.ts';
 import { LibraryView } from './LibraryView.tsx';
 import { InstanceList, SheetPath } from './Hierarchy.tsx';
 import { commandById } from './commands.ts';
-import { OPEN_ACCEPT, OPEN_INPUT_ID, openFile } from './files.ts';
+import { OPEN_FILE_ACCEPT } from '../core/netlist-io/fileKinds.ts';
+import { OPEN_INPUT_ID, openFileLater } from './fileCommands.ts';
 import './app.css';
+
+// Dialogs shown on request load when first asked for, so start-up parses less.
+const HelpOverlay = lazy(() => import('./HelpOverlay.tsx').then((m) => ({ default: m.HelpOverlay })));
+const AboutBox = lazy(() => import('./AboutBox.tsx').then((m) => ({ default: m.AboutBox })));
 
 function OpenFileInput() {
   return (
@@ -26,12 +29,12 @@ function OpenFileInput() {
       id={OPEN_INPUT_ID}
       data-testid="open-file"
       type="file"
-      accept={OPEN_ACCEPT}
+      accept={OPEN_FILE_ACCEPT}
       hidden
       onChange={(e) => {
         const file = e.target.files?.[0];
         e.target.value = '';
-        if (file) void openFile(file);
+        if (file) void openFileLater(file);
       }}
     />
   );
@@ -69,8 +72,10 @@ export function App() {
         <AnalysisPanel />
       </div>
       <OpenFileInput />
-      {overlay === 'help' ? <HelpOverlay /> : null}
-      {overlay === 'about' ? <AboutBox /> : null}
+      <Suspense fallback={null}>
+        {overlay === 'help' ? <HelpOverlay /> : null}
+        {overlay === 'about' ? <AboutBox /> : null}
+      </Suspense>
       <LibraryView />
       <RecoveryOffer />
     </div>

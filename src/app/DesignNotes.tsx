@@ -1,4 +1,4 @@
-import { setDesignFields, useStore } from '../state/store.ts';
+import { dismissNotes, useStore } from '../state/store.ts';
 import { countOf } from '../core/view/plural.ts';
 
 /**
@@ -14,7 +14,7 @@ export function DesignNotes() {
     <details className="rw-message rw-notes" data-testid="design-notes" open>
       <summary>
         {heading} {lines.length > 0 ? `(${countOf(lines.length, 'note')})` : ''}
-        <button type="button" onClick={() => setDesignFields({ notes: undefined })}>
+        <button type="button" onClick={dismissNotes}>
           Dismiss notes
         </button>
       </summary>

@@ -1,6 +1,6 @@
 /**
- * Autosave to the browser's storage: the design file text is written shortly after every change
- * and when the page is hidden, so a reload or a crashed tab finds the design as it was.
+ * Autosave to the browser's storage: the design file text is written about a second after every
+ * change and when the page is hidden, so a reload or a crashed tab finds the design as it was.
  * A stored design that cannot be read is kept aside (never overwritten silently) and reported.
  *
  * A design that cannot be opened must never be saved over the last good one, or every reload
@@ -10,16 +10,16 @@
  * means the last opening never finished (the tab froze or crashed): the autosaved design is then
  * set aside and the designer is offered to open it anyway or discard it (`RecoveryOffer`).
  *
- * Saving never holds up the page: it runs when the page is idle (`whenIdle`), and a long design
+ * Saving never holds up the page: it runs when the page is idle (`afterPause`), and a long design
  * (a few thousand transistors) is stored gzip-compressed (`storedText.ts`), compressed and expanded
  * off the page's thread; a packed value is expanded before it is read (`autosavedText`).
  */
 import { createStore } from 'zustand/vanilla';
 import { useStore as useZustand } from 'zustand';
 import type { Design } from '../core/model/design.ts';
-import { parseDesignFile, serializeDesignCompact } from '../core/format/designFile.ts';
+import { parseDesignFile, serializeDesign } from '../core/format/designFile.ts';
 import { currentDesign, store } from '../state/store.ts';
-import { whenIdle } from './idle.ts';
+import { afterPause } from './idle.ts';
 import { isPacked, PACK_ABOVE, packForStorage, unpackFromStorage } from './storedText.ts';
 
 export const AUTOSAVE_KEY = 'railwise.autosave.v1';
@@ -29,7 +29,9 @@ export const SUSPECT_KEY = 'railwise.autosave.unopened';
 /** Present while a design is being opened. */
 export const OPENING_KEY = 'railwise.opening';
 const DELAY_MS = 250;
-/** At most this long after a change, the page idle or not. */
+/** A change is written this long after it, once the page is idle: after the check it started. */
+export const SAVE_AFTER_MS = 1000;
+/** At most this long after that, the page idle or not. */
 const IDLE_WITHIN_MS = 1000;
 
 export interface RestoreResult {
@@ -177,9 +179,9 @@ export function settleSuspect(outcome: 'opened' | 'discarded', storage: Storage 
   recovery.setState({ suspect: null });
 }
 
-/** The text the autosave keeps of a design: the design file without indentation. */
+/** The text the autosave keeps of a design: the design file without whitespace. */
 export function autosaveText(design: Design): string {
-  return serializeDesignCompact(design);
+  return serializeDesign(design, 'compact');
 }
 
 /** Stores a design's text; false when the storage refused it (full or blocked). */
@@ -203,6 +205,7 @@ export function startAutosave(storage: Storage = localStorage): () => void {
     if (revision === savedRevision || failed) return;
     // A design still being opened is not written yet: try again shortly.
     if (readOpening(storage) !== null && !now) return void (cancel = later(DELAY_MS));
+    // Every cell of the design, the open one as edited.
     const text = autosaveText(currentDesign());
     if (text.length <= PACK_ABOVE || now) {
       // Storage full or blocked: keep editing; the next change tries again.
@@ -213,12 +216,9 @@ export function startAutosave(storage: Storage = localStorage): () => void {
       if (!failed && revision > savedRevision && keepText(storage, packed)) savedRevision = revision;
     });
   };
-  const later = (ms: number): (() => void) => {
-    const id = setTimeout(() => (cancel = whenIdle(() => write(), IDLE_WITHIN_MS)), ms);
-    return () => clearTimeout(id);
-  };
+  const later = (ms: number): (() => void) => afterPause(() => write(), ms, IDLE_WITHIN_MS);
   const unsubscribe = store.subscribe((s, prev) => {
-    if (s.revision !== prev.revision && cancel === null) cancel = whenIdle(() => write(), IDLE_WITHIN_MS);
+    if (s.revision !== prev.revision && cancel === null) cancel = later(SAVE_AFTER_MS);
   });
   const flush = (): void => {
     cancel?.();

@@ -23,7 +23,8 @@ import {
 import { stepVector } from '../state/simulation.ts';
 import { redo, setOverlay, undo } from '../state/store.ts';
 import { fitToView, zoomBy } from '../state/view.ts';
-import { exportDesign, newDesign, pickAndOpen, saveDesign, type ExportKind } from './files.ts';
+import { exportLater, newDesign, pickAndOpen, saveDesign } from './fileCommands.ts';
+import type { ExportKind } from './files.ts';
 import { shareCurrentDesign } from './shareLink.ts';
 
 export interface KeyBinding {
@@ -80,7 +81,7 @@ function exportCommand(kind: ExportKind, label: string): Command {
     label: `Export ${label}`,
     group: 'File',
     keys: [],
-    run: () => void exportDesign(kind),
+    run: () => void exportLater(kind),
   };
 }
 

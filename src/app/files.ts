@@ -1,14 +1,15 @@
 /**
- * Opening, saving, importing and exporting. Every read is validated first; a bad file gives a
- * message naming the file and the line or field, and the open design is left exactly as it was.
+ * Opening, importing and exporting. Every read is validated first; a bad file gives a message
+ * naming the file and the line or field, and the open design is left exactly as it was. The page
+ * loads this module on first use (`fileCommands.ts`, which also holds save and new).
  */
 import type { Design } from '../core/model/design.ts';
 import { DEFAULT_TECHNOLOGY } from '../core/model/technology.ts';
-import { DesignFileError, parseDesignFile, serializeDesign } from '../core/format/designFile.ts';
+import { DesignFileError, parseDesignFile } from '../core/format/designFile.ts';
 import { importSpice, SpiceImportError } from '../core/netlist-io/spiceImport.ts';
 import { designFromImport } from '../core/netlist-io/spiceDesign.ts';
 import { openLibraryView } from '../state/library.ts';
-import { isSpiceFileName, SPICE_EXTENSIONS } from '../core/netlist-io/cellFiles.ts';
+import { isSpiceFileName } from '../core/netlist-io/cellFiles.ts';
 import { exportSpice } from '../core/netlist-io/spiceExport.ts';
 import { exportVerilog } from '../core/netlist-io/verilogExport.ts';
 import { exportSpiceDesign } from '../core/netlist-io/spiceDesignExport.ts';
@@ -25,10 +26,6 @@ import { downloadText, downloadUrl, safeFileName } from './download.ts';
 import { countOf } from '../core/view/plural.ts';
 import { binaryRefusal } from '../core/format/binaryText.ts';
 import { brief } from '../core/format/printable.ts';
-
-export const DESIGN_EXTENSION = '.railwise.json';
-export const OPEN_ACCEPT = ['.json', ...SPICE_EXTENSIONS].join(',');
-export const OPEN_INPUT_ID = 'railwise-open-file';
 
 export type ExportKind = 'spice' | 'verilog' | 'csv' | 'svg' | 'png';
 
@@ -113,27 +110,6 @@ export function openText(text: string, fileName: string): boolean {
 
 export async function openFile(file: File): Promise<boolean> {
   return openText(await file.text(), file.name);
-}
-
-export function pickAndOpen(): void {
-  document.getElementById(OPEN_INPUT_ID)?.click();
-}
-
-export function saveDesign(): void {
-  const design = currentDesign();
-  downloadText(safeFileName(design.name, DESIGN_EXTENSION), serializeDesign(design), 'application/json');
-}
-
-export function newDesign(): void {
-  const { doc } = store.getState();
-  loadDesign({
-    name: 'untitled',
-    technology: doc.technology,
-    netlist: { name: 'untitled', devices: [], rails: [], inputs: [], outputs: [] },
-    expectations: {},
-    sequences: [],
-    sheet: EMPTY_SHEET,
-  });
 }
 
 /** A design of several cells keeps its hierarchy (one `.subckt` per cell); one cell exports alone. */

@@ -1,14 +1,16 @@
 /**
  * The undo history kept across a reload within the same browser session (docs/semantics.md §8): the
- * steps are stored as patches (state/historyPatch.ts) in sessionStorage, written when the page is
- * idle, at most MAX_STORED_STEPS of them and MAX_STORED_CHARS of text (the oldest go first). They
- * are tied to the document they lead back from by a fingerprint, so after a reload they are used
- * only if the design restored is that very document.
+ * steps are stored as patches (state/historyPatch.ts) in sessionStorage, written as the design is
+ * (about a second after a change, once the page is idle, and as the page goes away), at most
+ * MAX_STORED_STEPS of them and MAX_STORED_CHARS of text (the oldest go first). They are tied to the
+ * document they lead back from by a fingerprint, so after a reload they are used only if the design
+ * restored is that very document.
  */
 import type { SheetDocument } from '../state/document.ts';
 import { applyDocPatch, docPatch, type DocPatch } from '../state/historyPatch.ts';
 import { restoreHistory, store } from '../state/store.ts';
-import { whenIdle } from './idle.ts';
+import { afterPause } from './idle.ts';
+import { SAVE_AFTER_MS } from './autosave.ts';
 
 export const HISTORY_KEY = 'railwise.history.v1';
 export const MAX_STORED_STEPS = 100;
@@ -138,7 +140,7 @@ export function restoreSessionHistory(storage: Storage = sessionStorage): boolea
   return found !== null;
 }
 
-/** Keeps the stored history up to date, writing when the page is idle or goes away; returns the stop function. */
+/** Keeps the stored history up to date, written as the autosave is; returns the stop function. */
 export function startSessionHistory(storage: Storage = sessionStorage): () => void {
   let cancel: (() => void) | null = null;
   const write = (): void => {
@@ -152,7 +154,7 @@ export function startSessionHistory(storage: Storage = sessionStorage): () => vo
     }
   };
   const unsubscribe = store.subscribe((s, prev) => {
-    if (s.history !== prev.history && cancel === null) cancel = whenIdle(write);
+    if (s.history !== prev.history && cancel === null) cancel = afterPause(write, SAVE_AFTER_MS);
   });
   // A reload right after an edit: the step is kept as the page goes, as the autosave keeps the design.
   const flush = (): void => {

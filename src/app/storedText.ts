@@ -1,8 +1,9 @@
 /**
  * Design text as the browser's storage keeps it: as it is when short, gzip-compressed and base64
- * encoded (behind a mark) when long. A 5,000-transistor design is about 4.7 million characters of
- * JSON, near what a site may keep in localStorage; compressed it is a tenth of that. Compression
- * and expansion run in the browser's stream machinery, off the page's own thread.
+ * encoded (behind a mark) when long. A 5,000-transistor design is about 2.4 million characters of
+ * JSON without whitespace (4.7 million indented), near what a site may keep in localStorage;
+ * packed it is about an eighth of that. Compression and expansion run in the browser's stream
+ * machinery.
  */
 
 /** Text that starts with this is packed: the rest is base64 of gzip. */

@@ -54,6 +54,8 @@ export interface CheckArgs extends CellChoice {
   readonly transfer?: TransferChoice;
   /** Level-1 DC operating point beside each vector. */
   readonly dc: boolean;
+  /** Prove every property for all vectors (docs/semantics.md §10). */
+  readonly prove: boolean;
   /** Output load in farads for --power and --sizing, when given (else the core's default). */
   readonly load?: number;
   readonly jobs?: number;
@@ -68,17 +70,22 @@ export interface ExportArgs extends CellChoice {
   readonly help: boolean;
 }
 
-const CELL_OPTIONS = {
-  cell: { type: 'string' },
-  inputs: { type: 'string' },
-  outputs: { type: 'string' },
-  expect: { type: 'string', multiple: true },
-  sequence: { type: 'string' },
+/** How a file is read into cells: its rails, supply voltage, size scale and kit devices. */
+export const READING_OPTIONS = {
   vdd: { type: 'string' },
   supply: { type: 'string' },
   ground: { type: 'string' },
   scale: { type: 'string' },
   'treat-as': { type: 'string', multiple: true },
+} as const satisfies ParseArgsConfig['options'];
+
+const CELL_OPTIONS = {
+  ...READING_OPTIONS,
+  cell: { type: 'string' },
+  inputs: { type: 'string' },
+  outputs: { type: 'string' },
+  expect: { type: 'string', multiple: true },
+  sequence: { type: 'string' },
   'top-only': { type: 'boolean' },
   'functions-from': { type: 'string' },
   help: { type: 'boolean', short: 'h' },
@@ -101,6 +108,7 @@ const CHECK_OPTIONS = {
   convention: { type: 'string' },
   points: { type: 'string' },
   dc: { type: 'boolean' },
+  prove: { type: 'boolean' },
 } as const satisfies ParseArgsConfig['options'];
 
 const EXPORT_OPTIONS = {
@@ -128,6 +136,7 @@ export function parseCheckArgs(argv: readonly string[]): CheckArgs {
     sizing: v.sizing ?? false,
     found: v.found ?? false,
     dc: v.dc ?? false,
+    prove: v.prove ?? false,
     ...(transfer === undefined ? {} : { transfer }),
     help: v.help ?? false,
     ...(v.load === undefined ? {} : { load: loadValue(v.load) }),
@@ -147,7 +156,11 @@ export function parseExportArgs(argv: readonly string[]): ExportArgs {
   return { ...cellChoice(v), file: positionals[0] ?? '', to: (v.to ?? 'spice') as ExportFormat, help };
 }
 
-function parse<T extends NonNullable<ParseArgsConfig['options']>>(argv: readonly string[], options: T) {
+/** `util.parseArgs` with every problem a UsageError (exit status 2). */
+export function parse<T extends NonNullable<ParseArgsConfig['options']>>(
+  argv: readonly string[],
+  options: T,
+) {
   try {
     return parseArgs({ args: [...argv], options, allowPositionals: true, strict: true });
   } catch (e) {
@@ -155,7 +168,7 @@ function parse<T extends NonNullable<ParseArgsConfig['options']>>(argv: readonly
   }
 }
 
-interface CellValues {
+export interface CellValues {
   cell?: string;
   inputs?: string;
   outputs?: string;
@@ -170,7 +183,8 @@ interface CellValues {
   'functions-from'?: string;
 }
 
-function cellChoice(v: CellValues): CellChoice {
+/** How a file is read and which of its cells, from the flags check, export and compare share. */
+export function cellChoice(v: CellValues): CellChoice {
   return {
     expect: expectations(v.expect ?? []),
     supply: list(v.supply),
@@ -287,7 +301,7 @@ function loadValue(text: string): number {
 export function frequency(text: string): number {
   const hz = /^\s*([0-9]*\.?[0-9]+(?:e[+-]?[0-9]+)?)\s*([kmg]?)hz\s*$/i.exec(text);
   if (hz) {
-    const scale = { '': 1, k: 1e3, m: 1e6, g: 1e9 }[hz[2].toLowerCase() as '' | 'k' | 'm' | 'g'];
+    const scale = { '': 1, k: 1e3, m: 1e6, g: 1e9 }[(hz[2] ?? '').toLowerCase() as '' | 'k' | 'm' | 'g'];
     const value = Number(hz[1]) * scale;
     if (value > 0 && Number.isFinite(value)) return value;
   }

@@ -14,6 +14,7 @@ import { DEFAULT_POWER_SETTINGS } from '../core/power/settings.ts';
 import type { CheckArgs } from './args.ts';
 import { makeColour, terminalSafe, type Colour } from './colour.ts';
 import { FindingSpool } from './findingSpool.ts';
+import { proved, type ProofJson } from './proofCell.ts';
 import { Later, Stream, writeJson } from './jsonWriter.ts';
 import { loadCells, type CellFailure, type CellJob, type CellSkip } from './loadCells.ts';
 import { runCells } from './parallel.ts';
@@ -32,7 +33,7 @@ type CellSource = { readonly result: CellResult } | { readonly job: CellJob };
 
 /** What the closing totals and the exit status need of each cell. */
 type Outcome =
-  | { readonly cell: string; readonly summary: Summary }
+  | { readonly cell: string; readonly summary: Summary; readonly proof?: ProofJson | undefined }
   | { readonly failure: CellFailure }
   | { readonly skipped: CellSkip };
 
@@ -47,6 +48,7 @@ export async function checkCommand(args: CheckArgs, io: Output): Promise<number>
     found: args.found,
     load: args.load ?? DEFAULT_POWER_SETTINGS.load,
     dc: args.dc,
+    prove: args.prove,
     ...(args.transfer === undefined ? {} : { transfer: args.transfer }),
     ...(args.sequence === undefined ? {} : { sequence: args.sequence }),
     ...(args.power === undefined ? {} : { power: args.power }),
@@ -78,7 +80,12 @@ interface Run {
 function exitOf(o: Outcome): number {
   if ('failure' in o) return EXIT_UNUSABLE;
   if ('skipped' in o) return EXIT_OK;
-  return o.summary.errors > 0 ? EXIT_FINDINGS : EXIT_OK;
+  return o.summary.errors > 0 || unproved(o) ? EXIT_FINDINGS : EXIT_OK;
+}
+
+/** A cell with a proof some property of which does not hold (a counterexample, or undecided). */
+function unproved(o: Outcome): boolean {
+  return 'summary' in o && o.proof !== undefined && !proved(o.proof);
 }
 
 function failureJson(f: CellFailure): object {
@@ -116,11 +123,11 @@ function cellValue(source: CellSource, run: Run): unknown {
         run.outcomes.push(r),
         { cell: r.skipped.cell, file: r.skipped.file, skipped: r.skipped.reason }
       );
-    return (run.outcomes.push({ cell: r.json.cell, summary: r.json.summary }), r.json);
+    return (run.outcomes.push({ cell: r.json.cell, summary: r.json.summary, proof: r.json.proof }), r.json);
   }
   const prepared = prepareStreamedCell(source.job, run.options);
   if ('failure' in prepared) return (run.outcomes.push(prepared), failureJson(prepared.failure));
-  const { sizing, transfer, technology, ...names } = prepared.head;
+  const { sizing, transfer, proof, technology, ...names } = prepared.head;
   const spool = new FindingSpool();
   let tail: CellTail | null = null;
   const done = (): CellTail =>
@@ -132,7 +139,7 @@ function cellValue(source: CellSource, run: Run): unknown {
         row.findings.forEach((f) => spool.add(f));
         emit(row);
       });
-      run.outcomes.push({ cell: names.cell, summary: tail.summary });
+      run.outcomes.push({ cell: names.cell, summary: tail.summary, proof });
     }),
     findings: new Stream<unknown>((emit) => {
       done().structural.forEach(emit);
@@ -144,6 +151,7 @@ function cellValue(source: CellSource, run: Run): unknown {
     power: run.options.power === undefined ? undefined : new Later(() => done().power),
     sizing,
     transfer,
+    proof,
     caution: CAUTION,
   };
 }
@@ -162,26 +170,28 @@ function cellText(source: CellSource, run: Run, c: Colour): string {
     const r = source.result;
     if ('failure' in r) return (run.outcomes.push(r), formatFailure(r.failure, c));
     if ('skipped' in r) return (run.outcomes.push(r), formatSkipped(r.skipped, c));
-    run.outcomes.push({ cell: r.json.cell, summary: r.json.summary });
+    run.outcomes.push({ cell: r.json.cell, summary: r.json.summary, proof: r.json.proof });
     return formatCell(TextDigest.of(r.json), c);
   }
   const prepared = prepareStreamedCell(source.job, run.options);
   if ('failure' in prepared) return (run.outcomes.push(prepared), formatFailure(prepared.failure, c));
   const digest = new TextDigest();
   const tail = prepared.rows((row) => digest.add(row));
-  run.outcomes.push({ cell: prepared.head.cell, summary: tail.summary });
+  run.outcomes.push({ cell: prepared.head.cell, summary: tail.summary, proof: prepared.head.proof });
   return formatCell(digest.view(prepared.head, tail), c);
 }
 
 export function librarySummary(outcomes: readonly Outcome[]): Record<string, number> {
   const checked = outcomes.flatMap((o) => ('summary' in o ? [o.summary] : []));
   const skipped = outcomes.filter((o) => 'skipped' in o).length;
+  const proofs = outcomes.some((o) => 'summary' in o && o.proof !== undefined);
   return {
     cells: outcomes.length,
     passed: checked.filter((s) => s.errors === 0).length,
     failed: checked.filter((s) => s.errors > 0).length,
     unusable: outcomes.length - checked.length - skipped,
     ...(skipped > 0 ? { skipped } : {}),
+    ...(proofs ? { unproved: outcomes.filter(unproved).length } : {}),
     errors: sum(checked.map((s) => s.errors)),
     warnings: sum(checked.map((s) => s.warnings)),
   };
@@ -192,11 +202,13 @@ function libraryTotals(outcomes: readonly Outcome[]): string {
   const s = librarySummary(outcomes);
   const failing = outcomes.flatMap((o) => ('summary' in o && o.summary.errors > 0 ? [o.cell] : []));
   const unusable = outcomes.flatMap((o) => ('failure' in o ? [o.failure.cell ?? o.failure.file] : []));
+  const notProved = outcomes.flatMap((o) => ('summary' in o && unproved(o) ? [o.cell] : []));
   const list = (names: readonly string[]): string => names.map(printable).join(', ');
   return [
     `${count(s['cells'] ?? 0, 'cell')}: ${s['passed']} pass, ${s['failed']} with errors, ${s['unusable']} unusable${s['skipped'] ? `, ${s['skipped']} skipped` : ''}; ${count(s['errors'] ?? 0, 'error')}, ${count(s['warnings'] ?? 0, 'warning')}`,
     ...(failing.length > 0 ? [`  with errors: ${list(failing)}`] : []),
     ...(unusable.length > 0 ? [`  unusable: ${list(unusable)}`] : []),
+    ...(notProved.length > 0 ? [`  not proved: ${list(notProved)}`] : []),
   ].join('\n');
 }
 

@@ -4,9 +4,9 @@ import { exportTruthTableCsv } from '../core/netlist-io/csvExport.ts';
 import { exportSpice } from '../core/netlist-io/spiceExport.ts';
 import { exportVerilog } from '../core/netlist-io/verilogExport.ts';
 import type { ExportArgs } from './args.ts';
-import { loadCells, type CellJob } from './loadCells.ts';
+import { loadOneCell, type CellJob } from './loadCells.ts';
 import { failureOf, sequenceSteps } from './runCell.ts';
-import { EXIT_OK, EXIT_UNUSABLE, UsageError } from './usage.ts';
+import { EXIT_OK, EXIT_UNUSABLE } from './usage.ts';
 
 export interface ExportOutput {
   readonly out: (text: string) => void;
@@ -14,21 +14,9 @@ export interface ExportOutput {
 }
 
 export function exportCommand(args: ExportArgs, io: ExportOutput): number {
-  const loaded = loadCells([args.file], args);
-  if (loaded.cells.length > 1) {
-    const names = loaded.cells
-      .map((c) => ('job' in c ? c.job.cell : 'failure' in c ? c.failure.cell : c.skipped.cell))
-      .join(', ');
-    throw new UsageError(`${args.file} is a library: pick one cell with --cell NAME (cells: ${names})`);
-  }
-  const [cell] = loaded.cells;
-  if (cell === undefined) throw new UsageError(`${args.file}: no cell found`);
-  if ('failure' in cell) {
-    io.err(cell.failure.message);
-    return EXIT_UNUSABLE;
-  }
-  if ('skipped' in cell) {
-    io.err(`${cell.skipped.cell}: ${cell.skipped.reason}; not exported`);
+  const cell = loadOneCell(args.file, args);
+  if ('problem' in cell) {
+    io.err(`${cell.problem}; not exported`);
     return EXIT_UNUSABLE;
   }
   try {

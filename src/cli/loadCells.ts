@@ -6,7 +6,7 @@
 import { readFileSync } from 'node:fs';
 import type { Netlist } from '../core/model/netlist.ts';
 import { recordOf } from '../core/model/records.ts';
-import { assignPins, inputsReadByExpectations, PinError } from '../core/netlist-io/pins.ts';
+import { assignPins, PinError, withInputsReadByExpectations } from '../core/netlist-io/pins.ts';
 import {
   cellsFromText,
   expectationProblem,
@@ -45,6 +45,27 @@ export function loadCells(files: readonly string[], choice: CellChoice): LoadedC
   const notes: string[] = [];
   if (functions !== null) cells = functions.apply(cells, notes, choice.cell === undefined);
   return { cells: cells.map((c) => ('job' in c ? applyChoice(c.job, choice) : c)), asLibrary, notes };
+}
+
+/**
+ * The one cell of a file for commands that take a single cell (export, compare): a library needs
+ * `flag` NAME. A cell that cannot be used comes back as its problem.
+ */
+export function loadOneCell(
+  file: string,
+  choice: CellChoice,
+  flag = '--cell',
+): { job: CellJob } | { problem: string } {
+  const loaded = loadCells([file], choice);
+  if (loaded.cells.length > 1) {
+    const names = loaded.cells.map(cellName).join(', ');
+    throw new UsageError(`${file} is a library: pick one cell with ${flag} NAME (cells: ${names})`);
+  }
+  const [cell] = loaded.cells;
+  if (cell === undefined) throw new UsageError(`${file}: no cell found`);
+  if ('failure' in cell) return { problem: cell.failure.message };
+  if ('skipped' in cell) return { problem: `${cell.skipped.cell}: ${cell.skipped.reason}` };
+  return { job: cell.job };
 }
 
 function loadOptions(choice: CellChoice, functions: FunctionSource | null): LoadOptions {
@@ -107,18 +128,19 @@ function pickCell(
 
 /**
  * Pins and expected functions from the flags, over what the file says; then every one checked.
- * Without pin flags, a port that `--expect` reads but does not describe is an input.
+ * When neither the flags nor the file name pins, a port the expected functions read but do not
+ * describe is an input (`withInputsReadByExpectations`).
  */
 function applyChoice(job: CellJob, choice: CellChoice): LoadedCell {
   let netlist: Netlist;
   const pinsGiven = choice.inputs !== undefined || choice.outputs !== undefined;
-  const read = pinsGiven ? [] : inputsReadByExpectations(job.netlist, choice.expect);
-  const inputs = read.length > 0 ? [...job.netlist.inputs, ...read] : choice.inputs;
   try {
     netlist = assignPins(job.netlist, {
-      ...(inputs === undefined ? {} : { inputs }),
+      ...(choice.inputs === undefined ? {} : { inputs: choice.inputs }),
       ...(choice.outputs === undefined ? {} : { outputs: choice.outputs }),
     });
+    if (!pinsGiven && !job.pinsNamed)
+      netlist = withInputsReadByExpectations(netlist, { ...job.expectations, ...choice.expect });
   } catch (e) {
     if (!(e instanceof PinError)) throw e;
     const failure = {

@@ -3,11 +3,22 @@
  * so tests can call it directly; bin/railwise.mjs wires it to the process.
  */
 import { parseCheckArgs, parseExportArgs } from './args.ts';
+import { parseCompareArgs } from './compareArgs.ts';
 import { checkCommand } from './checkCommand.ts';
 import { colourWanted } from './colour.ts';
+import { compareCommand } from './compareCommand.ts';
 import { exportCommand } from './exportCommand.ts';
 import { brief } from '../core/format/printable.ts';
-import { CHECK_HELP, EXIT_OK, EXIT_UNUSABLE, EXPORT_HELP, MAIN_HELP, UsageError } from './usage.ts';
+import { own } from '../core/model/records.ts';
+import {
+  CHECK_HELP,
+  COMPARE_HELP,
+  EXIT_OK,
+  EXIT_UNUSABLE,
+  EXPORT_HELP,
+  MAIN_HELP,
+  UsageError,
+} from './usage.ts';
 
 export interface Io {
   readonly out: (text: string) => void;
@@ -23,7 +34,7 @@ export interface Io {
 export async function run(argv: readonly string[], io: Io = processIo()): Promise<number> {
   let wrote = false;
   const tracked: Io = { ...io, out: (text) => ((wrote = true), io.out(text)) };
-  const json = argv[0] === 'check' && argv.includes('--json');
+  const json = (argv[0] === 'check' || argv[0] === 'compare') && argv.includes('--json');
   try {
     return await dispatch(argv, tracked);
   } catch (e) {
@@ -50,16 +61,27 @@ async function dispatch(argv: readonly string[], io: Io): Promise<number> {
       if (args.help) return help(io, EXPORT_HELP);
       return exportCommand(args, io);
     }
+    case 'compare': {
+      const args = parseCompareArgs(rest);
+      if (args.help) return help(io, COMPARE_HELP);
+      return compareCommand(args, io);
+    }
     case 'help':
-      return help(io, rest[0] === 'check' ? CHECK_HELP : rest[0] === 'export' ? EXPORT_HELP : MAIN_HELP);
+      return help(io, own(HELP, rest[0] ?? '') ?? MAIN_HELP);
     case undefined:
     case '--help':
     case '-h':
       return help(io, MAIN_HELP);
     default:
-      throw new UsageError(`unknown command "${command}": use check or export`);
+      throw new UsageError(`unknown command "${command}": use check, compare or export`);
   }
 }
+
+const HELP: Readonly<Record<string, string>> = {
+  check: CHECK_HELP,
+  compare: COMPARE_HELP,
+  export: EXPORT_HELP,
+};
 
 function help(io: Io, text: string): number {
   io.out(text.trimEnd());

@@ -6,7 +6,7 @@
 import { availableParallelism, loadavg } from 'node:os';
 import { Worker } from 'node:worker_threads';
 import type { CellJob } from './loadCells.ts';
-import { runCell, type CellResult, type RunOptions } from './runCell.ts';
+import { runCell, sweepSkipped, type CellResult, type RunOptions } from './runCell.ts';
 
 /**
  * Transistor-vectors (devices × vectors summed over cells) below which one thread is faster. On the
@@ -17,6 +17,7 @@ import { runCell, type CellResult, type RunOptions } from './runCell.ts';
 export const PARALLEL_WORK_THRESHOLD = 4_000_000;
 
 export function estimatedWork(job: CellJob, options: RunOptions): number {
+  if (sweepSkipped(job, options)) return job.netlist.devices.length + 1;
   const perInput = options.undriven ? 3 : 2;
   const vectors =
     options.sequence === undefined

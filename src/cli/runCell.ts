@@ -2,7 +2,12 @@
  * Checks one cell and returns plain data: the single-cell JSON object of docs/semantics.md §5, or a failure.
  * No file access and no printing, so a worker thread can run it as well as the main thread.
  */
-import { SequenceError, SweepLimitError } from '../core/analysis/check.ts';
+import {
+  checkStructure,
+  DEFAULT_MAX_INPUTS,
+  SequenceError,
+  SweepLimitError,
+} from '../core/analysis/check.ts';
 import { parseSequenceText } from '../core/analysis/sequenceText.ts';
 import type { CheckReport, VectorReport } from '../core/analysis/report.ts';
 import { CAUTION } from '../core/caution.ts';
@@ -23,6 +28,7 @@ import { VectorDcRunner, type VectorDc } from '../core/dc/vectorDc.ts';
 import { Simulator } from '../core/solver/simulator.ts';
 import type { TransferChoice } from './args.ts';
 import { cellTransfer } from './dcCell.ts';
+import { cellProof, type ProofJson } from './proofCell.ts';
 import type { CellFailure, CellJob, CellSkip } from './loadCells.ts';
 
 export interface RunOptions {
@@ -40,6 +46,8 @@ export interface RunOptions {
   readonly transfer?: TransferChoice;
   /** Level-1 DC beside each vector, read from the same pass as the check. */
   readonly dc?: boolean;
+  /** `--prove`: add the proof of every property; past the exhaustive limit the sweep is skipped. */
+  readonly prove?: boolean;
 }
 
 /** A vector as printed: inputs as the numbers 0 and 1 (X and Z stay strings), per docs/semantics.md §5. */
@@ -56,6 +64,7 @@ interface Extras {
   readonly transfer?: TransferReport | undefined;
   readonly dc?: readonly VectorDc[] | undefined;
   readonly found?: readonly FoundFunction[] | undefined;
+  readonly proof?: ProofJson | undefined;
 }
 
 export interface CellJson extends Omit<CheckReport, 'vectors' | 'steps'> {
@@ -68,6 +77,7 @@ export interface CellJson extends Omit<CheckReport, 'vectors' | 'steps'> {
   readonly transfer?: TransferReport;
   /** With --found: per output, the function it computes as a minimal sum of products. */
   readonly found?: readonly FoundFunction[];
+  readonly proof?: ProofJson;
   readonly caution: string;
 }
 
@@ -76,6 +86,16 @@ export type CellResult =
 
 export function runCell(job: CellJob, options: RunOptions): CellResult {
   try {
+    const proof = options.prove ? cellProof(job) : undefined;
+    if (proof !== undefined && sweepSkipped(job, options)) {
+      const note = `${job.netlist.inputs.length} inputs are past the exhaustive limit of ${DEFAULT_MAX_INPUTS}: the sweep was skipped, the proof covers every vector`;
+      const report = checkStructure(
+        job.netlist,
+        { technology: job.technology, expectations: job.expectations },
+        note,
+      );
+      return { json: cellJson(job, report, { proof }) };
+    }
     const steps = options.sequence === undefined ? undefined : sequenceSteps(job, options.sequence);
     const power = options.power === undefined ? undefined : powerSettings(job, options.power, steps);
     // --dc reads each solved vector of the check's own pass.
@@ -98,10 +118,19 @@ export function runCell(job: CellJob, options: RunOptions): CellResult {
       counts === null || power === undefined ? undefined : powerFromCounts(counts, power.settings);
     const transfer = options.transfer === undefined ? undefined : cellTransfer(job, options.transfer);
     const found = options.found === true && report.vectors !== undefined ? foundFunctions(report) : undefined;
-    return { json: cellJson(job, report, { power: powerJson, sizing, transfer, dc: dc?.rows, found }) };
+    return {
+      json: cellJson(job, report, { power: powerJson, sizing, transfer, dc: dc?.rows, found, proof }),
+    };
   } catch (e) {
     return { failure: { file: job.file, cell: job.cell, ...failureOf(e) } };
   }
+}
+
+/** With --prove, a sweep past the exhaustive limit is skipped rather than refused (no --sequence). */
+export function sweepSkipped(job: CellJob, options: RunOptions): boolean {
+  return (
+    options.prove === true && options.sequence === undefined && job.netlist.inputs.length > DEFAULT_MAX_INPUTS
+  );
 }
 
 /**
@@ -154,7 +183,7 @@ export function failureOf(e: unknown): { message: string; field?: string } {
 }
 
 function cellJson(job: CellJob, report: CheckReport, extras: Extras): CellJson {
-  const { power, sizing, transfer, dc, found } = extras;
+  const { power, sizing, transfer, dc, found, proof } = extras;
   const rows = (list: readonly VectorReport[]): VectorJson[] =>
     list.map((v, i) => (dc?.[i] === undefined ? vectorJson(v) : { ...vectorJson(v), dc: dc[i] }));
   return {
@@ -172,6 +201,7 @@ function cellJson(job: CellJob, report: CheckReport, extras: Extras): CellJson {
     ...(sizing === undefined ? {} : { sizing }),
     ...(transfer === undefined ? {} : { transfer }),
     ...(found === undefined ? {} : { found }),
+    ...(proof === undefined ? {} : { proof }),
     caution: CAUTION,
   };
 }

@@ -15,13 +15,21 @@ import type { SizingReport } from '../core/sizing/types.ts';
 import { sweepSize } from '../core/analysis/vectors.ts';
 import { cellTransfer } from './dcCell.ts';
 import type { CellFailure, CellJob } from './loadCells.ts';
-import { failureOf, powerSettings, vectorJson, type RunOptions, type VectorJson } from './runCell.ts';
+import { cellProof, type ProofJson } from './proofCell.ts';
+import {
+  failureOf,
+  powerSettings,
+  sweepSkipped,
+  vectorJson,
+  type RunOptions,
+  type VectorJson,
+} from './runCell.ts';
 
 /** Sweeps of more vectors than this are written as they run instead of collected first. */
 export const STREAM_ROWS = 4096;
 
 export function isStreamed(job: CellJob, options: RunOptions): boolean {
-  if (options.sequence !== undefined || options.dc === true) return false;
+  if (options.sequence !== undefined || options.dc === true || sweepSkipped(job, options)) return false;
   return sweepSize(job.netlist.inputs, options.undriven) > STREAM_ROWS;
 }
 
@@ -36,6 +44,7 @@ export interface CellHead {
   readonly transfer?: TransferReport;
   /** With --found: the function of each output (none can be read off a streamed sweep). */
   readonly found?: readonly FoundFunction[];
+  readonly proof?: ProofJson;
 }
 
 /** What is known once the rows have gone by. */
@@ -71,6 +80,7 @@ export function prepareStreamedCell(
       ? sizingReport(job.netlist, job.technology, { load: options.load })
       : undefined;
     const transfer = options.transfer === undefined ? undefined : cellTransfer(job, options.transfer);
+    const proof = options.prove ? cellProof(job) : undefined;
     const head: CellHead = {
       cell: job.cell,
       file: job.file,
@@ -80,6 +90,7 @@ export function prepareStreamedCell(
       ...(sizing === undefined ? {} : { sizing }),
       ...(transfer === undefined ? {} : { transfer }),
       ...(options.found === true ? { found: job.netlist.outputs.map(unreadFunction) } : {}),
+      ...(proof === undefined ? {} : { proof }),
     };
     const rows = (each: (row: VectorJson) => void): CellTail => {
       onRow.current = each;

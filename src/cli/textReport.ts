@@ -10,6 +10,7 @@ import { brief, printable } from '../core/format/printable.ts';
 import { own } from '../core/model/records.ts';
 import { formatSi, type Colour } from './colour.ts';
 import { dcLines, transferLines } from './dcText.ts';
+import { proofLines } from './proofText.ts';
 import type { CellFailure, CellSkip } from './loadCells.ts';
 import type { CellJson, VectorJson } from './runCell.ts';
 import type { CellHead, CellTail } from './streamCell.ts';
@@ -67,7 +68,8 @@ export class TextDigest {
     const digest = new TextDigest();
     rows.forEach((r) => digest.add(r));
     const inRows = new Set(rows.flatMap((r) => r.findings));
-    const { cell, file, inputs, outputs, technology, sizing, transfer, found, power, summary, notes } = json;
+    const { cell, file, inputs, outputs, technology, sizing, transfer, found, proof, power, summary, notes } =
+      json;
     const head: CellHead = {
       cell,
       file,
@@ -77,6 +79,7 @@ export class TextDigest {
       ...(sizing === undefined ? {} : { sizing }),
       ...(transfer === undefined ? {} : { transfer }),
       ...(found === undefined ? {} : { found }),
+      ...(proof === undefined ? {} : { proof }),
     };
     const structural = json.findings.filter((f) => !inRows.has(f));
     const tail: CellTail = { structural, summary, notes, ...(power === undefined ? {} : { power }) };
@@ -95,6 +98,7 @@ export function formatCell(view: CellView, c: Colour): string {
     ...extraLines(head, tail),
     ...(head.transfer === undefined ? [] : transferLines(head.transfer, c)),
     ...(view.json === undefined ? [] : dcLines(view.json, c)),
+    ...(head.proof === undefined ? [] : proofLines(head.proof, head.inputs.length, c)),
     summaryLine(tail.summary, what, c),
   ];
   return lines.join('\n');

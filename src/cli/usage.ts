@@ -16,11 +16,13 @@ export const MAIN_HELP = `railwise: switch-level checks of CMOS cells from the c
 
 Usage:
   railwise check FILE... [options]     check cells: levels, current paths, findings
+  railwise compare FILE_A FILE_B       prove two cells give the same outputs for every vector
   railwise export FILE --to FORMAT     write a cell as spice, verilog or csv
-  railwise help [check|export]         show help
+  railwise help [check|compare|export] show help
 
 FILE is a Railwise design file (.json) or a SPICE-compatible netlist (.sp .spi .spice .cir .net .cdl .ckt).
-Exit status: 0 no errors, 1 error findings, 2 unusable input or arguments.
+Exit status: 0 no errors (every property proved, the cells equivalent), 1 error findings (a
+property fails or is undecided, the cells differ), 2 unusable input or arguments.
 
 ${CAUTION}
 `;
@@ -73,9 +75,32 @@ Report:
     --points N          input steps from 0 to VDD inclusive (default 201)
   --dc                  add each vector's level-1 DC voltages and supply current beside the
                         switch-level estimate
+  --prove               prove, for all 2^n input vectors at once (SAT), that each output follows
+                        its expected function, never floats, never is X and never arrives
+                        degraded, and that no vector draws static current or makes a contention;
+                        each failure comes with a counterexample replayed in the engine. Past the
+                        exhaustive limit the sweep is skipped and only the proof runs. Cells with
+                        feedback (latches) are out of scope: their properties stay undecided.
   --jobs N              worker threads for large libraries (default: one per core when it pays)
 
-Exit status: 0 no error findings, 1 error findings, 2 unusable input or arguments.
+Exit status: 0 no error findings (and, with --prove, every property proved), 1 error findings
+(or a property fails or is undecided), 2 unusable input or arguments.
+`;
+
+export const COMPARE_HELP = `railwise compare FILE_A FILE_B [options]
+
+Proves that two cells with the same input and output pins give every output the same level (0, 1,
+X or Z) for every 0/1 input vector, or prints a vector where they differ with both cells' levels,
+replayed in the engine. Cells with feedback (latches) are out of scope.
+
+Options:
+  --cell-a NAME         the cell of FILE_A, when it is a library
+  --cell-b NAME         the cell of FILE_B, when it is a library
+  --json                print {equivalent, vector, outputs: {a, b}, seconds}
+  --vdd, --supply, --ground, --scale, --treat-as   read both files as for check
+
+Exit status: 0 equivalent, 1 the cells differ (or it could not be decided), 2 unusable input or
+arguments (pins that differ included).
 `;
 
 export const EXPORT_HELP = `railwise export FILE --to spice|verilog|csv [options]

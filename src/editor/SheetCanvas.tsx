@@ -18,10 +18,9 @@ import { indexFor } from './tools/sheetIndex.ts';
 import { SHEET_THEME } from './theme.ts';
 
 /**
- * Keeps the store told of the sheet area's size (for fit-to-view and the grid). The first size is
- * read before the browser paints (a layout effect), so the stage is made once at its real size and
- * in its fitted view: making it at a guessed size and then resizing it drew the whole sheet twice
- * and allocated its canvases twice. Returns whether that first size is known.
+ * Keeps the store told of the sheet area's size (for fit-to-view and the grid); true once it has
+ * been measured. Measured before the first paint, so the stage is made at its size and in its first
+ * view: a Konva stage draws every layer as it is made and again as it is resized.
  */
 function useElementSize(ref: RefObject<HTMLDivElement | null>, onFirstLayout?: () => void): boolean {
   const [measured, setMeasured] = useState(false);
@@ -138,7 +137,7 @@ export function SheetCanvas({
         }
       }}
     >
-      {measured ? (
+      {measured && (
         <Stage
           ref={stageRef}
           width={screen.width}
@@ -154,7 +153,7 @@ export function SheetCanvas({
         >
           {layers}
         </Stage>
-      ) : null}
+      )}
       <PointerTip box={box} />
     </div>
   );

@@ -5,6 +5,7 @@ import { MAX_INPUTS_WITH_UNDRIVEN, PROGRESS_THRESHOLD_VECTORS, jobSize } from '.
 import { DEFAULT_MAX_INPUTS } from '../core/analysis/check.ts';
 import { arrangeRows, kindCounts, vectorRows } from '../core/view/vectorTable.ts';
 import { AUTO_SWEEP_VECTORS } from '../state/analysis.ts';
+import { startProof } from '../state/proof.ts';
 import { useStore } from '../state/store.ts';
 import {
   cancelJob,
@@ -27,8 +28,11 @@ function SweepStatus() {
   if (design.netlist.inputs.length > limit) {
     return (
       <p className="rw-muted" data-testid="sweep-limit">
-        {countOf(design.netlist.inputs.length, 'input')}: more than the {limit} an exhaustive check allows.
-        Check the cell with sequences, or split it.
+        {countOf(design.netlist.inputs.length, 'input')}: more than the {limit} an exhaustive check allows.{' '}
+        <button type="button" data-testid="sweep-limit-prove" onClick={() => void startProof()}>
+          Prove it for every vector
+        </button>{' '}
+        instead (see the proof below), or check the cell with sequences.
       </p>
     );
   }

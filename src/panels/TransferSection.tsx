@@ -1,8 +1,6 @@
-import { useMemo } from 'react';
-import { inConvention, MARGIN_CONVENTIONS, type MarginConvention } from '../core/dc/figures.ts';
+import { lazy, Suspense } from 'react';
+import { MARGIN_CONVENTIONS, type MarginConvention } from '../core/dc/figures.ts';
 import type { TransferReport } from '../core/dc/transfer.ts';
-import { transferCsv, transferCsvName } from '../core/dc/transferCsv.ts';
-import { transferChart } from '../core/view/transferChart.ts';
 import {
   openTransfer,
   setTransferConvention,
@@ -15,8 +13,10 @@ import { cancelJob, useSimulation } from '../state/simulation.ts';
 import { useStore } from '../state/store.ts';
 import { JobBar } from './JobBar.tsx';
 import { Section } from './Section.tsx';
-import { TransferChartView } from './TransferChartView.tsx';
-import { TransferFigures } from './TransferFigures.tsx';
+
+// The chart and its figures load when the section is first opened: most sessions never ask for one.
+const loadCurve = () => import('./TransferCurve.tsx');
+const TransferCurve = lazy(() => loadCurve().then((m) => ({ default: m.TransferCurve })));
 
 /** The conventions in a few words, and the books that use each (docs/semantics.md §2). */
 export const CONVENTION_LABELS: Readonly<Record<MarginConvention, { label: string; books: string }>> = {
@@ -144,50 +144,6 @@ function Status() {
   }
 }
 
-/** The curve for the current drawing: shown only when the job answered for it (never a stale one). */
-function Curve() {
-  const report = useSimulation((s) =>
-    s.transfer.status === 'done' ? (s.transfer.result?.report ?? null) : null,
-  );
-  const view = useSimulation((s) => s.transferView);
-  const name = useStore((s) => s.design.name);
-  const chart = useMemo(
-    () => (report === null ? null : transferChart(report, view.output, view.convention)),
-    [report, view],
-  );
-  const csv = useMemo(() => (report === null ? '' : transferCsv(report)), [report]);
-  if (report === null || chart === null) return null;
-  const output = chart.curves.find((c) => c.chosen)?.output ?? null;
-  const curve = output === null ? undefined : report.curves[output];
-  return (
-    <>
-      <TransferChartView chart={chart} />
-      {curve !== undefined && output !== null && (
-        <TransferFigures
-          output={output}
-          figures={inConvention(curve, view.convention)}
-          convention={view.convention}
-        />
-      )}
-      {[...report.notes, ...(curve?.notes ?? [])].map((n) => (
-        <p key={n} className="rw-muted">
-          ⓘ {n}
-        </p>
-      ))}
-      <p className="rw-muted">
-        <a
-          href={`data:text/csv;charset=utf-8,${encodeURIComponent(csv)}`}
-          download={transferCsvName(name, report.input)}
-          data-testid="transfer-csv"
-        >
-          Export the points (CSV)
-        </a>{' '}
-        · {report.model}
-      </p>
-    </>
-  );
-}
-
 /** The level-1 DC transfer curve: Vout against one input, with the switching threshold and margins. */
 export function TransferSection() {
   const report = useSimulation((s) =>
@@ -199,13 +155,21 @@ export function TransferSection() {
       title="DC transfer curve"
       testId="transfer-section"
       open={false}
-      onToggle={(open) => open && openTransfer()}
+      onToggle={(open) => {
+        if (!open) return;
+        openTransfer();
+        void loadCurve();
+      }}
       badge={report === null ? undefined : vmBadge(report)}
     >
       <Request report={report} />
       <ViewChoice outputs={outputs} />
       <Status />
-      <Curve />
+      {report !== null && (
+        <Suspense fallback={null}>
+          <TransferCurve />
+        </Suspense>
+      )}
     </Section>
   );
 }

@@ -12,6 +12,7 @@ import { powerFromCounts } from '../core/power/powerReport.ts';
 import { LiveSession } from '../core/view/liveSession.ts';
 import { completeVector } from '../core/view/vectorControl.ts';
 import { IDLE_JOB, jobSize } from '../worker/protocol.ts';
+import { jobRunner } from '../worker/runner.ts';
 import {
   currentSteps,
   runSequence,
@@ -121,17 +122,33 @@ function follow(s: RailwiseState): Staleness {
     ...(stale.sizing ? { sizing: IDLE_JOB } : {}),
     ...(stale.transfer ? { transfer: IDLE_JOB } : {}),
     ...(stale.vectorDc ? { vectorDc: IDLE_JOB } : {}),
+    ...(stale.check ? { proof: IDLE_JOB } : {}),
+    ...(stale.netlist ? { comparison: IDLE_JOB } : {}),
   });
   if (stale.netlist) followNetlist(store.getState());
   return stale;
 }
 
-/** Starts, once edits pause, the table's jobs a small cell needs: the sweep and the chosen sequence. */
+/** Whether the cell is small enough to be checked by itself after each edit. */
+function checkedByItself(s: RailwiseState): boolean {
+  const cell = { netlist: s.design.netlist, technology: s.design.technology, expectations: {} };
+  const job = { kind: 'sweep', revision: 0, cell, undrivenInputs: s.simulation.undrivenInputs } as const;
+  return jobSize(job) <= AUTO_SWEEP_VECTORS;
+}
+
+/** Starts a small cell's check once edits pause; the promise settles once it answered (null: none started). */
+function autoCheck(stale: Staleness): Promise<void> | null {
+  const s = store.getState();
+  if (!checkedByItself(s) || !stale.sweep || s.simulation.sweep.status !== 'idle') return null;
+  return startSweep();
+}
+
+/** Starts, once edits pause, the other jobs a small cell needs to show everything. */
 function autoRun(stale: Staleness): void {
   const s = store.getState();
   const sim = s.simulation;
   if (!checkedByItself(s)) return;
-  if (stale.sweep && sim.sweep.status === 'idle') void startSweep();
+  if (stale.sizing && sim.sizing.status === 'idle') void startSizing();
   if (
     (stale.sequence || stale.activity) &&
     sim.powerSettings.activity === 'sequence' &&
@@ -141,39 +158,34 @@ function autoRun(stale: Staleness): void {
     void runSequence();
 }
 
-/** Whether the cell is small enough to be checked after every edit without a click. */
-function checkedByItself(s: RailwiseState): boolean {
-  const cell = { netlist: s.design.netlist, technology: s.design.technology, expectations: {} };
-  const sweep = { kind: 'sweep', revision: 0, cell, undrivenInputs: s.simulation.undrivenInputs } as const;
-  return jobSize(sweep) <= AUTO_SWEEP_VECTORS;
-}
-
-/** The curve once asked for: the designer is looking at it, so it never waits. */
+/** The transfer curve, once asked for, whatever the cell's vector count. */
 function autoRunTransfer(stale: Staleness): void {
   const sim = store.getState().simulation;
   if (stale.transfer && sim.transfer.status === 'idle' && sim.transferRequest !== null) void startTransfer();
 }
 
-/**
- * The jobs that come after the table (docs/semantics.md §8): sizing for a small cell, and the shown
- * vector's level-1 answer whatever the cell's vector count. They wait while a short sweep (one
- * without a progress bar) runs, and then for the page to paint the table, so on two cores the
- * table and the level colours come first.
- */
-function afterTable(s: RailwiseState): boolean {
-  return s.simulation.sweep.status !== 'running' || s.simulation.sweep.long;
-}
-
-function autoRunAfterTable(stale: Staleness): void {
+/** The shown vector's level-1 answer, whatever the cell's vector count. */
+function autoRunVectorDc(stale: Staleness): void {
   const s = store.getState();
-  const sim = s.simulation;
-  if (stale.sizing && sim.sizing.status === 'idle' && checkedByItself(s)) void startSizing();
   if (
     stale.vectorDc &&
-    sim.vectorDc.status === 'idle' &&
+    s.simulation.vectorDc.status === 'idle' &&
     s.design.netlist.devices.length <= AUTO_VECTOR_DC_DEVICES
   )
     void startVectorDc();
+}
+
+/** Starts the worker the first check runs in, so its script loads while the page opens its design. */
+export function warmAnalysis(): void {
+  jobRunner('sweep').warm?.();
+}
+
+export interface StartOptions {
+  /**
+   * Start the opened design's jobs at once, in this very call, rather than in the microtask after
+   * it: the page at start-up, where nothing is being edited yet.
+   */
+  readonly startNow?: boolean;
 }
 
 /** Runs `work` once the page has painted what the store holds now (at once where nothing paints). */
@@ -187,36 +199,32 @@ function afterNextPaint(work: () => void): void {
  * to pause: a change after a quiet spell (a design opened, the page started, a first edit) starts
  * them at once, in a microtask after the change that made them stale; changes that come closer
  * together than SWEEP_DEBOUNCE_MS wait until they pause, so typing or a run of nudges starts one job.
+ * The check goes first; the other jobs start once it has answered and the page has painted the
+ * answer (docs/semantics.md §8), so on two cores the table and the level colours come first.
  */
-export function startAnalysis(): () => void {
+export function startAnalysis(options: StartOptions = {}): () => void {
   let timer: ReturnType<typeof setTimeout> | null = null;
   /** What went stale since jobs last started. */
   let pending: Staleness | null = null;
-  /** What went stale for the jobs that come after the table, until the table is done. */
-  let later: Staleness | null = null;
-  let laterQueued = false;
-  const runLater = (): void => {
-    if (later === null || pending !== null || laterQueued || !afterTable(store.getState())) return;
-    laterQueued = true;
-    afterNextPaint(() => {
-      laterQueued = false;
-      const due = later;
-      later = null;
-      if (due !== null && !stopped) autoRunAfterTable(due);
-    });
-  };
   let lastChange = -Infinity;
   let stopped = false;
-  const runPending = (): void => {
+  const runDue = (): void => {
     if (timer !== null) clearTimeout(timer); // a change queued behind the microtask is served now
     timer = null;
     const due = pending;
     pending = null;
     if (due === null || stopped) return;
     autoRunTransfer(due);
-    autoRun(due);
-    later = later === null ? due : merge(later, due);
-    runLater();
+    // The check before the jobs that start by themselves: it is what the panel waits for, and they
+    // start once it has answered, so their workers do not compete with it for the processor.
+    const check = autoCheck(due);
+    const rest = (): void => {
+      if (stopped) return;
+      autoRun(due);
+      autoRunVectorDc(due);
+    };
+    if (check === null) rest();
+    else void check.then(() => afterNextPaint(rest));
   };
   const react = (s: RailwiseState, previous: RailwiseState | null): void => {
     const stale = follow(s);
@@ -226,14 +234,15 @@ export function startAnalysis(): () => void {
       const quiet = timer === null && now - lastChange >= SWEEP_DEBOUNCE_MS;
       lastChange = now;
       if (timer !== null) clearTimeout(timer);
-      if (quiet) queueMicrotask(runPending);
-      else timer = setTimeout(runPending, SWEEP_DEBOUNCE_MS);
+      timer = null;
+      if (quiet) queueMicrotask(runDue);
+      else timer = setTimeout(runDue, SWEEP_DEBOUNCE_MS);
     }
     const sim = store.getState().simulation;
     if (previous === null || powerInputsChanged(sim, previous.simulation)) setSimulation(finishedPower(sim));
-    if (!stopped) runLater();
   };
   react(store.getState(), null);
+  if (options.startNow === true) runDue();
   const unsubscribe = store.subscribe((s, previous) => react(s, previous));
   const stopLibrary = followLibrary();
   return () => {

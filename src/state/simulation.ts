@@ -113,7 +113,7 @@ export function setPowerSettings(powerSettings: PowerSettings): void {
   setSimulation({ powerSettings });
 }
 
-type LaneName = 'sweep' | 'sequence' | 'sizing' | 'transfer' | 'vector-dc';
+type LaneName = 'sweep' | 'sequence' | 'sizing' | 'transfer' | 'vector-dc' | 'proof' | 'compare';
 
 function checkHost(lane: 'sweep' | 'sequence'): LaneHost<CheckResult> {
   return {

@@ -1,7 +1,7 @@
 /**
  * The simulation slice of the store: the selected input vector, the live solve of the sheet for it,
- * the jobs run in the worker (sweep, sequence, sizing, the transfer curve and the shown vector's
- * level-1 answer) and the power figures finished from their counts. Plain state only: the actions are in ./simulation.ts, the wiring that follows the document
+ * the jobs run in the worker (sweep, sequence, sizing, the transfer curve, the shown vector's
+ * level-1 answer, the proof and the comparison with a cell of a file) and the power figures finished from their counts. Plain state only: the actions are in ./simulation.ts, the wiring that follows the document
  * in ./analysis.ts. Nothing here copies the design: the document slice holds it once.
  */
 import type { InputVector } from '../core/model/design.ts';
@@ -14,8 +14,10 @@ import type { MarginConvention } from '../core/dc/figures.ts';
 import {
   IDLE_JOB,
   type CheckResult,
+  type CompareResult,
   type JobState,
   type LibraryResult,
+  type ProofResult,
   type SizingResult,
   type TransferResult,
   type VectorDcResult,
@@ -83,6 +85,10 @@ export interface SimulationState {
   readonly transferView: TransferView;
   /** The shown vector's level-1 operating point beside its switch-level estimate. */
   readonly vectorDc: JobState<VectorDcResult>;
+  /** Every property proved or refuted for all vectors (docs/semantics.md §10). */
+  readonly proof: JobState<ProofResult>;
+  /** The cell against a cell of a file; its job keeps the file for choosing another of its cells. */
+  readonly comparison: JobState<CompareResult>;
 }
 
 export const NOTHING_ANALYSED: AnalysedInputs = {
@@ -123,4 +129,6 @@ export const INITIAL_SIMULATION: SimulationState = {
   transfer: IDLE_JOB,
   transferView: { convention: 'unity-gain', output: null },
   vectorDc: IDLE_JOB,
+  proof: IDLE_JOB,
+  comparison: IDLE_JOB,
 };

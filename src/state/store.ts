@@ -246,6 +246,11 @@ export function setDesignFields(patch: DesignFields): void {
   commitDoc((doc) => withFields(doc, patch));
 }
 
+/** Drops the notes kept with the design (one undo step). */
+export function dismissNotes(): void {
+  commitDoc(({ notes: _dismissed, ...doc }) => doc);
+}
+
 export function setSelection(selected: ItemIds): void {
   const s = store.getState();
   store.setState({ selection: { ...s.selection, selected } });

@@ -40,6 +40,11 @@ export class AnalysisClient {
     });
   }
 
+  /** Starts the worker ahead of its first job, so its script loads while the page does other work. */
+  warm(): void {
+    this.ensureWorker();
+  }
+
   /** Stops the running job, if any; its promise rejects with JobCancelled. */
   cancel(): void {
     const reject = this.rejectRunning;

@@ -11,6 +11,7 @@ import { checkLibraryCell } from '../core/analysis/libraryCheck.ts';
 import { expressionProblem } from '../core/view/expectation.ts';
 import { StepLevelRecorder } from '../core/view/sequenceLevels.ts';
 import { transfer, vectorDc } from './dcJobs.ts';
+import { compare, proof } from './proofJobs.ts';
 import { MAX_INPUTS_WITH_UNDRIVEN } from './protocol.ts';
 import type {
   AnalysisJob,
@@ -128,5 +129,11 @@ export function runJob(job: AnalysisJob, onProgress: (p: JobProgress) => void = 
     }
     case 'vector-dc':
       return { kind: 'vector-dc', revision: job.revision, ...vectorDc(job), elapsedMs: elapsed() };
+    case 'proof': {
+      const outcome = proof(job, throttled(onProgress));
+      return { kind: 'proof', revision: job.revision, ...outcome, elapsedMs: elapsed() };
+    }
+    case 'compare':
+      return { kind: 'compare', revision: job.revision, ...compare(job), elapsedMs: elapsed() };
   }
 }

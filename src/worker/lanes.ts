@@ -7,7 +7,7 @@
 import { JobCancelled } from './client.ts';
 import {
   IDLE_JOB,
-  PROGRESS_THRESHOLD_VECTORS,
+  isLongJob,
   jobSize,
   type AnalysisJob,
   type JobProgress,
@@ -44,7 +44,7 @@ export async function runInLane<R>(lane: JobLane, job: AnalysisJob, host: LaneHo
     status: 'running',
     job,
     revision: job.revision,
-    long: total > PROGRESS_THRESHOLD_VECTORS,
+    long: isLongJob(job),
     progress: { done: 0, total },
   };
   host.publish(running);

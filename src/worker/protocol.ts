@@ -8,6 +8,8 @@ import type { DcComparison } from '../core/dc/vectorCompare.ts';
 import type { CellDesign, Design, InputVector } from '../core/model/design.ts';
 import type { LibraryRow } from '../core/analysis/libraryCheck.ts';
 import type { PowerCounts } from '../core/power/tally.ts';
+import type { Comparison } from '../core/proof/compare.ts';
+import type { ProofReport } from '../core/proof/prove.ts';
 import type { SizingReport } from '../core/sizing/types.ts';
 import type { StepLevel } from '../core/view/levelStrip.ts';
 
@@ -68,7 +70,25 @@ export interface LibraryJob {
   readonly design: Design;
 }
 
-export type AnalysisJob = SweepJob | SequenceJob | SizingJob | TransferJob | VectorDcJob | LibraryJob;
+/** Every property of docs/semantics.md §10 for all 0/1 vectors at once, by SAT. */
+export interface ProofJob {
+  readonly kind: 'proof';
+  readonly revision: number;
+  readonly cell: CellInput;
+}
+
+/** The cell against a cell of a file (design or netlist, read in the worker), for every vector. */
+export interface CompareJob {
+  readonly kind: 'compare';
+  readonly revision: number;
+  readonly cell: CellInput;
+  readonly file: { readonly name: string; readonly text: string };
+  /** The cell of a library file to compare with; null: the file's only cell. */
+  readonly other: string | null;
+}
+
+export type AnalysisJob =
+  SweepJob | SequenceJob | SizingJob | TransferJob | VectorDcJob | ProofJob | CompareJob | LibraryJob;
 
 export interface JobProgress {
   readonly done: number;
@@ -119,7 +139,31 @@ export interface LibraryResult {
   readonly elapsedMs: number;
 }
 
-export type JobResult = CheckResult | SizingResult | TransferResult | VectorDcResult | LibraryResult;
+export interface ProofResult {
+  readonly kind: 'proof';
+  readonly revision: number;
+  readonly report: ProofReport | null;
+  /** A cell the proof cannot read (it does not compile), in words. */
+  readonly error: string | null;
+  readonly elapsedMs: number;
+}
+
+export interface CompareResult {
+  readonly kind: 'compare';
+  readonly revision: number;
+  /** The file and the cell of it that was compared. */
+  readonly file: string;
+  readonly other: string | null;
+  readonly comparison: Comparison | null;
+  /** A library file and no cell chosen yet: its cells to choose from. */
+  readonly choices: readonly string[];
+  /** An unreadable file or cell, or pins that differ, in words. */
+  readonly error: string | null;
+  readonly elapsedMs: number;
+}
+
+export type JobResult =
+  CheckResult | SizingResult | TransferResult | VectorDcResult | ProofResult | CompareResult | LibraryResult;
 
 /** A job as the panels see it, whatever its kind. */
 export type JobStatus = 'idle' | 'running' | 'done' | 'cancelled' | 'failed';
@@ -157,9 +201,22 @@ export const MAX_INPUTS_WITH_UNDRIVEN = 10;
 /** Sweeps with more vectors than this show a progress bar and a cancel button. */
 export const PROGRESS_THRESHOLD_VECTORS = 4096;
 
-/** Solves a job takes: vectors of a sweep, steps of a sequence, points of a curve, cells of a library, none for sizing. */
+/** Long jobs show a progress bar and a cancel button: large sweeps, and every proof and comparison. */
+export function isLongJob(job: AnalysisJob): boolean {
+  return job.kind === 'proof' || job.kind === 'compare' || jobSize(job) > PROGRESS_THRESHOLD_VECTORS;
+}
+
+/**
+ * Solves a job takes: vectors of a sweep, steps of a sequence, points of a curve, cells of a library,
+ * none for sizing;
+ * for a proof, the properties it decides (two for the cell, four per output; its progress counts them).
+ */
 export function jobSize(job: AnalysisJob): number {
   switch (job.kind) {
+    case 'proof':
+      return 2 + 4 * job.cell.netlist.outputs.length;
+    case 'compare':
+      return 1;
     case 'sequence':
     case 'vector-dc':
       return job.steps.length;

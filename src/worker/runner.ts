@@ -9,6 +9,8 @@ import type { AnalysisJob, JobProgress, JobResult } from './protocol.ts';
 export interface JobRunner {
   run(job: AnalysisJob, onProgress: (progress: JobProgress) => void): Promise<JobResult>;
   cancel(): void;
+  /** Gets ready for a first job (a browser worker starts loading its script); optional. */
+  warm?(): void;
 }
 
 export type JobLane = AnalysisJob['kind'];

@@ -40,15 +40,15 @@ describe('static current', () => {
   // (RCN 0.25 µm on-resistance from memory; arithmetic derived).
   const report = checkSweep(design('resistor-load-inverter').netlist);
   it('flows with the output low, with amperes and watts', () => {
-    const f = report.vectors![1].findings.find((x) => x.kind === 'static-current');
+    const f = report.vectors![1]!.findings.find((x) => x.kind === 'static-current');
     expect(f?.path).toEqual(['VDD', 'RL', 'Y', 'N1', 'GND']);
     expect(f?.current).toBeCloseTo(2.5 / 23250, 12);
     expect(f?.watts).toBeCloseTo((2.5 * 2.5) / 23250, 12);
-    expect(report.vectors![1].supplyCurrent).toBeCloseTo(2.5 / 23250, 12);
+    expect(report.vectors![1]!.supplyCurrent).toBeCloseTo(2.5 / 23250, 12);
   });
   it('does not flow with the output high', () => {
-    expect(report.vectors![0].findings).toEqual([]);
-    expect(report.vectors![0].supplyCurrent).toBe(0);
+    expect(report.vectors![0]!.findings).toEqual([]);
+    expect(report.vectors![0]!.supplyCurrent).toBe(0);
   });
 });
 
@@ -60,13 +60,13 @@ describe('floating', () => {
     expect(f.map((x) => x.vector)).toEqual([0, 2]);
     expect(f.every((x) => x.severity === 'error' && x.nets[0] === 'Y')).toBe(true);
     // It names the devices that could drive Y, all off: the enable pair of the stack.
-    expect(f[0].devices).toEqual(['NEN', 'PEN']);
+    expect(f[0]!.devices).toEqual(['NEN', 'PEN']);
   });
   it('is not reported where the expected value is Z', () => {
     expect(checkSweep(tristate.netlist, { expectations: tristate.expectations }).summary.floating).toBe(0);
   });
   it('is a warning on a dynamic node holding known charge', () => {
-    const seq = design('precharged-and2').sequences[0];
+    const seq = design('precharged-and2').sequences[0]!;
     const f = checkSequence(design('precharged-and2').netlist, seq.steps).findings.find(
       (x) => x.kind === 'floating',
     );
@@ -89,7 +89,7 @@ describe('contention', () => {
     const report = checkSweep(cell);
     const vectorsWithContention = report.findings.filter((f) => f.kind === 'contention').map((f) => f.vector);
     expect(vectorsWithContention).toEqual([1, 2]);
-    expect(report.vectors![1].outputs.Y).toBe('X');
+    expect(report.vectors![1]!.outputs.Y).toBe('X');
   });
   it('a single inverter never contends', () => {
     expect(checkSweep(inverter.build()).summary.contention).toBe(0);
@@ -112,8 +112,8 @@ describe('degraded', () => {
     const report = checkSweep(passThenInvert(false));
     const f = report.findings.filter((x) => x.kind === 'degraded');
     expect(f.length).toBeGreaterThan(0);
-    expect(f[0].nets).toEqual(['m']);
-    expect(f[0].devices).toEqual(['NP']);
+    expect(f[0]!.nets).toEqual(['m']);
+    expect(f[0]!.devices).toEqual(['NP']);
   });
   it('a transmission gate is not flagged', () => {
     const report = checkSequence(passThenInvert(true), [{ D: '1', EN: '1', ENb: '0' }]);
@@ -124,7 +124,7 @@ describe('degraded', () => {
 describe('charge sharing', () => {
   const and2 = design('precharged-and2');
   it('evaluating with B = 0 shares the precharged node with the stack', () => {
-    const report = checkSequence(and2.netlist, and2.sequences[0].steps);
+    const report = checkSequence(and2.netlist, and2.sequences[0]!.steps);
     const f = report.findings.find((x) => x.kind === 'charge-sharing');
     expect(f?.vector).toBe(2);
     expect(f?.nets).toEqual(['X', 'm1']);
@@ -135,7 +135,7 @@ describe('charge sharing', () => {
       { CLK: '1', A: '1', B: '1' },
     ]);
     expect(report.summary['charge-sharing']).toBe(0);
-    expect(report.steps![1].outputs.Y).toBe('1');
+    expect(report.steps![1]!.outputs.Y).toBe('1');
   });
 });
 
@@ -148,7 +148,7 @@ describe('no steady state', () => {
     const f = report.findings.find((x) => x.kind === 'no-steady-state');
     expect(f?.severity).toBe('error');
     expect(f?.vector).toBe(1);
-    expect(report.steps![1].outputs).toEqual({ Q: 'X', Qb: 'X' });
+    expect(report.steps![1]!.outputs).toEqual({ Q: 'X', Qb: 'X' });
   });
   it('an enabled ring of three stages oscillates', () => {
     const ring = circuit('ring')
@@ -165,12 +165,12 @@ describe('no steady state', () => {
       .nmos('N2', { g: 'b', d: 'c', s: 'GND' })
       .build();
     const report = checkSequence(ring, [{ EN: '0' }, { EN: '1' }]);
-    expect(report.steps![0].findings).toEqual([]);
-    expect(report.steps![1].findings.map((f) => f.kind)).toContain('no-steady-state');
+    expect(report.steps![0]!.findings).toEqual([]);
+    expect(report.steps![1]!.findings.map((f) => f.kind)).toContain('no-steady-state');
   });
   it('a latch that is only set and reset settles', () => {
     const latch = design('nand-latch');
-    expect(checkSequence(latch.netlist, latch.sequences[0].steps).summary['no-steady-state']).toBe(0);
+    expect(checkSequence(latch.netlist, latch.sequences[0]!.steps).summary['no-steady-state']).toBe(0);
   });
 });
 
@@ -240,11 +240,11 @@ describe('limit of exact enumeration', () => {
   it('eleven devices with gates at X exceed the bound and say so', () => {
     const report = checkSequence(parallel(11), [allX(11)]);
     expect(kinds(report.findings)).toContain('limit');
-    expect(report.steps![0].outputs.Y).toBe('X');
+    expect(report.steps![0]!.outputs.Y).toBe('X');
   });
   it('ten are enumerated exactly', () => {
     const report = checkSequence(parallel(10), [allX(10)]);
     expect(kinds(report.findings)).not.toContain('limit');
-    expect(report.steps![0].outputs.Y).toBe('X');
+    expect(report.steps![0]!.outputs.Y).toBe('X');
   });
 });

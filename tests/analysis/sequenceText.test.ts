@@ -1,6 +1,7 @@
 /**
  * The one text form of a sequence (docs/semantics.md §5), read alike by `railwise check --sequence`
- * and the step editor. The rules are our own format; the checks are by hand.
+ * and the step editor. The rules are our own format (no published source applies); the expected
+ * values are worked out by hand from those rules.
  */
 import { describe, expect, it } from 'vitest';
 import {

@@ -23,7 +23,7 @@ describe('starter cells reproduce their truth tables', () => {
       const starter = STARTERS.find((s) => s.id === id);
       expect(starter).toBeDefined();
       const report = checkDesign(starter!.design);
-      const output = starter!.design.netlist.outputs[0];
+      const output = starter!.design.netlist.outputs[0]!;
       expect(report.vectors!.map((v) => v.outputs[output]).join('')).toBe(column);
       expect(report.summary.mismatch).toBe(0);
       expect(report.summary.errors).toBe(0);

@@ -1,7 +1,8 @@
 // @vitest-environment happy-dom
 /**
  * A long design autosaves packed, when the page is idle, and reads back the same. Behaviour of our
- * own app; gzip (RFC 1952) and base64 (RFC 4648) are the browser's.
+ * own app (no published source applies to the values); gzip (RFC 1952) and base64 (RFC 4648) are
+ * the browser's.
  */
 import { afterEach, beforeEach, describe, expect, it, vi } from 'vitest';
 import {

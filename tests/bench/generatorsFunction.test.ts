@@ -27,9 +27,9 @@ function solve(netlist: Netlist, inputs: InputVector) {
   const result = new Simulator(compiled).solveFresh(inputs);
   const at = (net: string): number => compiled.netIndex.get(net) as number;
   return {
-    level: (net: string) => levelName(result.levels[at(net)]),
+    level: (net: string) => levelName(result.levels[at(net)]!),
     volts: (net: string) => result.volts[at(net)],
-    degraded: (net: string) => (result.flags[at(net)] & FLAG_DEGRADED) !== 0,
+    degraded: (net: string) => (result.flags[at(net)]! & FLAG_DEGRADED) !== 0,
     supplyCurrent: result.supplyCurrent,
     paths: result.paths.length,
   };

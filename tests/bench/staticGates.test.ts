@@ -1,6 +1,7 @@
 /**
  * The DC benchmark's cells are what they are named after: transistor counts, and every vector's
- * output through the switch-level solver against the Boolean function.
+ * output through the switch-level solver against the Boolean function. A static CMOS gate has two
+ * transistors per input and NAND4 and AO222 compute the functions named (common practice, no source).
  */
 import { describe, expect, it } from 'vitest';
 import { ao222, nandGate, transistorCount } from '../../bench/generators/index.ts';

@@ -18,6 +18,6 @@ describe('benchmark vectors', () => {
   it('builds a closed toggle walk: every step, and the wrap from last to first, flips exactly one input', () => {
     const walk = toggleWalk(['A', 'B', 'C', 'D'], 20);
     expect(walk).toHaveLength(40);
-    walk.forEach((v, i) => expect(differing(v, walk[(i + 1) % walk.length])).toHaveLength(1));
+    walk.forEach((v, i) => expect(differing(v, walk[(i + 1) % walk.length]!)).toHaveLength(1));
   });
 });

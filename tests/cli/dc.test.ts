@@ -1,6 +1,9 @@
 /**
  * `railwise check --transfer` and `--dc`, called in-process: the JSON shapes, the text figures, and
- * the flags' errors. The numbers themselves are checked against published values in tests/dc.
+ * the flags' errors. The figures here are checked for consistency only (NML = VIL − VOL and
+ * NMH = VOH − VIH by definition; a pseudo-NMOS NOR with every input low has its pull-down off and
+ * draws no current; both common practice, no source); their values are checked against published
+ * ones in tests/dc.
  */
 import { describe, expect, it } from 'vitest';
 import { json, railwise } from './inProcess.ts';
@@ -51,7 +54,10 @@ describe('--transfer', () => {
     expect(y.points).toHaveLength(201);
     expect(y.points[0]).toEqual([0, expect.closeTo(2.5, 6)]);
     expect(y.points[200]).toEqual([2.5, expect.closeTo(0, 6)]);
-    const { vm, vil, vih, vol, voh, nml, nmh } = y as unknown as Record<string, number>;
+    const { vm, vil, vih, vol, voh, nml, nmh } = y as unknown as Record<
+      'vm' | 'vil' | 'vih' | 'vol' | 'voh' | 'nml' | 'nmh',
+      number
+    >;
     expect(0 < vil && vil < vm && vm < vih && vih < 2.5).toBe(true);
     expect(nml).toBeCloseTo(vil - vol, 12);
     expect(nmh).toBeCloseTo(voh - vih, 12);

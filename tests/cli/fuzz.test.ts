@@ -49,7 +49,7 @@ const DESIGNS = [
   'public/examples/beacon-sr-latch.railwise.json',
 ].map(read);
 DESIGNS.push(serializeDesign(designOfCell({ ...starterById('nand2')!.design, netlist: hostile[0]! })));
-DESIGNS.push(...hierarchies.map(serializeDesign));
+DESIGNS.push(...hierarchies.map((d) => serializeDesign(d)));
 
 /**
  * Loads what the text holds and checks that each readable cell exports and reads back unchanged,

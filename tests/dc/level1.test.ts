@@ -20,7 +20,7 @@ function plain(kPrime: number, wOverL: number, vt0: number): Level1Device {
 function current(d: Level1Device, vd: number, vg: number, vs: number, vb = 0): number {
   const out = mosOutput();
   evaluateMos(d, vd, vg, vs, vb, out);
-  return out[ID];
+  return out[ID]!;
 }
 
 describe('Shichman–Hodges drain current', () => {
@@ -92,14 +92,14 @@ describe('derivatives for Newton (properties)', () => {
         [G_DRAIN, G_GATE, G_SOURCE, G_BULK].forEach((slot, t) => {
           const up = [...v];
           const down = [...v];
-          up[t] += h;
-          down[t] -= h;
+          up[t]! += h;
+          down[t]! -= h;
           const numeric =
-            (current(d, up[0], up[1], up[2], up[3]) - current(d, down[0], down[1], down[2], down[3])) /
+            (current(d, up[0]!, up[1]!, up[2]!, up[3]) - current(d, down[0]!, down[1]!, down[2]!, down[3])) /
             (2 * h);
           // Region boundaries are C¹ (value and slope agree), so the difference quotient agrees there too.
-          expect(Math.abs(numeric - out[slot])).toBeLessThan(
-            1e-6 * (1 + Math.abs(out[slot])) + 1e-3 * d.beta,
+          expect(Math.abs(numeric - out[slot]!)).toBeLessThan(
+            1e-6 * (1 + Math.abs(out[slot]!)) + 1e-3 * d.beta,
           );
         });
       }),
@@ -111,8 +111,8 @@ describe('derivatives for Newton (properties)', () => {
       fc.property(device, volts, volts, volts, volts, (d, vd, vg, vs, vb) => {
         const out = mosOutput();
         evaluateMos(d, vd, vg, vs, vb, out);
-        const sum = out[G_DRAIN] + out[G_GATE] + out[G_SOURCE] + out[G_BULK];
-        expect(Math.abs(sum)).toBeLessThan(1e-12 * (1 + Math.abs(out[G_DRAIN]) + Math.abs(out[G_GATE])));
+        const sum = out[G_DRAIN]! + out[G_GATE]! + out[G_SOURCE]! + out[G_BULK]!;
+        expect(Math.abs(sum)).toBeLessThan(1e-12 * (1 + Math.abs(out[G_DRAIN]!) + Math.abs(out[G_GATE]!)));
       }),
     );
   });

@@ -233,15 +233,15 @@ describe('errors name the file and the field', () => {
   });
 
   it.each([
-    ['a negative width', (doc: Doc) => (doc.netlist.devices[0].w = -1), 'netlist.devices[0].w', /P1/],
+    ['a negative width', (doc: Doc) => (doc.netlist.devices[0]!.w = -1), 'netlist.devices[0].w', /P1/],
     [
       'an unknown device kind',
-      (doc: Doc) => (doc.netlist.devices[1].kind = 'bjt'),
+      (doc: Doc) => (doc.netlist.devices[1]!.kind = 'bjt'),
       'netlist.devices[1].kind',
       /./,
     ],
-    ['a bad step value', (doc: Doc) => (doc.sequences[0].steps[1].A = '2'), 'sequences[0].steps[1].A', /./],
-    ['a rail role', (doc: Doc) => (doc.netlist.rails[0].role = 'power'), 'netlist.rails[0].role', /./],
+    ['a bad step value', (doc: Doc) => (doc.sequences[0]!.steps[1]!.A = '2'), 'sequences[0].steps[1].A', /./],
+    ['a rail role', (doc: Doc) => (doc.netlist.rails[0]!.role = 'power'), 'netlist.rails[0].role', /./],
     [
       'a sheet rotation',
       (doc: Doc) =>
@@ -254,7 +254,7 @@ describe('errors name the file and the field', () => {
     ],
     [
       'an empty net name',
-      (doc: Doc) => (doc.netlist.devices[0].gate = ''),
+      (doc: Doc) => (doc.netlist.devices[0]!.gate = ''),
       'netlist.devices[0].gate',
       /empty/,
     ],

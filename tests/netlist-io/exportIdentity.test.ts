@@ -1,9 +1,10 @@
 /**
  * Export → import is the identity on any design's netlist and expected functions, whatever its
- * names (SPEC §11 asks it of import → export → import; a design's own names are harder). And no
- * name or text of a design can add a statement to an export. Our own format's behaviour: no
- * published source applies; the SPICE rules followed are the usual ones (a line starting with `*`
- * is a comment, `+` continues the line before, `.` starts a command; common practice, no source).
+ * names (docs/semantics.md §5, "Export → import is the identity"; §8 asks it of import → export →
+ * import; a design's own names are harder). And no name or text of a design can add a statement to
+ * an export. Our own format's behaviour: no published source applies; the SPICE rules followed are
+ * the usual ones (a line starting with `*` is a comment, `+` continues the line before, `.` starts a
+ * command; common practice, no source).
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';

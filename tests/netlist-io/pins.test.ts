@@ -1,6 +1,8 @@
 /** Naming pins over what the importer inferred (docs/semantics.md §6: "flags override"). */
 import { describe, expect, it } from 'vitest';
+import { readFileSync } from 'node:fs';
 import { circuit } from '../../src/core/model/builder.ts';
+import { cellsFromText } from '../../src/core/netlist-io/cellFiles.ts';
 import { assignPins, inputsReadByExpectations, PinError } from '../../src/core/netlist-io/pins.ts';
 
 // As imported: a transmission gate's data port D reaches a channel, so it was taken as an output.
@@ -57,5 +59,17 @@ describe('inputsReadByExpectations', () => {
   it('an output read in its own expression keeps holding, and a bad expression names nothing', () => {
     expect(inputsReadByExpectations(tg, { Y: 'EN ? D : Y', D: 'D' })).toEqual([]);
     expect(inputsReadByExpectations(tg, { Y: 'EN & (' })).toEqual([]);
+  });
+});
+
+describe('an expect directive and no pin directives', () => {
+  // The carry of a full adder is the majority of its three inputs (common practice, no source).
+  it('reads the ports its expression reads as inputs', () => {
+    const bare = readFileSync('tests/cli/fixtures/tgc-bare.sp', 'utf8');
+    const text = bare.replace('.ends', '* railwise: expect CO = A & B | A & CI | B & CI\n.ends');
+    const [cell] = cellsFromText(text, 'tgc.sp').cells;
+    const job = cell !== undefined && 'job' in cell ? cell.job : null;
+    expect([...(job?.netlist.inputs ?? [])].sort()).toEqual(['A', 'B', 'CI']);
+    expect(job?.netlist.outputs).toEqual(['CO']);
   });
 });

@@ -36,7 +36,7 @@ describe('analysis panel', () => {
     });
     const rows = host.querySelectorAll('[data-testid^="vector-row-"]');
     expect([...rows].map((r) => r.getAttribute('data-testid'))).toEqual(['vector-row-2']);
-    await click(rows[0]);
+    await click(rows[0]!);
     expect(byTestId('bit-A')?.textContent).toContain('1');
     expect(byTestId('bit-B')?.textContent).toContain('0');
     const everyNet = byTestId('every-net') as HTMLDetailsElement;

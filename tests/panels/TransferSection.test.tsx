@@ -26,6 +26,10 @@ async function openTransferSection(): Promise<void> {
     details.open = true;
     details.dispatchEvent(new Event('toggle'));
   });
+  // The chart's code loads when the section opens (src/panels/TransferSection.tsx).
+  await act(async () => {
+    await import('../../src/panels/TransferCurve.tsx');
+  });
   await pause();
 }
 

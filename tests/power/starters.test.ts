@@ -32,7 +32,7 @@ describe('power and sizing over every starter cell', () => {
     // A static CMOS gate never has its pull-up and pull-down on together; a ratioed load conducts
     // whenever the pull-down does (common practice, no source).
     const dcOf = (id: string): number[] => {
-      const { design } = STARTERS.find((s) => s.id === id) ?? STARTERS[0];
+      const { design } = STARTERS.find((s) => s.id === id) ?? STARTERS[0]!;
       return powerReport(design.netlist, design.technology, options).vectors.map((v) => v.dcWatts);
     };
     for (const id of ['inverter', 'nand2', 'nor2', 'aoi21', 'oai21']) expect(Math.max(...dcOf(id))).toBe(0);
@@ -44,7 +44,7 @@ describe('power and sizing over every starter cell', () => {
     const stateful = STARTERS.filter((s) => s.design.sequences.length > 0);
     expect(stateful.length).toBeGreaterThan(0);
     for (const { design } of stateful) {
-      const sequence = design.sequences[0].steps;
+      const sequence = design.sequences[0]!.steps;
       const power = powerReport(
         design.netlist,
         design.technology,

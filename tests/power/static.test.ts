@@ -24,7 +24,7 @@ describe('static power through conducting paths', () => {
     const report = powerReport(divider, withVdd(NO_LEAK, 5), random);
     expect(report.vectors).toHaveLength(1);
     near(report.staticWatts[0], 0.5e-3);
-    near(report.vectors[0].supplyCurrent, 0.1e-3);
+    near(report.vectors[0]!.supplyCurrent, 0.1e-3);
   });
 
   it('a resistor-load inverter burns VDD²/(R_L + R_on) with its input high and nothing with it low', () => {
@@ -53,17 +53,17 @@ describe('leakage of off transistors', () => {
     const report = powerReport(inverter(1, 2), tech, random);
     near(report.leakageWatts[0], tech.ioffPerWidth * 1 * tech.vdd);
     near(report.leakageWatts[1], tech.ioffPerWidth * 2 * tech.vdd);
-    near(report.vectors[0].leakageCurrent, tech.ioffPerWidth * 1);
+    near(report.vectors[0]!.leakageCurrent, tech.ioffPerWidth * 1);
   });
 
   it('grows linearly with width', () => {
     const base = powerReport(inverter(), tech, random).leakageWatts;
     const wide = powerReport(scaled(inverter(), 3), tech, random).leakageWatts;
-    wide.forEach((w, i) => near(w, 3 * base[i]));
+    wide.forEach((w, i) => near(w, 3 * base[i]!));
   });
 
   it('grows with the supply', () => {
-    const low = powerReport(inverter(), withVdd(tech, 1.8), random).leakageWatts[0];
+    const low = powerReport(inverter(), withVdd(tech, 1.8), random).leakageWatts[0]!;
     const high = powerReport(inverter(), withVdd(tech, 3.3), random).leakageWatts[0];
     expect(high).toBeGreaterThan(low);
   });
@@ -80,10 +80,10 @@ describe('leakage of off transistors', () => {
   it('n off NMOS in series share the supply evenly: 1/n of one device with VDD across it', () => {
     // Derived from the linear model (equal conductances in series divide VDD evenly); checks the
     // two-net and the larger-group solves of the undriven stack nodes.
-    const one = powerReport(nand(2, 1, 1), tech, random).vectors[1].leakageWatts; // A = 0, B = 1: NA alone
+    const one = powerReport(nand(2, 1, 1), tech, random).vectors[1]!.leakageWatts; // A = 0, B = 1: NA alone
     for (const n of [3, 4, 5]) {
       // Every input 0: the PMOS are all on, the n NMOS all off.
-      near(powerReport(nand(n, 1, 1), tech, random).vectors[0].leakageWatts, one / n);
+      near(powerReport(nand(n, 1, 1), tech, random).vectors[0]!.leakageWatts, one / n);
     }
   });
 

@@ -44,14 +44,14 @@ describe('combinational pass-gate cells', () => {
           (n) =>
             Number.isNaN(c.railVolts[n]) &&
             !c.inputNets.includes(n) &&
-            c.netGates.start[n + 1] > c.netGates.start[n],
+            c.netGates.start[n + 1]! > c.netGates.start[n]!,
         );
         const y = c.netIndex.get('Y') as number;
         [...sweepVectors(cell.netlist.inputs)].forEach((vector, row) => {
           const base = sim.solveFresh(vector);
           for (const bits of [0, -1, ...starts]) {
             const r = sim.solveNext(vector, startingFrom(base, gateNets, bits));
-            expect(levelName(r.levels[y])).toBe(String(cell.table[row]));
+            expect(levelName(r.levels[y]!)).toBe(String(cell.table[row]));
           }
         });
       }),

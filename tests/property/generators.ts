@@ -40,28 +40,43 @@ function place(
   kind: 'nmos' | 'pmos',
   top: string,
   bottom: string,
-  counter: { n: number },
+  counter: { n: number; readonly tag: string; readonly drop: number },
 ): CircuitBuilder {
   if (t.kind === 'leaf') {
-    const name = `${kind === 'nmos' ? 'N' : 'P'}${counter.n++}`;
+    const n = counter.n++;
+    if (n === counter.drop) return b;
+    const name = `${kind === 'nmos' ? 'N' : 'P'}${counter.tag}${n}`;
     return b[kind](name, { g: t.input, d: top, s: bottom, w: kind === 'nmos' ? 1 : 2 });
   }
   if (t.kind === 'parallel')
     return place(place(b, t.left, kind, top, bottom, counter), t.right, kind, top, bottom, counter);
-  const mid = `${kind}_m${counter.n++}`;
+  const mid = `${counter.tag}${kind}_m${counter.n++}`;
   return place(place(b, t.left, kind, top, mid, counter), t.right, kind, mid, bottom, counter);
 }
 
 /** A complementary static CMOS gate: pull-down network `t`, pull-up network its dual. Y = !f(t). */
 export function complementaryGate(t: SpTree, inputs: readonly string[]): Netlist {
-  const counter = { n: 1 };
-  let b = circuit('sp')
+  const b = circuit('sp')
     .rails()
     .input(...inputs)
     .output('Y');
-  b = place(b, t, 'nmos', 'Y', 'GND', counter);
-  b = place(b, dual(t), 'pmos', 'VDD', 'Y', counter);
-  return b.build();
+  return complementaryGateOn(b, t, 'Y', '', 0).build();
+}
+
+/**
+ * Adds the gate with pull-down `t` and its dual pull-up onto `y`, naming devices and internal nets
+ * with `tag`; `drop` (counted from 1 as devices are placed, 0 for none) leaves one device out.
+ */
+export function complementaryGateOn(
+  b: CircuitBuilder,
+  t: SpTree,
+  y: string,
+  tag: string,
+  drop: number,
+): CircuitBuilder {
+  const counter = { n: 1, tag, drop };
+  const down = place(b, t, 'nmos', y, 'GND', counter);
+  return place(down, dual(t), 'pmos', 'VDD', y, counter);
 }
 
 /** Any netlist over a small pool of nets: every device kind, any connection, odd sizes. */

@@ -35,7 +35,9 @@ describe('incremental re-evaluation', () => {
           const reused = new Simulator(compiled);
           const recycling = new Simulator(compiled);
           for (const row of rows) {
-            const v: InputVector = Object.fromEntries(netlist.inputs.map((n, i) => [n, row[i % row.length]]));
+            const v: InputVector = Object.fromEntries(
+              netlist.inputs.map((n, i) => [n, row[i % row.length]!]),
+            );
             const expected = snapshot(new Simulator(compiled).solveFresh(v));
             expect(snapshot(reused.solveFresh(v))).toEqual(expected);
             expect(snapshot(recycling.solveFresh(v, { recycle: true }))).toEqual(expected);
@@ -57,7 +59,9 @@ describe('incremental re-evaluation', () => {
           let a: SolveResult | null = null;
           let b: SolveResult | null = null;
           for (const row of rows) {
-            const v: InputVector = Object.fromEntries(netlist.inputs.map((n, i) => [n, row[i % row.length]]));
+            const v: InputVector = Object.fromEntries(
+              netlist.inputs.map((n, i) => [n, row[i % row.length]!]),
+            );
             a = a ? fast.solveNext(v, a) : fast.solveFresh(v);
             b = b ? full.solveNext(v, b) : full.solveFresh(v);
             expect(snapshot(a)).toEqual(snapshot(b));

@@ -61,13 +61,13 @@ function build(inputCount: number, stages: readonly Stage[]): PassGateCell {
   });
   stages.forEach((s, k) => {
     const out = `m${k}`;
-    const of = (i: number): Signal => pool[i % pool.length];
+    const of = (i: number): Signal => pool[i % pool.length]!;
     let table: number[];
     if (s.kind === 'mux') {
       const [sel, d0, d1] = [of(s.select), of(s.d0), of(s.d1)];
       b = transmissionGate(b, `T${k}a`, d1.net, out, sel.net, sel.complement);
       b = transmissionGate(b, `T${k}b`, d0.net, out, sel.complement, sel.net);
-      table = sel.table.map((x, v) => (x ? d1.table[v] : d0.table[v]));
+      table = sel.table.map((x, v) => (x ? d1.table[v]! : d0.table[v]!));
     } else {
       const [x, y] = [of(s.a), of(s.b)];
       b = b
@@ -75,14 +75,14 @@ function build(inputCount: number, stages: readonly Stage[]): PassGateCell {
         .pmos(`PB${k}`, { g: y.net, d: out, s: 'VDD', w: 2 })
         .nmos(`NA${k}`, { g: x.net, d: out, s: `${out}_x`, w: 2 })
         .nmos(`NB${k}`, { g: y.net, d: `${out}_x`, s: 'GND', w: 2 });
-      table = x.table.map((p, v) => 1 - (p & y.table[v]));
+      table = x.table.map((p, v) => 1 - (p & y.table[v]!));
     }
     b = inverter(b, `${out}b`, out, `${out}b`);
     pool.push({ net: out, complement: `${out}b`, table });
     pool.push({ net: `${out}b`, complement: out, table: table.map((x) => 1 - x) });
   });
   // The output buffers the last stage, so Y itself is a plain inverter output.
-  const last = pool[pool.length - 1];
+  const last = pool[pool.length - 1]!;
   b = inverter(b, 'Y', last.net, 'Y');
   return { netlist: b.build(), table: last.table.map((x) => 1 - x) };
 }

@@ -51,7 +51,7 @@ function expectSameNumbers(a: CheckReport, b: CheckReport): void {
   const rowsA = a.vectors ?? a.steps ?? [];
   const rowsB = b.vectors ?? b.steps ?? [];
   rowsA.forEach((row, i) => {
-    const other = rowsB[i];
+    const other = rowsB[i]!;
     expect(close(row.supplyCurrent, other.supplyCurrent)).toBe(true);
     for (const [net, v] of Object.entries(row.voltages)) {
       const w = other.voltages[net];
@@ -70,7 +70,7 @@ function shuffled(netlist: Netlist, order: number[]): Netlist {
   const devices = [...netlist.devices];
   order.forEach((j, i) => {
     const k = j % devices.length;
-    [devices[i % devices.length], devices[k]] = [devices[k], devices[i % devices.length]];
+    [devices[i % devices.length], devices[k]] = [devices[k]!, devices[i % devices.length]!];
   });
   return { ...netlist, devices, rails: [...netlist.rails].reverse() };
 }

@@ -16,7 +16,7 @@ function rounded(value: unknown): unknown {
 }
 
 function permuted(netlist: Netlist, order: readonly number[]): Netlist {
-  const keyed = netlist.devices.map((d, i) => ({ d, key: order[i % order.length] * 1000 + i }));
+  const keyed = netlist.devices.map((d, i) => ({ d, key: order[i % order.length]! * 1000 + i }));
   return { ...netlist, devices: keyed.sort((a, b) => a.key - b.key).map((k) => k.d) };
 }
 

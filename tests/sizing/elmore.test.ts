@@ -76,7 +76,7 @@ describe('unit RC model delays (Weste & Harris, 4th ed., §4.3)', () => {
       const stage = extractStage(cell, UNIT_RC_TECH, 'Y');
       const caps = delayCapacitances(cell, UNIT_RC_TECH, true);
       const c = Float64Array.from(stage.nets, (n) => totalCapacitance(caps.get(n)!));
-      c[stage.output] += load(h, 4);
+      c[stage.output]! += load(h, 4);
       const on = stage.elements.map((e) => ['PA', 'NB'].includes(e.name));
       near(evaluate(stage, on, 'up', c)?.elmore, (6 + 4 * h) * RC);
     }
@@ -114,7 +114,7 @@ describe('stages that are not plain complementary gates', () => {
       .resistor('RL', 'VDD', 'Y', 40e3)
       .nmos('N1', { g: 'A', d: 'Y', s: 'GND', w: 1, l: 1 })
       .build();
-    const out = sizingReport(cell, IDEAL, { load: 10e-15 }).outputs[0];
+    const out = sizingReport(cell, IDEAL, { load: 10e-15 }).outputs[0]!;
     near(out.pullUp?.ohms, 40e3);
     near(out.pullDown?.ohms, UNIT_R);
     near(out.rise?.seconds, 40e3 * 10e-15);
@@ -140,12 +140,12 @@ describe('transmission gates switch both devices together', () => {
   };
 
   it('with a local inverter on the select: Rn ∥ Rp', () => {
-    const out = sizingReport(tg(true), IDEAL).outputs[0];
+    const out = sizingReport(tg(true), IDEAL).outputs[0]!;
     near(out.pullUp?.ohms, UNIT_R / 2); // R ∥ 2R/2 = R/2
     expect(out.pullUp?.controls).toEqual({ S: '1', Sb: '0' });
   });
 
   it('with the complement on its own pin: one device alone, R', () => {
-    near(sizingReport(tg(false), IDEAL).outputs[0].pullUp?.ohms, UNIT_R);
+    near(sizingReport(tg(false), IDEAL).outputs[0]!.pullUp?.ohms, UNIT_R);
   });
 });

@@ -60,7 +60,7 @@ describe('logical effort from the drawn network', () => {
 describe('rising and falling efforts', () => {
   it('a book-sized NAND2 has the same effort both ways: 4/3', () => {
     // Weste & Harris, 4th ed., table 4.2: a gate sized for equal rise and fall has g_u = g_d = g.
-    const out = sizingReport(nand(2), UNIT_RC_TECH).outputs[0];
+    const out = sizingReport(nand(2), UNIT_RC_TECH).outputs[0]!;
     near(out.logicalEffortRise.A, 4 / 3);
     near(out.logicalEffortFall.A, 4 / 3);
   });
@@ -71,7 +71,7 @@ describe('rising and falling efforts', () => {
     let b = circuit('pseudo nor3').rails().input('A', 'B', 'C').output('Y');
     b = b.pmos('PL', { g: 'GND', d: 'Y', s: 'VDD', w: 2 / 3, l: 1 });
     for (const x of ['A', 'B', 'C']) b = b.nmos(`N${x}`, { g: x, d: 'Y', s: 'GND', w: 4 / 3, l: 1 });
-    const out = sizingReport(b.build(), UNIT_RC_TECH).outputs[0];
+    const out = sizingReport(b.build(), UNIT_RC_TECH).outputs[0]!;
     near(out.logicalEffortRise.A, 4 / 3);
     near(out.logicalEffortFall.A, 4 / 9);
     near(((out.logicalEffortRise.B as number) + (out.logicalEffortFall.B as number)) / 2, 8 / 9);
@@ -97,7 +97,7 @@ describe('parasitic delay in units of p_inv', () => {
 describe('worst-case drive and the equivalent inverter', () => {
   it('NAND2 (N 2, P 2): one PMOS of 2R/2 up, two NMOS of R/2 in series down, both R', () => {
     // Unit RC model (Weste & Harris, 4th ed., §4.3): width k has R/k (NMOS), 2R/k (PMOS).
-    const out = sizingReport(nand(2), UNIT_RC_TECH).outputs[0];
+    const out = sizingReport(nand(2), UNIT_RC_TECH).outputs[0]!;
     near(out.pullUp?.ohms, UNIT_R);
     near(out.pullDown?.ohms, UNIT_R);
     expect(out.pullDown?.path).toEqual(['GND', 'NB', 'n1', 'NA', 'Y']);
@@ -108,7 +108,7 @@ describe('worst-case drive and the equivalent inverter', () => {
   });
 
   it('NOR3 (N 1, P 6): the worst pull-up is the full series stack of three', () => {
-    const out = sizingReport(nor(3), UNIT_RC_TECH).outputs[0];
+    const out = sizingReport(nor(3), UNIT_RC_TECH).outputs[0]!;
     expect(out.pullUp?.path).toEqual(['VDD', 'PA', 'p1', 'PB', 'p2', 'PC', 'Y']);
     expect(out.pullUp?.controls).toEqual({ A: '0', B: '0', C: '0' });
     near(out.pullUp?.ohms, UNIT_R);
@@ -124,14 +124,14 @@ describe('worst-case drive and the equivalent inverter', () => {
         { kind: 'nmos' as const, name: 'N2', gate: 'Y', drain: 'GND', source: 'GND', w: 1, l: 1 },
       ],
     };
-    const out = sizingReport(cell, UNIT_RC_TECH).outputs[0];
+    const out = sizingReport(cell, UNIT_RC_TECH).outputs[0]!;
     near(out.pullUp?.ohms, UNIT_R);
     expect(out.logicalEffort.D).toBeNull();
     expect(out.notes.join(' ')).toMatch(/input pin/);
   });
 
   it('stops at the documented bound of 12 independent gate signals, saying so', () => {
-    const out = sizingReport(nand(13), UNIT_RC_TECH).outputs[0];
+    const out = sizingReport(nand(13), UNIT_RC_TECH).outputs[0]!;
     expect(out.pullDown).toBeNull();
     expect(out.logicalEffort.A).toBeNull();
     expect(out.notes.join(' ')).toMatch(/13 gate signals.*12/);

@@ -36,7 +36,8 @@ describe('proposeWidths: equal drive to a reference inverter', () => {
   it('the proposal drives like the reference: worst pull-up and pull-down equal its resistances', () => {
     const reference = { wn: 1.5, wp: 3.5 };
     for (const cell of [nand(3, 1, 1), nor(2, 0.7, 0.9), aoi21(2)]) {
-      const out = sizingReport(proposeWidths(cell, UNIT_RC_TECH, reference).netlist, UNIT_RC_TECH).outputs[0];
+      const out = sizingReport(proposeWidths(cell, UNIT_RC_TECH, reference).netlist, UNIT_RC_TECH)
+        .outputs[0]!;
       expect(out.pullDown?.ohms).toBeCloseTo(UNIT_RC_TECH.rn / reference.wn, 6);
       expect(out.pullUp?.ohms).toBeCloseTo(UNIT_RC_TECH.rp / reference.wp, 6);
     }

@@ -49,7 +49,7 @@ describe('the limiter of a degraded level', () => {
   // common practice).
   it('n1 sits at |Vtp|', () => {
     const report = checkSweep(cell, { allNets: true });
-    expect(report.vectors![0].voltages.n1).toBeCloseTo(TECH.vtp, 12);
-    expect(report.vectors![0].voltages.Y).toBe(0);
+    expect(report.vectors![0]!.voltages.n1).toBeCloseTo(TECH.vtp, 12);
+    expect(report.vectors![0]!.voltages.Y).toBe(0);
   });
 });

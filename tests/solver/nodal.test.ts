@@ -34,7 +34,7 @@ describe('ill-conditioned nodal solves', () => {
 
   it('a width of 1e18 (what m=1e18 would make; the importer refuses it, a design may still hold it)', () => {
     const report = checkSweep(stack(1e18));
-    expect(report.vectors![0].outputs.Y).toBe('X');
+    expect(report.vectors![0]!.outputs.Y).toBe('X');
     expect(report.summary.limit).toBe(1);
     expect(report.summary.unknown).toBe(1);
   });

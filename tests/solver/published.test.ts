@@ -78,7 +78,7 @@ describe('resistive divider', () => {
     expect(r.result.staticPower).toBeCloseTo(5e-4, 12);
   });
   it('lists the path VDD → R1 → Y → R2 → GND', () => {
-    const p = r.result.paths[0];
+    const p = r.result.paths[0]!;
     const names = p.nets.map((n) => r.result.compiled.netNames[n]);
     expect(names).toEqual(['VDD', 'Y', 'GND']);
     expect(p.current).toBeCloseTo(1e-4, 12);
@@ -143,12 +143,12 @@ describe('charge sharing by capacitance ratio', () => {
     tech,
   );
   it('stores 2.5 V and 0 V first', () => {
-    expect(steps[1].volts('a')).toBeCloseTo(2.5, 12);
-    expect(steps[1].volts('b')).toBeCloseTo(0, 12);
-    expect(steps[1].level('a')).toBe('Z');
+    expect(steps[1]!.volts('a')).toBeCloseTo(2.5, 12);
+    expect(steps[1]!.volts('b')).toBeCloseTo(0, 12);
+    expect(steps[1]!.level('a')).toBe('Z');
   });
   it('shares to 1.875 V when joined', () => {
-    expect(steps[2].volts('a')).toBeCloseTo(1.875, 9);
-    expect(steps[2].volts('b')).toBeCloseTo(1.875, 9);
+    expect(steps[2]!.volts('a')).toBeCloseTo(1.875, 9);
+    expect(steps[2]!.volts('b')).toBeCloseTo(1.875, 9);
   });
 });

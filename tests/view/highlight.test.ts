@@ -13,7 +13,7 @@ describe('finding highlights', () => {
   });
 
   it('takes the union of named nets and path members, once each', () => {
-    const f = pseudoNmosInverter.findings[0];
+    const f = pseudoNmosInverter.findings[0]!;
     expect(findingTargets(f)).toEqual({ nets: ['VDD', 'Y', 'GND'], devices: ['P1', 'N1'] });
   });
 

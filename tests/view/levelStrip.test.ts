@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { levelAt, levelStrips, stripRuns } from '../../src/core/view/levelStrip.ts';
 import type { StepLevel } from '../../src/core/view/levelStrip.ts';
+import { leading } from '../helpers.ts';
 
 const L = (level: StepLevel['level'], degraded = false): StepLevel => ({ level, degraded });
 
@@ -26,7 +27,7 @@ describe('level strips', () => {
       { Q: L('1'), QB: L('0') },
       { Q: L('0'), QB: L('1') },
     ];
-    const [q, qb] = levelStrips(steps, ['Q', 'QB']);
+    const [q, qb] = leading(levelStrips(steps, ['Q', 'QB']), 2);
     expect(q.net).toBe('Q');
     expect(levelAt(q, 1)).toBe('1');
     expect(levelAt(q, 2)).toBe('0');

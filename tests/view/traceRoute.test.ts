@@ -32,15 +32,15 @@ describe('trace route', () => {
       base.parts.flatMap((p) => pinPositions(p).map((q) => [`${p.id}.${q.pin}`, { x: q.x, y: q.y }])),
     );
     const wire = (id: string, ...points: { x: number; y: number }[]) => ({ id, points });
-    const yJoin = { x: pins['p3.drain'].x, y: 3 };
+    const yJoin = { x: pins['p3.drain']!.x, y: 3 };
     const sheet: Sheet = {
       parts: base.parts,
       wires: [
-        wire('w1', pins['p1.net'], pins['p2.a']),
-        wire('w2', pins['p2.b'], yJoin, pins['p3.drain']),
-        wire('w3', yJoin, pins['p6.net']),
-        wire('w4', pins['p3.source'], pins['p4.net']),
-        wire('w5', pins['p5.net'], pins['p3.gate']),
+        wire('w1', pins['p1.net']!, pins['p2.a']!),
+        wire('w2', pins['p2.b']!, yJoin, pins['p3.drain']!),
+        wire('w3', yJoin, pins['p6.net']!),
+        wire('w4', pins['p3.source']!, pins['p4.net']!),
+        wire('w5', pins['p5.net']!, pins['p3.gate']!),
       ],
     };
     const derived = sheetToNetlist(sheet, 'rload');
@@ -58,7 +58,7 @@ describe('trace route', () => {
     // Every leg is orthogonal: the trace runs on drawn copper, never diagonally.
     for (const line of route ?? [])
       for (let i = 0; i + 1 < line.length; i++)
-        expect(line[i].x === line[i + 1].x || line[i].y === line[i + 1].y).toBe(true);
+        expect(line[i]!.x === line[i + 1]!.x || line[i]!.y === line[i + 1]!.y).toBe(true);
   });
 
   it('gives null when a device of the chain is not drawn', () => {

@@ -18,7 +18,7 @@ describe('undecided outputs in the panel', () => {
   it('the table row of the holding vector lists unknown, after mismatch and before floating', () => {
     const rows = vectorRows(checkSweep(latch));
     expect(rows.map((r) => r.kinds.join())).toEqual(['', '', '', 'unknown']);
-    expect(rows[3].errors).toBe(2);
+    expect(rows[3]!.errors).toBe(2);
   });
 
   it('a net with several steady states reads X with the stored-state mark', () => {

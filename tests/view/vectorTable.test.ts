@@ -2,12 +2,13 @@ import { describe, expect, it } from 'vitest';
 import { arrangeRows, kindCounts, vectorRows } from '../../src/core/view/vectorTable.ts';
 import { formatCurrent, formatPower } from '../../src/core/view/format.ts';
 import { nandMissingPullUp, pseudoNmosInverter } from './fixtures.ts';
+import { leading } from '../helpers.ts';
 
 describe('vector table rows', () => {
   it('carries the current and power of the vector that draws current', () => {
     const rows = vectorRows(pseudoNmosInverter);
     expect(rows).toHaveLength(2);
-    const [high, low] = rows;
+    const [high, low] = leading(rows, 2);
     expect(high.kinds).toEqual([]);
     expect(low.kinds).toEqual(['static-current']);
     // 42.3 µA and 106 µW: square-law pseudo-NMOS load, derived in fixtures.ts.
@@ -18,7 +19,7 @@ describe('vector table rows', () => {
   });
 
   it('lists flags most serious first and marks the mismatched output', () => {
-    const row = vectorRows(nandMissingPullUp)[2];
+    const row = vectorRows(nandMissingPullUp)[2]!;
     expect(row.kinds).toEqual(['mismatch', 'floating']);
     expect(row.mismatched).toEqual(['Y']);
     expect(row.errors).toBe(2);
@@ -26,7 +27,7 @@ describe('vector table rows', () => {
 
   it('reads sequence steps when there are no sweep vectors', () => {
     const { vectors, ...rest } = nandMissingPullUp;
-    expect(vectorRows({ ...rest, steps: vectors })).toHaveLength(4);
+    expect(vectorRows({ ...rest, steps: vectors ?? [] })).toHaveLength(4);
   });
 });
 
@@ -56,7 +57,7 @@ describe('arranging rows', () => {
 
   it('sorts by severity and leaves its input untouched', () => {
     const before = rows.map((r) => r.index);
-    expect(arrangeRows(rows, { sort: 'severity', direction: 'descending' })[0].index).toBe(2);
+    expect(arrangeRows(rows, { sort: 'severity', direction: 'descending' })[0]!.index).toBe(2);
     expect(rows.map((r) => r.index)).toEqual(before);
   });
 

@@ -1,3 +1,4 @@
+// Indexes read here are in range by construction, so `!` marks them (no run-time cost).
 import { compile, type CompiledNetlist } from '../compile/compile.ts';
 import { evaluateExpression, type ExpectedValue } from '../expect/evaluate.ts';
 import { expressionNames } from '../expect/names.ts';
@@ -122,13 +123,13 @@ class Checker implements SolveObserver {
     );
     const voltageNets = this.options.allNets ? c.netNames : netlist.outputs;
     const volts = (name: string): number | null => {
-      const v = r.volts[c.netIndex.get(name) as number];
+      const v = r.volts[c.netIndex.get(name) as number]!;
       return Number.isNaN(v) ? null : v;
     };
     return {
       inputs: this.allInputs(r.inputs),
       outputs: Object.fromEntries(
-        netlist.outputs.map((n) => [n, levelName(r.levels[c.netIndex.get(n) as number])]),
+        netlist.outputs.map((n) => [n, levelName(r.levels[c.netIndex.get(n) as number]!)]),
       ),
       voltages: Object.fromEntries(voltageNets.map((n) => [n, volts(n)])),
       supplyCurrent: r.supplyCurrent,
@@ -136,8 +137,8 @@ class Checker implements SolveObserver {
       currentPaths: r.paths.map((p) => ({
         chain: p.nets.flatMap((n, i) =>
           i < p.elements.length
-            ? [c.netNames[n], netlist.devices[c.chDevice[p.elements[i]]].name]
-            : [c.netNames[n]],
+            ? [c.netNames[n]!, netlist.devices[c.chDevice[p.elements[i]!]!]!.name]
+            : [c.netNames[n]!],
         ),
         current: p.current,
       })),
@@ -196,7 +197,7 @@ function namesIn(root: Expr): string[] {
  * naming the output for one that is not an output or does not parse. A check refuses these before
  * it solves anything (`refusalBeforeCheck`).
  */
-function parsedExpectations(
+export function parsedExpectations(
   netlist: Netlist,
   expectations: Readonly<Record<string, string>> = {},
 ): [string, Expr][] {
@@ -224,10 +225,36 @@ export function summarize(vectors: number, findings: readonly Finding[]): Summar
 
 function countFindings(counts: Record<string, number>, findings: readonly Finding[]): Summary {
   for (const f of findings) {
-    counts[f.severity === 'error' ? 'errors' : 'warnings']++;
+    const severity = f.severity === 'error' ? 'errors' : 'warnings';
+    counts[severity] = (counts[severity] ?? 0) + 1;
     counts[f.kind] = (counts[f.kind] ?? 0) + 1;
   }
   return counts as Summary;
+}
+
+/**
+ * A check that solves no vector: the structural findings and a note, for a cell whose sweep is
+ * skipped (too many inputs) while a proof covers its vectors.
+ */
+export function checkStructure(netlist: Netlist, options: CheckOptions, note: string): CheckReport {
+  return new Checker(netlist, options, 'vectors').report('vectors', [], [note]);
+}
+
+/**
+ * Checks single vectors, each from an unknown state exactly as `checkSweep` checks each of its
+ * vectors: the replay of a proof's counterexamples (docs/semantics.md §10).
+ */
+export class VectorChecker {
+  private readonly checker: Checker;
+
+  constructor(netlist: Netlist, options: CheckOptions = {}) {
+    this.checker = new Checker(netlist, options, 'vectors');
+  }
+
+  /** The vector's report; `index` is the vector's place in the sweep's order, named by its findings. */
+  check(vector: InputVector, index: number): VectorReport {
+    return this.checker.vectorReport(this.checker.simulator.solveFresh(vector), index);
+  }
 }
 
 /** Checks every input combination, each solved from an unknown state (docs/semantics.md §2.9, sweep mode). */

@@ -1,3 +1,4 @@
+// Indexes read here are in range by construction, so `!` marks them (no run-time cost).
 /** Pieces every kind of finding is built from: names for messages, the record, devices on nets. */
 import type { PathIndices } from '../solver/currentPaths.ts';
 import type { SolveResult } from '../solver/simulator.ts';
@@ -7,15 +8,15 @@ import type { Finding, FindingKind, Severity } from './report.ts';
 export class Namer {
   constructor(private readonly r: SolveResult) {}
   net(n: number): string {
-    return this.r.compiled.netNames[n];
+    return this.r.compiled.netNames[n]!;
   }
   element(e: number): string {
     const c = this.r.compiled;
-    return c.netlist.devices[c.chDevice[e]].name;
+    return c.netlist.devices[c.chDevice[e]!]!.name;
   }
   chain(p: PathIndices): string[] {
     return p.nets.flatMap((n, i) =>
-      i < p.elements.length ? [this.net(n), this.element(p.elements[i])] : [this.net(n)],
+      i < p.elements.length ? [this.net(n), this.element(p.elements[i]!)] : [this.net(n)],
     );
   }
 }
@@ -37,8 +38,8 @@ export function channelDevices(r: SolveResult, nets: readonly number[], conducti
   const name = new Namer(r);
   const devices = new Set<string>();
   for (const n of nets) {
-    for (let p = c.netChannels.start[n]; p < c.netChannels.start[n + 1]; p++) {
-      const e = c.netChannels.items[p];
+    for (let p = c.netChannels.start[n]!; p < c.netChannels.start[n + 1]!; p++) {
+      const e = c.netChannels.items[p]!;
       if (!conductingOnly || r.conduction[e] !== 0) devices.add(name.element(e));
     }
   }

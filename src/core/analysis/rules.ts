@@ -1,3 +1,4 @@
+// Indexes read here are in range by construction, so `!` marks them (no run-time cost).
 import type { CompiledNetlist } from '../compile/compile.ts';
 import { deviceTerminals, type Device } from '../model/netlist.ts';
 import type { Finding, Severity } from './report.ts';
@@ -93,8 +94,8 @@ export function structuralFindings(c: CompiledNetlist): Finding[] {
           'dangling-net',
           'warning',
           [net],
-          [list[0].device],
-          `net ${net} reaches only ${list[0].device} (${list[0].terminal})`,
+          [list[0]!.device],
+          `net ${net} reaches only ${list[0]!.device} (${list[0]!.terminal})`,
         ),
       );
     }

@@ -1,3 +1,4 @@
+// Indexes read here are in range by construction, so `!` marks them (no run-time cost).
 import type { ExpectedValue } from '../expect/evaluate.ts';
 import {
   FLAG_BOUND,
@@ -35,7 +36,7 @@ export function unknownFindings(
   const out: Finding[] = [];
   for (const n of c.outputNets) {
     if (r.levels[n] !== LEVEL_X) continue;
-    const name = c.netNames[n];
+    const name = c.netNames[n]!;
     if (found.some((f) => f.severity === 'error' && f.nets.includes(name))) continue;
     const allowed = expected.get(n) === 'X';
     const definite = Object.values(r.inputs).every((v) => v === '0' || v === '1');
@@ -105,7 +106,7 @@ function traceCauses(
       const cause = causeOf(r, n);
       if (cause !== null) {
         const set = causes.get(cause) ?? new Set<number>();
-        for (const m of (r.flags[n] & FLAG_STATES) !== 0 ? statesPartners(r, n) : [n]) set.add(m);
+        for (const m of (r.flags[n]! & FLAG_STATES) !== 0 ? statesPartners(r, n) : [n]) set.add(m);
         causes.set(cause, set);
         continue;
       }
@@ -128,25 +129,25 @@ const STORED_STATE = 'several steady states on % (stored state: a latch or memor
  */
 function statesPartners(r: SolveResult, n: number): number[] {
   const { sccOrder, cccOfNet, cccNets } = r.topology;
-  const k = cccOfNet[n];
+  const k = cccOfNet[n]!;
   const s = sccOrder.items.indexOf(k);
   let row = 0;
-  while (sccOrder.start[row + 1] <= s) row++;
+  while (sccOrder.start[row + 1]! <= s) row++;
   const nets: number[] = [];
-  for (let i = sccOrder.start[row]; i < sccOrder.start[row + 1]; i++) {
-    const member = sccOrder.items[i];
-    for (let q = cccNets.start[member]; q < cccNets.start[member + 1]; q++) {
-      const m = cccNets.items[q];
-      const observed = r.compiled.netGates.start[m + 1] > r.compiled.netGates.start[m] || m === n;
-      if (r.flags[m] & FLAG_STATES && (observed || r.compiled.outputNets.includes(m))) nets.push(m);
+  for (let i = sccOrder.start[row]!; i < sccOrder.start[row + 1]!; i++) {
+    const member = sccOrder.items[i]!;
+    for (let q = cccNets.start[member]!; q < cccNets.start[member + 1]!; q++) {
+      const m = cccNets.items[q]!;
+      const observed = r.compiled.netGates.start[m + 1]! > r.compiled.netGates.start[m]! || m === n;
+      if (r.flags[m]! & FLAG_STATES && (observed || r.compiled.outputNets.includes(m))) nets.push(m);
     }
   }
-  return nets.sort((a, b) => (r.compiled.netNames[a] < r.compiled.netNames[b] ? -1 : 1));
+  return nets.sort((a, b) => (r.compiled.netNames[a]! < r.compiled.netNames[b]! ? -1 : 1));
 }
 
 /** What a net's own flags and level say about its X, or null when it is only X through maybe devices. */
 function causeOf(r: SolveResult, n: number): string | null {
-  const f = r.flags[n];
+  const f = r.flags[n]!;
   if (r.topology.isSource[n]) return Number.isNaN(r.volts[n]) ? 'input % at X' : null;
   if (f & FLAG_STATES) return f & FLAG_OSCILLATING ? 'a race between steady states on %' : STORED_STATE;
   if (f & FLAG_OSCILLATING) return 'no steady state on %';
@@ -162,14 +163,14 @@ function causeOf(r: SolveResult, n: number): string | null {
 /** Maybe-conducting elements of net n's channel-connected component, with their gate nets. */
 function maybeDevices(r: SolveResult, n: number): [number, number][] {
   const { cccOfNet, cccElements } = r.topology;
-  const k = cccOfNet[n];
+  const k = cccOfNet[n]!;
   if (k < 0) return [];
   const out: [number, number][] = [];
-  for (let i = cccElements.start[k]; i < cccElements.start[k + 1]; i++) {
-    const e = cccElements.items[i];
-    if (r.conduction[e] === MAYBE) out.push([e, r.compiled.chGate[e]]);
+  for (let i = cccElements.start[k]!; i < cccElements.start[k + 1]!; i++) {
+    const e = cccElements.items[i]!;
+    if (r.conduction[e] === MAYBE) out.push([e, r.compiled.chGate[e]!]);
     const c = r.compiled;
-    for (const end of [c.chA[e], c.chB[e]]) {
+    for (const end of [c.chA[e]!, c.chB[e]!]) {
       if (r.topology.isSource[end] && Number.isNaN(r.volts[end])) out.push([e, end]);
     }
   }

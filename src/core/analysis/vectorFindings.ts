@@ -1,3 +1,4 @@
+// Indexes read here are in range by construction, so `!` marks them (no run-time cost).
 import { RESISTOR } from '../compile/compile.ts';
 import type { ExpectedValue } from '../expect/evaluate.ts';
 import {
@@ -50,7 +51,7 @@ function currentFindings(r: SolveResult, vector: number, label: () => string): F
   const c = r.compiled;
   return r.paths.map((p) => {
     const chain = name.chain(p);
-    const watts = r.volts[p.nets[0]] * p.current - r.volts[p.nets[p.nets.length - 1]] * p.current;
+    const watts = r.volts[p.nets[0]!]! * p.current - r.volts[p.nets[p.nets.length - 1]!]! * p.current;
     const transistorsOnly = p.elements.every((e) => c.chKind[e] !== RESISTOR);
     const crossesX = p.nets.some((n) => r.levels[n] === LEVEL_X && !r.topology.isSource[n]);
     const short = transistorsOnly && crossesX;
@@ -72,7 +73,7 @@ function currentFindings(r: SolveResult, vector: number, label: () => string): F
 /** Nets that feed a gate or are outputs: the ones whose level matters to the cell. */
 function observed(r: SolveResult, n: number): boolean {
   const c = r.compiled;
-  return c.netGates.start[n + 1] > c.netGates.start[n] || c.outputNets.includes(n);
+  return c.netGates.start[n + 1]! > c.netGates.start[n]! || c.outputNets.includes(n);
 }
 
 /** Nets flagged in one result, and the finding helpers that read them. */
@@ -93,7 +94,7 @@ class Flagged {
 
   nets(flag: number, onlyObserved = false): number[] {
     return this.flagged.filter(
-      (n) => (this.r.flags[n] & flag) !== 0 && (!onlyObserved || observed(this.r, n)),
+      (n) => (this.r.flags[n]! & flag) !== 0 && (!onlyObserved || observed(this.r, n)),
     );
   }
 
@@ -110,13 +111,13 @@ function flaggedFindings(r: SolveResult, vector: number, label: () => string): F
   const f = new Flagged(r, vector, label);
   const at = label;
   const racing = f.nets(FLAG_OSCILLATING);
-  const race = racing.length > 0 && racing.every((n) => (r.flags[n] & FLAG_STATES) !== 0);
+  const race = racing.length > 0 && racing.every((n) => (r.flags[n]! & FLAG_STATES) !== 0);
   return [
     ...contentionFindings(f),
     ...degradedFindings(f),
     ...f.group('charge-sharing', 'warning', f.nets(FLAG_CHARGE_SHARED), () => {
       const list = f.nets(FLAG_CHARGE_SHARED).map((n) => {
-        const v = r.volts[n];
+        const v = r.volts[n]!;
         return `${f.name.net(n)} ${Number.isNaN(v) ? 'unknown' : `${v.toFixed(2)} V`}`;
       });
       return `charge sharing at ${at()}: ${list.join(', ')}`;
@@ -153,7 +154,7 @@ function contentionFindings(f: Flagged): Finding[] {
         f.vector,
         [f.name.net(n)],
         channelDevices(f.r, [n], true),
-        `contention at ${f.label()}: ${f.name.net(n)} sits at ${f.r.volts[n].toFixed(2)} V, between the input thresholds, fought over by drivers of both levels`,
+        `contention at ${f.label()}: ${f.name.net(n)} sits at ${f.r.volts[n]!.toFixed(2)} V, between the input thresholds, fought over by drivers of both levels`,
       ),
     );
 }
@@ -161,7 +162,7 @@ function contentionFindings(f: Flagged): Finding[] {
 function degradedFindings(f: Flagged): Finding[] {
   const { r, name } = f;
   return f.nets(FLAG_DEGRADED, true).map((n) => {
-    const by = r.limiter[n] >= 0 ? [name.element(r.limiter[n])] : [];
+    const by = r.limiter[n]! >= 0 ? [name.element(r.limiter[n]!)] : [];
     const verb = r.levels[n] === LEVEL_0 ? 'falls only to' : 'reaches only';
     const through = by.length ? ` through ${by[0]}` : '';
     return finding(
@@ -170,7 +171,7 @@ function degradedFindings(f: Flagged): Finding[] {
       f.vector,
       [name.net(n)],
       by,
-      `degraded level at ${f.label()}: ${name.net(n)} ${verb} ${r.volts[n].toFixed(2)} V (a threshold drop${through})`,
+      `degraded level at ${f.label()}: ${name.net(n)} ${verb} ${r.volts[n]!.toFixed(2)} V (a threshold drop${through})`,
     );
   });
 }
@@ -197,7 +198,7 @@ function floatingFindings(
     if (isOutput && expected.get(n) === 'Z') continue;
     const known = !Number.isNaN(r.volts[n]);
     const severity: Severity = isOutput || !known ? 'error' : 'warning';
-    const charge = known ? `holding ${r.volts[n].toFixed(2)} V of stored charge` : 'with no known charge';
+    const charge = known ? `holding ${r.volts[n]!.toFixed(2)} V of stored charge` : 'with no known charge';
     out.push(
       finding(
         'floating',
@@ -222,7 +223,7 @@ function mismatchFindings(
   const out: Finding[] = [];
   for (const [n, want] of expected) {
     if (want === 'X') continue;
-    const got = levelName(r.levels[n]);
+    const got = levelName(r.levels[n]!);
     if (got !== want) {
       out.push(
         finding(

@@ -1,3 +1,4 @@
+// Indexes read here are in range by construction, so `!` marks them (no run-time cost).
 import type { InputValue, InputVector } from '../model/design.ts';
 import { nameRecord } from '../model/records.ts';
 
@@ -34,7 +35,7 @@ export function* sweepVectors(inputs: readonly string[], undriven = false): Gene
     const vector = nameRecord<InputValue>(); // an input may be called __proto__
     let rest = k;
     for (let i = inputs.length - 1; i >= 0; i--) {
-      vector[inputs[i]] = values[rest % base];
+      vector[inputs[i]!] = values[rest % base]!;
       rest = Math.floor(rest / base);
     }
     yield vector;

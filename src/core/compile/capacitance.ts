@@ -1,3 +1,4 @@
+// Indexes here are in range by construction (compiled-netlist and per-net arrays), so `!` marks them (no run-time cost).
 import type { Netlist } from '../model/netlist.ts';
 import type { Technology } from '../model/technology.ts';
 
@@ -19,7 +20,7 @@ export function capacitanceBreakdown(
   netIndex: ReadonlyMap<string, number>,
 ): CapacitanceBreakdown[] {
   const { gate, diffusion, explicit } = capacitanceParts(netlist, tech, netIndex);
-  return Array.from(gate, (g, i) => ({ gate: g, diffusion: diffusion[i], explicit: explicit[i] }));
+  return Array.from(gate, (g, i) => ({ gate: g, diffusion: diffusion[i]!, explicit: explicit[i]! }));
 }
 
 /** Each net's total capacitance to ground, farads. */
@@ -29,7 +30,7 @@ export function netCapacitances(
   netIndex: ReadonlyMap<string, number>,
 ): Float64Array {
   const { gate, diffusion, explicit } = capacitanceParts(netlist, tech, netIndex);
-  for (let i = 0; i < gate.length; i++) gate[i] += diffusion[i] + explicit[i];
+  for (let i = 0; i < gate.length; i++) gate[i]! += diffusion[i]! + explicit[i]!;
   return gate;
 }
 
@@ -42,13 +43,13 @@ function capacitanceParts(netlist: Netlist, tech: Technology, netIndex: Readonly
     switch (d.kind) {
       case 'nmos':
       case 'pmos':
-        gate[at(d.gate)] += tech.cgPerArea * d.w * d.l;
-        diffusion[at(d.drain)] += tech.cdPerWidth * d.w;
-        diffusion[at(d.source)] += tech.cdPerWidth * d.w;
+        gate[at(d.gate)]! += tech.cgPerArea * d.w * d.l;
+        diffusion[at(d.drain)]! += tech.cdPerWidth * d.w;
+        diffusion[at(d.source)]! += tech.cdPerWidth * d.w;
         break;
       case 'capacitor':
-        explicit[at(d.a)] += d.farads;
-        if (d.b !== d.a) explicit[at(d.b)] += d.farads;
+        explicit[at(d.a)]! += d.farads;
+        if (d.b !== d.a) explicit[at(d.b)]! += d.farads;
         break;
       case 'resistor':
       case 'diode':

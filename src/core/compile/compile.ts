@@ -1,3 +1,4 @@
+// Indexes here are in range by construction (compiled-netlist and per-net arrays), so `!` marks them (no run-time cost).
 import type { Netlist } from '../model/netlist.ts';
 import { netNames } from '../model/netlist.ts';
 import type { Technology } from '../model/technology.ts';
@@ -76,7 +77,7 @@ export function compile(netlist: Netlist, tech: Technology): CompiledNetlist {
   const chOhms = new Float64Array(chCount);
   const chDevice = Int32Array.from(channelDevices);
   channelDevices.forEach((di, c) => {
-    const d = netlist.devices[di];
+    const d = netlist.devices[di]!;
     if (d.kind === 'resistor') {
       chKind[c] = RESISTOR;
       chA[c] = idx(d.a);
@@ -98,14 +99,14 @@ export function compile(netlist: Netlist, tech: Technology): CompiledNetlist {
   const gateRows: number[] = [];
   const gateItems: number[] = [];
   for (let c = 0; c < chCount; c++) {
-    channelRows.push(chA[c]);
+    channelRows.push(chA[c]!);
     channelItems.push(c);
     if (chB[c] !== chA[c]) {
-      channelRows.push(chB[c]);
+      channelRows.push(chB[c]!);
       channelItems.push(c);
     }
-    if (chGate[c] >= 0) {
-      gateRows.push(chGate[c]);
+    if (chGate[c]! >= 0) {
+      gateRows.push(chGate[c]!);
       gateItems.push(c);
     }
   }

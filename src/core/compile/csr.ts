@@ -1,3 +1,4 @@
+// Indexes here are in range by construction (compiled-netlist and per-net arrays), so `!` marks them (no run-time cost).
 /** Compressed sparse rows: the items of row r are items[start[r] .. start[r+1]). */
 export interface Csr {
   readonly start: Int32Array;
@@ -10,11 +11,11 @@ export interface Csr {
  */
 export function csrFrom(rowCount: number, rows: ArrayLike<number>, items: ArrayLike<number>): Csr {
   const start = new Int32Array(rowCount + 1);
-  for (let i = 0; i < rows.length; i++) start[rows[i] + 1]++;
-  for (let r = 0; r < rowCount; r++) start[r + 1] += start[r];
+  for (let i = 0; i < rows.length; i++) start[rows[i]! + 1]!++;
+  for (let r = 0; r < rowCount; r++) start[r + 1]! += start[r]!;
   const fill = start.slice(0, rowCount);
   const out = new Int32Array(rows.length);
-  for (let i = 0; i < rows.length; i++) out[fill[rows[i]]++] = items[i];
+  for (let i = 0; i < rows.length; i++) out[fill[rows[i]!]!++] = items[i]!;
   return { start, items: out };
 }
 

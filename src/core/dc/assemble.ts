@@ -1,3 +1,4 @@
+// Indexes here are in range by construction (compiled-netlist and per-net arrays), so `!` marks them (no run-time cost).
 import { LuDecomposition, Matrix } from 'ml-matrix';
 import { evaluateMos, G_BULK, G_DRAIN, G_GATE, G_SOURCE, ID, mosOutput } from './level1.ts';
 import type { DcNetwork } from './network.ts';
@@ -78,7 +79,7 @@ export class NodalSystem {
    */
   solveLinear(rhs: Float64Array, out: Float64Array): boolean {
     if (this.n === 1) {
-      out[0] = rhs[0] / this.jacobian.get(0, 0);
+      out[0] = rhs[0]! / this.jacobian.get(0, 0);
       return Number.isFinite(out[0]);
     }
     const lu = new LuDecomposition(this.jacobian);
@@ -89,8 +90,8 @@ export class NodalSystem {
   }
 
   private read(net: number, x: Float64Array, scale: number): number {
-    const p = this.pos[net];
-    return p >= 0 ? x[p] : scale * this.volts[net];
+    const p = this.pos[net]!;
+    return p >= 0 ? x[p]! : scale * this.volts[net]!;
   }
 
   /** Fills the Jacobian and the residual at `x` (and the slope's right-hand side when asked). */
@@ -104,36 +105,36 @@ export class NodalSystem {
     this.slopeBoundary = slope?.boundary ?? null;
     this.slopeRhs = slope?.rhs ?? null;
     for (const e of this.elements) {
-      const a = c.chA[e];
-      const b = c.chB[e];
+      const a = c.chA[e]!;
+      const b = c.chB[e]!;
       const va = this.read(a, x, scale);
       const vb = this.read(b, x, scale);
-      const device = net.devices[e];
+      const device = net.devices[e]!;
       if (device === null) {
-        const g = net.conductance[e];
+        const g = net.conductance[e]!;
         this.current[e] = g * (va - vb);
         this.conducting[e] = 1;
         this.stampBoth(a, b, this.current[e], a, g);
         this.stampBoth(a, b, 0, b, -g);
         continue;
       }
-      const gate = c.chGate[e];
-      const bulkNet = net.bulk[e];
-      const vbulk = bulkNet >= 0 ? this.read(bulkNet, x, scale) : scale * net.bulkDefault[e];
+      const gate = c.chGate[e]!;
+      const bulkNet = net.bulk[e]!;
+      const vbulk = bulkNet >= 0 ? this.read(bulkNet, x, scale) : scale * net.bulkDefault[e]!;
       evaluateMos(device, va, this.read(gate, x, scale), vb, vbulk, m);
-      this.current[e] = m[ID];
+      this.current[e] = m[ID]!;
       this.conducting[e] = m[G_DRAIN] !== 0 || m[G_GATE] !== 0 ? 1 : 0;
-      this.stampBoth(a, b, m[ID], a, m[G_DRAIN]);
-      this.stampBoth(a, b, 0, gate, m[G_GATE]);
-      this.stampBoth(a, b, 0, b, m[G_SOURCE]);
-      if (bulkNet >= 0) this.stampBoth(a, b, 0, bulkNet, m[G_BULK]);
+      this.stampBoth(a, b, m[ID]!, a, m[G_DRAIN]!);
+      this.stampBoth(a, b, 0, gate, m[G_GATE]!);
+      this.stampBoth(a, b, 0, b, m[G_SOURCE]!);
+      if (bulkNet >= 0) this.stampBoth(a, b, 0, bulkNet, m[G_BULK]!);
     }
     const g0 = GMIN + loading.shunt;
     const jac = this.jacobian;
     const tie = loading.tie;
     for (let i = 0; i < this.n; i++) {
-      const g = g0 + (tie === undefined ? 0 : tie.g[i]);
-      res[i] += g0 * x[i] + (tie === undefined ? 0 : tie.g[i] * (x[i] - tie.toward[i]));
+      const g = g0 + (tie === undefined ? 0 : tie.g[i]!);
+      res[i]! += g0 * x[i]! + (tie === undefined ? 0 : tie.g[i]! * (x[i]! - tie.toward[i]!));
       jac.set(i, i, jac.get(i, i) + g);
     }
   }
@@ -146,20 +147,20 @@ export class NodalSystem {
    * +g in a's row, −g in b's row (for unknown rows); a fixed `col` goes to the slope's right-hand side.
    */
   private stampBoth(a: number, b: number, i: number, col: number, g: number): void {
-    const ra = this.pos[a];
-    const rb = this.pos[b];
-    if (ra >= 0) this.residual[ra] += i;
-    if (rb >= 0) this.residual[rb] -= i;
+    const ra = this.pos[a]!;
+    const rb = this.pos[b]!;
+    if (ra >= 0) this.residual[ra]! += i;
+    if (rb >= 0) this.residual[rb]! -= i;
     if (g === 0) return;
-    const p = this.pos[col];
+    const p = this.pos[col]!;
     const jac = this.jacobian;
     if (p >= 0) {
       if (ra >= 0) jac.set(ra, p, jac.get(ra, p) + g);
       if (rb >= 0) jac.set(rb, p, jac.get(rb, p) - g);
     } else if (this.slopeRhs !== null && this.slopeBoundary !== null) {
-      const d = g * this.slopeBoundary[col];
-      if (ra >= 0) this.slopeRhs[ra] -= d;
-      if (rb >= 0) this.slopeRhs[rb] += d;
+      const d = g * this.slopeBoundary[col]!;
+      if (ra >= 0) this.slopeRhs[ra]! -= d;
+      if (rb >= 0) this.slopeRhs[rb]! += d;
     }
   }
 }

@@ -1,3 +1,4 @@
+// Indexes here are in range by construction (compiled-netlist and per-net arrays), so `!` marks them (no run-time cost).
 /**
  * Figures of one transfer curve Vout(Vin) (docs/semantics.md §2, DC levels): the switching threshold
  * VM where Vout = Vin, the unity-gain points VIL and VIH where |dVout/dVin| = 1, the output levels
@@ -91,9 +92,9 @@ export function curveFigures(
   const { vin, vout, slope } = curve;
   const last = vin.length - 1;
   if (last < 1) return NO_FIGURES;
-  const inverting = vout[0] > vout[last];
-  const swing = Math.abs(vout[0] - vout[last]);
-  if (swing < MIN_SWING * (vin[last] - vin[0])) {
+  const inverting = vout[0]! > vout[last]!;
+  const swing = Math.abs(vout[0]! - vout[last]!);
+  if (swing < MIN_SWING * (vin[last]! - vin[0]!)) {
     notes.push(
       `the output moves only ${swing.toFixed(3)} V over the sweep: it does not switch with this hold`,
     );
@@ -101,16 +102,16 @@ export function curveFigures(
   }
   const vm = refine(
     curve,
-    (k) => vout[k] - vin[k],
+    (k) => vout[k]! - vin[k]!,
     (p, v) => p.vout - v,
   );
   if (vm === null) notes.push('the curve never crosses Vout = Vin: no switching threshold');
-  const gain = (k: number): number => Math.abs(slope[k]) - 1;
+  const gain = (k: number): number => Math.abs(slope[k]!) - 1;
   const gainAt = (p: CurvePoint): number => Math.abs(p.slope) - 1;
   const rising = crossings(vin.length, gain).filter((k) => gain(k) < 0);
   const falling = crossings(vin.length, gain).filter((k) => gain(k) >= 0);
-  const vil = rising.length > 0 ? refineAt(curve, rising[0], gain, gainAt) : null;
-  const vih = falling.length > 0 ? refineAt(curve, falling[falling.length - 1], gain, gainAt) : null;
+  const vil = rising.length > 0 ? refineAt(curve, rising[0]!, gain, gainAt) : null;
+  const vih = falling.length > 0 ? refineAt(curve, falling[falling.length - 1]!, gain, gainAt) : null;
   if (vil === null || vih === null)
     notes.push('the gain never rises through 1 and back: no unity-gain points');
   const outAt = (v: number | null): number | null =>
@@ -142,7 +143,7 @@ function refine(
     const a = f(k);
     const b = f(k + 1);
     if ((a < 0 && b > 0) || (a > 0 && b < 0)) return refineAt(curve, k, f, fAt);
-    if (a !== 0 && b === 0 && k + 2 < curve.vin.length && a * f(k + 2) < 0) return curve.vin[k + 1];
+    if (a !== 0 && b === 0 && k + 2 < curve.vin.length && a * f(k + 2) < 0) return curve.vin[k + 1]!;
   }
   return null;
 }
@@ -154,9 +155,9 @@ function refineAt(
   f: (k: number) => number,
   fAt: (p: CurvePoint, vin: number) => number,
 ): number | null {
-  const mid = (curve.vin[k] + curve.vin[k + 1]) / 2;
-  let a = curve.vin[k];
-  let b = curve.vin[k + 1];
+  const mid = (curve.vin[k]! + curve.vin[k + 1]!) / 2;
+  let a = curve.vin[k]!;
+  let b = curve.vin[k + 1]!;
   let fa = f(k);
   let fb = f(k + 1);
   let side = 0;
@@ -183,6 +184,6 @@ function refineAt(
 
 function nearest(vin: readonly number[], v: number): number {
   let best = 0;
-  for (let k = 1; k < vin.length; k++) if (Math.abs(vin[k] - v) < Math.abs(vin[best] - v)) best = k;
+  for (let k = 1; k < vin.length; k++) if (Math.abs(vin[k]! - v) < Math.abs(vin[best]! - v)) best = k;
   return best;
 }

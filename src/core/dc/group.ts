@@ -1,3 +1,4 @@
+// Indexes here are in range by construction (compiled-netlist and per-net arrays), so `!` marks them (no run-time cost).
 import type { NodalSystem } from './assemble.ts';
 import type { DcGroup, DcNetwork } from './network.ts';
 import { isUnstable } from './stability.ts';
@@ -57,11 +58,11 @@ export function solveGroup(network: DcNetwork, k: number, state: SolveState): Gr
     iterations += pass.iterations;
   }
   if (!pass.converged) return fail(group, state, 'not-converged', pass.tried, iterations, pass.moving);
-  for (const n of pass.floating) state.volts[n] = storedAt(state, n) ? state.stored[n] : NaN;
+  for (const n of pass.floating) state.volts[n] = storedAt(state, n) ? state.stored[n]! : NaN;
   const unknownControl = pass.floating.filter((n) => !storedAt(state, n) && controlsGroup(network, group, n));
   if (unknownControl.length > 0) return fail(group, state, 'blocked', pass.tried, iterations, unknownControl);
   if (pass.unstable) return fail(group, state, 'unstable', pass.tried, iterations, []);
-  for (const e of group.elements) state.current[e] = pass.current[e];
+  for (const e of group.elements) state.current[e] = pass.current[e]!;
   const floating = [...held, ...pass.floating];
   return {
     status: 'solved',
@@ -89,18 +90,18 @@ interface Pass {
 function solveOnce(network: DcNetwork, k: number, state: SolveState, held: ReadonlySet<number>): Pass {
   const group = network.groups[k] as DcGroup;
   const unknowns = Array.from(group.nets).filter((n) => !held.has(n));
-  for (const n of held) state.volts[n] = state.raw[n] = state.stored[n];
+  for (const n of held) state.volts[n] = state.raw[n] = state.stored[n]!;
   const sys = network.system(k, unknowns.length, state.volts);
   unknowns.forEach((n, i) => (network.pos[n] = i));
   const [lo, hi] = range(network, group, state, held);
   const x = Float64Array.from(unknowns, (n) => {
-    const v = state.start[n];
+    const v = state.start[n]!;
     return Number.isFinite(v) ? Math.min(hi, Math.max(lo, v)) : (lo + hi) / 2;
   });
   const bounds = {
     lo,
     hi,
-    caps: Float64Array.from(unknowns, (n) => network.compiled.netCap[n]),
+    caps: Float64Array.from(unknowns, (n) => network.compiled.netCap[n]!),
     ...(state.maxIterations === undefined ? {} : { maxIterations: state.maxIterations }),
   };
   const result = converge(sys, x, bounds);
@@ -110,11 +111,11 @@ function solveOnce(network: DcNetwork, k: number, state: SolveState, held: Reado
     group.feedback &&
     isUnstable(
       sys.jacobian,
-      unknowns.map((n) => network.compiled.netCap[n]),
+      unknowns.map((n) => network.compiled.netCap[n]!),
     );
   unknowns.forEach((n, i) => {
     network.pos[n] = -1;
-    state.volts[n] = state.raw[n] = x[i];
+    state.volts[n] = state.raw[n] = x[i]!;
   });
   return {
     converged: result.converged,
@@ -149,14 +150,14 @@ function missingInputs(network: DcNetwork, group: DcGroup, volts: Float64Array):
   const c = network.compiled;
   const missing = new Set<number>();
   const check = (net: number): void => {
-    if (net >= 0 && network.groupOf[net] !== network.groupOf[group.nets[0]] && Number.isNaN(volts[net]))
+    if (net >= 0 && network.groupOf[net] !== network.groupOf[group.nets[0]!] && Number.isNaN(volts[net]))
       missing.add(net);
   };
   for (const e of group.elements) {
-    check(c.chA[e]);
-    check(c.chB[e]);
-    check(c.chGate[e]);
-    check(network.bulk[e]);
+    check(c.chA[e]!);
+    check(c.chB[e]!);
+    check(c.chGate[e]!);
+    check(network.bulk[e]!);
   }
   return [...missing];
 }
@@ -182,13 +183,13 @@ function range(
   let lo = 0;
   let hi = 0;
   const see = (net: number): void => {
-    if (network.groupOf[net] === network.groupOf[group.nets[0]] && !held.has(net)) return;
-    lo = Math.min(lo, state.volts[net]);
-    hi = Math.max(hi, state.volts[net]);
+    if (network.groupOf[net] === network.groupOf[group.nets[0]!] && !held.has(net)) return;
+    lo = Math.min(lo, state.volts[net]!);
+    hi = Math.max(hi, state.volts[net]!);
   };
   for (const e of group.elements) {
-    see(c.chA[e]);
-    see(c.chB[e]);
+    see(c.chA[e]!);
+    see(c.chB[e]!);
   }
   return [lo, hi];
 }
@@ -206,13 +207,13 @@ function floatingNets(
   const neighbours: number[][] = unknowns.map(() => []);
   for (const e of group.elements) {
     if (!sys.conducting[e]) continue;
-    const pa = sys.pos[c.chA[e]];
-    const pb = sys.pos[c.chB[e]];
+    const pa = sys.pos[c.chA[e]!]!;
+    const pb = sys.pos[c.chB[e]!]!;
     if (pa >= 0 && pb >= 0) {
       neighbours[pa]?.push(pb);
       neighbours[pb]?.push(pa);
-    } else if (pa >= 0 && !held.has(c.chB[e])) anchored[pa] = 1;
-    else if (pb >= 0 && !held.has(c.chA[e])) anchored[pb] = 1;
+    } else if (pa >= 0 && !held.has(c.chB[e]!)) anchored[pa] = 1;
+    else if (pb >= 0 && !held.has(c.chA[e]!)) anchored[pb] = 1;
   }
   const queue = unknowns.flatMap((_n, i) => (anchored[i] ? [i] : []));
   while (queue.length > 0) {

@@ -1,3 +1,4 @@
+// Indexes here are in range by construction (compiled-netlist and per-net arrays), so `!` marks them (no run-time cost).
 import { sweepVectors } from '../analysis/vectors.ts';
 import type { CompiledNetlist } from '../compile/compile.ts';
 import type { InputValue, InputVector } from '../model/design.ts';
@@ -76,7 +77,7 @@ export function parseHold(text: string, inputs: readonly string[]): InputVector 
   for (const item of text.split(/[\s,]+/).filter((s) => s !== '')) {
     const m = /^([^=\s]+)=([01])$/.exec(item);
     if (!m) throw new TransferError(`held '${item}' is not NAME=0 or NAME=1`);
-    const name = inputs.includes(m[1]) ? m[1] : inputs.find((n) => n.toLowerCase() === m[1].toLowerCase());
+    const name = inputs.includes(m[1]!) ? m[1] : inputs.find((n) => n.toLowerCase() === m[1]!.toLowerCase());
     if (name === undefined)
       throw new TransferError(`held '${m[1]}' is not an input (inputs: ${inputs.join(', ') || 'none'})`);
     hold[name] = m[2] as InputValue;

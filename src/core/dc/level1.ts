@@ -1,3 +1,4 @@
+// Indexes here are in range by construction (compiled-netlist and per-net arrays), so `!` marks them (no run-time cost).
 /**
  * The Shichman–Hodges (level 1) MOSFET drain current and its partial derivatives, for the Newton
  * solver of `operatingPoint.ts` (docs/semantics.md §2, DC levels).
@@ -89,7 +90,7 @@ function forwardCurrent(d: Level1Device, vgs: number, vds: number, vsb: number, 
   out[0] = core * clm;
   out[1] = gm * clm;
   out[2] = gdsCore * clm + core * lambda;
-  out[3] = -out[1] * vtSlope[0];
+  out[3] = -out[1] * vtSlope[0]!;
 }
 
 /**
@@ -113,7 +114,7 @@ export function evaluateMos(
   const hi = swapped ? ns : nd;
   const lo = swapped ? nd : ns;
   forwardCurrent(d, ng - lo, hi - lo, lo - nb, forward);
-  const [i, gGs, gDs, gSb] = forward;
+  const [i, gGs, gDs, gSb] = forward as unknown as readonly [number, number, number, number];
   // Partials in the normalised circuit for (hi, gate, lo, bulk).
   const gHi = gDs;
   const gGate = gGs;

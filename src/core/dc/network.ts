@@ -1,3 +1,4 @@
+// Indexes here are in range by construction (compiled-netlist and per-net arrays), so `!` marks them (no run-time cost).
 import { NMOS, RESISTOR, type CompiledNetlist } from '../compile/compile.ts';
 import type { MosDevice } from '../model/netlist.ts';
 import { modelCard, technologyValue, type ModelField, type Technology } from '../model/technology.ts';
@@ -54,9 +55,9 @@ export class DcNetwork {
     this.conductance = new Float64Array(c.chCount);
     const devices: (Level1Device | null)[] = [];
     for (let e = 0; e < c.chCount; e++) {
-      const d = c.netlist.devices[c.chDevice[e]];
+      const d = c.netlist.devices[c.chDevice[e]!]!;
       if (c.chKind[e] === RESISTOR || (d.kind !== 'nmos' && d.kind !== 'pmos')) {
-        this.conductance[e] = 1 / c.chOhms[e];
+        this.conductance[e] = 1 / c.chOhms[e]!;
         devices.push(null);
         continue;
       }
@@ -124,17 +125,17 @@ function orderedGroups(
   for (let s = 0; s < sccOrder.start.length - 1; s++) {
     const nets: number[] = [];
     const elements: number[] = [];
-    for (let i = sccOrder.start[s]; i < sccOrder.start[s + 1]; i++) {
-      const k = sccOrder.items[i];
-      for (let j = cccNets.start[k]; j < cccNets.start[k + 1]; j++) nets.push(cccNets.items[j]);
-      for (let j = cccElements.start[k]; j < cccElements.start[k + 1]; j++)
-        elements.push(cccElements.items[j]);
+    for (let i = sccOrder.start[s]!; i < sccOrder.start[s + 1]!; i++) {
+      const k = sccOrder.items[i]!;
+      for (let j = cccNets.start[k]!; j < cccNets.start[k + 1]!; j++) nets.push(cccNets.items[j]!);
+      for (let j = cccElements.start[k]!; j < cccElements.start[k + 1]!; j++)
+        elements.push(cccElements.items[j]!);
     }
     for (const n of nets) groupOf[n] = lists.length;
     lists.push({ nets, elements });
   }
   const bulkOutOfOrder = lists.some((g, index) =>
-    g.elements.some((e) => bulk[e] >= 0 && groupOf[bulk[e]] > index),
+    g.elements.some((e) => bulk[e]! >= 0 && groupOf[bulk[e]!]! > index),
   );
   const merged = bulkOutOfOrder
     ? [{ nets: lists.flatMap((g) => g.nets), elements: lists.flatMap((g) => g.elements) }]
@@ -144,7 +145,7 @@ function orderedGroups(
     nets: Int32Array.from(g.nets),
     elements: Int32Array.from(g.elements),
     feedback: g.elements.some(
-      (e) => controlledFrom(c.chGate[e], groupOf, index) || controlledFrom(bulk[e], groupOf, index),
+      (e) => controlledFrom(c.chGate[e]!, groupOf, index) || controlledFrom(bulk[e]!, groupOf, index),
     ),
   }));
   return { groups, groupOf };

@@ -1,3 +1,4 @@
+// Indexes here are in range by construction (compiled-netlist and per-net arrays), so `!` marks them (no run-time cost).
 import type { Loading, NodalSystem } from './assemble.ts';
 
 /** A Newton step smaller than this on every net ends the iteration, volts. */
@@ -32,14 +33,14 @@ export function newton(sys: NodalSystem, x: Float64Array, run: NewtonRun): Newto
   const most = run.maxIterations ?? MAX_ITERATIONS;
   for (let iteration = 1; iteration <= most; iteration++) {
     sys.assemble(x, run);
-    for (let i = 0; i < sys.n; i++) rhs[i] = -sys.residual[i];
+    for (let i = 0; i < sys.n; i++) rhs[i] = -sys.residual[i]!;
     if (!sys.solveLinear(rhs, step)) return { converged: false, iterations: iteration, lastStep };
     let largest = 0;
-    for (let i = 0; i < sys.n; i++) largest = Math.max(largest, Math.abs(step[i]));
+    for (let i = 0; i < sys.n; i++) largest = Math.max(largest, Math.abs(step[i]!));
     const damping = largest > limit ? limit / largest : 1;
     for (let i = 0; i < sys.n; i++) {
-      const next = Math.min(run.hi, Math.max(run.lo, x[i] + damping * step[i]));
-      lastStep[i] = Math.abs(next - x[i]);
+      const next = Math.min(run.hi, Math.max(run.lo, x[i]! + damping * step[i]!));
+      lastStep[i] = Math.abs(next - x[i]!);
       x[i] = next;
     }
     if (largest <= STEP_TOLERANCE) {

@@ -1,3 +1,4 @@
+// Indexes here are in range by construction (compiled-netlist and per-net arrays), so `!` marks them (no run-time cost).
 import type { CompiledNetlist } from '../compile/compile.ts';
 import type { InputVector } from '../model/design.ts';
 import { GMIN, NodalSystem } from './assemble.ts';
@@ -41,7 +42,7 @@ export function sourcesFor(c: CompiledNetlist, vector: InputVector): Sources {
   const volts = c.railVolts.slice();
   const undriven = new Set<number>();
   c.netlist.inputs.forEach((name, i) => {
-    const n = c.inputNets[i];
+    const n = c.inputNets[i]!;
     const value = vector[name] ?? 'Z';
     if (value === 'Z') undriven.add(n);
     else volts[n] = value === '1' ? c.tech.vdd : value === '0' ? 0 : NaN;
@@ -73,7 +74,7 @@ export class DcSolver {
     const c = this.compiled;
     const network = this.network(sources.undriven);
     const volts = new Float64Array(c.netCount).fill(NaN);
-    for (let n = 0; n < c.netCount; n++) if (network.topology.isSource[n]) volts[n] = sources.volts[n];
+    for (let n = 0; n < c.netCount; n++) if (network.topology.isSource[n]) volts[n] = sources.volts[n]!;
     const none = new Float64Array(c.netCount).fill(NaN);
     const state: SolveState = {
       volts,
@@ -86,7 +87,7 @@ export class DcSolver {
     const groups = network.groups.map((_g, k) => solveGroup(network, k, state));
     const bridges = new NodalSystem(network, network.topology.bridges, network.pos, volts, 0);
     bridges.assemble(new Float64Array(0));
-    for (const e of network.topology.bridges) state.current[e] = bridges.current[e];
+    for (const e of network.topology.bridges) state.current[e] = bridges.current[e]!;
     return {
       network,
       volts,
@@ -109,10 +110,10 @@ function supplyCurrent(network: DcNetwork, current: Float64Array): number {
   const floor = 2 * GMIN * top * c.netCount;
   let total = 0;
   for (const rail of network.supplyNets) {
-    for (let i = c.netChannels.start[rail]; i < c.netChannels.start[rail + 1]; i++) {
-      const e = c.netChannels.items[i];
+    for (let i = c.netChannels.start[rail]!; i < c.netChannels.start[rail + 1]!; i++) {
+      const e = c.netChannels.items[i]!;
       if (c.chA[e] === c.chB[e]) continue;
-      total += c.chA[e] === rail ? current[e] : -current[e];
+      total += c.chA[e] === rail ? current[e]! : -current[e]!;
     }
   }
   return Math.abs(total) <= floor ? 0 : total;
@@ -137,14 +138,14 @@ export function slopeAt(point: OperatingPoint, source: number): Float64Array {
     unknowns.forEach((n, i) => (network.pos[n] = i));
     const sys = network.system(k, unknowns.length, raw);
     sys.assemble(
-      Float64Array.from(unknowns, (n) => raw[n]),
+      Float64Array.from(unknowns, (n) => raw[n]!),
       undefined,
       { boundary: slope, rhs: sys.rhs },
     );
     const solved = sys.solveLinear(sys.rhs, sys.step);
     unknowns.forEach((n, i) => {
       network.pos[n] = -1;
-      slope[n] = solved ? sys.step[i] : NaN;
+      slope[n] = solved ? sys.step[i]! : NaN;
     });
   });
   return slope;

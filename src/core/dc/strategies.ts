@@ -1,3 +1,4 @@
+// Indexes here are in range by construction (compiled-netlist and per-net arrays), so `!` marks them (no run-time cost).
 import { GMIN, type NodalSystem } from './assemble.ts';
 import { newton, STEP_TOLERANCE, type NewtonOutcome } from './newton.ts';
 
@@ -83,7 +84,7 @@ function pseudoTransient(sys: NodalSystem, x: Float64Array, bounds: Bounds): Att
   let iterations = 0;
   let last = notYet(sys);
   for (let step = 0; step < MAX_TIME_STEPS; step++) {
-    for (let i = 0; i < sys.n; i++) g[i] = caps[i] / dt;
+    for (let i = 0; i < sys.n; i++) g[i] = caps[i]! / dt;
     if (g.every((gi) => gi < GMIN * 1e-3)) {
       last = newtonOn(sys, x, bounds, 0);
       return { converged: last.converged, iterations: iterations + last.iterations, last };
@@ -143,7 +144,7 @@ function sourceStepping(sys: NodalSystem, x: Float64Array, bounds: Bounds): Atte
 }
 
 function stillMoving(lastStep: Float64Array): number[] {
-  const order = Array.from(lastStep.keys()).sort((a, b) => lastStep[b] - lastStep[a]);
-  const moving = order.filter((i) => lastStep[i] > STEP_TOLERANCE);
+  const order = Array.from(lastStep.keys()).sort((a, b) => lastStep[b]! - lastStep[a]!);
+  const moving = order.filter((i) => lastStep[i]! > STEP_TOLERANCE);
   return (moving.length > 0 ? moving : order).slice(0, 5);
 }

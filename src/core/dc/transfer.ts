@@ -1,3 +1,4 @@
+// Indexes here are in range by construction (compiled-netlist and per-net arrays), so `!` marks them (no run-time cost).
 import { compile, type CompiledNetlist } from '../compile/compile.ts';
 import type { InputValue, InputVector } from '../model/design.ts';
 import type { Netlist } from '../model/netlist.ts';
@@ -160,11 +161,11 @@ function outputCurve(
 ): TransferCurve {
   const net = c.netIndex.get(output) as number;
   const vout = sweep.samples.map((p) => p.volts[net] as number);
-  const points = sweep.vin.map((v, k) => [v, Number.isNaN(vout[k]) ? null : vout[k]] as const);
+  const points = sweep.vin.map((v, k) => [v, Number.isNaN(vout[k]) ? null : vout[k]!] as const);
   const notes: string[] = [];
   const missing = vout.findIndex(Number.isNaN);
   const last = vout.length - 1;
-  const inverting = Number.isNaN(vout[0]) || Number.isNaN(vout[last]) ? null : vout[0] > vout[last];
+  const inverting = Number.isNaN(vout[0]) || Number.isNaN(vout[last]) ? null : vout[0]! > vout[last]!;
   if (missing >= 0 || sweep.stopped) {
     if (missing >= 0) {
       const count = vout.filter(Number.isNaN).length;

@@ -1,3 +1,4 @@
+// Indexes here are in range by construction (compiled-netlist and per-net arrays), so `!` marks them (no run-time cost).
 import { sequencePass, sweepPass, type SolveObserver } from '../analysis/pass.ts';
 import { checkSweepLimit } from '../analysis/vectors.ts';
 import { compile, type CompiledNetlist } from '../compile/compile.ts';
@@ -68,7 +69,7 @@ export class VectorDcRunner implements SolveObserver {
     const names = this.options.allNets ? c.netNames : c.netlist.outputs;
     const value = (v: number): number | null => (Number.isNaN(v) ? null : v);
     const voltages = Object.fromEntries(
-      names.map((n) => [n, value(point.volts[c.netIndex.get(n) as number])]),
+      names.map((n) => [n, value(point.volts[c.netIndex.get(n) as number]!)]),
     );
     const supplyCurrent = value(point.supplyCurrent);
     return {
@@ -88,15 +89,15 @@ export class VectorDcRunner implements SolveObserver {
   private gates(net: string): boolean {
     const { netGates, netIndex } = this.compiled;
     const n = netIndex.get(net) as number;
-    return netGates.start[n + 1] > netGates.start[n];
+    return netGates.start[n + 1]! > netGates.start[n]!;
   }
 
   private differences(result: SolveResult, volts: Float64Array, current: number | null): string[] {
     const c = this.compiled;
     const out = c.netlist.outputs.filter((name) => {
       const n = c.netIndex.get(name) as number;
-      const a = volts[n];
-      const b = result.volts[n];
+      const a = volts[n]!;
+      const b = result.volts[n]!;
       return (
         Number.isFinite(a) && Number.isFinite(b) && Math.abs(a - b) > DISAGREE_FRACTION_OF_VDD * c.tech.vdd
       );

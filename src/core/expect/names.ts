@@ -1,4 +1,5 @@
 import type { Netlist } from '../model/netlist.ts';
+import type { Expr } from './parse.ts';
 
 /**
  * Names an expected function may use (docs/semantics.md §4): the inputs, and the outputs, which stand
@@ -9,4 +10,27 @@ import type { Netlist } from '../model/netlist.ts';
  */
 export function expressionNames(netlist: Pick<Netlist, 'inputs' | 'outputs'>): string[] {
   return [...netlist.inputs, ...netlist.outputs.filter((o) => o !== 'Z')];
+}
+
+/** Every name an expression reads, added to `into`. */
+export function namesRead(e: Expr, into: Set<string> = new Set()): Set<string> {
+  switch (e.kind) {
+    case 'const':
+      break;
+    case 'name':
+      into.add(e.name);
+      break;
+    case 'not':
+      namesRead(e.arg, into);
+      break;
+    case 'and':
+    case 'or':
+    case 'xor':
+      namesRead(e.left, namesRead(e.right, into));
+      break;
+    case 'choose':
+      namesRead(e.select, namesRead(e.whenTrue, namesRead(e.whenFalse, into)));
+      break;
+  }
+  return into;
 }

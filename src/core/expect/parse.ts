@@ -1,3 +1,4 @@
+// Indexes read here are in range by construction, so `!` marks them (no run-time cost).
 import { printable } from '../format/printable.ts';
 
 /**
@@ -55,7 +56,7 @@ function tokenize(source: string): Token[] {
   const tokens: Token[] = [];
   let i = 0;
   while (i < source.length) {
-    const ch = source[i];
+    const ch = source[i]!;
     if (/\s/.test(ch)) {
       i++;
       continue;
@@ -129,7 +130,7 @@ class Parser {
   /** A chain of one operator, built as a balanced tree (the operators are associative). */
   private binary(level: number, nesting: number): Built {
     if (level === Parser.LEVELS.length) return this.unary(nesting);
-    const [symbol, kind] = Parser.LEVELS[level];
+    const [symbol, kind] = Parser.LEVELS[level]!;
     const operands = [this.binary(level + 1, nesting)];
     while (this.take(symbol)) operands.push(this.binary(level + 1, nesting));
     return this.balanced(kind, operands);
@@ -140,13 +141,13 @@ class Parser {
     while (layer.length > 1) {
       const next: Built[] = [];
       for (let k = 0; k + 1 < layer.length; k += 2) {
-        const [left, right] = [layer[k], layer[k + 1]];
+        const [left, right] = [layer[k]!, layer[k + 1]!];
         next.push(this.node({ kind, left: left.expr, right: right.expr }, Math.max(left.depth, right.depth)));
       }
-      if (layer.length % 2 === 1) next.push(layer[layer.length - 1]);
+      if (layer.length % 2 === 1) next.push(layer[layer.length - 1]!);
       layer = next;
     }
-    return layer[0];
+    return layer[0]!;
   }
 
   /** `!` runs are folded: three negations equal one, and two are kept as two (`!!Z` is X, not Z). */

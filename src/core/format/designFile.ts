@@ -98,18 +98,13 @@ function refuseLoops(design: Design, fileName: string): void {
   }
 }
 
-/** Stable key order and two-space indentation, so saved files diff well under version control. */
-export function serializeDesign(design: Design): string {
-  return `${JSON.stringify(designDocument(design), null, 2)}\n`;
-}
-
-/** The same design file without indentation (the autosave: less than half the text to write and read). */
-export function serializeDesignCompact(design: Design): string {
-  return JSON.stringify(designDocument(design));
-}
-
-function designDocument(design: Design) {
-  return {
+/**
+ * Stable key order and two-space indentation, so saved files diff well under version control;
+ * `compact` (no whitespace, half the characters, a fraction of the time) for text only Railwise
+ * reads back, such as the browser's autosave.
+ */
+export function serializeDesign(design: Design, layout: 'readable' | 'compact' = 'readable'): string {
+  const doc = {
     format: DESIGN_FORMAT_TAG,
     version: CURRENT_DESIGN_VERSION,
     name: design.name,
@@ -126,6 +121,7 @@ function designDocument(design: Design) {
     })),
     ...(design.notes === undefined ? {} : { notes: design.notes }),
   };
+  return layout === 'compact' ? JSON.stringify(doc) : `${JSON.stringify(doc, null, 2)}\n`;
 }
 
 function parseJson(text: string, fileName: string): RawDocument {

@@ -43,10 +43,10 @@ const mosSchema = z.object({
   gate: netName,
   drain: netName,
   source: netName,
-  bulk: netName.optional(),
+  bulk: netName.exactOptional(),
   w: length,
   l: length,
-  model: z.string().min(1).optional(),
+  model: z.string().min(1).exactOptional(),
 });
 
 const resistorSchema = z.object({
@@ -113,11 +113,11 @@ export const netlistSchema = z.object({
  */
 const deviceModelSchema = z.object({
   type: z.enum(['nmos', 'pmos']),
-  vt0: quantity(RANGES.threshold).optional(),
-  kp: quantity(RANGES.transconductance).optional(),
-  gamma: quantity(RANGES.bodyEffect).optional(),
-  phi: quantity(RANGES.surfacePotential).optional(),
-  lambda: quantity(RANGES.channelModulation).optional(),
+  vt0: quantity(RANGES.threshold).exactOptional(),
+  kp: quantity(RANGES.transconductance).exactOptional(),
+  gamma: quantity(RANGES.bodyEffect).exactOptional(),
+  phi: quantity(RANGES.surfacePotential).exactOptional(),
+  lambda: quantity(RANGES.channelModulation).exactOptional(),
 });
 
 /**
@@ -147,7 +147,7 @@ export const technologySchema = z
     lambdan: quantity(RANGES.channelModulation).default(DEFAULT_TECHNOLOGY.lambdan),
     lambdap: quantity(RANGES.channelModulation).default(DEFAULT_TECHNOLOGY.lambdap),
     // Model cards the devices name (added to version 1 as an optional field).
-    models: z.record(z.string().min(1), deviceModelSchema).optional(),
+    models: z.record(z.string().min(1), deviceModelSchema).exactOptional(),
   })
   .transform(({ vil, vih, ...t }) => {
     const { vil: lowDefault, vih: highDefault } = withVdd(DEFAULT_TECHNOLOGY, t.vdd);

@@ -15,9 +15,7 @@ import { ExpressionError, parseExpression } from '../expect/parse.ts';
 import { importSpice, SpiceImportError, type SpiceImportOptions } from './spiceImport.ts';
 import { withCellModels, withTechnologyCards } from './spiceDesign.ts';
 
-/** Extensions read as SPICE-compatible netlists, everywhere (docs/semantics.md §6). */
-export const SPICE_EXTENSIONS: readonly string[] = ['.sp', '.spi', '.spice', '.cir', '.net', '.cdl', '.ckt'];
-export const DESIGN_EXTENSIONS: readonly string[] = ['.json'];
+import { DESIGN_EXTENSIONS, SPICE_EXTENSIONS } from './fileKinds.ts';
 
 /** One cell, ready to check; plain data so it can cross to a worker thread. */
 export interface CellJob {

@@ -1,3 +1,4 @@
+// Indexes read here are in range by construction, so `!` marks them (no run-time cost).
 /**
  * Names as another format can carry them. Every format has its own rules for what an identifier
  * may hold and when two are the same (SPICE readers ignore case; IEEE Std 1364 treats `\mid_node `
@@ -61,7 +62,7 @@ export function exportNames(
     used.add(rules.sameAs(candidate));
   });
   const done = identifiers as string[];
-  const renamed = names.flatMap((n, i) => (done[i] === n ? [] : [[n, done[i]] as const]));
+  const renamed = names.flatMap((n, i) => (done[i] === n ? [] : [[n, done[i]!] as const]));
   return { identifiers: done, renamed };
 }
 

@@ -3,7 +3,8 @@
  * `* railwise: inputs …` directive), over what the importer inferred. Names match nets
  * case-insensitively, as SPICE does, and come back in the netlist's own spelling.
  */
-import { ExpressionError, parseExpression, type Expr } from '../expect/parse.ts';
+import { expressionNames, namesRead } from '../expect/names.ts';
+import { ExpressionError, parseExpression } from '../expect/parse.ts';
 import { netNames, type Netlist } from '../model/netlist.ts';
 
 export class PinError extends Error {
@@ -82,11 +83,11 @@ export function inputsReadByExpectations(
   netlist: Netlist,
   expectations: Readonly<Record<string, string>>,
 ): string[] {
-  const names = [...netlist.inputs, ...netlist.outputs];
+  const names = expressionNames(netlist);
   const read = new Set<string>();
   for (const text of Object.values(expectations)) {
     try {
-      namesIn(parseExpression(text, names), read);
+      namesRead(parseExpression(text, names), read);
     } catch (e) {
       if (!(e instanceof ExpressionError)) throw e;
     }
@@ -95,26 +96,11 @@ export function inputsReadByExpectations(
   return netlist.outputs.filter((o) => read.has(o) && !described.has(o.toLowerCase()));
 }
 
-function namesIn(e: Expr, into: Set<string>): void {
-  switch (e.kind) {
-    case 'const':
-      return;
-    case 'name':
-      into.add(e.name);
-      return;
-    case 'not':
-      namesIn(e.arg, into);
-      return;
-    case 'and':
-    case 'or':
-    case 'xor':
-      namesIn(e.left, into);
-      namesIn(e.right, into);
-      return;
-    case 'choose':
-      namesIn(e.select, into);
-      namesIn(e.whenTrue, into);
-      namesIn(e.whenFalse, into);
-      return;
-  }
+/** The netlist with `inputsReadByExpectations` moved from its outputs to the end of its inputs. */
+export function withInputsReadByExpectations(
+  netlist: Netlist,
+  expectations: Readonly<Record<string, string>>,
+): Netlist {
+  const read = inputsReadByExpectations(netlist, expectations);
+  return read.length === 0 ? netlist : assignPins(netlist, { inputs: [...netlist.inputs, ...read] });
 }

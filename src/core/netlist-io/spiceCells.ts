@@ -16,6 +16,7 @@ import { flattenCell, HierarchyError } from '../hierarchy/flatten.ts';
 import { portUse, GATE, CHANNEL, type NetUse } from './portUse.ts';
 import { readExportedNames, restoreExportedNames, restoreInstance } from './spiceRestore.ts';
 import { applyPinDirectives, readExpectations } from './spiceDirectives.ts';
+import { withInputsReadByExpectations } from './pins.ts';
 import { recordOf } from '../model/records.ts';
 import { readPlacement } from './placementComments.ts';
 import { checkDrawnInstances, symbolProps } from './drawnInstances.ts';
@@ -164,6 +165,8 @@ function finish(spec: CellSpec, ctx: CellContext): FinishedCell {
   netlist = applyPinDirectives(netlist, spec.body.directives, ctx.fileName);
   const { expectations, lines } = readExpectations(netlist, spec.body.directives, notes);
   const pinsNamed = spec.body.directives.some((d) => d.key === 'inputs' || d.key === 'outputs');
+  // A port an expected function reads but does not describe is an input (docs/semantics.md §6).
+  if (!pinsNamed) netlist = withInputsReadByExpectations(netlist, expectations);
   const parsed = readExportedNames(spec.body.directives, notes, netsOf(read, expectations));
   const names = { ...parsed, cell: ctx.cellNames.get(spec.name.toLowerCase()) ?? spec.name };
   const restored = restoreExportedNames({ netlist, expectations, expectationLines: lines }, names);

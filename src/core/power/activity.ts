@@ -1,3 +1,4 @@
+// Indexes here are in range by construction (compiled-netlist and per-net arrays), so `!` marks them (no run-time cost).
 import { classify, LEVEL_0, LEVEL_1 } from '../solver/levels.ts';
 import type { SolveResult } from '../solver/simulator.ts';
 
@@ -30,10 +31,11 @@ export class ActivityCounter {
   private results = 0;
 
   constructor(private readonly nets: number) {
-    [this.zeros, this.ones, this.rises, this.lowVolts, this.highVolts] = Array.from(
-      { length: 5 },
-      () => new Float64Array(nets),
-    );
+    this.zeros = new Float64Array(nets);
+    this.ones = new Float64Array(nets);
+    this.rises = new Float64Array(nets);
+    this.lowVolts = new Float64Array(nets);
+    this.highVolts = new Float64Array(nets);
     this.indefinite = new Uint8Array(nets);
   }
 
@@ -41,17 +43,17 @@ export class ActivityCounter {
     const { vil, vih } = result.compiled.tech;
     const levels = new Int8Array(this.nets);
     for (let n = 0; n < this.nets; n++) {
-      const v = result.volts[n];
+      const v = result.volts[n]!;
       const level = classify(v, vil, vih);
       levels[n] = level === LEVEL_0 ? 0 : level === LEVEL_1 ? 1 : -1;
       if (levels[n] === 0) {
-        this.zeros[n]++;
-        this.lowVolts[n] += v;
+        this.zeros[n]!++;
+        this.lowVolts[n]! += v;
       } else if (levels[n] === 1) {
-        this.ones[n]++;
-        this.highVolts[n] += v;
+        this.ones[n]!++;
+        this.highVolts[n]! += v;
       } else this.indefinite[n] = 1;
-      if (this.previous?.[n] === 0 && levels[n] === 1) this.rises[n]++;
+      if (this.previous?.[n] === 0 && levels[n] === 1) this.rises[n]!++;
     }
     this.previous = levels;
     this.results++;
@@ -60,20 +62,20 @@ export class ActivityCounter {
   /** Independent, equiprobable vectors, a fresh one each cycle: P(0→1) = P(0)·P(1). */
   random(): ActivityFigures {
     const total = Math.max(1, this.results);
-    return this.figures((n) => (this.zeros[n] / total) * (this.ones[n] / total));
+    return this.figures((n) => (this.zeros[n]! / total) * (this.ones[n]! / total));
   }
 
   /** Counted over the results in the order added: 0→1 changes per step change. */
   sequence(): ActivityFigures {
     const changes = Math.max(1, this.results - 1);
-    return this.figures((n) => this.rises[n] / changes);
+    return this.figures((n) => this.rises[n]! / changes);
   }
 
   private figures(activityOf: (net: number) => number): ActivityFigures {
     const activity = Float64Array.from({ length: this.nets }, (_, n) => activityOf(n));
     const swing = Float64Array.from({ length: this.nets }, (_, n) =>
-      this.zeros[n] > 0 && this.ones[n] > 0
-        ? this.highVolts[n] / this.ones[n] - this.lowVolts[n] / this.zeros[n]
+      this.zeros[n]! > 0 && this.ones[n]! > 0
+        ? this.highVolts[n]! / this.ones[n]! - this.lowVolts[n]! / this.zeros[n]!
         : 0,
     );
     const indefinite = [...this.indefinite.keys()].filter((n) => this.indefinite[n] === 1);

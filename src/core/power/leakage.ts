@@ -1,3 +1,4 @@
+// Indexes here are in range by construction (compiled-netlist and per-net arrays), so `!` marks them (no run-time cost).
 import type { CompiledNetlist } from '../compile/compile.ts';
 import { NMOS, PMOS } from '../compile/compile.ts';
 import { OFF } from '../solver/levels.ts';
@@ -32,7 +33,7 @@ export class LeakageEstimator {
   constructor(private readonly compiled: CompiledNetlist) {
     const perVolt = compiled.tech.ioffPerWidth / compiled.tech.vdd;
     this.conductance = Float64Array.from({ length: compiled.chCount }, (_, e) => {
-      const d = compiled.netlist.devices[compiled.chDevice[e]];
+      const d = compiled.netlist.devices[compiled.chDevice[e]!]!;
       const isMos = compiled.chKind[e] === NMOS || compiled.chKind[e] === PMOS;
       return isMos && (d.kind === 'nmos' || d.kind === 'pmos') ? perVolt * d.w : 0;
     });
@@ -46,11 +47,11 @@ export class LeakageEstimator {
     let watts = 0;
     const pending: Stamp[] = [];
     for (let e = 0; e < c.chCount; e++) {
-      const g = this.conductance[e];
+      const g = this.conductance[e]!;
       if (g === 0 || conduction[e] !== OFF) continue;
-      const a = c.chA[e];
-      const b = c.chB[e];
-      if (fixed(a) && fixed(b)) watts += g * (volts[a] - volts[b]) ** 2;
+      const a = c.chA[e]!;
+      const b = c.chB[e]!;
+      if (fixed(a) && fixed(b)) watts += g * (volts[a]! - volts[b]!) ** 2;
       else pending.push({ a, b, g });
     }
     if (pending.length > 0) watts += this.undrivenWatts(result, pending, fixed);
@@ -71,7 +72,7 @@ export class LeakageEstimator {
     const c = this.compiled;
     const free: number[] = [];
     const mark = (n: number): void => {
-      if (this.localOf[n] < 0 && !fixed(n)) this.localOf[n] = free.push(n) - 1;
+      if (this.localOf[n]! < 0 && !fixed(n)) this.localOf[n] = free.push(n) - 1;
     };
     for (const s of pending) {
       mark(s.a);
@@ -80,10 +81,10 @@ export class LeakageEstimator {
     const joins: [number, number][] = [];
     // `free` grows while it is walked: a breadth-first search through conducting devices.
     for (let i = 0; i < free.length; i++) {
-      const n = free[i];
-      for (let k = c.netChannels.start[n]; k < c.netChannels.start[n + 1]; k++) {
-        const e = c.netChannels.items[k];
-        const other = c.chA[e] === n ? c.chB[e] : c.chA[e];
+      const n = free[i]!;
+      for (let k = c.netChannels.start[n]!; k < c.netChannels.start[n + 1]!; k++) {
+        const e = c.netChannels.items[k]!;
+        const other = c.chA[e] === n ? c.chB[e]! : c.chA[e]!;
         if (result.conduction[e] === OFF || fixed(other)) continue;
         mark(other);
         joins.push([n, other]);
@@ -94,7 +95,7 @@ export class LeakageEstimator {
     for (const n of free) this.localOf[n] = -1;
     let watts = 0;
     for (const s of pending) {
-      const vds = volts[s.a] - volts[s.b];
+      const vds = volts[s.a]! - volts[s.b]!;
       if (Number.isFinite(vds)) watts += s.g * vds * vds;
     }
     return watts;

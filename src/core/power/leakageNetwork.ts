@@ -1,3 +1,4 @@
+// Indexes here are in range by construction (compiled-netlist and per-net arrays), so `!` marks them (no run-time cost).
 import { LuDecomposition, Matrix } from 'ml-matrix';
 
 /** A conductance between two nets, siemens. */
@@ -30,32 +31,32 @@ export function solveFreeNets(
 ): void {
   const node = mergeJoined(
     free.length,
-    joins.map(([a, b]) => [localOf[a], localOf[b]] as const),
+    joins.map(([a, b]) => [localOf[a]!, localOf[b]!] as const),
   );
   const nodeCount = node.reduce((m, v) => Math.max(m, v + 1), 0);
   const touching: Stamp[][] = Array.from({ length: nodeCount }, () => []);
   const group = new DisjointSets(nodeCount);
   const tied = new Uint8Array(nodeCount);
   for (const s of stamps) {
-    const na = localOf[s.a] >= 0 ? node[localOf[s.a]] : -1;
-    const nb = localOf[s.b] >= 0 ? node[localOf[s.b]] : -1;
+    const na = localOf[s.a]! >= 0 ? node[localOf[s.a]!]! : -1;
+    const nb = localOf[s.b]! >= 0 ? node[localOf[s.b]!]! : -1;
     if (na === nb) continue; // both ends on one node (or both fixed): no current through the network
-    if (na >= 0) touching[na].push(s);
-    if (nb >= 0) touching[nb].push(s);
+    if (na >= 0) touching[na]!.push(s);
+    if (nb >= 0) touching[nb]!.push(s);
     if (na >= 0 && nb >= 0) group.union(na, nb);
     else tied[na >= 0 ? na : nb] = 1;
   }
   const members: number[][] = Array.from({ length: nodeCount }, () => []);
-  for (let k = 0; k < nodeCount; k++) members[group.find(k)].push(k);
+  for (let k = 0; k < nodeCount; k++) members[group.find(k)]!.push(k);
   const nodeVolts = new Float64Array(nodeCount);
   const view: NodeView = { touching, node, localOf, volts, nodeVolts };
   for (const nodes of members) {
     if (nodes.length === 0 || !nodes.some((k) => tied[k] === 1)) continue; // floats: stays at 0 V
-    if (nodes.length === 1) solveLone(nodes[0], view);
-    else if (nodes.length === 2) solvePair(nodes[0], nodes[1], view);
+    if (nodes.length === 1) solveLone(nodes[0]!, view);
+    else if (nodes.length === 2) solvePair(nodes[0]!, nodes[1]!, view);
     else solveGroup(nodes, view);
   }
-  free.forEach((net, local) => (volts[net] = nodeVolts[node[local]]));
+  free.forEach((net, local) => (volts[net] = nodeVolts[node[local]!]!));
 }
 
 /** What the group solvers read: stamps per node, and how nets map onto nodes. */
@@ -72,17 +73,17 @@ interface NodeView {
 
 /** The node at the far end of a stamp from `k`: a node number, or −1 with the fixed net's voltage. */
 function farEnd(s: Stamp, k: number, view: NodeView): { node: number; volts: number } {
-  const la = view.localOf[s.a];
+  const la = view.localOf[s.a]!;
   const nodeA = la >= 0 ? view.node[la] : -1;
   const other = nodeA === k ? s.b : s.a;
-  const lo = view.localOf[other];
-  return lo >= 0 ? { node: view.node[lo], volts: 0 } : { node: -1, volts: view.volts[other] };
+  const lo = view.localOf[other]!;
+  return lo >= 0 ? { node: view.node[lo]!, volts: 0 } : { node: -1, volts: view.volts[other]! };
 }
 
 function solveLone(k: number, view: NodeView): void {
   let weighted = 0;
   let total = 0;
-  for (const s of view.touching[k]) {
+  for (const s of view.touching[k]!) {
     weighted += s.g * farEnd(s, k, view).volts;
     total += s.g;
   }
@@ -96,7 +97,7 @@ function solvePair(x: number, y: number, view: NodeView): void {
   let gxy = 0;
   let bx = 0;
   let by = 0;
-  for (const s of view.touching[x]) {
+  for (const s of view.touching[x]!) {
     const far = farEnd(s, x, view);
     if (far.node === y) gxy += s.g;
     else {
@@ -104,7 +105,7 @@ function solvePair(x: number, y: number, view: NodeView): void {
       bx += s.g * far.volts;
     }
   }
-  for (const s of view.touching[y]) {
+  for (const s of view.touching[y]!) {
     const far = farEnd(s, y, view);
     if (far.node === x) continue; // counted from x's side
     gy += s.g;
@@ -120,7 +121,7 @@ function solveGroup(nodes: readonly number[], view: NodeView): void {
   const g = Matrix.zeros(nodes.length, nodes.length);
   const b = Matrix.zeros(nodes.length, 1);
   nodes.forEach((k, p) => {
-    for (const s of view.touching[k]) {
+    for (const s of view.touching[k]!) {
       const far = farEnd(s, k, view);
       g.set(p, p, g.get(p, p) + s.g);
       if (far.node < 0) b.set(p, 0, b.get(p, 0) + s.g * far.volts);
@@ -140,8 +141,8 @@ function mergeJoined(count: number, pairs: readonly (readonly [number, number])[
   let next = 0;
   for (let i = 0; i < count; i++) {
     const r = sets.find(i);
-    if (numberOf[r] < 0) numberOf[r] = next++;
-    node[i] = numberOf[r];
+    if (numberOf[r]! < 0) numberOf[r] = next++;
+    node[i] = numberOf[r]!;
   }
   return node;
 }
@@ -153,7 +154,7 @@ class DisjointSets {
   }
   find(i: number): number {
     const p = this.parent;
-    while (p[i] !== i) i = p[i] = p[p[i]];
+    while (p[i] !== i) i = p[i] = p[p[i]!]!;
     return i;
   }
   union(a: number, b: number): void {

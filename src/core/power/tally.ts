@@ -1,3 +1,4 @@
+// Indexes here are in range by construction (compiled-netlist and per-net arrays), so `!` marks them (no run-time cost).
 /**
  * Power counters fed by the solve pass of a check: per vector the static figures (DC paths from the
  * solver plus leakage of the off transistors), per net the 0→1 activity and the swing. The counts
@@ -75,9 +76,9 @@ export class PowerTally implements SolveObserver {
         : [
             {
               net,
-              activity: figures.activity[n],
-              swing: figures.swing[n],
-              capacitance: breakdown[n],
+              activity: figures.activity[n]!,
+              swing: figures.swing[n]!,
+              capacitance: breakdown[n]!,
               isInput: inputs.has(net),
               isOutput: outputs.has(net),
             },
@@ -85,8 +86,8 @@ export class PowerTally implements SolveObserver {
     );
     // Outputs and nets feeding gates only: an internal stack node left floating is expected.
     const unclear = figures.indefinite
-      .filter((n) => outputs.has(c.netNames[n]) || c.netGates.start[n + 1] > c.netGates.start[n])
-      .map((n) => c.netNames[n]);
+      .filter((n) => outputs.has(c.netNames[n]!) || c.netGates.start[n + 1]! > c.netGates.start[n]!)
+      .map((n) => c.netNames[n]!);
     return {
       activitySource: this.activitySource,
       vdd: c.tech.vdd,

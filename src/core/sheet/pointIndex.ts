@@ -87,12 +87,15 @@ function spotAt(
 function numberSpots(c: Coords, order: Int32Array): { spotOf: Int32Array; spots: Point[] } {
   const spotOf = new Int32Array(order.length);
   const spots: Point[] = [];
-  let [lx, ly] = [Number.NaN, Number.NaN];
+  let lx = Number.NaN;
+  let ly = Number.NaN;
   for (const q of order) {
-    const [x, y] = [c.x[q]!, c.y[q]!];
+    const x = c.x[q]!;
+    const y = c.y[q]!;
     if (x !== lx || y !== ly) {
       spots.push({ x, y });
-      [lx, ly] = [x, y];
+      lx = x;
+      ly = y;
     }
     spotOf[q] = spots.length - 1;
   }

@@ -29,7 +29,8 @@ export function inputCapacitance(netlist: Netlist, tech: Technology): Record<str
   const cin = nameRecord<number>();
   for (const input of netlist.inputs) cin[input] = 0;
   for (const d of netlist.devices) {
-    if ((d.kind === 'nmos' || d.kind === 'pmos') && d.gate in cin) cin[d.gate] += tech.cgPerArea * d.w * d.l;
+    if ((d.kind === 'nmos' || d.kind === 'pmos') && d.gate in cin)
+      cin[d.gate] = (cin[d.gate] ?? 0) + tech.cgPerArea * d.w * d.l;
   }
   return cin;
 }

@@ -1,3 +1,4 @@
+// Indexes read here are in range by construction, so `!` marks them (no run-time cost).
 import { capacitanceBreakdown, type CapacitanceBreakdown } from '../compile/capacitance.ts';
 import type { MosDevice, Netlist } from '../model/netlist.ts';
 import { deviceTerminals, netNames } from '../model/netlist.ts';
@@ -17,7 +18,7 @@ export function delayCapacitances(
   const names = netNames(netlist);
   const index = new Map(names.map((n, i) => [n, i]));
   const breakdown = capacitanceBreakdown(netlist, tech, index);
-  const byName = new Map(names.map((n, i) => [n, breakdown[i]]));
+  const byName = new Map(names.map((n, i) => [n, breakdown[i]!]));
   if (!sharedDiffusion) return byName;
   for (const [net, widths] of seriesNodes(netlist)) {
     const b = byName.get(net) as CapacitanceBreakdown;
@@ -45,7 +46,15 @@ function seriesNodes(netlist: Netlist): Map<string, number[]> {
   const series = new Map<string, number[]>();
   for (const [net, devices] of terminals) {
     const [first, second] = devices;
-    if (pinned.has(net) || devices.length !== 2 || first === second || first.kind !== second.kind) continue;
+    if (
+      pinned.has(net) ||
+      first === undefined ||
+      second === undefined ||
+      devices.length !== 2 ||
+      first === second ||
+      first.kind !== second.kind
+    )
+      continue;
     series.set(net, [first.w, second.w]);
   }
   return series;

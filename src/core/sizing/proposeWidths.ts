@@ -1,3 +1,4 @@
+// Indexes read here are in range by construction, so `!` marks them (no run-time cost).
 import type { Device, Netlist } from '../model/netlist.ts';
 import type { Technology } from '../model/technology.ts';
 import { referenceLength } from './logicalEffort.ts';
@@ -85,9 +86,9 @@ function chainDepths(stage: Stage, depth: Map<string, number>): boolean {
 }
 
 function record(stage: Stage, chain: readonly number[], found: Map<string, number>): void {
-  const switched = chain.filter((i) => stage.elements[i].control >= 0);
+  const switched = chain.filter((i) => stage.elements[i]!.control >= 0);
   for (const i of switched) {
-    const name = stage.elements[i].name;
+    const name = stage.elements[i]!.name;
     found.set(name, Math.max(found.get(name) ?? 0, switched.length));
   }
 }

@@ -1,3 +1,4 @@
+// Indexes read here are in range by construction, so `!` marks them (no run-time cost).
 import { LuDecomposition, Matrix } from 'ml-matrix';
 import type { Stage } from './stage.ts';
 
@@ -44,7 +45,7 @@ function component(stage: Stage, elems: readonly number[], direction: Direction)
   let reachesSource = false;
   for (let k = 0; k < nodes.length; k++) {
     for (const i of elems) {
-      const e = stage.elements[i];
+      const e = stage.elements[i]!;
       const other = e.a === nodes[k] ? e.b : e.b === nodes[k] ? e.a : -1;
       if (other < 0 || seen.has(other)) continue;
       seen.add(other);
@@ -64,7 +65,7 @@ function solveRc(stage: Stage, elems: readonly number[], nodes: readonly number[
   const position = new Map(nodes.map((n, p) => [n, p]));
   const g = Matrix.zeros(nodes.length, nodes.length);
   for (const i of elems) {
-    const e = stage.elements[i];
+    const e = stage.elements[i]!;
     const pa = position.get(e.a);
     const pb = position.get(e.b);
     const conductance = 1 / e.ohms;
@@ -77,7 +78,7 @@ function solveRc(stage: Stage, elems: readonly number[], nodes: readonly number[
   }
   const rhs = Matrix.zeros(nodes.length, 2);
   rhs.set(0, 0, 1); // 1 A injected at the output (position 0)
-  nodes.forEach((n, p) => rhs.set(p, 1, caps[n]));
+  nodes.forEach((n, p) => rhs.set(p, 1, caps[n]!));
   const x = new LuDecomposition(g).solve(rhs);
   return { ohms: x.get(0, 0), elmore: x.get(0, 1) };
 }
@@ -90,10 +91,10 @@ function worstChain(stage: Stage, elems: readonly number[], direction: Direction
   const walk = (net: number, ohms: number, chain: string[]): void => {
     if (++steps > PATH_SEARCH_STEPS) return;
     for (const i of elems) {
-      const e = stage.elements[i];
+      const e = stage.elements[i]!;
       const next = e.a === net ? e.b : e.b === net ? e.a : -1;
       if (next < 0 || visited.has(next)) continue;
-      const extended = [...chain, e.name, stage.nets[next]];
+      const extended = [...chain, e.name, stage.nets[next]!];
       if (isRoot(stage, next, direction)) {
         if (ohms + e.ohms > best.ohms) best = { ohms: ohms + e.ohms, chain: extended };
         continue;
@@ -103,7 +104,7 @@ function worstChain(stage: Stage, elems: readonly number[], direction: Direction
       visited.delete(next);
     }
   };
-  walk(stage.output, 0, [stage.nets[stage.output]]);
+  walk(stage.output, 0, [stage.nets[stage.output]!]);
   return best.chain.reverse();
 }
 

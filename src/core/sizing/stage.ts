@@ -1,3 +1,4 @@
+// Indexes read here are in range by construction, so `!` marks them (no run-time cost).
 import type { Netlist } from '../model/netlist.ts';
 import type { Technology } from '../model/technology.ts';
 
@@ -123,7 +124,7 @@ export function extractStage(netlist: Netlist, tech: Technology, output: string)
     onWhenHigh: ch.kind !== 'pmos',
   }));
   // A transistor whose gate sits on a rail that turns it off never conducts: drop it.
-  const live = elements.filter((e, i) => e.control >= 0 || conductsConstantly(members[i], roles));
+  const live = elements.filter((e, i) => e.control >= 0 || conductsConstantly(members[i]!, roles));
   const inverters = inverterInputs(netlist);
   const complementOf = controls.map((net) => controls.indexOf(inverters.get(net) ?? ''));
   return {

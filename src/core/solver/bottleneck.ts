@@ -1,3 +1,4 @@
+// Hot loop: indexes here are in range by construction, so `!` marks them (no run-time cost).
 import { NMOS, PMOS } from '../compile/compile.ts';
 import type { Frame } from './frame.ts';
 import { clampPass, GATE_NOT_TIED, GATE_TIED_A } from './selfGated.ts';
@@ -14,13 +15,13 @@ import { clampPass, GATE_NOT_TIED, GATE_TIED_A } from './selfGated.ts';
  */
 export function bottleneck(frame: Frame, root: number, snapVolts: Float64Array, high: boolean): boolean {
   const { best, limiter } = frame;
-  for (let i = frame.head[root]; i >= 0; i = frame.next[i]) {
+  for (let i = frame.head[root]!; i >= 0; i = frame.next[i]!) {
     best[i] = high ? -Infinity : Infinity;
     limiter[i] = -1;
   }
   const reached = propagate(frame, root, snapVolts, high, false);
   if (reached && anyDropped(frame, root, high)) {
-    for (let i = frame.head[root]; i >= 0; i = frame.next[i]) frame.labelRank[i] = UNREACHED;
+    for (let i = frame.head[root]!; i >= 0; i = frame.next[i]!) frame.labelRank[i] = UNREACHED;
     propagate(frame, root, snapVolts, high, true);
   }
   return reached;
@@ -30,12 +31,12 @@ export function bottleneck(frame: Frame, root: number, snapVolts: Float64Array, 
 function anyDropped(frame: Frame, root: number, high: boolean): boolean {
   const mid = frame.c.tech.vdd / 2;
   let seed = high ? -Infinity : Infinity;
-  for (let j = frame.srcHead[root]; j >= 0; j = frame.srcNext[j]) {
-    const vs = frame.sourceEndVolts[j];
+  for (let j = frame.srcHead[root]!; j >= 0; j = frame.srcNext[j]!) {
+    const vs = frame.sourceEndVolts[j]!;
     if (high === vs >= mid) seed = high ? Math.max(seed, vs) : Math.min(seed, vs);
   }
-  for (let i = frame.head[root]; i >= 0; i = frame.next[i]) {
-    if (!(Math.abs(frame.best[i] - seed) <= 1e-12)) return true;
+  for (let i = frame.head[root]!; i >= 0; i = frame.next[i]!) {
+    if (!(Math.abs(frame.best[i]! - seed) <= 1e-12)) return true;
   }
   return false;
 }
@@ -47,7 +48,7 @@ const UNREACHED = 0x7fffffff;
 
 /** Takes level v at local net i when it beats the best so far. */
 function offerLevel(frame: Frame, i: number, v: number, high: boolean): boolean {
-  if (high ? v > frame.best[i] + 1e-12 : v < frame.best[i] - 1e-12) {
+  if (high ? v > frame.best[i]! + 1e-12 : v < frame.best[i]! - 1e-12) {
     frame.best[i] = v;
     return true;
   }
@@ -64,12 +65,12 @@ function offerLevel(frame: Frame, i: number, v: number, high: boolean): boolean 
  */
 function offerLimiter(frame: Frame, i: number, v: number, vIn: number, e: number, from: number): boolean {
   const { labelRank, limiter } = frame;
-  if (!(Math.abs(v - frame.best[i]) <= 1e-12)) return false;
+  if (!(Math.abs(v - frame.best[i]!) <= 1e-12)) return false;
   const drops = Math.abs(v - vIn) > 1e-12;
-  const candidate = drops ? frame.nameRanks()[e] : from < 0 ? NO_LIMITER : labelRank[from];
-  if (candidate >= labelRank[i]) return false;
+  const candidate = drops ? frame.nameRanks()[e]! : from < 0 ? NO_LIMITER : labelRank[from]!;
+  if (candidate >= labelRank[i]!) return false;
   labelRank[i] = candidate;
-  limiter[i] = drops ? e : from < 0 ? -1 : limiter[from];
+  limiter[i] = drops ? e : from < 0 ? -1 : limiter[from]!;
   return true;
 }
 
@@ -91,12 +92,12 @@ function propagate(
   let qTail = 0;
   const size = queue.length;
   let reached = false;
-  for (let j = frame.srcHead[root]; j >= 0; j = frame.srcNext[j]) {
-    const vs = frame.sourceEndVolts[j];
+  for (let j = frame.srcHead[root]!; j >= 0; j = frame.srcNext[j]!) {
+    const vs = frame.sourceEndVolts[j]!;
     if (high !== vs >= mid) continue;
     reached = true;
     const e = frame.element(j);
-    const local = topo.elemLocalA[e] >= 0 ? topo.elemLocalA[e] : topo.elemLocalB[e];
+    const local = topo.elemLocalA[e]! >= 0 ? topo.elemLocalA[e]! : topo.elemLocalB[e]!;
     const v = passed(frame, e, vs, snapVolts, high, local);
     const taken = limiters ? offerLimiter(frame, local, v, vs, e, -1) : offerLevel(frame, local, v, high);
     if (taken && !inQueue[local]) {
@@ -106,20 +107,20 @@ function propagate(
     }
   }
   while (qHead !== qTail) {
-    const i = queue[qHead];
+    const i = queue[qHead]!;
     qHead = (qHead + 1) % size;
     inQueue[i] = 0;
     const n = frame.net(i);
-    for (let p = c.netChannels.start[n]; p < c.netChannels.start[n + 1]; p++) {
-      const e = c.netChannels.items[p];
-      if (!frame.on[topo.elemLocal[e]]) continue;
-      const a = topo.elemLocalA[e];
-      const b = topo.elemLocalB[e];
+    for (let p = c.netChannels.start[n]!; p < c.netChannels.start[n + 1]!; p++) {
+      const e = c.netChannels.items[p]!;
+      if (!frame.on[topo.elemLocal[e]!]) continue;
+      const a = topo.elemLocalA[e]!;
+      const b = topo.elemLocalB[e]!;
       if (a < 0 || b < 0) continue;
       const other = a === i ? b : a;
-      const v = passed(frame, e, best[i], snapVolts, high, other);
+      const v = passed(frame, e, best[i]!, snapVolts, high, other);
       const taken = limiters
-        ? offerLimiter(frame, other, v, best[i], e, i)
+        ? offerLimiter(frame, other, v, best[i]!, e, i)
         : offerLevel(frame, other, v, high);
       if (taken && !inQueue[other]) {
         inQueue[other] = 1;
@@ -144,18 +145,18 @@ function passed(
   into: number,
 ): number {
   const { c, topo } = frame;
-  const kind = c.chKind[e];
+  const kind = c.chKind[e]!;
   const tied = topo.selfGate[e];
   if (tied !== GATE_NOT_TIED) {
     const gateEnd = tied === GATE_TIED_A ? topo.elemLocalA[e] : topo.elemLocalB[e];
     return clampPass(kind, v, high, into === gateEnd, c.tech);
   }
   if (high && kind === NMOS) {
-    const vg = snapVolts[c.chGate[e]];
+    const vg = snapVolts[c.chGate[e]!]!;
     return Math.min(v, (Number.isNaN(vg) ? c.tech.vdd : vg) - c.tech.vtn);
   }
   if (!high && kind === PMOS) {
-    const vg = snapVolts[c.chGate[e]];
+    const vg = snapVolts[c.chGate[e]!]!;
     return Math.max(v, (Number.isNaN(vg) ? 0 : vg) + c.tech.vtp);
   }
   return v;

@@ -1,3 +1,4 @@
+// Hot loop: indexes here are in range by construction, so `!` marks them (no run-time cost).
 import type { CompiledNetlist } from '../compile/compile.ts';
 
 export interface PathIndices {
@@ -28,12 +29,12 @@ export function currentPaths(
   sourceOut: Float64Array,
 ): PathIndices[] {
   let largest = 0;
-  for (const n of sourceNets) if (sourceOut[n] > largest) largest = sourceOut[n];
+  for (const n of sourceNets) if (sourceOut[n]! > largest) largest = sourceOut[n]!;
   if (largest <= 0) return [];
   const residual = Float64Array.from(chCurrent, Math.abs);
   const floor = largest * RELATIVE_FLOOR;
-  const sources = Array.from(sourceNets).filter((n) => sourceOut[n] > floor);
-  sources.sort((a, b) => volts[b] - volts[a] || c.netNames[a].localeCompare(c.netNames[b]));
+  const sources = Array.from(sourceNets).filter((n) => sourceOut[n]! > floor);
+  sources.sort((a, b) => volts[b]! - volts[a]! || c.netNames[a]!.localeCompare(c.netNames[b]!));
   const paths: PathIndices[] = [];
   for (const s of sources) {
     for (let k = 0; k < MAX_PATHS_PER_SOURCE; k++) {
@@ -59,18 +60,18 @@ function walk(
   let at = start;
   for (let steps = 0; steps <= c.netCount; steps++) {
     let bestE = -1;
-    for (let p = c.netChannels.start[at]; p < c.netChannels.start[at + 1]; p++) {
-      const e = c.netChannels.items[p];
-      const leaves = (c.chA[e] === at && chCurrent[e] > 0) || (c.chB[e] === at && chCurrent[e] < 0);
-      if (leaves && residual[e] > floor && (bestE < 0 || preferred(c, residual, e, bestE))) bestE = e;
+    for (let p = c.netChannels.start[at]!; p < c.netChannels.start[at + 1]!; p++) {
+      const e = c.netChannels.items[p]!;
+      const leaves = (c.chA[e] === at && chCurrent[e]! > 0) || (c.chB[e] === at && chCurrent[e]! < 0);
+      if (leaves && residual[e]! > floor && (bestE < 0 || preferred(c, residual, e, bestE))) bestE = e;
     }
     if (bestE < 0) return null;
-    at = c.chA[bestE] === at ? c.chB[bestE] : c.chA[bestE];
+    at = c.chA[bestE] === at ? c.chB[bestE]! : c.chA[bestE]!;
     elements.push(bestE);
     nets.push(at);
-    if (isSource[at] && volts[at] < volts[start]) {
-      const current = Math.min(...elements.map((e) => residual[e]));
-      for (const e of elements) residual[e] -= current;
+    if (isSource[at] && volts[at]! < volts[start]!) {
+      const current = Math.min(...elements.map((e) => residual[e]!));
+      for (const e of elements) residual[e]! -= current;
       return { nets, elements, current };
     }
   }
@@ -79,8 +80,8 @@ function walk(
 
 /** More remaining current wins; near-equal branches go by device name, so order never matters. */
 function preferred(c: CompiledNetlist, residual: Float64Array, e: number, than: number): boolean {
-  const scale = Math.max(residual[e], residual[than]);
-  if (Math.abs(residual[e] - residual[than]) > 1e-9 * scale) return residual[e] > residual[than];
-  const name = (x: number): string => c.netlist.devices[c.chDevice[x]].name;
+  const scale = Math.max(residual[e]!, residual[than]!);
+  if (Math.abs(residual[e]! - residual[than]!) > 1e-9 * scale) return residual[e]! > residual[than]!;
+  const name = (x: number): string => c.netlist.devices[c.chDevice[x]!]!.name;
   return name(e) < name(than);
 }

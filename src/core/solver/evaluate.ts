@@ -1,3 +1,4 @@
+// Hot loop: indexes here are in range by construction, so `!` marks them (no run-time cost).
 import { NMOS, RESISTOR } from '../compile/compile.ts';
 import type { Frame } from './frame.ts';
 import { classify, FLAG_BOUND, FLAG_MAYBE, MAYBE, OFF, ON } from './levels.ts';
@@ -34,8 +35,8 @@ export function conductionFor(kind: number, gateVolts: number, vil: number, vih:
 /** Conduction of a channel element from its gate's voltage in `snapVolts`. */
 export function conductionOf(frame: Frame, e: number, snapVolts: Float64Array): number {
   const { c } = frame;
-  const gate = c.chGate[e];
-  return conductionFor(c.chKind[e], gate >= 0 ? snapVolts[gate] : NaN, c.tech.vil, c.tech.vih);
+  const gate = c.chGate[e]!;
+  return conductionFor(c.chKind[e]!, gate >= 0 ? snapVolts[gate]! : NaN, c.tech.vil, c.tech.vih);
 }
 
 /**
@@ -77,13 +78,13 @@ function setConduction(frame: Frame, snapVolts: Float64Array, sourceVolts: Float
   const base = frame.elemStart;
   let unknown = false;
   for (let j = 0; j < frame.elemCount; j++) {
-    const e = items[base + j];
-    const gate = chGate[e];
-    const state = conductionFor(chKind[e], gate >= 0 ? snapVolts[gate] : NaN, vil, vih);
+    const e = items[base + j]!;
+    const gate = chGate[e]!;
+    const state = conductionFor(chKind[e]!, gate >= 0 ? snapVolts[gate]! : NaN, vil, vih);
     on[j] = state === OFF ? 0 : 1;
     maybe[j] = state === MAYBE ? 1 : 0;
-    const sourceEnd = topo.elemLocalA[e] < 0 ? chA[e] : topo.elemLocalB[e] < 0 ? chB[e] : -1;
-    const vs = sourceEnd >= 0 ? sourceVolts[sourceEnd] : NaN;
+    const sourceEnd = topo.elemLocalA[e]! < 0 ? chA[e]! : topo.elemLocalB[e]! < 0 ? chB[e]! : -1;
+    const vs = sourceEnd >= 0 ? sourceVolts[sourceEnd]! : NaN;
     sourceEndVolts[j] = vs;
     if (state === MAYBE || (sourceEnd >= 0 && vs !== vs)) unknown = true;
   }
@@ -98,14 +99,14 @@ function setConduction(frame: Frame, snapVolts: Float64Array, sourceVolts: Float
  */
 function trySelfGatedOn(frame: Frame): boolean {
   const { start, items } = frame.topo.cccSelfGated;
-  for (let p = start[frame.k]; p < start[frame.k + 1]; p++) {
-    frame.on[items[p]] = 1;
-    frame.maybe[items[p]] = 0;
+  for (let p = start[frame.k]!; p < start[frame.k + 1]!; p++) {
+    frame.on[items[p]!] = 1;
+    frame.maybe[items[p]!] = 0;
   }
   for (let j = 0; j < frame.elemCount; j++) {
     if (frame.maybe[j] || Number.isNaN(frame.sourceEndVolts[j])) {
       const e = frame.element(j);
-      if (frame.maybe[j] || frame.topo.elemLocalA[e] < 0 || frame.topo.elemLocalB[e] < 0) return true;
+      if (frame.maybe[j] || frame.topo.elemLocalA[e]! < 0 || frame.topo.elemLocalB[e]! < 0) return true;
     }
   }
   return false;
@@ -118,7 +119,7 @@ function collectUnknowns(frame: Frame): Unknown[] {
   for (let j = 0; j < frame.elemCount; j++) {
     const e = frame.element(j);
     if (frame.maybe[j]) unknowns.push({ j, isSource: false });
-    const tiedToSource = topo.elemLocalA[e] < 0 || topo.elemLocalB[e] < 0;
+    const tiedToSource = topo.elemLocalA[e]! < 0 || topo.elemLocalB[e]! < 0;
     if (tiedToSource && Number.isNaN(frame.sourceEndVolts[j])) unknowns.push({ j, isSource: true });
   }
   return unknowns;
@@ -166,8 +167,8 @@ function groupsUnderMaybe(frame: Frame): (j: number) => number {
   const roots = Int32Array.from({ length: frame.netCount }, (_, i) => frame.root(i));
   return (j) => {
     const e = frame.element(j);
-    const a = topo.elemLocalA[e];
-    return roots[a >= 0 ? a : topo.elemLocalB[e]];
+    const a = topo.elemLocalA[e]!;
+    return roots[a >= 0 ? a : topo.elemLocalB[e]!]!;
   };
 }
 
@@ -202,18 +203,18 @@ class TrialMerge {
     const f = this.frame;
     const { vil, vih } = f.c.tech;
     for (let i = 0; i < f.netCount; i++) {
-      const level = classify(f.volts[i], vil, vih);
-      this.anyDriven[i] |= f.driven[i];
+      const level = classify(f.volts[i]!, vil, vih);
+      this.anyDriven[i]! |= f.driven[i]!;
       if (this.trials === 0) {
-        this.volts[i] = f.volts[i];
-        this.driven[i] = f.driven[i];
-        this.flags[i] = f.flags[i];
-        this.limiter[i] = f.limiter[i];
+        this.volts[i] = f.volts[i]!;
+        this.driven[i] = f.driven[i]!;
+        this.flags[i] = f.flags[i]!;
+        this.limiter[i] = f.limiter[i]!;
         this.level[i] = level;
       } else if (level !== this.level[i] || f.driven[i] !== this.driven[i]) {
         this.agree[i] = 0;
       } else {
-        this.flags[i] |= f.flags[i];
+        this.flags[i]! |= f.flags[i]!;
       }
     }
     if (this.trials === 0) this.current.set(f.current.subarray(0, f.elemCount));
@@ -227,16 +228,16 @@ class TrialMerge {
     for (let j = 0; j < f.elemCount; j++) {
       if (!overBound.has(groupOf(j))) continue;
       const e = f.element(j);
-      for (const local of [f.topo.elemLocalA[e], f.topo.elemLocalB[e]]) if (local >= 0) bounded.add(local);
+      for (const local of [f.topo.elemLocalA[e]!, f.topo.elemLocalB[e]!]) if (local >= 0) bounded.add(local);
     }
     for (let i = 0; i < f.netCount; i++) {
       const definite = this.agree[i] && !bounded.has(i);
       const unknown = !definite;
-      f.volts[i] = unknown ? NaN : this.volts[i];
+      f.volts[i] = unknown ? NaN : this.volts[i]!;
       // An unknown net counts as driven when some combination drives it (it reads X, not Z).
-      f.driven[i] = unknown ? this.anyDriven[i] : this.driven[i];
-      f.limiter[i] = unknown ? -1 : this.limiter[i];
-      f.flags[i] = unknown ? FLAG_MAYBE | (bounded.has(i) ? FLAG_BOUND : 0) : this.flags[i];
+      f.driven[i] = unknown ? this.anyDriven[i]! : this.driven[i]!;
+      f.limiter[i] = unknown ? -1 : this.limiter[i]!;
+      f.flags[i] = unknown ? FLAG_MAYBE | (bounded.has(i) ? FLAG_BOUND : 0) : this.flags[i]!;
     }
     f.current.set(this.current);
   }
@@ -245,10 +246,10 @@ class TrialMerge {
 function writeTrial(frame: Frame, out: EvaluationTarget): void {
   for (let i = 0; i < frame.netCount; i++) {
     const n = frame.net(i);
-    out.volts[n] = frame.volts[i];
-    out.driven[n] = frame.driven[i];
-    out.flags[n] = frame.flags[i];
-    out.limiter[n] = frame.limiter[i];
+    out.volts[n] = frame.volts[i]!;
+    out.driven[n] = frame.driven[i]!;
+    out.flags[n] = frame.flags[i]!;
+    out.limiter[n] = frame.limiter[i]!;
   }
-  for (let j = 0; j < frame.elemCount; j++) out.chCurrent[frame.element(j)] = frame.current[j];
+  for (let j = 0; j < frame.elemCount; j++) out.chCurrent[frame.element(j)] = frame.current[j]!;
 }

@@ -1,3 +1,4 @@
+// Hot loop: indexes here are in range by construction, so `!` marks them (no run-time cost).
 import type { CompiledNetlist } from '../compile/compile.ts';
 import { evaluateCcc } from './evaluate.ts';
 import type { Frame } from './frame.ts';
@@ -53,7 +54,7 @@ export class FeedbackSearch {
     private readonly scratch: NetState,
   ) {
     const { vil, vih, vdd } = c.tech;
-    const deviceName = (e: number): string => c.netlist.devices[c.chDevice[e]].name;
+    const deviceName = (e: number): string => c.netlist.devices[c.chDevice[e]!]!.name;
     this.merge = { vil, vih, vdd, deviceName };
   }
 
@@ -72,7 +73,7 @@ export class FeedbackSearch {
       undecided.length > MAX_FEEDBACK_GUESSES ||
       2 ** undecided.length * group.elements.length > MAX_FEEDBACK_WORK
     ) {
-      for (const n of undecided) state.flags[n] |= FLAG_BOUND;
+      for (const n of undecided) state.flags[n]! |= FLAG_BOUND;
       return;
     }
     const before = GroupSnapshot.take(group.nets, group.elements, state);
@@ -85,7 +86,7 @@ export class FeedbackSearch {
     }
     before.restore(state);
     if (steady.length === 0) {
-      for (const n of undecided) state.flags[n] |= FLAG_OSCILLATING;
+      for (const n of undecided) state.flags[n]! |= FLAG_OSCILLATING;
       return;
     }
     mergeSteadyStates(steady, state, before.anyFlag(FLAG_OSCILLATING), this.merge);
@@ -107,13 +108,13 @@ export class FeedbackSearch {
     const once = this.compare(undecided, guess, scratch.volts);
     if (once !== 'steady') return once;
     for (const n of group.nets) {
-      state.volts[n] = scratch.volts[n];
-      state.driven[n] = scratch.driven[n];
-      state.flags[n] = scratch.flags[n];
-      state.limiter[n] = scratch.limiter[n];
+      state.volts[n] = scratch.volts[n]!;
+      state.driven[n] = scratch.driven[n]!;
+      state.flags[n] = scratch.flags[n]!;
+      state.limiter[n] = scratch.limiter[n]!;
     }
     settle();
-    if (group.nets.some((n) => (state.flags[n] & FLAG_OSCILLATING) !== 0)) return 'unsure';
+    if (group.nets.some((n) => (state.flags[n]! & FLAG_OSCILLATING) !== 0)) return 'unsure';
     return this.compare(undecided, guess, state.volts) === 'steady' ? 'steady' : 'unsure';
   }
 
@@ -122,7 +123,7 @@ export class FeedbackSearch {
     const { vil, vih } = this.c.tech;
     let unknown = false;
     for (let bit = 0; bit < undecided.length; bit++) {
-      const v = volts[undecided[bit]];
+      const v = volts[undecided[bit]!]!;
       if (Number.isNaN(v)) unknown = true;
       else if (classify(v, vil, vih) !== ((guess >> bit) & 1 ? LEVEL_1 : LEVEL_0)) return 'moves';
     }
@@ -131,7 +132,7 @@ export class FeedbackSearch {
 
   private unknownFromOutside(group: Group, volts: Float64Array): boolean {
     const { vil, vih } = this.c.tech;
-    return group.outside.some((n) => classify(volts[n], vil, vih) === LEVEL_X);
+    return group.outside.some((n) => classify(volts[n]!, vil, vih) === LEVEL_X);
   }
 
   private group(s: number, members: readonly number[]): Group {
@@ -157,14 +158,14 @@ function describeGroup(
   const feedback = new Set<number>();
   const outside = new Set<number>();
   for (const k of members) {
-    for (let i = cccNets.start[k]; i < cccNets.start[k + 1]; i++) nets.push(cccNets.items[i]);
-    for (let i = cccElements.start[k]; i < cccElements.start[k + 1]; i++) {
-      const e = cccElements.items[i];
+    for (let i = cccNets.start[k]!; i < cccNets.start[k + 1]!; i++) nets.push(cccNets.items[i]!);
+    for (let i = cccElements.start[k]!; i < cccElements.start[k + 1]!; i++) {
+      const e = cccElements.items[i]!;
       elements.push(e);
-      for (const end of [c.chA[e], c.chB[e]]) if (isSource[end]) outside.add(end);
-      const g = c.chGate[e];
+      for (const end of [c.chA[e]!, c.chB[e]!]) if (isSource[end]) outside.add(end);
+      const g = c.chGate[e]!;
       if (g < 0 || selfGate[e] !== GATE_NOT_TIED) continue;
-      if (cccOfNet[g] >= 0 && sccOf[cccOfNet[g]] === s) feedback.add(g);
+      if (cccOfNet[g]! >= 0 && sccOf[cccOfNet[g]!] === s) feedback.add(g);
       else outside.add(g);
     }
   }

@@ -1,3 +1,4 @@
+// Hot loop: indexes here are in range by construction, so `!` marks them (no run-time cost).
 import type { CompiledNetlist } from '../compile/compile.ts';
 import type { Topology } from './topology.ts';
 
@@ -51,8 +52,8 @@ export class Frame {
     let maxNets = 1;
     let maxElems = 1;
     for (let k = 0; k < topo.cccCount; k++) {
-      maxNets = Math.max(maxNets, topo.cccNets.start[k + 1] - topo.cccNets.start[k]);
-      maxElems = Math.max(maxElems, topo.cccElements.start[k + 1] - topo.cccElements.start[k]);
+      maxNets = Math.max(maxNets, topo.cccNets.start[k + 1]! - topo.cccNets.start[k]!);
+      maxElems = Math.max(maxElems, topo.cccElements.start[k + 1]! - topo.cccElements.start[k]!);
     }
     this.on = new Uint8Array(maxElems);
     this.maybe = new Uint8Array(maxElems);
@@ -78,7 +79,7 @@ export class Frame {
   nameRanks(): Int32Array {
     if (this.ranks === null) {
       const { c } = this;
-      const name = (e: number): string => c.netlist.devices[c.chDevice[e]].name;
+      const name = (e: number): string => c.netlist.devices[c.chDevice[e]!]!.name;
       const order = Array.from({ length: c.chCount }, (_, e) => e);
       order.sort((x, y) => (name(x) < name(y) ? -1 : name(x) > name(y) ? 1 : x - y));
       this.ranks = new Int32Array(c.chCount);
@@ -89,20 +90,20 @@ export class Frame {
 
   select(k: number): void {
     this.k = k;
-    this.netStart = this.topo.cccNets.start[k];
-    this.netCount = this.topo.cccNets.start[k + 1] - this.netStart;
-    this.elemStart = this.topo.cccElements.start[k];
-    this.elemCount = this.topo.cccElements.start[k + 1] - this.elemStart;
+    this.netStart = this.topo.cccNets.start[k]!;
+    this.netCount = this.topo.cccNets.start[k + 1]! - this.netStart;
+    this.elemStart = this.topo.cccElements.start[k]!;
+    this.elemCount = this.topo.cccElements.start[k + 1]! - this.elemStart;
   }
 
   /** Global net of local net i. */
   net(i: number): number {
-    return this.topo.cccNets.items[this.netStart + i];
+    return this.topo.cccNets.items[this.netStart + i]!;
   }
 
   /** Global element of local element j. */
   element(j: number): number {
-    return this.topo.cccElements.items[this.elemStart + j];
+    return this.topo.cccElements.items[this.elemStart + j]!;
   }
 
   /** Union-find over the selected CCC: nets joined by elements marked on (maybe counts as on). */
@@ -112,8 +113,8 @@ export class Frame {
     for (let j = 0; j < this.elemCount; j++) {
       if (!this.on[j]) continue;
       const e = this.element(j);
-      const a = topo.elemLocalA[e];
-      const b = topo.elemLocalB[e];
+      const a = topo.elemLocalA[e]!;
+      const b = topo.elemLocalB[e]!;
       if (a < 0 || b < 0) continue;
       const ra = this.root(a);
       const rb = this.root(b);
@@ -125,8 +126,8 @@ export class Frame {
   root(i: number): number {
     const p = this.parent;
     while (p[i] !== i) {
-      p[i] = p[p[i]];
-      i = p[i];
+      p[i] = p[p[i]!]!;
+      i = p[i]!;
     }
     return i;
   }

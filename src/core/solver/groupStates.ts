@@ -1,3 +1,4 @@
+// Hot loop: indexes here are in range by construction, so `!` marks them (no run-time cost).
 import { classify, FLAG_OSCILLATING, FLAG_STATES, LEVEL_0, LEVEL_1 } from './levels.ts';
 import type { NetState } from './schedule.ts';
 
@@ -15,7 +16,7 @@ export class GroupSnapshot {
 
   static take(nets: Int32Array, elements: Int32Array, state: NetState): GroupSnapshot {
     const pick = <T extends Float64Array | Uint8Array | Int32Array>(from: T, into: T, at: Int32Array): T => {
-      at.forEach((n, i) => (into[i] = from[n]));
+      at.forEach((n, i) => (into[i] = from[n]!));
       return into;
     };
     return new GroupSnapshot(
@@ -31,12 +32,12 @@ export class GroupSnapshot {
 
   restore(state: NetState): void {
     this.nets.forEach((n, i) => {
-      state.volts[n] = this.volts[i];
-      state.driven[n] = this.driven[i];
-      state.flags[n] = this.flags[i];
-      state.limiter[n] = this.limiter[i];
+      state.volts[n] = this.volts[i]!;
+      state.driven[n] = this.driven[i]!;
+      state.flags[n] = this.flags[i]!;
+      state.limiter[n] = this.limiter[i]!;
     });
-    this.elements.forEach((e, j) => (state.chCurrent[e] = this.current[j]));
+    this.elements.forEach((e, j) => (state.chCurrent[e] = this.current[j]!));
   }
 
   anyFlag(flag: number): boolean {
@@ -66,8 +67,9 @@ export function mergeSteadyStates(
   ctx: MergeContext,
 ): void {
   const [first] = states;
+  if (first === undefined) return; // no steady state: nothing they agree on
   first.nets.forEach((n, i) => {
-    const key = (s: GroupSnapshot): string => `${classify(s.volts[i], ctx.vil, ctx.vih)}${s.driven[i]}`;
+    const key = (s: GroupSnapshot): string => `${classify(s.volts[i]!, ctx.vil, ctx.vih)}${s.driven[i]}`;
     const agree = states.every((s) => key(s) === key(first));
     if (!agree) {
       state.volts[n] = NaN;
@@ -77,27 +79,27 @@ export function mergeSteadyStates(
       return;
     }
     const chosen = worstOf(states, i, ctx);
-    state.volts[n] = chosen.volts[i];
-    state.driven[n] = chosen.driven[i];
-    state.flags[n] = states.reduce((f, s) => f | s.flags[i], 0);
-    state.limiter[n] = chosen.limiter[i];
+    state.volts[n] = chosen.volts[i]!;
+    state.driven[n] = chosen.driven[i]!;
+    state.flags[n] = states.reduce((f, s) => f | s.flags[i]!, 0);
+    state.limiter[n] = chosen.limiter[i]!;
   });
   first.elements.forEach((e, j) => {
-    const a = first.current[j];
-    const same = states.every((s) => Math.abs(s.current[j] - a) <= 1e-9 * Math.max(Math.abs(a), 1e-30));
+    const a = first.current[j]!;
+    const same = states.every((s) => Math.abs(s.current[j]! - a) <= 1e-9 * Math.max(Math.abs(a), 1e-30));
     state.chCurrent[e] = same ? a : 0;
   });
 }
 
 /** The state with the worst voltage on local net i; equal voltages go by the limiter's device name. */
 function worstOf(states: readonly GroupSnapshot[], i: number, ctx: MergeContext): GroupSnapshot {
-  const level = classify(states[0].volts[i], ctx.vil, ctx.vih);
+  const level = classify(states[0]!.volts[i]!, ctx.vil, ctx.vih);
   const badness = (v: number): number =>
     level === LEVEL_1 ? -v : level === LEVEL_0 ? v : -Math.abs(v - ctx.vdd / 2);
-  const rank = (s: GroupSnapshot): string => (s.limiter[i] < 0 ? '\uffff' : ctx.deviceName(s.limiter[i]));
-  let best = states[0];
+  const rank = (s: GroupSnapshot): string => (s.limiter[i]! < 0 ? '\uffff' : ctx.deviceName(s.limiter[i]!));
+  let best = states[0]!;
   for (const s of states) {
-    const d = badness(s.volts[i]) - badness(best.volts[i]);
+    const d = badness(s.volts[i]!) - badness(best.volts[i]!);
     if (d > 1e-12 || (Math.abs(d) <= 1e-12 && rank(s) < rank(best))) best = s;
   }
   return best;

@@ -1,3 +1,4 @@
+// Hot loop: indexes here are in range by construction, so `!` marks them (no run-time cost).
 import type { CompiledNetlist } from '../compile/compile.ts';
 import { csrFrom, type Csr } from '../compile/csr.ts';
 import type { NetState } from './schedule.ts';
@@ -48,12 +49,12 @@ export class OutcomeMemo {
         rows.push(k);
         items.push(n);
       };
-      for (let i = cccElements.start[k]; i < cccElements.start[k + 1]; i++) {
-        const e = cccElements.items[i];
+      for (let i = cccElements.start[k]!; i < cccElements.start[k + 1]!; i++) {
+        const e = cccElements.items[i]!;
         // A self-gated element's gate is one of the component's own nets, which it solves itself.
-        if (c.chGate[e] >= 0 && topology.selfGate[e] === 0) add(c.chGate[e]);
-        if (topology.isSource[c.chA[e]]) add(c.chA[e]);
-        if (topology.isSource[c.chB[e]]) add(c.chB[e]);
+        if (c.chGate[e]! >= 0 && topology.selfGate[e] === 0) add(c.chGate[e]!);
+        if (topology.isSource[c.chA[e]!]) add(c.chA[e]!);
+        if (topology.isSource[c.chB[e]!]) add(c.chB[e]!);
       }
       if (items.length - first > MAX_KEY_NETS) {
         rows.length = items.length = first;
@@ -70,11 +71,11 @@ export class OutcomeMemo {
     const { start, items } = this.keyNets;
     const vdd = this.c.tech.vdd;
     let key = 0;
-    for (let i = start[k]; i < start[k + 1]; i++) {
-      const n = items[i];
+    for (let i = start[k]!; i < start[k + 1]!; i++) {
+      const n = items[i]!;
       if (n < 0) return -1;
       const v = volts[n];
-      if (v === vdd) key |= 1 << (i - start[k]);
+      if (v === vdd) key |= 1 << (i - start[k]!);
       else if (v !== 0) return -1;
     }
     return key;
@@ -85,19 +86,19 @@ export class OutcomeMemo {
     const outcome = this.tables[k]?.get(key);
     if (!outcome || (outcome.floats && !fresh)) return false;
     const { cccNets, cccElements } = this.topology;
-    const n0 = cccNets.start[k];
-    const count = cccNets.start[k + 1] - n0;
+    const n0 = cccNets.start[k]!;
+    const count = cccNets.start[k + 1]! - n0;
     const { data } = outcome;
     for (let i = 0; i < count; i++) {
-      const n = cccNets.items[n0 + i];
-      state.volts[n] = data[i];
-      state.driven[n] = data[count + i];
-      state.flags[n] = data[2 * count + i];
-      state.limiter[n] = data[3 * count + i];
+      const n = cccNets.items[n0 + i]!;
+      state.volts[n] = data[i]!;
+      state.driven[n] = data[count + i]!;
+      state.flags[n] = data[2 * count + i]!;
+      state.limiter[n] = data[3 * count + i]!;
     }
-    const e0 = cccElements.start[k];
-    const elements = cccElements.start[k + 1] - e0;
-    for (let j = 0; j < elements; j++) state.chCurrent[cccElements.items[e0 + j]] = data[4 * count + j];
+    const e0 = cccElements.start[k]!;
+    const elements = cccElements.start[k + 1]! - e0;
+    for (let j = 0; j < elements; j++) state.chCurrent[cccElements.items[e0 + j]!] = data[4 * count + j]!;
     return true;
   }
 
@@ -106,22 +107,22 @@ export class OutcomeMemo {
     const table = (this.tables[k] ??= new Map());
     if (table.size >= MAX_ENTRIES) return;
     const { cccNets, cccElements } = this.topology;
-    const n0 = cccNets.start[k];
-    const count = cccNets.start[k + 1] - n0;
-    const e0 = cccElements.start[k];
-    const elements = cccElements.start[k + 1] - e0;
+    const n0 = cccNets.start[k]!;
+    const count = cccNets.start[k + 1]! - n0;
+    const e0 = cccElements.start[k]!;
+    const elements = cccElements.start[k + 1]! - e0;
     let floats = false;
     const data = new Float64Array(4 * count + elements);
     for (let i = 0; i < count; i++) {
-      const n = cccNets.items[n0 + i];
-      data[i] = state.volts[n];
-      data[count + i] = state.driven[n];
-      data[2 * count + i] = state.flags[n];
-      data[3 * count + i] = state.limiter[n];
+      const n = cccNets.items[n0 + i]!;
+      data[i] = state.volts[n]!;
+      data[count + i] = state.driven[n]!;
+      data[2 * count + i] = state.flags[n]!;
+      data[3 * count + i] = state.limiter[n]!;
       if (state.driven[n] === 0) floats = true;
     }
     if (floats && !fresh) return;
-    for (let j = 0; j < elements; j++) data[4 * count + j] = state.chCurrent[cccElements.items[e0 + j]];
+    for (let j = 0; j < elements; j++) data[4 * count + j] = state.chCurrent[cccElements.items[e0 + j]!]!;
     table.set(key, { data, floats });
   }
 }

@@ -1,3 +1,4 @@
+// Hot loop: indexes here are in range by construction, so `!` marks them (no run-time cost).
 import { Matrix, solve } from 'ml-matrix';
 import type { Frame } from './frame.ts';
 
@@ -22,7 +23,7 @@ export function solveNodal(frame: Frame, root: number): boolean {
   const { c } = frame;
   const order: number[] = [];
   const position = new Map<number, number>();
-  for (let i = frame.head[root]; i >= 0; i = frame.next[i]) {
+  for (let i = frame.head[root]!; i >= 0; i = frame.next[i]!) {
     position.set(i, order.length);
     order.push(i);
   }
@@ -34,7 +35,7 @@ export function solveNodal(frame: Frame, root: number): boolean {
   let lo = Infinity;
   let hi = -Infinity;
   forEachConducting(frame, root, (j, e, a, bb) => {
-    const conductance = 1 / c.chOhms[e];
+    const conductance = 1 / c.chOhms[e]!;
     least = Math.min(least, conductance);
     most = Math.max(most, conductance);
     if (a >= 0 && bb >= 0) {
@@ -47,9 +48,9 @@ export function solveNodal(frame: Frame, root: number): boolean {
     } else {
       const p = position.get(a >= 0 ? a : bb) as number;
       g.set(p, p, g.get(p, p) + conductance);
-      b.set(p, 0, b.get(p, 0) + conductance * frame.sourceEndVolts[j]);
-      lo = Math.min(lo, frame.sourceEndVolts[j]);
-      hi = Math.max(hi, frame.sourceEndVolts[j]);
+      b.set(p, 0, b.get(p, 0) + conductance * frame.sourceEndVolts[j]!);
+      lo = Math.min(lo, frame.sourceEndVolts[j]!);
+      hi = Math.max(hi, frame.sourceEndVolts[j]!);
     }
   });
   // One unknown is a plain division, exact to rounding whatever the spread.
@@ -57,11 +58,11 @@ export function solveNodal(frame: Frame, root: number): boolean {
   const v = linearSolve(g, b, n);
   const slack = 1e-9 * Math.max(1, Math.abs(hi), Math.abs(lo));
   if (v === null || v.some((x) => !(x >= lo - slack && x <= hi + slack))) return false;
-  order.forEach((i, p) => (frame.volts[i] = v[p]));
+  order.forEach((i, p) => (frame.volts[i] = v[p]!));
   forEachConducting(frame, root, (j, e, a, bb) => {
-    const va = a >= 0 ? frame.volts[a] : frame.sourceEndVolts[j];
-    const vb = bb >= 0 ? frame.volts[bb] : frame.sourceEndVolts[j];
-    frame.current[j] = (va - vb) / c.chOhms[e];
+    const va = a >= 0 ? frame.volts[a]! : frame.sourceEndVolts[j]!;
+    const vb = bb >= 0 ? frame.volts[bb]! : frame.sourceEndVolts[j]!;
+    frame.current[j] = (va - vb) / c.chOhms[e]!;
   });
   return true;
 }
@@ -89,8 +90,8 @@ function forEachConducting(
   for (let j = 0; j < frame.elemCount; j++) {
     if (!frame.on[j]) continue;
     const e = frame.element(j);
-    const a = topo.elemLocalA[e];
-    const b = topo.elemLocalB[e];
+    const a = topo.elemLocalA[e]!;
+    const b = topo.elemLocalB[e]!;
     if (a < 0 && b < 0) continue;
     const inside = a >= 0 ? frame.root(a) === root : frame.root(b) === root;
     if (!inside || a === b) continue;

@@ -1,3 +1,4 @@
+// Hot loop: indexes here are in range by construction, so `!` marks them (no run-time cost).
 import type { CompiledNetlist } from '../compile/compile.ts';
 import { evaluateCcc, type EvaluationTarget } from './evaluate.ts';
 import { FeedbackSearch } from './feedback.ts';
@@ -47,17 +48,17 @@ export class Schedule {
     const order = topology.sccOrder;
     this.sccOf = new Int32Array(topology.cccCount);
     for (let s = 0; s + 1 < order.start.length; s++) {
-      for (let i = order.start[s]; i < order.start[s + 1]; i++) this.sccOf[order.items[i]] = s;
+      for (let i = order.start[s]!; i < order.start[s + 1]!; i++) this.sccOf[order.items[i]!] = s;
     }
     this.selfDependent = new Uint8Array(topology.cccCount);
     const d = topology.cccDependents;
     for (let k = 0; k < topology.cccCount; k++) {
-      for (let i = d.start[k]; i < d.start[k + 1]; i++) if (d.items[i] === k) this.selfDependent[k] = 1;
+      for (let i = d.start[k]!; i < d.start[k + 1]!; i++) if (d.items[i] === k) this.selfDependent[k] = 1;
     }
     this.elemCcc = new Int32Array(c.chCount);
     for (let e = 0; e < c.chCount; e++) {
-      const a = topology.cccOfNet[c.chA[e]];
-      this.elemCcc[e] = a >= 0 ? a : topology.cccOfNet[c.chB[e]];
+      const a = topology.cccOfNet[c.chA[e]!]!;
+      this.elemCcc[e] = a >= 0 ? a : topology.cccOfNet[c.chB[e]!]!;
     }
     this.next = {
       volts: new Float64Array(c.netCount),
@@ -71,7 +72,7 @@ export class Schedule {
     this.sourceNets = Int32Array.from(sources);
     const ties: number[] = [];
     for (let e = 0; e < c.chCount; e++)
-      if (topology.isSource[c.chA[e]] || topology.isSource[c.chB[e]]) ties.push(e);
+      if (topology.isSource[c.chA[e]!] || topology.isSource[c.chB[e]!]) ties.push(e);
     this.sourceTies = Int32Array.from(ties);
     this.memo = new OutcomeMemo(c, topology);
     // The search evaluates a guess into `next` and copies it out before the Jacobi rounds use it again.
@@ -87,10 +88,10 @@ export class Schedule {
   /** Marks dirty the components whose elements a net gates or ties to (used for changed sources). */
   markTouching(dirty: Uint8Array, n: number): void {
     const { netGates, netChannels } = this.c;
-    for (let p = netGates.start[n]; p < netGates.start[n + 1]; p++)
-      this.mark(dirty, this.elemCcc[netGates.items[p]]);
-    for (let p = netChannels.start[n]; p < netChannels.start[n + 1]; p++)
-      this.mark(dirty, this.elemCcc[netChannels.items[p]]);
+    for (let p = netGates.start[n]!; p < netGates.start[n + 1]!; p++)
+      this.mark(dirty, this.elemCcc[netGates.items[p]!]!);
+    for (let p = netChannels.start[n]!; p < netChannels.start[n + 1]!; p++)
+      this.mark(dirty, this.elemCcc[netChannels.items[p]!]!);
   }
 
   private mark(dirty: Uint8Array, k: number): void {
@@ -99,8 +100,8 @@ export class Schedule {
 
   private markGated(dirty: Uint8Array, n: number): void {
     const { netGates } = this.c;
-    for (let p = netGates.start[n]; p < netGates.start[n + 1]; p++)
-      this.mark(dirty, this.elemCcc[netGates.items[p]]);
+    for (let p = netGates.start[n]!; p < netGates.start[n + 1]!; p++)
+      this.mark(dirty, this.elemCcc[netGates.items[p]!]!);
   }
 
   /**
@@ -116,31 +117,49 @@ export class Schedule {
     // the caller starts fresh solves from unknown charge already.
     const tracked = dirty !== 'all';
     for (let s = 0; s + 1 < order.start.length; s++) {
-      const first = order.start[s];
-      const end = order.start[s + 1];
+      const first = order.start[s]!;
+      const end = order.start[s + 1]!;
       if (tracked && !this.anyDirty(dirty, first, end)) continue;
-      if (tracked) for (let i = first; i < end; i++) this.forget(order.items[i], state, fresh);
-      if (end - first === 1 && !this.selfDependent[order.items[first]]) {
-        this.evaluateOne(order.items[first], sourceVolts, state, fresh);
-      } else {
-        this.settle(s, Array.from(order.items.subarray(first, end)), sourceVolts, state);
-      }
-      if (tracked) for (let i = first; i < end; i++) this.markChangedNets(order.items[i], state, dirty);
+      if (tracked) for (let i = first; i < end; i++) this.forget(order.items[i]!, state, fresh);
+      this.evaluateGroup(s, sourceVolts, state, fresh);
+      if (tracked) for (let i = first; i < end; i++) this.markChangedNets(order.items[i]!, state, dirty);
     }
+  }
+
+  /**
+   * Evaluates strongly connected group s (a row of `topology.sccOrder`) against the voltages now in
+   * `state` (its gates outside the group, the sources tied to it) and `sourceVolts`, and writes its nets
+   * and elements into `state`: one component outside any loop is evaluated once, a feedback group by
+   * Jacobi rounds and the steady-state search. With `fresh`, the caller has set the group's nets to
+   * unknown charge (NaN, not driven) first, as a sweep does. The one evaluation of a group: the solve
+   * and the component tables (`core/tables`) both call it, so they can never disagree.
+   */
+  evaluateGroup(s: number, sourceVolts: Float64Array, state: NetState, fresh: boolean): void {
+    const order = this.topology.sccOrder;
+    const first = order.start[s]!; // s is a group of this topology: its row bounds exist
+    if (this.isSimpleGroup(s)) this.evaluateOne(order.items[first]!, sourceVolts, state, fresh);
+    else this.settle(s, Array.from(order.items.subarray(first, order.start[s + 1])), sourceVolts, state);
+  }
+
+  /** True when group s is one component that gates none of its own elements (no feedback). */
+  isSimpleGroup(s: number): boolean {
+    const order = this.topology.sccOrder;
+    const first = order.start[s]!;
+    return order.start[s + 1]! - first === 1 && !this.selfDependent[order.items[first]!];
   }
 
   private anyDirty(dirty: Uint8Array, first: number, end: number): boolean {
     const items = this.topology.sccOrder.items;
-    for (let i = first; i < end; i++) if (dirty[items[i]]) return true;
+    for (let i = first; i < end; i++) if (dirty[items[i]!]) return true;
     return false;
   }
 
   /** Marks dirty what component k's changed nets gate. */
   private markChangedNets(k: number, state: NetState, dirty: Uint8Array): void {
     const { cccNets } = this.topology;
-    for (let q = cccNets.start[k]; q < cccNets.start[k + 1]; q++) {
-      const n = cccNets.items[q];
-      if (!sameVolts(this.saved[n], state.volts[n]) || this.savedDriven[n] !== state.driven[n])
+    for (let q = cccNets.start[k]!; q < cccNets.start[k + 1]!; q++) {
+      const n = cccNets.items[q]!;
+      if (!sameVolts(this.saved[n]!, state.volts[n]!) || this.savedDriven[n] !== state.driven[n])
         this.markGated(dirty, n);
     }
   }
@@ -156,10 +175,10 @@ export class Schedule {
   /** Remembers a component's values (to see what changed) and, in fresh mode, clears its charge. */
   private forget(k: number, state: NetState, fresh: boolean): void {
     const { cccNets } = this.topology;
-    for (let q = cccNets.start[k]; q < cccNets.start[k + 1]; q++) {
-      const n = cccNets.items[q];
-      this.saved[n] = state.volts[n];
-      this.savedDriven[n] = state.driven[n];
+    for (let q = cccNets.start[k]!; q < cccNets.start[k + 1]!; q++) {
+      const n = cccNets.items[q]!;
+      this.saved[n] = state.volts[n]!;
+      this.savedDriven[n] = state.driven[n]!;
       if (fresh) {
         state.volts[n] = NaN;
         state.driven[n] = 0;
@@ -190,10 +209,10 @@ export class Schedule {
       if (round >= limit) for (const n of changed) freezeUnknown(state, frozen, n);
       dirty = new Set();
       for (const n of changed) {
-        const k = topology.cccOfNet[n];
+        const k = topology.cccOfNet[n]!;
         const d = topology.cccDependents;
-        for (let i = d.start[k]; i < d.start[k + 1]; i++)
-          if (this.sccOf[d.items[i]] === s) dirty.add(d.items[i]);
+        for (let i = d.start[k]!; i < d.start[k + 1]!; i++)
+          if (this.sccOf[d.items[i]!] === s) dirty.add(d.items[i]!);
       }
     }
     if (dirty.size > 0) {
@@ -203,8 +222,8 @@ export class Schedule {
 }
 
 function forEachNet(topology: Topology, k: number, visit: (n: number) => void): void {
-  for (let i = topology.cccNets.start[k]; i < topology.cccNets.start[k + 1]; i++)
-    visit(topology.cccNets.items[i]);
+  for (let i = topology.cccNets.start[k]!; i < topology.cccNets.start[k + 1]!; i++)
+    visit(topology.cccNets.items[i]!);
 }
 
 export function sameVolts(a: number, b: number): boolean {
@@ -223,11 +242,11 @@ function commit(
   for (const k of evaluated) {
     forEachNet(topology, k, (n) => {
       if (frozen.has(n)) return;
-      if (!sameVolts(state.volts[n], next.volts[n]) || state.driven[n] !== next.driven[n]) changed.push(n);
-      state.volts[n] = next.volts[n];
-      state.driven[n] = next.driven[n];
-      state.flags[n] = next.flags[n];
-      state.limiter[n] = next.limiter[n];
+      if (!sameVolts(state.volts[n]!, next.volts[n]!) || state.driven[n] !== next.driven[n]) changed.push(n);
+      state.volts[n] = next.volts[n]!;
+      state.driven[n] = next.driven[n]!;
+      state.flags[n] = next.flags[n]!;
+      state.limiter[n] = next.limiter[n]!;
     });
   }
   return changed;

@@ -1,3 +1,4 @@
+// Hot loop: indexes here are in range by construction, so `!` marks them (no run-time cost).
 import { NMOS, type CompiledNetlist } from '../compile/compile.ts';
 import type { Technology } from '../model/technology.ts';
 import { MAYBE, OFF, ON } from './levels.ts';
@@ -24,7 +25,7 @@ export const GATE_TIED_B = 2;
 export function selfGateEnds(c: CompiledNetlist, isSource: Uint8Array): Uint8Array {
   const ends = new Uint8Array(c.chCount);
   for (let e = 0; e < c.chCount; e++) {
-    const g = c.chGate[e];
+    const g = c.chGate[e]!;
     if (g < 0 || c.chA[e] === c.chB[e] || isSource[g]) continue;
     if (g === c.chA[e]) ends[e] = GATE_TIED_A;
     else if (g === c.chB[e]) ends[e] = GATE_TIED_B;

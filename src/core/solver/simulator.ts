@@ -1,3 +1,4 @@
+// Hot loop: indexes here are in range by construction, so `!` marks them (no run-time cost).
 import type { CompiledNetlist } from '../compile/compile.ts';
 import type { InputVector } from '../model/design.ts';
 import { currentPaths, type PathIndices } from './currentPaths.ts';
@@ -112,9 +113,9 @@ export class Simulator {
     const c = this.compiled;
     const volts = c.railVolts.slice();
     for (let i = 0; i < c.inputNets.length; i++) {
-      const n = c.inputNets[i];
+      const n = c.inputNets[i]!;
       if (!topology.isSource[n]) continue;
-      const value = inputs[c.netlist.inputs[i]];
+      const value = inputs[c.netlist.inputs[i]!];
       volts[n] = value === '1' ? c.tech.vdd : value === '0' ? 0 : NaN;
     }
     return volts;
@@ -153,7 +154,7 @@ export class Simulator {
       this.markChanged(schedule, base, sourceVolts, dirty, fresh);
     }
     for (const n of schedule.sourceNets) {
-      state.volts[n] = sourceVolts[n];
+      state.volts[n] = sourceVolts[n]!;
       state.driven[n] = 1;
       state.flags[n] = 0;
     }
@@ -176,16 +177,16 @@ export class Simulator {
     fresh: boolean,
   ): void {
     for (const n of schedule.sourceNets) {
-      if (!sameVolts(sourceVolts[n], base.sourceVolts[n])) schedule.markTouching(dirty, n);
+      if (!sameVolts(sourceVolts[n]!, base.sourceVolts[n]!)) schedule.markTouching(dirty, n);
     }
     if (fresh) return;
     const { cccOfNet } = schedule.topology;
     for (let n = 0; n < base.flags.length; n++) {
       if (
-        cccOfNet[n] >= 0 &&
-        base.flags[n] & (FLAG_CHARGE_SHARED | FLAG_OSCILLATING | FLAG_MAYBE | FLAG_STATES)
+        cccOfNet[n]! >= 0 &&
+        base.flags[n]! & (FLAG_CHARGE_SHARED | FLAG_OSCILLATING | FLAG_MAYBE | FLAG_STATES)
       )
-        dirty[cccOfNet[n]] = 1;
+        dirty[cccOfNet[n]!] = 1;
     }
   }
 
@@ -196,12 +197,12 @@ export class Simulator {
   private conductionAll(topology: Topology, volts: Float64Array, into: Uint8Array): Uint8Array {
     const { chKind, chGate, chA, chB, tech } = this.compiled;
     for (let e = 0; e < into.length; e++) {
-      const gate = chGate[e];
-      into[e] = conductionFor(chKind[e], gate >= 0 ? volts[gate] : NaN, tech.vil, tech.vih);
+      const gate = chGate[e]!;
+      into[e] = conductionFor(chKind[e]!, gate >= 0 ? volts[gate]! : NaN, tech.vil, tech.vih);
     }
     for (const e of topology.selfGatedElements) {
-      const [gateEnd, other] = topology.selfGate[e] === GATE_TIED_A ? [chA[e], chB[e]] : [chB[e], chA[e]];
-      into[e] = clampConduction(chKind[e], volts[gateEnd], volts[other]);
+      const [gateEnd, other] = topology.selfGate[e] === GATE_TIED_A ? [chA[e]!, chB[e]!] : [chB[e]!, chA[e]!];
+      into[e] = clampConduction(chKind[e]!, volts[gateEnd]!, volts[other]!);
     }
     return into;
   }
@@ -219,31 +220,31 @@ export class Simulator {
     const { volts, driven, chCurrent, flags } = state;
     for (const e of topology.bridges) {
       const on = conductionOf(frame, e, volts) === ON;
-      const dv = sourceVolts[c.chA[e]] - sourceVolts[c.chB[e]];
-      chCurrent[e] = on && Number.isFinite(dv) ? dv / c.chOhms[e] : 0;
+      const dv = sourceVolts[c.chA[e]!]! - sourceVolts[c.chB[e]!]!;
+      chCurrent[e] = on && Number.isFinite(dv) ? dv / c.chOhms[e]! : 0;
     }
     const { vil, vih } = c.tech;
     const levels = recycled ? recycled.levels : new Uint8Array(c.netCount);
     let settled = true;
     for (let n = 0; n < c.netCount; n++) {
-      const v = volts[n];
+      const v = volts[n]!;
       levels[n] =
         driven[n] || topology.isSource[n] ? (v <= vil ? LEVEL_0 : v >= vih ? LEVEL_1 : LEVEL_X) : LEVEL_Z;
-      if (flags[n] & FLAG_OSCILLATING) settled = false;
+      if (flags[n]! & FLAG_OSCILLATING) settled = false;
     }
     // Only source nets ever hold a current, so a recycled array needs only those cleared.
     const sourceOut = recycled ? recycled.sourceOut : new Float64Array(c.netCount);
     if (recycled) for (const n of schedule.sourceNets) sourceOut[n] = 0;
     for (const e of schedule.sourceTies) {
-      const i = chCurrent[e];
+      const i = chCurrent[e]!;
       if (i === 0) continue;
-      if (topology.isSource[c.chA[e]]) sourceOut[c.chA[e]] += i;
-      if (topology.isSource[c.chB[e]]) sourceOut[c.chB[e]] -= i;
+      if (topology.isSource[c.chA[e]!]) sourceOut[c.chA[e]!]! += i;
+      if (topology.isSource[c.chB[e]!]) sourceOut[c.chB[e]!]! -= i;
     }
     let staticPower = 0;
     for (const n of schedule.sourceNets)
-      if (Number.isFinite(volts[n])) staticPower += volts[n] * sourceOut[n];
-    const supplyCurrent = this.supplyNets.reduce((sum, n) => sum + sourceOut[n], 0);
+      if (Number.isFinite(volts[n])) staticPower += volts[n]! * sourceOut[n]!;
+    const supplyCurrent = this.supplyNets.reduce((sum, n) => sum + sourceOut[n]!, 0);
     return {
       compiled: c,
       topology,

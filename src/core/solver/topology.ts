@@ -1,3 +1,4 @@
+// Hot loop: indexes here are in range by construction, so `!` marks them (no run-time cost).
 import type { CompiledNetlist } from '../compile/compile.ts';
 import { csr, csrFrom, type Csr } from '../compile/csr.ts';
 import { GATE_NOT_TIED, selfGateEnds } from './selfGated.ts';
@@ -39,8 +40,8 @@ export interface Topology {
 
 function find(parent: Int32Array, x: number): number {
   while (parent[x] !== x) {
-    parent[x] = parent[parent[x]];
-    x = parent[x];
+    parent[x] = parent[parent[x]!]!;
+    x = parent[x]!;
   }
   return x;
 }
@@ -48,8 +49,8 @@ function find(parent: Int32Array, x: number): number {
 function channelComponents(c: CompiledNetlist, isSource: Uint8Array): Int32Array {
   const parent = Int32Array.from({ length: c.netCount }, (_, i) => i);
   for (let e = 0; e < c.chCount; e++) {
-    const a = c.chA[e];
-    const b = c.chB[e];
+    const a = c.chA[e]!;
+    const b = c.chB[e]!;
     if (isSource[a] || isSource[b]) continue;
     const ra = find(parent, a);
     const rb = find(parent, b);
@@ -85,27 +86,27 @@ export function buildTopology(c: CompiledNetlist, undriven: ReadonlySet<number> 
   const cccCount = rootToCcc.size;
   const cccNets = csrFrom(cccCount, netRows, netItems);
   for (let k = 0; k < cccCount; k++) {
-    for (let i = cccNets.start[k]; i < cccNets.start[k + 1]; i++)
-      localIndex[cccNets.items[i]] = i - cccNets.start[k];
+    for (let i = cccNets.start[k]!; i < cccNets.start[k + 1]!; i++)
+      localIndex[cccNets.items[i]!] = i - cccNets.start[k]!;
   }
 
   const elementRows: number[] = [];
   const elementItems: number[] = [];
   const bridges: number[] = [];
   for (let e = 0; e < c.chCount; e++) {
-    const k = cccOfNet[c.chA[e]] >= 0 ? cccOfNet[c.chA[e]] : cccOfNet[c.chB[e]];
+    const k = cccOfNet[c.chA[e]!]! >= 0 ? cccOfNet[c.chA[e]!]! : cccOfNet[c.chB[e]!]!;
     if (k >= 0) {
       elementRows.push(k);
       elementItems.push(e);
     } else bridges.push(e);
   }
   const cccElements = csrFrom(cccCount, elementRows, elementItems);
-  const elemLocalA = Int32Array.from(c.chA, (n) => localIndex[n]);
-  const elemLocalB = Int32Array.from(c.chB, (n) => localIndex[n]);
+  const elemLocalA = Int32Array.from(c.chA, (n) => localIndex[n]!);
+  const elemLocalB = Int32Array.from(c.chB, (n) => localIndex[n]!);
   const elemLocal = new Int32Array(c.chCount).fill(-1);
   for (let k = 0; k < cccCount; k++) {
-    for (let i = cccElements.start[k]; i < cccElements.start[k + 1]; i++) {
-      elemLocal[cccElements.items[i]] = i - cccElements.start[k];
+    for (let i = cccElements.start[k]!; i < cccElements.start[k + 1]!; i++) {
+      elemLocal[cccElements.items[i]!] = i - cccElements.start[k]!;
     }
   }
 
@@ -114,9 +115,9 @@ export function buildTopology(c: CompiledNetlist, undriven: ReadonlySet<number> 
   const selfItems: number[] = [];
   const selfElements: number[] = [];
   for (let e = 0; e < c.chCount; e++) {
-    if (selfGate[e] === GATE_NOT_TIED || elemLocal[e] < 0) continue;
-    selfRows.push(cccOfNet[c.chA[e]] >= 0 ? cccOfNet[c.chA[e]] : cccOfNet[c.chB[e]]);
-    selfItems.push(elemLocal[e]);
+    if (selfGate[e] === GATE_NOT_TIED || elemLocal[e]! < 0) continue;
+    selfRows.push(cccOfNet[c.chA[e]!]! >= 0 ? cccOfNet[c.chA[e]!]! : cccOfNet[c.chB[e]!]!);
+    selfItems.push(elemLocal[e]!);
     selfElements.push(e);
   }
   const dependents = cccDependencies(c, cccOfNet, cccElements, cccCount, selfGate);
@@ -155,10 +156,10 @@ function cccDependencies(
   // lastFor[j] === k when "j gates k" is already listed; k rises, so each row's items come sorted.
   const lastFor = new Int32Array(count).fill(-1);
   for (let k = 0; k < count; k++) {
-    for (let i = elements.start[k]; i < elements.start[k + 1]; i++) {
-      const e = elements.items[i];
-      const g = selfGate[e] === GATE_NOT_TIED ? c.chGate[e] : -1;
-      const j = g < 0 ? -1 : cccOfNet[g];
+    for (let i = elements.start[k]!; i < elements.start[k + 1]!; i++) {
+      const e = elements.items[i]!;
+      const g = selfGate[e] === GATE_NOT_TIED ? c.chGate[e]! : -1;
+      const j = g < 0 ? -1 : cccOfNet[g]!;
       if (j < 0 || lastFor[j] === k) continue;
       lastFor[j] = k;
       rows.push(j);
@@ -180,26 +181,27 @@ export function stronglyConnectedOrder(count: number, edges: Csr): Csr {
   const groups: number[][] = [];
   let next = 0;
   for (let root = 0; root < count; root++) {
-    if (index[root] >= 0) continue;
-    const work: [number, number][] = [[root, edges.start[root]]];
+    if (index[root]! >= 0) continue;
+    const work: [number, number][] = [[root, edges.start[root]!]];
     index[root] = low[root] = next++;
     stack.push(root);
     onStack[root] = 1;
     while (work.length > 0) {
-      const top = work[work.length - 1];
+      const top = work[work.length - 1]!;
       const v = top[0];
-      if (top[1] < edges.start[v + 1]) {
-        const w = edges.items[top[1]++];
-        if (index[w] < 0) {
+      if (top[1] < edges.start[v + 1]!) {
+        const w = edges.items[top[1]++]!;
+        if (index[w]! < 0) {
           index[w] = low[w] = next++;
           stack.push(w);
           onStack[w] = 1;
-          work.push([w, edges.start[w]]);
-        } else if (onStack[w]) low[v] = Math.min(low[v], index[w]);
+          work.push([w, edges.start[w]!]);
+        } else if (onStack[w]) low[v] = Math.min(low[v]!, index[w]!);
         continue;
       }
       work.pop();
-      if (work.length > 0) low[work[work.length - 1][0]] = Math.min(low[work[work.length - 1][0]], low[v]);
+      if (work.length > 0)
+        low[work[work.length - 1]![0]] = Math.min(low[work[work.length - 1]![0]]!, low[v]!);
       if (low[v] === index[v]) {
         const group: number[] = [];
         let w: number;

@@ -1,3 +1,4 @@
+// Hot loop: indexes here are in range by construction, so `!` marks them (no run-time cost).
 import { NMOS, PMOS } from '../compile/compile.ts';
 import { bottleneck } from './bottleneck.ts';
 import type { Frame } from './frame.ts';
@@ -31,9 +32,9 @@ const CHARGE_SHARE_FRACTION = 0.1;
  */
 export function solveTrial(frame: Frame, snapVolts: Float64Array): void {
   const { start, items } = frame.topo.cccSelfGated;
-  const first = start[frame.k];
-  const end = start[frame.k + 1];
-  for (let p = first; p < end; p++) frame.on[items[p]] = 1;
+  const first = start[frame.k]!;
+  const end = start[frame.k + 1]!;
+  for (let p = first; p < end; p++) frame.on[items[p]!] = 1;
   solveGroups(frame, snapVolts);
   // Self-gated elements left without forward voltage are switched off and the trial solved again;
   // every pass switches at least one off, so this ends.
@@ -45,14 +46,14 @@ function switchOffReverse(frame: Frame, first: number, end: number): boolean {
   const { topo, c } = frame;
   let changed = false;
   for (let p = first; p < end; p++) {
-    const j = topo.cccSelfGated.items[p];
+    const j = topo.cccSelfGated.items[p]!;
     if (!frame.on[j]) continue;
     const e = frame.element(j);
     const tiedA = topo.selfGate[e] === GATE_TIED_A;
-    const other = tiedA ? topo.elemLocalB[e] : topo.elemLocalA[e];
-    const vGate = frame.volts[tiedA ? topo.elemLocalA[e] : topo.elemLocalB[e]];
-    const vOther = other >= 0 ? frame.volts[other] : frame.sourceEndVolts[j];
-    if (conductsForward(c.chKind[e], vGate, vOther)) continue;
+    const other = tiedA ? topo.elemLocalB[e]! : topo.elemLocalA[e]!;
+    const vGate = frame.volts[tiedA ? topo.elemLocalA[e]! : topo.elemLocalB[e]!]!;
+    const vOther = other >= 0 ? frame.volts[other]! : frame.sourceEndVolts[j]!;
+    if (conductsForward(c.chKind[e]!, vGate, vOther)) continue;
     frame.on[j] = 0;
     changed = true;
   }
@@ -66,9 +67,9 @@ function solveGroups(frame: Frame, snapVolts: Float64Array): void {
     if (frame.parent[i] !== i) continue;
     let lo = Infinity;
     let hi = -Infinity;
-    for (let j = frame.srcHead[i]; j >= 0; j = frame.srcNext[j]) {
-      lo = Math.min(lo, frame.sourceEndVolts[j]);
-      hi = Math.max(hi, frame.sourceEndVolts[j]);
+    for (let j = frame.srcHead[i]!; j >= 0; j = frame.srcNext[j]!) {
+      lo = Math.min(lo, frame.sourceEndVolts[j]!);
+      hi = Math.max(hi, frame.sourceEndVolts[j]!);
     }
     if (lo === Infinity) shareCharge(frame, i, snapVolts);
     else if (hi - lo < 1e-12) driveSingle(frame, i, snapVolts, lo);
@@ -87,28 +88,28 @@ function groupNets(frame: Frame): void {
     frame.kinds[i] = 0;
   }
   for (let i = frame.netCount - 1; i >= 0; i--) {
-    frame.next[i] = frame.head[parent[i]];
-    frame.head[parent[i]] = i;
+    frame.next[i] = frame.head[parent[i]!]!;
+    frame.head[parent[i]!] = i;
   }
   const kind = frame.c.chKind;
   for (let j = frame.elemCount - 1; j >= 0; j--) {
     if (!frame.on[j]) continue;
     const e = frame.element(j);
-    const a = topo.elemLocalA[e];
-    const b = topo.elemLocalB[e];
-    const r = parent[a >= 0 ? a : b];
-    frame.kinds[r] |= kind[e] === NMOS ? HAS_NMOS : kind[e] === PMOS ? HAS_PMOS : 0;
+    const a = topo.elemLocalA[e]!;
+    const b = topo.elemLocalB[e]!;
+    const r = parent[a >= 0 ? a : b]!;
+    frame.kinds[r]! |= kind[e] === NMOS ? HAS_NMOS : kind[e] === PMOS ? HAS_PMOS : 0;
     if (a >= 0 && b >= 0) continue;
-    frame.srcNext[j] = frame.srcHead[r];
+    frame.srcNext[j] = frame.srcHead[r]!;
     frame.srcHead[r] = j;
   }
   const self = topo.cccSelfGated;
-  for (let p = self.start[frame.k]; p < self.start[frame.k + 1]; p++) {
-    const j = self.items[p];
+  for (let p = self.start[frame.k]!; p < self.start[frame.k + 1]!; p++) {
+    const j = self.items[p]!;
     if (!frame.on[j]) continue;
     const e = frame.element(j);
-    const a = topo.elemLocalA[e];
-    frame.kinds[parent[a >= 0 ? a : topo.elemLocalB[e]]] |= HAS_SELF;
+    const a = topo.elemLocalA[e]!;
+    frame.kinds[parent[a >= 0 ? a : topo.elemLocalB[e]!]!]! |= HAS_SELF;
   }
 }
 
@@ -123,10 +124,10 @@ function shareCharge(frame: Frame, root: number, snapVolts: Float64Array): void 
   let cTotal = 0;
   let qKnown = 0;
   let cUnknown = 0;
-  for (let i = frame.head[root]; i >= 0; i = frame.next[i]) {
+  for (let i = frame.head[root]!; i >= 0; i = frame.next[i]!) {
     const n = frame.net(i);
-    const cap = Math.max(c.netCap[n], MIN_NET_CAP);
-    const v = snapVolts[n];
+    const cap = Math.max(c.netCap[n]!, MIN_NET_CAP);
+    const v = snapVolts[n]!;
     members++;
     cTotal += cap;
     if (Number.isNaN(v)) cUnknown += cap;
@@ -138,8 +139,8 @@ function shareCharge(frame: Frame, root: number, snapVolts: Float64Array): void 
     const same = classify(shared, c.tech.vil, c.tech.vih) === classify(upper, c.tech.vil, c.tech.vih);
     shared = same && classify(shared, c.tech.vil, c.tech.vih) !== LEVEL_X ? (shared + upper) / 2 : NaN;
   }
-  for (let i = frame.head[root]; i >= 0; i = frame.next[i]) {
-    const before = snapVolts[frame.net(i)];
+  for (let i = frame.head[root]!; i >= 0; i = frame.next[i]!) {
+    const before = snapVolts[frame.net(i)]!;
     const v = members === 1 ? before : shared;
     frame.volts[i] = v;
     frame.driven[i] = 0;
@@ -157,8 +158,8 @@ function shareCharge(frame: Frame, root: number, snapVolts: Float64Array): void 
  */
 function driveSingle(frame: Frame, root: number, snapVolts: Float64Array, vs: number): void {
   const high = vs >= frame.c.tech.vdd / 2;
-  if ((frame.kinds[root] & ((high ? HAS_NMOS : HAS_PMOS) | HAS_SELF)) === 0) {
-    for (let i = frame.head[root]; i >= 0; i = frame.next[i]) {
+  if ((frame.kinds[root]! & ((high ? HAS_NMOS : HAS_PMOS) | HAS_SELF)) === 0) {
+    for (let i = frame.head[root]!; i >= 0; i = frame.next[i]!) {
       frame.volts[i] = vs;
       frame.driven[i] = 1;
       frame.flags[i] = 0;
@@ -167,8 +168,8 @@ function driveSingle(frame: Frame, root: number, snapVolts: Float64Array, vs: nu
     return;
   }
   bottleneck(frame, root, snapVolts, high);
-  for (let i = frame.head[root]; i >= 0; i = frame.next[i]) {
-    const v = frame.best[i];
+  for (let i = frame.head[root]!; i >= 0; i = frame.next[i]!) {
+    const v = frame.best[i]!;
     // Unreached: only a self-gated element's blocked direction leads here, and the trial switches it
     // off and solves again.
     const reached = Number.isFinite(v);
@@ -187,21 +188,21 @@ function driveMixed(frame: Frame, root: number, snapVolts: Float64Array): void {
   const { c } = frame;
   if (!solveNodal(frame, root)) return markIllConditioned(frame, root);
   const resistive = new Map<number, number>();
-  for (let i = frame.head[root]; i >= 0; i = frame.next[i]) resistive.set(i, frame.volts[i]);
+  for (let i = frame.head[root]!; i >= 0; i = frame.next[i]!) resistive.set(i, frame.volts[i]!);
   const highLimit = new Map<number, [number, number]>();
   if (bottleneck(frame, root, snapVolts, true)) {
-    for (let i = frame.head[root]; i >= 0; i = frame.next[i])
-      highLimit.set(i, [frame.best[i], frame.limiter[i]]);
+    for (let i = frame.head[root]!; i >= 0; i = frame.next[i]!)
+      highLimit.set(i, [frame.best[i]!, frame.limiter[i]!]);
   }
   const hasLow = bottleneck(frame, root, snapVolts, false);
-  for (let i = frame.head[root]; i >= 0; i = frame.next[i]) {
+  for (let i = frame.head[root]!; i >= 0; i = frame.next[i]!) {
     let v = resistive.get(i) as number;
     let limiter = -1;
     const [cap, capBy] = highLimit.get(i) ?? [Infinity, -1];
     // A limit is infinite where a self-gated element blocks every path from that side.
     if (Number.isFinite(cap) && v > cap) [v, limiter] = [cap, capBy];
-    const floor = frame.best[i];
-    if (hasLow && Number.isFinite(floor) && v < floor) [v, limiter] = [floor, frame.limiter[i]];
+    const floor = frame.best[i]!;
+    if (hasLow && Number.isFinite(floor) && v < floor) [v, limiter] = [floor, frame.limiter[i]!];
     frame.volts[i] = v;
     frame.driven[i] = 1;
     frame.limiter[i] = limiter;
@@ -213,7 +214,7 @@ function driveMixed(frame: Frame, root: number, snapVolts: Float64Array): void {
 
 /** A group the nodal solve could not trust: its nets are X, flagged, and carry no current. */
 function markIllConditioned(frame: Frame, root: number): void {
-  for (let i = frame.head[root]; i >= 0; i = frame.next[i]) {
+  for (let i = frame.head[root]!; i >= 0; i = frame.next[i]!) {
     frame.volts[i] = NaN;
     frame.driven[i] = 1;
     frame.flags[i] = FLAG_ILL_CONDITIONED;

@@ -1,3 +1,4 @@
+// Indexes read here are in range by construction, so `!` marks them (no run-time cost).
 /**
  * Every net's level at every step of a sequence, for the level strips: an observer of the sequence
  * check's own solve pass (core/analysis/pass.ts), so the strips and the report come from the same
@@ -16,8 +17,8 @@ export class StepLevelRecorder implements SolveObserver {
     const levels = nameRecord<StepLevel>();
     result.compiled.netNames.forEach((name, n) => {
       levels[name] = {
-        level: levelName(result.levels[n]),
-        degraded: (result.flags[n] & FLAG_DEGRADED) !== 0,
+        level: levelName(result.levels[n]!),
+        degraded: (result.flags[n]! & FLAG_DEGRADED) !== 0,
       };
     });
     this.steps.push(levels);

@@ -1,3 +1,4 @@
+// Indexes read here are in range by construction, so `!` marks them (no run-time cost).
 /**
  * The solver's typed arrays turned into what the sheet overlay and the net list draw: a state per
  * net name, an on/off/maybe mark per device, and each static current path as named nets and devices.
@@ -53,10 +54,10 @@ export interface SolvedView {
 }
 
 export function netState(result: SolvedArrays, net: number): NetState {
-  const flags = result.flags[net];
-  const volts = result.volts[net];
+  const flags = result.flags[net]!;
+  const volts = result.volts[net]!;
   return {
-    level: levelName(result.levels[net]),
+    level: levelName(result.levels[net]!),
     volts: Number.isNaN(volts) ? null : volts,
     degraded: (flags & FLAG_DEGRADED) !== 0,
     contention: (flags & FLAG_CONTENTION) !== 0,
@@ -72,17 +73,17 @@ function conductionName(code: number): Conduction {
 }
 
 function deviceName(compiled: CompiledNetlist, element: number): string {
-  return compiled.netlist.devices[compiled.chDevice[element]].name;
+  return compiled.netlist.devices[compiled.chDevice[element]!]!.name;
 }
 
 /** Interleaves a path's nets and elements; a path with one net more than elements is the usual case. */
 export function traceOf(compiled: CompiledNetlist, path: SolvedArrays['paths'][number]): CurrentTrace {
-  const nets = path.nets.map((n) => compiled.netNames[n]);
+  const nets = path.nets.map((n) => compiled.netNames[n]!);
   const devices = path.elements.map((e) => deviceName(compiled, e));
   const chain: string[] = [];
   nets.forEach((net, i) => {
     chain.push(net);
-    if (i < devices.length) chain.push(devices[i]);
+    if (i < devices.length) chain.push(devices[i]!);
   });
   return { nets, devices, chain, current: path.current };
 }
@@ -112,7 +113,7 @@ export function solvedView(compiled: CompiledNetlist, result: SolvedArrays): Sol
     },
     device(name) {
       const e = elementsByName(compiled).get(name);
-      return e === undefined ? undefined : conductionName(result.conduction[e]);
+      return e === undefined ? undefined : conductionName(result.conduction[e]!);
     },
     traces: result.paths.map((p) => traceOf(compiled, p)),
     supplyCurrent: result.supplyCurrent,

@@ -1,3 +1,4 @@
+// Indexes read here are in range by construction, so `!` marks them (no run-time cost).
 /**
  * Where a static current path runs on the sheet: through each device from the pin on its upstream net
  * to the pin on its downstream net, and along the drawn wires between one device and the next, so
@@ -41,14 +42,14 @@ function wireGraph(sheet: Sheet, geometry: RouteGeometry, net: string, pins: rea
   const points = [...graph.values()].map((n) => n.point);
   for (const wire of wires) {
     for (let i = 0; i + 1 < wire.points.length; i++) {
-      const [a, b] = [wire.points[i], wire.points[i + 1]];
+      const [a, b] = [wire.points[i]!, wire.points[i + 1]!];
       const along = points
         .filter((p) => onSegment(p, a, b))
         .sort(
           (p, q) => Math.abs(p.x - a.x) + Math.abs(p.y - a.y) - (Math.abs(q.x - a.x) + Math.abs(q.y - a.y)),
         );
       for (let k = 0; k + 1 < along.length; k++) {
-        const [u, v] = [node(along[k]), node(along[k + 1])];
+        const [u, v] = [node(along[k]!), node(along[k + 1]!)];
         graph.get(u)?.next.add(v);
         graph.get(v)?.next.add(u);
       }
@@ -63,7 +64,7 @@ function nearestRoute(graph: Adjacency, from: Point, targets: readonly Point[]):
   const parent = new Map<string, string | null>([[pointKey(from), null]]);
   const queue = [pointKey(from)];
   for (let head = 0; head < queue.length; head++) {
-    const key = queue[head];
+    const key = queue[head]!;
     if (wanted.has(key)) {
       const route: Point[] = [];
       for (let k: string | null = key; k !== null; k = parent.get(k) ?? null)
@@ -112,9 +113,9 @@ function deviceLegs(
   const parts = new Map(sheet.parts.map((p) => [p.id, p]));
   const legs: [Point, Point][] = [];
   for (let i = 1; i + 1 < chain.length; i += 2) {
-    const part = parts.get(geometry.deviceParts[chain[i]] ?? '');
-    const entry = part && pinOnNet(part, geometry, chain[i - 1]);
-    const exit = part && entry && pinOnNet(part, geometry, chain[i + 1], entry.pin);
+    const part = parts.get(geometry.deviceParts[chain[i]!] ?? '');
+    const entry = part && pinOnNet(part, geometry, chain[i - 1]!);
+    const exit = part && entry && pinOnNet(part, geometry, chain[i + 1]!, entry.pin);
     if (!entry || !exit) return null;
     legs.push([entry.at, exit.at]);
   }
@@ -135,12 +136,12 @@ export function traceRoute(
   const route: Point[][] = [];
   const wiresTo = (net: string, from: Point, targets: readonly Point[]): Point[] | null =>
     nearestRoute(wireGraph(sheet, geometry, net, [from, ...targets]), from, targets);
-  const head = wiresTo(chain[0], legs[0][0], sourcePins(sheet, geometry, chain[0]));
+  const head = wiresTo(chain[0]!, legs[0]![0], sourcePins(sheet, geometry, chain[0]!));
   if (head !== null && head.length > 1) route.push(head.reverse());
   legs.forEach(([entry, exit], i) => {
     route.push([entry, exit]);
     const next = legs[i + 1];
-    const net = chain[2 * i + 2];
+    const net = chain[2 * i + 2]!;
     const wires =
       next === undefined
         ? wiresTo(net, exit, sourcePins(sheet, geometry, net))

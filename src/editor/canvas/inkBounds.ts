@@ -22,19 +22,34 @@ export function overlaps(a: Rect, b: Rect): boolean {
   return a.x0 <= b.x1 && b.x0 <= a.x1 && a.y0 <= b.y1 && b.y0 <= a.y1;
 }
 
+/** A rectangle grown to take in another; mutable, for summing many without a copy each. */
+interface Extent {
+  x0: number;
+  y0: number;
+  x1: number;
+  y1: number;
+}
+
+function takeIn(e: Extent, x0: number, y0: number, x1: number, y1: number): void {
+  e.x0 = Math.min(e.x0, x0);
+  e.y0 = Math.min(e.y0, y0);
+  e.x1 = Math.max(e.x1, x1);
+  e.y1 = Math.max(e.y1, y1);
+}
+
+/** Body, pins and texts; measured once per part object (every part of a sheet on its first paint). */
 export function partInk(part: SheetPart): Rect {
   let ink = partInks.get(part);
   if (ink === undefined) {
-    const texts = partSpec(part.kind)
-      .texts(part)
-      .map((t): Rect => {
-        const size = TEXT_SIZE[t.style];
-        const width = t.text.length * size * CHAR_WIDTH;
-        const x0 = t.align === 'start' ? t.x : t.align === 'end' ? t.x - width : t.x - width / 2;
-        return { x0, y0: t.y - size / 2, x1: x0 + width, y1: t.y + size / 2 };
-      });
-    const pins = pinPositions(part).map((p) => ({ x0: p.x, y0: p.y, x1: p.x, y1: p.y }));
-    ink = grow(unionRects([partBounds(part), ...pins, ...texts])!, INK_MARGIN);
+    const extent: Extent = { ...partBounds(part) };
+    for (const p of pinPositions(part)) takeIn(extent, p.x, p.y, p.x, p.y);
+    for (const t of partSpec(part.kind).texts(part)) {
+      const size = TEXT_SIZE[t.style];
+      const width = t.text.length * size * CHAR_WIDTH;
+      const x0 = t.align === 'start' ? t.x : t.align === 'end' ? t.x - width : t.x - width / 2;
+      takeIn(extent, x0, t.y - size / 2, x0 + width, t.y + size / 2);
+    }
+    ink = grow(extent, INK_MARGIN);
     partInks.set(part, ink);
   }
   return ink;

@@ -1,3 +1,4 @@
+// Indexes read here are in range by construction, so `!` marks them (no run-time cost).
 import { Arrow, Group, Label, Line, Tag, Text } from 'react-konva';
 import type { Point } from '../../core/sheet/types.ts';
 import { formatCurrent } from '../../core/view/format.ts';
@@ -8,7 +9,7 @@ const ARROW_HALF = 0.35;
 function arrowsAlong(line: readonly Point[]): number[][] {
   const arrows: number[][] = [];
   for (let i = 0; i + 1 < line.length; i++) {
-    const [a, b] = [line[i], line[i + 1]];
+    const [a, b] = [line[i]!, line[i + 1]!];
     const length = Math.hypot(b.x - a.x, b.y - a.y);
     if (length < 1) continue; // too short for an arrow to read
     const [dx, dy] = [(b.x - a.x) / length, (b.y - a.y) / length];
@@ -30,7 +31,7 @@ function labelAnchor(route: readonly (readonly Point[])[]): Point | null {
   let best: { at: Point; length: number } | null = null;
   for (const line of route) {
     for (let i = 0; i + 1 < line.length; i++) {
-      const [a, b] = [line[i], line[i + 1]];
+      const [a, b] = [line[i]!, line[i + 1]!];
       const length = Math.hypot(b.x - a.x, b.y - a.y);
       if (best === null || length > best.length)
         best = { at: { x: (a.x + b.x) / 2, y: (a.y + b.y) / 2 }, length };

@@ -32,7 +32,7 @@ export function EffortTable({ output }: { readonly output: OutputSizing }) {
               <th scope="row" className="rw-mono">
                 {input}
               </th>
-              <td className="rw-num">{engineering(output.inputCapacitance[input], 'F')}</td>
+              <td className="rw-num">{engineering(output.inputCapacitance[input] ?? NaN, 'F')}</td>
               <td className="rw-num" title={g === null ? 'drives no gate: a pass input' : undefined}>
                 {effortText(g)}
               </td>

@@ -1,3 +1,4 @@
+// Indexes read here are in range by construction, so `!` marks them (no run-time cost).
 import type { VectorPower } from '../../core/power/types.ts';
 
 /**
@@ -62,7 +63,7 @@ function shownVectors(vectors: readonly VectorPower[], maxBars: number): number[
   const order = vectors.map((_, i) => i);
   if (vectors.length <= maxBars) return order;
   const top = order
-    .sort((a, b) => vectors[b].staticWatts - vectors[a].staticWatts || a - b)
+    .sort((a, b) => vectors[b]!.staticWatts - vectors[a]!.staticWatts || a - b)
     .slice(0, maxBars);
   return top.sort((a, b) => a - b);
 }
@@ -73,7 +74,7 @@ export function chartGeometry(
   frame: ChartFrame = DEFAULT_FRAME,
 ): ChartGeometry {
   const shown = shownVectors(vectors, frame.maxBars);
-  const range = decades(shown.map((i) => vectors[i].staticWatts));
+  const range = decades(shown.map((i) => vectors[i]!.staticWatts));
   const plotWidth = frame.width - frame.left;
   const slot = plotWidth / Math.max(1, shown.length);
   const heightOf = (watts: number): number => {
@@ -83,7 +84,7 @@ export function chartGeometry(
     return Math.max(2, ((frame.height - frame.top) * (Math.log10(watts) - lo)) / (hi - lo));
   };
   const bars = shown.map((i, k): Bar => {
-    const v = vectors[i];
+    const v = vectors[i]!;
     const height = heightOf(v.staticWatts);
     return {
       index: i,

@@ -22,17 +22,17 @@ describe('static power chart geometry', () => {
     const watts = bars.map((b) => b.watts);
     for (let i = 0; i < bars.length; i++) {
       for (let j = 0; j < bars.length; j++)
-        if (watts[i] > watts[j]) expect(heights[i]).toBeGreaterThan(heights[j]);
+        if (watts[i]! > watts[j]!) expect(heights[i]).toBeGreaterThan(heights[j]!);
     }
     // Ten times the power is one decade higher: the spacing of consecutive ticks (log scale).
-    const decade = ticks[0].y - ticks[1].y;
-    const [a, b] = [bars[0], bars[3]];
+    const decade = ticks[0]!.y - ticks[1]!.y;
+    const [a, b] = [bars[0]!, bars[3]!];
     expect(b.height - a.height).toBeCloseTo(decade * Math.log10(b.watts / a.watts), 6);
     for (const bar of bars) expect(bar.kind).toBe('leakage');
   });
 
   it('keeps the highest vectors, in order, when there are more than it can draw', () => {
-    const many = Array.from({ length: 10 }, (_, i) => ({ ...power.vectors[0], staticWatts: (i % 5) + 1 }));
+    const many = Array.from({ length: 10 }, (_, i) => ({ ...power.vectors[0]!, staticWatts: (i % 5) + 1 }));
     const { bars, total } = chartGeometry(many, ['A', 'B'], { ...DEFAULT_FRAME, maxBars: 4 });
     expect(total).toBe(10);
     expect(bars.map((b) => b.index)).toEqual([3, 4, 8, 9]);

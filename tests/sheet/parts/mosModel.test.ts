@@ -9,6 +9,7 @@ import { designOfDocument } from '../../../src/state/documentCells.ts';
 import { parseDesignFile, serializeDesign } from '../../../src/core/format/designFile.ts';
 import { updatePart } from '../../../src/core/sheet/edits.ts';
 import { makeSheetPart, partForDevice } from '../../../src/core/sheet/parts/index.ts';
+import type { MosDevice } from '../../../src/core/model/netlist.ts';
 import { deriveDesign, documentFromDesign } from '../../../src/state/document.ts';
 
 const DECK = `.subckt inv A Y VDD GND
@@ -17,6 +18,11 @@ MN Y A GND GND hvt W=1u L=0.25u
 .ends
 .model hvt nmos (level=1 vto=0.62 kp=100u)
 `;
+
+/** The device with no model card named (the key left out, as a file would). */
+function withoutModel({ model: _unnamed, ...rest }: MosDevice): MosDevice {
+  return rest;
+}
 
 const AT = { id: 'p1', x: 0, y: 0, rotation: 0 as const, mirror: false };
 
@@ -60,13 +66,10 @@ describe('the model a transistor names', () => {
     const doc = documentFromDesign(design);
     const whole = designOfDocument(doc, deriveDesign(doc).openCell);
     // The netlist names no card here, so the sheet's part is what is refused.
-    const cells = whole.cells.map((c) => ({
-      ...c,
-      netlist: {
-        ...c.netlist,
-        devices: c.netlist.devices.map((d) => (d.kind === 'nmos' ? { ...d, model: undefined } : d)),
-      },
-    }));
+    const cells = whole.cells.map((c) => {
+      const devices = c.netlist.devices.map((d) => (d.kind === 'nmos' ? withoutModel(d) : d));
+      return { ...c, netlist: { ...c.netlist, devices } };
+    });
     const text = serializeDesign({ ...whole, cells, technology: { ...whole.technology, models: {} } });
     expect(() => parseDesignFile(text, 'bad.json')).toThrow(
       /cells\[0\]\.sheet\.parts\[\d+\]\.model: no model card 'hvt'/,
