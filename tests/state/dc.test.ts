@@ -13,7 +13,7 @@ import {
 } from '../../src/state/dc.ts';
 import { cancelJob, toggleInput } from '../../src/state/simulation.ts';
 import { loadDesign, store } from '../../src/state/store.ts';
-import { runJob } from '../../src/worker/jobs.ts';
+import { runJob } from '../../src/worker/runJob.ts';
 import { design, inverter, nand2, resistorLoadInverter } from '../cells.ts';
 import { runner, settle, startQueued, useHeldRunner } from './heldRunner.ts';
 

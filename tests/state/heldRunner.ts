@@ -7,7 +7,7 @@ import { afterEach, beforeEach, vi } from 'vitest';
 import { SWEEP_DEBOUNCE_MS, startAnalysis } from '../../src/state/analysis.ts';
 import { resetStore } from '../../src/state/store.ts';
 import { JobCancelled } from '../../src/worker/client.ts';
-import { runJob } from '../../src/worker/jobs.ts';
+import { runJob } from '../../src/worker/runJob.ts';
 import type { AnalysisJob, JobProgress, JobResult } from '../../src/worker/protocol.ts';
 import { setJobRunnerFactory, type JobRunner } from '../../src/worker/runner.ts';
 

@@ -15,7 +15,7 @@ import {
 } from '../../src/state/simulation.ts';
 import { SWEEP_DEBOUNCE_MS } from '../../src/state/analysis.ts';
 import { loadDesign, setDesignFields, store } from '../../src/state/store.ts';
-import { runJob } from '../../src/worker/jobs.ts';
+import { runJob } from '../../src/worker/runJob.ts';
 import type { CellDesign } from '../../src/core/model/design.ts';
 import { design, inverter, nand2, nand2MissingPullUp, nandLatch, resistorLoadInverter } from '../cells.ts';
 import { runner, settle, startQueued, useHeldRunner } from './heldRunner.ts';
