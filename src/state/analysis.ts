@@ -196,9 +196,10 @@ function afterNextPaint(work: () => void): void {
 
 /**
  * Follows the store from now on; returns the function that stops following. Jobs wait for edits
- * to pause: a change after a quiet spell (a design opened, the page started, a first edit) starts
- * them at once, in a microtask after the change that made them stale; changes that come closer
- * together than SWEEP_DEBOUNCE_MS wait until they pause, so typing or a run of nudges starts one job.
+ * to pause: a new circuit after a quiet spell (a design opened, the page started, a first edit)
+ * starts them at once, in a microtask after the change that made them stale; other changes, and
+ * changes closer together than SWEEP_DEBOUNCE_MS, wait until they pause, so typing or a run of
+ * toggles starts one job.
  * The check goes first; the other jobs start once it has answered and the page has painted the
  * answer (docs/semantics.md §8), so on two cores the table and the level colours come first.
  */
@@ -207,10 +208,14 @@ export function startAnalysis(options: StartOptions = {}): () => void {
   /** What went stale since jobs last started. */
   let pending: Staleness | null = null;
   let lastChange = -Infinity;
+  /** Whether the changes waiting now began after a quiet spell. */
+  let burstAfterQuiet = false;
+  let microtaskQueued = false;
   let stopped = false;
   const runDue = (): void => {
     if (timer !== null) clearTimeout(timer); // a change queued behind the microtask is served now
     timer = null;
+    microtaskQueued = false;
     const due = pending;
     pending = null;
     if (due === null || stopped) return;
@@ -226,17 +231,28 @@ export function startAnalysis(options: StartOptions = {}): () => void {
     if (check === null) rest();
     else void check.then(() => afterNextPaint(rest));
   };
+  /**
+   * A new circuit after a quiet spell starts at once (one change may reach the store as several
+   * updates, the circuit not always first); a flipped input or a setting waits for the pause, so a
+   * run of toggles starts one level-1 answer, not one per toggle.
+   */
+  const schedule = (): void => {
+    const now = Date.now();
+    if (timer === null && !microtaskQueued) burstAfterQuiet = now - lastChange >= SWEEP_DEBOUNCE_MS;
+    lastChange = now;
+    if (microtaskQueued) return;
+    if (timer !== null) clearTimeout(timer);
+    timer = null;
+    if (burstAfterQuiet && pending?.netlist === true) {
+      microtaskQueued = true;
+      queueMicrotask(runDue);
+    } else timer = setTimeout(runDue, SWEEP_DEBOUNCE_MS);
+  };
   const react = (s: RailwiseState, previous: RailwiseState | null): void => {
     const stale = follow(s);
     if (Object.values(stale).some(Boolean)) {
       pending = pending === null ? stale : merge(pending, stale);
-      const now = Date.now();
-      const quiet = timer === null && now - lastChange >= SWEEP_DEBOUNCE_MS;
-      lastChange = now;
-      if (timer !== null) clearTimeout(timer);
-      timer = null;
-      if (quiet) queueMicrotask(runDue);
-      else timer = setTimeout(runDue, SWEEP_DEBOUNCE_MS);
+      schedule();
     }
     const sim = store.getState().simulation;
     if (previous === null || powerInputsChanged(sim, previous.simulation)) setSimulation(finishedPower(sim));

@@ -90,6 +90,19 @@ describe('sweep jobs and revisions', () => {
     expect(state().sweep.status).toBe('running');
   });
 
+  it('a flipped input waits for the pause, even after a quiet spell: a run of toggles starts one answer', async () => {
+    loadDesign(design(nand2));
+    await settle();
+    await vi.advanceTimersByTimeAsync(SWEEP_DEBOUNCE_MS);
+    toggleInput('A');
+    await vi.advanceTimersByTimeAsync(SWEEP_DEBOUNCE_MS / 2);
+    toggleInput('B');
+    await vi.advanceTimersByTimeAsync(SWEEP_DEBOUNCE_MS / 2);
+    expect(state().vectorDc.status).toBe('idle');
+    await vi.advanceTimersByTimeAsync(SWEEP_DEBOUNCE_MS / 2 + 1);
+    expect(runner.kinds()).toEqual(['vector-dc']);
+  });
+
   it('starts sizing and the level-1 answer once the table is done', async () => {
     loadDesign(design(nand2));
     await startQueued();
