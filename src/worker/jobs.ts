@@ -11,11 +11,10 @@ import { checkLibraryCell } from '../core/analysis/libraryCheck.ts';
 import { expressionProblem } from '../core/view/expectation.ts';
 import { StepLevelRecorder } from '../core/view/sequenceLevels.ts';
 import { transfer, vectorDc } from './dcJobs.ts';
-import { compare, proof } from './proofJobs.ts';
 import { MAX_INPUTS_WITH_UNDRIVEN } from './protocol.ts';
 import type {
-  AnalysisJob,
   CellInput,
+  CheckJob,
   CheckResult,
   JobProgress,
   JobResult,
@@ -52,7 +51,7 @@ export function usableExpectations(cell: CellInput): {
   return { expectations, notes };
 }
 
-function throttled(onProgress: (p: JobProgress) => void): (done: number, total: number) => void {
+export function throttled(onProgress: (p: JobProgress) => void): (done: number, total: number) => void {
   let last = -Infinity;
   return (done, total) => {
     const now = performance.now();
@@ -111,7 +110,11 @@ function library(job: LibraryJob, onProgress: (p: JobProgress) => void): Pick<Li
   return { rows };
 }
 
-export function runJob(job: AnalysisJob, onProgress: (p: JobProgress) => void = () => {}): JobResult {
+/**
+ * Runs a job of the kinds every analysis worker starts with (the proof and compare jobs, with their
+ * SAT solver, are in proofJobs.ts, which a worker loads only when it is given one).
+ */
+export function runCheckJob(job: CheckJob, onProgress: (p: JobProgress) => void = () => {}): JobResult {
   const started = performance.now();
   const elapsed = (): number => performance.now() - started;
   switch (job.kind) {
@@ -129,11 +132,5 @@ export function runJob(job: AnalysisJob, onProgress: (p: JobProgress) => void = 
     }
     case 'vector-dc':
       return { kind: 'vector-dc', revision: job.revision, ...vectorDc(job), elapsedMs: elapsed() };
-    case 'proof': {
-      const outcome = proof(job, throttled(onProgress));
-      return { kind: 'proof', revision: job.revision, ...outcome, elapsedMs: elapsed() };
-    }
-    case 'compare':
-      return { kind: 'compare', revision: job.revision, ...compare(job), elapsedMs: elapsed() };
   }
 }

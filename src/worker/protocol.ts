@@ -90,6 +90,16 @@ export interface CompareJob {
 export type AnalysisJob =
   SweepJob | SequenceJob | SizingJob | TransferJob | VectorDcJob | ProofJob | CompareJob | LibraryJob;
 
+/** The jobs of the proof lanes, whose code (a SAT solver) a worker loads only when given one. */
+export type ProofLaneJob = ProofJob | CompareJob;
+
+/** Every other job: what every analysis worker can run from the start. */
+export type CheckJob = Exclude<AnalysisJob, ProofLaneJob>;
+
+export function isProofLaneJob(job: AnalysisJob): job is ProofLaneJob {
+  return job.kind === 'proof' || job.kind === 'compare';
+}
+
 export interface JobProgress {
   readonly done: number;
   readonly total: number;

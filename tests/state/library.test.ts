@@ -11,7 +11,7 @@ import type { Design } from '../../src/core/model/design.ts';
 import { libraryTableRows, resultText, functionLines } from '../../src/core/view/libraryTable.ts';
 import { followLibrary, openLibraryView, setLibraryView, sortLibraryBy } from '../../src/state/library.ts';
 import { commitDoc, currentDesign, loadDesign, resetStore, store, undo } from '../../src/state/store.ts';
-import { runJob } from '../../src/worker/jobs.ts';
+import { runJob } from '../../src/worker/runJob.ts';
 import { openCellOnSheet } from '../../src/state/navigation.ts';
 import { setJobRunnerFactory } from '../../src/worker/runner.ts';
 import { design, nand2, nand2MissingPullUp } from '../cells.ts';

@@ -3,7 +3,8 @@ import { SweepLimitError } from '../../src/core/analysis/check.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import { levelAt, levelStrips } from '../../src/core/view/levelStrip.ts';
 import { vectorRows } from '../../src/core/view/vectorTable.ts';
-import { runJob as runAnyJob, usableExpectations } from '../../src/worker/jobs.ts';
+import { usableExpectations } from '../../src/worker/jobs.ts';
+import { runJob as runAnyJob } from '../../src/worker/runJob.ts';
 import type { CheckResult, SequenceJob, SweepJob } from '../../src/worker/protocol.ts';
 import { jobSize } from '../../src/worker/protocol.ts';
 import {
