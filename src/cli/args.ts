@@ -50,6 +50,8 @@ export interface CheckArgs extends CellChoice {
   /** The power settings given on the command line; the rest take the core's defaults. */
   readonly power?: Partial<PowerSettings>;
   readonly sizing: boolean;
+  /** Print the function each cell computes (`--found`). */
+  readonly found: boolean;
   readonly transfer?: TransferChoice;
   /** Level-1 DC operating point beside each vector. */
   readonly dc: boolean;
@@ -102,6 +104,7 @@ const CHECK_OPTIONS = {
   activity: { type: 'string' },
   load: { type: 'string' },
   sizing: { type: 'boolean' },
+  found: { type: 'boolean' },
   jobs: { type: 'string' },
   transfer: { type: 'string' },
   hold: { type: 'string' },
@@ -123,6 +126,8 @@ export function parseCheckArgs(argv: readonly string[]): CheckArgs {
     throw new UsageError('check needs at least one FILE (see railwise check --help)');
   const powerFlag = v.freq !== undefined || v.activity !== undefined;
   if (powerFlag && !v.power) throw new UsageError('--freq and --activity go with --power');
+  if (v.found && v.sequence !== undefined)
+    throw new UsageError('--found reads the function off the sweep: leave out --sequence');
   if (v.load !== undefined && !v.power && !v.sizing)
     throw new UsageError('--load goes with --power or --sizing');
   const transfer = transferChoice(v);
@@ -133,6 +138,7 @@ export function parseCheckArgs(argv: readonly string[]): CheckArgs {
     allNets: v['all-nets'] ?? false,
     undriven: v.undriven ?? false,
     sizing: v.sizing ?? false,
+    found: v.found ?? false,
     dc: v.dc ?? false,
     prove: v.prove ?? false,
     ...(transfer === undefined ? {} : { transfer }),

@@ -47,6 +47,7 @@ export async function checkCommand(args: CheckArgs, io: Output): Promise<number>
     allNets: args.allNets,
     undriven: args.undriven,
     sizing: args.sizing,
+    found: args.found,
     load: args.load ?? DEFAULT_POWER_SETTINGS.load,
     dc: args.dc,
     prove: args.prove,

@@ -21,6 +21,7 @@ import { powerFromCounts } from '../core/power/powerReport.ts';
 import { DEFAULT_POWER_SETTINGS, PowerOptionsError, type PowerSettings } from '../core/power/settings.ts';
 import type { PowerReport } from '../core/power/types.ts';
 import { sizingReport } from '../core/sizing/sizingReport.ts';
+import { foundFunctions, type FoundFunction } from '../core/expect/foundFunction.ts';
 import type { SizingReport } from '../core/sizing/types.ts';
 import { compile } from '../core/compile/compile.ts';
 import { TransferError, type TransferReport } from '../core/dc/transfer.ts';
@@ -40,6 +41,8 @@ export interface RunOptions {
   /** Power settings given on the command line; the rest are the core's defaults. */
   readonly power?: Partial<PowerSettings>;
   readonly sizing: boolean;
+  /** Add the function each output computes, read off the sweep (`--found`). */
+  readonly found?: boolean;
   /** Output load for sizing, farads. */
   readonly load: number;
   readonly transfer?: TransferChoice;
@@ -64,6 +67,7 @@ interface Extras {
   readonly sizing?: SizingReport | undefined;
   readonly transfer?: TransferReport | undefined;
   readonly dc?: readonly VectorDc[] | undefined;
+  readonly found?: readonly FoundFunction[] | undefined;
   readonly proof?: ProofJson | undefined;
 }
 
@@ -81,6 +85,8 @@ export interface CellJson extends Omit<CheckReport, 'sweep' | 'steps'> {
   readonly power?: PowerReport;
   readonly sizing?: SizingReport;
   readonly transfer?: TransferReport;
+  /** With --found: per output, the function it computes as a minimal sum of products. */
+  readonly found?: readonly FoundFunction[];
   readonly proof?: ProofJson;
   readonly caution: string;
 }
@@ -122,7 +128,10 @@ export function runCell(job: CellJob, options: RunOptions): CellResult {
     const powerJson =
       counts === null || power === undefined ? undefined : powerFromCounts(counts, power.settings);
     const transfer = options.transfer === undefined ? undefined : cellTransfer(job, options.transfer);
-    return { json: cellJson(job, report, { power: powerJson, sizing, transfer, dc: dc?.rows, proof }) };
+    const found = options.found === true && report.sweep !== undefined ? foundFunctions(report) : undefined;
+    return {
+      json: cellJson(job, report, { power: powerJson, sizing, transfer, dc: dc?.rows, found, proof }),
+    };
   } catch (e) {
     return { failure: { file: job.file, cell: job.cell, ...failureOf(e) } };
   }
@@ -198,7 +207,7 @@ function sweepLimitMessage(e: SweepLimitError): string {
 }
 
 function cellJson(job: CellJob, report: CheckReport, extras: Extras): CellJson {
-  const { power, sizing, transfer, dc, proof } = extras;
+  const { power, sizing, transfer, dc, found, proof } = extras;
   const rows = (list: readonly VectorReport[]): VectorJson[] =>
     list.map((v, i) => (dc?.[i] === undefined ? vectorJson(v) : { ...vectorJson(v), dc: dc[i] }));
   const { sweep, steps } = report;
@@ -216,6 +225,7 @@ function cellJson(job: CellJob, report: CheckReport, extras: Extras): CellJson {
     ...(power === undefined ? {} : { power }),
     ...(sizing === undefined ? {} : { sizing }),
     ...(transfer === undefined ? {} : { transfer }),
+    ...(found === undefined ? {} : { found }),
     ...(proof === undefined ? {} : { proof }),
     caution: CAUTION,
   };

@@ -7,6 +7,7 @@
 import type { Finding, Summary } from '../core/analysis/report.ts';
 import type { SweepColumns } from '../core/analysis/sweepColumns.ts';
 import type { TransferReport } from '../core/dc/transfer.ts';
+import type { FoundFunction } from '../core/expect/foundFunction.ts';
 import { prepareAnalysis } from '../core/power/cellAnalysis.ts';
 import { powerFromCounts } from '../core/power/powerReport.ts';
 import type { PowerReport } from '../core/power/types.ts';
@@ -35,6 +36,8 @@ export interface CellHead {
   readonly technology: { readonly source: string; readonly vdd: number };
   readonly sizing?: SizingReport;
   readonly transfer?: TransferReport;
+  /** With --found: the function of each output (none can be read off a streamed sweep). */
+  readonly found?: readonly FoundFunction[];
   readonly proof?: ProofJson;
 }
 
@@ -81,6 +84,7 @@ export function prepareStreamedCell(
       technology: { source: job.technology.source, vdd: job.technology.vdd },
       ...(sizing === undefined ? {} : { sizing }),
       ...(transfer === undefined ? {} : { transfer }),
+      ...(options.found === true ? { found: job.netlist.outputs.map(unreadFunction) } : {}),
       ...(proof === undefined ? {} : { proof }),
     };
     const rows = (each: (block: SweepColumns) => void): CellTail => {
@@ -99,4 +103,10 @@ export function prepareStreamedCell(
   } catch (e) {
     return { failure: { file: job.file, cell: job.cell, ...failureOf(e) } };
   }
+}
+
+/** A streamed sweep is never held, so no function is read off it: said per output. */
+function unreadFunction(output: string): FoundFunction {
+  const note = `no function read off a sweep of more than ${STREAM_ROWS} vectors (it is streamed, never held)`;
+  return { output, expression: null, undecided: 0, minimal: false, note };
 }

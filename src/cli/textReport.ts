@@ -5,6 +5,7 @@
  * printed escaped (printable.ts): a net name cannot move the cursor or rewrite a CI log.
  */
 import type { Finding, Summary } from '../core/analysis/report.ts';
+import { foundFunctionText } from '../core/expect/foundFunction.ts';
 import { brief, printable } from '../core/format/printable.ts';
 import { own } from '../core/model/records.ts';
 import { formatSi, type Colour } from './colour.ts';
@@ -83,7 +84,8 @@ export class TextDigest {
     if (json.sweep !== undefined) digest.addBlock(json.sweep);
     const inRows = new Set(rows.flatMap((r) => r.findings));
     if (json.sweep !== undefined) for (const f of sweepFindings(json.sweep)) inRows.add(f);
-    const { cell, file, inputs, outputs, technology, sizing, transfer, proof, power, summary, notes } = json;
+    const { cell, file, inputs, outputs, technology, sizing, transfer, found, proof, power, summary, notes } =
+      json;
     const head: CellHead = {
       cell,
       file,
@@ -92,6 +94,7 @@ export class TextDigest {
       technology,
       ...(sizing === undefined ? {} : { sizing }),
       ...(transfer === undefined ? {} : { transfer }),
+      ...(found === undefined ? {} : { found }),
       ...(proof === undefined ? {} : { proof }),
     };
     const structural = json.findings.filter((f) => !inRows.has(f));
@@ -178,7 +181,7 @@ function findingLines(view: CellView, c: Colour): string[] {
 }
 
 function extraLines(head: CellHead, tail: CellTail): string[] {
-  const out: string[] = [];
+  const out: string[] = (head.found ?? []).map((f) => `  found: ${printable(foundFunctionText(f))}`);
   if (tail.power !== undefined) {
     const p = tail.power;
     out.push(

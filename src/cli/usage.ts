@@ -67,6 +67,8 @@ Report:
     --activity KIND     sequence or random (default: sequence with --sequence, else random)
     --load C            load on each output, also for --sizing, e.g. 10f (default ${formatSi(DEFAULT_POWER_SETTINGS.load, 'F')})
   --sizing              add logical effort, delay estimates and proposed widths
+  --found               add the function each output computes, read off the sweep, as a minimal
+                        sum of products ("Y = !A | !B"; "(EN) ? (!A) : Z" for a tristate one)
   --transfer IN         add the DC transfer curve of every output as IN goes from 0 to VDD, with
                         VM, VIL, VIH, VOL, VOH and the noise margins (level-1 model; one cell)
     --hold "B=1 C=0"    values of the other inputs (default: chosen so an output follows IN)

@@ -6,17 +6,19 @@
 import { packedForTransfer } from '../core/analysis/sweepColumns.ts';
 import { analyseCell } from '../core/power/cellAnalysis.ts';
 import { sizingReport } from '../core/sizing/sizingReport.ts';
+import { checkLibraryCell } from '../core/analysis/libraryCheck.ts';
 import { usableExpectations as usableExpectationsOf } from '../core/view/expectation.ts';
 import { StepLevelRecorder } from '../core/view/sequenceLevels.ts';
 import { transfer, vectorDc } from './dcJobs.ts';
-import { compare, proof } from './proofJobs.ts';
 import { appSweepLimit } from './protocol.ts';
 import type {
-  AnalysisJob,
   CellInput,
+  CheckJob,
   CheckResult,
   JobProgress,
   JobResult,
+  LibraryJob,
+  LibraryResult,
   SequenceJob,
   SizingJob,
   SizingResult,
@@ -34,7 +36,7 @@ export function usableExpectations(cell: CellInput): {
   return usableExpectationsOf(cell.netlist, cell.expectations);
 }
 
-function throttled(onProgress: (p: JobProgress) => void): (done: number, total: number) => void {
+export function throttled(onProgress: (p: JobProgress) => void): (done: number, total: number) => void {
   let last = -Infinity;
   return (done, total) => {
     const now = performance.now();
@@ -84,7 +86,22 @@ function sizing(job: SizingJob): Pick<SizingResult, 'sizing' | 'error'> {
   }
 }
 
-export function runJob(job: AnalysisJob, onProgress: (p: JobProgress) => void = () => {}): JobResult {
+function library(job: LibraryJob, onProgress: (p: JobProgress) => void): Pick<LibraryResult, 'rows'> {
+  const progress = throttled(onProgress);
+  const { cells } = job.design;
+  const rows = cells.map((c, i) => {
+    const row = checkLibraryCell(job.design, c.name);
+    progress(i + 1, cells.length);
+    return row;
+  });
+  return { rows };
+}
+
+/**
+ * Runs a job of the kinds every analysis worker starts with (the proof and compare jobs, with their
+ * SAT solver, are in proofJobs.ts, which a worker loads only when it is given one).
+ */
+export function runCheckJob(job: CheckJob, onProgress: (p: JobProgress) => void = () => {}): JobResult {
   const started = performance.now();
   const elapsed = (): number => performance.now() - started;
   switch (job.kind) {
@@ -94,18 +111,14 @@ export function runJob(job: AnalysisJob, onProgress: (p: JobProgress) => void = 
       return { kind: 'sequence', revision: job.revision, ...sequence(job, onProgress), elapsedMs: elapsed() };
     case 'sizing':
       return { kind: 'sizing', revision: job.revision, ...sizing(job), elapsedMs: elapsed() };
+    case 'library':
+      return { kind: 'library', revision: job.revision, ...library(job, onProgress), elapsedMs: elapsed() };
     case 'transfer': {
       const outcome = transfer(job, throttled(onProgress));
       return { kind: 'transfer', revision: job.revision, ...outcome, elapsedMs: elapsed() };
     }
     case 'vector-dc':
       return { kind: 'vector-dc', revision: job.revision, ...vectorDc(job), elapsedMs: elapsed() };
-    case 'proof': {
-      const outcome = proof(job, throttled(onProgress));
-      return { kind: 'proof', revision: job.revision, ...outcome, elapsedMs: elapsed() };
-    }
-    case 'compare':
-      return { kind: 'compare', revision: job.revision, ...compare(job), elapsedMs: elapsed() };
   }
 }
 

@@ -1,7 +1,7 @@
 import { afterEach, describe, expect, it } from 'vitest';
 import * as Comlink from 'comlink';
 import { AnalysisClient, JobCancelled } from '../../src/worker/client.ts';
-import { runJob } from '../../src/worker/jobs.ts';
+import { runJob } from '../../src/worker/runJob.ts';
 import type { AnalysisWorkerApi, JobProgress } from '../../src/worker/protocol.ts';
 import { design, nand2 } from '../cells.ts';
 import { reportRows } from '../../src/core/analysis/sweepColumns.ts';

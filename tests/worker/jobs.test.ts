@@ -4,7 +4,8 @@ import { reportRows, type SweepColumns } from '../../src/core/analysis/sweepColu
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import { levelAt, levelStrips } from '../../src/core/view/levelStrip.ts';
 import { vectorRows } from '../../src/core/view/vectorTable.ts';
-import { forTransfer, runJob as runAnyJob, usableExpectations } from '../../src/worker/jobs.ts';
+import { forTransfer, usableExpectations } from '../../src/worker/jobs.ts';
+import { runJob as runAnyJob } from '../../src/worker/runJob.ts';
 import type { CheckResult, SequenceJob, SweepJob } from '../../src/worker/protocol.ts';
 import { APP_MAX_INPUTS, MAX_INPUTS_WITH_UNDRIVEN, jobSize } from '../../src/worker/protocol.ts';
 import {

@@ -3,7 +3,7 @@ import { compile, type CompiledNetlist } from '../compile/compile.ts';
 import { evaluateExpression, type ExpectedValue } from '../expect/evaluate.ts';
 import { expressionNames } from '../expect/names.ts';
 import { ExpressionError, parseExpectation, type Expr } from '../expect/parse.ts';
-import type { Design, InputValue, InputVector } from '../model/design.ts';
+import type { CellDesign, InputValue, InputVector } from '../model/design.ts';
 import { recordOf } from '../model/records.ts';
 import type { Netlist } from '../model/netlist.ts';
 import { DEFAULT_TECHNOLOGY, type Technology } from '../model/technology.ts';
@@ -306,7 +306,7 @@ export function solvedVectorFindings(
 
 /** Checks a design: its sweep with its own technology and expected functions. */
 export function checkDesign(
-  design: Design,
+  design: CellDesign,
   options: Omit<CheckOptions, 'technology' | 'expectations'> = {},
 ): CheckReport {
   return checkSweep(design.netlist, {
