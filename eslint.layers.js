@@ -31,9 +31,11 @@ export const FORBIDDEN_LAYERS = {
 export const CORE_ORDER = [
   'text',
   'units',
+  'logic',
   'model',
   'sheet',
   'document',
+  'hierarchy',
   'format',
   'expect',
   'compile',

@@ -11,7 +11,7 @@ import { DEFAULT_TECHNOLOGY } from '../src/core/model/technology.ts';
 import { LEVEL_X, LEVEL_Z } from '../src/core/solver/levels.ts';
 import { Simulator, type SolveResult } from '../src/core/solver/simulator.ts';
 import { transistorCount } from './generators/index.ts';
-import { now, repeat, secondsSince, type Sample } from './timing.ts';
+import { cpuSeconds, now, repeat, secondsSince, type Sample } from './timing.ts';
 import { randomVectors, vectorAt } from './vectors.ts';
 
 export type CaseKind = 'settle' | 'random' | 'sweep' | 'check-sweep' | 'toggle' | 'edit';
@@ -115,10 +115,6 @@ export function measureRandom(name: string, p: Prepared, budgetSeconds = 1): Cas
 }
 
 /** CPU seconds (user and system) this process has used, all threads together. */
-function cpuSeconds(): number {
-  const { user, system } = process.cpuUsage();
-  return (user + system) / 1e6;
-}
 
 /**
  * Every combination of the inputs, each from an unknown state, building each vector as a caller

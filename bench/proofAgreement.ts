@@ -4,6 +4,7 @@
  * the violation with the same findings. Used by the proof rows of the benchmark and by the tests.
  */
 import type { CheckReport } from '../src/core/analysis/report.ts';
+import { reportRows } from '../src/core/analysis/sweepColumns.ts';
 import { evaluateExpression, type ExpectedValue } from '../src/core/expect/evaluate.ts';
 import { expressionNames } from '../src/core/expect/names.ts';
 import { parseExpectation } from '../src/core/expect/parse.ts';
@@ -35,7 +36,7 @@ export function agreementOf(
       ? undefined
       : evaluateExpression(parseExpectation(output, text, names), vector);
   };
-  const rows = sweep.vectors ?? [];
+  const rows = reportRows(sweep);
   const wrong: string[] = [];
   const unknown: PropertyResult[] = [];
   for (const p of proof.properties) {

@@ -11,6 +11,8 @@ import { dcCases, type DcCaseResult } from './dc.ts';
 import { floorFrame, floorLoop } from './floor.ts';
 import { measureToggleWithPaint } from './screen.ts';
 import { rippleAdder } from './generators/index.ts';
+import { wideAdderBank } from './generators/adderBank.ts';
+import { measureCheckCpu, measureCommand, measureWordSweep, type CpuRow } from './sweepWords.ts';
 import { measureMemory, withSlopes, type MemoryResult } from './memory.ts';
 import {
   measureCheckSweep,
@@ -151,7 +153,47 @@ function printDc(cases: readonly DcCaseResult[]): void {
   console.log('ms: the fastest run; CPU ms/run: the average over every run, warm-up included.');
 }
 
-function main(): void {
+/** The bit-parallel sweep beside the scalar one, and the command on the bank and the 24-input bank. */
+async function wordSweepRows(): Promise<CpuRow[]> {
+  progress('bit-parallel sweep and check of the 16-input bank');
+  const bank = sweepCircuit();
+  const rows = [
+    ...measureWordSweep('words/adder-bank-16-inputs', bank),
+    measureCheckCpu('check-sweep/adder-bank-16-inputs (words)', bank, true),
+    measureCheckCpu('check-sweep/adder-bank-16-inputs (scalar)', bank, false),
+  ];
+  progress('railwise check of the 16-input bank, text and --json');
+  rows.push(await measureCommand('railwise check adder-bank-16-inputs', bank, []));
+  rows.push(await measureCommand('railwise check --json adder-bank-16-inputs', bank, ['--json']));
+  progress('railwise check of the 24-input bank (16,777,216 vectors)');
+  rows.push(
+    await measureCommand('railwise check adder-bank-24-inputs', wideAdderBank(), ['--max-inputs', '24']),
+  );
+  return rows;
+}
+
+function printCpuRows(floorNs: number, rows: readonly CpuRow[]): void {
+  const cells = rows.map((r) => [
+    r.name,
+    r.transistors,
+    r.vectors,
+    r.cpuSeconds,
+    r.nsPerTransistorVector,
+    floorNs / r.nsPerTransistorVector,
+    r.peakMb === undefined ? '' : formatNumber(r.peakMb),
+  ]);
+  console.log('');
+  console.log(
+    formatTable(
+      ['sweep (CPU)', 'transistors', 'vectors', 'CPU s', 'ns/(T·vec)', 'floor ÷ row', 'peak MB'],
+      cells,
+    ),
+  );
+  console.log('floor ÷ row: how many times below the floor loop per transistor per vector (CPU time);');
+  console.log('railwise check rows: the bundled command in a child process, output read and dropped.');
+}
+
+async function main(): Promise<void> {
   const json = process.argv.includes('--json');
   const started = now();
   progress('floor loop');
@@ -160,18 +202,28 @@ function main(): void {
   progress('exhaustive sweep, 65,536 vectors');
   const sweep = measureSweep('sweep/adder-bank-16-inputs', prepare(sweepCircuit()));
   cases.push(sweep, ...analysisOverhead(), ...toggleCases());
+  const words = await wordSweepRows();
   const memory = memorySeries();
   progress('level-1 DC: transfer curve and every-vector pass');
   const dc = dcCases();
   printTables(floorNs, cases, memory);
+  printCpuRows(floorNs, words);
   printDc(dc);
   const totalSeconds = secondsSince(started);
   console.log(`\nwhole run: ${totalSeconds.toFixed(1)} s`);
   if (json) {
     const withRatio = cases.map((c) => ({ ...c, ratioToFloor: c.nsPerTransistorVector / floorNs }));
-    const summary = { node: process.version, totalSeconds, sweepSeconds: sweep.seconds, memory, dc };
+    const wordRows = words.map((r) => ({ ...r, timesBelowFloor: floorNs / r.nsPerTransistorVector }));
+    const summary = {
+      node: process.version,
+      totalSeconds,
+      sweepSeconds: sweep.seconds,
+      memory,
+      dc,
+      words: wordRows,
+    };
     console.log(JSON.stringify({ floorNsPerTransistorVector: floorNs, cases: withRatio, ...summary }));
   }
 }
 
-main();
+await main();

@@ -5,6 +5,12 @@ export function now(): bigint {
   return process.hrtime.bigint();
 }
 
+/** CPU seconds (user and system) this process has used: the steady figure on a shared machine. */
+export function cpuSeconds(): number {
+  const { user, system } = process.cpuUsage();
+  return (user + system) / 1e6;
+}
+
 export function secondsSince(start: bigint): number {
   return Number(process.hrtime.bigint() - start) / 1e9;
 }

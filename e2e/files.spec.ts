@@ -76,35 +76,6 @@ test('a SPICE netlist imports and is placed: pull-up above, pull-down below, inp
   expect((await app.netlist()).devices).toHaveLength(4);
 });
 
-test('a SPICE library offers its cells; the chosen one opens', async ({ page }) => {
-  const app = new RailwisePage(page);
-  await app.open();
-  const library = [
-    '* two cells of our own',
-    '.subckt inv a y vdd gnd',
-    'mp y a vdd vdd pmos w=2u l=0.25u',
-    'mn y a gnd gnd nmos w=1u l=0.25u',
-    '.ends',
-    '.subckt buf a z vdd gnd',
-    'mp1 m a vdd vdd pmos w=2u l=0.25u',
-    'mn1 m a gnd gnd nmos w=1u l=0.25u',
-    'mp2 z m vdd vdd pmos w=4u l=0.25u',
-    'mn2 z m gnd gnd nmos w=2u l=0.25u',
-    '.ends',
-    '',
-  ].join('\n');
-  const before = await app.netlist();
-  await app.openFile('cells.sp', library);
-  const chooser = page.getByRole('dialog', { name: 'Cells in cells.sp' });
-  await expect(chooser).toBeVisible();
-  expect(await app.netlist()).toEqual(before);
-  await chooser.getByRole('button', { name: /^buf/ }).click();
-  await expect(chooser).toBeHidden();
-  const buf = await app.netlist();
-  expect(buf.devices).toHaveLength(4);
-  expect(buf.outputs).toEqual(['z']);
-});
-
 test('exports download: SVG drawing, SPICE netlist and PNG picture', async ({ page }) => {
   const app = new RailwisePage(page);
   await app.open();

@@ -51,16 +51,16 @@ test('proving a miswired NAND2: the counterexample goes on the sheet; compared w
   expect(errors).toEqual([]);
 });
 
-test('past the exhaustive limit the table offers the proof: an 18-input comparator proved in the background', async ({
+test('past the exhaustive limit the table offers the proof: a 22-input comparator proved in the background', async ({
   page,
 }) => {
   const app = new RailwisePage(page);
   await app.open();
-  const expectations = { EQ: equalityExpectation(9) };
-  const text = exportSpice(equalityComparator(9), DEFAULT_TECHNOLOGY, { expectations });
-  await app.openFile('equality-9.sp', text);
+  const expectations = { EQ: equalityExpectation(11) };
+  const text = exportSpice(equalityComparator(11), DEFAULT_TECHNOLOGY, { expectations });
+  await app.openFile('equality-11.sp', text);
   const panel = page.getByTestId('analysis-panel');
-  await expect(panel.getByTestId('sweep-limit')).toContainText('18 inputs');
+  await expect(panel.getByTestId('sweep-limit')).toContainText('22 inputs');
   await panel.getByTestId('sweep-limit-prove').click();
   const proof = panel.getByTestId('proof-section');
   await expect(proof.getByTestId('proof-summary')).toContainText('6 of 6 properties proved', {

@@ -2,11 +2,14 @@ import { expect, test, type Page } from '@playwright/test';
 import { encodeDesignFragment } from '../src/app/shareLink.ts';
 import { serializeDesign } from '../src/core/format/designFile.ts';
 import { starterById } from '../src/core/starters/index.ts';
+import { designOfCell } from '../src/core/hierarchy/cellDesign.ts';
 import { RailwisePage } from './pages/RailwisePage.ts';
 
 test('a shared link opens the design it carries; a damaged one changes nothing', async ({ page }) => {
   const app = new RailwisePage(page);
-  const fragment = await encodeDesignFragment(serializeDesign(starterById('tristate-inverter')!.design));
+  const fragment = await encodeDesignFragment(
+    serializeDesign(designOfCell(starterById('tristate-inverter')!.design)),
+  );
 
   await app.open(`/${fragment}`);
   await expect(app.message).toContainText('from a shared link');
@@ -54,8 +57,10 @@ test('a hostile share link neither freezes the page nor survives a reload', asyn
   const app = new RailwisePage(page);
   await app.open();
   const own = await app.netlist();
-  const far = JSON.parse(serializeDesign(starterById('inverter')!.design)) as Record<string, unknown>;
-  far['sheet'] = {
+  const far = JSON.parse(serializeDesign(designOfCell(starterById('inverter')!.design))) as {
+    cells: Record<string, unknown>[];
+  };
+  (far.cells[0] as Record<string, unknown>)['sheet'] = {
     parts: [],
     wires: [
       {
@@ -68,7 +73,10 @@ test('a hostile share link neither freezes the page nor survives a reload', asyn
     ],
   };
   const hostile = [
-    [await rawLink(new TextEncoder().encode(JSON.stringify(far))), /sheet\.wires\[0\]\.points\[1\]\.x/],
+    [
+      await rawLink(new TextEncoder().encode(JSON.stringify(far))),
+      /cells\[0\]\.sheet\.wires\[0\]\.points\[1\]\.x/,
+    ],
     [await rawLink(new Uint8Array(32 * 1024 * 1024)), /unpacks to more than 4 MB/],
   ] as const;
   for (const [fragment, message] of hostile) {

@@ -62,6 +62,9 @@ test('the resistor-load inverter: pick the vector that draws current and read it
   await expect(ws.bit('A')).toContainText('0');
   await expect(ws.supplyCurrent).toHaveText('0 A');
   await expect(ws.currentPaths).toContainText('No static current');
+  // Resting the pointer on the input pin names its net and level over the sheet.
+  await page.mouse.move(at.x, at.y);
+  await expect(page.getByTestId('pointer-tip')).toContainText('A  0.00 V');
   expect(errors).toEqual([]);
 });
 

@@ -1,10 +1,10 @@
 /** Small cells for the workspace tests, built with the core builder. */
 import { circuit } from '../src/core/model/builder.ts';
-import type { Design } from '../src/core/document/design.ts';
+import type { CellDesign } from '../src/core/document/design.ts';
 import type { Netlist } from '../src/core/model/netlist.ts';
 import { DEFAULT_TECHNOLOGY } from '../src/core/model/technology.ts';
 
-export function design(netlist: Netlist, expectations: Record<string, string> = {}): Design {
+export function design(netlist: Netlist, expectations: Record<string, string> = {}): CellDesign {
   return { name: netlist.name, technology: DEFAULT_TECHNOLOGY, netlist, expectations, sequences: [] };
 }
 

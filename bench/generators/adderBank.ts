@@ -4,7 +4,7 @@
  * with their carry-in tied to GND. Adder r adds A to B rotated left by r bits, so the eight adders
  * see different operand pairs for the same vector and no two compute the same sums.
  * 8 adders × 8 bits × 28 transistors = 1,792 transistors.
- * Outputs: R{r}.S0…R{r}.S7 and R{r}.CO for each adder r.
+ * Outputs: R{r}.S0…R{r}.S7 and R{r}.CO for each adder r. `bits` widens the operands (2·bits inputs).
  */
 import type { Netlist } from '../../src/core/model/netlist.ts';
 import { rippleAdderDevices } from './mirrorAdder.ts';
@@ -18,19 +18,26 @@ export function rotateLeft<T>(nets: readonly T[], r: number): T[] {
   return nets.map((_, i) => nets[(((i - r) % n) + n) % n]!);
 }
 
-export function adderBank(adders = 8): Netlist {
-  if (!Number.isInteger(adders) || adders < 1 || adders > BANK_BITS) {
-    throw new RangeError(`adders must be an integer from 1 to ${BANK_BITS}, got ${adders}`);
+export function adderBank(adders = 8, bits = BANK_BITS): Netlist {
+  if (!Number.isInteger(bits) || bits < 1)
+    throw new RangeError(`bits must be a positive integer, got ${bits}`);
+  if (!Number.isInteger(adders) || adders < 1 || adders > bits) {
+    throw new RangeError(`adders must be an integer from 1 to ${bits}, got ${adders}`);
   }
-  const a = numbered('A', BANK_BITS);
-  const b = numbered('B', BANK_BITS);
+  const a = numbered('A', bits);
+  const b = numbered('B', bits);
   const bank = Array.from({ length: adders }, (_, r) =>
-    rippleAdderDevices(BANK_BITS, { prefix: `R${r}.`, a, b: rotateLeft(b, r), carryIn: GND }),
+    rippleAdderDevices(bits, { prefix: `R${r}.`, a, b: rotateLeft(b, r), carryIn: GND }),
   );
   const outputs = bank.flatMap((adder) => [...adder.sum, adder.co]);
   return assemble(
-    `adder-bank-${adders}x${BANK_BITS}`,
+    `adder-bank-${adders}x${bits}`,
     { inputs: [...a, ...b], outputs },
     bank.map((x) => x.devices),
   );
+}
+
+/** The 24-input sweep: six 12-bit adders, 6 × 12 × 28 = 2,016 transistors, 16,777,216 vectors. */
+export function wideAdderBank(): Netlist {
+  return adderBank(6, 12);
 }

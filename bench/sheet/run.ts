@@ -13,7 +13,7 @@ import { chromium, type CDPSession, type Page } from '@playwright/test';
 import { exportSpice } from '../../src/core/netlist-io/spiceExport.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import type { Netlist } from '../../src/core/model/netlist.ts';
-import { inverterChain, rippleAdder, transistorCount } from '../generators/index.ts';
+import { adderBank, inverterChain, rippleAdder, transistorCount } from '../generators/index.ts';
 import { formatTable } from '../table.ts';
 import { serveDirectory } from './serve.ts';
 import {
@@ -90,14 +90,19 @@ async function importCell(
   return { wall: done - (await importStart(page)), cpu: (await processCpuMs(cdp)) - cpu0 };
 }
 
-async function measureSheet(page: Page, netlist: Netlist, profileDir: string | null): Promise<SheetFigures> {
-  const profile: ProfileFile = (step) =>
-    profileDir === null ? null : join(profileDir, `${netlist.name}-${step}.cpuprofile`);
+/** The app on an empty store, ready, with a session on the browser's own counters. */
+async function freshPage(page: Page): Promise<CDPSession> {
   await page.goto(`http://127.0.0.1:${PORT}/`);
   await page.evaluate(() => localStorage.clear());
   await page.reload();
   await page.waitForFunction(() => window.__railwise !== undefined);
-  const cdp = await page.context().newCDPSession(page);
+  return page.context().newCDPSession(page);
+}
+
+async function measureSheet(page: Page, netlist: Netlist, profileDir: string | null): Promise<SheetFigures> {
+  const profile: ProfileFile = (step) =>
+    profileDir === null ? null : join(profileDir, `${netlist.name}-${step}.cpuprofile`);
+  const cdp = await freshPage(page);
   await cdp.send('Performance.enable');
   progress(`${netlist.name}: import`);
   const imported = await importCell(page, cdp, netlist, profile);
@@ -136,6 +141,36 @@ async function measureSheet(page: Page, netlist: Netlist, profileDir: string | n
 
 const pair = (p: Pair): string => `${p.wall.toFixed(1)} / ${p.cpu.toFixed(1)}`;
 
+/** The sweep table of a cell: worker time, and the page's time from the result to the first row drawn. */
+interface SweepFigures {
+  readonly name: string;
+  readonly vectors: number;
+  readonly workerMs: number;
+  readonly readyMs: number;
+}
+
+async function measureSweepTable(page: Page, netlist: Netlist): Promise<SweepFigures> {
+  const cdp = await freshPage(page);
+  progress(`${netlist.name}: import`);
+  await importCell(page, cdp, netlist, () => null);
+  await cdp.detach();
+  progress(`${netlist.name}: sweep of ${2 ** netlist.inputs.length} vectors`);
+  await page.getByTestId('sweep-start').click();
+  const done = await page.waitForFunction(
+    () => (window.__railwise?.state().simulation.sweep.status === 'done' ? performance.now() : false),
+    undefined,
+    { polling: 'raf', timeout: 600_000 },
+  );
+  const doneAt = (await done.jsonValue()) as number;
+  await page.locator('[data-testid="vector-row-0"]').waitFor({ timeout: 60_000 });
+  const drawnAt = await page.evaluate(() => performance.now());
+  const workerMs = await page.evaluate(() => {
+    const sweep = window.__railwise?.state().simulation.sweep;
+    return sweep?.result?.elapsedMs ?? Number.NaN;
+  });
+  return { name: netlist.name, vectors: 2 ** netlist.inputs.length, workerMs, readyMs: drawnAt - doneAt };
+}
+
 async function main(): Promise<void> {
   const argv = process.argv.slice(2);
   const args = new Set(argv);
@@ -158,6 +193,12 @@ async function main(): Promise<void> {
       { ...inverterChain(500), name: 'chain500' },
       { ...rippleAdder(179), name: 'adder179' },
     ];
+    const sweep = await measureSweepTable(page, { ...adderBank(8), name: 'bank16' });
+    console.log(
+      `sweep table, ${sweep.name}: ${sweep.vectors} vectors, worker ${sweep.workerMs.toFixed(0)} ms, ` +
+        `first row drawn ${sweep.readyMs.toFixed(0)} ms after the result reached the page's state (wall)`,
+    );
+    if (args.has('--sweep-only')) return;
     const figures: SheetFigures[] = [];
     for (const netlist of cells) figures.push(await measureSheet(page, netlist, profileDir));
     console.log(
@@ -189,7 +230,7 @@ async function main(): Promise<void> {
         ]),
       ),
     );
-    if (args.has('--json')) console.log(JSON.stringify({ frames: FRAMES, sheets: figures }));
+    if (args.has('--json')) console.log(JSON.stringify({ frames: FRAMES, sheets: figures, sweep }));
   } finally {
     await browser.close();
     server.close();

@@ -1,5 +1,6 @@
 * Beacon lamp driver buffer: two inverters in a row, built from one inverter subcircuit.
-* Railwise example: hierarchical netlist, flattened on import (nets X1/..., devices X2/MP1).
+* Railwise example: hierarchical netlist; each subcircuit is a cell, and the check flattens it
+* with hierarchical names (net X1.out is mid here, devices X2.MP1).
 .subckt lamp_inv in out vdd gnd
 MP1 out in vdd vdd pmos_rw W=2u L=0.25u
 MN1 out in gnd gnd nmos_rw W=1u L=0.25u

@@ -10,9 +10,10 @@ import { PartsShelf } from './PartsShelf.tsx';
 import { StarterShelf } from './StarterShelf.tsx';
 import { PropertiesForm } from './PropertiesForm.tsx';
 import { MessageBar } from './MessageBar.tsx';
-import { CellChooser } from './CellChooser.tsx';
 import { RecoveryOffer } from './RecoveryOffer.tsx';
 import { handleKey } from './keyboard.ts';
+import { LibraryView } from './LibraryView.tsx';
+import { InstanceList, SheetPath } from './Hierarchy.tsx';
 import { commandById } from './commands.ts';
 import { OPEN_FILE_ACCEPT } from '../core/netlist-io/fileKinds.ts';
 import { OPEN_INPUT_ID, openFileLater } from './fileCommands.ts';
@@ -54,9 +55,11 @@ export function App() {
       <nav className="rw-left" aria-label="Shelves">
         <PartsShelf />
         <PropertiesForm />
+        <InstanceList />
         <StarterShelf />
       </nav>
       <main className="rw-centre">
+        <SheetPath />
         <SheetCanvas
           controller={controller}
           onFirstLayout={fitToView}
@@ -73,7 +76,7 @@ export function App() {
         {overlay === 'help' ? <HelpOverlay /> : null}
         {overlay === 'about' ? <AboutBox /> : null}
       </Suspense>
-      <CellChooser />
+      <LibraryView />
       <RecoveryOffer />
     </div>
   );

@@ -1,5 +1,5 @@
 import { useState, type KeyboardEvent } from 'react';
-import { PART_KINDS, partSpec, type PartKind } from '../core/sheet/parts/index.ts';
+import { SHELF_KINDS, partSpec, type PartKind } from '../core/sheet/parts/index.ts';
 import { findPartKinds } from '../core/sheet/parts/search.ts';
 import { startPlacing } from '../editor/actions.ts';
 import { useStore } from '../state/store.ts';
@@ -41,7 +41,7 @@ function useSearchKeys(query: string, matches: readonly PartKind[], clear: () =>
 export function PartsShelf() {
   const tool = useStore((s) => s.tool);
   const [query, setQuery] = useState('');
-  const matches = query.trim() === '' ? PART_KINDS : findPartKinds(query);
+  const matches = query.trim() === '' ? SHELF_KINDS : findPartKinds(query);
   const search = useSearchKeys(query, matches, () => setQuery(''));
   return (
     <section className="rw-shelf" aria-label="Parts">

@@ -94,6 +94,12 @@ export function PropertiesForm() {
               Model card {part.model}: its level-1 values set this transistor's DC model.
             </p>
           )}
+          {part.kind === 'instance' && (
+            <p className="rw-hint" data-testid="part-instance">
+              Places cell {part.cell}: its inputs on the left, its outputs on the right. Double-click it to
+              descend.
+            </p>
+          )}
         </form>
       ) : (
         <>

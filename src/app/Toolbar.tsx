@@ -70,6 +70,7 @@ export function Toolbar() {
         <CommandButton id="new" text="New" />
         <CommandButton id="open" text="Open…" />
         <CommandButton id="save" text="Save" />
+        <CommandButton id="cells" text="Cells" />
         <CommandButton id="share-link" text="Share link" />
         <ExportMenu />
       </div>

@@ -18,7 +18,7 @@ import { createStore } from 'zustand/vanilla';
 import { useStore as useZustand } from 'zustand';
 import type { Design } from '../core/document/design.ts';
 import { parseDesignFile, serializeDesign } from '../core/format/designFile.ts';
-import { store } from '../state/store.ts';
+import { currentDesign, store } from '../state/store.ts';
 import { afterPause } from './idle.ts';
 import { isPacked, PACK_ABOVE, packForStorage, unpackFromStorage } from './storedText.ts';
 
@@ -201,11 +201,12 @@ export function startAutosave(storage: Storage = localStorage): () => void {
   /** `now`: the page is going away, so a long text is stored as it is rather than packed later. */
   const write = (now = false): void => {
     cancel = null;
-    const { design, revision } = store.getState();
+    const { revision } = store.getState();
     if (revision === savedRevision || failed) return;
     // A design still being opened is not written yet: try again shortly.
     if (readOpening(storage) !== null && !now) return void (cancel = later(DELAY_MS));
-    const text = autosaveText(design);
+    // Every cell of the design, the open one as edited.
+    const text = autosaveText(currentDesign());
     if (text.length <= PACK_ABOVE || now) {
       // Storage full or blocked: keep editing; the next change tries again.
       if (keepText(storage, text)) savedRevision = revision;

@@ -4,8 +4,9 @@
  * first nine in shelf order, Q turns, F flips, J joins (wires), V views all; the usual system
  * shortcuts for clipboard and history.
  */
+import { openLibraryView } from '../state/library.ts';
 import type { PartKind } from '../core/sheet/types.ts';
-import { PART_KINDS, partSpec } from '../core/sheet/parts/index.ts';
+import { SHELF_KINDS, partSpec } from '../core/sheet/parts/index.ts';
 import {
   copySelection,
   cutSelection,
@@ -59,7 +60,7 @@ function focusPartSearch(): void {
 
 /** The number keys place the first nine kinds in shelf order; every kind is found by the search. */
 export function placeKeyOf(kind: PartKind): string | null {
-  const index = PART_KINDS.indexOf(kind);
+  const index = SHELF_KINDS.indexOf(kind);
   return index >= 0 && index < 9 ? String(index + 1) : null;
 }
 
@@ -92,7 +93,7 @@ export const COMMANDS: readonly Command[] = [
     keys: [{ key: '/' }],
     run: focusPartSearch,
   },
-  ...PART_KINDS.map(placeCommand),
+  ...SHELF_KINDS.map(placeCommand),
   {
     id: 'vector-previous',
     label: 'Previous input vector',
@@ -214,6 +215,13 @@ export const COMMANDS: readonly Command[] = [
     group: 'File',
     keys: [{ key: 'o', ctrl: true }],
     run: pickAndOpen,
+  },
+  {
+    id: 'cells',
+    label: 'Cells of this design, each checked',
+    group: 'File',
+    keys: [],
+    run: openLibraryView,
   },
   { id: 'save', label: 'Save design file', group: 'File', keys: [{ key: 's', ctrl: true }], run: saveDesign },
   {

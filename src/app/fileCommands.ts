@@ -4,9 +4,8 @@
  * loads on first use, so start-up parses less. A failure to load it is a message, never a crash.
  */
 import { serializeDesign } from '../core/format/designFile.ts';
-import type { Design } from '../core/document/design.ts';
 import { EMPTY_SHEET } from '../core/sheet/edits.ts';
-import { loadDesign, showMessage, store } from '../state/store.ts';
+import { currentDesign, loadDesign, showMessage, store } from '../state/store.ts';
 import { downloadText, safeFileName } from './download.ts';
 import type * as Files from './files.ts';
 import type { ExportKind } from './files.ts';
@@ -34,22 +33,15 @@ export function exportLater(kind: ExportKind): Promise<void> {
   return withFiles(`export ${kind}`, (files) => files.exportDesign(kind));
 }
 
-export function loadImportedCellLater(
-  design: Design,
-  fileName: string,
-  failed: readonly string[],
-): Promise<void> {
-  return withFiles(`open ${design.name}`, (files) => files.loadImportedCell(design, fileName, failed));
-}
-
 /** The browser's file dialog; the readers load while the designer picks (a failure shows on open). */
 export function pickAndOpen(): void {
   document.getElementById(OPEN_INPUT_ID)?.click();
   import('./files.ts').catch(() => {});
 }
 
+/** Saves every cell of the design (the open one as edited), not just the one on the sheet. */
 export function saveDesign(): void {
-  const { design } = store.getState();
+  const design = currentDesign();
   downloadText(safeFileName(design.name, DESIGN_EXTENSION), serializeDesign(design), 'application/json');
 }
 

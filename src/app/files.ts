@@ -4,17 +4,22 @@
  * loads this module on first use (`fileCommands.ts`, which also holds save and new).
  */
 import type { Design } from '../core/document/design.ts';
+import { DEFAULT_TECHNOLOGY } from '../core/model/technology.ts';
 import { DesignFileError, parseDesignFile } from '../core/format/designFile.ts';
-import { SpiceImportError } from '../core/netlist-io/spiceImport.ts';
-import { cellsFromText, isSpiceFileName } from '../core/netlist-io/cellFiles.ts';
+import { importSpice, SpiceImportError } from '../core/netlist-io/spiceImport.ts';
+import { designFromImport } from '../core/netlist-io/spiceDesign.ts';
+import { openLibraryView } from '../state/library.ts';
+import { isSpiceFileName } from '../core/netlist-io/cellFiles.ts';
 import { exportSpice } from '../core/netlist-io/spiceExport.ts';
 import { exportVerilog } from '../core/netlist-io/verilogExport.ts';
+import { exportSpiceDesign } from '../core/netlist-io/spiceDesignExport.ts';
+import { exportVerilogDesign } from '../core/netlist-io/verilogDesignExport.ts';
 import { exportTruthTableCsv } from '../core/netlist-io/csvExport.ts';
 import { checkDesign } from '../core/analysis/check.ts';
 import { sheetToSvg } from '../core/sheet/svg.ts';
 import { EMPTY_SHEET } from '../core/sheet/edits.ts';
 import { flushSync } from 'react-dom';
-import { loadDesign, offerCells, setViewport, showMessage, store } from '../state/store.ts';
+import { currentDesign, loadDesign, setViewport, showMessage, store } from '../state/store.ts';
 import { currentStage } from '../editor/stageRef.ts';
 import { fitToView } from '../state/view.ts';
 import { downloadText, downloadUrl, safeFileName } from './download.ts';
@@ -26,72 +31,55 @@ export type ExportKind = 'spice' | 'verilog' | 'csv' | 'svg' | 'png';
 
 export const isSpiceFile = isSpiceFileName;
 
-export interface SpiceDesigns {
-  /** One design per readable cell, in file order. */
-  readonly designs: readonly Design[];
+export interface SpiceDesign {
+  /** Every cell of the file, each keeping the instances it places, in file order. */
+  readonly design: Design;
   /** Cells of a library that could not be read, each with its reason (file and line). */
   readonly failed: readonly string[];
+  /** Several top-level cells: shown as a library. */
+  readonly library: boolean;
 }
 
 /**
  * What an import changed or left out, as the design's notes (one per line under a heading naming
  * the file), kept with the design until the designer dismisses them: the same notes the command
- * line prints for the cell.
+ * line prints for each cell.
  */
 export function importNotes(fileName: string, notes: readonly string[]): string | undefined {
   return notes.length === 0 ? undefined : [`Imported from ${fileName}:`, ...notes].join('\n');
 }
 
-/** Reads a SPICE text into designs, one per cell; throws when no cell at all can be read. */
-export function designsFromSpice(text: string, fileName: string): SpiceDesigns {
-  const loaded = cellsFromText(text, fileName).cells;
-  const designs = loaded.flatMap((c): Design[] => {
-    if (!('job' in c)) return [];
-    const notes = importNotes(fileName, c.job.notes);
-    return [
-      {
-        name: c.job.cell,
-        technology: c.job.technology,
-        netlist: c.job.netlist,
-        expectations: c.job.expectations,
-        sequences: [],
-        ...(c.job.sheet === undefined ? {} : { sheet: c.job.sheet }),
-        ...(notes === undefined ? {} : { notes }),
-      },
-    ];
-  });
-  const failed = loaded.flatMap((c) => ('failure' in c ? [c.failure] : []));
-  if (designs.length === 0) {
-    const first = failed[0];
-    const line = first?.line ?? 1;
-    const detail = (first?.message ?? 'no cell could be read').replace(`${fileName}:${line}: `, '');
-    throw new SpiceImportError(fileName, line, detail);
+/** Reads a SPICE text into one design of all its cells; throws when no cell at all can be read. */
+export function designFromSpice(text: string, fileName: string): SpiceDesign {
+  const imported = importSpice(text, fileName);
+  // A cell only the checks cannot flatten is kept; its check says why.
+  const failed = imported.failed.map((f) => `${f.name} (${f.error.message})`);
+  const name = fileName.replace(/^.*[\\/]/, '').replace(/\.[^.]+$/, '') || 'design';
+  const read = designFromImport(imported, DEFAULT_TECHNOLOGY, name);
+  if (read.cells.length === 0) {
+    const first = imported.failed[0]?.error;
+    if (first !== undefined) throw first;
+    throw new SpiceImportError(fileName, 1, 'no cell could be read');
   }
-  return { designs, failed: failed.map((f) => (f.cell === null ? f.message : `${f.cell} (${f.message})`)) };
-}
-
-/**
- * Loads one imported cell and says where it came from. Cells of the file that could not be read
- * join the import's notes, so they stay in view with the rest until dismissed.
- */
-export function loadImportedCell(design: Design, fileName: string, failed: readonly string[]): void {
+  // Each cell's notes, named by the cell when the file holds several.
+  const several = imported.cells.length > 1;
+  const cellNotes = imported.cells.flatMap((c) => c.notes.map((n) => (several ? `${c.name}: ${n}` : n)));
   const unread = failed.map((f) => `not readable: ${f}`);
-  const notes =
-    unread.length === 0
-      ? design.notes
-      : (design.notes ?? `Imported from ${fileName}:`) + `\n${unread.join('\n')}`;
-  loadDesign({ ...design, ...(notes === undefined ? {} : { notes }) });
-  fitToView();
-  const kept = notes === undefined ? 0 : notes.split('\n').length - 1;
-  const where = kept === 0 ? '' : `; ${countOf(kept, 'note')} on what the import changed, under the sheet`;
-  showMessage('info', `Imported ${design.name} from ${fileName}${where}`);
+  const notes = importNotes(fileName, [...new Set([...imported.notes, ...cellNotes]), ...unread]);
+  const design = notes === undefined ? read : { ...read, notes };
+  return { design, failed, library: imported.isLibrary };
 }
 
 function openSpice(text: string, fileName: string): void {
-  const { designs, failed } = designsFromSpice(text, fileName);
-  // A library: let the designer pick the cell; nothing changes until they do.
-  if (designs.length > 1) offerCells(fileName, designs, failed);
-  else loadImportedCell(designs[0]!, fileName, failed);
+  const { design, library } = designFromSpice(text, fileName);
+  loadDesign(design);
+  fitToView();
+  const kept = design.notes === undefined ? 0 : design.notes.split('\n').length - 1;
+  const where = kept === 0 ? '' : `; ${countOf(kept, 'note')} on what the import changed, under the sheet`;
+  const what = design.cells.length > 1 ? `${design.cells.length} cells` : design.open;
+  showMessage('info', `Imported ${what} from ${fileName}${where}`);
+  // A library: the table of its cells, where any one opens onto the sheet.
+  if (library) openLibraryView();
 }
 
 /** Opens text as a design file or a SPICE netlist. Returns false when the file was refused. */
@@ -124,22 +112,32 @@ export async function openFile(file: File): Promise<boolean> {
   return openText(await file.text(), file.name);
 }
 
+/** A design of several cells keeps its hierarchy (one `.subckt` per cell); one cell exports alone. */
+function spiceText(): string {
+  const whole = currentDesign();
+  if (whole.cells.length > 1) return exportSpiceDesign(whole);
+  const { design } = store.getState();
+  return exportSpice(design.netlist, design.technology, {
+    expectations: design.expectations,
+    ...(design.sheet === undefined ? {} : { sheet: design.sheet }),
+  });
+}
+
+/** One module per cell for a design of several cells, else the one cell's module. */
+function verilogText(): string {
+  const whole = currentDesign();
+  return whole.cells.length > 1 ? exportVerilogDesign(whole) : exportVerilog(store.getState().design.netlist);
+}
+
 /** Writes the export; problems (e.g. too many inputs for a truth table) become a message. */
 export function exportDesign(kind: ExportKind): void {
   const { design } = store.getState();
   try {
     switch (kind) {
       case 'spice':
-        return downloadText(
-          safeFileName(design.name, '.sp'),
-          exportSpice(design.netlist, design.technology, {
-            expectations: design.expectations,
-            ...(design.sheet === undefined ? {} : { sheet: design.sheet }),
-          }),
-          'text/plain',
-        );
+        return downloadText(safeFileName(design.name, '.sp'), spiceText(), 'text/plain');
       case 'verilog':
-        return downloadText(safeFileName(design.name, '.v'), exportVerilog(design.netlist), 'text/plain');
+        return downloadText(safeFileName(design.name, '.v'), verilogText(), 'text/plain');
       case 'csv':
         return downloadText(
           safeFileName(design.name, '.csv'),

@@ -24,35 +24,52 @@ interface StoredHistory {
   readonly ahead: readonly DocPatch[];
 }
 
-/** FNV-1a, one step per character. */
-function mixChars(h: number, text: string): number {
-  for (let i = 0; i < text.length; i++) h = Math.imul(h ^ text.charCodeAt(i), 0x01000193);
-  return h;
+/** One FNV-1a step. */
+const mixCode = (h: number, code: number): number => Math.imul(h ^ code, 0x01000193);
+
+function mixText(h: number, text: string): number {
+  for (let i = 0; i < text.length; i++) h = mixCode(h, text.charCodeAt(i));
+  return mixCode(h, 0x1f); // a separator, so "ab","c" and "a","bc" differ
 }
 
-/** A text, then a separator, so "ab","c" and "a","bc" differ. */
-function mixText(h: number, text: string): number {
-  return Math.imul(mixChars(h, text) ^ 0x1f, 0x01000193);
-}
+const numberBits = new Float64Array(1);
+const numberWords = new Uint32Array(numberBits.buffer);
+const FNV_START = 0x811c9dc5;
 
 /**
- * Mixes a plain value in: arrays in order, objects by sorted key, so key order never matters; a
- * leaf as the text `type:value`. Plain loops, as it runs over the whole document at start-up.
+ * The hash of a plain value: arrays in order; an object as the sum of its entries' hashes (each
+ * key mixed with its value), so key order never matters and nothing is sorted; a key whose value is
+ * undefined is left out, as JSON leaves it out; each kind behind a tag of its own. Loops rather
+ * than callbacks and numbers by their bits: a large sheet has tens of thousands of values, and a
+ * reload reads them all once.
  */
-function mixValue(h: number, v: unknown): number {
-  if (Array.isArray(v)) {
-    let acc = mixText(h, '[');
-    for (const item of v as unknown[]) acc = mixValue(acc, item);
-    return acc;
+function hashValue(v: unknown): number {
+  switch (typeof v) {
+    case 'number':
+      numberBits[0] = v;
+      return mixCode(mixCode(mixCode(FNV_START, 0x23), numberWords[0]!), numberWords[1]!);
+    case 'string':
+      return mixText(mixCode(FNV_START, 0x22), v);
+    case 'boolean':
+      return mixCode(FNV_START, v ? 0x74 : 0x66);
+    case 'object': {
+      if (v === null) return mixCode(FNV_START, 0x6e);
+      if (Array.isArray(v)) {
+        let h = mixCode(FNV_START, 0x5b);
+        for (const x of v as unknown[]) h = mixCode(h, hashValue(x));
+        return h;
+      }
+      let sum = 0;
+      const record = v as Record<string, unknown>;
+      for (const key of Object.keys(record)) {
+        const value = record[key];
+        if (value !== undefined) sum = (sum + mixCode(mixText(FNV_START, key), hashValue(value))) | 0;
+      }
+      return mixCode(mixCode(FNV_START, 0x7b), sum);
+    }
+    default:
+      return mixText(mixCode(FNV_START, 0x3f), `${typeof v}:${String(v)}`);
   }
-  if (v !== null && typeof v === 'object') {
-    const record = v as Record<string, unknown>;
-    const keys = Object.keys(record).sort();
-    let acc = mixText(h, '{');
-    for (const k of keys) if (record[k] !== undefined) acc = mixValue(mixText(acc, k), record[k]); // as JSON leaves them out
-    return acc;
-  }
-  return mixText(mixChars(mixChars(h, typeof v), ':'), String(v));
 }
 
 /**
@@ -60,7 +77,7 @@ function mixValue(h: number, v: unknown): number {
  * (whose objects list their keys in another order) is the document the stored steps lead from.
  */
 export function fingerprint(doc: SheetDocument): string {
-  return (mixValue(0x811c9dc5, doc) >>> 0).toString(16);
+  return (hashValue(doc) >>> 0).toString(16);
 }
 
 /** Patches between neighbouring documents, remembered per pair: each step is compared once. */

@@ -8,7 +8,7 @@ import type { Design } from '../core/document/design.ts';
 import { countOf } from '../core/view/plural.ts';
 import { parseDesignFile, serializeDesign } from '../core/format/designFile.ts';
 import { fitToView } from '../state/view.ts';
-import { loadDesign, showMessage, store } from '../state/store.ts';
+import { currentDesign, loadDesign, showMessage } from '../state/store.ts';
 import { beginOpening, openingDone, whenShown } from './autosave.ts';
 
 export const LINK_PREFIX = '#design=';
@@ -138,7 +138,7 @@ export async function openSharedLink(): Promise<void> {
 export async function shareCurrentDesign(): Promise<void> {
   let fragment: string;
   try {
-    fragment = await encodeDesignFragment(serializeDesign(store.getState().design));
+    fragment = await encodeDesignFragment(serializeDesign(currentDesign()));
   } catch (e) {
     if (!(e instanceof ShareLinkError)) throw e;
     return showMessage('error', `No link made: ${e.message}.`);

@@ -5,7 +5,7 @@
  */
 import { flushSync } from 'react-dom';
 import { sheetToScreen, type Viewport } from '../state/viewport.ts';
-import { setViewport, store, undo, redo } from '../state/store.ts';
+import { currentDesign, setViewport, store, undo, redo } from '../state/store.ts';
 import { toggleInput } from '../state/simulation.ts';
 import { AUTO_SWEEP_VECTORS } from '../state/analysis.ts';
 import { currentStage } from '../editor/stageRef.ts';
@@ -72,7 +72,7 @@ export function installTestApi(): void {
     undo,
     redo,
     autosaveKey: AUTOSAVE_KEY,
-    autosaveCaughtUp: async () => (await autosavedText()) === autosaveText(store.getState().design),
+    autosaveCaughtUp: async () => (await autosavedText()) === autosaveText(currentDesign()),
     historyCaughtUp: () => {
       const { doc, history } = store.getState();
       const kept = historyFor(doc, sessionStorage.getItem(HISTORY_KEY));

@@ -6,6 +6,7 @@ import { parseArgs, type ParseArgsConfig } from 'node:util';
 import { MARGIN_CONVENTIONS, type MarginConvention } from '../core/dc/figures.ts';
 import { DEFAULT_TRANSFER_POINTS, MAX_TRANSFER_POINTS } from '../core/dc/transfer.ts';
 import { nameRecord } from '../core/model/records.ts';
+import { MAX_SWEEP_INPUTS } from '../core/analysis/vectors.ts';
 import { spiceValue } from '../core/units/spiceNumber.ts';
 import { parseStandIns, type StandIn } from '../core/netlist-io/deviceNames.ts';
 import { rangeProblem } from '../core/netlist-io/valueRanges.ts';
@@ -49,6 +50,8 @@ export interface CheckArgs extends CellChoice {
   /** The power settings given on the command line; the rest take the core's defaults. */
   readonly power?: Partial<PowerSettings>;
   readonly sizing: boolean;
+  /** Print the function each cell computes (`--found`). */
+  readonly found: boolean;
   readonly transfer?: TransferChoice;
   /** Level-1 DC operating point beside each vector. */
   readonly dc: boolean;
@@ -57,6 +60,8 @@ export interface CheckArgs extends CellChoice {
   /** Output load in farads for --power and --sizing, when given (else the core's default). */
   readonly load?: number;
   readonly jobs?: number;
+  /** Inputs a sweep may take (`--max-inputs`, at most MAX_SWEEP_INPUTS); the core's default when left out. */
+  readonly maxInputs?: number;
   readonly help: boolean;
 }
 
@@ -99,12 +104,14 @@ const CHECK_OPTIONS = {
   activity: { type: 'string' },
   load: { type: 'string' },
   sizing: { type: 'boolean' },
+  found: { type: 'boolean' },
   jobs: { type: 'string' },
   transfer: { type: 'string' },
   hold: { type: 'string' },
   convention: { type: 'string' },
   points: { type: 'string' },
   dc: { type: 'boolean' },
+  'max-inputs': { type: 'string' },
   prove: { type: 'boolean' },
 } as const satisfies ParseArgsConfig['options'];
 
@@ -119,6 +126,8 @@ export function parseCheckArgs(argv: readonly string[]): CheckArgs {
     throw new UsageError('check needs at least one FILE (see railwise check --help)');
   const powerFlag = v.freq !== undefined || v.activity !== undefined;
   if (powerFlag && !v.power) throw new UsageError('--freq and --activity go with --power');
+  if (v.found && v.sequence !== undefined)
+    throw new UsageError('--found reads the function off the sweep: leave out --sequence');
   if (v.load !== undefined && !v.power && !v.sizing)
     throw new UsageError('--load goes with --power or --sizing');
   const transfer = transferChoice(v);
@@ -129,6 +138,7 @@ export function parseCheckArgs(argv: readonly string[]): CheckArgs {
     allNets: v['all-nets'] ?? false,
     undriven: v.undriven ?? false,
     sizing: v.sizing ?? false,
+    found: v.found ?? false,
     dc: v.dc ?? false,
     prove: v.prove ?? false,
     ...(transfer === undefined ? {} : { transfer }),
@@ -136,8 +146,23 @@ export function parseCheckArgs(argv: readonly string[]): CheckArgs {
     ...(v.load === undefined ? {} : { load: loadValue(v.load) }),
     ...(v.power ? { power: powerChoice(v) } : {}),
     ...(v.jobs === undefined ? {} : { jobs: positiveInteger('--jobs', v.jobs) }),
+    ...(v['max-inputs'] === undefined ? {} : { maxInputs: maxInputs(v['max-inputs']) }),
   };
 }
+
+/** `--max-inputs N`: 1 to MAX_SWEEP_INPUTS; past that no sweep is offered, and the message says what is. */
+function maxInputs(text: string): number {
+  const value = positiveInteger('--max-inputs', text);
+  if (value > MAX_SWEEP_INPUTS)
+    throw new UsageError(
+      `--max-inputs ${value}: a sweep takes at most ${MAX_SWEEP_INPUTS} inputs (${(2 ** MAX_SWEEP_INPUTS).toLocaleString('en-US')} vectors); ${WIDER_CELLS}`,
+    );
+  return value;
+}
+
+/** What to do for a cell with more inputs than any sweep takes. */
+export const WIDER_CELLS =
+  'prove its properties for every vector with --prove (the sweep is then skipped), or check chosen vectors with --sequence "A=0 B=1; A=1" (a single vector is a one-step sequence)';
 
 export function parseExportArgs(argv: readonly string[]): ExportArgs {
   const { values: v, positionals } = parse(argv, EXPORT_OPTIONS);

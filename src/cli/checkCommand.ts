@@ -14,11 +14,13 @@ import { DEFAULT_POWER_SETTINGS } from '../core/power/settings.ts';
 import type { CheckArgs } from './args.ts';
 import { makeColour, terminalSafe, type Colour } from './colour.ts';
 import { FindingSpool } from './findingSpool.ts';
+import { sweepFindings, type SweepColumns } from '../core/analysis/sweepColumns.ts';
+import { Indented, Later, Stream, writeJson } from './jsonWriter.ts';
 import { proved, type ProofJson } from './proofCell.ts';
-import { Later, Stream, writeJson } from './jsonWriter.ts';
 import { loadCells, type CellFailure, type CellJob, type CellSkip } from './loadCells.ts';
 import { runCells } from './parallel.ts';
-import type { CellResult, RunOptions, VectorJson } from './runCell.ts';
+import type { CellJson, CellResult, RunOptions } from './runCell.ts';
+import { SweepRowText } from './rowText.ts';
 import { isStreamed, prepareStreamedCell, type CellTail } from './streamCell.ts';
 import { count, formatCell, formatFailure, formatSkipped, TextDigest } from './textReport.ts';
 import { EXIT_FINDINGS, EXIT_OK, EXIT_UNUSABLE, UsageError } from './usage.ts';
@@ -45,9 +47,11 @@ export async function checkCommand(args: CheckArgs, io: Output): Promise<number>
     allNets: args.allNets,
     undriven: args.undriven,
     sizing: args.sizing,
+    found: args.found,
     load: args.load ?? DEFAULT_POWER_SETTINGS.load,
     dc: args.dc,
     prove: args.prove,
+    ...(args.maxInputs === undefined ? {} : { maxInputs: args.maxInputs }),
     ...(args.transfer === undefined ? {} : { transfer: args.transfer }),
     ...(args.sequence === undefined ? {} : { sequence: args.sequence }),
     ...(args.power === undefined ? {} : { power: args.power }),
@@ -122,7 +126,8 @@ function cellValue(source: CellSource, run: Run): unknown {
         run.outcomes.push(r),
         { cell: r.skipped.cell, file: r.skipped.file, skipped: r.skipped.reason }
       );
-    return (run.outcomes.push({ cell: r.json.cell, summary: r.json.summary, proof: r.json.proof }), r.json);
+    run.outcomes.push({ cell: r.json.cell, summary: r.json.summary, proof: r.json.proof });
+    return printedCell(r.json);
   }
   const prepared = prepareStreamedCell(source.job, run.options);
   if ('failure' in prepared) return (run.outcomes.push(prepared), failureJson(prepared.failure));
@@ -131,12 +136,14 @@ function cellValue(source: CellSource, run: Run): unknown {
   let tail: CellTail | null = null;
   const done = (): CellTail =>
     tail ?? { structural: [], summary: { vectors: 0, errors: 0, warnings: 0 }, notes: [] };
+  let text: SweepRowText | null = null;
   return {
     ...names,
-    vectors: new Stream<VectorJson>((emit) => {
-      tail = prepared.rows((row) => {
-        row.findings.forEach((f) => spool.add(f));
-        emit(row);
+    vectors: new Stream<Indented>((emit) => {
+      tail = prepared.rows((block) => {
+        text ??= new SweepRowText(block);
+        for (const f of sweepFindings(block)) spool.add(f);
+        for (let i = 0; i < block.count; i++) emit(rowJson(text, block, i));
       });
       run.outcomes.push({ cell: names.cell, summary: tail.summary, proof });
     }),
@@ -153,6 +160,24 @@ function cellValue(source: CellSource, run: Run): unknown {
     proof,
     caution: CAUTION,
   };
+}
+
+function rowJson(text: SweepRowText, block: SweepColumns, i: number): Indented {
+  return new Indented((indent) => text.text(block, i, indent));
+}
+
+/** A collected cell as printed: a sweep's columns become its `vectors`, written row by row. */
+export function printedCell(json: CellJson): object {
+  const { sweep } = json;
+  if (sweep === undefined) return json;
+  const text = new SweepRowText(sweep);
+  const vectors = new Stream<Indented>((emit) => {
+    for (let i = 0; i < sweep.count; i++) emit(rowJson(text, sweep, i));
+  });
+  // The same keys in the same order, `sweep` printed in its place as `vectors`.
+  return Object.fromEntries(
+    Object.entries(json).map(([k, v]) => (k === 'sweep' ? ['vectors', vectors] : [k, v])),
+  );
 }
 
 function textReport(run: Run, io: Output): void {
@@ -175,7 +200,7 @@ function cellText(source: CellSource, run: Run, c: Colour): string {
   const prepared = prepareStreamedCell(source.job, run.options);
   if ('failure' in prepared) return (run.outcomes.push(prepared), formatFailure(prepared.failure, c));
   const digest = new TextDigest();
-  const tail = prepared.rows((row) => digest.add(row));
+  const tail = prepared.rows((block) => digest.addBlock(block));
   run.outcomes.push({ cell: prepared.head.cell, summary: tail.summary, proof: prepared.head.proof });
   return formatCell(digest.view(prepared.head, tail), c);
 }

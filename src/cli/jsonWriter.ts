@@ -4,7 +4,9 @@
  * `JSON.stringify(value, null, 2)` would give, except that parts of the value may be:
  * - `Stream`: an array whose items are pushed one at a time (the rows of a sweep as they are solved);
  * - `Later`: a value computed only when the writer reaches it (a summary known after the rows);
- * - `Raw`: a value already written by `JSON.stringify(value, null, 2)` (findings kept on disk).
+ * - `Raw`: a value already written by `JSON.stringify(value, null, 2)` (findings kept on disk);
+ * - `Indented`: a value whose text its maker writes for the indent it is nested at (a sweep's rows,
+ *   `rowText.ts`), pushed as one piece rather than line by line.
  * When a stream fails part way, its array is closed, the enclosing object gets an `error` field, and
  * the document is completed before the error is passed on: the output always parses.
  */
@@ -19,6 +21,11 @@ export class Later<T> {
 
 export class Raw {
   constructor(readonly json: string) {}
+}
+
+export class Indented {
+  /** `text(indent)`: the value's JSON, every line after the first starting with `indent`. */
+  constructor(readonly text: (indent: string) => string) {}
 }
 
 /** Lines go out in chunks of about this many characters. */
@@ -49,6 +56,7 @@ class Writer {
   value(value: unknown, indent: string, first: string, last: string): void {
     if (value instanceof Later) return this.value(value.get(), indent, first, last);
     if (value instanceof Raw) return this.text(value.json, indent, first, last);
+    if (value instanceof Indented) return this.push(`${first}${value.text(indent)}${last}`);
     if (value instanceof Stream) return this.stream(value, indent, first, last);
     if (typeof value !== 'object' || value === null || !hasLazyPart(value)) {
       return this.text(JSON.stringify(value, null, 2) ?? 'null', indent, first, last);
@@ -131,7 +139,8 @@ class Writer {
 }
 
 function hasLazyPart(value: unknown): boolean {
-  if (value instanceof Stream || value instanceof Later || value instanceof Raw) return true;
+  if (value instanceof Stream || value instanceof Later || value instanceof Raw || value instanceof Indented)
+    return true;
   return typeof value === 'object' && value !== null && Object.values(value).some(hasLazyPart);
 }
 

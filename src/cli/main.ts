@@ -3,6 +3,7 @@
  * so tests can call it directly; bin/railwise.mjs wires it to the process.
  */
 import { parseCheckArgs, parseExportArgs } from './args.ts';
+import { BlockingWriter } from './blockingWrite.ts';
 import { parseCompareArgs } from './compareArgs.ts';
 import { checkCommand } from './checkCommand.ts';
 import { colourWanted } from './colour.ts';
@@ -89,8 +90,9 @@ function help(io: Io, text: string): number {
 }
 
 function processIo(): Io {
+  const stdout = new BlockingWriter(process.stdout.fd);
   return {
-    out: (text) => void process.stdout.write(`${text}\n`),
+    out: (text) => stdout.write(`${text}\n`),
     err: (text) => void process.stderr.write(`${text}\n`),
     colour: colourWanted(process.stdout.isTTY === true, process.env),
   };

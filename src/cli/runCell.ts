@@ -10,6 +10,7 @@ import {
 } from '../core/analysis/check.ts';
 import { parseSequenceText } from '../core/analysis/sequenceText.ts';
 import type { CheckReport, VectorReport } from '../core/analysis/report.ts';
+import { sweepRows, type SweepColumns } from '../core/analysis/sweepColumns.ts';
 import { CAUTION } from '../core/caution.ts';
 import { CompileError } from '../core/compile/compile.ts';
 import { ExpressionError } from '../core/expect/parse.ts';
@@ -20,12 +21,14 @@ import { powerFromCounts } from '../core/power/powerReport.ts';
 import { DEFAULT_POWER_SETTINGS, PowerOptionsError, type PowerSettings } from '../core/power/settings.ts';
 import type { PowerReport } from '../core/power/types.ts';
 import { sizingReport } from '../core/sizing/sizingReport.ts';
+import { foundFunctions, type FoundFunction } from '../core/analysis/foundFunction.ts';
 import type { SizingReport } from '../core/sizing/types.ts';
 import { compile } from '../core/compile/compile.ts';
 import { TransferError, type TransferReport } from '../core/dc/transfer.ts';
 import { VectorDcRunner, type VectorDc } from '../core/dc/vectorDc.ts';
 import { Simulator } from '../core/solver/simulator.ts';
-import type { TransferChoice } from './args.ts';
+import { MAX_SWEEP_INPUTS } from '../core/analysis/vectors.ts';
+import { WIDER_CELLS, type TransferChoice } from './args.ts';
 import { cellTransfer } from './dcCell.ts';
 import { cellProof, type ProofJson } from './proofCell.ts';
 import type { CellFailure, CellJob, CellSkip } from './loadCells.ts';
@@ -38,11 +41,15 @@ export interface RunOptions {
   /** Power settings given on the command line; the rest are the core's defaults. */
   readonly power?: Partial<PowerSettings>;
   readonly sizing: boolean;
+  /** Add the function each output computes, read off the sweep (`--found`). */
+  readonly found?: boolean;
   /** Output load for sizing, farads. */
   readonly load: number;
   readonly transfer?: TransferChoice;
   /** Level-1 DC beside each vector, read from the same pass as the check. */
   readonly dc?: boolean;
+  /** Inputs a sweep may take (`--max-inputs`); the core's default when left out. */
+  readonly maxInputs?: number;
   /** `--prove`: add the proof of every property; past the exhaustive limit the sweep is skipped. */
   readonly prove?: boolean;
 }
@@ -60,17 +67,26 @@ interface Extras {
   readonly sizing?: SizingReport | undefined;
   readonly transfer?: TransferReport | undefined;
   readonly dc?: readonly VectorDc[] | undefined;
+  readonly found?: readonly FoundFunction[] | undefined;
   readonly proof?: ProofJson | undefined;
 }
 
-export interface CellJson extends Omit<CheckReport, 'vectors' | 'steps'> {
+/**
+ * A checked cell as plain data, ready to print: the single-cell JSON object of docs/semantics.md §5,
+ * except that a sweep's rows stay in columns (`sweep`, printed as `vectors` row by row).
+ */
+export interface CellJson extends Omit<CheckReport, 'sweep' | 'steps'> {
   readonly file: string;
+  readonly sweep?: SweepColumns;
+  /** Rows as printed: a sweep's with `--dc` (each with its `dc`), or a sequence's steps. */
   readonly vectors?: readonly VectorJson[];
   readonly steps?: readonly VectorJson[];
   readonly technology: { readonly source: string; readonly vdd: number };
   readonly power?: PowerReport;
   readonly sizing?: SizingReport;
   readonly transfer?: TransferReport;
+  /** With --found: per output, the function it computes as a minimal sum of products. */
+  readonly found?: readonly FoundFunction[];
   readonly proof?: ProofJson;
   readonly caution: string;
 }
@@ -82,7 +98,7 @@ export function runCell(job: CellJob, options: RunOptions): CellResult {
   try {
     const proof = options.prove ? cellProof(job) : undefined;
     if (proof !== undefined && sweepSkipped(job, options)) {
-      const note = `${job.netlist.inputs.length} inputs are past the exhaustive limit of ${DEFAULT_MAX_INPUTS}: the sweep was skipped, the proof covers every vector`;
+      const note = `${job.netlist.inputs.length} inputs are past the exhaustive limit of ${sweepLimit(options)}: the sweep was skipped, the proof covers every vector`;
       const report = checkStructure(
         job.netlist,
         { technology: job.technology, expectations: job.expectations },
@@ -101,6 +117,7 @@ export function runCell(job: CellJob, options: RunOptions): CellResult {
       expectations: job.expectations,
       allNets: options.allNets,
       undrivenInputs: options.undriven,
+      ...(options.maxInputs === undefined ? {} : { maxInputs: options.maxInputs }),
       ...(dc === null ? {} : { observers: [dc] }),
       ...(steps === undefined ? {} : { steps }),
       ...(power === undefined ? {} : { power: power.request }),
@@ -111,7 +128,10 @@ export function runCell(job: CellJob, options: RunOptions): CellResult {
     const powerJson =
       counts === null || power === undefined ? undefined : powerFromCounts(counts, power.settings);
     const transfer = options.transfer === undefined ? undefined : cellTransfer(job, options.transfer);
-    return { json: cellJson(job, report, { power: powerJson, sizing, transfer, dc: dc?.rows, proof }) };
+    const found = options.found === true && report.sweep !== undefined ? foundFunctions(report) : undefined;
+    return {
+      json: cellJson(job, report, { power: powerJson, sizing, transfer, dc: dc?.rows, found, proof }),
+    };
   } catch (e) {
     return { failure: { file: job.file, cell: job.cell, ...failureOf(e) } };
   }
@@ -120,8 +140,15 @@ export function runCell(job: CellJob, options: RunOptions): CellResult {
 /** With --prove, a sweep past the exhaustive limit is skipped rather than refused (no --sequence). */
 export function sweepSkipped(job: CellJob, options: RunOptions): boolean {
   return (
-    options.prove === true && options.sequence === undefined && job.netlist.inputs.length > DEFAULT_MAX_INPUTS
+    options.prove === true &&
+    options.sequence === undefined &&
+    job.netlist.inputs.length > sweepLimit(options)
   );
+}
+
+/** The most inputs a sweep takes: `--max-inputs`, else the core's default. */
+function sweepLimit(options: RunOptions): number {
+  return options.maxInputs ?? DEFAULT_MAX_INPUTS;
 }
 
 /**
@@ -166,24 +193,31 @@ export function failureOf(e: unknown): { message: string; field?: string } {
   if (e instanceof SequenceError) return { message: `--sequence: ${e.message}`, field: 'sequence' };
   if (e instanceof TransferError) return { message: `--transfer: ${e.message}`, field: 'transfer' };
   if (e instanceof PowerOptionsError) return { message: `--power: ${e.message}`, field: e.field };
-  if (e instanceof SweepLimitError)
-    return { message: `${e.message}; name fewer inputs or give --sequence`, field: 'inputs' };
+  if (e instanceof SweepLimitError) return { message: sweepLimitMessage(e), field: 'inputs' };
   if (e instanceof CompileError) return { message: e.message };
   const text = e instanceof Error ? (e.stack ?? e.message) : String(e);
   return { message: `internal error (please report it): ${text}` };
 }
 
+/** Past the limit asked for, how to sweep anyway; past the largest sweep, what to check instead. */
+function sweepLimitMessage(e: SweepLimitError): string {
+  if (e.inputs <= MAX_SWEEP_INPUTS && e.limit < e.inputs)
+    return `${e.message}; give --max-inputs ${e.inputs} to sweep all ${(2 ** e.inputs).toLocaleString('en-US')} vectors, or ${WIDER_CELLS}`;
+  return `${e.message}, and no sweep takes more than ${MAX_SWEEP_INPUTS}; ${WIDER_CELLS}`;
+}
+
 function cellJson(job: CellJob, report: CheckReport, extras: Extras): CellJson {
-  const { power, sizing, transfer, dc, proof } = extras;
+  const { power, sizing, transfer, dc, found, proof } = extras;
   const rows = (list: readonly VectorReport[]): VectorJson[] =>
     list.map((v, i) => (dc?.[i] === undefined ? vectorJson(v) : { ...vectorJson(v), dc: dc[i] }));
+  const { sweep, steps } = report;
   return {
     cell: job.cell,
     file: job.file,
     inputs: report.inputs,
     outputs: report.outputs,
-    ...(report.vectors === undefined ? {} : { vectors: rows(report.vectors) }),
-    ...(report.steps === undefined ? {} : { steps: rows(report.steps) }),
+    ...(sweep === undefined ? {} : dc === undefined ? { sweep } : { vectors: rows(sweepRows(sweep)) }),
+    ...(steps === undefined ? {} : { steps: rows(steps) }),
     findings: report.findings,
     summary: report.summary,
     notes: [...job.notes, ...report.notes],
@@ -191,6 +225,7 @@ function cellJson(job: CellJob, report: CheckReport, extras: Extras): CellJson {
     ...(power === undefined ? {} : { power }),
     ...(sizing === undefined ? {} : { sizing }),
     ...(transfer === undefined ? {} : { transfer }),
+    ...(found === undefined ? {} : { found }),
     ...(proof === undefined ? {} : { proof }),
     caution: CAUTION,
   };

@@ -1,11 +1,13 @@
 /**
  * A cell whose sweep is too big to collect (more than STREAM_ROWS vectors): everything that can
- * refuse it is checked first (`prepareStreamedCell`), then its rows are handed on one at a time as
- * they are solved and never held together. Sequences and `--dc` are always collected (runCell.ts):
+ * refuse it is checked first (`prepareStreamedCell`), then its rows are handed on block by block
+ * (columns of up to SWEEP_BLOCK vectors) as they are solved and never held together. Sequences and `--dc` are always collected (runCell.ts):
  * a sequence has few steps, and the DC rows are read beside the check's.
  */
 import type { Finding, Summary } from '../core/analysis/report.ts';
+import type { SweepColumns } from '../core/analysis/sweepColumns.ts';
 import type { TransferReport } from '../core/dc/transfer.ts';
+import type { FoundFunction } from '../core/analysis/foundFunction.ts';
 import { prepareAnalysis } from '../core/power/cellAnalysis.ts';
 import { powerFromCounts } from '../core/power/powerReport.ts';
 import type { PowerReport } from '../core/power/types.ts';
@@ -15,14 +17,7 @@ import { sweepSize } from '../core/analysis/vectors.ts';
 import { cellTransfer } from './dcCell.ts';
 import type { CellFailure, CellJob } from './loadCells.ts';
 import { cellProof, type ProofJson } from './proofCell.ts';
-import {
-  failureOf,
-  powerSettings,
-  sweepSkipped,
-  vectorJson,
-  type RunOptions,
-  type VectorJson,
-} from './runCell.ts';
+import { failureOf, powerSettings, sweepSkipped, type RunOptions } from './runCell.ts';
 
 /** Sweeps of more vectors than this are written as they run instead of collected first. */
 export const STREAM_ROWS = 4096;
@@ -41,6 +36,8 @@ export interface CellHead {
   readonly technology: { readonly source: string; readonly vdd: number };
   readonly sizing?: SizingReport;
   readonly transfer?: TransferReport;
+  /** With --found: the function of each output (none can be read off a streamed sweep). */
+  readonly found?: readonly FoundFunction[];
   readonly proof?: ProofJson;
 }
 
@@ -55,7 +52,7 @@ export interface CellTail {
 
 export interface StreamedCell {
   readonly head: CellHead;
-  readonly rows: (onRow: (row: VectorJson) => void) => CellTail;
+  readonly rows: (onBlock: (block: SweepColumns) => void) => CellTail;
 }
 
 export function prepareStreamedCell(
@@ -64,13 +61,14 @@ export function prepareStreamedCell(
 ): StreamedCell | { failure: CellFailure } {
   try {
     const power = options.power === undefined ? undefined : powerSettings(job, options.power, undefined);
-    const onRow: { current: (row: VectorJson) => void } = { current: () => undefined };
+    const onBlock: { current: (block: SweepColumns) => void } = { current: () => undefined };
     const analysis = prepareAnalysis(job.netlist, {
       technology: job.technology,
       expectations: job.expectations,
       allNets: options.allNets,
       undrivenInputs: options.undriven,
-      onRow: (row) => onRow.current(vectorJson(row)),
+      ...(options.maxInputs === undefined ? {} : { maxInputs: options.maxInputs }),
+      onBlock: (block) => onBlock.current(block),
       ...(power === undefined ? {} : { power: power.request }),
     });
     const sizing = options.sizing
@@ -86,10 +84,11 @@ export function prepareStreamedCell(
       technology: { source: job.technology.source, vdd: job.technology.vdd },
       ...(sizing === undefined ? {} : { sizing }),
       ...(transfer === undefined ? {} : { transfer }),
+      ...(options.found === true ? { found: job.netlist.outputs.map(unreadFunction) } : {}),
       ...(proof === undefined ? {} : { proof }),
     };
-    const rows = (each: (row: VectorJson) => void): CellTail => {
-      onRow.current = each;
+    const rows = (each: (block: SweepColumns) => void): CellTail => {
+      onBlock.current = each;
       const { report, power: counts } = analysis.run();
       const powerJson =
         counts === null || power === undefined ? undefined : powerFromCounts(counts, power.settings);
@@ -104,4 +103,10 @@ export function prepareStreamedCell(
   } catch (e) {
     return { failure: { file: job.file, cell: job.cell, ...failureOf(e) } };
   }
+}
+
+/** A streamed sweep is never held, so no function is read off it: said per output. */
+function unreadFunction(output: string): FoundFunction {
+  const note = `no function read off a sweep of more than ${STREAM_ROWS} vectors (it is streamed, never held)`;
+  return { output, expression: null, undecided: 0, minimal: false, note };
 }

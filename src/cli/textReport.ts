@@ -5,13 +5,15 @@
  * printed escaped (printable.ts): a net name cannot move the cursor or rewrite a CI log.
  */
 import type { Finding, Summary } from '../core/analysis/report.ts';
+import { foundFunctionText } from '../core/analysis/foundFunction.ts';
 import { brief, printable } from '../core/text/printable.ts';
 import { own } from '../core/model/records.ts';
 import { formatSi, type Colour } from './colour.ts';
 import { dcLines, transferLines } from './dcText.ts';
 import { proofLines } from './proofText.ts';
 import type { CellFailure, CellSkip } from './loadCells.ts';
-import type { CellJson, VectorJson } from './runCell.ts';
+import { vectorJson, type CellJson, type VectorJson } from './runCell.ts';
+import { sweepFindings, sweepRow, type SweepColumns } from '../core/analysis/sweepColumns.ts';
 import type { CellHead, CellTail } from './streamCell.ts';
 
 /** Rows beyond this are left out when they have no findings (the JSON has them all). */
@@ -49,6 +51,19 @@ export class TextDigest {
     for (const f of row.findings) if (this.rowFindings.length < MAX_FINDINGS) this.rowFindings.push(f);
   }
 
+  /** A block of a sweep: only the rows the report may show are built. */
+  addBlock(s: SweepColumns): void {
+    for (let i = 0; i < s.count && this.first.length < MAX_TABLE_ROWS; i++)
+      this.first.push(vectorJson(sweepRow(s, i)));
+    for (let i = 0; i < s.count && this.flagged.length < MAX_TABLE_ROWS; i++)
+      if (s.kinds[i] !== 0) this.flagged.push(vectorJson(sweepRow(s, i)));
+    for (const f of sweepFindings(s)) {
+      this.rowFindingCount++;
+      if (this.rowFindings.length < MAX_FINDINGS) this.rowFindings.push(f);
+    }
+    this.rowCount += s.count;
+  }
+
   view(head: CellHead, tail: CellTail, rowKind: CellView['rowKind'] = 'vectors'): CellView {
     return {
       head,
@@ -66,8 +81,11 @@ export class TextDigest {
     const rows = json.steps ?? json.vectors ?? [];
     const digest = new TextDigest();
     rows.forEach((r) => digest.add(r));
+    if (json.sweep !== undefined) digest.addBlock(json.sweep);
     const inRows = new Set(rows.flatMap((r) => r.findings));
-    const { cell, file, inputs, outputs, technology, sizing, transfer, proof, power, summary, notes } = json;
+    if (json.sweep !== undefined) for (const f of sweepFindings(json.sweep)) inRows.add(f);
+    const { cell, file, inputs, outputs, technology, sizing, transfer, found, proof, power, summary, notes } =
+      json;
     const head: CellHead = {
       cell,
       file,
@@ -76,6 +94,7 @@ export class TextDigest {
       technology,
       ...(sizing === undefined ? {} : { sizing }),
       ...(transfer === undefined ? {} : { transfer }),
+      ...(found === undefined ? {} : { found }),
       ...(proof === undefined ? {} : { proof }),
     };
     const structural = json.findings.filter((f) => !inRows.has(f));
@@ -162,7 +181,7 @@ function findingLines(view: CellView, c: Colour): string[] {
 }
 
 function extraLines(head: CellHead, tail: CellTail): string[] {
-  const out: string[] = [];
+  const out: string[] = (head.found ?? []).map((f) => `  found: ${printable(foundFunctionText(f))}`);
   if (tail.power !== undefined) {
     const p = tail.power;
     out.push(

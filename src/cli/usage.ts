@@ -50,6 +50,8 @@ Circuit:
   --supply NAMES        extra supply rail net names, comma separated
   --ground NAMES        extra ground rail net names, comma separated
   --undriven            also leave each input undriven (Z) in the sweep
+  --max-inputs N        sweep cells of up to N inputs (default 16, at most 24: 16,777,216
+                        vectors); wider cells are checked with --sequence
 
 Netlists:
   --scale F             metres per unit of W and L as written (e.g. 1e-6), over the file's own
@@ -65,6 +67,8 @@ Report:
     --activity KIND     sequence or random (default: sequence with --sequence, else random)
     --load C            load on each output, also for --sizing, e.g. 10f (default ${formatSi(DEFAULT_POWER_SETTINGS.load, 'F')})
   --sizing              add logical effort, delay estimates and proposed widths
+  --found               add the function each output computes, read off the sweep, as a minimal
+                        sum of products ("Y = !A | !B"; "(EN) ? (!A) : Z" for a tristate one)
   --transfer IN         add the DC transfer curve of every output as IN goes from 0 to VDD, with
                         VM, VIL, VIH, VOL, VOH and the noise margins (level-1 model; one cell)
     --hold "B=1 C=0"    values of the other inputs (default: chosen so an output follows IN)

@@ -5,7 +5,8 @@ import type { KonvaEventObject } from 'konva/lib/Node';
 import { setScreen, setViewport, store, useStore } from '../state/store.ts';
 import { screenToSheet, zoomAt } from '../state/viewport.ts';
 import { zoomFloor } from '../state/view.ts';
-import { PointerLayer, SimulationOverlay } from './overlay/SimulationOverlay.tsx';
+import { SimulationOverlay } from './overlay/SimulationOverlay.tsx';
+import { PointerTip } from './overlay/PointerTip.tsx';
 import { GridLayer } from './GridLayer.tsx';
 import { EmphasisLayer, SceneLayer } from './SceneLayer.tsx';
 import { InteractionLayer } from './InteractionLayer.tsx';
@@ -72,25 +73,23 @@ export function SheetCanvas({
   const screen = useStore((s) => s.screen);
   const tool = useStore((s) => s.tool);
   // The same elements every render: a pan or zoom re-renders the stage's transform, never the
-  // drawing (each part reads the store itself and draws the view when Konva asks). Everything but
-  // the pointer's tooltip shares one Konva layer, so a frame composites two canvases.
+  // drawing (each part reads the store itself and draws the view when Konva asks). Everything is in
+  // one Konva layer, so a frame composites one canvas; the pointer's tip is a page element over it.
   const layers = useMemo(
     () => (
-      <>
-        <Layer listening={false}>
-          <GridLayer />
-          <SceneLayer />
-          <EmphasisLayer />
-          <SimulationOverlay />
-          <InteractionLayer />
-        </Layer>
-        <PointerLayer />
-      </>
+      <Layer listening={false}>
+        <GridLayer />
+        <SceneLayer />
+        <EmphasisLayer />
+        <SimulationOverlay />
+        <InteractionLayer />
+      </Layer>
     ),
     [],
   );
   const measured = useElementSize(box, onFirstLayout);
   useEffect(() => {
+    if (!measured) return;
     setStage(stageRef.current);
     return () => setStage(null);
   }, [measured]);
@@ -155,6 +154,7 @@ export function SheetCanvas({
           {layers}
         </Stage>
       )}
+      <PointerTip box={box} />
     </div>
   );
 }

@@ -1,7 +1,7 @@
 import { useCallback, useMemo } from 'react';
 import { expressionNames } from '../core/analysis/check.ts';
 import { severityCounts, summaryBadge } from '../core/view/summary.ts';
-import { expressionProblem } from '../core/view/expectation.ts';
+import { expressionProblem } from '../core/expect/problems.ts';
 import { setDesignFields, useStore } from '../state/store.ts';
 import { useSimulation } from '../state/simulation.ts';
 import { ExpectationEditor } from './ExpectationEditor.tsx';

@@ -1,5 +1,6 @@
 import { useState } from 'react';
-import { tokenSpan, type ExpressionProblem } from '../core/view/expectation.ts';
+import { type ExpressionProblem } from '../core/expect/problems.ts';
+import { tokenSpan } from '../core/view/expectation.ts';
 
 interface ExpectationEditorProps {
   readonly outputs: readonly string[];

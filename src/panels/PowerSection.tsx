@@ -93,11 +93,15 @@ export function PowerSection() {
   const powerError = useSimulation((s) => s.powerError);
   const error = powerError ?? sizing.error ?? sizing.result?.error ?? null;
   const idle = power === null && !busy;
+  // Folded, the section shows only its badge: the per-net tables (a row per net, hundreds on a
+  // large cell) are built when it is unfolded, not on every check of a folded section.
+  const [unfolded, setUnfolded] = useState(false);
   return (
     <Section
       title="Power and sizing"
       testId="power-section"
       open={false}
+      onToggle={setUnfolded}
       badge={power ? engineering(power.totalWatts, 'W') : undefined}
     >
       <Settings settings={settings} hasSequence={hasSequence} />
@@ -113,7 +117,7 @@ export function PowerSection() {
             : 'Computing…'}
         </p>
       )}
-      <PowerSizingPanel power={power} sizing={sizing.result?.sizing ?? null} error={error} />
+      {unfolded && <PowerSizingPanel power={power} sizing={sizing.result?.sizing ?? null} error={error} />}
     </Section>
   );
 }

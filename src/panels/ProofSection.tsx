@@ -1,4 +1,3 @@
-import { DEFAULT_MAX_INPUTS } from '../core/analysis/check.ts';
 import type { PropertyResult } from '../core/proof/decide.ts';
 import { findingsAbout } from '../core/proof/properties.ts';
 import { propertyTitle, vectorText } from '../core/view/proofView.ts';
@@ -6,6 +5,7 @@ import { vectorCountText } from '../core/view/vectorControl.ts';
 import { showCounterexample, startProof } from '../state/proof.ts';
 import { cancelJob, useSimulation } from '../state/simulation.ts';
 import { useStore } from '../state/store.ts';
+import { appSweepLimit } from '../worker/protocol.ts';
 import { JobBar } from './JobBar.tsx';
 import { Section } from './Section.tsx';
 
@@ -98,7 +98,8 @@ function ProofStatus() {
  */
 export function ProofSection() {
   const proof = useSimulation((s) => s.proof);
-  const pastLimit = useStore((s) => s.design.netlist.inputs.length > DEFAULT_MAX_INPUTS);
+  const undrivenInputs = useSimulation((s) => s.undrivenInputs);
+  const pastLimit = useStore((s) => s.design.netlist.inputs.length > appSweepLimit(undrivenInputs));
   const report = proof.status === 'done' ? proof.result?.report : undefined;
   const failing = report?.properties.filter((p) => p.holds !== true).length;
   return (

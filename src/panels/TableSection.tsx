@@ -1,9 +1,9 @@
-import { useMemo } from 'react';
+import { useCallback, useMemo } from 'react';
 import { countOf } from '../core/view/plural.ts';
 import { summaryBadge, summaryLine } from '../core/view/summary.ts';
-import { MAX_INPUTS_WITH_UNDRIVEN, PROGRESS_THRESHOLD_VECTORS, jobSize } from '../worker/protocol.ts';
-import { DEFAULT_MAX_INPUTS } from '../core/analysis/check.ts';
-import { arrangeRows, kindCounts, vectorRows } from '../core/view/vectorTable.ts';
+import { PROGRESS_THRESHOLD_VECTORS, appSweepLimit, jobSize } from '../worker/protocol.ts';
+import type { SweepColumns } from '../core/analysis/sweepColumns.ts';
+import { arrangeRows, kindCounts, vectorRow } from '../core/view/vectorTable.ts';
 import { AUTO_SWEEP_VECTORS } from '../state/analysis.ts';
 import { startProof } from '../state/proof.ts';
 import { useStore } from '../state/store.ts';
@@ -24,15 +24,17 @@ function SweepStatus() {
   const design = useStore((s) => s.design);
   const undrivenInputs = useSimulation((s) => s.undrivenInputs);
   const size = jobSize({ kind: 'sweep', revision: 0, cell: design, undrivenInputs });
-  const limit = undrivenInputs ? MAX_INPUTS_WITH_UNDRIVEN : DEFAULT_MAX_INPUTS;
+  const limit = appSweepLimit(undrivenInputs);
   if (design.netlist.inputs.length > limit) {
     return (
       <p className="rw-muted" data-testid="sweep-limit">
-        {countOf(design.netlist.inputs.length, 'input')}: more than the {limit} an exhaustive check allows.{' '}
+        {countOf(design.netlist.inputs.length, 'input')}: more than the {limit} the page checks exhaustively.
+        The shown vector is still checked (its findings are above).{' '}
         <button type="button" data-testid="sweep-limit-prove" onClick={() => void startProof()}>
           Prove it for every vector
         </button>{' '}
-        instead (see the proof below), or check the cell with sequences.
+        instead (see the proof below), check chosen vectors with sequences, or sweep the whole cell with{' '}
+        <code>railwise check --max-inputs</code> (up to 24 inputs).
       </p>
     );
   }
@@ -77,17 +79,18 @@ function SweepStatus() {
   }
 }
 
-/** Rows drawn at once: thousands of table rows would stall the page; sorting and filters reach the rest. */
-const ROW_LIMIT = 512;
-
 function SweepTable() {
   const result = useSimulation((s) => (s.sweep.status === 'done' ? s.sweep.result : null));
   const view = useSimulation((s) => s.table);
   const selected = useSimulation((s) => s.selectedRow);
-  const rows = useMemo(() => (result === null ? [] : vectorRows(result.report)), [result]);
-  const shown = useMemo(() => arrangeRows(rows, view), [rows, view]);
-  const counts = useMemo(() => kindCounts(rows), [rows]);
-  if (result === null) return null;
+  const sweep = result?.report.sweep;
+  const order = useMemo(
+    () => (sweep === undefined ? new Int32Array(0) : arrangeRows(sweep, view)),
+    [sweep, view],
+  );
+  const counts = useMemo(() => (sweep === undefined ? new Map() : kindCounts(sweep)), [sweep]);
+  const rowAt = useCallback((i: number) => vectorRow(sweep as SweepColumns, i), [sweep]);
+  if (result === null || sweep === undefined) return null;
   const { report } = result;
   return (
     <>
@@ -102,19 +105,15 @@ function SweepTable() {
       <VectorTable
         inputs={report.inputs}
         outputs={report.outputs}
-        rows={shown.slice(0, ROW_LIMIT)}
-        total={rows.length}
+        order={order}
+        rowAt={rowAt}
+        total={sweep.count}
         counts={counts}
         view={view}
         selected={selected}
         onView={setTableView}
         onSelect={selectRow}
       />
-      {shown.length > ROW_LIMIT && (
-        <p className="rw-muted" data-testid="table-limit">
-          Showing the first {ROW_LIMIT} of {countOf(shown.length, 'row')}: sort or filter to bring others up.
-        </p>
-      )}
     </>
   );
 }

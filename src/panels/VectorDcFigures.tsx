@@ -75,7 +75,7 @@ export function VectorDcFigures() {
             </button>
           </p>
         ) : (
-          <p className="rw-muted">Solved once edits pause.</p>
+          <p className="rw-muted">Solved once edits pause, after the table.</p>
         ))}
       {(dc.status === 'cancelled' || dc.status === 'failed') && (
         <p className={dc.status === 'failed' ? 'rw-error-text' : 'rw-muted'}>

@@ -2,9 +2,12 @@ import { useMemo, useState } from 'react';
 import type { Finding, VectorReport } from '../core/analysis/report.ts';
 import { formatCurrent, formatPower } from '../core/view/format.ts';
 import { chainText, splitChain } from '../core/view/highlight.ts';
+import { detailOf } from '../core/analysis/sweepColumns.ts';
 import { rowOfVector } from '../core/view/vectorTable.ts';
 import { stepVector, toggleInput, useSimulation, type SimulationState } from '../state/simulation.ts';
 import { useStore } from '../state/store.ts';
+import { usableExpectations } from '../core/expect/problems.ts';
+import { appSweepLimit } from '../worker/protocol.ts';
 import { FindingList } from './FindingList.tsx';
 import { InputStrip } from './InputStrip.tsx';
 import { NetList } from './NetList.tsx';
@@ -13,13 +16,46 @@ import { Section } from './Section.tsx';
 import { Legend } from './Legend.tsx';
 import { VectorDcFigures } from './VectorDcFigures.tsx';
 
-/** The report row behind what the sheet shows: the picked sequence step, else the sweep's vector. */
-function shownReport(s: SimulationState): VectorReport | null {
-  if (s.selectedStep !== null) return s.sequence.result?.report.steps?.[s.selectedStep] ?? null;
-  const report = s.sweep.result?.report;
-  if (report === undefined || s.sweep.status !== 'done') return null;
-  const index = s.selectedRow ?? rowOfVector(report, s.vector);
-  return index === null ? null : (report.vectors?.[index] ?? null);
+/** The picked sequence step's report, if a step is picked. */
+function shownStep(s: SimulationState): VectorReport | null {
+  return s.selectedStep === null ? null : (s.sequence.result?.report.steps?.[s.selectedStep] ?? null);
+}
+
+/** The sweep row behind what the sheet shows: the picked row, else the row of the shown vector. */
+function shownRow(s: SimulationState): number | null {
+  const sweep = s.sweep.result?.report.sweep;
+  if (sweep === undefined || s.sweep.status !== 'done') return null;
+  return s.selectedRow ?? rowOfVector(sweep, s.vector);
+}
+
+/**
+ * The findings of what the sheet shows: the picked step's, else its sweep row's, else, for a cell
+ * too wide to sweep, the shown vector's own (docs/semantics.md §7). Null: none yet.
+ */
+function useShownFindings(): readonly Finding[] | null {
+  const step = useSimulation(shownStep);
+  const sweep = useSimulation((s) => (s.sweep.status === 'done' ? s.sweep.result?.report.sweep : undefined));
+  const row = useSimulation((s) => (s.selectedStep === null ? shownRow(s) : null));
+  const wide = useWideCellFindings();
+  return useMemo(() => {
+    if (step !== null) return step.findings;
+    if (wide !== null) return wide;
+    if (sweep === undefined || row === null) return null;
+    return detailOf(sweep, row)?.findings ?? [];
+  }, [step, sweep, row, wide]);
+}
+
+/** Past the page's sweep limit: the live vector's findings, expected functions included; else null. */
+function useWideCellFindings(): readonly Finding[] | null {
+  const session = useSimulation((s) => s.session);
+  const live = useSimulation((s) => s.live);
+  const undriven = useSimulation((s) => s.undrivenInputs);
+  const given = useStore((s) => s.design.expectations);
+  return useMemo(() => {
+    if (session === null || live === null) return null;
+    if (session.netlist.inputs.length <= appSweepLimit(undriven)) return null;
+    return session.findingsOfLast(usableExpectations(session.netlist, given).expectations);
+  }, [session, live, undriven, given]);
 }
 
 function CurrentPaths() {
@@ -49,16 +85,15 @@ function CurrentPaths() {
 }
 
 function VectorFindings() {
-  const report = useSimulation(shownReport);
+  const findings = useShownFindings();
   const status = useSimulation((s) => s.sweep.status);
-  if (report === null) {
+  if (findings === null) {
     const why =
       status === 'running'
         ? 'Checking…'
         : 'Findings appear once every vector is checked (see the table below).';
     return <p className="rw-muted">{why}</p>;
   }
-  const findings: readonly Finding[] = report.findings;
   return (
     <FindingList
       findings={findings}

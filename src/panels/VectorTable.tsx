@@ -1,14 +1,18 @@
+import { useMemo, useState } from 'react';
 import type { FindingKind, Level } from '../core/analysis/report.ts';
 import { lookOf } from '../core/view/visualLanguage.ts';
 import { countOf } from '../core/view/plural.ts';
 import { formatCurrent, formatPower } from '../core/view/format.ts';
 import type { RowFilter, SortDirection, SortKey, TableView, VectorRow } from '../core/view/vectorTable.ts';
+import { visibleRows, ROW_HEIGHT_PX, TABLE_HEIGHT_PX } from '../core/view/tableWindow.ts';
 
 interface VectorTableProps {
   readonly inputs: readonly string[];
   readonly outputs: readonly string[];
-  /** Already filtered and sorted. */
-  readonly rows: readonly VectorRow[];
+  /** The rows to show, filtered and sorted, as positions in the sweep. */
+  readonly order: Int32Array;
+  /** Builds the row at a position in the sweep: called only for the rows on screen. */
+  readonly rowAt: (index: number) => VectorRow;
   readonly total: number;
   readonly counts: ReadonlyMap<FindingKind, number>;
   readonly view: TableView;
@@ -115,43 +119,73 @@ function RowView({
   );
 }
 
-/** Every vector at a glance; click a header to sort, a row to select that vector. */
-export function VectorTable(props: VectorTableProps) {
-  const { inputs, outputs, rows, view, onView, selected, onSelect } = props;
+/** A row of the height of `count` table rows: stands in for the rows scrolled out of view. */
+function Spacer({ count, columns }: { count: number; columns: number }) {
+  if (count <= 0) return null;
   return (
-    <div className="rw-table-wrap">
+    <tr aria-hidden="true" className="rw-spacer" style={{ height: count * ROW_HEIGHT_PX }}>
+      <td colSpan={columns} />
+    </tr>
+  );
+}
+
+/**
+ * Every vector at a glance; click a header to sort, a row to select that vector. However many rows
+ * there are, only those in view (and a few either side) are in the page: the rest are spacers of
+ * their height, so scrolling reaches every row.
+ */
+export function VectorTable(props: VectorTableProps) {
+  const { inputs, outputs, order, rowAt, view, onView, selected, onSelect } = props;
+  const [scrollTop, setScrollTop] = useState(0);
+  const shown = visibleRows(order.length, scrollTop);
+  const rows = useMemo(
+    () => Array.from(order.subarray(shown.start, shown.end), (i) => rowAt(i)),
+    [order, rowAt, shown.start, shown.end],
+  );
+  const columns = outputs.length + 5;
+  return (
+    <>
       <FilterChoice view={view} onView={onView} counts={props.counts} total={props.total} />
-      <table className="rw-vectors" data-testid="vector-table">
-        <thead>
-          <tr>
-            <SortHeader label="#" sortKey="vector" view={view} onView={onView} />
-            <th>{inputs.join(' ')}</th>
-            {outputs.map((o) => (
-              <SortHeader key={o} label={o} sortKey={`output:${o}`} view={view} onView={onView} />
+      <div
+        className="rw-table-wrap"
+        data-testid="vector-table-scroll"
+        style={{ maxHeight: TABLE_HEIGHT_PX }}
+        onScroll={(e) => setScrollTop(e.currentTarget.scrollTop)}
+      >
+        <table className="rw-vectors" data-testid="vector-table" aria-rowcount={order.length + 1}>
+          <thead>
+            <tr>
+              <SortHeader label="#" sortKey="vector" view={view} onView={onView} />
+              <th>{inputs.join(' ')}</th>
+              {outputs.map((o) => (
+                <SortHeader key={o} label={o} sortKey={`output:${o}`} view={view} onView={onView} />
+              ))}
+              <SortHeader label="flags" sortKey="severity" view={view} onView={onView} />
+              <SortHeader label="I supply" sortKey="supplyCurrent" view={view} onView={onView} />
+              <SortHeader label="P static" sortKey="staticPower" view={view} onView={onView} />
+            </tr>
+          </thead>
+          <tbody>
+            <Spacer count={shown.start} columns={columns} />
+            {rows.map((row) => (
+              <RowView
+                key={row.index}
+                row={row}
+                inputs={inputs}
+                outputs={outputs}
+                selected={row.index === selected}
+                onSelect={onSelect}
+              />
             ))}
-            <SortHeader label="flags" sortKey="severity" view={view} onView={onView} />
-            <SortHeader label="I supply" sortKey="supplyCurrent" view={view} onView={onView} />
-            <SortHeader label="P static" sortKey="staticPower" view={view} onView={onView} />
-          </tr>
-        </thead>
-        <tbody>
-          {rows.map((row) => (
-            <RowView
-              key={row.index}
-              row={row}
-              inputs={inputs}
-              outputs={outputs}
-              selected={row.index === selected}
-              onSelect={onSelect}
-            />
-          ))}
-        </tbody>
-      </table>
-      {rows.length === 0 && (
+            <Spacer count={order.length - shown.end} columns={columns} />
+          </tbody>
+        </table>
+      </div>
+      {order.length === 0 && (
         <p className="rw-clean" data-testid="table-empty">
           ✓ No vector matches this filter.
         </p>
       )}
-    </div>
+    </>
   );
 }

@@ -7,6 +7,7 @@
  * by serialising: the document slice keeps unchanged netlists, expectations and sequences as the
  * same objects, and numbers their changes.
  */
+import { followLibrary } from './library.ts';
 import { powerFromCounts } from '../core/power/powerReport.ts';
 import { LiveSession } from '../core/view/liveSession.ts';
 import { completeVector } from '../core/view/vectorControl.ts';
@@ -26,7 +27,7 @@ import { store, type RailwiseState } from './store.ts';
 
 /** Cells with up to this many vectors are checked by themselves after each edit; larger ones on a click. */
 export const AUTO_SWEEP_VECTORS = 1024;
-/** Waits for edits to pause before starting jobs by themselves. */
+/** Changes closer together than this wait for edits to pause before jobs start by themselves. */
 export const SWEEP_DEBOUNCE_MS = 120;
 
 /**
@@ -147,11 +148,10 @@ function autoRun(stale: Staleness): void {
   const s = store.getState();
   const sim = s.simulation;
   if (!checkedByItself(s)) return;
-  const bySequence = sim.powerSettings.activity === 'sequence';
   if (stale.sizing && sim.sizing.status === 'idle') void startSizing();
   if (
     (stale.sequence || stale.activity) &&
-    bySequence &&
+    sim.powerSettings.activity === 'sequence' &&
     sim.sequence.status === 'idle' &&
     currentSteps().length > 0
   )
@@ -182,22 +182,43 @@ export function warmAnalysis(): void {
 
 export interface StartOptions {
   /**
-   * Start the opened design's jobs at once rather than after the edit pause: the page at start-up,
-   * where nothing is being edited yet.
+   * Start the opened design's jobs at once, in this very call, rather than in the microtask after
+   * it: the page at start-up, where nothing is being edited yet.
    */
   readonly startNow?: boolean;
 }
 
-/** Follows the store from now on; returns the function that stops following. */
+/** Runs `work` once the page has painted what the store holds now (at once where nothing paints). */
+function afterNextPaint(work: () => void): void {
+  if (typeof requestAnimationFrame === 'function') requestAnimationFrame(() => setTimeout(work, 0));
+  else setTimeout(work, 0);
+}
+
+/**
+ * Follows the store from now on; returns the function that stops following. Jobs wait for edits
+ * to pause: a new circuit after a quiet spell (a design opened, the page started, a first edit)
+ * starts them at once, in a microtask after the change that made them stale; other changes, and
+ * changes closer together than SWEEP_DEBOUNCE_MS, wait until they pause, so typing or a run of
+ * toggles starts one job.
+ * The check goes first; the other jobs start once it has answered and the page has painted the
+ * answer (docs/semantics.md §8), so on two cores the table and the level colours come first.
+ */
 export function startAnalysis(options: StartOptions = {}): () => void {
   let timer: ReturnType<typeof setTimeout> | null = null;
+  /** What went stale since jobs last started. */
   let pending: Staleness | null = null;
+  let lastChange = -Infinity;
+  /** Whether the changes waiting now began after a quiet spell. */
+  let burstAfterQuiet = false;
+  let microtaskQueued = false;
   let stopped = false;
   const runDue = (): void => {
+    if (timer !== null) clearTimeout(timer); // a change queued behind the microtask is served now
     timer = null;
+    microtaskQueued = false;
     const due = pending;
     pending = null;
-    if (due === null) return;
+    if (due === null || stopped) return;
     autoRunTransfer(due);
     // The check before the jobs that start by themselves: it is what the panel waits for, and they
     // start once it has answered, so their workers do not compete with it for the processor.
@@ -208,27 +229,42 @@ export function startAnalysis(options: StartOptions = {}): () => void {
       autoRunVectorDc(due);
     };
     if (check === null) rest();
-    else void check.then(rest);
+    else void check.then(() => afterNextPaint(rest));
+  };
+  /**
+   * A new circuit after a quiet spell starts at once (one change may reach the store as several
+   * updates, the circuit not always first); a flipped input or a setting waits for the pause, so a
+   * run of toggles starts one level-1 answer, not one per toggle.
+   */
+  const schedule = (): void => {
+    const now = Date.now();
+    if (timer === null && !microtaskQueued) burstAfterQuiet = now - lastChange >= SWEEP_DEBOUNCE_MS;
+    lastChange = now;
+    if (microtaskQueued) return;
+    if (timer !== null) clearTimeout(timer);
+    timer = null;
+    if (burstAfterQuiet && pending?.netlist === true) {
+      microtaskQueued = true;
+      queueMicrotask(runDue);
+    } else timer = setTimeout(runDue, SWEEP_DEBOUNCE_MS);
   };
   const react = (s: RailwiseState, previous: RailwiseState | null): void => {
     const stale = follow(s);
     if (Object.values(stale).some(Boolean)) {
       pending = pending === null ? stale : merge(pending, stale);
-      if (timer !== null) clearTimeout(timer);
-      timer = setTimeout(runDue, SWEEP_DEBOUNCE_MS);
+      schedule();
     }
     const sim = store.getState().simulation;
     if (previous === null || powerInputsChanged(sim, previous.simulation)) setSimulation(finishedPower(sim));
   };
   react(store.getState(), null);
-  if (options.startNow === true && timer !== null) {
-    clearTimeout(timer);
-    runDue();
-  }
+  if (options.startNow === true) runDue();
   const unsubscribe = store.subscribe((s, previous) => react(s, previous));
+  const stopLibrary = followLibrary();
   return () => {
     stopped = true;
     unsubscribe();
+    stopLibrary();
     if (timer !== null) clearTimeout(timer);
   };
 }

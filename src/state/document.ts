@@ -2,23 +2,18 @@
  * The document slice: what the designer edits and what undo restores. The netlist is never
  * stored here; it is derived from the sheet on every change, so the two cannot disagree.
  */
-import type { Design } from '../core/document/design.ts';
-import type { Sequence } from '../core/model/design.ts';
-import type { Technology } from '../core/model/technology.ts';
+import type { Cell, CellDesign, Design } from '../core/document/design.ts';
 import type { Sheet } from '../core/sheet/types.ts';
 import { sheetToNetlist, type DerivedNetlist, type SheetIssue } from '../core/sheet/toNetlist.ts';
 import { autoPlace } from '../core/sheet/autoPlace.ts';
 import { samePlainData } from '../core/model/plainData.ts';
-import { nameRecord } from '../core/model/records.ts';
+import { cellsByName, designOfCell } from '../core/hierarchy/cellDesign.ts';
+import { drawInstances, refreshSymbols } from '../core/hierarchy/instanceParts.ts';
+import { flattened, openCellOf, seenFrom } from './documentCells.ts';
+import type { SheetDocument } from './sheetDocument.ts';
+import { nameRecord, recordOf } from '../core/model/records.ts';
 
-export interface SheetDocument {
-  readonly name: string;
-  readonly technology: Technology;
-  readonly expectations: Readonly<Record<string, string>>;
-  readonly sequences: readonly Sequence[];
-  readonly notes?: string;
-  readonly sheet: Sheet;
-}
+export type { SheetContext, SheetDocument } from './sheetDocument.ts';
 
 /** Drawing facts the analysis overlay needs to paint levels onto the sheet. */
 export interface SheetGeometry {
@@ -36,7 +31,10 @@ export interface SheetGeometry {
 }
 
 export interface DerivedDesign {
-  readonly design: Design;
+  /** The open cell as the analyses read it: instances flattened with hierarchical names. */
+  readonly design: CellDesign;
+  /** The open cell as the design holds it: its own devices and its instances. */
+  readonly openCell: Cell;
   readonly geometry: SheetGeometry;
   readonly issues: readonly SheetIssue[];
 }
@@ -60,30 +58,38 @@ export function derivedSheet(sheet: Sheet, name: string): DerivedNetlist {
  * unchanged netlist or technology keeps its old object, so "did the circuit change?" is one identity
  * test for everything downstream (moving a part re-derives an equal netlist).
  */
-export function deriveDesign(doc: SheetDocument, before: Design | null = null): DerivedDesign {
+export function deriveDesign(doc: SheetDocument, before: CellDesign | null = null): DerivedDesign {
   const d = derivedSheet(doc.sheet, doc.name);
-  const deviceParts = nameRecord<string>();
-  for (const [partId, device] of Object.entries(d.partDevices)) deviceParts[device] ??= partId;
-  const design: Design = {
-    name: doc.name,
+  const openCell = openCellOf(doc, d.netlist, d.instances);
+  const seen = seenFrom(doc, openCell);
+  const flat = flattened(doc, openCell, seen.top.name);
+  const design: CellDesign = {
+    name: seen.top.name,
     technology: kept(before?.technology, doc.technology),
-    netlist: kept(before?.netlist, d.netlist),
-    expectations: doc.expectations,
-    sequences: doc.sequences,
+    netlist: kept(before?.netlist, flat.netlist),
+    expectations: seen.top.expectations,
+    sequences: seen.top.sequences,
     sheet: doc.sheet,
     ...(doc.notes === undefined ? {} : { notes: doc.notes }),
   };
+  const names = seen.placement;
+  const rename = <T extends string>(record: Readonly<Record<string, T>>, f: (n: string) => string) =>
+    names === null ? record : recordOf(Object.entries(record).map(([k, v]) => [k, f(v)] as const));
+  const partDevices = rename(d.partDevices, (n) => names?.device(n) ?? n);
+  const deviceParts = nameRecord<string>(); // a device may be called __proto__
+  for (const [partId, device] of Object.entries(partDevices)) deviceParts[device] ??= partId;
   return {
     design,
     geometry: {
-      wireNets: d.wireNets,
-      pinNets: d.pinNets,
-      partDevices: d.partDevices,
+      wireNets: rename(d.wireNets, (n) => names?.net(n) ?? n),
+      pinNets: names === null ? d.pinNets : new Map([...d.pinNets].map(([k, v]) => [k, names.net(v)])),
+      partDevices,
       deviceParts,
       junctions: d.junctions,
       openEnds: d.openEnds,
     },
-    issues: d.issues,
+    issues: flat.issue === null ? d.issues : [...d.issues, flat.issue],
+    openCell,
   };
 }
 
@@ -92,14 +98,45 @@ function kept<T>(earlier: T | undefined, next: T): T {
   return earlier !== undefined && samePlainData(earlier, next) ? earlier : next;
 }
 
-/** A design as the editor holds it; a design without a drawing is placed automatically. */
-export function documentFromDesign(design: Design): SheetDocument {
+/**
+ * A design as the editor holds it, its open cell on the sheet (one cell alone is a design of its
+ * own); a cell without a drawing is placed automatically.
+ */
+export function documentFromDesign(given: Design | CellDesign): SheetDocument {
+  const design = 'cells' in given ? given : designOfCell(given);
+  const at = Math.max(
+    0,
+    design.cells.findIndex((c) => c.name === design.open),
+  );
+  const open = design.cells[at] as Cell;
+  const others = design.cells.filter((_, i) => i !== at);
   return {
-    name: design.name,
+    ...cellFields(open, cellsByName(design)),
     technology: design.technology,
-    expectations: design.expectations,
-    sequences: design.sequences,
     ...(design.notes === undefined ? {} : { notes: design.notes }),
-    sheet: design.sheet ?? autoPlace(design.netlist),
+    ...(others.length === 0 ? {} : { cells: others, openAt: at }),
+    ...(design.name === open.name ? {} : { designName: design.name }),
+  };
+}
+
+/**
+ * The open-cell fields of a document for one cell: its drawing with a symbol for every instance it
+ * places (core/hierarchy/instanceParts.ts), each showing its cell's pins as they are now.
+ */
+function cellFields(
+  cell: Cell,
+  cells: ReadonlyMap<string, Cell>,
+): Pick<SheetDocument, 'name' | 'expectations' | 'sequences' | 'sheet' | 'instances' | 'globals'> {
+  const drawing = refreshSymbols(cell.sheet ?? autoPlace(cell.netlist), (c) => cells.get(c)?.netlist);
+  const sheet = drawInstances(drawing, cell.instances, cells);
+  // An instance of a cell the design lacks cannot be drawn: it stays, and flattening names it.
+  const undrawn = cell.instances.filter((i) => !cells.has(i.cell));
+  return {
+    name: cell.name,
+    expectations: cell.expectations,
+    sequences: cell.sequences,
+    sheet,
+    ...(undrawn.length === 0 ? {} : { instances: undrawn }),
+    ...(cell.globals === undefined ? {} : { globals: cell.globals }),
   };
 }

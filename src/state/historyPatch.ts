@@ -20,7 +20,8 @@ export interface DocPatch {
   readonly parts?: ListPatch<SheetPart>;
   readonly wires?: ListPatch<SheetWire>;
   readonly fields?: Partial<DocFields>;
-  readonly dropNotes?: true;
+  /** Optional fields `from` has and `to` lacks (notes dismissed, a cell left for its parent). */
+  readonly drop?: readonly OptionalField[];
 }
 
 interface Item {
@@ -52,27 +53,31 @@ function listPatch<T extends Item>(from: readonly T[], to: readonly T[]): ListPa
   return inOrder ? { put, drop } : { put, drop, order: to.map((item) => item.id) };
 }
 
-const FIELDS = ['name', 'technology', 'expectations', 'sequences', 'notes'] as const;
+/** The fields of a design's other cells and of the open cell's place among them: optional. */
+const OPTIONAL = ['notes', 'instances', 'globals', 'cells', 'openAt', 'designName', 'context'] as const;
+type OptionalField = (typeof OPTIONAL)[number];
+const FIELDS = ['name', 'technology', 'expectations', 'sequences', ...OPTIONAL] as const;
 
 /** The patch that turns `from` into `to`. */
 export function docPatch(from: SheetDocument, to: SheetDocument): DocPatch {
   const fields: Partial<Record<(typeof FIELDS)[number], unknown>> = {};
   for (const key of FIELDS) if (from[key] !== to[key] && to[key] !== undefined) fields[key] = to[key];
+  const drop = OPTIONAL.filter((key) => from[key] !== undefined && to[key] === undefined);
   const parts = listPatch(from.sheet.parts, to.sheet.parts);
   const wires = listPatch(from.sheet.wires, to.sheet.wires);
   return {
     ...(parts ? { parts } : {}),
     ...(wires ? { wires } : {}),
     ...(Object.keys(fields).length > 0 ? { fields: fields as Partial<DocFields> } : {}),
-    ...(from.notes !== undefined && to.notes === undefined ? { dropNotes: true as const } : {}),
+    ...(drop.length > 0 ? { drop } : {}),
   };
 }
 
 export function applyDocPatch(from: SheetDocument, patch: DocPatch): SheetDocument {
-  const { notes, ...rest } = { ...from, ...patch.fields };
+  const next: Record<string, unknown> = { ...from, ...patch.fields };
+  for (const key of patch.drop ?? []) delete next[key];
   return {
-    ...rest,
-    ...(notes === undefined || patch.dropNotes ? {} : { notes }),
+    ...(next as Omit<SheetDocument, 'sheet'>),
     sheet: {
       parts: patch.parts ? applyList(from.sheet.parts, patch.parts) : from.sheet.parts,
       wires: patch.wires ? applyList(from.sheet.wires, patch.wires) : from.sheet.wires,

@@ -5,6 +5,7 @@
  */
 import type { InputVector } from '../core/model/design.ts';
 import { heldSteps } from '../core/analysis/sequenceText.ts';
+import { rowVector } from '../core/analysis/sweepColumns.ts';
 import { solvedView } from '../core/view/solvedView.ts';
 import type { PowerSettings } from '../core/power/settings.ts';
 import {
@@ -62,9 +63,9 @@ export function stepVector(step: 1 | -1): void {
 
 /** A table row click: the sheet shows that vector solved from an unknown state, as the sweep did. */
 export function selectRow(index: number): void {
-  const row = get().sweep.result?.report.vectors?.[index];
-  if (row !== undefined)
-    setSimulation({ ...solvedLive(row.inputs, true), selectedRow: index, selectedStep: null });
+  const sweep = get().sweep.result?.report.sweep;
+  if (sweep !== undefined && index >= 0 && index < sweep.count)
+    setSimulation({ ...solvedLive(rowVector(sweep, index), true), selectedRow: index, selectedStep: null });
 }
 
 /** The steps of the chosen sequence, as stored (each lists what it changes). */

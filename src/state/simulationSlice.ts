@@ -16,11 +16,13 @@ import {
   type CheckResult,
   type CompareResult,
   type JobState,
+  type LibraryResult,
   type ProofResult,
   type SizingResult,
   type TransferResult,
   type VectorDcResult,
 } from '../worker/protocol.ts';
+import type { LibraryTableView } from '../core/view/libraryTable.ts';
 
 /** What the analysis last followed: a change to any of these is what makes results stale. */
 export interface AnalysedInputs {
@@ -62,6 +64,10 @@ export interface SimulationState {
   readonly sweep: JobState<CheckResult>;
   readonly sequence: JobState<CheckResult>;
   readonly sizing: JobState<SizingResult>;
+  /** Every cell of the design checked on its own, for the library view. */
+  readonly library: JobState<LibraryResult>;
+  /** The library view's sort and filter; null while it is closed. */
+  readonly libraryView: LibraryTableView | null;
   readonly powerSettings: PowerSettings;
   /** Finished from the counts of the sweep (random activity) or the sequence, for powerSettings. */
   readonly power: PowerReport | null;
@@ -108,6 +114,8 @@ export const INITIAL_SIMULATION: SimulationState = {
   sweep: IDLE_JOB,
   sequence: IDLE_JOB,
   sizing: IDLE_JOB,
+  library: IDLE_JOB,
+  libraryView: null,
   powerSettings: DEFAULT_POWER_SETTINGS,
   power: null,
   powerError: null,

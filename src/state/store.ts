@@ -1,6 +1,6 @@
 /**
  * The application store: one vanilla zustand store of slices (document, history, selection,
- * viewport, interaction, simulation, cell choice, messages), a thin React hook, and actions as
+ * viewport, interaction, simulation, messages), a thin React hook, and actions as
  * module functions. Its API for panels, the overlay and tests is documented in ./README.md.
  *
  * Everything that changes the document goes through `commitDoc` (one undo step) or a gesture
@@ -9,13 +9,14 @@
  */
 import { createStore } from 'zustand/vanilla';
 import { useStore as useZustand } from 'zustand';
-import type { Design } from '../core/document/design.ts';
+import type { Cell, CellDesign, Design } from '../core/document/design.ts';
 import type { ItemIds } from '../core/sheet/selection.ts';
 import type { SheetIssue } from '../core/sheet/toNetlist.ts';
 import type { Clip } from '../core/sheet/clipboard.ts';
 import type { PartKind, Point } from '../core/sheet/types.ts';
 import { NO_ITEMS } from '../core/sheet/selection.ts';
 import { deriveDesign, documentFromDesign, type SheetDocument, type SheetGeometry } from './document.ts';
+import { designOfDocument, followOpenCell, withFields } from './documentCells.ts';
 import { EMPTY_HISTORY, recordStep, redoStep, undoStep, type HistoryState } from './history.ts';
 import { EMPTY_SELECTION, pruneSelection, type SelectionState } from './selection.ts';
 import { DEFAULT_VIEWPORT, type Viewport } from './viewport.ts';
@@ -53,17 +54,12 @@ export interface ContactMarks {
   readonly at: readonly Point[];
 }
 
-/** The cells of an imported library, waiting for the designer to pick one (nothing loaded yet). */
-export interface CellChoice {
-  readonly fileName: string;
-  readonly designs: readonly Design[];
-  readonly failed: readonly string[];
-}
-
 export interface RailwiseState {
   readonly doc: SheetDocument;
-  /** Derived from `doc` by applyDoc; never edited directly. */
-  readonly design: Design;
+  /** The open cell, derived from `doc` by applyDoc (instances flattened); never edited directly. */
+  readonly design: CellDesign;
+  /** The open cell as the design holds it (own devices, instances), derived with `design`. */
+  readonly openCell: Cell;
   readonly geometry: SheetGeometry;
   readonly issues: readonly SheetIssue[];
   /** +1 on every committed document change (edit, undo, redo, open, end or cancel of a drag). */
@@ -83,7 +79,6 @@ export interface RailwiseState {
   /** Size of the sheet area in pixels, kept by the canvas for fit-to-view. */
   readonly screen: { readonly width: number; readonly height: number };
   readonly simulation: SimulationState;
-  readonly cellChoice: CellChoice | null;
 }
 
 export const BLANK_DOCUMENT: SheetDocument = {
@@ -112,7 +107,6 @@ function initialState(doc: SheetDocument): RailwiseState {
     overlay: null,
     screen: { width: 800, height: 600 },
     simulation: INITIAL_SIMULATION,
-    cellChoice: null,
   };
 }
 
@@ -149,11 +143,25 @@ function applyDoc(doc: SheetDocument, history: HistoryState): void {
   });
 }
 
+/**
+ * Shows another document without an undo step: navigation between cells, not an edit, so undo
+ * still takes back the last edit (and with it the cell it was made in).
+ */
+export function showDocument(doc: SheetDocument): void {
+  if (store.getState().history.gestureStart !== null) cancelGesture();
+  applyDoc(doc, store.getState().history);
+  store.setState({ selection: EMPTY_SELECTION, gesture: null });
+}
+
 /** The one way to change the document as a single undo step. Returns false when nothing changed. */
 export function commitDoc(update: (doc: SheetDocument) => SheetDocument): boolean {
   const s = store.getState();
   const base = s.history.gestureStart ?? s.doc;
-  const next = update(s.doc);
+  const next = followOpenCell(s.doc, update(s.doc), s.openCell);
+  if (next.name !== s.doc.name && (next.cells ?? []).some((c) => c.name === next.name)) {
+    showMessage('error', `Another cell of this design is named ${next.name}: the open cell keeps its name.`);
+    return false;
+  }
   if (next === s.doc && s.history.gestureStart === null) return false;
   applyDoc(next, recordStep(s.history, base));
   return true;
@@ -213,8 +221,17 @@ export function restoreHistory(past: readonly SheetDocument[], future: readonly 
   store.setState({ history: { past, future, gestureStart: null } });
 }
 
-/** Opens a design (file, starter, import) as one undoable step, so nothing drawn is lost. */
-export function loadDesign(design: Design): void {
+/** The whole design as it would be saved: every cell, the open one as drawn. */
+export function currentDesign(): Design {
+  const s = store.getState();
+  return designOfDocument(s.doc, s.openCell);
+}
+
+/**
+ * Opens a design (file, starter, import; one cell alone is a design of its own) as one undoable
+ * step, so nothing drawn is lost.
+ */
+export function loadDesign(design: Design | CellDesign): void {
   const doc = documentFromDesign(design);
   commitDoc(() => doc);
   store.setState({ selection: EMPTY_SELECTION, gesture: null });
@@ -224,8 +241,9 @@ export type DesignFields = Partial<
   Pick<SheetDocument, 'name' | 'technology' | 'expectations' | 'sequences' | 'notes'>
 >;
 
+/** Changes the open cell's fields (descended, expected functions and sequences go to the top cell). */
 export function setDesignFields(patch: DesignFields): void {
-  commitDoc((doc) => ({ ...doc, ...patch }));
+  commitDoc((doc) => withFields(doc, patch));
 }
 
 /** Drops the notes kept with the design (one undo step). */
@@ -297,15 +315,6 @@ export function setOverlay(overlay: RailwiseState['overlay']): void {
 
 export function setClipboard(clipboard: Clip | null): void {
   store.setState({ clipboard });
-}
-
-/** Offers the cells of a library file; nothing is loaded until one is chosen. */
-export function offerCells(fileName: string, designs: readonly Design[], failed: readonly string[]): void {
-  store.setState({ cellChoice: { fileName, designs, failed } });
-}
-
-export function closeCellChoice(): void {
-  store.setState({ cellChoice: null });
 }
 
 export function setScreen(width: number, height: number): void {

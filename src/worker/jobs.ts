@@ -3,20 +3,22 @@
  * command line makes): the worker exposes them, tests call them directly. Nothing here knows about
  * workers or the page.
  */
-import { DEFAULT_MAX_INPUTS } from '../core/analysis/check.ts';
+import { packedForTransfer } from '../core/analysis/sweepColumns.ts';
 import { analyseCell } from '../core/power/cellAnalysis.ts';
 import { sizingReport } from '../core/sizing/sizingReport.ts';
-import { usableExpectations as usableExpectationsOf } from '../core/view/expectation.ts';
+import { checkLibraryCell } from '../core/analysis/libraryCheck.ts';
+import { usableExpectations as usableExpectationsOf } from '../core/expect/problems.ts';
 import { StepLevelRecorder } from '../core/view/sequenceLevels.ts';
 import { transfer, vectorDc } from './dcJobs.ts';
-import { compare, proof } from './proofJobs.ts';
-import { MAX_INPUTS_WITH_UNDRIVEN } from './protocol.ts';
+import { appSweepLimit } from './protocol.ts';
 import type {
-  AnalysisJob,
   CellInput,
+  CheckJob,
   CheckResult,
   JobProgress,
   JobResult,
+  LibraryJob,
+  LibraryResult,
   SequenceJob,
   SizingJob,
   SizingResult,
@@ -34,7 +36,7 @@ export function usableExpectations(cell: CellInput): {
   return usableExpectationsOf(cell.netlist, cell.expectations);
 }
 
-function throttled(onProgress: (p: JobProgress) => void): (done: number, total: number) => void {
+export function throttled(onProgress: (p: JobProgress) => void): (done: number, total: number) => void {
   let last = -Infinity;
   return (done, total) => {
     const now = performance.now();
@@ -53,11 +55,13 @@ function sweep(job: SweepJob, onProgress: (p: JobProgress) => void): CheckPart {
     technology: job.cell.technology,
     expectations,
     undrivenInputs: undriven,
-    maxInputs: undriven ? MAX_INPUTS_WITH_UNDRIVEN : DEFAULT_MAX_INPUTS,
+    maxInputs: appSweepLimit(undriven),
     onProgress: throttled(onProgress),
     power: { activity: 'random' },
   });
-  return { report: { ...report, notes: [...notes, ...report.notes] }, power };
+  // Each vector's findings are in the sweep's details; the list keeps the structural ones.
+  const findings = report.findings.filter((f) => f.vector === null);
+  return { report: { ...report, findings, notes: [...notes, ...report.notes] }, power };
 }
 
 function sequence(job: SequenceJob, onProgress: (p: JobProgress) => void): CheckPart {
@@ -82,7 +86,22 @@ function sizing(job: SizingJob): Pick<SizingResult, 'sizing' | 'error'> {
   }
 }
 
-export function runJob(job: AnalysisJob, onProgress: (p: JobProgress) => void = () => {}): JobResult {
+function library(job: LibraryJob, onProgress: (p: JobProgress) => void): Pick<LibraryResult, 'rows'> {
+  const progress = throttled(onProgress);
+  const { cells } = job.design;
+  const rows = cells.map((c, i) => {
+    const row = checkLibraryCell(job.design, c.name);
+    progress(i + 1, cells.length);
+    return row;
+  });
+  return { rows };
+}
+
+/**
+ * Runs a job of the kinds every analysis worker starts with (the proof and compare jobs, with their
+ * SAT solver, are in proofJobs.ts, which a worker loads only when it is given one).
+ */
+export function runCheckJob(job: CheckJob, onProgress: (p: JobProgress) => void = () => {}): JobResult {
   const started = performance.now();
   const elapsed = (): number => performance.now() - started;
   switch (job.kind) {
@@ -92,17 +111,24 @@ export function runJob(job: AnalysisJob, onProgress: (p: JobProgress) => void = 
       return { kind: 'sequence', revision: job.revision, ...sequence(job, onProgress), elapsedMs: elapsed() };
     case 'sizing':
       return { kind: 'sizing', revision: job.revision, ...sizing(job), elapsedMs: elapsed() };
+    case 'library':
+      return { kind: 'library', revision: job.revision, ...library(job, onProgress), elapsedMs: elapsed() };
     case 'transfer': {
       const outcome = transfer(job, throttled(onProgress));
       return { kind: 'transfer', revision: job.revision, ...outcome, elapsedMs: elapsed() };
     }
     case 'vector-dc':
       return { kind: 'vector-dc', revision: job.revision, ...vectorDc(job), elapsedMs: elapsed() };
-    case 'proof': {
-      const outcome = proof(job, throttled(onProgress));
-      return { kind: 'proof', revision: job.revision, ...outcome, elapsedMs: elapsed() };
-    }
-    case 'compare':
-      return { kind: 'compare', revision: job.revision, ...compare(job), elapsedMs: elapsed() };
   }
+}
+
+/**
+ * A result ready to cross to the page: a sweep's details packed into one text and the buffers of its
+ * columns listed for transfer, so the page receives a 65,536-vector sweep without copying or
+ * cloning it object by object.
+ */
+export function forTransfer(result: JobResult): { result: JobResult; buffers: ArrayBuffer[] } {
+  if (result.kind !== 'sweep' || result.report.sweep === undefined) return { result, buffers: [] };
+  const { columns, buffers } = packedForTransfer(result.report.sweep);
+  return { result: { ...result, report: { ...result.report, sweep: columns } }, buffers };
 }

@@ -6,8 +6,16 @@
 import { cellsFromText } from '../core/netlist-io/cellFiles.ts';
 import { compareCells } from '../core/proof/compare.ts';
 import { proveCell } from '../core/proof/prove.ts';
-import { usableExpectations } from '../core/view/expectation.ts';
-import type { CompareJob, CompareResult, ProofJob, ProofResult } from './protocol.ts';
+import { throttled, usableExpectations } from './jobs.ts';
+import type {
+  CompareJob,
+  CompareResult,
+  JobProgress,
+  JobResult,
+  ProofJob,
+  ProofLaneJob,
+  ProofResult,
+} from './protocol.ts';
 
 function words(error: unknown): string {
   return error instanceof Error ? error.message : String(error);
@@ -17,7 +25,7 @@ export function proof(
   job: ProofJob,
   onProgress: (done: number, total: number) => void,
 ): Pick<ProofResult, 'report' | 'error'> {
-  const { expectations, notes } = usableExpectations(job.cell.netlist, job.cell.expectations);
+  const { expectations, notes } = usableExpectations(job.cell);
   try {
     const report = proveCell(job.cell.netlist, {
       technology: job.cell.technology,
@@ -48,5 +56,19 @@ export function compare(job: CompareJob): Compared {
     return { ...base, other: picked.job.cell, comparison };
   } catch (error) {
     return { ...base, error: words(error) };
+  }
+}
+
+/** Runs a proof or compare job. */
+export function runProofJob(job: ProofLaneJob, onProgress: (p: JobProgress) => void = () => {}): JobResult {
+  const started = performance.now();
+  const elapsed = (): number => performance.now() - started;
+  switch (job.kind) {
+    case 'proof': {
+      const outcome = proof(job, throttled(onProgress));
+      return { kind: 'proof', revision: job.revision, ...outcome, elapsedMs: elapsed() };
+    }
+    case 'compare':
+      return { kind: 'compare', revision: job.revision, ...compare(job), elapsedMs: elapsed() };
   }
 }

@@ -5,8 +5,9 @@
 import type { CheckReport } from '../core/analysis/report.ts';
 import type { TransferReport } from '../core/dc/transfer.ts';
 import type { DcComparison } from '../core/dc/vectorCompare.ts';
-import type { Design } from '../core/document/design.ts';
+import type { CellDesign, Design } from '../core/document/design.ts';
 import type { InputVector } from '../core/model/design.ts';
+import type { LibraryRow } from '../core/analysis/libraryCheck.ts';
 import type { PowerCounts } from '../core/power/tally.ts';
 import type { Comparison } from '../core/proof/compare.ts';
 import type { ProofReport } from '../core/proof/prove.ts';
@@ -14,7 +15,7 @@ import type { SizingReport } from '../core/sizing/types.ts';
 import type { StepLevel } from '../core/view/levelStrip.ts';
 
 /** What a job analyses: the cell as derived at one revision, without its drawing. */
-export type CellInput = Pick<Design, 'netlist' | 'technology' | 'expectations'>;
+export type CellInput = Pick<CellDesign, 'netlist' | 'technology' | 'expectations'>;
 
 /** Every vector once: the table, the findings and the power counts for random activity. */
 export interface SweepJob {
@@ -62,6 +63,14 @@ export interface VectorDcJob {
   readonly steps: readonly InputVector[];
 }
 
+/** Every cell of a design checked on its own (the library view): one row per cell. */
+export interface LibraryJob {
+  readonly kind: 'library';
+  readonly revision: number;
+  /** The design without its drawings. */
+  readonly design: Design;
+}
+
 /** Every property of docs/semantics.md §10 for all 0/1 vectors at once, by SAT. */
 export interface ProofJob {
   readonly kind: 'proof';
@@ -80,7 +89,17 @@ export interface CompareJob {
 }
 
 export type AnalysisJob =
-  SweepJob | SequenceJob | SizingJob | TransferJob | VectorDcJob | ProofJob | CompareJob;
+  SweepJob | SequenceJob | SizingJob | TransferJob | VectorDcJob | ProofJob | CompareJob | LibraryJob;
+
+/** The jobs of the proof lanes, whose code (a SAT solver) a worker loads only when given one. */
+export type ProofLaneJob = ProofJob | CompareJob;
+
+/** Every other job: what every analysis worker can run from the start. */
+export type CheckJob = Exclude<AnalysisJob, ProofLaneJob>;
+
+export function isProofLaneJob(job: AnalysisJob): job is ProofLaneJob {
+  return job.kind === 'proof' || job.kind === 'compare';
+}
 
 export interface JobProgress {
   readonly done: number;
@@ -124,6 +143,13 @@ export interface VectorDcResult {
   readonly elapsedMs: number;
 }
 
+export interface LibraryResult {
+  readonly kind: 'library';
+  readonly revision: number;
+  readonly rows: readonly LibraryRow[];
+  readonly elapsedMs: number;
+}
+
 export interface ProofResult {
   readonly kind: 'proof';
   readonly revision: number;
@@ -148,7 +174,7 @@ export interface CompareResult {
 }
 
 export type JobResult =
-  CheckResult | SizingResult | TransferResult | VectorDcResult | ProofResult | CompareResult;
+  CheckResult | SizingResult | TransferResult | VectorDcResult | ProofResult | CompareResult | LibraryResult;
 
 /** A job as the panels see it, whatever its kind. */
 export type JobStatus = 'idle' | 'running' | 'done' | 'cancelled' | 'failed';
@@ -180,8 +206,19 @@ export interface AnalysisWorkerApi {
   run(job: AnalysisJob, onProgress: (progress: JobProgress) => void): Promise<JobResult>;
 }
 
-/** With Z as a third value, 3^10 = 59,049 vectors: about the two-valued limit of 2^16. */
-export const MAX_INPUTS_WITH_UNDRIVEN = 10;
+/**
+ * The page sweeps up to 2^20 = 1,048,576 vectors in the worker, with progress and cancel; the
+ * command line goes to 24 inputs when asked (docs/semantics.md §7).
+ */
+export const APP_MAX_INPUTS = 20;
+
+/** With Z as a third value, 3^12 = 531,441 vectors: within the two-valued limit of 2^20. */
+export const MAX_INPUTS_WITH_UNDRIVEN = 12;
+
+/** The most inputs the page sweeps, two- or three-valued. */
+export function appSweepLimit(undrivenInputs: boolean): number {
+  return undrivenInputs ? MAX_INPUTS_WITH_UNDRIVEN : APP_MAX_INPUTS;
+}
 
 /** Sweeps with more vectors than this show a progress bar and a cancel button. */
 export const PROGRESS_THRESHOLD_VECTORS = 4096;
@@ -192,7 +229,8 @@ export function isLongJob(job: AnalysisJob): boolean {
 }
 
 /**
- * Solves a job takes: vectors of a sweep, steps of a sequence, points of a curve, none for sizing;
+ * Solves a job takes: vectors of a sweep, steps of a sequence, points of a curve, cells of a library,
+ * none for sizing;
  * for a proof, the properties it decides (two for the cell, four per output; its progress counts them).
  */
 export function jobSize(job: AnalysisJob): number {
@@ -208,6 +246,8 @@ export function jobSize(job: AnalysisJob): number {
       return job.points;
     case 'sizing':
       return 0;
+    case 'library':
+      return job.design.cells.length;
     case 'sweep':
       return (job.undrivenInputs === true ? 3 : 2) ** job.cell.netlist.inputs.length;
   }

@@ -1,7 +1,7 @@
 /**
  * How the simulation slice runs long jobs: one lane per job kind (`AnalysisJob['kind']`: sweep,
- * sequence, sizing, transfer, vector-dc, proof, compare), so a sequence never cancels the table's
- * sweep. In the browser each lane is an analysis worker; tests and environments without workers swap
+ * sequence, sizing, transfer, vector-dc, proof, compare, library), so a sequence never cancels the
+ * table's sweep. In the browser each lane is an analysis worker; tests and environments without workers swap
  * in another runner (e.g. one that calls runJob directly).
  */
 import { AnalysisClient } from './client.ts';

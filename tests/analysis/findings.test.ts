@@ -3,6 +3,7 @@ import { checkSequence, checkSweep } from '../../src/core/analysis/check.ts';
 import type { Finding, FindingKind } from '../../src/core/analysis/report.ts';
 import { circuit } from '../../src/core/model/builder.ts';
 import { STARTERS } from '../../src/core/starters/index.ts';
+import { reportRows } from '../../src/core/analysis/sweepColumns.ts';
 
 const kinds = (findings: readonly Finding[]): FindingKind[] => [...new Set(findings.map((f) => f.kind))];
 const design = (id: string) => STARTERS.find((s) => s.id === id)!.design;
@@ -40,15 +41,15 @@ describe('static current', () => {
   // (RCN 0.25 µm on-resistance from memory; arithmetic derived).
   const report = checkSweep(design('resistor-load-inverter').netlist);
   it('flows with the output low, with amperes and watts', () => {
-    const f = report.vectors![1]!.findings.find((x) => x.kind === 'static-current');
+    const f = reportRows(report)[1]!.findings.find((x) => x.kind === 'static-current');
     expect(f?.path).toEqual(['VDD', 'RL', 'Y', 'N1', 'GND']);
     expect(f?.current).toBeCloseTo(2.5 / 23250, 12);
     expect(f?.watts).toBeCloseTo((2.5 * 2.5) / 23250, 12);
-    expect(report.vectors![1]!.supplyCurrent).toBeCloseTo(2.5 / 23250, 12);
+    expect(reportRows(report)[1]!.supplyCurrent).toBeCloseTo(2.5 / 23250, 12);
   });
   it('does not flow with the output high', () => {
-    expect(report.vectors![0]!.findings).toEqual([]);
-    expect(report.vectors![0]!.supplyCurrent).toBe(0);
+    expect(reportRows(report)[0]!.findings).toEqual([]);
+    expect(reportRows(report)[0]!.supplyCurrent).toBe(0);
   });
 });
 
@@ -89,7 +90,7 @@ describe('contention', () => {
     const report = checkSweep(cell);
     const vectorsWithContention = report.findings.filter((f) => f.kind === 'contention').map((f) => f.vector);
     expect(vectorsWithContention).toEqual([1, 2]);
-    expect(report.vectors![1]!.outputs.Y).toBe('X');
+    expect(reportRows(report)[1]!.outputs.Y).toBe('X');
   });
   it('a single inverter never contends', () => {
     expect(checkSweep(inverter.build()).summary.contention).toBe(0);

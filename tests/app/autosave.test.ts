@@ -18,12 +18,13 @@ import {
   suspectDesign,
 } from '../../src/app/autosave.ts';
 import { serializeDesign } from '../../src/core/format/designFile.ts';
+import { designOfCell } from '../../src/core/hierarchy/cellDesign.ts';
 import { starterById } from '../../src/core/starters/index.ts';
 import { loadDesign } from '../../src/state/store.ts';
 import { memoryStorage } from '../memoryStorage.ts';
 
-const inverter = starterById('inverter')!.design;
-const nand = starterById('nand2')!.design;
+const inverter = designOfCell(starterById('inverter')!.design);
+const nand = designOfCell(starterById('nand2')!.design);
 
 let storage: Storage;
 beforeEach(() => {

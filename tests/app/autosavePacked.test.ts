@@ -15,7 +15,8 @@ import {
   startAutosave,
 } from '../../src/app/autosave.ts';
 import { isPacked, PACKED_MARK } from '../../src/app/storedText.ts';
-import { loadDesign, resetStore, store } from '../../src/state/store.ts';
+import { serializeDesign } from '../../src/core/format/designFile.ts';
+import { currentDesign, loadDesign, resetStore } from '../../src/state/store.ts';
 import { memoryStorage } from '../memoryStorage.ts';
 import { longDesign } from './longDesign.ts';
 
@@ -41,10 +42,13 @@ describe('autosave of a long design', () => {
     stop();
     expect(isPacked(stored)).toBe(true);
     const text = await autosavedText(storage);
-    expect(text).toBe(autosaveText(store.getState().design));
+    expect(text).toBe(autosaveText(currentDesign()));
+    // The design file without its indentation: the same document as a saved file.
+    expect(JSON.parse(text!)).toEqual(JSON.parse(serializeDesign(currentDesign())));
+    expect(text!.length).toBeLessThan(serializeDesign(currentDesign()).length / 2);
     expect(stored.length).toBeLessThan(text!.length / 5);
     const restored = restoreAutosave(storage, text);
-    expect(restored.design?.sheet).toEqual(design.sheet);
+    expect(restored.design?.cells[0]?.sheet).toEqual(design.sheet);
   });
 
   it('keeps a damaged packed value aside and says so, opening nothing from it', async () => {

@@ -6,7 +6,7 @@ import { STARTERS } from '../../src/core/starters/index.ts';
 import { editPart } from '../../src/editor/actions.ts';
 import { sheetToNetlist } from '../../src/core/sheet/toNetlist.ts';
 import { COMMANDS, commandForKey, placeKeyOf } from '../../src/app/commands.ts';
-import { PART_KINDS } from '../../src/core/sheet/parts/index.ts';
+import { SHELF_KINDS } from '../../src/core/sheet/parts/index.ts';
 import { drawnInverter } from '../sheet/fixtures.ts';
 import { partBounds } from '../../src/core/sheet/geometry.ts';
 import type { SheetPart } from '../../src/core/sheet/types.ts';
@@ -184,9 +184,11 @@ describe('the key map', () => {
   it('finds any part with /, and has a place command for every kind, numbered for the first nine', () => {
     expect(key('/')).toBe('find-part');
     const place = COMMANDS.filter((c) => c.id.startsWith('place-'));
-    expect(place.map((c) => c.id)).toEqual(PART_KINDS.map((k) => `place-${k}`));
+    expect(place.map((c) => c.id)).toEqual(SHELF_KINDS.map((k) => `place-${k}`));
     place.forEach((c, i) => expect(c.keys).toEqual(i < 9 ? [{ key: String(i + 1) }] : []));
-    expect(PART_KINDS.map(placeKeyOf).filter((k) => k !== null)).toHaveLength(Math.min(9, PART_KINDS.length));
+    expect(SHELF_KINDS.map(placeKeyOf).filter((k) => k !== null)).toHaveLength(
+      Math.min(9, SHELF_KINDS.length),
+    );
   });
 
   it('tells Ctrl+Z from Ctrl+Shift+Z and V from Ctrl+V', () => {

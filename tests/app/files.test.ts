@@ -1,9 +1,9 @@
 // Behaviour of our own file handling, not published values: no source applies.
 import { beforeEach, describe, expect, it } from 'vitest';
-import { designsFromSpice, openText } from '../../src/app/files.ts';
+import { designFromSpice, openText } from '../../src/app/files.ts';
 import { isPrintable } from '../../src/core/text/printable.ts';
 import { documentFromDesign } from '../../src/state/document.ts';
-import { resetStore, store } from '../../src/state/store.ts';
+import { currentDesign, resetStore, store } from '../../src/state/store.ts';
 import { STARTERS } from '../../src/core/starters/index.ts';
 
 const INVERTER_CELL = [
@@ -46,13 +46,14 @@ describe('opening files', () => {
     expect(store.getState().history.past).toHaveLength(1);
   });
 
-  it('a library waits for the designer to choose a cell', () => {
-    const before = store.getState().doc;
+  it('a library opens as one design of all its cells, the first on the sheet, with the library view', () => {
     const library = [...INVERTER_CELL, ...INVERTER_CELL.map((l) => l.replace('inv', 'inv_b'))].join('\n');
-    expect(designsFromSpice(library, 'lib.sp').designs.map((d) => d.name)).toEqual(['inv', 'inv_b']);
+    expect(designFromSpice(library, 'lib.sp').design.cells.map((c) => c.name)).toEqual(['inv', 'inv_b']);
     expect(openText(library, 'lib.sp')).toBe(true);
-    expect(store.getState().doc).toBe(before);
-    expect(store.getState().cellChoice?.designs).toHaveLength(2);
+    expect(currentDesign().cells.map((c) => c.name)).toEqual(['inv', 'inv_b']);
+    expect(store.getState().doc.name).toBe('inv');
+    expect(store.getState().simulation.libraryView).not.toBeNull();
+    expect(store.getState().history.past).toHaveLength(1);
   });
 
   it('keeps what the import ignored or folded with the design, as the command line reports it', () => {

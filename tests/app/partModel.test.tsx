@@ -6,7 +6,7 @@
 import { act } from 'react';
 import { createRoot } from 'react-dom/client';
 import { describe, expect, it } from 'vitest';
-import { designsFromSpice } from '../../src/app/files.ts';
+import { designFromSpice } from '../../src/app/files.ts';
 import { PropertiesForm } from '../../src/app/PropertiesForm.tsx';
 import { loadDesign, setSelection, store } from '../../src/state/store.ts';
 
@@ -21,7 +21,7 @@ MN Y A GND GND hvt W=1u L=0.25u
 
 describe('a transistor with a model card', () => {
   it('says which card sets its DC model; one without says nothing', async () => {
-    loadDesign(designsFromSpice(DECK, 'inv.sp').designs[0]!);
+    loadDesign(designFromSpice(DECK, 'inv.sp').design);
     const parts = store.getState().doc.sheet.parts;
     const host = document.createElement('div');
     const root = createRoot(host);

@@ -11,7 +11,7 @@ import { DEFAULT_POWER_SETTINGS } from '../../src/core/power/settings.ts';
 import type { PowerReport } from '../../src/core/power/types.ts';
 import { SWEEP_DEBOUNCE_MS, startAnalysis } from '../../src/state/analysis.ts';
 import { loadDesign, resetStore, store } from '../../src/state/store.ts';
-import { runJob } from '../../src/worker/jobs.ts';
+import { runJob } from '../../src/worker/runJob.ts';
 import { setJobRunnerFactory } from '../../src/worker/runner.ts';
 
 const FILE = 'public/examples/lamp-inverter.railwise.json';

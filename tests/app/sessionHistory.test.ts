@@ -80,6 +80,23 @@ describe('the undo history across a reload', () => {
     expect(historyFor(doc, 'not json')).toBeNull();
   });
 
+  it('tells documents apart by any value, wherever it sits', () => {
+    const ed = drawSomething();
+    const { doc, history } = ed.state();
+    const text = storedHistory(doc, history.past, history.future);
+    const [first, ...rest] = doc.sheet.parts;
+    if (first === undefined) throw new Error('the drawing has parts');
+    const moved = { ...doc, sheet: { ...doc.sheet, parts: [{ ...first, x: first.x + 1 }, ...rest] } };
+    expect(historyFor(moved, text)).toBeNull();
+    const swapped = {
+      ...doc,
+      sheet: { ...doc.sheet, parts: [{ ...first, x: first.y, y: first.x }, ...rest] },
+    };
+    if (first.x !== first.y) expect(historyFor(swapped, text)).toBeNull();
+    const reordered = { ...doc, sheet: { ...doc.sheet, parts: [...rest, first] } };
+    expect(historyFor(reordered, text)).toBeNull();
+  });
+
   it('keeps the latest steps within its bound', () => {
     const ed = headlessEditor();
     for (let i = 0; i < MAX_STORED_STEPS + 20; i++) {

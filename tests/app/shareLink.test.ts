@@ -3,6 +3,7 @@
 import { describe, expect, it } from 'vitest';
 import { parseDesignFile, serializeDesign } from '../../src/core/format/designFile.ts';
 import { starterById } from '../../src/core/starters/index.ts';
+import { designOfCell } from '../../src/core/hierarchy/cellDesign.ts';
 import {
   decodeDesignFragment,
   designFromFragment,
@@ -14,7 +15,7 @@ import {
 } from '../../src/app/shareLink.ts';
 import { DesignFileError } from '../../src/core/format/designFile.ts';
 
-const latch = starterById('tg-d-latch')!.design;
+const latch = designOfCell(starterById('tg-d-latch')!.design);
 
 describe('share links', () => {
   it('carry a design file and give it back unchanged', async () => {
@@ -52,7 +53,7 @@ describe('hostile share links', () => {
   };
 
   it('refuse a wire ten million grid units long, naming the link and the field', async () => {
-    const doc = JSON.parse(serializeDesign(latch)) as Record<string, unknown>;
+    const doc = JSON.parse(serializeDesign(latch)) as { cells: Record<string, unknown>[] };
     const far = {
       id: 'far',
       points: [
@@ -60,13 +61,13 @@ describe('hostile share links', () => {
         { x: 1e7, y: 0 },
       ],
     };
-    doc['sheet'] = { parts: [], wires: [far] };
+    (doc.cells[0] as Record<string, unknown>)['sheet'] = { parts: [], wires: [far] };
     const error = await designFromFragment(await encodeDesignFragment(JSON.stringify(doc))).catch(
       (e: unknown) => e,
     );
     expect(error).toBeInstanceOf(DesignFileError);
-    expect((error as DesignFileError).field).toBe('sheet.wires[0].points[1].x');
-    expect((error as Error).message).toMatch(/^shared link: field sheet\.wires/);
+    expect((error as DesignFileError).field).toBe('cells[0].sheet.wires[0].points[1].x');
+    expect((error as Error).message).toMatch(/^shared link: field cells\[0\]\.sheet\.wires/);
   });
 
   it('stop unpacking as soon as the text passes the bound (32 MB of zeros in a small link)', async () => {

@@ -3,6 +3,7 @@
 import { describe, expect, it } from 'vitest';
 import { isPacked, PACK_ABOVE, packForStorage, unpackFromStorage } from '../../src/app/storedText.ts';
 import { serializeDesign } from '../../src/core/format/designFile.ts';
+import { designOfCell } from '../../src/core/hierarchy/cellDesign.ts';
 import { longDesign } from './longDesign.ts';
 
 describe('design text in the browser’s storage', () => {
@@ -12,7 +13,7 @@ describe('design text in the browser’s storage', () => {
   });
 
   it('packs a long design to a fraction of its size and gets the same text back', async () => {
-    const text = serializeDesign(longDesign());
+    const text = serializeDesign(designOfCell(longDesign()));
     expect(text.length).toBeGreaterThan(PACK_ABOVE);
     const stored = await packForStorage(text);
     expect(isPacked(stored)).toBe(true);

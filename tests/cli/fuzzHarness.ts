@@ -12,12 +12,8 @@ import fc from 'fast-check';
 import { HOSTILE_NAMES } from '../fixtures/hostileNames.ts';
 import { railwise } from './inProcess.ts';
 
-export type Outcome = 'clean' | 'refusal' | 'bad';
-
-export interface Case {
-  readonly outcome: Outcome;
-  readonly why: string;
-}
+export { Tally, type Case, type Outcome } from '../fuzzTally.ts';
+import type { Case } from '../fuzzTally.ts';
 
 const dir = mkdtempSync(join(tmpdir(), 'railwise-fuzz-'));
 /** Removes the cases' files, unless RAILWISE_FUZZ_KEEP is set (to read the bad ones). */
@@ -155,17 +151,4 @@ function swapLines(t: string, a: number, b: number): string {
   const [i, j] = [a % lines.length, b % lines.length];
   [lines[i], lines[j]] = [lines[j] as string, lines[i] as string];
   return lines.join('\n');
-}
-
-/** Runs a case per generated input and tallies the outcomes; the first `bad` ones are kept. */
-export class Tally {
-  readonly counts: Record<Outcome, number> = { clean: 0, refusal: 0, bad: 0 };
-  readonly bad: string[] = [];
-  add(c: Case, label: string): void {
-    this.counts[c.outcome]++;
-    if (c.outcome === 'bad' && this.bad.length < 5) this.bad.push(`${label}: ${c.why}`);
-  }
-  get runs(): number {
-    return this.counts.clean + this.counts.refusal + this.counts.bad;
-  }
 }

@@ -8,7 +8,9 @@ import { mkdtempSync, rmSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';
 import { join } from 'node:path';
 import { afterAll, describe, expect, it } from 'vitest';
-import { runCell } from '../../src/cli/runCell.ts';
+import { runCell, type CellJson } from '../../src/cli/runCell.ts';
+import { printedCell } from '../../src/cli/checkCommand.ts';
+import { writeJson } from '../../src/cli/jsonWriter.ts';
 import { loadCells } from '../../src/cli/loadCells.ts';
 import { STREAM_ROWS } from '../../src/cli/streamCell.ts';
 import { FindingSpool } from '../../src/cli/findingSpool.ts';
@@ -60,7 +62,9 @@ describe('a sweep too big to collect', () => {
       sizing: false,
       load: 0,
     });
-    expect(streamed).toEqual(JSON.parse(JSON.stringify((whole as { json: unknown }).json)));
+    let printed = '';
+    writeJson(printedCell((whole as { json: CellJson }).json), (lines) => (printed += `${lines}\n`));
+    expect(streamed).toEqual(JSON.parse(printed));
     const rows = streamed['vectors'] as { outputs: { Y: string } }[];
     // NOR: Y is 1 only when every input is 0; !(A0 | A1) is 1 in a quarter of the rows.
     expect(rows.filter((v) => v.outputs.Y === '1')).toHaveLength(1);

@@ -72,7 +72,7 @@ describe('model cards in the design file', () => {
     const { file, nmos } = withCards();
     const design = parseDesignFile(JSON.stringify(file), 'cards.json');
     expect(design.technology.models).toEqual({ hvt: { type: 'nmos', vt0: 0.6, kp: 90e-6 } });
-    expect(design.netlist.devices[nmos]).toMatchObject({ model: 'hvt' });
+    expect(design.cells[0]?.netlist.devices[nmos]).toMatchObject({ model: 'hvt' });
     expect(parseDesignFile(serializeDesign(design), 'again.json')).toEqual(design);
   });
 

@@ -9,12 +9,15 @@ import { dcSweep } from '../../src/core/dc/vectorDc.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import { ratioedNor2 } from '../../src/core/starters/combinational.ts';
 import { nandLatch } from '../../src/core/starters/sequential.ts';
+import { reportRows } from '../../src/core/analysis/sweepColumns.ts';
 
 describe('the level-1 answer beside the switch-level estimate', () => {
   it('a ratioed NOR low: both voltages, both currents, and where they differ', () => {
     const vector = { A: '1', B: '0' } as const;
     const c = compareAtLastStep(ratioedNor2, DEFAULT_TECHNOLOGY, [vector]);
-    const row = checkSweep(ratioedNor2).vectors?.find((v) => v.inputs['A'] === '1' && v.inputs['B'] === '0');
+    const row = reportRows(checkSweep(ratioedNor2)).find(
+      (v) => v.inputs['A'] === '1' && v.inputs['B'] === '0',
+    );
     const dc = dcSweep(ratioedNor2, DEFAULT_TECHNOLOGY)[2];
     const y = c.outputs.find((o) => o.name === 'Y');
     expect(y).toMatchObject({ level: row?.outputs['Y'], differs: true });

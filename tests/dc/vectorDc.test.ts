@@ -4,6 +4,7 @@ import { dcSequence, dcSweep } from '../../src/core/dc/vectorDc.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import { nand2, ratioedNor2, transmissionGate } from '../../src/core/starters/combinational.ts';
 import { nandLatch, prechargedAnd2 } from '../../src/core/starters/sequential.ts';
+import { reportRows } from '../../src/core/analysis/sweepColumns.ts';
 
 describe('per-vector level-1 DC beside the switch-level estimate', () => {
   it('follows the sweep order of checkSweep', () => {
@@ -11,7 +12,7 @@ describe('per-vector level-1 DC beside the switch-level estimate', () => {
     const report = checkSweep(nand2);
     expect(dc).toHaveLength(4);
     dc.forEach((row, i) => {
-      const level = report.vectors?.[i]?.outputs['Y'];
+      const level = reportRows(report)[i]?.outputs['Y'];
       expect(row.voltages['Y']).toBeCloseTo(level === '1' ? 2.5 : 0, 6);
       expect(row.differs).toEqual([]);
       expect(row.notes).toEqual([]);
@@ -23,7 +24,7 @@ describe('per-vector level-1 DC beside the switch-level estimate', () => {
     // saturated and the pull-down NMOS linear, so the low output and the static current differ.
     const [, a] = dcSweep(ratioedNor2, DEFAULT_TECHNOLOGY);
     const report = checkSweep(ratioedNor2);
-    const switchLow = report.vectors?.[1]?.voltages['Y'] as number;
+    const switchLow = reportRows(report)[1]?.voltages['Y'] as number;
     expect(a?.voltages['Y']).toBeGreaterThan(0);
     expect(a?.voltages['Y']).toBeLessThan(DEFAULT_TECHNOLOGY.vil);
     expect(Math.abs((a?.voltages['Y'] as number) - switchLow)).toBeGreaterThan(0.05 * 2.5);
@@ -33,7 +34,7 @@ describe('per-vector level-1 DC beside the switch-level estimate', () => {
 
   it('a transmission gate passes both rails in full', () => {
     const dc = dcSweep(transmissionGate, DEFAULT_TECHNOLOGY, { allNets: true });
-    const on = dc.filter((_row, i) => checkSweep(transmissionGate).vectors?.[i]?.inputs['EN'] === '1');
+    const on = dc.filter((_row, i) => reportRows(checkSweep(transmissionGate))[i]?.inputs['EN'] === '1');
     expect(on.map((r) => r.voltages['Y'])).toEqual([expect.closeTo(0, 6), expect.closeTo(2.5, 6)]);
   });
 

@@ -3,11 +3,15 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { DesignFileError, parseDesignFile } from '../../src/core/format/designFile.ts';
+import { Tally } from '../fuzzTally.ts';
 
-function loadsOrNamesTheProblem(text: string): void {
+function loadsOrNamesTheProblem(text: string, tally: Tally): void {
   try {
     parseDesignFile(text, 'fuzz.json');
+    tally.add({ outcome: 'clean', why: '' }, text);
   } catch (e) {
+    const clear = e instanceof DesignFileError && e.message.startsWith('fuzz.json');
+    tally.add({ outcome: clear ? 'refusal' : 'bad', why: String(e) }, JSON.stringify(text).slice(0, 80));
     expect(e).toBeInstanceOf(DesignFileError);
     expect((e as DesignFileError).message.startsWith('fuzz.json')).toBe(true);
   }
@@ -15,7 +19,12 @@ function loadsOrNamesTheProblem(text: string): void {
 
 describe('design file fuzz', () => {
   it('random text', () => {
-    fc.assert(fc.property(fc.string(), loadsOrNamesTheProblem), { numRuns: 1000 });
+    const tally = new Tally();
+    fc.assert(
+      fc.property(fc.string(), (t) => loadsOrNamesTheProblem(t, tally)),
+      { numRuns: 1000 },
+    );
+    tally.print('random text (design file reader)');
   });
 
   it('random JSON, also under the format tag', () => {
@@ -32,9 +41,11 @@ describe('design file fuzz', () => {
           ...d,
         })),
     );
+    const tally = new Tally();
     fc.assert(
-      fc.property(doc, (d) => loadsOrNamesTheProblem(JSON.stringify(d))),
+      fc.property(doc, (d) => loadsOrNamesTheProblem(JSON.stringify(d), tally)),
       { numRuns: 1000 },
     );
+    tally.print('random JSON (design file reader)');
   });
 });

@@ -2,6 +2,11 @@
 import fc from 'fast-check';
 import { HOSTILE_NAMES, RAIL_LIKE_NAMES } from '../fixtures/hostileNames.ts';
 import type { Device, Netlist, Rail } from '../../src/core/model/netlist.ts';
+import { netNames } from '../../src/core/model/netlist.ts';
+import type { Cell, Design } from '../../src/core/document/design.ts';
+import { recordOf } from '../../src/core/model/records.ts';
+import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
+import { cellPins } from '../../src/core/hierarchy/cellNets.ts';
 
 const SIGNALS = ['A', 'B', 'C', 'EN', 'Y', 'Q', 'QB', 'n1', 'n2', 'mid', 'X1/n3', 'bit_7'];
 const RAIL_CHOICES: readonly Rail[] = [
@@ -112,3 +117,65 @@ function withoutBulk(d: Device, keep: boolean): Device {
   delete copy.bulk;
   return copy;
 }
+
+const cellNameArb = fc.oneof(fc.constantFrom(...HOSTILE_NAMES), fc.string({ minLength: 1 }));
+
+/**
+ * Designs of two to four cells as a designer may save them, with hostile names everywhere: cell
+ * names (distinct, but `a` and `A` both), nets, devices, instances (repeats included) and pins. A
+ * cell places earlier cells only (no loops); each instance wires some of the placed cell's pins to
+ * nets of its own and leaves the others unwired (an open pin, or a rail joined by name); some
+ * transistors name the technology's model cards.
+ */
+export const hostileDesignArb: fc.Arbitrary<Design> = fc
+  .uniqueArray(cellNameArb, { minLength: 2, maxLength: 4 })
+  .chain((names) =>
+    fc.tuple(
+      ...names.map((name, k) =>
+        fc
+          .record({
+            netlist: hostileNetlistArb,
+            places: fc.array(
+              fc.record({
+                cell: fc.nat(Math.max(0, k - 1)),
+                name: fc.constantFrom(...HOSTILE_NAMES, `X${k}`),
+                wiring: fc.array(fc.option(fc.nat(30), { nil: undefined }), { maxLength: 8 }),
+              }),
+              { maxLength: k === 0 ? 0 : 3 },
+            ),
+            cards: fc.array(fc.boolean(), { minLength: 8, maxLength: 8 }),
+            expect: fc.option(fc.constantFrom('!A', 'x\n.end', '"q"', ' A & B '), { nil: undefined }),
+          })
+          .map((p) => ({ name, ...p })),
+      ),
+    ),
+  )
+  .map((parts): Design => {
+    const cells: Cell[] = [];
+    for (const p of parts) {
+      const devices = p.netlist.devices.map((d, i) =>
+        (d.kind === 'nmos' || d.kind === 'pmos') && p.cards[i] === true
+          ? { ...d, model: d.kind === 'nmos' ? 'hvt' : 'lvt' }
+          : d,
+      );
+      const netlist = { ...p.netlist, name: p.name, devices };
+      const pool = [...new Set([...HOSTILE_NAMES.slice(0, 12), ...netNames(netlist)])];
+      const instances = p.places.map((x) => {
+        const placed = cells[x.cell] as Cell;
+        const pins = cellPins(placed.netlist);
+        const wired = pins.flatMap((pin, j) => {
+          const at = x.wiring[j];
+          return at === undefined ? [] : [[pin, pool[at % pool.length] as string] as const];
+        });
+        return { name: x.name, cell: placed.name, pins: recordOf(wired) };
+      });
+      const first = netlist.outputs[0];
+      const expectations = recordOf(first === undefined || p.expect === undefined ? [] : [[first, p.expect]]);
+      cells.push({ name: p.name, netlist, instances, expectations, sequences: [] });
+    }
+    const technology = {
+      ...DEFAULT_TECHNOLOGY,
+      models: { hvt: { type: 'nmos' as const, vt0: 0.55 }, lvt: { type: 'pmos' as const, kp: 40e-6 } },
+    };
+    return { name: 'hostile design', technology, cells, open: (cells.at(-1) as Cell).name };
+  });

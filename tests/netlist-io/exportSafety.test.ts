@@ -15,6 +15,7 @@ import type { SheetPart } from '../../src/core/sheet/types.ts';
 import { makeSheetPart, PART_KINDS, type PartKind } from '../../src/core/sheet/parts/index.ts';
 import { hasControlCharacter, HOSTILE_NAMES } from '../fixtures/hostileNames.ts';
 import { hostileNetlistArb } from './arbitraries.ts';
+import { reportRows } from '../../src/core/analysis/sweepColumns.ts';
 
 /** Verilog tokens outside comments: escaped identifiers (without the backslash), words, punctuation. */
 function verilogTokens(text: string): string[] {
@@ -113,7 +114,7 @@ describe('CSV of hostile designs', () => {
       fc.property(hostileNetlistArb, (netlist) => {
         const report = checkSweep(netlist);
         const records = csvRecords(exportTruthTableCsv(report));
-        expect(records).toHaveLength((report.vectors?.length ?? 0) + 1);
+        expect(records).toHaveLength((reportRows(report).length ?? 0) + 1);
         const width = records[0]?.length;
         for (const r of records) {
           expect(r).toHaveLength(width as number);

@@ -6,6 +6,7 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { importSpice, SpiceImportError } from '../../src/core/netlist-io/spiceImport.ts';
+import { Tally } from '../fuzzTally.ts';
 
 const token = fc.constantFrom(
   'M1',
@@ -60,18 +61,24 @@ const text = fc.array(line, { maxLength: 25 }).map((l) => l.join('\n'));
 
 describe('importer fuzz', () => {
   it('imports or throws SpiceImportError naming a line of the file', () => {
+    const tally = new Tally();
     fc.assert(
       fc.property(text, (t) => {
         try {
           importSpice(t, 'fuzz.sp');
+          tally.add({ outcome: 'clean', why: '' }, t);
         } catch (e) {
-          expect(e).toBeInstanceOf(SpiceImportError);
           const lines = t.split('\n').length;
-          expect((e as SpiceImportError).line).toBeGreaterThanOrEqual(1);
-          expect((e as SpiceImportError).line).toBeLessThanOrEqual(Math.max(lines, 1));
+          const line = e instanceof SpiceImportError ? e.line : 0;
+          const clear = line >= 1 && line <= Math.max(lines, 1);
+          tally.add({ outcome: clear ? 'refusal' : 'bad', why: String(e) }, JSON.stringify(t));
+          expect(e).toBeInstanceOf(SpiceImportError);
+          expect(line).toBeGreaterThanOrEqual(1);
+          expect(line).toBeLessThanOrEqual(Math.max(lines, 1));
         }
       }),
       { numRuns: 3000 },
     );
+    tally.print('random netlists (importer)');
   });
 });

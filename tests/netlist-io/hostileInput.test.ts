@@ -79,7 +79,7 @@ describe('hierarchies sized before they are expanded', () => {
       lines.push(`.subckt s${i} A Y vdd gnd`, `X1 A Y vdd gnd s${i - 1}`, '.ends');
     const r = importSpice(lines.join('\n'), FILE);
     expect(r.cells[0]?.netlist.devices).toHaveLength(2);
-    expect(r.cells[0]?.netlist.devices[0]?.name).toBe(`${'X1/'.repeat(2500)}MP`);
+    expect(r.cells[0]?.netlist.devices[0]?.name).toBe(`${'X1.'.repeat(2500)}MP`);
   });
 
   it('refuses a subcircuit that instantiates itself, naming the loop and the line', () => {

@@ -206,6 +206,22 @@ describe('export → import keeps the level-1 values', () => {
     expect(back.technology.source).toMatch(/model cards of cards\.sp/);
   });
 
+  it("a technology at the far ends of the design file's ranges still writes cards that read back", () => {
+    // The design file admits k' up to 1 A/V², thresholds up to 100 V and 2φF up to 10 V
+    // (docs/semantics.md §7); cards written from such a technology are read back, not refused
+    // (a fuzzed design with kpn = 0.5 A/V² once exported as kp=500m and failed to open).
+    const edge: Technology = {
+      ...tech,
+      kpn: 0.5,
+      kpp: 1e-9,
+      vtn: 100,
+      phin: 10,
+      models: { hvt: { type: 'nmos', vt0: -100, kp: 1 }, lvt_p: { type: 'pmos', phi: 10 } },
+    };
+    const back = job(exportSpice(netlist, edge));
+    expect({ ...back.technology, source: edge.source }).toEqual(edge);
+  });
+
   it('a card that takes the name of the technology card moves the latter aside', () => {
     const clash = { ...tech, models: { rw_nmos: { type: 'nmos' as const, vt0: 0.9 } } };
     const devices = [{ ...(netlist.devices[1] as MosDevice), model: 'rw_nmos' }];

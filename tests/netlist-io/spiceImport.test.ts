@@ -61,6 +61,40 @@ MN Y A GND GND nch W=1u L=0.25u
     expect(mos(n, 'MP')).toMatchObject({ w: 2, l: 0.5 });
   });
 
+  it('joins a + line to its statement across a railwise directive, which keeps its own place', () => {
+    // Our own directive form (docs/semantics.md §6); the join is SPICE's continuation rule.
+    const result = importSpice(
+      `.subckt inv A Y VDD GND
+MP Y A VDD VDD pch
+* railwise: expect Y = !A
++ W=2u L=0.5u
+MN Y A GND GND nch W=1u L=0.25u
+.ends`,
+      FILE,
+    );
+    const cell = result.cells[0] as SpiceImport['cells'][number];
+    expect(mos(cell.netlist, 'MP')).toMatchObject({ w: 2, l: 0.5 });
+    expect(cell.expectations).toEqual({ Y: '!A' });
+    expect(cell.expectationLines).toEqual({ Y: 3 });
+  });
+
+  it('reads devices that repeat one parameter list each with its own values', () => {
+    // Lines that give the same parameters share one reading (kept once to save memory; our own
+    // rule, no source): a line with other values must not see an earlier line's, nor change it.
+    const n = only(`.subckt two A Y VDD GND
+MP1 Y A VDD VDD pch W=2u L=0.5u
+MP2 Y A VDD VDD pch W=2u L=0.5u
+MN1 Y A GND GND nch W=1u L=0.25u m=2
+MN2 Y A GND GND nch W=1u L=0.25u
+.ends`);
+    expect(n.devices.map((d) => ('w' in d ? [d.name, d.w, d.l] : []))).toEqual([
+      ['MP1', 2, 0.5],
+      ['MP2', 2, 0.5],
+      ['MN1', 2, 0.25],
+      ['MN2', 1, 0.25],
+    ]);
+  });
+
   it('is case-insensitive for commands, parameters, model names and nets', () => {
     const n = only(`.SUBCKT INV a y vdd gnd
 MP Y A VDD VDD PCH w=2U l=0.25U
@@ -198,8 +232,8 @@ X2 mid Y VDD GND inv
   it('flattens X instances with hierarchical device and net names', () => {
     const n = only(BUFFER);
     expect(n.name).toBe('buf');
-    expect(n.devices.map((d) => d.name)).toEqual(['X1/MP', 'X1/MN', 'X2/MP', 'X2/MN']);
-    expect(mos(n, 'X2/MN')).toMatchObject({ gate: 'mid', drain: 'Y', source: 'GND' });
+    expect(n.devices.map((d) => d.name)).toEqual(['X1.MP', 'X1.MN', 'X2.MP', 'X2.MN']);
+    expect(mos(n, 'X2.MN')).toMatchObject({ gate: 'mid', drain: 'Y', source: 'GND' });
   });
 
   it('reads the CDL form of an instance, with a / before the subcircuit name', () => {
@@ -220,7 +254,7 @@ X7 A Y VDD GND leaf
 .subckt top A Y VDD GND
 X3 A Y VDD GND mid
 .ends`);
-    expect(mos(n, 'X3/X7/M1').drain).toBe('X3/X7/n');
+    expect(mos(n, 'X3.X7.M1').drain).toBe('X3.X7.n');
   });
 
   it('keeps rail names and .global nets global inside subcircuits', () => {
@@ -235,7 +269,7 @@ X1 A Y leaf
 .ends`,
       { supplyNames: ['vpwr'] },
     );
-    expect(mos(n, 'X1/M2').source).toBe('vpwr!');
+    expect(mos(n, 'X1.M2').source).toBe('vpwr!');
     expect(n.rails).toEqual([
       { net: 'gnd', role: 'ground' },
       { net: 'vpwr!', role: 'supply' },

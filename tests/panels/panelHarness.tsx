@@ -9,7 +9,7 @@ import { afterEach, beforeEach } from 'vitest';
 import { AnalysisPanel } from '../../src/panels/AnalysisPanel.tsx';
 import { SWEEP_DEBOUNCE_MS, startAnalysis } from '../../src/state/analysis.ts';
 import { resetStore } from '../../src/state/store.ts';
-import { runJob } from '../../src/worker/jobs.ts';
+import { runJob } from '../../src/worker/runJob.ts';
 import { setJobRunnerFactory } from '../../src/worker/runner.ts';
 
 (globalThis as { IS_REACT_ACT_ENVIRONMENT?: boolean }).IS_REACT_ACT_ENVIRONMENT = true;

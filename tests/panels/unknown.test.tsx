@@ -10,7 +10,7 @@ import { AnalysisPanel } from '../../src/panels/AnalysisPanel.tsx';
 import { Legend } from '../../src/panels/Legend.tsx';
 import { SWEEP_DEBOUNCE_MS, startAnalysis } from '../../src/state/analysis.ts';
 import { loadDesign, resetStore } from '../../src/state/store.ts';
-import { runJob } from '../../src/worker/jobs.ts';
+import { runJob } from '../../src/worker/runJob.ts';
 import { setJobRunnerFactory } from '../../src/worker/runner.ts';
 import { design, nandLatch } from '../cells.ts';
 

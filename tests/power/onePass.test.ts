@@ -11,7 +11,7 @@ import { powerFromCounts, powerReport } from '../../src/core/power/powerReport.t
 import { DEFAULT_POWER_SETTINGS } from '../../src/core/power/settings.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import { run } from '../../src/cli/main.ts';
-import { runJob } from '../../src/worker/jobs.ts';
+import { runJob } from '../../src/worker/runJob.ts';
 import { startAnalysis } from '../../src/state/analysis.ts';
 import { commitDoc, loadDesign, resetStore, store } from '../../src/state/store.ts';
 import { moveItems } from '../../src/core/sheet/transform.ts';

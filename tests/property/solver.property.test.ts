@@ -5,6 +5,7 @@ import type { CheckReport } from '../../src/core/analysis/report.ts';
 import type { Netlist } from '../../src/core/model/netlist.ts';
 import { STARTERS } from '../../src/core/starters/index.ts';
 import { complementaryGate, conducts, passNetwork, randomNetlist, spTree } from './generators.ts';
+import { reportRows } from '../../src/core/analysis/sweepColumns.ts';
 
 const INPUTS = ['A', 'B', 'C', 'D'];
 
@@ -33,7 +34,7 @@ describe('complementary static CMOS gates', () => {
  * unknowns, so they are compared separately, to a relative 1e-9.
  */
 function fingerprint(report: CheckReport): unknown {
-  const rows = report.vectors ?? report.steps ?? [];
+  const rows = reportRows(report);
   return {
     rows: rows.map((v) => ({
       outputs: v.outputs,
@@ -48,8 +49,8 @@ function fingerprint(report: CheckReport): unknown {
 function expectSameNumbers(a: CheckReport, b: CheckReport): void {
   const close = (x: number, y: number): boolean =>
     Math.abs(x - y) <= 1e-9 * Math.max(1, Math.abs(x), Math.abs(y));
-  const rowsA = a.vectors ?? a.steps ?? [];
-  const rowsB = b.vectors ?? b.steps ?? [];
+  const rowsA = reportRows(a);
+  const rowsB = reportRows(b);
   rowsA.forEach((row, i) => {
     const other = rowsB[i]!;
     expect(close(row.supplyCurrent, other.supplyCurrent)).toBe(true);
@@ -134,7 +135,7 @@ describe('robustness', () => {
     fc.assert(
       fc.property(randomNetlist(), fc.boolean(), (netlist, undriven) => {
         const report = checkSweep(netlist, { undrivenInputs: undriven });
-        for (const v of report.vectors!) {
+        for (const v of reportRows(report)) {
           for (const level of Object.values(v.outputs)) expect(['0', '1', 'X', 'Z']).toContain(level);
           expect(Number.isFinite(v.supplyCurrent)).toBe(true);
         }

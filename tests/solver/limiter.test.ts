@@ -9,6 +9,7 @@ import { checkSweep } from '../../src/core/analysis/check.ts';
 import { circuit } from '../../src/core/model/builder.ts';
 import type { Device, Netlist } from '../../src/core/model/netlist.ts';
 import { DEFAULT_TECHNOLOGY as TECH } from '../../src/core/model/technology.ts';
+import { reportRows } from '../../src/core/analysis/sweepColumns.ts';
 
 function permutations<T>(items: readonly T[]): T[][] {
   if (items.length <= 1) return [[...items]];
@@ -49,7 +50,7 @@ describe('the limiter of a degraded level', () => {
   // common practice).
   it('n1 sits at |Vtp|', () => {
     const report = checkSweep(cell, { allNets: true });
-    expect(report.vectors![0]!.voltages.n1).toBeCloseTo(TECH.vtp, 12);
-    expect(report.vectors![0]!.voltages.Y).toBe(0);
+    expect(reportRows(report)[0]!.voltages.n1).toBeCloseTo(TECH.vtp, 12);
+    expect(reportRows(report)[0]!.voltages.Y).toBe(0);
   });
 });

@@ -12,6 +12,7 @@ import { FLAG_DEGRADED, MAYBE, OFF, ON } from '../../src/core/solver/levels.ts';
 import { Simulator } from '../../src/core/solver/simulator.ts';
 import { leading, solve, solveSteps } from '../helpers.ts';
 import { fixtureCell } from './fixtures.ts';
+import { reportRows } from '../../src/core/analysis/sweepColumns.ts';
 
 /** Channel element of a device by name. */
 function elementOf(c: CompiledNetlist, device: string): number {
@@ -40,7 +41,7 @@ describe('tie cells', () => {
       const cell = fixtureCell(file);
       const report = checkSweep(cell.netlist, { expectations: cell.expectations, allNets: true });
       expect(report.summary.errors).toBe(0);
-      const [v] = leading(report.vectors ?? [], 1);
+      const [v] = leading(reportRows(report), 1);
       expect(v.outputs.Z).toBe(z);
       expect(v.voltages.Z).toBe(zVolts);
       expect(v.voltages[net]).toBeCloseTo(volts, 12);
@@ -94,7 +95,7 @@ describe('the clamp in both directions', () => {
       .nmos('ND', { g: 'n', d: 'n', s: 'm' })
       .build();
     const report = checkSweep(reverse, { allNets: true });
-    const [v] = leading(report.vectors ?? [], 1);
+    const [v] = leading(reportRows(report), 1);
     expect(v.outputs).toEqual({ n: '0', m: '1' });
     expect(v.supplyCurrent).toBe(0);
     expect(conduction(reverse, 'ND')).toBe(OFF);

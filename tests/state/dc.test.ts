@@ -4,7 +4,6 @@
  * progress and can be cancelled. Jobs run in-process, finished when the test says.
  */
 import { describe, expect, it, vi } from 'vitest';
-import { SWEEP_DEBOUNCE_MS } from '../../src/state/analysis.ts';
 import {
   openTransfer,
   setTransferConvention,
@@ -14,17 +13,12 @@ import {
 } from '../../src/state/dc.ts';
 import { cancelJob, toggleInput } from '../../src/state/simulation.ts';
 import { loadDesign, store } from '../../src/state/store.ts';
-import { runJob } from '../../src/worker/jobs.ts';
+import { runJob } from '../../src/worker/runJob.ts';
 import { design, inverter, nand2, resistorLoadInverter } from '../cells.ts';
-import { runner, settle, useHeldRunner } from './heldRunner.ts';
+import { runner, settle, startQueued, useHeldRunner } from './heldRunner.ts';
 
 const state = () => store.getState().simulation;
 useHeldRunner();
-
-/** Lets queued jobs start without finishing them. */
-function startQueued(): void {
-  vi.advanceTimersByTime(SWEEP_DEBOUNCE_MS + 1);
-}
 
 describe('the transfer curve', () => {
   it('is drawn once the view is opened, for the first input, and not before', async () => {
@@ -32,7 +26,7 @@ describe('the transfer curve', () => {
     await settle();
     expect(state().transfer.status).toBe('idle');
     openTransfer();
-    startQueued();
+    await startQueued();
     expect(state().transfer).toMatchObject({ status: 'running', progress: { done: 100, total: 201 } });
     await settle();
     const report = state().transfer.result?.report;
@@ -48,7 +42,7 @@ describe('the transfer curve', () => {
     const before = state().transfer.result;
     expect(before?.report?.curves['Y']).toBeDefined();
     setTransferHold('A', null); // no change to the request's meaning, but a new request object
-    startQueued();
+    await startQueued();
     const late = runner.pending.splice(0);
     loadDesign(design(resistorLoadInverter));
     expect(state().transfer.status).toBe('idle');
@@ -67,7 +61,7 @@ describe('the transfer curve', () => {
     openTransfer();
     await settle();
     setTransferConvention('rails');
-    startQueued();
+    await startQueued();
     expect(runner.kinds()).not.toContain('transfer');
     expect(state().transfer.status).toBe('done');
     setTransferInput('B');
@@ -79,7 +73,7 @@ describe('the transfer curve', () => {
   it('can be cancelled', async () => {
     loadDesign(design(inverter));
     openTransfer();
-    startQueued();
+    await startQueued();
     cancelJob('transfer');
     await vi.runAllTimersAsync();
     expect(state().transfer.status).toBe('cancelled');
@@ -106,7 +100,7 @@ describe("the shown vector's level-1 answer", () => {
     loadDesign(design(resistorLoadInverter));
     await settle();
     toggleInput('A');
-    startQueued();
+    await startQueued();
     const late = runner.pending.splice(0);
     toggleInput('A');
     for (const p of late) p.resolve(runJob(p.job));

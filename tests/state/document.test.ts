@@ -1,5 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { deriveDesign, documentFromDesign } from '../../src/state/document.ts';
+import { designOfDocument } from '../../src/state/documentCells.ts';
+import { cellDesign } from '../../src/core/hierarchy/cellDesign.ts';
 import { parseDesignFile, serializeDesign } from '../../src/core/format/designFile.ts';
 import { STARTERS } from '../../src/core/starters/index.ts';
 import { resetStore, selectDevices, selectNets, store } from '../../src/state/store.ts';
@@ -16,19 +18,21 @@ describe('the document and its derived design', () => {
   });
 
   it('survives saving to a design file and reading it back, drawing included', () => {
-    const { design } = deriveDesign(documentFromDesign(nand2));
-    const again = parseDesignFile(serializeDesign(design), 'nand2.railwise.json');
-    expect(again.sheet).toEqual(design.sheet);
+    const doc = documentFromDesign(nand2);
+    const { design, openCell } = deriveDesign(doc);
+    const again = parseDesignFile(serializeDesign(designOfDocument(doc, openCell)), 'nand2.railwise.json');
+    expect(cellDesign(again).sheet).toEqual(design.sheet);
     expect(deriveDesign(documentFromDesign(again)).design.netlist).toEqual(design.netlist);
   });
 
   it('restores an autosaved design, and keeps an unreadable one aside with a reason', () => {
     const storage = memoryStorage();
     expect(restoreAutosave(storage)).toEqual({ design: null, problem: null });
-    const { design } = deriveDesign(documentFromDesign(nand2));
-    storage.setItem(AUTOSAVE_KEY, serializeDesign(design));
+    const doc = documentFromDesign(nand2);
+    const { design, openCell } = deriveDesign(doc);
+    storage.setItem(AUTOSAVE_KEY, serializeDesign(designOfDocument(doc, openCell)));
     const restored = restoreAutosave(storage);
-    expect(restored.design?.sheet).toEqual(design.sheet);
+    expect(restored.design?.cells[0]?.sheet).toEqual(design.sheet);
     openingDone(restored.opening, storage); // the page showed it: the next start is a fresh one
     storage.setItem(AUTOSAVE_KEY, '{"format": "railwise-design", "version": 1, "name": 3');
     const bad = restoreAutosave(storage);

@@ -7,7 +7,7 @@ import { afterEach, beforeEach, vi } from 'vitest';
 import { SWEEP_DEBOUNCE_MS, startAnalysis } from '../../src/state/analysis.ts';
 import { resetStore } from '../../src/state/store.ts';
 import { JobCancelled } from '../../src/worker/client.ts';
-import { runJob } from '../../src/worker/jobs.ts';
+import { runJob } from '../../src/worker/runJob.ts';
 import type { AnalysisJob, JobProgress, JobResult } from '../../src/worker/protocol.ts';
 import { setJobRunnerFactory, type JobRunner } from '../../src/worker/runner.ts';
 
@@ -47,13 +47,20 @@ export function useHeldRunner(): void {
 }
 
 /**
- * Lets debounced jobs start, finishes them all, and lets their answers land; again for the jobs
- * that start once the check has answered.
+ * Lets queued jobs start (at once after a quiet spell, in a microtask; otherwise once edits pause),
+ * finishes them all, and lets their answers land; jobs that wait for the table start and finish in
+ * a further round.
  */
 export async function settle(): Promise<void> {
-  vi.advanceTimersByTime(SWEEP_DEBOUNCE_MS + 1);
-  do {
+  await startQueued();
+  for (let round = 0; round < 4; round++) {
     runner.finishAll();
     await vi.runAllTimersAsync();
-  } while (runner.pending.length > 0);
+    if (runner.pending.length === 0) return;
+  }
+}
+
+/** Lets queued jobs start without finishing them. */
+export async function startQueued(): Promise<void> {
+  await vi.advanceTimersByTimeAsync(SWEEP_DEBOUNCE_MS + 1);
 }

@@ -3,7 +3,6 @@
  * jobs run in-process by a runner the test finishes by hand.
  */
 import { describe, expect, it, vi } from 'vitest';
-import { SWEEP_DEBOUNCE_MS } from '../../src/state/analysis.ts';
 import {
   cancelJob,
   pickStep,
@@ -14,11 +13,18 @@ import {
   stepVector,
   toggleInput,
 } from '../../src/state/simulation.ts';
+import { SWEEP_DEBOUNCE_MS } from '../../src/state/analysis.ts';
 import { loadDesign, setDesignFields, store } from '../../src/state/store.ts';
-import { runJob } from '../../src/worker/jobs.ts';
-import type { Design } from '../../src/core/document/design.ts';
+import { runJob } from '../../src/worker/runJob.ts';
+import type { CellDesign } from '../../src/core/document/design.ts';
 import { design, inverter, nand2, nand2MissingPullUp, nandLatch, resistorLoadInverter } from '../cells.ts';
-import { runner, settle, useHeldRunner } from './heldRunner.ts';
+import { runner, settle, startQueued, useHeldRunner } from './heldRunner.ts';
+import { reportRows } from '../../src/core/analysis/sweepColumns.ts';
+import type { CheckResult } from '../../src/worker/protocol.ts';
+
+/** A finished sweep's rows, none when there is no result. */
+const rowsOf = (result: CheckResult | null | undefined) =>
+  result === null || result === undefined ? [] : reportRows(result.report);
 
 const state = () => store.getState().simulation;
 useHeldRunner();
@@ -28,7 +34,7 @@ const LATCH_STEPS = [
   { SN: '1', RN: '1' },
 ] as const;
 
-function withLatchSteps(d: Design): Design {
+function withLatchSteps(d: CellDesign): CellDesign {
   return { ...d, sequences: [{ name: 'set, hold', steps: LATCH_STEPS }] };
 }
 
@@ -72,12 +78,52 @@ describe('sweep jobs and revisions', () => {
     expect(state().sweep.status).toBe('done');
     expect(state().sizing.status).toBe('done');
     expect(state().power?.vectors).toHaveLength(4);
-    expect(state().sweep.result?.report.vectors?.[2]?.outputs['Y']).toBe('Z');
+    expect(rowsOf(state().sweep.result)[2]?.outputs['Y']).toBe('Z');
+  });
+
+  it('starts at once when a design opens after a quiet spell; close edits wait until they pause', async () => {
+    await vi.advanceTimersByTimeAsync(SWEEP_DEBOUNCE_MS); // nothing changed since start-up
+    loadDesign(design(nand2));
+    expect(state().sweep.status).toBe('idle'); // the change is finished before any job starts
+    await Promise.resolve();
+    expect(state().sweep.status).toBe('running');
+    runner.finishAll();
+    await vi.advanceTimersByTimeAsync(SWEEP_DEBOUNCE_MS / 2);
+    setDesignFields({ expectations: { Y: '!(A & B)' } });
+    await vi.advanceTimersByTimeAsync(SWEEP_DEBOUNCE_MS / 2);
+    expect(state().sweep.status).toBe('idle'); // half a pause after an edit that followed closely
+    await vi.advanceTimersByTimeAsync(SWEEP_DEBOUNCE_MS / 2 + 1);
+    expect(state().sweep.status).toBe('running');
+  });
+
+  it('a flipped input waits for the pause, even after a quiet spell: a run of toggles starts one answer', async () => {
+    loadDesign(design(nand2));
+    await settle();
+    await vi.advanceTimersByTimeAsync(SWEEP_DEBOUNCE_MS);
+    toggleInput('A');
+    await vi.advanceTimersByTimeAsync(SWEEP_DEBOUNCE_MS / 2);
+    toggleInput('B');
+    await vi.advanceTimersByTimeAsync(SWEEP_DEBOUNCE_MS / 2);
+    expect(state().vectorDc.status).toBe('idle');
+    await vi.advanceTimersByTimeAsync(SWEEP_DEBOUNCE_MS / 2 + 1);
+    expect(runner.kinds()).toEqual(['vector-dc']);
+  });
+
+  it('starts sizing and the level-1 answer once the table is done', async () => {
+    loadDesign(design(nand2));
+    await startQueued();
+    expect(new Set(runner.kinds())).toEqual(new Set(['sweep'])); // the start-up's and this design's
+    expect(state().sizing.status).toBe('idle');
+    expect(state().vectorDc.status).toBe('idle');
+    runner.finishAll();
+    await vi.advanceTimersByTimeAsync(0);
+    expect(state().sweep.status).toBe('done');
+    expect(runner.kinds().sort()).toEqual(['sizing', 'vector-dc']);
   });
 
   it('drops a result computed for an older revision', async () => {
     loadDesign(design(nand2MissingPullUp));
-    vi.advanceTimersByTime(SWEEP_DEBOUNCE_MS + 1);
+    await startQueued();
     const stale = runner.pending.splice(0);
     loadDesign(design(nand2));
     const revision = store.getState().revision;
@@ -86,7 +132,7 @@ describe('sweep jobs and revisions', () => {
     expect(state().sweep.result).toBeNull();
     await settle();
     expect(state().sweep.result?.revision).toBe(revision);
-    expect(state().sweep.result?.report.vectors?.every((v) => v.findings.length === 0)).toBe(true);
+    expect(rowsOf(state().sweep.result).every((v) => v.findings.length === 0)).toBe(true);
   });
 
   it('keeps results and the netlist object when a revision changes nothing the analysis reads', async () => {
@@ -111,9 +157,9 @@ describe('sweep jobs and revisions', () => {
     expect(state().sizing.status).toBe('done');
   });
 
-  it('shows a cancelled sweep as cancelled', () => {
+  it('shows a cancelled sweep as cancelled', async () => {
     loadDesign(design(nand2));
-    vi.advanceTimersByTime(SWEEP_DEBOUNCE_MS + 1);
+    await startQueued();
     expect(state().sweep.status).toBe('running');
     cancelJob('sweep');
     return vi.runAllTimersAsync().then(() => expect(state().sweep.status).toBe('cancelled'));
@@ -134,7 +180,7 @@ describe('sweep jobs and revisions', () => {
     setUndrivenInputs(true);
     expect(state().sweep.status).toBe('idle');
     await settle();
-    expect(state().sweep.result?.report.vectors).toHaveLength(9);
+    expect(rowsOf(state().sweep.result)).toHaveLength(9);
   });
 
   it('runs the chosen sequence in its own lane', async () => {

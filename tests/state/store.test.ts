@@ -6,15 +6,7 @@ import { afterEach, describe, expect, it } from 'vitest';
 import { startAnalysis } from '../../src/state/analysis.ts';
 import { INITIAL_SIMULATION } from '../../src/state/simulationSlice.ts';
 import { toggleInput } from '../../src/state/simulation.ts';
-import {
-  closeCellChoice,
-  loadDesign,
-  offerCells,
-  resetStore,
-  setDesignFields,
-  store,
-  undo,
-} from '../../src/state/store.ts';
+import { loadDesign, resetStore, setDesignFields, store, undo } from '../../src/state/store.ts';
 import { setJobRunnerFactory } from '../../src/worker/runner.ts';
 import { design, inverter, nand2 } from '../cells.ts';
 
@@ -28,13 +20,9 @@ afterEach(() => {
 describe('one store of slices', () => {
   it('holds every slice in one state, and reset starts them all over', () => {
     resetStore();
-    offerCells('lib.sp', [design(nand2)], []);
     const s = store.getState();
-    for (const key of ['doc', 'design', 'history', 'selection', 'viewport', 'simulation', 'cellChoice'])
+    for (const key of ['doc', 'design', 'openCell', 'history', 'selection', 'viewport', 'simulation'])
       expect(s).toHaveProperty(key);
-    expect(s.cellChoice?.designs).toHaveLength(1);
-    closeCellChoice();
-    expect(store.getState().cellChoice).toBeNull();
     resetStore();
     expect(store.getState().simulation).toBe(INITIAL_SIMULATION);
   });

@@ -1,5 +1,6 @@
 import { describe, expect, it } from 'vitest';
-import { expressionProblem, tokenSpan } from '../../src/core/view/expectation.ts';
+import { expressionProblem } from '../../src/core/expect/problems.ts';
+import { tokenSpan } from '../../src/core/view/expectation.ts';
 
 describe('expected-function problems', () => {
   // NAND2: Y = !(A & B) (common practice, no source).

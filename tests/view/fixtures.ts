@@ -1,6 +1,7 @@
 /** Hand-written reports in the docs/semantics.md §5 shape, with values a reader can re-derive. */
 import type { CheckReport, Finding, Level, VectorReport } from '../../src/core/analysis/report.ts';
 import type { InputValue } from '../../src/core/model/design.ts';
+import { columnsOfRows } from '../../src/core/analysis/sweepRecorder.ts';
 
 export function finding(partial: Partial<Finding> & Pick<Finding, 'kind' | 'severity'>): Finding {
   return { vector: null, nets: [], devices: [], path: null, message: partial.kind, ...partial };
@@ -23,12 +24,13 @@ export function vector(
   };
 }
 
+/** A sweep's report from its rows, written in truth-table order (VDD 2.5 V). */
 export function report(vectors: VectorReport[], inputs: string[], outputs: string[]): CheckReport {
   return {
     cell: 'fixture',
     inputs,
     outputs,
-    vectors,
+    sweep: columnsOfRows(vectors, { inputs, outputs, vdd: 2.5 }),
     findings: vectors.flatMap((v) => v.findings),
     summary: { vectors: vectors.length, errors: 0, warnings: 0 },
     notes: [],

@@ -16,7 +16,7 @@ const latch = fixtureCell('nand-latch.sp').netlist;
 
 describe('undecided outputs in the panel', () => {
   it('the table row of the holding vector lists unknown, after mismatch and before floating', () => {
-    const rows = vectorRows(checkSweep(latch));
+    const rows = vectorRows(checkSweep(latch).sweep!);
     expect(rows.map((r) => r.kinds.join())).toEqual(['', '', '', 'unknown']);
     expect(rows[3]!.errors).toBe(2);
   });

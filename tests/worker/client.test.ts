@@ -1,9 +1,10 @@
 import { afterEach, describe, expect, it } from 'vitest';
 import * as Comlink from 'comlink';
 import { AnalysisClient, JobCancelled } from '../../src/worker/client.ts';
-import { runJob } from '../../src/worker/jobs.ts';
+import { runJob } from '../../src/worker/runJob.ts';
 import type { AnalysisWorkerApi, JobProgress } from '../../src/worker/protocol.ts';
 import { design, nand2 } from '../cells.ts';
+import { reportRows } from '../../src/core/analysis/sweepColumns.ts';
 
 /**
  * A stand-in for the module worker: the real worker API exposed over a MessageChannel, with a
@@ -38,7 +39,7 @@ describe('analysis client', () => {
     const seen: JobProgress[] = [];
     const result = await client.run({ kind: 'sweep', revision: 5, cell: design(nand2) }, (p) => seen.push(p));
     expect(result.revision).toBe(5);
-    expect(result.kind === 'sweep' && result.report.vectors?.length).toBe(4);
+    expect(result.kind === 'sweep' && reportRows(result.report).length).toBe(4);
     await new Promise((r) => setTimeout(r, 20)); // progress messages cross the channel asynchronously
     expect(seen[seen.length - 1]).toEqual({ done: 4, total: 4 });
   });

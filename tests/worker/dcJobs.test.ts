@@ -4,7 +4,7 @@
  */
 import { describe, expect, it } from 'vitest';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
-import { runJob } from '../../src/worker/jobs.ts';
+import { runJob } from '../../src/worker/runJob.ts';
 import { jobSize, type JobProgress, type TransferJob, type VectorDcJob } from '../../src/worker/protocol.ts';
 import { RESISTOR_LOAD_OHMS, design, inverter, resistorLoadInverter } from '../cells.ts';
 

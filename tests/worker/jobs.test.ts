@@ -1,11 +1,13 @@
 import { describe, expect, it } from 'vitest';
 import { SweepLimitError } from '../../src/core/analysis/check.ts';
+import { reportRows, type SweepColumns } from '../../src/core/analysis/sweepColumns.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import { levelAt, levelStrips } from '../../src/core/view/levelStrip.ts';
 import { vectorRows } from '../../src/core/view/vectorTable.ts';
-import { runJob as runAnyJob, usableExpectations } from '../../src/worker/jobs.ts';
+import { forTransfer, usableExpectations } from '../../src/worker/jobs.ts';
+import { runJob as runAnyJob } from '../../src/worker/runJob.ts';
 import type { CheckResult, SequenceJob, SweepJob } from '../../src/worker/protocol.ts';
-import { jobSize } from '../../src/worker/protocol.ts';
+import { APP_MAX_INPUTS, MAX_INPUTS_WITH_UNDRIVEN, jobSize } from '../../src/worker/protocol.ts';
 import {
   RESISTOR_LOAD_OHMS,
   design,
@@ -23,6 +25,12 @@ function runJob(job: SweepJob | SequenceJob, onProgress?: Parameters<typeof runA
   return result;
 }
 
+/** A sweep job's columns. */
+function sweepOf(result: CheckResult): SweepColumns {
+  if (result.report.sweep === undefined) throw new Error('expected a sweep');
+  return result.report.sweep;
+}
+
 describe('sweep job', () => {
   // Resistor-load inverter with A = 1: the NMOS acts as its on-resistance Rn·L/W = 13 kΩ · 0.25 = 3.25 kΩ
   // (RCN 2nd ed., table 3.3, from memory), in series with the 40 kΩ load: I = 2.5 V / 43.25 kΩ = 57.8 µA
@@ -30,7 +38,7 @@ describe('sweep job', () => {
   it('reports the current of the vector that draws it', () => {
     const result = runJob({ kind: 'sweep', revision: 7, cell: design(resistorLoadInverter, { Y: '!A' }) });
     expect(result.revision).toBe(7);
-    const [low, high] = leading(vectorRows(result.report), 2);
+    const [low, high] = leading(vectorRows(sweepOf(result)), 2);
     const ron = DEFAULT_TECHNOLOGY.rn * (0.25 / 1);
     const amps = 2.5 / (RESISTOR_LOAD_OHMS + ron);
     expect(high.supplyCurrent).toBeCloseTo(amps, 9);
@@ -45,13 +53,13 @@ describe('sweep job', () => {
   // path to either rail (series-parallel duality, common practice, no source).
   it('finds the floating vector of a NAND2 with a missing pull-up, and nothing in the whole cell', () => {
     const broken = vectorRows(
-      runJob({ kind: 'sweep', revision: 1, cell: design(nand2MissingPullUp, { Y: '!(A & B)' }) }).report,
+      sweepOf(runJob({ kind: 'sweep', revision: 1, cell: design(nand2MissingPullUp, { Y: '!(A & B)' }) })),
     );
     expect(broken.filter((r) => r.kinds.length > 0).map((r) => r.index)).toEqual([2]);
     expect(broken[2]!.outputs.Y).toBe('Z');
     expect(broken[2]!.kinds).toEqual(expect.arrayContaining(['floating', 'mismatch']));
     const fixed = vectorRows(
-      runJob({ kind: 'sweep', revision: 2, cell: design(nand2, { Y: '!(A & B)' }) }).report,
+      sweepOf(runJob({ kind: 'sweep', revision: 2, cell: design(nand2, { Y: '!(A & B)' }) })),
     );
     expect(fixed.every((r) => r.kinds.length === 0)).toBe(true);
   });
@@ -62,12 +70,29 @@ describe('sweep job', () => {
     expect(seen[seen.length - 1]).toBe(1);
   });
 
+  /** The NAND2 with `extra` more inputs that drive nothing. */
+  const widened = (extra: number) => ({
+    ...nand2,
+    inputs: [...nand2.inputs, ...Array.from({ length: extra }, (_, i) => `U${i}`)],
+  });
+
   it('caps sweeps with undriven inputs and names the limit', () => {
-    const many = { ...nand2, inputs: [...nand2.inputs, ...Array.from({ length: 9 }, (_, i) => `U${i}`)] };
-    expect(jobSize({ kind: 'sweep', revision: 0, cell: design(many), undrivenInputs: true })).toBe(3 ** 11);
+    const many = widened(MAX_INPUTS_WITH_UNDRIVEN - 1);
+    const size = jobSize({ kind: 'sweep', revision: 0, cell: design(many), undrivenInputs: true });
+    expect(size).toBe(3 ** (MAX_INPUTS_WITH_UNDRIVEN + 1));
     expect(() => runJob({ kind: 'sweep', revision: 1, cell: design(many), undrivenInputs: true })).toThrow(
       SweepLimitError,
     );
+  });
+
+  it("sweeps past the command line's default of 16 inputs, and refuses past the page's limit", () => {
+    const result = runJob({ kind: 'sweep', revision: 1, cell: design(widened(15), { Y: '!(A & B)' }) });
+    expect(sweepOf(result).count).toBe(2 ** 17);
+    // NAND2 (common practice, no source): no vector disagrees; the 15 unused inputs are structural findings.
+    expect(result.report.summary.mismatch).toBe(0);
+    expect(result.report.findings.every((f) => f.vector === null)).toBe(true);
+    const wide = design(widened(APP_MAX_INPUTS - 1));
+    expect(() => runJob({ kind: 'sweep', revision: 1, cell: wide })).toThrow(SweepLimitError);
   });
 });
 
@@ -134,8 +159,29 @@ describe('power counts ride on the sweep', () => {
   it('leaves vectors with an undriven input out of random activity', () => {
     const plain = runJob({ kind: 'sweep', revision: 1, cell: design(nand2) });
     const withZ = runJob({ kind: 'sweep', revision: 1, cell: design(nand2), undrivenInputs: true });
-    expect(withZ.report.vectors).toHaveLength(9);
+    expect(sweepOf(withZ).count).toBe(9);
     expect(withZ.power?.vectors.map((v) => v.inputs)).toEqual(plain.power?.vectors.map((v) => v.inputs));
     expect(withZ.power?.nets).toEqual(plain.power?.nets);
+  });
+});
+
+describe('a sweep crossing to the page', () => {
+  it('moves its columns as buffers and its details as one text, reading back row for row', () => {
+    const result = runJob({
+      kind: 'sweep',
+      revision: 3,
+      cell: design(nand2MissingPullUp, { Y: '!(A & B)' }),
+    });
+    const [rows, table] = [reportRows(result.report), vectorRows(sweepOf(result))];
+    const { result: moving, buffers } = forTransfer(result);
+    expect(buffers.length).toBeGreaterThanOrEqual(8);
+    const arrived = structuredClone(moving, { transfer: buffers }) as CheckResult;
+    expect(buffers.every((b) => b.byteLength === 0)).toBe(true); // moved, not copied
+    const sweep = sweepOf(arrived);
+    expect(Array.isArray(sweep.details)).toBe(false);
+    expect(vectorRows(sweep)).toEqual(table);
+    expect(reportRows(arrived.report)).toEqual(rows);
+    // Only the structural findings travel in the report's list; each vector's are in its row.
+    expect(arrived.report.findings.every((f) => f.vector === null)).toBe(true);
   });
 });

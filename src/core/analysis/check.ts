@@ -3,18 +3,22 @@ import { compile, type CompiledNetlist } from '../compile/compile.ts';
 import { evaluateExpression, type ExpectedValue } from '../expect/evaluate.ts';
 import { expressionNames } from '../expect/names.ts';
 import { ExpressionError, parseExpectation, type Expr } from '../expect/parse.ts';
-import type { Design } from '../document/design.ts';
+import type { CellDesign } from '../document/design.ts';
 import type { InputValue, InputVector } from '../model/design.ts';
 import { recordOf } from '../model/records.ts';
 import type { Netlist } from '../model/netlist.ts';
 import { DEFAULT_TECHNOLOGY, type Technology } from '../model/technology.ts';
 import { levelName } from '../solver/levels.ts';
 import { Simulator, type SolveResult } from '../solver/simulator.ts';
+import { currentPathsOf } from './findingParts.ts';
 import type { CheckReport, Finding, FindingKind, Summary, VectorReport } from './report.ts';
 import { structuralFindings } from './rules.ts';
 import { vectorFindings } from './vectorFindings.ts';
 import { sequencePass, sweepPass, type PassProgress, type SolveObserver } from './pass.ts';
-import { checkSweepLimit, sweepSize } from './vectors.ts';
+import { KIND_ORDER, sweepFindings, type SweepColumns } from './sweepColumns.ts';
+import { SweepRows } from './sweepRows.ts';
+import { checkSweepLimit, sweepSize, vectorNumber } from './vectors.ts';
+import { WordSweep } from './vectorsWordPass.ts';
 
 export { DEFAULT_MAX_INPUTS, SweepLimitError, sweepVectors } from './vectors.ts';
 export { SequenceError } from './pass.ts';
@@ -35,26 +39,21 @@ export interface CheckOptions {
   /** Further readers of each solved vector (power counters, level strips): one solve feeds all. */
   readonly observers?: readonly SolveObserver[];
   /**
-   * Rows go here as they are found and are not kept, so a 65,536-vector sweep never holds its rows:
-   * the report then has no rows and only the structural findings, while its summary still counts
-   * every finding.
+   * A sweep's rows go here block by block (SWEEP_BLOCK vectors at most) as they are solved and are
+   * not kept, so a sweep of millions of vectors never holds its rows: the report then has no `sweep`
+   * and only the structural findings, while its summary still counts every finding.
    */
-  readonly onRow?: (row: VectorReport, index: number) => void;
+  readonly onBlock?: (block: SweepColumns) => void;
+  /**
+   * Sweeps take the bit-parallel path where the cell suits it (docs/semantics.md §2.10; same rows);
+   * false keeps every vector on the scalar engine, for comparison.
+   */
+  readonly wordParallel?: boolean;
 }
 
-export const FINDING_KINDS: readonly FindingKind[] = [
-  'short',
-  'static-current',
-  'floating',
-  'contention',
-  'degraded',
-  'charge-sharing',
-  'no-steady-state',
-  'mismatch',
-  'unknown',
-  'rule',
-  'limit',
-];
+export { SWEEP_BLOCK } from './sweepRows.ts';
+
+export const FINDING_KINDS: readonly FindingKind[] = KIND_ORDER;
 
 export { expressionNames };
 
@@ -63,21 +62,19 @@ export function vectorLabel(v: InputVector, inputs: readonly string[]): string {
   return inputs.length === 0 ? '(no inputs)' : inputs.map((n) => `${n}=${v[n] ?? 'Z'}`).join(' ');
 }
 
-class Checker implements SolveObserver {
+/** What a check reads of every solved vector: its expected values and its findings. */
+class Checker {
   readonly compiled: CompiledNetlist;
   readonly simulator: Simulator;
-  readonly rows: VectorReport[] = [];
   private readonly expectations: [number, Expr][];
   /** Some expected function names an output (its held value). */
   private readonly refersToHeld: boolean;
-  /** The last row made: the held values of the next step in a sequence (rows may be streamed). */
-  private previous: VectorReport | undefined;
+  /** Findings of every vector checked, counted by kind (the rows themselves may be streamed). */
+  readonly counts: Record<string, number> = summarize(0, []) as Record<string, number>;
 
   constructor(
     readonly netlist: Netlist,
     readonly options: CheckOptions,
-    /** A sweep's vectors each start from an unknown state; a sequence's steps follow each other. */
-    readonly mode: 'vectors' | 'steps',
   ) {
     this.simulator =
       options.simulator ?? new Simulator(compile(netlist, options.technology ?? DEFAULT_TECHNOLOGY));
@@ -90,38 +87,27 @@ class Checker implements SolveObserver {
     this.refersToHeld = this.expectations.some(([, e]) => namesIn(e).some((name) => outputs.has(name)));
   }
 
-  /** Rows handed to `onRow` rather than kept, and their findings counted by kind. */
-  private readonly streamed = { rows: 0, counts: summarize(0, []) as Record<string, number> };
-
-  add(r: SolveResult, index: number): void {
-    // In a sequence an output's held value is its level at the previous step; a sweep has none.
-    const held = this.mode === 'steps' && index > 0 ? this.previous : undefined;
-    const row = this.vectorReport(r, index, held);
-    this.previous = row;
-    if (this.options.onRow === undefined) return void this.rows.push(row);
-    this.streamed.rows++;
-    countFindings(this.streamed.counts, row.findings);
-    this.options.onRow(row, index);
-  }
-
-  /** Every reader of this pass: the checker's own rows first. */
-  observers(): SolveObserver[] {
-    return [this, ...(this.options.observers ?? [])];
-  }
-
   /**
-   * One vector's report. `held` is the previous step's report in a sequence; without it (a sweep, or a
-   * sequence's first step) the outputs' held values are unknown.
+   * One vector's findings, counted. `held` is the previous step's report in a sequence; without it
+   * (a sweep, or a sequence's first step) the outputs' held values are unknown.
    */
-  vectorReport(r: SolveResult, index: number, held?: VectorReport): VectorReport {
+  findingsOf(r: SolveResult, index: number, held?: VectorReport): Finding[] {
     const { netlist } = this;
-    const c = this.compiled;
     const values = this.refersToHeld
       ? recordOf([...Object.entries(heldValues(netlist.outputs, held)), ...Object.entries(r.inputs)])
       : r.inputs;
     const expected = new Map<number, ExpectedValue>(
       this.expectations.map(([n, e]) => [n, evaluateExpression(e, values)]),
     );
+    const findings = vectorFindings(r, index, () => vectorLabel(r.inputs, netlist.inputs), expected);
+    countFindings(this.counts, findings);
+    return findings;
+  }
+
+  /** One step's report, in the shape of docs/semantics.md §5. */
+  vectorReport(r: SolveResult, index: number, held?: VectorReport): VectorReport {
+    const { netlist } = this;
+    const c = this.compiled;
     const voltageNets = this.options.allNets ? c.netNames : netlist.outputs;
     const volts = (name: string): number | null => {
       const v = r.volts[c.netIndex.get(name) as number]!;
@@ -135,37 +121,44 @@ class Checker implements SolveObserver {
       voltages: Object.fromEntries(voltageNets.map((n) => [n, volts(n)])),
       supplyCurrent: r.supplyCurrent,
       staticPower: r.staticPower,
-      currentPaths: r.paths.map((p) => ({
-        chain: p.nets.flatMap((n, i) =>
-          i < p.elements.length
-            ? [c.netNames[n]!, netlist.devices[c.chDevice[p.elements[i]!]!]!.name]
-            : [c.netNames[n]!],
-        ),
-        current: p.current,
-      })),
-      findings: vectorFindings(r, index, () => vectorLabel(r.inputs, netlist.inputs), expected),
+      currentPaths: currentPathsOf(r),
+      findings: this.findingsOf(r, index, held),
     };
   }
 
-  /** The vector as given when it names every input (sweeps do), else completed with Z. */
+  /** The vector as given when it names every input, else completed with Z. */
   private allInputs(v: InputVector): InputVector {
     return this.netlist.inputs.every((n) => n in v)
       ? v
       : Object.fromEntries(this.netlist.inputs.map((n) => [n, v[n] ?? 'Z']));
   }
 
-  report(kind: 'vectors' | 'steps', rows: VectorReport[], notes: string[]): CheckReport {
-    const findings = [...structuralFindings(this.compiled), ...rows.flatMap((v) => v.findings)];
-    const summary = countFindings({ ...this.streamed.counts }, findings);
+  /** The report: structural findings first, then those of the rows kept; the summary counts all. */
+  report(vectors: number, rows: Pick<CheckReport, 'steps' | 'sweep'>, notes: string[]): CheckReport {
+    const structural = structuralFindings(this.compiled);
+    const kept = rows.steps?.flatMap((v) => v.findings) ?? (rows.sweep ? [...sweepFindings(rows.sweep)] : []);
+    const summary = countFindings({ ...this.counts }, structural);
     return {
       cell: this.netlist.name,
       inputs: this.netlist.inputs,
       outputs: this.netlist.outputs,
-      [kind]: rows,
-      findings,
-      summary: { ...summary, vectors: rows.length + this.streamed.rows },
+      ...rows,
+      findings: [...structural, ...kept],
+      summary: { ...summary, vectors },
       notes,
     };
+  }
+}
+
+/** The steps of a sequence as report rows, each read with the one before it (held values). */
+class StepRows implements SolveObserver {
+  readonly rows: VectorReport[] = [];
+
+  constructor(private readonly checker: Checker) {}
+
+  add(r: SolveResult, index: number): void {
+    const held = index > 0 ? this.rows[this.rows.length - 1] : undefined;
+    this.rows.push(this.checker.vectorReport(r, index, held));
   }
 }
 
@@ -238,7 +231,9 @@ function countFindings(counts: Record<string, number>, findings: readonly Findin
  * skipped (too many inputs) while a proof covers its vectors.
  */
 export function checkStructure(netlist: Netlist, options: CheckOptions, note: string): CheckReport {
-  return new Checker(netlist, options, 'vectors').report('vectors', [], [note]);
+  const checker = new Checker(netlist, options);
+  const sweep = new SweepRows(checker, undefined, 0).finish(); // no rows: `vectors` prints as []
+  return checker.report(0, sweep === undefined ? {} : { sweep }, [note]);
 }
 
 /**
@@ -249,7 +244,7 @@ export class VectorChecker {
   private readonly checker: Checker;
 
   constructor(netlist: Netlist, options: CheckOptions = {}) {
-    this.checker = new Checker(netlist, options, 'vectors');
+    this.checker = new Checker(netlist, options);
   }
 
   /** The vector's report; `index` is the vector's place in the sweep's order, named by its findings. */
@@ -260,12 +255,25 @@ export class VectorChecker {
 
 /** Checks every input combination, each solved from an unknown state (docs/semantics.md §2.9, sweep mode). */
 export function checkSweep(netlist: Netlist, options: CheckOptions = {}): CheckReport {
-  const checker = new Checker(netlist, options, 'vectors');
+  const checker = new Checker(netlist, options);
   checkSweepLimit(netlist.inputs, options.maxInputs);
   const total = sweepSize(netlist.inputs, options.undrivenInputs);
-  const done = sweepPass(checker.simulator, checker.observers(), options);
+  const rows = new SweepRows(checker, options.onBlock);
+  const words = wordSweepOf(checker, rows, options);
+  const done =
+    words === null
+      ? sweepPass(checker.simulator, [rows, ...(options.observers ?? [])], options)
+      : words.run(rows, options.onProgress);
   const notes = done < total ? [`stopped after ${done} of ${total} vectors`] : [];
-  return checker.report('vectors', checker.rows, notes);
+  const sweep = rows.finish();
+  return checker.report(done, sweep === undefined ? {} : { sweep }, notes);
+}
+
+/** The bit-parallel sweep when nothing but the rows reads the vectors and the cell suits it. */
+function wordSweepOf(checker: Checker, rows: SweepRows, options: CheckOptions): WordSweep | null {
+  if (options.wordParallel === false || options.undrivenInputs === true) return null;
+  if ((options.observers?.length ?? 0) > 0) return null;
+  return WordSweep.plan(checker.simulator, rows.reportedNets, options.expectations ?? {});
 }
 
 /**
@@ -277,14 +285,29 @@ export function checkSequence(
   steps: readonly InputVector[],
   options: CheckOptions = {},
 ): CheckReport {
-  const checker = new Checker(netlist, options, 'steps');
-  sequencePass(checker.simulator, steps, checker.observers(), options.onProgress);
-  return checker.report('steps', checker.rows, []);
+  const checker = new Checker(netlist, options);
+  const rows = new StepRows(checker);
+  sequencePass(checker.simulator, steps, [rows, ...(options.observers ?? [])], options.onProgress);
+  return checker.report(rows.rows.length, { steps: rows.rows }, []);
+}
+
+/**
+ * One solved vector's findings, read as a sweep row's are, expected functions included: the page's
+ * shown vector when the cell has more inputs than a sweep takes (docs/semantics.md §7).
+ */
+export function solvedVectorFindings(
+  netlist: Netlist,
+  simulator: Simulator,
+  r: SolveResult,
+  expectations: Readonly<Record<string, string>>,
+): Finding[] {
+  const checker = new Checker(netlist, { simulator, expectations });
+  return checker.findingsOf(r, vectorNumber(netlist.inputs, r.inputs));
 }
 
 /** Checks a design: its sweep with its own technology and expected functions. */
 export function checkDesign(
-  design: Design,
+  design: CellDesign,
   options: Omit<CheckOptions, 'technology' | 'expectations'> = {},
 ): CheckReport {
   return checkSweep(design.netlist, {

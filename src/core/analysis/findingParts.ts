@@ -2,7 +2,7 @@
 /** Pieces every kind of finding is built from: names for messages, the record, devices on nets. */
 import type { PathIndices } from '../solver/currentPaths.ts';
 import type { SolveResult } from '../solver/simulator.ts';
-import type { Finding, FindingKind, Severity } from './report.ts';
+import type { CurrentPath, Finding, FindingKind, Severity } from './report.ts';
 
 /** Names of a result's nets and devices, for messages. */
 export class Namer {
@@ -44,4 +44,11 @@ export function channelDevices(r: SolveResult, nets: readonly number[], conducti
     }
   }
   return [...devices].sort();
+}
+
+/** The result's static current paths with their nets and devices named, as a report lists them. */
+export function currentPathsOf(r: SolveResult): CurrentPath[] {
+  if (r.paths.length === 0) return [];
+  const name = new Namer(r);
+  return r.paths.map((p) => ({ chain: name.chain(p), current: p.current }));
 }

@@ -70,12 +70,72 @@ export interface CheckReport {
   readonly cell: string;
   readonly inputs: readonly string[];
   readonly outputs: readonly string[];
-  /** Sweep results; a sequence run fills `steps` instead. */
-  readonly vectors?: readonly VectorReport[];
+  /**
+   * Sweep results in columns (rows on demand: `sweepRow`); absent when the rows were handed on block
+   * by block (`CheckOptions.onBlock`). A sequence run fills `steps` instead.
+   */
+  readonly sweep?: SweepColumns;
   readonly steps?: readonly VectorReport[];
-  /** Every finding: structural ones first, then per vector. */
+  /** Every finding: structural ones first, then per vector (of the rows kept). */
   readonly findings: readonly Finding[];
   readonly summary: Summary;
   /** Notes about approximations or ignored input (e.g. bounds reached). */
   readonly notes: readonly string[];
+}
+
+/** What a vector has beyond its levels and currents. */
+export interface RowDetail {
+  readonly findings: readonly Finding[];
+  readonly currentPaths: readonly CurrentPath[];
+  /**
+   * Every reported net's volts (NaN where unknown), kept when some net's voltage is not the one its
+   * level implies (0 V for 0, VDD for 1, unknown for X and Z); null otherwise.
+   */
+  readonly voltages: Float64Array | null;
+}
+
+export interface SweepColumns {
+  readonly inputs: readonly string[];
+  /** Each input also left undriven (Z): vector numbers count in base 3. */
+  readonly undriven: boolean;
+  /** The sweep's number of the first vector held here (a block of a long sweep starts past 0). */
+  readonly first: number;
+  /** Vectors held. */
+  readonly count: number;
+  /** Reported nets, in report order: the outputs, or every net. Their voltages are each row's. */
+  readonly nets: readonly string[];
+  /** Position in `nets` of each output pin, in output order. */
+  readonly outputs: Int32Array;
+  readonly vdd: number;
+  /** Words per bit-plane: count / 32 rounded up (or more, for a block cut short). */
+  readonly words: number;
+  /**
+   * Level code (LEVEL_0 … LEVEL_Z) of reported net j at row i: bit b of the code is bit (i & 31) of
+   * word (2j + b)·words + (i >> 5). Two bit-planes per net: a word holds 32 vectors.
+   */
+  readonly levels: Int32Array;
+  /** Amperes drawn from the supply rails, per row. */
+  readonly supplyCurrent: Float64Array;
+  /** Watts delivered by all sources, per row. */
+  readonly staticPower: Float64Array;
+  /** Per row: one bit (KIND_BITS) per kind of finding the row has. */
+  readonly kinds: Uint16Array;
+  /** Per row: error- and warning-severity findings (at most 65,535 counted). */
+  readonly errors: Uint16Array;
+  readonly warnings: Uint16Array;
+  /** Per row: its entry in `details`, -1 when it has none (no findings, no current paths, plain levels). */
+  readonly detail: Int32Array;
+  /** Objects where the sweep ran; packed as text once it has crossed to the page (`packDetails`). */
+  readonly details: readonly RowDetail[] | PackedDetails;
+}
+
+/**
+ * Details written as one JSON text with the start of each, for crossing to another thread: a string
+ * is copied in one piece, where thousands of finding objects would be cloned one by one. Read back
+ * one at a time by `detailOf`.
+ */
+export interface PackedDetails {
+  readonly text: string;
+  /** Where detail k starts in `text`; one more entry than details, the last at the text's end. */
+  readonly starts: Int32Array;
 }

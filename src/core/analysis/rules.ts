@@ -19,15 +19,17 @@ const DRIVER_TERMINALS: ReadonlySet<string> = new Set(['drain', 'source', 'a', '
 export function structuralFindings(c: CompiledNetlist): Finding[] {
   const { netlist } = c;
   const findings: Finding[] = [];
-  // One pass over the terminals, appending in place: rail nets touch nearly every transistor, so
-  // nothing here may copy a net's list per terminal (that was quadratic in the cell's size).
-  const touches = new Map<string, { device: string; terminal: string }[]>();
+  // One pass over the terminals: rail nets touch nearly every transistor, so nothing here may copy a
+  // net's list per terminal (that was quadratic in the cell's size), and only a count and the first
+  // terminal are kept per net (a record per terminal was hundreds of megabytes at a million devices).
+  const touches = new Map<string, number>();
+  const firstTouch = new Map<string, { device: string; terminal: string }>();
   const drivenBy = new Map<string, number>();
   for (const d of netlist.devices) {
     for (const t of deviceTerminals(d)) {
-      const list = touches.get(t.net);
-      if (list) list.push({ device: d.name, terminal: t.terminal });
-      else touches.set(t.net, [{ device: d.name, terminal: t.terminal }]);
+      const count = touches.get(t.net) ?? 0;
+      if (count === 0) firstTouch.set(t.net, { device: d.name, terminal: t.terminal });
+      touches.set(t.net, count + 1);
       if (DRIVER_TERMINALS.has(t.terminal)) drivenBy.set(t.net, (drivenBy.get(t.net) ?? 0) + 1);
     }
   }
@@ -87,15 +89,16 @@ export function structuralFindings(c: CompiledNetlist): Finding[] {
     if (!touches.has(pin))
       findings.push(rule('pin-unconnected', 'error', [pin], [], `pin ${pin} is connected to nothing`));
   }
-  for (const [net, list] of touches) {
-    if (list.length === 1 && !isRail(net) && !pins.has(net)) {
+  for (const [net, count] of touches) {
+    const only = firstTouch.get(net)!;
+    if (count === 1 && !isRail(net) && !pins.has(net)) {
       findings.push(
         rule(
           'dangling-net',
           'warning',
           [net],
-          [list[0]!.device],
-          `net ${net} reaches only ${list[0]!.device} (${list[0]!.terminal})`,
+          [only.device],
+          `net ${net} reaches only ${only.device} (${only.terminal})`,
         ),
       );
     }

@@ -13,6 +13,7 @@ import {
 } from '../solver/levels.ts';
 import type { SolveResult } from '../solver/simulator.ts';
 import { channelDevices, finding, Namer } from './findingParts.ts';
+import { observationOf } from './observation.ts';
 import type { Finding, Severity } from './report.ts';
 
 /** How far the explanation walks back through unknown gates before it stops. */
@@ -133,13 +134,13 @@ function statesPartners(r: SolveResult, n: number): number[] {
   const s = sccOrder.items.indexOf(k);
   let row = 0;
   while (sccOrder.start[row + 1]! <= s) row++;
+  const { observed } = observationOf(r.compiled);
   const nets: number[] = [];
   for (let i = sccOrder.start[row]!; i < sccOrder.start[row + 1]!; i++) {
     const member = sccOrder.items[i]!;
     for (let q = cccNets.start[member]!; q < cccNets.start[member + 1]!; q++) {
       const m = cccNets.items[q]!;
-      const observed = r.compiled.netGates.start[m + 1]! > r.compiled.netGates.start[m]! || m === n;
-      if (r.flags[m]! & FLAG_STATES && (observed || r.compiled.outputNets.includes(m))) nets.push(m);
+      if (r.flags[m]! & FLAG_STATES && (observed[m] === 1 || m === n)) nets.push(m);
     }
   }
   return nets.sort((a, b) => (r.compiled.netNames[a]! < r.compiled.netNames[b]! ? -1 : 1));

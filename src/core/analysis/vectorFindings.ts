@@ -17,6 +17,7 @@ import {
 import type { SolveResult } from '../solver/simulator.ts';
 import { engineering } from '../units/engineering.ts';
 import { channelDevices, finding, Namer } from './findingParts.ts';
+import { observationOf } from './observation.ts';
 import type { Finding, FindingKind, Severity } from './report.ts';
 import { unknownFindings } from './unknownFindings.ts';
 
@@ -70,12 +71,6 @@ function currentFindings(r: SolveResult, vector: number, label: () => string): F
   });
 }
 
-/** Nets that feed a gate or are outputs: the ones whose level matters to the cell. */
-function observed(r: SolveResult, n: number): boolean {
-  const c = r.compiled;
-  return c.netGates.start[n + 1]! > c.netGates.start[n]! || c.outputNets.includes(n);
-}
-
 /** Nets flagged in one result, and the finding helpers that read them. */
 class Flagged {
   readonly name: Namer;
@@ -93,8 +88,9 @@ class Flagged {
   }
 
   nets(flag: number, onlyObserved = false): number[] {
+    const { observed } = observationOf(this.r.compiled);
     return this.flagged.filter(
-      (n) => (this.r.flags[n]! & flag) !== 0 && (!onlyObserved || observed(this.r, n)),
+      (n) => (this.r.flags[n]! & flag) !== 0 && (!onlyObserved || observed[n] === 1),
     );
   }
 
@@ -191,10 +187,11 @@ function floatingFindings(
 ): Finding[] {
   const name = new Namer(r);
   const c = r.compiled;
+  const { observed, isOutput: outputs } = observationOf(c);
   const out: Finding[] = [];
   for (let n = 0; n < c.netCount; n++) {
-    if (r.levels[n] !== LEVEL_Z || r.topology.isSource[n] || !observed(r, n)) continue;
-    const isOutput = c.outputNets.includes(n);
+    if (r.levels[n] !== LEVEL_Z || r.topology.isSource[n] || observed[n] === 0) continue;
+    const isOutput = outputs[n] === 1;
     if (isOutput && expected.get(n) === 'Z') continue;
     const known = !Number.isNaN(r.volts[n]);
     const severity: Severity = isOutput || !known ? 'error' : 'warning';

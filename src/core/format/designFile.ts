@@ -3,10 +3,17 @@
  * Text in, text out: the caller (browser or command line) reads and writes the bytes.
  */
 import type { z } from 'zod';
-import type { Design } from '../document/design.ts';
-import { CURRENT_DESIGN_VERSION, documentVersion, migrateToCurrent, type RawDocument } from './migrations.ts';
-import { DESIGN_FORMAT_TAG, designFileV1Schema } from './schema.ts';
-import { netlistProblem } from './designChecks.ts';
+import type { Cell, Design } from '../document/design.ts';
+import {
+  CURRENT_DESIGN_VERSION,
+  documentVersion,
+  migrateToCurrent,
+  pathInVersion,
+  type RawDocument,
+} from './migrations.ts';
+import { DESIGN_FORMAT_TAG } from './schema.ts';
+import { designFileV2Schema, type DesignFileV2 } from './cellsSchema.ts';
+import { designSizer } from '../hierarchy/flatten.ts';
 import { printable } from '../text/printable.ts';
 
 export { CURRENT_DESIGN_VERSION } from './migrations.ts';
@@ -31,6 +38,11 @@ export class DesignFileError extends Error {
 }
 
 export function parseDesignFile(text: string, fileName: string): Design {
+  return readDesignFile(text, fileName).design;
+}
+
+/** The design and the version the file was written in (its fields are spelled as that version's). */
+export function readDesignFile(text: string, fileName: string): { design: Design; version: number } {
   const raw = parseJson(text, fileName);
   const version = documentVersion(raw);
   if (version === null) {
@@ -47,24 +59,43 @@ export function parseDesignFile(text: string, fileName: string): Design {
       `written by a newer Railwise (version ${version}); this build reads up to version ${CURRENT_DESIGN_VERSION}`,
     );
   }
-  const result = designFileV1Schema.safeParse(migrateToCurrent(raw, version));
+  const result = designFileV2Schema.safeParse(migrateToCurrent(raw, version));
   if (!result.success) throw schemaError(fileName, raw, version, result.error);
-  const { name, technology, netlist, expectations, sequences, sheet, notes } = result.data;
-  const problem = netlistProblem(netlist);
-  if (problem !== null) {
-    // A migrated bare netlist has its lists at the top of the file.
-    const field = version === 0 ? problem.field.replace(/^netlist\./, '') : problem.field;
-    throw new DesignFileError(fileName, field, problem.message);
-  }
-  return {
+  const { name, technology, open, cells, notes } = result.data;
+  const design: Design = {
     name,
     technology,
-    netlist,
+    cells: cells.map(cellOfFile),
+    open,
+    ...(notes === undefined ? {} : { notes }),
+  };
+  refuseLoops(design, fileName);
+  return { design, version };
+}
+
+/** A cell as the file has it; its netlist takes the cell's name. */
+function cellOfFile(c: DesignFileV2['cells'][number]): Cell {
+  const { name, netlist, instances, expectations, sequences, sheet, globals } = c;
+  return {
+    name,
+    netlist: netlist.name === name ? netlist : { ...netlist, name },
+    instances,
     expectations,
     sequences,
     ...(sheet === undefined ? {} : { sheet }),
-    ...(notes === undefined ? {} : { notes }),
+    ...(globals === undefined ? {} : { globals }),
   };
+}
+
+/** A cell that places itself, directly or through others, is refused with the chain named. */
+function refuseLoops(design: Design, fileName: string): void {
+  const cells = new Map(design.cells.map((c) => [c.name, c]));
+  const sizer = designSizer(cells);
+  for (const [i, cell] of design.cells.entries()) {
+    const problem = sizer.problem(cell);
+    if (problem?.kind === 'cycle')
+      throw new DesignFileError(fileName, `cells[${i}].instances`, problem.message);
+  }
 }
 
 /**
@@ -78,10 +109,16 @@ export function serializeDesign(design: Design, layout: 'readable' | 'compact' =
     version: CURRENT_DESIGN_VERSION,
     name: design.name,
     technology: design.technology,
-    netlist: design.netlist,
-    expectations: design.expectations,
-    sequences: design.sequences,
-    ...(design.sheet === undefined ? {} : { sheet: design.sheet }),
+    open: design.open,
+    cells: design.cells.map((c) => ({
+      name: c.name,
+      netlist: c.netlist,
+      instances: c.instances,
+      expectations: c.expectations,
+      sequences: c.sequences,
+      ...(c.sheet === undefined ? {} : { sheet: c.sheet }),
+      ...(c.globals === undefined ? {} : { globals: c.globals }),
+    })),
     ...(design.notes === undefined ? {} : { notes: design.notes }),
   };
   return layout === 'compact' ? JSON.stringify(doc) : `${JSON.stringify(doc, null, 2)}\n`;
@@ -119,14 +156,23 @@ function schemaError(
 ): DesignFileError {
   const [first, ...rest] = error.issues;
   if (first === undefined) return new DesignFileError(fileName, '', 'invalid design');
-  // A migrated bare netlist sits under `netlist`; report paths as the file has them.
-  const path = version === 0 && first.path[0] === 'netlist' ? first.path.slice(1) : first.path;
-  const field = path
-    .map((k, i) => (typeof k === 'number' ? `[${k}]` : i === 0 ? String(k) : `.${String(k)}`))
-    .join('');
+  // A migrated file holds its fields elsewhere than the current version: report paths as the file has them.
+  const path = pathInVersion(first.path, version);
+  const field = fieldText(path);
   const named = namedElement(path, raw);
   const more = rest.length > 0 ? ` (and ${rest.length} more problem${rest.length > 1 ? 's' : ''})` : '';
   return new DesignFileError(fileName, field, `${first.message}${named}${more}`);
+}
+
+/** A field of the current version as a file of `version` spells it: `cells[1].netlist.devices[3].w`. */
+export function fieldInFile(path: readonly PropertyKey[], version: number): string {
+  return fieldText(pathInVersion(path, version));
+}
+
+function fieldText(path: readonly PropertyKey[]): string {
+  return path
+    .map((k, i) => (typeof k === 'number' ? `[${k}]` : i === 0 ? String(k) : `.${String(k)}`))
+    .join('');
 }
 
 /** ` (in M7)` when the path runs through an array element that has a name. */

@@ -12,6 +12,12 @@ export interface Migration {
   readonly from: number;
   readonly describe: string;
   readonly up: (doc: RawDocument) => RawDocument;
+  /** Where a field of the migrated document sits in a file of the old version (for messages). */
+  readonly oldPath: (path: readonly PropertyKey[]) => readonly PropertyKey[];
+}
+
+function text(value: unknown): string | undefined {
+  return typeof value === 'string' && value !== '' ? value : undefined;
 }
 
 export const MIGRATIONS: readonly Migration[] = [
@@ -24,6 +30,18 @@ export const MIGRATIONS: readonly Migration[] = [
       name: typeof doc['name'] === 'string' ? doc['name'] : 'cell',
       netlist: doc,
     }),
+    oldPath: (path) => (path[0] === 'netlist' ? path.slice(1) : path),
+  },
+  {
+    from: 1,
+    describe: 'a one-cell design becomes a design whose only cell is that one, open on the sheet',
+    up: ({ netlist, expectations, sequences, sheet, ...rest }) => {
+      const named = typeof netlist === 'object' && netlist !== null ? (netlist as RawDocument)['name'] : '';
+      const cell = text(named) ?? text(rest['name']) ?? 'cell';
+      const body = { netlist, expectations, sequences, sheet };
+      return { ...rest, version: 2, open: cell, cells: [{ name: cell, instances: [], ...body }] };
+    },
+    oldPath: (path) => (path[0] === 'cells' && path[1] === 0 ? path.slice(2) : path),
   },
 ];
 
@@ -51,4 +69,11 @@ export function migrateToCurrent(doc: RawDocument, version: number): RawDocument
     current = step.up(current);
   }
   return current;
+}
+
+/** A path in the current version's document as a file of `version` spells it. */
+export function pathInVersion(path: readonly PropertyKey[], version: number): readonly PropertyKey[] {
+  let p = path;
+  for (let v = CURRENT_DESIGN_VERSION - 1; v >= version; v--) p = MIGRATIONS[v]?.oldPath(p) ?? p;
+  return p;
 }

@@ -8,7 +8,7 @@ import { z } from 'zod';
 import { nameRecord } from '../model/records.ts';
 import { inRange, RANGES, rangeText } from '../model/ranges.ts';
 import { coordinate, farads, length, ohms, quantity } from './quantity.ts';
-import { DEFAULT_TECHNOLOGY, modelCard, withVdd, type Technology } from '../model/technology.ts';
+import { DEFAULT_TECHNOLOGY, withVdd } from '../model/technology.ts';
 import { sheetPartSchema } from './sheetPartSchema.ts';
 
 const netName = z.string().min(1, 'a net name cannot be empty');
@@ -19,7 +19,7 @@ const deviceName = z.string().min(1, 'a device name cannot be empty');
  * `z.record`, a key such as `__proto__` is kept, in a record without a prototype, because a net
  * may be called that and dropping it would silently skip its check.
  */
-function namedRecord<T extends z.ZodType>(value: T) {
+export function namedRecord<T extends z.ZodType>(value: T) {
   return z.unknown().transform((raw, ctx) => {
     const out = nameRecord<z.output<T>>();
     if (typeof raw !== 'object' || raw === null || Array.isArray(raw)) {
@@ -113,7 +113,7 @@ export const netlistSchema = z.object({
  */
 const deviceModelSchema = z.object({
   type: z.enum(['nmos', 'pmos']),
-  vt0: quantity({ min: -10, max: 10, words: '−10 to 10 V' }).exactOptional(),
+  vt0: quantity(RANGES.threshold).exactOptional(),
   kp: quantity(RANGES.transconductance).exactOptional(),
   gamma: quantity(RANGES.bodyEffect).exactOptional(),
   phi: quantity(RANGES.surfacePotential).exactOptional(),
@@ -175,38 +175,3 @@ export const sheetSchema = z.object({
 
 /** The marker that tells a Railwise design file from any other JSON. */
 export const DESIGN_FORMAT_TAG = 'railwise-design';
-
-export const designFileV1Schema = z
-  .object({
-    format: z.literal(DESIGN_FORMAT_TAG),
-    version: z.literal(1),
-    name: z.string(),
-    technology: technologySchema.default(DEFAULT_TECHNOLOGY),
-    netlist: netlistSchema,
-    expectations: namedRecord(z.string()).default(nameRecord<string>()),
-    sequences: z.array(sequenceSchema).default([]),
-    sheet: sheetSchema.optional(),
-    notes: z.string().optional(),
-  })
-  .superRefine((file, ctx) => {
-    const check = (kind: string, model: string | undefined, path: (string | number)[]): void => {
-      const problem = modelProblem(file.technology, kind, model);
-      if (problem !== null) ctx.addIssue({ code: 'custom', message: problem, path });
-    };
-    file.netlist.devices.forEach((d, i) => {
-      if (d.kind === 'nmos' || d.kind === 'pmos') check(d.kind, d.model, ['netlist', 'devices', i, 'model']);
-    });
-    file.sheet?.parts.forEach((p, i) => {
-      if (p.kind === 'nmos' || p.kind === 'pmos') check(p.kind, p.model, ['sheet', 'parts', i, 'model']);
-    });
-  });
-
-/** Why a transistor cannot take the model card it names, or null. */
-function modelProblem(tech: Technology, kind: string, model: string | undefined): string | null {
-  if (model === undefined) return null;
-  const card = modelCard(tech, model);
-  if (card === undefined) return `no model card '${model}' in technology.models`;
-  return card.type === kind ? null : `model '${model}' is a ${card.type} card, not ${kind}`;
-}
-
-export type DesignFileV1 = z.infer<typeof designFileV1Schema>;

@@ -113,6 +113,22 @@ export function deviceTerminals(
   }
 }
 
+/** The device with every terminal's net passed through `rename`. */
+export function mapDeviceNets(d: Device, rename: (net: string) => string): Device {
+  switch (d.kind) {
+    case 'nmos':
+    case 'pmos': {
+      const base = { ...d, gate: rename(d.gate), drain: rename(d.drain), source: rename(d.source) };
+      return d.bulk === undefined ? base : { ...base, bulk: rename(d.bulk) };
+    }
+    case 'resistor':
+    case 'capacitor':
+      return { ...d, a: rename(d.a), b: rename(d.b) };
+    case 'diode':
+      return { ...d, anode: rename(d.anode), cathode: rename(d.cathode) };
+  }
+}
+
 /** All net names in first-appearance order: rails, inputs, outputs, then device terminals. */
 export function netNames(netlist: Netlist): string[] {
   // Runs on every edit of big sheets: no per-terminal objects, one Set.

@@ -34,6 +34,11 @@ export const RANGES = {
   capacitancePerWidth: { min: 0, max: 1e-9, words: '0 to 1 nF/µm' },
   /** Off-current per width, A/µm. */
   currentPerWidth: { min: 0, max: 1e-3, words: '0 to 1 mA/µm' },
+  /**
+   * A model card's threshold VTO, volts (negative for an enhancement PMOS): as wide as the
+   * technology's own thresholds (`volts`), so every technology writes a card that reads back.
+   */
+  threshold: { min: -100, max: 100, words: '−100 to 100 V' },
   /** Process transconductance k', A/V². */
   transconductance: { min: 1e-9, max: 1, words: '1 nA/V² to 1 A/V²' },
   /** Body-effect coefficient γ of the level-1 DC model, V^½. */

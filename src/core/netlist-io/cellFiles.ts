@@ -3,20 +3,18 @@
  * only reads files and applies its flags): design files hold one cell, SPICE files one or a library.
  * A file or cell that cannot be used becomes a failure entry; the others still load.
  */
-import { DesignFileError, parseDesignFile } from '../format/designFile.ts';
+import { DesignFileError, fieldInFile, readDesignFile } from '../format/designFile.ts';
+import type { CellDesign } from '../document/design.ts';
 import type { Sequence } from '../model/design.ts';
+import { cellDesign } from '../hierarchy/cellDesign.ts';
+import { HierarchyError } from '../hierarchy/flatten.ts';
 import type { Netlist } from '../model/netlist.ts';
 import type { Sheet } from '../sheet/types.ts';
-import {
-  DEFAULT_TECHNOLOGY,
-  withCardValues,
-  withVdd,
-  type DeviceModel,
-  type Technology,
-} from '../model/technology.ts';
+import { DEFAULT_TECHNOLOGY, withVdd, type Technology } from '../model/technology.ts';
 import { expressionNames } from '../expect/names.ts';
 import { ExpressionError, parseExpression } from '../expect/parse.ts';
 import { importSpice, SpiceImportError, type SpiceImportOptions } from './spiceImport.ts';
+import { withCellModels, withTechnologyCards } from './spiceDesign.ts';
 
 import { DESIGN_EXTENSIONS, SPICE_EXTENSIONS } from './fileKinds.ts';
 
@@ -25,6 +23,8 @@ export interface CellJob {
   readonly file: string;
   /** A design file names its fields (`expectations.Y`); a netlist its lines and flags. */
   readonly source: 'design' | 'netlist';
+  /** Where a design file holds this cell's expected functions (`cells[2].expectations`). */
+  readonly expectationsField?: string;
   readonly cell: string;
   readonly netlist: Netlist;
   readonly technology: Technology;
@@ -76,13 +76,6 @@ function technologyOf(base: Technology, vdd: number | undefined): Technology {
   return vdd === undefined ? base : withVdd(base, vdd);
 }
 
-/** The technology with the level-1 values of the cards `* railwise: technology` names. */
-function withTechnologyCards(base: Technology, cards: readonly DeviceModel[], file: string): Technology {
-  if (cards.length === 0) return base;
-  const source = `level-1 values from the model cards of ${file}; the rest from ${base.source}`;
-  return { ...cards.reduce(withCardValues, base), source };
-}
-
 export function isSpiceFileName(fileName: string): boolean {
   const lower = fileName.toLowerCase();
   return SPICE_EXTENSIONS.some((ext) => lower.endsWith(ext));
@@ -115,34 +108,48 @@ function unreadable(failure: CellFailure): FileCells {
   return { cells: [{ failure }], library: false, available: [] };
 }
 
+/** Every cell of a design file, each flattened; several cells are checked as a library. */
 function designCells(text: string, file: string, options: LoadOptions): FileCells {
-  const design = parseDesignFile(text, file);
-  const cell = design.netlist.name || design.name;
-  if (options.cell !== undefined && options.cell.toLowerCase() !== cell.toLowerCase())
-    return { cells: [], library: false, available: [cell] };
-  const job: CellJob = {
-    file,
-    source: 'design',
-    cell,
-    netlist: design.netlist,
-    technology: technologyOf(design.technology, options.vdd),
-    expectations: design.expectations,
-    expectationLines: {},
-    pinsNamed: true,
-    sequences: design.sequences,
-    ...(design.sheet === undefined ? {} : { sheet: design.sheet }),
-    notes: [],
-  };
-  return { cells: [{ job }], library: false, available: [cell] };
+  const { design, version } = readDesignFile(text, file);
+  const available = design.cells.map((c) => c.name);
+  const wanted =
+    options.cell === undefined
+      ? design.cells
+      : design.cells.filter((c) => c.name.toLowerCase() === options.cell?.toLowerCase());
+  const technology = technologyOf(design.technology, options.vdd);
+  const cells = wanted.map((c): LoadedCell => {
+    const at = design.cells.indexOf(c);
+    let one: CellDesign;
+    try {
+      one = cellDesign(design, c.name);
+    } catch (e) {
+      if (!(e instanceof HierarchyError)) throw e;
+      const field = fieldInFile(['cells', at, 'instances'], version);
+      return { failure: { file, cell: c.name, message: `${file}: ${e.message}`, field } };
+    }
+    const job: CellJob = {
+      file,
+      source: 'design',
+      expectationsField: fieldInFile(['cells', at, 'expectations'], version),
+      cell: c.name,
+      netlist: one.netlist,
+      technology,
+      expectations: one.expectations,
+      expectationLines: {},
+      pinsNamed: true,
+      sequences: one.sequences,
+      // The drawing derives the cell's own netlist: the flat one only when it places nothing.
+      ...(c.sheet === undefined || c.instances.length > 0 ? {} : { sheet: c.sheet }),
+      notes: [],
+    };
+    return { job };
+  });
+  return { cells, library: design.cells.length > 1 && options.cell === undefined, available };
 }
 
 function spiceCells(text: string, file: string, options: LoadOptions): FileCells {
   const imported = importSpice(text, file, options);
-  const base = withTechnologyCards(
-    technologyOf(DEFAULT_TECHNOLOGY, options.vdd),
-    imported.technologyCards,
-    file,
-  );
+  const base = withTechnologyCards(technologyOf(DEFAULT_TECHNOLOGY, options.vdd), imported);
   const position = new Map(imported.order.map((name, i) => [name, i]));
   const cells: { at: number; cell: LoadedCell }[] = [];
   for (const c of imported.cells) {
@@ -151,7 +158,7 @@ function spiceCells(text: string, file: string, options: LoadOptions): FileCells
       source: 'netlist',
       cell: c.name,
       netlist: c.netlist,
-      technology: Object.keys(c.models).length === 0 ? base : { ...base, models: c.models },
+      technology: withCellModels(base, [c]),
       expectations: c.expectations,
       expectationLines: c.expectationLines,
       pinsNamed: c.pinsNamed,
@@ -179,7 +186,7 @@ export function expectationProblem(job: CellJob): CellFailure | null {
     const line = job.expectationLines[output];
     const where =
       line === undefined ? `expected function for ${output}` : `${job.file}:${line}: expect ${output}`;
-    const field = job.source === 'design' ? `expectations.${output}` : 'expect';
+    const field = job.source === 'design' ? `${job.expectationsField ?? 'expectations'}.${output}` : 'expect';
     const base = { file: job.file, cell: job.cell, ...(line === undefined ? { field } : { line }) };
     if (!job.netlist.outputs.includes(output))
       return {

@@ -11,13 +11,13 @@
  * plain numbers. Header names are made unique (` #2`) where escaping or a bidirectional pin would
  * repeat one.
  */
-import type { CheckReport, Finding, VectorReport } from '../analysis/report.ts';
+import type { CheckReport, Finding } from '../analysis/report.ts';
+import { reportRow, reportRowCount } from '../analysis/sweepColumns.ts';
 import { own } from '../model/records.ts';
 import { printable } from '../text/printable.ts';
 
 export function exportTruthTableCsv(report: CheckReport): string {
   const isSequence = report.steps !== undefined;
-  const rows: readonly VectorReport[] = report.steps ?? report.vectors ?? [];
   const header = uniqueHeaders([
     isSequence ? 'step' : 'vector',
     ...report.inputs.map(printable),
@@ -27,15 +27,17 @@ export function exportTruthTableCsv(report: CheckReport): string {
     'static power [W]',
     'findings',
   ]).map(textField);
-  const body = rows.map((row, i) => [
-    String(isSequence ? i + 1 : i),
-    ...report.inputs.map((n) => own(row.inputs, n) ?? ''),
-    ...report.outputs.map((n) => own(row.outputs, n) ?? ''),
-    ...report.outputs.map((n) => numberField(own(row.voltages, n))),
-    numberField(row.supplyCurrent),
-    numberField(row.staticPower),
-    textField(row.findings.map(findingText).join('; ')),
-  ]);
+  const body = Array.from({ length: reportRowCount(report) }, (_, i) => reportRow(report, i)).map(
+    (row, i) => [
+      String(isSequence ? i + 1 : i),
+      ...report.inputs.map((n) => own(row.inputs, n) ?? ''),
+      ...report.outputs.map((n) => own(row.outputs, n) ?? ''),
+      ...report.outputs.map((n) => numberField(own(row.voltages, n))),
+      numberField(row.supplyCurrent),
+      numberField(row.staticPower),
+      textField(row.findings.map(findingText).join('; ')),
+    ],
+  );
   return csvText([header, ...body]);
 }
 

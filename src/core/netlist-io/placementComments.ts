@@ -38,6 +38,12 @@ export function placementLines(sheet: Sheet): string[] {
 
 class PlacementError extends Error {}
 
+/**
+ * The cell and pins of an instance symbol by instance name (the cell's `X` lines give them,
+ * drawnInstances.ts), or null when the cell places no such instance.
+ */
+export type SymbolProps = (instance: string) => { readonly cell: string; readonly pins: string } | null;
+
 const ID = /^[A-Za-z0-9_]+$/;
 const INTEGER = /^-?\d{1,7}$/;
 
@@ -46,7 +52,7 @@ function integer(text: string | undefined, what: string): number {
   return Number(text) + 0;
 }
 
-function readPart(value: string, netlist: Netlist): SheetPart {
+function readPart(value: string, netlist: Netlist, symbols: SymbolProps): SheetPart {
   const m = /^(\S+) (\S+) (\S+) (\S+) ([0-3]) ([01]) (".*")$/.exec(value);
   if (m === null) throw new PlacementError('a part reads: ID KIND X Y TURNS MIRROR "NAME"');
   const [, id, kind, x, y, turns, mirror, quoted] = m as unknown as string[];
@@ -61,6 +67,11 @@ function readPart(value: string, netlist: Netlist): SheetPart {
     rotation: Number(turns) as Rotation,
     mirror: mirror === '1',
   };
+  if (kind === 'instance') {
+    const props = symbols(name);
+    if (props === null) throw new PlacementError(`no instance ${name} in the cell`);
+    return makeSheetPart('instance', { ...placement, name }, props);
+  }
   if (!isDevicePart(kind as PartKind)) return makeSheetPart(kind as PartKind, { ...placement, name });
   const device = netlist.devices.find((d) => d.name === name);
   const part = device === undefined ? null : partForDevice(device, placement);
@@ -103,6 +114,7 @@ export function readPlacement(
   directives: readonly Directive[],
   netlist: Netlist,
   notes: string[],
+  symbols: SymbolProps = () => null,
 ): Sheet | null {
   const parts = directives.filter((d) => d.key === PART_KEY);
   const wires = directives.filter((d) => d.key === WIRE_KEY);
@@ -110,7 +122,7 @@ export function readPlacement(
   let line = 0;
   try {
     const sheet: Sheet = {
-      parts: parts.map((d) => ((line = d.line), readPart(d.value, netlist))),
+      parts: parts.map((d) => ((line = d.line), readPart(d.value, netlist, symbols))),
       wires: wires.map((d) => ((line = d.line), readWire(d.value))),
     };
     line = 0;

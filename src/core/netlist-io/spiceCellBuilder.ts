@@ -1,9 +1,10 @@
 /**
- * What the body reader (`spiceFlatten.ts`) builds a cell with, and what it shares with the readers it
+ * What the body reader (`spiceBodies.ts`) builds a cell with, and what it shares with the readers it
  * calls: the device readers (`spiceDevices.ts`) and the short links (`spiceShorts.ts`). Kept apart so
  * those readers use the builder without importing the body reader that calls them.
  */
 import type { Device, MosKind } from '../model/netlist.ts';
+import type { Instance } from '../model/design.ts';
 import type { DeviceModel } from '../model/technology.ts';
 import type { StandIn } from './deviceNames.ts';
 import { SpiceImportError } from './spiceErrors.ts';
@@ -32,7 +33,7 @@ export interface ModelUse {
   readonly model?: string;
 }
 
-/** A `V` line after flattening: its nets resolved. */
+/** A `V` line with its nets resolved in its body. */
 export interface FlatSource {
   readonly name: string;
   readonly line: number;
@@ -50,6 +51,8 @@ export interface FlattenContext {
   readonly scale: Scale | null;
   /** Explicit stand-ins for undefined subcircuits, by lower-case name. */
   readonly standIns: ReadonlyMap<string, StandIn>;
+  /** The one spelling of each global net in the file, by lower case (filled as bodies are read). */
+  readonly globalSpelling: Map<string, string>;
   /** Lower-case names of the cards that are the technology's own (`* railwise: technology`). */
   readonly technologyCards: ReadonlySet<string>;
 }
@@ -64,6 +67,7 @@ export interface Scope {
 
 export class CellBuilder {
   readonly devices: Device[] = [];
+  readonly instances: Instance[] = [];
   readonly sources: FlatSource[] = [];
   readonly shorts: ShortLink[] = [];
   readonly notes = new DeviceNotesCollector();
@@ -90,9 +94,22 @@ export class CellBuilder {
     const key = info.global ? info.lower : scope.lowerPrefix + info.lower;
     const known = this.byLower.get(key);
     if (known !== undefined) return known;
-    const full = info.global ? local : scope.prefix + local;
+    const full = info.global ? this.globalName(info.lower, local) : scope.prefix + local;
     this.byLower.set(key, full);
     return full;
+  }
+
+  /** How a subcircuit's port is spelled as a net of that subcircuit (globals have one spelling). */
+  portName(port: string): string {
+    const lower = port.toLowerCase();
+    return this.ctx.isGlobal(lower) ? this.globalName(lower, port) : port;
+  }
+
+  private globalName(lower: string, local: string): string {
+    const known = this.ctx.globalSpelling.get(lower);
+    if (known !== undefined) return known;
+    this.ctx.globalSpelling.set(lower, local);
+    return local;
   }
 
   get nets(): string[] {

@@ -34,17 +34,33 @@ export function mosDevice(
   if (w > MAX_FOLDED_WIDTH) b.fail(e.line, `${e.name}: W×m = ${w} µm is wider than 1 m`);
   for (const key of e.params.keys())
     if (key !== 'w' && key !== 'l' && key !== 'm') b.notes.ignoredParams.add(key);
-  const device = {
-    kind: type,
-    name,
-    gate: b.net(e.gate, scope),
-    drain: b.net(e.drain, scope),
-    source: b.net(e.source, scope),
-    w,
-    l,
-    ...(use.model === undefined ? {} : { model: use.model }),
-  };
-  return e.bulk === undefined ? device : { ...device, bulk: b.net(e.bulk, scope) };
+  const nets = { gate: b.net(e.gate, scope), drain: b.net(e.drain, scope), source: b.net(e.source, scope) };
+  const bulk = e.bulk === undefined ? undefined : b.net(e.bulk, scope);
+  return mosRecord(type, name, nets, w, l, use.model, bulk);
+}
+
+/**
+ * A MOS device with its optional fields only when given, built field by field in one order (kind,
+ * name, gate, drain, source, w, l, model, bulk): V8 gives each object spread a hidden class of its
+ * own, which at a million devices costs hundreds of megabytes.
+ */
+function mosRecord(
+  kind: MosKind,
+  name: string,
+  nets: { readonly gate: string; readonly drain: string; readonly source: string },
+  w: number,
+  l: number,
+  model: string | undefined,
+  bulk: string | undefined,
+): MosDevice {
+  const { gate, drain, source } = nets;
+  if (model === undefined)
+    return bulk === undefined
+      ? { kind, name, gate, drain, source, w, l }
+      : { kind, name, gate, drain, source, w, l, bulk };
+  return bulk === undefined
+    ? { kind, name, gate, drain, source, w, l, model }
+    : { kind, name, gate, drain, source, w, l, model, bulk };
 }
 
 function multiplier(b: CellBuilder, e: MosElement): number {

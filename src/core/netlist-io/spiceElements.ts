@@ -89,22 +89,54 @@ const UNSUPPORTED: Readonly<Record<string, string>> = {
   z: 'MESFET',
 };
 
-export function readElement(text: string, line: number): Element {
+/**
+ * Words a file repeats (net names, model names, parameter lists), kept once per file: a netlist of a
+ * million transistors names each net several times, and each copy would otherwise stay in memory
+ * with the element that read it.
+ */
+const SHARED_PARAM_LISTS = 4096;
+
+export class WordPool {
+  private readonly words = new Map<string, string>();
+  private readonly params = new Map<string, ReadonlyMap<string, string>>();
+
+  word(text: string): string {
+    const known = this.words.get(text);
+    if (known !== undefined) return known;
+    this.words.set(text, text);
+    return text;
+  }
+
+  /**
+   * One map for every element that gives the same parameters in the same order. Past a few
+   * thousand different lists (every device sized apart) sharing saves little: new ones are not kept.
+   */
+  paramMap(key: string, make: () => ReadonlyMap<string, string>): ReadonlyMap<string, string> {
+    const known = this.params.get(key);
+    if (known !== undefined) return known;
+    const made = make();
+    if (this.params.size < SHARED_PARAM_LISTS) this.params.set(key, made);
+    return made;
+  }
+}
+
+export function readElement(text: string, line: number, pool: WordPool = new WordPool()): Element {
   const t = tokens(text);
   const name = t[0] ?? '';
   const letter = name.charAt(0).toLowerCase();
+  const args = t.slice(1).map((w) => (w.includes('=') ? w : pool.word(w)));
   switch (letter) {
     case 'm':
-      return readMos(name, t.slice(1), line);
+      return readMos(name, args, line, pool);
     case 'r':
     case 'c':
-      return readPassive(letter === 'r' ? 'resistor' : 'capacitor', name, t.slice(1), line);
+      return readPassive(letter === 'r' ? 'resistor' : 'capacitor', name, args, line, pool);
     case 'd':
-      return readDiode(name, t.slice(1), line);
+      return readDiode(name, args, line, pool);
     case 'v':
-      return readSource(name, t.slice(1), text, line);
+      return readSource(name, args, text, line);
     case 'x':
-      return readInstance(name, t.slice(1), line);
+      return readInstance(name, args, line, pool);
     default: {
       const what = UNSUPPORTED[letter];
       throw new ElementError(
@@ -116,36 +148,48 @@ export function readElement(text: string, line: number): Element {
   }
 }
 
-/** Splits `a b c k=v` into positional tokens and a parameter map; parameters may not come first. */
-function splitParams(args: readonly string[]): { positional: string[]; params: Map<string, string> } {
-  const positional: string[] = [];
-  const params = new Map<string, string>();
-  for (const a of args) {
-    const eq = a.indexOf('=');
-    if (eq < 0) {
-      if (params.size > 0)
-        throw new ElementError(`"${a}" follows a parameter; nets and the model come first`);
-      positional.push(a);
-    } else {
-      const key = a.slice(0, eq).toLowerCase();
-      const value = a.slice(eq + 1);
-      if (/^['"{]/.test(value))
-        throw new ElementError(`parameter ${key}=${value}: expressions are not supported, give a number`);
-      params.set(key, value);
-    }
-  }
-  return { positional, params };
+/** No parameters: one map for every element that gives none. */
+const NO_PARAMS: ReadonlyMap<string, string> = new Map();
+
+/**
+ * Splits `a b c k=v` into positional tokens and a parameter map; parameters may not come first.
+ * Elements that give the same parameters share one map (it is never changed once read).
+ */
+function splitParams(
+  args: readonly string[],
+  pool: WordPool,
+): { positional: string[]; params: ReadonlyMap<string, string> } {
+  const at = args.findIndex((a) => a.includes('='));
+  if (at < 0) return { positional: [...args], params: NO_PARAMS };
+  const given = args.slice(at);
+  return { positional: args.slice(0, at), params: pool.paramMap(given.join(' '), () => paramMap(given)) };
 }
 
-function readMos(name: string, args: readonly string[], line: number): MosElement {
-  const { positional, params } = splitParams(args);
+function paramMap(given: readonly string[]): ReadonlyMap<string, string> {
+  const params = new Map<string, string>();
+  for (const a of given) {
+    const eq = a.indexOf('=');
+    if (eq < 0) throw new ElementError(`"${a}" follows a parameter; nets and the model come first`);
+    const key = a.slice(0, eq).toLowerCase();
+    const value = a.slice(eq + 1);
+    if (/^['"{]/.test(value))
+      throw new ElementError(`parameter ${key}=${value}: expressions are not supported, give a number`);
+    params.set(key, value);
+  }
+  return params;
+}
+
+/** Built field by field, never by spreading: V8 gives every spread copy a hidden class of its own. */
+function readMos(name: string, args: readonly string[], line: number, pool: WordPool): MosElement {
+  const { positional, params } = splitParams(args, pool);
   if (positional.length !== 4 && positional.length !== 5) {
     throw new ElementError(`${name}: a MOS line needs drain, gate, source, bulk and a model name`);
   }
   const model = positional[positional.length - 1] as string;
   const [drain = '', gate = '', source = '', bulk] = positional;
-  const base = { kind: 'mos' as const, name, line, drain, gate, source, model, params };
-  return positional.length === 5 && bulk !== undefined ? { ...base, bulk } : base;
+  return positional.length === 5 && bulk !== undefined
+    ? { kind: 'mos', name, line, drain, gate, source, model, params, bulk }
+    : { kind: 'mos', name, line, drain, gate, source, model, params };
 }
 
 function readPassive(
@@ -153,8 +197,9 @@ function readPassive(
   name: string,
   args: readonly string[],
   line: number,
+  pool: WordPool,
 ): PassiveElement | ShortElement {
-  const { positional, params } = splitParams(args);
+  const { positional, params } = splitParams(args, pool);
   const [a, b, valueText = params.get(kind === 'resistor' ? 'r' : 'c')] = positional;
   const unit = kind === 'resistor' ? 'resistance in ohms' : 'capacitance in farads';
   if (a === undefined || b === undefined || valueText === undefined) {
@@ -183,8 +228,8 @@ export function inRange(name: string, field: RangedField, text: string, value: n
   throw error;
 }
 
-function readDiode(name: string, args: readonly string[], line: number): DiodeElement {
-  const { positional } = splitParams(args);
+function readDiode(name: string, args: readonly string[], line: number, pool: WordPool): DiodeElement {
+  const { positional } = splitParams(args, pool);
   const [anode, cathode] = positional;
   if (anode === undefined || cathode === undefined)
     throw new ElementError(`${name}: needs an anode and a cathode net`);
@@ -209,9 +254,12 @@ function readSource(name: string, args: readonly string[], text: string, line: n
   return { kind: 'source', name, line, plus, minus, volts };
 }
 
-function readInstance(name: string, args: readonly string[], line: number): InstanceElement {
+function readInstance(name: string, args: readonly string[], line: number, pool: WordPool): InstanceElement {
   // CDL writes a lone `/` between the nets and the subcircuit name: `X1 A Y / inv`.
-  const { positional, params } = splitParams(args.filter((a) => a !== '/'));
+  const { positional, params } = splitParams(
+    args.filter((a) => a !== '/'),
+    pool,
+  );
   const subckt = positional[positional.length - 1];
   if (subckt === undefined) throw new ElementError(`${name}: an X line needs its nets and a subcircuit name`);
   return {

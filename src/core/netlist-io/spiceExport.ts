@@ -11,7 +11,7 @@ import { CAUTION } from '../caution.ts';
 import type { Device, MosDevice, Netlist } from '../model/netlist.ts';
 import type { Technology } from '../model/technology.ts';
 import { isPrintable, printable, quoted } from '../text/printable.ts';
-import { modelCards } from './spiceModelExport.ts';
+import { modelCards, type ExportCards } from './spiceModelExport.ts';
 
 export { NMOS_MODEL, PMOS_MODEL } from './spiceModelExport.ts';
 import { formatSpiceNumber } from '../units/spiceNumber.ts';
@@ -35,35 +35,74 @@ export interface SpiceExportOptions {
 }
 
 export function exportSpice(netlist: Netlist, tech: Technology, options: SpiceExportOptions = {}): string {
-  const expectations = Object.entries(options.expectations ?? {});
-  const names = spiceNames(
-    netlist,
-    expectations.map(([output]) => output),
-  );
-  const net = names.net;
-  // Rails last and in their own order (the importer numbers rails in order of first appearance).
-  const railNets = new Set(netlist.rails.map((r) => r.net));
-  const pins = [...netlist.inputs, ...netlist.outputs].filter((n) => !railNets.has(n));
-  const ports = [...new Set([...pins, ...railNets])];
+  const expectations = options.expectations ?? {};
+  const names = spiceNames(netlist, { extraNets: Object.keys(expectations) });
   const cards = modelCards(netlist, tech, spiceIdentifier);
   const lines = [
     `* ${names.cell}: exported by Railwise. ${CAUTION}`,
+    ...modelLines(tech, cards, netlist.devices),
+    ...subcktLines({
+      netlist,
+      expectations,
+      names,
+      modelOf: cards.modelOf,
+      ...(options.sheet === undefined ? {} : { sheet: options.sheet }),
+    }),
+    '.end',
+  ];
+  return `${lines.join('\n')}\n`;
+}
+
+/** Where the models come from, the cards, and the diode's card when a device needs it. */
+export function modelLines(tech: Technology, cards: ExportCards, devices: readonly Device[]): string[] {
+  return [
     `* Level-1 models from: ${printable(tech.source)}`,
     ...cards.lines,
-    ...(netlist.devices.some((d) => d.kind === 'diode') ? [`.model ${DIODE_MODEL} d`] : []),
-    `.subckt ${names.cell} ${ports.map(net).join(' ')}`.trimEnd(),
+    ...(devices.some((d) => d.kind === 'diode') ? [`.model ${DIODE_MODEL} d`] : []),
+  ];
+}
+
+/**
+ * The ports of a cell's `.subckt` line, in order: pins, then rails in their own order (the
+ * importer numbers rails in order of first appearance).
+ */
+export function subcktPorts(netlist: Netlist): string[] {
+  const railNets = new Set(netlist.rails.map((r) => r.net));
+  const pins = [...netlist.inputs, ...netlist.outputs].filter((n) => !railNets.has(n));
+  return [...new Set([...pins, ...railNets])];
+}
+
+/** What one `.subckt` is written from. */
+export interface SubcktSource {
+  readonly netlist: Netlist;
+  readonly expectations: Readonly<Record<string, string>>;
+  readonly names: SpiceNames;
+  readonly modelOf: (d: MosDevice) => string;
+  /** Lines after the devices (a design's instances) and the directives they need. */
+  readonly instances?: { readonly lines: readonly string[]; readonly directives: readonly string[] };
+  /** The drawing, carried in comment lines of our own (placementComments.ts). */
+  readonly sheet?: Sheet;
+}
+
+/** One cell as `.subckt` … `.ends`: its directives, its devices, then any instances. */
+export function subcktLines(source: SubcktSource): string[] {
+  const { netlist, names } = source;
+  const net = names.net;
+  const expectations = Object.entries(source.expectations);
+  return [
+    `.subckt ${names.cell} ${subcktPorts(netlist).map(net).join(' ')}`.trimEnd(),
     ...names.directives,
     `* railwise: inputs ${netlist.inputs.map(net).join(' ')}`.trimEnd(),
     `* railwise: outputs ${netlist.outputs.map(net).join(' ')}`.trimEnd(),
     ...railLines(netlist, net),
     ...impliedBulkLines(netlist, names),
+    ...(source.instances?.directives ?? []),
     ...expectations.map(([out, text]) => `* railwise: expect ${net(out)} = ${expressionText(text)}`),
-    ...(options.sheet === undefined ? [] : placementLines(options.sheet)),
-    ...netlist.devices.map((d, i) => deviceLine(d, names.device(i), netlist, net, cards.modelOf)),
+    ...(source.sheet === undefined ? [] : placementLines(source.sheet)),
+    ...netlist.devices.map((d, i) => deviceLine(d, names.device(i), netlist, net, source.modelOf)),
+    ...(source.instances?.lines ?? []),
     `.ends ${names.cell}`,
-    '.end',
   ];
-  return `${lines.join('\n')}\n`;
 }
 
 /** An expression as written when it reads back the same; otherwise as a JSON string. */

@@ -9,13 +9,15 @@
 import type { Rail } from '../model/netlist.ts';
 import type { DeviceModel } from '../model/technology.ts';
 import { parseSpice, type Body, type SpiceFile, type Subckt } from './spiceParse.ts';
-import { buildCell, type CellContext, type CellSpec, type ImportedCell } from './spiceCells.ts';
+import { buildCell, cardsNamed, type CellContext, type CellSpec, type ImportedCell } from './spiceCells.ts';
 import type { FlatSource } from './spiceCellBuilder.ts';
-import { SpiceImportError } from './spiceErrors.ts';
+import { SpiceImportError, UnflattenedCellError } from './spiceErrors.ts';
+import type { Cell } from '../document/design.ts';
 import { Hierarchy } from './spiceHierarchy.ts';
 import { resolveScale } from './spiceSizes.ts';
 import { parseStandIns, type StandIn } from './deviceNames.ts';
 import { technologyCards } from './spiceModels.ts';
+import { restoredCellNames } from './spiceRestore.ts';
 
 export { SpiceImportError } from './spiceErrors.ts';
 export type { ImportedCell } from './spiceCells.ts';
@@ -37,6 +39,8 @@ export interface SpiceImportOptions {
 export interface FailedCell {
   readonly name: string;
   readonly error: SpiceImportError;
+  /** The cells read, when only the checks' flattening failed. */
+  readonly cells?: readonly Cell[];
 }
 
 export interface SpiceImport {
@@ -54,6 +58,8 @@ export interface SpiceImport {
   readonly available: readonly string[];
   /** Level-1 values of the cards `* railwise: technology` names: the technology's own, per type. */
   readonly technologyCards: readonly DeviceModel[];
+  /** Level-1 values of every card a device of a cell read names, by card name. */
+  readonly models: Readonly<Record<string, DeviceModel>>;
 }
 
 /** Net names that are rails in every file, compared lower-case with a trailing `!` dropped. */
@@ -67,11 +73,19 @@ export function importSpice(text: string, fileName: string, options: SpiceImport
   const flatTop = file.top.elements.some((e) => e.kind !== 'source');
   const available = [...(flatTop ? [baseName(fileName)] : []), ...file.subckts.map((s) => s.name)];
   const result = (isLibrary: boolean, specs: readonly CellSpec[]): SpiceImport => {
-    const built = isLibrary
-      ? buildEach(specs, ctx)
-      : { cells: specs.map((s) => buildCell(s, ctx)), failed: [] };
+    const built = buildEach(specs, ctx, isLibrary);
     const order = specs.map((s) => s.name);
-    return { file: fileName, isLibrary, ...built, notes, order, available, technologyCards: ctx.technology };
+    const models = cardsNamed(ctx);
+    return {
+      file: fileName,
+      isLibrary,
+      ...built,
+      notes,
+      order,
+      available,
+      technologyCards: ctx.technology,
+      models,
+    };
   };
   const shared = topLevelSources(file.top);
   const used = instantiatedNames(file);
@@ -178,6 +192,7 @@ const FILE_DIRECTIVES = new Set(['supply', 'ground', 'treat-as', 'technology']);
 function buildEach(
   specs: readonly CellSpec[],
   ctx: CellContext,
+  isLibrary: boolean,
 ): { cells: ImportedCell[]; failed: FailedCell[] } {
   const cells: ImportedCell[] = [];
   const failed: FailedCell[] = [];
@@ -185,8 +200,11 @@ function buildEach(
     try {
       cells.push(buildCell(spec, ctx));
     } catch (e) {
-      if (!(e instanceof SpiceImportError)) throw e;
-      failed.push({ name: spec.name, error: e });
+      // In a single-cell file a line that cannot be read is the file's problem; a hierarchy that
+      // cannot be flattened is the cell's (its cells are still a design).
+      if (!(e instanceof SpiceImportError) || (!isLibrary && !(e instanceof UnflattenedCellError))) throw e;
+      const placed = e instanceof UnflattenedCellError ? { cells: e.cells } : {};
+      failed.push({ name: spec.name, error: e, ...placed });
     }
   }
   return { cells, failed };
@@ -237,8 +255,22 @@ function cellContext(
   const hierarchy = new Hierarchy(file, fileName);
   const cards = technologyCards(file, fileName, directives);
   notes.push(...cards.notes);
-  const context = { file, fileName, railRole, isGlobal, scale, standIns, hierarchy };
-  return { ...context, technologyCards: cards.names, technology: cards.models };
+  return {
+    file,
+    fileName,
+    railRole,
+    isGlobal,
+    scale,
+    standIns,
+    hierarchy,
+    technologyCards: cards.names,
+    technology: cards.models,
+    cellNames: restoredCellNames(file.subckts, notes),
+    globalSpelling: new Map(),
+    bodies: new Map(),
+    finished: new Map(),
+    uses: new Map(),
+  };
 }
 
 function topLevelSources(top: Body): FlatSource[] {

@@ -27,31 +27,57 @@ interface Pending {
   readonly parts: string[];
 }
 
-export function logicalLines(text: string): LogicalLine[] {
-  const out: Pending[] = [];
+/**
+ * The logical lines one at a time, so a caller that reads them in order never holds them all. A
+ * statement, and the directive lines after it, are yielded when the next statement starts: a `+`
+ * line may still continue it until then.
+ */
+export function* logicalLines(text: string): Generator<LogicalLine> {
+  let queued: Pending[] = [];
   let lastStatement: Pending | undefined;
+  let line = 0;
   // A byte-order mark, as some editors on Windows write, is not part of the first line.
-  const physical = text.replace(/^\uFEFF/, '').split(/\r\n|\r|\n/);
-  for (let i = 0; i < physical.length; i++) {
-    const trimmed = (physical[i] as string).trim();
-    const special = specialComment(trimmed, i + 1);
+  for (const raw of physicalLines(text.replace(/^\uFEFF/, ''))) {
+    line++;
+    const trimmed = raw.trim();
+    const special = specialComment(trimmed, line);
     if (special !== null) {
-      out.push(special);
+      queued.push(special);
       continue;
     }
     if (trimmed === '' || trimmed.startsWith('*')) continue;
     const body = trimmed.replace(INLINE_COMMENT, '').trim();
     if (body.startsWith('+')) {
-      if (lastStatement === undefined) throw new ContinuationError(i + 1);
+      if (lastStatement === undefined) throw new ContinuationError(line);
       const rest = body.slice(1).trim();
       if (rest !== '') lastStatement.parts.push(rest);
       continue;
     }
     if (body === '') continue;
-    lastStatement = { line: i + 1, kind: 'statement', parts: [body] };
-    out.push(lastStatement);
+    yield* queued.map(finished);
+    lastStatement = { line, kind: 'statement', parts: [body] };
+    queued = [lastStatement];
   }
-  return out.map((p) => ({ line: p.line, kind: p.kind, text: p.parts.join(' ') }));
+  yield* queued.map(finished);
+}
+
+function finished(p: Pending): LogicalLine {
+  return {
+    line: p.line,
+    kind: p.kind,
+    text: p.parts.length === 1 ? (p.parts[0] as string) : p.parts.join(' '),
+  };
+}
+
+/** The physical lines of a text (`\r\n`, `\r` or `\n` ends one), without an array of them all. */
+function* physicalLines(text: string): Generator<string> {
+  const end = /\r\n|\r|\n/g;
+  let from = 0;
+  for (let m = end.exec(text); m !== null; m = end.exec(text)) {
+    yield text.slice(from, m.index);
+    from = end.lastIndex;
+  }
+  yield text.slice(from);
 }
 
 function specialComment(trimmed: string, line: number): Pending | null {

@@ -4,7 +4,7 @@
  * library never stops the rest); problems with the file's structure throw.
  */
 import { ContinuationError, logicalLines, tokens, type LogicalLine } from './spiceLines.ts';
-import { ElementError, readElement, type Element } from './spiceElements.ts';
+import { ElementError, readElement, WordPool, type Element } from './spiceElements.ts';
 import { SpiceImportError } from './spiceErrors.ts';
 import { readScale, type Scale } from './spiceScale.ts';
 
@@ -86,6 +86,7 @@ interface ParseState {
   /** Line of the `.end` command, once seen. */
   endLine: number | null;
   inControl: boolean;
+  readonly pool: WordPool;
 }
 
 export function parseSpice(text: string, fileName: string): SpiceFile {
@@ -97,11 +98,19 @@ export function parseSpice(text: string, fileName: string): SpiceFile {
     globals: new Set(),
     notes: [],
   };
-  const state: ParseState = { file, fileName, current: null, endLine: null, inControl: false };
+  const state: ParseState = {
+    file,
+    fileName,
+    current: null,
+    endLine: null,
+    inControl: false,
+    pool: new WordPool(),
+  };
   const lines = readLines(text, fileName);
-  for (const [index, l] of lines.entries()) {
+  for (let index = 0, next = lines.next(); !next.done; index++, next = lines.next()) {
+    const l = next.value;
     if (state.endLine !== null) {
-      file.notes.push(afterEndNote(state.endLine, lines.slice(index)));
+      file.notes.push(afterEndNote(state.endLine, [l, ...lines]));
       break;
     }
     if (l.kind === 'directive') addDirective(state, l);
@@ -144,9 +153,10 @@ function setScale(state: ParseState, line: number, text: string, form: string): 
   state.file.scale = scale;
 }
 
-function readLines(text: string, fileName: string): LogicalLine[] {
+/** The logical lines, read as they are used; a stray `+` line is the file's error, with its line. */
+function* readLines(text: string, fileName: string): Generator<LogicalLine> {
   try {
-    return logicalLines(text);
+    yield* logicalLines(text);
   } catch (e) {
     if (e instanceof ContinuationError) throw new SpiceImportError(fileName, e.line, e.message);
     throw e;
@@ -176,7 +186,7 @@ function addDirective(state: ParseState, l: LogicalLine): void {
 function addElement(state: ParseState, l: LogicalLine): void {
   const body = state.current ?? state.file.top;
   try {
-    body.elements.push(readElement(l.text, l.line));
+    body.elements.push(readElement(l.text, l.line, state.pool));
   } catch (e) {
     if (!(e instanceof ElementError)) throw e;
     const error = new SpiceImportError(state.fileName, l.line, e.message);

@@ -5,12 +5,14 @@
  * then the first written. When both ends must keep their names (two ports, a port and a rail, two
  * rails) the link is kept as a resistor of the smallest resistance in range, so nothing is renamed.
  */
-import type { Device } from '../model/netlist.ts';
+import type { Instance } from '../model/design.ts';
+import { mapDeviceNets, type Device } from '../model/netlist.ts';
 import type { CellBuilder, FlatSource } from './spiceCellBuilder.ts';
 import { VALUE_RANGES } from './valueRanges.ts';
 
 interface Joined {
   readonly devices: Device[];
+  readonly instances: Instance[];
   readonly sources: FlatSource[];
   readonly nets: string[];
   readonly notes: string[];
@@ -18,7 +20,8 @@ interface Joined {
 
 export function joinShorts(b: CellBuilder, ports: ReadonlySet<string>): Joined {
   const nets = b.nets;
-  if (b.shorts.length === 0) return { devices: b.devices, sources: b.sources, nets, notes: [] };
+  if (b.shorts.length === 0)
+    return { devices: b.devices, instances: b.instances, sources: b.sources, nets, notes: [] };
   const rank = (net: string): number => {
     const lower = net.toLowerCase();
     return b.ctx.isGlobal(lower) ? 2 : ports.has(lower) ? 1 : 0;
@@ -54,24 +57,13 @@ export function joinShorts(b: CellBuilder, ports: ReadonlySet<string>): Joined {
       : []),
   ];
   return {
-    devices: devices.map((d) => renamed(d, find)),
+    devices: devices.map((d) => mapDeviceNets(d, find)),
+    instances: b.instances.map((i) => ({
+      ...i,
+      pins: Object.fromEntries(Object.entries(i.pins).map(([pin, net]) => [pin, find(net)])),
+    })),
     sources: b.sources.map((s) => ({ ...s, plus: find(s.plus), minus: find(s.minus) })),
     nets: nets.filter((n) => find(n) === n),
     notes,
   };
-}
-
-function renamed(d: Device, find: (net: string) => string): Device {
-  switch (d.kind) {
-    case 'nmos':
-    case 'pmos': {
-      const base = { ...d, gate: find(d.gate), drain: find(d.drain), source: find(d.source) };
-      return d.bulk === undefined ? base : { ...base, bulk: find(d.bulk) };
-    }
-    case 'resistor':
-    case 'capacitor':
-      return { ...d, a: find(d.a), b: find(d.b) };
-    case 'diode':
-      return { ...d, anode: find(d.anode), cathode: find(d.cathode) };
-  }
 }

@@ -19,11 +19,14 @@ export const VALUE_RANGES: Readonly<Record<RangedField, Range>> = {
   farads: RANGES.farads,
   volts: RANGES.volts,
   scale: { min: 1e-12, max: 1, words: '1e-12 to 1' },
-  /** Level-1 model card values (`spiceModels.ts`): threshold, k', γ, 2φF, λ. */
-  vto: { min: -10, max: 10, words: '−10 to 10 V' },
-  kp: { min: 1e-7, max: 1e-2, words: '0.1 µA/V² to 10 mA/V² (write 110u for 110 µA/V²)' },
+  /**
+   * Level-1 model card values (`spiceModels.ts`): threshold, k', γ, 2φF, λ, in the design file's
+   * ranges, so a design's technology always exports to cards that read back.
+   */
+  vto: RANGES.threshold,
+  kp: { ...RANGES.transconductance, words: `${RANGES.transconductance.words} (write 110u for 110 µA/V²)` },
   gamma: RANGES.bodyEffect,
-  phi: { min: 0.05, max: 5, words: '0.05 to 5 V' },
+  phi: RANGES.surfacePotential,
   lambda: RANGES.channelModulation,
 };
 

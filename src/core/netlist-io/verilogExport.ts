@@ -13,7 +13,7 @@ import { CAUTION } from '../caution.ts';
 import type { Device, MosDevice, Netlist } from '../model/netlist.ts';
 import { channelNets, netNames } from '../model/netlist.ts';
 import { printable } from '../text/printable.ts';
-import { verilogNames } from './verilogNames.ts';
+import { verilogNames, type VerilogNames } from './verilogNames.ts';
 
 interface Hops {
   readonly ground: ReadonlyMap<string, number>;
@@ -22,16 +22,33 @@ interface Hops {
 }
 
 export function exportVerilog(netlist: Netlist): string {
-  const hops = channelHops(netlist);
-  const names = verilogNames(netlist);
-  const id = names.net;
-  const pins = new Set([...netlist.inputs, ...netlist.outputs]);
-  const rails = new Set(netlist.rails.map((r) => r.net));
-  const internal = netNames(netlist).filter((n) => !pins.has(n) && !rails.has(n));
-  const outputs = netlist.outputs.filter((n) => !netlist.inputs.includes(n));
   const lines = [
     `// ${printable(netlist.name)}: switch-level model exported by Railwise (IEEE Std 1364-2005 clause 7 primitives).`,
     `// ${CAUTION}`,
+    ...moduleLines(netlist),
+  ];
+  return `${lines.join('\n')}\n`;
+}
+
+/**
+ * One cell as a module: renamed names, ports (inputs, then outputs), rails as supply nets, wires,
+ * primitives, then any further lines (a design's instances, written with the same `names`).
+ */
+export function moduleLines(
+  netlist: Netlist,
+  names: VerilogNames = verilogNames(netlist),
+  more: readonly string[] = [],
+  extraNets: readonly string[] = [],
+): string[] {
+  const hops = channelHops(netlist);
+  const id = names.net;
+  const pins = new Set([...netlist.inputs, ...netlist.outputs]);
+  const rails = new Set(netlist.rails.map((r) => r.net));
+  const internal = [...new Set([...netNames(netlist), ...extraNets])].filter(
+    (n) => !pins.has(n) && !rails.has(n),
+  );
+  const outputs = netlist.outputs.filter((n) => !netlist.inputs.includes(n));
+  return [
     ...names.comments,
     `module ${names.module} (${[...netlist.inputs, ...outputs].map(id).join(', ')});`,
     ...declaration('input', netlist.inputs.map(id)),
@@ -42,9 +59,9 @@ export function exportVerilog(netlist: Netlist): string {
     ),
     ...declaration('wire', internal.map(id)),
     ...netlist.devices.map((d, i) => `  ${instance(d, names.instance(i), id, hops)}`),
+    ...more.map((l) => `  ${l}`),
     'endmodule',
   ];
-  return `${lines.join('\n')}\n`;
 }
 
 function declaration(keyword: string, identifiers: readonly string[]): string[] {

@@ -53,35 +53,57 @@ export interface VerilogNames {
   readonly net: (name: string) => string;
   /** Instance name of the device at this index. */
   readonly instance: (index: number) => string;
+  /** Instance name of the placed cell at this index (`VerilogNameOptions.placements`). */
+  readonly placement: (index: number) => string;
   /** `// name …` lines for every name that changed. */
   readonly comments: readonly string[];
 }
 
-export function verilogNames(netlist: Netlist): VerilogNames {
-  const nets = netNames(netlist);
+export interface VerilogNameOptions {
+  /** Nets besides the netlist's own (those only the instances of other modules wire). */
+  readonly extraNets?: readonly string[];
+  /** Names of the instances of other modules, in the name space of nets and primitives. */
+  readonly placements?: readonly string[];
+  /** The module's identifier, when the caller gives every cell of a design one of its own. */
+  readonly module?: string;
+}
+
+export function verilogNames(netlist: Netlist, options: VerilogNameOptions = {}): VerilogNames {
+  const nets = [...new Set([...netNames(netlist), ...(options.extraNets ?? [])])];
   const exportedNets = exportNames(nets, RULES);
   const netOf = identifierMap(nets, exportedNets);
   // Capacitors and diodes are written as comments: only primitives take instance names.
   const primitives = netlist.devices.flatMap((d, i) =>
     d.kind === 'capacitor' || d.kind === 'diode' ? [] : [i],
   );
-  const devices = exportNames(
-    primitives.map((i) => netlist.devices[i]?.name ?? ''),
+  const placements = options.placements ?? [];
+  const instances = exportNames(
+    [...primitives.map((i) => netlist.devices[i]?.name ?? ''), ...placements],
     RULES,
     exportedNets.identifiers.map(RULES.sameAs),
   );
-  const instanceOf = new Map(primitives.map((i, k) => [i, devices.identifiers[k] as string]));
-  const module = exportNames([netlist.name || 'cell'], RULES);
+  const instanceOf = new Map(primitives.map((i, k) => [i, instances.identifiers[k] as string]));
+  const module = options.module ?? (verilogModuleNames([netlist.name])[0] as string);
+  const moduleRenamed = module === (netlist.name || 'cell') ? [] : [[netlist.name, module] as const];
   const line = (what: string, [original, id]: readonly [string, string]): string =>
     `// name ${what} ${id} = ${quoted(original)}`;
   return {
-    module: module.identifiers[0] as string,
+    module,
     net: (name) => netOf.get(name) ?? RULES.legal(name),
     instance: (index) => instanceOf.get(index) ?? '',
+    placement: (index) => instances.identifiers[primitives.length + index] as string,
     comments: [
-      ...module.renamed.map((r) => line('module', r)),
+      ...moduleRenamed.map((r) => line('module', r)),
       ...exportedNets.renamed.map((r) => line('net', r)),
-      ...devices.renamed.map((r) => line('instance', r)),
+      ...instances.renamed.map((r) => line('instance', r)),
     ],
   };
+}
+
+/** Module identifiers for the cells of a design, distinct under the rules of clause 3.7. */
+export function verilogModuleNames(names: readonly string[]): readonly string[] {
+  return exportNames(
+    names.map((n) => n || 'cell'),
+    RULES,
+  ).identifiers;
 }

@@ -5,7 +5,13 @@
  * vectors than the check's (random activity beside a sequence check, or the other way round) takes
  * a pass of its own on the same compiled netlist.
  */
-import { checkSequence, checkSweep, refusalBeforeCheck, type CheckOptions } from '../analysis/check.ts';
+import {
+  checkSequence,
+  checkSweep,
+  DEFAULT_MAX_INPUTS,
+  refusalBeforeCheck,
+  type CheckOptions,
+} from '../analysis/check.ts';
 import { sequencePass, sweepPass } from '../analysis/pass.ts';
 import type { CheckReport } from '../analysis/report.ts';
 import { compile } from '../compile/compile.ts';
@@ -16,6 +22,9 @@ import { Simulator } from '../solver/simulator.ts';
 import { checkPowerPass } from './powerReport.ts';
 import { PowerTally, type PowerCounts } from './tally.ts';
 import type { ActivitySource } from './types.ts';
+
+/** Inputs of a random-activity power pass at most: 2^20 vectors, each listed in the power report. */
+export const MAX_POWER_INPUTS = 20;
 
 export interface PowerRequest {
   readonly activity: ActivitySource;
@@ -42,7 +51,7 @@ export function analyseCell(netlist: Netlist, options: CellAnalysisOptions = {})
 /**
  * Everything that can refuse the analysis (the power settings, the expected functions, the input
  * limit) is checked here, before a vector is solved, so a caller that writes rows as they come
- * (`onRow`) never has to abandon a report it has begun.
+ * (`onBlock`) never has to abandon a report it has begun.
  */
 export function prepareAnalysis(
   netlist: Netlist,
@@ -50,11 +59,15 @@ export function prepareAnalysis(
 ): { readonly run: () => CellAnalysis } {
   const { steps, power } = options;
   const shared = power !== undefined && sharesPass(power, steps);
-  // A shared sweep is bounded by the check's own limit, which it reports in its own words.
+  // The power report lists every vector's static and leakage power, so a random-activity pass takes
+  // at most MAX_POWER_INPUTS whatever the check's own limit (--max-inputs). A shared sweep past the
+  // check's limit is refused by the check, in its own words.
+  const checkLimit = options.maxInputs ?? DEFAULT_MAX_INPUTS;
+  const withinCheck = netlist.inputs.length <= checkLimit;
   if (power !== undefined)
     checkPowerPass(netlist, power.activity, {
       sequence: power.sequence ?? steps ?? [],
-      ...(shared ? { maxInputs: Infinity } : {}),
+      maxInputs: shared && !withinCheck ? Infinity : Math.min(checkLimit, MAX_POWER_INPUTS),
     });
   refusalBeforeCheck(netlist, options, steps === undefined);
   const run = (): CellAnalysis => {

@@ -64,14 +64,18 @@ function assignColumns(slots: Slot[]): void {
       for (const n of channelNets(p.device) ?? []) (before.get(n) ?? before.set(n, []).get(n)!).push(i);
     });
     const used = new Set<number>();
+    // The lowest column still free: where a device that stacks on nothing goes. Columns are only
+    // ever taken, so it only moves right, and a wide row of such devices stays linear.
+    let lowestFree = 0;
     for (const slot of byRow.get(row)!) {
       let first = Infinity;
       for (const n of channelNets(slot.device) ?? [])
         for (const i of before.get(n) ?? []) if (i < first && !used.has(prev[i]!.column)) first = i;
-      let col = first === Infinity ? 0 : prev[first]!.column;
+      let col = first === Infinity ? lowestFree : prev[first]!.column;
       while (used.has(col)) col++;
       slot.column = col;
       used.add(col);
+      while (used.has(lowestFree)) lowestFree++;
     }
   }
 }
@@ -141,14 +145,26 @@ function placeChannelDevices(
   return slots.length === 0 ? 0 : Math.max(...slots.map((s) => s.column)) + 1;
 }
 
+/** The channel pin a kind draws on top, found once per kind (a thousand devices share a few kinds). */
+const topPins = new Map<PartKind, string>();
+
+function topPinOf(kind: PartKind): string {
+  let pin = topPins.get(kind);
+  if (pin === undefined) {
+    pin = partSpec(kind)
+      .pins.filter((p) => p.name !== 'gate')
+      .sort((a, b) => a.y - b.y)[0]!.name;
+    topPins.set(kind, pin);
+  }
+  return pin;
+}
+
 /** Vertical flip when the terminal drawn at the bottom is the one nearer the rail above (or vice versa). */
 function flipFor(slot: Slot, dist: ReadonlyMap<string, number>): boolean {
   const nets = channelNets(slot.device);
   const kind = partKindForDevice(slot.device);
   if (!nets || kind === null) return false;
-  const topPin = partSpec(kind)
-    .pins.filter((p) => p.name !== 'gate')
-    .sort((a, b) => a.y - b.y)[0]!.name;
+  const topPin = topPinOf(kind);
   const [top, bottom] = topPin === 'drain' || topPin === 'a' ? nets : [nets[1], nets[0]];
   const dt = dist.get(top) ?? Infinity;
   const db = dist.get(bottom) ?? Infinity;
@@ -205,9 +221,11 @@ class SheetBuilder {
 
   /** Wires stacked terminals in one column; rails and labels on every other pin. */
   connectPins(supplies: ReadonlySet<string>, grounds: ReadonlySet<string>): void {
-    const pins = this.deviceParts.flatMap(({ part, device }) =>
-      pinPositions(part).map((pin) => ({ part, pin, net: terminalNet(device, pin.pin) })),
-    );
+    const pins = this.deviceParts.flatMap(({ part, device }) => {
+      const terminals = deviceTerminals(device);
+      const netOf = (pin: string): string => terminals.find((t) => t.terminal === pin)?.net ?? '';
+      return pinPositions(part).map((pin) => ({ part, pin, net: netOf(pin.pin) }));
+    });
     const wired = new Set<string>();
     // Channel pins per column, top to bottom: each pin's neighbour below is the next one.
     const columns = new Map<number, typeof pins>();
@@ -276,25 +294,31 @@ function key(p: { part: SheetPart; pin: { pin: string } }): string {
   return `${p.part.id}.${p.pin.pin}`;
 }
 
-function terminalNet(d: Device, pin: string): string {
-  return deviceTerminals(d).find((t) => t.terminal === pin)?.net ?? '';
+/** Unit directions pointing away from a part at each pin, in local units, found once per kind and pin. */
+const localDirections = new Map<string, Point>();
+
+function localDirection(kind: PartKind, pin: string): Point {
+  const key = `${kind}.${pin}`;
+  let d = localDirections.get(key);
+  if (d === undefined) {
+    const p = partSpec(kind).pins.find((q) => q.name === pin)!;
+    d = Math.abs(p.x) >= Math.abs(p.y) ? { x: Math.sign(p.x), y: 0 } : { x: 0, y: Math.sign(p.y) };
+    localDirections.set(key, d);
+  }
+  return d;
 }
 
-/** Unit direction pointing away from the part at a pin, in local units. */
-function localDirection(kind: PartKind, pin: string): Point {
-  const p = partSpec(kind).pins.find((q) => q.name === pin)!;
-  return Math.abs(p.x) >= Math.abs(p.y) ? { x: Math.sign(p.x), y: 0 } : { x: 0, y: Math.sign(p.y) };
-}
+/** Directions in the order of quarter turns: up, right, down, left. */
+const TURN_ORDER: readonly Point[] = [
+  { x: 0, y: -1 },
+  { x: 1, y: 0 },
+  { x: 0, y: 1 },
+  { x: -1, y: 0 },
+];
+const NATURAL_TURN = { up: 0, right: 1, down: 2 } as const;
 
 /** The rotation that turns a symbol drawn towards `natural` so it points along `dir`. */
 function railRotation(dir: Point, natural: 'up' | 'down' | 'right'): Rotation {
-  const order: Point[] = [
-    { x: 0, y: -1 },
-    { x: 1, y: 0 },
-    { x: 0, y: 1 },
-    { x: -1, y: 0 },
-  ];
-  const start = { up: 0, right: 1, down: 2 }[natural];
-  const target = order.findIndex((d) => d.x === dir.x && d.y === dir.y);
-  return ((((target - start) % 4) + 4) % 4) as Rotation;
+  const target = TURN_ORDER.findIndex((d) => d.x === dir.x && d.y === dir.y);
+  return ((((target - NATURAL_TURN[natural]) % 4) + 4) % 4) as Rotation;
 }

@@ -1,11 +1,11 @@
 /**
  * Copy and paste of sheet items. The clipboard is plain data (so it can sit in the store or the
- * system clipboard); pasting gives fresh ids and renumbers devices so names stay unique. Pins,
+ * system clipboard); pasting gives fresh ids and renumbers devices and instances so names stay unique. Pins,
  * rails and labels keep their names: a pasted label still joins its net, as the designer meant.
  */
 import type { Sheet, SheetPart, SheetWire } from './types.ts';
 import type { ItemIds } from './selection.ts';
-import { isDevicePart } from './parts/index.ts';
+import { isNamedOnce } from './parts/index.ts';
 import { nextPartId, nextPartName, nextWireId } from './naming.ts';
 
 export interface Clip {
@@ -34,7 +34,8 @@ export function pasteClip(
   const wireIds: string[] = [];
   for (const part of clip.parts) {
     const id = nextPartId(next);
-    const name = isDevicePart(part.kind) ? nextPartName(next, part.kind) : part.name;
+    // Devices and instances are named one each; a pasted copy takes the next free name.
+    const name = isNamedOnce(part.kind) ? nextPartName(next, part.kind) : part.name;
     next = { ...next, parts: [...next.parts, { ...part, id, name, x: part.x + dx, y: part.y + dy }] };
     partIds.push(id);
   }

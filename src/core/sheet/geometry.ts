@@ -3,7 +3,7 @@
  * convention); a part's symbol is defined at rotation 0, unmirrored, around its origin.
  */
 import type { Point, Rotation, SheetPart } from './types.ts';
-import { partSpec } from './parts/index.ts';
+import { partShape } from './parts/index.ts';
 import { toWorld } from './placement.ts';
 
 export { toWorld, turnDirection, type Placement } from './placement.ts';
@@ -23,20 +23,20 @@ export interface PlacedPin {
 }
 
 export function pinPositions(part: SheetPart): PlacedPin[] {
-  return partSpec(part.kind).pins.map((pin) => {
+  return partShape(part).pins.map((pin) => {
     const w = toWorld(part, pin);
     return { partId: part.id, pin: pin.name, x: w.x, y: w.y };
   });
 }
 
 export function pinPosition(part: SheetPart, pinName: string): Point | null {
-  const pin = partSpec(part.kind).pins.find((p) => p.name === pinName);
+  const pin = partShape(part).pins.find((p) => p.name === pinName);
   return pin ? toWorld(part, pin) : null;
 }
 
 /** The world box of a part's body (its local box transformed). */
 export function partBounds(part: SheetPart): Rect {
-  const b = partSpec(part.kind).box;
+  const b = partShape(part).box;
   const a = toWorld(part, { x: b.x0, y: b.y0 });
   const c = toWorld(part, { x: b.x1, y: b.y1 });
   return normalizeRect(a, c);

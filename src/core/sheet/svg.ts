@@ -3,7 +3,7 @@
  * editor draws, wires, junction dots and upright text. Neutral ink only: levels are not exported.
  */
 import type { Sheet, SheetPart } from './types.ts';
-import { partSpec, type PartText, type Primitive } from './parts/index.ts';
+import { partShape, partSpec, type PartText, type Primitive } from './parts/index.ts';
 import { TEXT_SIZE } from './parts/text.ts';
 import { partBounds, pointsBounds, toWorld, unionRects } from './geometry.ts';
 import { printable } from '../text/printable.ts';
@@ -98,7 +98,7 @@ export function sheetToSvg(sheet: Sheet, options: Partial<SvgOptions> = {}): str
   );
   const symbols = sheet.parts.map(
     (part) =>
-      `<g data-part="${escapeXml(part.id)}">${partSpec(part.kind)
+      `<g data-part="${escapeXml(part.id)}">${partShape(part)
         .symbol.map((p) => primitiveSvg(part, p))
         .join('')}</g>`,
   );

@@ -4,13 +4,15 @@
  * of the parts that touch them. Equal names join nets, so two labels `BL` are one net.
  */
 import type { Device, Netlist, Rail } from '../model/netlist.ts';
+import type { Instance } from '../model/design.ts';
 import type { Sheet, SheetPart } from './types.ts';
-import { isDevicePart, partSpec, type NetRole } from './parts/index.ts';
+import { isDevicePart, isNamedOnce, partShape, partSpec, type NetRole } from './parts/index.ts';
+import type { InstancePart } from './parts/instance.ts';
 import { sheetConnectivity, type SheetConnectivity } from './connectivity.ts';
-import { nameRecord } from '../model/records.ts';
+import { nameRecord, recordOf } from '../model/records.ts';
 
 export interface SheetIssue {
-  readonly kind: 'name-conflict' | 'duplicate-device' | 'shorted-pins';
+  readonly kind: 'name-conflict' | 'duplicate-device' | 'shorted-pins' | 'hierarchy';
   readonly parts: readonly string[];
   readonly message: string;
 }
@@ -23,6 +25,8 @@ export interface DerivedNetlist {
   readonly pinNets: ReadonlyMap<string, string>;
   /** Device name of every device part, by part id. */
   readonly partDevices: Readonly<Record<string, string>>;
+  /** The instances drawn as symbols, each pin wired to the net its lead touches (unwired: absent). */
+  readonly instances: readonly Instance[];
   readonly junctions: readonly { readonly x: number; readonly y: number }[];
   readonly openEnds: readonly { readonly x: number; readonly y: number }[];
   readonly issues: readonly SheetIssue[];
@@ -117,12 +121,17 @@ interface Contributions {
   readonly rails: Rail[];
   readonly inputs: string[];
   readonly outputs: string[];
+  readonly instances: Instance[];
 }
 
 function contribute(part: SheetPart, netOf: (pin: string) => string, into: Contributions): void {
   const role = partSpec(part.kind).role;
   if (role.type === 'device') {
     into.devices.push(role.toDevice(part, netOf));
+    return;
+  }
+  if (role.type === 'instance') {
+    into.instances.push(drawnInstance(part as InstancePart, netOf));
     return;
   }
   const net = netOf('net');
@@ -150,16 +159,20 @@ export function sheetToNetlist(sheet: Sheet, name = 'cell'): DerivedNetlist {
   const nameOf = nameGroups(sheet, c, issues);
   const pinNets = new Map<string, string>();
   const partDevices = nameRecord<string>();
-  const found: Contributions = { devices: [], rails: [], inputs: [], outputs: [] };
+  const found: Contributions = { devices: [], rails: [], inputs: [], outputs: [], instances: [] };
+  let wired: Set<number> | null = null; // found only for a sheet with instances
+  const isWired = (item: number): boolean => (wired ??= wiredPins(sheet, c)).has(item);
   sheet.parts.forEach((part, i) => {
-    const pins = partSpec(part.kind).pins;
+    const pins = partShape(part).pins;
     const first = c.firstPin[i]!;
     for (let k = 0; k < pins.length; k++)
       pinNets.set(`${part.id}.${pins[k]!.name}`, nameOf(groups.find(first + k)));
     if (isDevicePart(part.kind)) partDevices[part.id] = part.name;
     const netOf = (pin: string): string => {
       const k = pins.findIndex((p) => p.name === pin);
-      return k < 0 ? unknownPin(part, pin) : nameOf(groups.find(first + k));
+      if (k < 0) return unknownPin(part, pin);
+      // An instance's pin that touches nothing is left unwired, not given a net of its own.
+      return part.kind === 'instance' && !isWired(first + k) ? '' : nameOf(groups.find(first + k));
     };
     contribute(part, netOf, found);
   });
@@ -174,7 +187,29 @@ export function sheetToNetlist(sheet: Sheet, name = 'cell'): DerivedNetlist {
     inputs: uniqueInOrder(found.inputs).filter((n) => !railNets.has(n)),
     outputs: uniqueInOrder(found.outputs),
   };
-  return { netlist, wireNets, pinNets, partDevices, junctions, openEnds, issues };
+  return { netlist, wireNets, pinNets, partDevices, instances: found.instances, junctions, openEnds, issues };
+}
+
+/** An instance part's connections: each pin to its net, a pin that touches nothing left out. */
+function drawnInstance(part: InstancePart, netOf: (pin: string) => string): Instance {
+  const pins = partShape(part).pins.flatMap((p) => {
+    const net = netOf(p.name);
+    return net === '' ? [] : [[p.name, net] as const];
+  });
+  return { name: part.name, cell: part.cell, pins: recordOf(pins) };
+}
+
+/** Item numbers of the pins that touch another pin or a wire (the others are open). */
+function wiredPins(sheet: Sheet, c: SheetConnectivity): Set<number> {
+  const size = new Map<number, number>();
+  const count = c.wireBase + sheet.wires.length;
+  for (let i = 0; i < count; i++) {
+    const root = c.groups.find(i);
+    size.set(root, (size.get(root) ?? 0) + 1);
+  }
+  const wired = new Set<number>();
+  for (let i = 0; i < c.wireBase; i++) if ((size.get(c.groups.find(i)) ?? 0) > 1) wired.add(i);
+  return wired;
 }
 
 function unknownPin(part: SheetPart, pin: string): never {
@@ -184,7 +219,7 @@ function unknownPin(part: SheetPart, pin: string): never {
 function reportDuplicateDevices(sheet: Sheet, issues: SheetIssue[]): void {
   const byName = new Map<string, string[]>();
   for (const p of sheet.parts) {
-    if (!isDevicePart(p.kind)) continue;
+    if (!isNamedOnce(p.kind)) continue;
     const ids = byName.get(p.name);
     if (ids) ids.push(p.id);
     else byName.set(p.name, [p.id]);

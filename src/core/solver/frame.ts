@@ -79,9 +79,12 @@ export class Frame {
   nameRanks(): Int32Array {
     if (this.ranks === null) {
       const { c } = this;
-      const name = (e: number): string => c.netlist.devices[c.chDevice[e]!]!.name;
+      const names = Array.from({ length: c.chCount }, (_, e) => c.netlist.devices[c.chDevice[e]!]!.name);
       const order = Array.from({ length: c.chCount }, (_, e) => e);
-      order.sort((x, y) => (name(x) < name(y) ? -1 : name(x) > name(y) ? 1 : x - y));
+      order.sort((x, y) => {
+        const [a, b] = [names[x]!, names[y]!];
+        return a < b ? -1 : a > b ? 1 : x - y;
+      });
       this.ranks = new Int32Array(c.chCount);
       order.forEach((e, r) => (this.ranks![e] = r));
     }

@@ -140,6 +140,32 @@ export class Schedule {
     return order.start[s + 1]! - first === 1 && !this.selfDependent[order.items[first]!];
   }
 
+  /**
+   * After `propagate` with `dirty`: the nets that may have changed, those of every group it
+   * re-evaluated, and the sources; null past half the nets, where walking every net costs less.
+   * The list is valid until the next call.
+   */
+  touchedNets(dirty: Uint8Array): Int32Array | null {
+    const order = this.topology.sccOrder;
+    const { cccNets } = this.topology;
+    const out = (this.touched ??= new Int32Array(this.c.netCount));
+    const limit = this.c.netCount >> 1;
+    let count = 0;
+    for (const n of this.sourceNets) out[count++] = n;
+    for (let s = 0; s + 1 < order.start.length; s++) {
+      const [first, end] = [order.start[s]!, order.start[s + 1]!];
+      if (!this.anyDirty(dirty, first, end)) continue;
+      for (let i = first; i < end; i++) {
+        const k = order.items[i]!;
+        for (let q = cccNets.start[k]!; q < cccNets.start[k + 1]!; q++) out[count++] = cccNets.items[q]!;
+      }
+      if (count > limit) return null;
+    }
+    return out.subarray(0, count);
+  }
+
+  private touched: Int32Array | null = null;
+
   private anyDirty(dirty: Uint8Array, first: number, end: number): boolean {
     const items = this.topology.sccOrder.items;
     for (let i = first; i < end; i++) if (dirty[items[i]!]) return true;

@@ -2,21 +2,11 @@
 import type { CompiledNetlist } from '../compile/compile.ts';
 import type { InputVector } from '../model/design.ts';
 import { currentPaths, type PathIndices } from './currentPaths.ts';
-import { conductionFor, conductionOf } from './evaluate.ts';
-import {
-  FLAG_CHARGE_SHARED,
-  FLAG_MAYBE,
-  FLAG_OSCILLATING,
-  FLAG_STATES,
-  LEVEL_0,
-  LEVEL_1,
-  LEVEL_X,
-  LEVEL_Z,
-  ON,
-} from './levels.ts';
+import { conductionOf } from './evaluate.ts';
+import { FLAG_CHARGE_SHARED, FLAG_MAYBE, FLAG_OSCILLATING, FLAG_STATES, ON } from './levels.ts';
+import { conductionOfAll, levelsOf, type Changes } from './finishArrays.ts';
 import type { NetState } from './netState.ts';
 import { sameVolts, Schedule } from './schedule.ts';
-import { clampConduction, GATE_TIED_A } from './selfGated.ts';
 import type { Topology } from './topology.ts';
 
 export { SETTLE_ROUNDS_BASE, SETTLE_ROUNDS_PER_COMPONENT } from './schedule.ts';
@@ -92,12 +82,24 @@ export class Simulator {
     return this.run(inputs, previous, false, false);
   }
 
+  /**
+   * The schedule of vectors that drive every input, as the sweep's solves use it: the component
+   * tables of a sweep evaluate their groups with it (core/tables), so nothing is built twice.
+   */
+  drivenSchedule(): Schedule {
+    return this.scheduleFor([]);
+  }
+
   private schedule(inputs: InputVector): Schedule {
     const names = this.compiled.netlist.inputs;
     // Nearly every vector drives all inputs: find that out without building the key.
     let anyUndriven = false;
     for (const name of names) if ((inputs[name] ?? 'Z') === 'Z') anyUndriven = true;
-    const undriven = anyUndriven ? names.filter((name) => (inputs[name] ?? 'Z') === 'Z') : [];
+    return this.scheduleFor(anyUndriven ? names.filter((name) => (inputs[name] ?? 'Z') === 'Z') : []);
+  }
+
+  /** The schedule with these inputs undriven, built once. */
+  private scheduleFor(undriven: readonly string[]): Schedule {
     const key = undriven.join('\u0000');
     let s = this.schedules.get(key);
     if (!s) {
@@ -160,7 +162,11 @@ export class Simulator {
       state.flags[n] = 0;
     }
     schedule.propagate(sourceVolts, state, dirty, fresh);
-    return this.finish(inputs, schedule, sourceVolts, state, reuse ? base : null);
+    // Only the nets of re-evaluated groups and the sources can have changed: levels and conduction
+    // are then updated there alone, from the base's.
+    const nets = dirty === 'all' ? null : schedule.touchedNets(dirty);
+    const changes = nets === null || base === null ? null : { base, nets };
+    return this.finish(inputs, schedule, sourceVolts, state, reuse ? base : null, changes);
   }
 
   /**
@@ -192,29 +198,16 @@ export class Simulator {
   }
 
   /**
-   * Conduction of every element from its gate's voltage (a floating gate reads its stored charge); a
-   * self-gated element conducts when it is forward-biased.
+   * Derives levels, conduction and source currents; `recycled` lends its arrays for them, and with
+   * `changes` only the changed nets' levels and the conduction of what they gate are worked out.
    */
-  private conductionAll(topology: Topology, volts: Float64Array, into: Uint8Array): Uint8Array {
-    const { chKind, chGate, chA, chB, tech } = this.compiled;
-    for (let e = 0; e < into.length; e++) {
-      const gate = chGate[e]!;
-      into[e] = conductionFor(chKind[e]!, gate >= 0 ? volts[gate]! : NaN, tech.vil, tech.vih);
-    }
-    for (const e of topology.selfGatedElements) {
-      const [gateEnd, other] = topology.selfGate[e] === GATE_TIED_A ? [chA[e]!, chB[e]!] : [chB[e]!, chA[e]!];
-      into[e] = clampConduction(chKind[e]!, volts[gateEnd]!, volts[other]!);
-    }
-    return into;
-  }
-
-  /** Derives levels, conduction and source currents; `recycled` lends its arrays for them. */
   private finish(
     inputs: InputVector,
     schedule: Schedule,
     sourceVolts: Float64Array,
     state: NetState,
     recycled: SolveResult | null,
+    changes: Changes | null,
   ): SolveResult {
     const c = this.compiled;
     const { topology, frame } = schedule;
@@ -224,15 +217,17 @@ export class Simulator {
       const dv = sourceVolts[c.chA[e]!]! - sourceVolts[c.chB[e]!]!;
       chCurrent[e] = on && Number.isFinite(dv) ? dv / c.chOhms[e]! : 0;
     }
-    const { vil, vih } = c.tech;
-    const levels = recycled ? recycled.levels : new Uint8Array(c.netCount);
+    const from = (a: Uint8Array | undefined, size: number): Uint8Array =>
+      recycled ? a! : changes === null ? new Uint8Array(size) : a!.slice();
+    const levels = levelsOf(
+      c,
+      topology,
+      state,
+      from(changes?.base.levels ?? recycled?.levels, c.netCount),
+      changes,
+    );
     let settled = true;
-    for (let n = 0; n < c.netCount; n++) {
-      const v = volts[n]!;
-      levels[n] =
-        driven[n] || topology.isSource[n] ? (v <= vil ? LEVEL_0 : v >= vih ? LEVEL_1 : LEVEL_X) : LEVEL_Z;
-      if (flags[n]! & FLAG_OSCILLATING) settled = false;
-    }
+    for (let n = 0; n < flags.length; n++) if (flags[n]! & FLAG_OSCILLATING) settled = false;
     // Only source nets ever hold a current, so a recycled array needs only those cleared.
     const sourceOut = recycled ? recycled.sourceOut : new Float64Array(c.netCount);
     if (recycled) for (const n of schedule.sourceNets) sourceOut[n] = 0;
@@ -256,10 +251,12 @@ export class Simulator {
       levels,
       flags,
       limiter: state.limiter,
-      conduction: this.conductionAll(
+      conduction: conductionOfAll(
+        c,
         topology,
         volts,
-        recycled ? recycled.conduction : new Uint8Array(c.chCount),
+        from(changes?.base.conduction ?? recycled?.conduction, c.chCount),
+        changes,
       ),
       chCurrent,
       sourceOut,

@@ -1,4 +1,4 @@
-import type { Design } from '../document/design.ts';
+import type { CellDesign } from '../document/design.ts';
 import type { Netlist } from '../model/netlist.ts';
 import { DEFAULT_TECHNOLOGY } from '../model/technology.ts';
 import * as comb from './combinational.ts';
@@ -9,7 +9,7 @@ export interface StarterCell {
   readonly id: string;
   readonly title: string;
   readonly summary: string;
-  readonly design: Design;
+  readonly design: CellDesign;
 }
 
 function starter(
@@ -18,7 +18,7 @@ function starter(
   summary: string,
   netlist: Netlist,
   expectations: Record<string, string>,
-  sequences: Design['sequences'] = [],
+  sequences: CellDesign['sequences'] = [],
 ): StarterCell {
   return {
     id,

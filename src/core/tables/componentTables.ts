@@ -2,6 +2,7 @@ import type { CompiledNetlist } from '../compile/compile.ts';
 import { Schedule } from '../solver/schedule.ts';
 import { TableBench } from './build.ts';
 import { groupShapes, groupsOfNets, type GroupShape } from './shape.ts';
+import { GroupSignatures, SignatureMap } from './signature.ts';
 import {
   MAX_TABLE_CONTROLS,
   MAX_TABLE_WORK,
@@ -17,11 +18,14 @@ export interface TableOptions {
   readonly maxControls?: number;
   /** Bound on a ternary table's controls; default MAX_TERNARY_CONTROLS. */
   readonly maxTernaryControls?: number;
+  /** The schedule to evaluate groups with, when the caller has one for these undriven inputs. */
+  readonly schedule?: Schedule;
 }
 
 /**
  * The component tables of one compiled netlist (docs/semantics.md §10): every group's shape at once,
- * each group's table built the first time it is asked for. Tables are exact for what they key on:
+ * each group's table built the first time it is asked for, once for all groups that are identical up
+ * to renaming of nets (signature.ts). Tables are exact for what they key on:
  * an entry is what the solver writes for that group in sweep mode when every control sits exactly
  * at the entry's level (0 V, VDD, or unknown for ternary tables).
  */
@@ -33,6 +37,12 @@ export class ComponentTables {
   private readonly bench: TableBench;
   private readonly binaryTables = new Map<number, GroupTable | NoTable>();
   private readonly ternaryTables = new Map<number, GroupTable | NoTable>();
+  private readonly signatures: GroupSignatures;
+  /** Per signature, the first group built with it, for each kind of table: identical groups share it. */
+  private readonly builtBinary = new SignatureMap<GroupTable | NoTable>();
+  private readonly builtTernary = new SignatureMap<GroupTable | NoTable>();
+  /** Tables a group received from an identical group instead of evaluating its own. */
+  shared = 0;
   private readonly maxControls: number;
   private readonly maxTernary: number;
 
@@ -40,27 +50,29 @@ export class ComponentTables {
     readonly compiled: CompiledNetlist,
     options: TableOptions = {},
   ) {
-    this.schedule = Schedule.build(compiled, options.undriven ?? new Set());
+    this.schedule = options.schedule ?? Schedule.build(compiled, options.undriven ?? new Set());
     const { topology } = this.schedule;
-    this.shapes = groupShapes(compiled, topology, (s) => !this.schedule.isSimpleGroup(s));
     this.groupOfNet = groupsOfNets(topology);
+    this.shapes = groupShapes(compiled, topology, (s) => !this.schedule.isSimpleGroup(s), this.groupOfNet);
     this.bench = new TableBench(compiled, this.schedule);
+    this.signatures = new GroupSignatures(compiled, topology);
     this.maxControls = options.maxControls ?? MAX_TABLE_CONTROLS;
     this.maxTernary = options.maxTernaryControls ?? MAX_TERNARY_CONTROLS;
   }
 
   /** Group s's table with every control at 0 V or VDD (2^k entries), or why it has none. */
   binary(s: number): GroupTable | NoTable {
-    return this.lookup(this.binaryTables, s, false, this.maxControls);
+    return this.lookup(this.binaryTables, this.builtBinary, s, false, this.maxControls);
   }
 
   /** Group s's table with controls also at X (3^k entries), for dual-rail lanes, or why it has none. */
   ternary(s: number): GroupTable | NoTable {
-    return this.lookup(this.ternaryTables, s, true, this.maxTernary);
+    return this.lookup(this.ternaryTables, this.builtTernary, s, true, this.maxTernary);
   }
 
   private lookup(
     cache: Map<number, GroupTable | NoTable>,
+    bySignature: SignatureMap<GroupTable | NoTable>,
     s: number,
     ternary: boolean,
     bound: number,
@@ -69,12 +81,21 @@ export class ComponentTables {
     if (found === undefined) {
       const shape = this.shapes[s];
       if (shape === undefined) throw new RangeError(`no group ${s}: the cell has ${this.shapes.length}`);
-      const reason = refusal(shape, ternary, bound);
-      found = reason === null ? this.bench.build(shape, ternary) : { kind: 'none', shape, reason };
+      const signature = this.signatures.of(shape);
+      const twin = signature === null ? undefined : bySignature.get(signature);
+      // A twin's entries are by position, so they read the same for this group's nets and controls.
+      found = twin === undefined ? make(this.bench, shape, ternary, bound) : { ...twin, shape };
+      if (twin?.kind === 'table') this.shared++;
+      if (signature !== null && twin === undefined) bySignature.set(signature, found);
       cache.set(s, found);
     }
     return found;
   }
+}
+
+function make(bench: TableBench, shape: GroupShape, ternary: boolean, bound: number): GroupTable | NoTable {
+  const reason = refusal(shape, ternary, bound);
+  return reason === null ? bench.build(shape, ternary) : { kind: 'none', shape, reason };
 }
 
 function refusal(shape: GroupShape, ternary: boolean, bound: number): string | null {

@@ -31,9 +31,9 @@ export function groupShapes(
   c: CompiledNetlist,
   topology: Topology,
   feedback: (s: number) => boolean,
+  groupOfNet = groupsOfNets(topology),
 ): GroupShape[] {
   const { sccOrder } = topology;
-  const groupOfNet = groupsOfNets(topology);
   const seen = new Int32Array(c.netCount).fill(-1);
   const output = new Uint8Array(c.netCount);
   for (const o of c.outputNets) output[o] = 1;

@@ -3,6 +3,8 @@
  * solved from the previous result so stored charge carries over as it would on silicon (a latch keeps
  * its state when its inputs release it). A new netlist starts from an unknown state.
  */
+import { solvedVectorFindings } from '../analysis/check.ts';
+import type { Finding } from '../analysis/report.ts';
 import { compile, type CompiledNetlist } from '../compile/compile.ts';
 import type { InputVector } from '../model/design.ts';
 import type { Netlist } from '../model/netlist.ts';
@@ -35,6 +37,16 @@ export class LiveSession {
     let result: SolveResult | null = null;
     for (const step of steps) result = this.solve(step);
     return result;
+  }
+
+  /**
+   * The findings of the vector solved last, as a sweep row lists them; for cells too wide to sweep.
+   * `expectations` must be usable ones (usableExpectations). Null before the first solve.
+   */
+  findingsOfLast(expectations: Readonly<Record<string, string>>): Finding[] | null {
+    return this.last === null
+      ? null
+      : solvedVectorFindings(this.netlist, this.simulator, this.last, expectations);
   }
 
   /** Forgets stored charge: the next vector starts from an unknown state, as after power-up. */

@@ -116,7 +116,8 @@ export function paintLayout(sheet: Sheet, geometry: PaintGeometry): PaintLayout 
       const net = geometry.pinNets.get(`${part.id}.${lead.pin}`);
       if (net === undefined) continue;
       b.segments.push({ net: b.id(net), points: [lead.from.x, lead.from.y, lead.to.x, lead.to.y] });
-      if (NAMING_KINDS.has(part.kind))
+      // Pins, rails, labels and an instance's pins show their level as a mark beside the lead.
+      if (NAMING_KINDS.has(part.kind) || part.kind === 'instance')
         b.marks.push({ net: b.id(net), x: lead.from.x + 0.2, y: lead.from.y + 0.25 });
     }
     const device = geometry.partDevices[part.id];
@@ -167,10 +168,17 @@ export function overlayPaint(
 
 /** The box around a flat x, y list. */
 export function segmentBox(points: readonly number[]): Rect {
-  let [x0, y0, x1, y1] = [Infinity, Infinity, -Infinity, -Infinity];
+  let x0 = Infinity;
+  let y0 = Infinity;
+  let x1 = -Infinity;
+  let y1 = -Infinity;
   for (let i = 0; i + 1 < points.length; i += 2) {
-    [x0, x1] = [Math.min(x0, points[i]!), Math.max(x1, points[i]!)];
-    [y0, y1] = [Math.min(y0, points[i + 1]!), Math.max(y1, points[i + 1]!)];
+    const x = points[i]!;
+    const y = points[i + 1]!;
+    if (x < x0) x0 = x;
+    if (x > x1) x1 = x;
+    if (y < y0) y0 = y;
+    if (y > y1) y1 = y;
   }
   return { x0, y0, x1, y1 };
 }

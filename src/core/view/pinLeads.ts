@@ -2,7 +2,7 @@
  * Short lead segments at each pin of a part, pointing into its body: where the overlay paints a
  * net's level when the net is joined by labels or pin-to-pin contact rather than a drawn wire.
  */
-import { partSpec } from '../sheet/parts/index.ts';
+import { partShape } from '../sheet/parts/index.ts';
 import { toWorld } from '../sheet/geometry.ts';
 import type { Point, SheetPart } from '../sheet/types.ts';
 
@@ -29,10 +29,10 @@ function towardBody(pin: Point, box: { x0: number; y0: number; x1: number; y1: n
 }
 
 export function pinLeads(part: SheetPart): PinLead[] {
-  const spec = partSpec(part.kind);
+  const spec = partShape(part);
   return spec.pins.map((pin) => ({
     pin: pin.name,
     from: toWorld(part, pin),
-    to: toWorld(part, towardBody(pin, spec.box)),
+    to: toWorld(part, pin.lead ?? towardBody(pin, spec.box)),
   }));
 }

@@ -21,7 +21,7 @@ interface CachedLayerProps {
  * A Konva shape that shows a ViewCache: each frame copies the bitmap at the current view, which it
  * reads from the store when drawing (so a pan re-renders no React component here). A new painter
  * repaints only the areas it changed. The sheet's layers share one Konva layer (one canvas), so a
- * frame composites two canvases, not six.
+ * frame composites one canvas, not five.
  */
 export function CachedShape({ paint, bounds, changed, empty = false }: CachedLayerProps) {
   const shape = useRef<Konva.Shape>(null);

@@ -68,9 +68,13 @@ export function pointInk(p: Point): Rect {
   return grow({ x0: p.x, y0: p.y, x1: p.x, y1: p.y }, INK_MARGIN);
 }
 
-/** Everything drawn, with a margin: nothing outside needs painting. */
+const sheetInks = new WeakMap<Sheet, Rect | null>();
+
+/** Everything drawn, with a margin: nothing outside needs painting. Remembered per sheet (three layers ask). */
 export function sheetInk(sheet: Sheet): Rect | null {
-  return unionRects([...sheet.parts.map(partInk), ...sheet.wires.map(wireInk)]);
+  if (!sheetInks.has(sheet))
+    sheetInks.set(sheet, unionRects([...sheet.parts.map(partInk), ...sheet.wires.map(wireInk)]));
+  return sheetInks.get(sheet) ?? null;
 }
 
 /** The parts and wires whose ink meets an area. */

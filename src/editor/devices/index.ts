@@ -27,4 +27,5 @@ export const PART_PAINTERS: Readonly<Record<PartKind, PartPainter>> = {
   output: SYMBOL_PAINTER,
   label: SYMBOL_PAINTER,
   diode: SYMBOL_PAINTER,
+  instance: SYMBOL_PAINTER,
 };

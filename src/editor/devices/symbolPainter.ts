@@ -5,7 +5,7 @@
  * once.
  */
 import type { SheetPart } from '../../core/sheet/types.ts';
-import { partSpec, type PartText } from '../../core/sheet/parts/index.ts';
+import { partShape, partSpec, type PartText } from '../../core/sheet/parts/index.ts';
 import { TEXT_SIZE } from '../../core/sheet/parts/text.ts';
 import { toWorld } from '../../core/sheet/geometry.ts';
 
@@ -23,7 +23,7 @@ export function textShown(detail: TextDetail, style: PartText['style']): boolean
 
 /** Adds a part's outline primitives (lines, polygons, circles) to `path`; `filled` picks the filled polygons instead. */
 export function traceSymbol(path: CanvasPath, part: SheetPart, filled: boolean): void {
-  for (const p of partSpec(part.kind).symbol) {
+  for (const p of partShape(part).symbol) {
     if (p.type === 'circle') {
       if (filled) continue;
       const c = toWorld(part, p);

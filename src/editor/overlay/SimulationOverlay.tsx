@@ -1,9 +1,6 @@
-import { useEffect, useMemo, useRef, useState } from 'react';
-import { Group, Label, Layer, Tag, Text } from 'react-konva';
-import type Konva from 'konva';
-import { hitTest, type Hit } from '../../core/sheet/hitTest.ts';
-import type { Point, Sheet } from '../../core/sheet/types.ts';
-import { formatVolts } from '../../core/view/format.ts';
+import { useMemo, useRef } from 'react';
+import { Group } from 'react-konva';
+import type { Sheet } from '../../core/sheet/types.ts';
 import {
   changedPaintAreas,
   overlayPaint,
@@ -13,79 +10,12 @@ import {
 } from '../../core/view/overlayPaint.ts';
 import type { Rect } from '../../core/sheet/geometry.ts';
 import { traceRoute } from '../../core/view/traceRoute.ts';
-import { lookOf } from '../../core/view/visualLanguage.ts';
-import { toggleInput, useSimulation } from '../../state/simulation.ts';
-import type { SheetGeometry } from '../../state/document.ts';
+import { useSimulation } from '../../state/simulation.ts';
 import { useStore } from '../../state/store.ts';
-import { indexFor } from '../tools/sheetIndex.ts';
 import { CurrentTrace } from './CurrentTraces.tsx';
 import { CachedShape } from '../canvas/CachedShape.tsx';
 import { sheetInk } from '../canvas/inkBounds.ts';
 import { paintOverlay } from './overlayPainter.ts';
-
-type Hover = { readonly net: string; readonly at: Point } | null;
-
-function netOfHit(hit: Hit | null, geometry: SheetGeometry): string | undefined {
-  if (hit === null) return undefined;
-  if (hit.type === 'wire') return geometry.wireNets[hit.wireId];
-  if (hit.type === 'pin') return geometry.pinNets.get(`${hit.partId}.${hit.pin}`);
-  return geometry.pinNets.get(`${hit.partId}.net`);
-}
-
-/** The input pin under the pointer, if any: double-clicking it flips that input. */
-function inputOfHit(hit: Hit | null, sheet: Sheet, geometry: SheetGeometry): string | undefined {
-  if (hit === null || hit.type === 'wire') return undefined;
-  const part = sheet.parts.find((p) => p.id === hit.partId);
-  return part?.kind === 'input' ? geometry.pinNets.get(`${part.id}.net`) : undefined;
-}
-
-/**
- * Pointer on the sheet, found by pure hit testing: the estimated voltage of the wire or pin under
- * it, and a double-click on an input pin flips that input (the same action as its bit in the panel).
- */
-export function PointerLayer() {
-  const layer = useRef<Konva.Layer>(null);
-  const sheet = useStore((s) => s.doc.sheet);
-  const geometry = useStore((s) => s.geometry);
-  const index = indexFor(sheet); // the editor's cached index of this very sheet
-  const [hover, setHover] = useState<Hover>(null);
-  const state = useSimulation((s) => (hover === null ? undefined : s.live?.net(hover.net)));
-  useEffect(() => {
-    const stage = layer.current?.getStage();
-    if (!stage) return;
-    const onMove = (): void => {
-      const at = layer.current?.getRelativePointerPosition();
-      const net = at ? netOfHit(hitTest(index, at), geometry) : undefined;
-      setHover(at && net !== undefined ? { net, at } : null);
-    };
-    const onDoubleClick = (): void => {
-      const at = layer.current?.getRelativePointerPosition();
-      const input = at ? inputOfHit(hitTest(index, at), sheet, geometry) : undefined;
-      if (input !== undefined) toggleInput(input);
-    };
-    stage.on('mousemove.rwOverlay', onMove);
-    stage.on('dblclick.rwOverlay', onDoubleClick);
-    stage.on('mouseleave.rwOverlay', () => setHover(null));
-    return () => {
-      stage.off('.rwOverlay');
-    };
-  }, [index, sheet, geometry]);
-  return (
-    <Layer ref={layer} listening={false}>
-      {hover !== null && state !== undefined && (
-        <Label x={hover.at.x + 0.5} y={hover.at.y - 1.3}>
-          <Tag fill="#ffffff" stroke="#2b2d33" strokeWidth={0.04} cornerRadius={0.12} />
-          <Text
-            text={`${hover.net}  ${formatVolts(state.volts)}  ${lookOf(state).description}`}
-            fontSize={0.55}
-            padding={0.2}
-            fill="#2b2d33"
-          />
-        </Label>
-      )}
-    </Layer>
-  );
-}
 
 /** What changed since the last paint: only the nets and devices a toggle moved, or all of it. */
 function usePaintChanges(layout: PaintLayout | null, paint: OverlayPaint | null): readonly Rect[] | 'all' {

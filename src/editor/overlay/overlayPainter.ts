@@ -5,7 +5,7 @@
  * from the pure paint model (core/view/overlayPaint.ts), which tests read without a canvas.
  */
 import type { Rect } from '../../core/sheet/geometry.ts';
-import { segmentBox, type OverlayPaint, type PaintLayout } from '../../core/view/overlayPaint.ts';
+import type { OverlayPaint, PaintLayout } from '../../core/view/overlayPaint.ts';
 import { LOOKS, type Conduction, type LookName } from '../../core/view/visualLanguage.ts';
 import { SHEET_THEME } from '../theme.ts';
 
@@ -19,9 +19,21 @@ const DEVICE_STYLE: Readonly<Record<Conduction, { fill: string; stroke: string; 
   maybe: { fill: SHEET_THEME.background, stroke: '#b3243c', text: '?' },
 };
 
+/** Whether a polyline's box meets the area; a whole sheet's segments are tested on every paint. */
 function meets(points: readonly number[], area: Rect): boolean {
-  const b = segmentBox(points);
-  return b.x0 <= area.x1 && area.x0 <= b.x1 && b.y0 <= area.y1 && area.y0 <= b.y1;
+  let left = true;
+  let right = true;
+  let above = true;
+  let below = true;
+  for (let i = 0; i + 1 < points.length; i += 2) {
+    const x = points[i]!;
+    const y = points[i + 1]!;
+    left &&= x < area.x0;
+    right &&= x > area.x1;
+    above &&= y < area.y0;
+    below &&= y > area.y1;
+  }
+  return !(left || right || above || below);
 }
 
 /** What the overlay paints: the drawing's layout and one vector's paint on it. */

@@ -14,6 +14,7 @@ import { circuit } from '../../../src/core/model/builder.ts';
 import type { Sheet } from '../../../src/core/sheet/types.ts';
 import { drawnInverter, part } from '../fixtures.ts';
 import { canvasTexts, devicesOf, svgTexts } from './partSheets.ts';
+import { reportRows } from '../../../src/core/analysis/sweepColumns.ts';
 
 /** The drawn inverter with a clamp on Y each way: GND → Y and Y → VDD, joined by net labels. */
 function clampedInverter(): Sheet {
@@ -63,11 +64,11 @@ describe('diodes from the sheet to the solver', () => {
       { kind: 'diode', name: 'DP', anode: 'Y', cathode: 'VDD' },
     ]);
     const report = checkSweep(netlist);
-    expect(report.vectors!.map((v) => [v.inputs.A, v.outputs.Y])).toEqual([
+    expect(reportRows(report).map((v) => [v.inputs.A, v.outputs.Y])).toEqual([
       ['0', '1'],
       ['1', '0'],
     ]);
-    for (const v of report.vectors!) expect(v.supplyCurrent).toBe(0);
+    for (const v of reportRows(report)) expect(v.supplyCurrent).toBe(0);
     expect(report.findings.filter((f) => f.kind === 'static-current' || f.kind === 'short')).toEqual([]);
   });
 
@@ -85,8 +86,8 @@ describe('diodes from the sheet to the solver', () => {
     const { netlist } = sheetToNetlist(sheet, 'lone');
     expect(netlist.devices).toEqual([{ kind: 'diode', name: 'D1', anode: 'A', cathode: 'Y' }]);
     const report = checkSweep(netlist);
-    expect(report.vectors!.map((v) => v.outputs.Y)).toEqual(['Z', 'Z']);
-    expect(report.vectors!.map((v) => v.supplyCurrent)).toEqual([0, 0]);
+    expect(reportRows(report).map((v) => v.outputs.Y)).toEqual(['Z', 'Z']);
+    expect(reportRows(report).map((v) => v.supplyCurrent)).toEqual([0, 0]);
   });
 
   it('imported diodes are placed on the sheet and derive back to the same netlist', () => {

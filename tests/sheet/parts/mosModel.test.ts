@@ -4,7 +4,8 @@
  * the DC model keeps reading their values. Our own format rules (no published source applies).
  */
 import { describe, expect, it } from 'vitest';
-import { designsFromSpice } from '../../../src/app/files.ts';
+import { designFromSpice } from '../../../src/app/files.ts';
+import { designOfDocument } from '../../../src/state/documentCells.ts';
 import { parseDesignFile, serializeDesign } from '../../../src/core/format/designFile.ts';
 import { updatePart } from '../../../src/core/sheet/edits.ts';
 import { makeSheetPart, partForDevice } from '../../../src/core/sheet/parts/index.ts';
@@ -49,25 +50,29 @@ describe('the model a transistor names', () => {
   });
 
   it('an imported cell on the sheet keeps its cards, through save and open', () => {
-    const [design] = designsFromSpice(DECK, 'inv.sp').designs;
-    expect(design?.technology.models).toEqual({ hvt: { type: 'nmos', vt0: 0.62, kp: 100e-6 } });
-    const drawn = deriveDesign(documentFromDesign(design!)).design;
+    const { design } = designFromSpice(DECK, 'inv.sp');
+    expect({ ...design.technology.models }).toEqual({ hvt: { type: 'nmos', vt0: 0.62, kp: 100e-6 } });
+    const doc = documentFromDesign(design);
+    const { design: drawn, openCell } = deriveDesign(doc);
     const mn = drawn.netlist.devices.find((d) => d.name === 'MN');
     expect(mn).toMatchObject({ kind: 'nmos', model: 'hvt' });
-    const again = parseDesignFile(serializeDesign(drawn), 'inv.railwise.json');
-    expect(again.sheet?.parts.find((p) => p.name === 'MN')).toMatchObject({ model: 'hvt' });
+    const again = parseDesignFile(serializeDesign(designOfDocument(doc, openCell)), 'inv.railwise.json');
+    expect(again.cells[0]?.sheet?.parts.find((p) => p.name === 'MN')).toMatchObject({ model: 'hvt' });
     expect(again.technology.models).toEqual(drawn.technology.models);
   });
 
   it('a part naming a card the file lacks is refused, naming the field', () => {
-    const [design] = designsFromSpice(DECK, 'inv.sp').designs;
-    const drawn = deriveDesign(documentFromDesign(design!)).design;
+    const { design } = designFromSpice(DECK, 'inv.sp');
+    const doc = documentFromDesign(design);
+    const whole = designOfDocument(doc, deriveDesign(doc).openCell);
     // The netlist names no card here, so the sheet's part is what is refused.
-    const devices = drawn.netlist.devices.map((d) => (d.kind === 'nmos' ? withoutModel(d) : d));
-    const netlist = { ...drawn.netlist, devices };
-    const text = serializeDesign({ ...drawn, netlist, technology: { ...drawn.technology, models: {} } });
+    const cells = whole.cells.map((c) => {
+      const devices = c.netlist.devices.map((d) => (d.kind === 'nmos' ? withoutModel(d) : d));
+      return { ...c, netlist: { ...c.netlist, devices } };
+    });
+    const text = serializeDesign({ ...whole, cells, technology: { ...whole.technology, models: {} } });
     expect(() => parseDesignFile(text, 'bad.json')).toThrow(
-      /sheet\.parts\[\d+\]\.model: no model card 'hvt'/,
+      /cells\[0\]\.sheet\.parts\[\d+\]\.model: no model card 'hvt'/,
     );
   });
 });

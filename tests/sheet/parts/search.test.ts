@@ -1,7 +1,7 @@
 // Unit tests of our own plumbing (the shelf's search): no published source applies.
 import { describe, expect, it } from 'vitest';
 import { findPartKinds } from '../../../src/core/sheet/parts/search.ts';
-import { PART_KINDS } from '../../../src/core/sheet/parts/index.ts';
+import { SHELF_KINDS } from '../../../src/core/sheet/parts/index.ts';
 
 describe('finding a part kind by name', () => {
   it('matches the beginning of any word of the title, the kind or its search words', () => {
@@ -26,6 +26,6 @@ describe('finding a part kind by name', () => {
   });
 
   it('offers every kind for an empty text', () => {
-    expect(findPartKinds('  ')).toEqual(PART_KINDS);
+    expect(findPartKinds('  ')).toEqual(SHELF_KINDS);
   });
 });

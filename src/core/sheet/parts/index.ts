@@ -5,7 +5,7 @@
  */
 import type { Device } from '../../model/netlist.ts';
 import type { PartPlacement } from '../position.ts';
-import type { PartSpec, PropKey } from './spec.ts';
+import type { PartShape, PartSpec, PropKey } from './spec.ts';
 import { NMOS_SPEC } from './nmos.ts';
 import { PMOS_SPEC } from './pmos.ts';
 import { RESISTOR_SPEC } from './resistor.ts';
@@ -16,6 +16,7 @@ import { INPUT_SPEC } from './input.ts';
 import { OUTPUT_SPEC } from './output.ts';
 import { LABEL_SPEC } from './label.ts';
 import { DIODE_SPEC } from './diode.ts';
+import { INSTANCE_SPEC } from './instance.ts';
 
 export type * from './spec.ts';
 export type { Quantity, ReadResult } from './quantities.ts';
@@ -31,6 +32,7 @@ const SPECS = [
   OUTPUT_SPEC,
   LABEL_SPEC,
   DIODE_SPEC,
+  INSTANCE_SPEC,
 ] as const;
 
 type PartOfSpec<S> = S extends PartSpec<infer P> ? P : never;
@@ -41,7 +43,7 @@ export type PartKind = SheetPart['kind'];
 /** The properties of any kind ('w', 'l', 'ohms', …, and the text 'model'). */
 export type PartPropKey = PropKey<SheetPart>;
 /** Text properties (see `PartSpec.textProps`); every other property is a number in model units. */
-export type TextPropKey = 'model';
+export type TextPropKey = 'model' | 'cell' | 'pins';
 export type PartProps = Readonly<
   Partial<Record<Exclude<PartPropKey, TextPropKey>, number> & Record<TextPropKey, string>>
 >;
@@ -49,8 +51,11 @@ export type PartProps = Readonly<
 /** A spec seen over every kind. Each spec's functions are only ever given parts of its own kind. */
 export type AnyPartSpec = PartSpec<SheetPart>;
 
-/** Shelf order. */
+/** Every kind, in shelf order. */
 export const PART_KINDS: readonly PartKind[] = SPECS.map((s) => s.kind);
+
+/** The kinds the parts shelf and the place commands offer (not an instance: it is placed from its cell). */
+export const SHELF_KINDS: readonly PartKind[] = SPECS.filter((s) => !('onShelf' in s)).map((s) => s.kind);
 
 const BY_KIND: ReadonlyMap<string, AnyPartSpec> = new Map(
   SPECS.map((s) => [s.kind, s as unknown as AnyPartSpec]),
@@ -89,6 +94,17 @@ export function makeSheetPart(kind: PartKind, placement: PartPlacement, props: P
   }
   const { id, name, x, y, rotation, mirror } = placement;
   return { id, kind, name, x, y, rotation, mirror, ...values } as SheetPart;
+}
+
+/** A part's pins, body box and symbol: its kind's, or its own when the kind generates them. */
+export function partShape(part: SheetPart): PartShape {
+  const spec = partSpec(part.kind);
+  return spec.shape === undefined ? spec : spec.shape(part);
+}
+
+/** Parts whose name is theirs alone on a sheet: devices and instances (not a net's name). */
+export function isNamedOnce(kind: PartKind): boolean {
+  return partSpec(kind).role.type !== 'net-name';
 }
 
 /** A part's value of one property, undefined when its kind has no such property. */

@@ -3,7 +3,7 @@
  * title, its kind name or its search words. Kinds whose title begins with the text come first,
  * the rest keep shelf order, so "p" offers PMOS before the pins and "ground" finds the GND rail.
  */
-import { PART_KINDS, partSpec, type PartKind } from './index.ts';
+import { SHELF_KINDS, partSpec, type PartKind } from './index.ts';
 
 function wordsOf(kind: PartKind): string[] {
   const spec = partSpec(kind);
@@ -18,7 +18,7 @@ export function findPartKinds(query: string): PartKind[] {
     .toLowerCase()
     .split(/[\s-]+/)
     .filter(Boolean);
-  const matches = PART_KINDS.filter((kind) => {
+  const matches = SHELF_KINDS.filter((kind) => {
     const words = wordsOf(kind);
     return typed.every((t) => words.some((w) => w.startsWith(t)));
   });

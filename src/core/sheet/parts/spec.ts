@@ -18,6 +18,8 @@ export type Primitive =
 export interface PinSpec extends Point {
   /** Terminal name as the netlist knows it (gate, drain, source, a, b, anode, cathode), or `net`. */
   readonly name: string;
+  /** Where the pin's lead meets the body, when not the usual (core/view/pinLeads.ts). */
+  readonly lead?: Point;
 }
 
 /** The smallest shape of a part record: a placement and a kind. */
@@ -70,7 +72,19 @@ export interface NetNameRole {
   readonly role: NetRole;
 }
 
-export type PartRole<P> = DeviceRole<P> | NetNameRole;
+/** An instance of another cell: it contributes an instance of that cell, wired by its pins. */
+export interface InstanceRole {
+  readonly type: 'instance';
+}
+
+export type PartRole<P> = DeviceRole<P> | NetNameRole | InstanceRole;
+
+/** Pins, body box and symbol of one part, in local units (see `PartSpec.shape`). */
+export interface PartShape {
+  readonly pins: readonly PinSpec[];
+  readonly box: { readonly x0: number; readonly y0: number; readonly x1: number; readonly y1: number };
+  readonly symbol: readonly Primitive[];
+}
 
 export interface PartSpec<P extends AnyPart> {
   readonly kind: P['kind'];
@@ -83,6 +97,10 @@ export interface PartSpec<P extends AnyPart> {
   /** Body box for hit testing and box select, local units. */
   readonly box: { readonly x0: number; readonly y0: number; readonly x1: number; readonly y1: number };
   readonly symbol: readonly Primitive[];
+  /** A kind whose pins depend on the part (an instance's cell) gives them per part. */
+  readonly shape?: (part: P) => PartShape;
+  /** False for a kind placed by other means than the parts shelf (an instance, from its cell). */
+  readonly onShelf?: false;
   /** The editable properties beyond the name, in form order. */
   readonly fields: readonly FieldSpec<PropKey<P> & string>[];
   /**

@@ -1,0 +1,159 @@
+// Slots and words are in range by construction, so `!` marks them (no run-time cost).
+/**
+ * The bit-parallel sweep (docs/semantics.md §2.10): 32 vectors a word, every group evaluated from its
+ * component table in topological order, as one word program run over 4,096 vectors at a time; a vector that reaches anything the tables do not call clean
+ * (X, a level off the rails, a flagged or floating observed net, a static current) or whose output
+ * differs from its expected function is solved by the scalar engine instead, so every row is what
+ * the scalar engine writes. Clean vectors have no findings, no current and plain voltages.
+ */
+import type { Simulator, SolveResult } from '../solver/simulator.ts';
+import { ComponentTables } from '../tables/componentTables.ts';
+import type { PassProgress } from './pass.ts';
+import { SWEEP_BLOCK, sweepVector } from './vectors.ts';
+import { wordExpectations } from './vectorsWordExpect.ts';
+import { wordPlan, wordPlanRefusal, type WordPlan } from './vectorsWordPlan.ts';
+import { ONES, runWordProgram } from './wordProgram.ts';
+
+/** Where the pass writes its rows, in order. */
+export interface WordRows {
+  /**
+   * Called first for each block of `count` words: per reported net two runs of level words (code
+   * bits 0 and 1, `levels[(2j + bit) * count + w]`), and per word its fast lanes.
+   */
+  addWords(levels: Int32Array, count: number, fast: Int32Array): void;
+  /** The next `count` rows, which the tables decided: no findings, no current, levels as given to addWord. */
+  addPlains(count: number): void;
+  /** A row the scalar engine solved. */
+  add(result: SolveResult, index: number): void;
+}
+
+/** Bit j of PATTERNS[p] is bit p of j: an input that changes within a word of 32 vectors. */
+const PATTERNS = [0xaaaaaaaa, 0xcccccccc, 0xf0f0f0f0, 0xff00ff00, 0xffff0000].map((x) => x | 0);
+
+/** Words of 32 vectors per run of the program: one block of a streamed sweep. */
+const BLOCK_WORDS = SWEEP_BLOCK / 32;
+
+export class WordSweep {
+  private readonly ops: Int32Array;
+  private readonly words: number;
+  private readonly mem: Int32Array;
+  private readonly levels: Int32Array;
+  private readonly fast: Int32Array;
+  /** Per reported net: the slots of its words and -1 where a word is the slot's complement. */
+  private readonly highSlot: Int32Array;
+  private readonly highFlip: Int32Array;
+  private readonly floatingSlot: Int32Array;
+  private readonly floatingFlip: Int32Array;
+
+  private constructor(
+    private readonly simulator: Simulator,
+    private readonly plan: WordPlan,
+    total: number,
+  ) {
+    this.ops = plan.program.compiled();
+    this.words = Math.min(BLOCK_WORDS, total / 32);
+    this.mem = new Int32Array(plan.program.slotCount * this.words);
+    this.mem.fill(-1, ONES * this.words, (ONES + 1) * this.words);
+    this.levels = new Int32Array(2 * plan.high.length * this.words);
+    this.fast = new Int32Array(this.words);
+    this.highSlot = plan.high.map(slotOf);
+    this.highFlip = plan.high.map(flipOf);
+    this.floatingSlot = plan.floating.map(slotOf);
+    this.floatingFlip = plan.floating.map(flipOf);
+  }
+
+  /**
+   * The bit-parallel sweep of a two-valued sweep reporting `reported` nets, or null when the cell
+   * does not suit it (the reason is in wordPlanRefusal) and the scalar pass must run.
+   */
+  static plan(
+    simulator: Simulator,
+    reported: Int32Array,
+    expectations: Readonly<Record<string, string>>,
+  ): WordSweep | null {
+    const c = simulator.compiled;
+    const vectors = 2 ** c.netlist.inputs.length;
+    if (vectors < 1024) return null;
+    const expect = Object.keys(expectations).length === 0 ? null : wordExpectations(c, expectations);
+    if (expect === null && Object.keys(expectations).length > 0) return null;
+    const tables = new ComponentTables(c, { schedule: simulator.drivenSchedule() });
+    if (wordPlanRefusal(c, tables, vectors) !== null) return null;
+    const plan = wordPlan(c, tables, reported);
+    if (plan === null) return null;
+    expect?.mismatch(plan.program, plan.netSlots, plan.fallback);
+    return new WordSweep(simulator, plan, vectors);
+  }
+
+  /** Every vector in truth-table order; returns how many were done. */
+  run(rows: WordRows, onProgress?: PassProgress): number {
+    const inputs = this.simulator.compiled.netlist.inputs;
+    const total = 2 ** inputs.length;
+    const { words, mem, plan } = this;
+    const block = 32 * words;
+    for (let first = 0; first < total; first += block) {
+      this.loadInputs(first);
+      mem.fill(0, plan.fallback * words, (plan.fallback + 1) * words);
+      runWordProgram(this.ops, mem, words);
+      this.writeLevels(rows);
+      for (let w = 0; w < words; w++) this.writeRows(rows, this.fast[w]!, first + 32 * w);
+      if (onProgress?.(first + block, total) === false) return first + block;
+    }
+    return total;
+  }
+
+  /** The inputs' words for the block from vector `first`: the low five change within a word. */
+  private loadInputs(first: number): void {
+    const { words, mem } = this;
+    const { inputSlots } = this.plan;
+    const n = inputSlots.length;
+    for (let i = 0; i < n; i++) {
+      const p = n - 1 - i;
+      const at = inputSlots[i]! * words;
+      if (p < 5) mem.fill(PATTERNS[p]!, at, at + words);
+      else for (let w = 0; w < words; w++) mem[at + w] = ((first >>> 5) + w) & (1 << (p - 5)) ? -1 : 0;
+    }
+  }
+
+  /** The block's fast lanes and level words, handed to the rows. */
+  private writeLevels(rows: WordRows): void {
+    const { levels, mem, words, fast, highSlot, highFlip, floatingSlot, floatingFlip } = this;
+    const fallback = this.plan.fallback * words;
+    for (let w = 0; w < words; w++) fast[w] = ~mem[fallback + w]!;
+    for (let j = 0; j < highSlot.length; j++) {
+      const [high, hf, z, zf] = [
+        highSlot[j]! * words,
+        highFlip[j]!,
+        floatingSlot[j]! * words,
+        floatingFlip[j]!,
+      ];
+      const [bit0, bit1] = [2 * j * words, (2 * j + 1) * words];
+      for (let w = 0; w < words; w++) {
+        const floats = mem[z + w]! ^ zf;
+        levels[bit0 + w] = (mem[high + w]! ^ hf) | floats; // 0 → 00, 1 → 01, Z → 11 (X never fast)
+        levels[bit1 + w] = floats;
+      }
+    }
+    rows.addWords(levels, words, fast);
+  }
+
+  /** The rows of one word in order: plain runs at once, the other lanes solved by the scalar engine. */
+  private writeRows(rows: WordRows, fast: number, first: number): void {
+    if (fast === -1) return rows.addPlains(32);
+    const inputs = this.simulator.compiled.netlist.inputs;
+    let plain = 0;
+    for (let lane = 0; lane < 32; lane++) {
+      if ((fast >>> lane) & 1) {
+        plain++;
+        continue;
+      }
+      if (plain > 0) rows.addPlains(plain);
+      plain = 0;
+      const k = first + lane;
+      rows.add(this.simulator.solveFresh(sweepVector(inputs, k), { recycle: true }), k);
+    }
+    if (plain > 0) rows.addPlains(plain);
+  }
+}
+
+const slotOf = (ref: number): number => (ref < 0 ? ~ref : ref);
+const flipOf = (ref: number): number => (ref < 0 ? -1 : 0);
