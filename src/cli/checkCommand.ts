@@ -8,13 +8,13 @@
  * document in every case (jsonWriter.ts).
  */
 import { CAUTION } from '../core/caution.ts';
-import type { Summary } from '../core/analysis/report.ts';
+import type { Summary, SweepColumns } from '../core/analysis/report.ts';
 import { brief, printable } from '../core/text/printable.ts';
 import { DEFAULT_POWER_SETTINGS } from '../core/power/settings.ts';
 import type { CheckArgs } from './args.ts';
 import { makeColour, terminalSafe, type Colour } from './colour.ts';
 import { FindingSpool } from './findingSpool.ts';
-import { sweepFindings, type SweepColumns } from '../core/analysis/sweepColumns.ts';
+import { sweepFindings } from '../core/analysis/sweepColumns.ts';
 import { Indented, Later, Stream, writeJson } from './jsonWriter.ts';
 import { proved, type ProofJson } from './proofCell.ts';
 import { loadCells, type CellFailure, type CellJob, type CellSkip } from './loadCells.ts';

@@ -4,7 +4,8 @@
  * and a plain row (no findings, no current paths, voltages as its levels imply) is nearly all fixed
  * text. Names are quoted once per sweep; a row with detail goes through JSON.stringify as before.
  */
-import { levelAt, plainVolts, sweepRow, type SweepColumns } from '../core/analysis/sweepColumns.ts';
+import { levelAt, plainVolts, sweepRow } from '../core/analysis/sweepColumns.ts';
+import type { SweepColumns } from '../core/analysis/report.ts';
 import { levelName } from '../core/solver/levels.ts';
 import { vectorJson } from './runCell.ts';
 

@@ -9,8 +9,8 @@ import {
   SweepLimitError,
 } from '../core/analysis/check.ts';
 import { parseSequenceText } from '../core/analysis/sequenceText.ts';
-import type { CheckReport, VectorReport } from '../core/analysis/report.ts';
-import { sweepRows, type SweepColumns } from '../core/analysis/sweepColumns.ts';
+import type { CheckReport, SweepColumns, VectorReport } from '../core/analysis/report.ts';
+import { sweepRows } from '../core/analysis/sweepColumns.ts';
 import { CAUTION } from '../core/caution.ts';
 import { CompileError } from '../core/compile/compile.ts';
 import { ExpressionError } from '../core/expect/parse.ts';

@@ -4,8 +4,7 @@
  * (columns of up to SWEEP_BLOCK vectors) as they are solved and never held together. Sequences and `--dc` are always collected (runCell.ts):
  * a sequence has few steps, and the DC rows are read beside the check's.
  */
-import type { Finding, Summary } from '../core/analysis/report.ts';
-import type { SweepColumns } from '../core/analysis/sweepColumns.ts';
+import type { Finding, Summary, SweepColumns } from '../core/analysis/report.ts';
 import type { TransferReport } from '../core/dc/transfer.ts';
 import type { FoundFunction } from '../core/analysis/foundFunction.ts';
 import { prepareAnalysis } from '../core/power/cellAnalysis.ts';

@@ -4,7 +4,7 @@
  * sweep is read once and only what is shown is kept. Every name and message from the design is
  * printed escaped (printable.ts): a net name cannot move the cursor or rewrite a CI log.
  */
-import type { Finding, Summary } from '../core/analysis/report.ts';
+import type { Finding, Summary, SweepColumns } from '../core/analysis/report.ts';
 import { foundFunctionText } from '../core/analysis/foundFunction.ts';
 import { brief, printable } from '../core/text/printable.ts';
 import { own } from '../core/model/records.ts';
@@ -13,7 +13,7 @@ import { dcLines, transferLines } from './dcText.ts';
 import { proofLines } from './proofText.ts';
 import type { CellFailure, CellSkip } from './loadCells.ts';
 import { vectorJson, type CellJson, type VectorJson } from './runCell.ts';
-import { sweepFindings, sweepRow, type SweepColumns } from '../core/analysis/sweepColumns.ts';
+import { sweepFindings, sweepRow } from '../core/analysis/sweepColumns.ts';
 import type { CellHead, CellTail } from './streamCell.ts';
 
 /** Rows beyond this are left out when they have no findings (the JSON has them all). */

@@ -2,7 +2,7 @@ import { useCallback, useMemo } from 'react';
 import { countOf } from '../core/view/plural.ts';
 import { summaryBadge, summaryLine } from '../core/view/summary.ts';
 import { PROGRESS_THRESHOLD_VECTORS, appSweepLimit, jobSize } from '../worker/protocol.ts';
-import type { SweepColumns } from '../core/analysis/sweepColumns.ts';
+import type { SweepColumns } from '../core/analysis/report.ts';
 import { arrangeRows, kindCounts, vectorRow } from '../core/view/vectorTable.ts';
 import { AUTO_SWEEP_VECTORS } from '../state/analysis.ts';
 import { startProof } from '../state/proof.ts';

@@ -6,14 +6,8 @@
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { checkSequence, checkSweep, SWEEP_BLOCK } from '../../src/core/analysis/check.ts';
-import type { VectorReport } from '../../src/core/analysis/report.ts';
-import {
-  levelAt,
-  reportRows,
-  sweepRow,
-  sweepRows,
-  type SweepColumns,
-} from '../../src/core/analysis/sweepColumns.ts';
+import type { SweepColumns, VectorReport } from '../../src/core/analysis/report.ts';
+import { levelAt, reportRows, sweepRow, sweepRows } from '../../src/core/analysis/sweepColumns.ts';
 import { columnsOfRows } from '../../src/core/analysis/sweepRecorder.ts';
 import { sweepVector } from '../../src/core/analysis/vectors.ts';
 import { circuit } from '../../src/core/model/builder.ts';

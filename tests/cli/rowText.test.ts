@@ -6,7 +6,8 @@
  */
 import { describe, expect, it } from 'vitest';
 import { checkSweep } from '../../src/core/analysis/check.ts';
-import { sweepRow, type SweepColumns } from '../../src/core/analysis/sweepColumns.ts';
+import { sweepRow } from '../../src/core/analysis/sweepColumns.ts';
+import type { SweepColumns } from '../../src/core/analysis/report.ts';
 import { circuit } from '../../src/core/model/builder.ts';
 import { propertyOrder, SweepRowText } from '../../src/cli/rowText.ts';
 import { vectorJson } from '../../src/cli/runCell.ts';

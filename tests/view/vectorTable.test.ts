@@ -1,5 +1,5 @@
 import { describe, expect, it } from 'vitest';
-import type { SweepColumns } from '../../src/core/analysis/sweepColumns.ts';
+import type { SweepColumns } from '../../src/core/analysis/report.ts';
 import { arrangeRows, kindCounts, rowOfVector, vectorRows } from '../../src/core/view/vectorTable.ts';
 import { formatCurrent, formatPower } from '../../src/core/view/format.ts';
 import { nandMissingPullUp, pseudoNmosInverter } from './fixtures.ts';

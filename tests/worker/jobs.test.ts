@@ -1,6 +1,7 @@
 import { describe, expect, it } from 'vitest';
 import { SweepLimitError } from '../../src/core/analysis/check.ts';
-import { reportRows, type SweepColumns } from '../../src/core/analysis/sweepColumns.ts';
+import { reportRows } from '../../src/core/analysis/sweepColumns.ts';
+import type { SweepColumns } from '../../src/core/analysis/report.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import { levelAt, levelStrips } from '../../src/core/view/levelStrip.ts';
 import { vectorRows } from '../../src/core/view/vectorTable.ts';

@@ -7,11 +7,18 @@
  */
 import type { InputVector } from '../model/design.ts';
 import { levelName, LEVEL_0, LEVEL_1 } from '../solver/levels.ts';
-import type { CheckReport, CurrentPath, Finding, FindingKind, Level, VectorReport } from './report.ts';
+import type {
+  CheckReport,
+  CurrentPath,
+  Finding,
+  FindingKind,
+  Level,
+  PackedDetails,
+  RowDetail,
+  SweepColumns,
+  VectorReport,
+} from './report.ts';
 import { sweepVector } from './vectors.ts';
-import type { PackedDetails, RowDetail, SweepColumns } from './report.ts';
-
-export type { PackedDetails, RowDetail, SweepColumns } from './report.ts';
 
 /** Finding kinds in the order of their bits in `SweepColumns.kinds`. */
 export const KIND_ORDER: readonly FindingKind[] = [

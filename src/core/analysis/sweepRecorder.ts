@@ -8,8 +8,8 @@ import type { SolveResult } from '../solver/simulator.ts';
 import { currentPathsOf } from './findingParts.ts';
 import { own } from '../model/records.ts';
 import { LEVEL_0, LEVEL_1, LEVEL_X, LEVEL_Z } from '../solver/levels.ts';
-import type { CurrentPath, Finding, Level, VectorReport } from './report.ts';
-import { kindBit, plainVolts, type RowDetail, type SweepColumns } from './sweepColumns.ts';
+import type { CurrentPath, Finding, Level, RowDetail, SweepColumns, VectorReport } from './report.ts';
+import { kindBit, plainVolts } from './sweepColumns.ts';
 
 /** What every block of one sweep shares. */
 export interface RecorderShape {

@@ -5,15 +5,8 @@
  * sweep's columns (core/analysis/sweepColumns.ts): filtering and sorting touch only typed arrays,
  * and a row object is built only for the rows on screen.
  */
-import type { FindingKind, Level } from '../analysis/report.ts';
-import {
-  detailOf,
-  KIND_ORDER,
-  levelAt,
-  outputLevel,
-  rowVector,
-  type SweepColumns,
-} from '../analysis/sweepColumns.ts';
+import type { FindingKind, Level, SweepColumns } from '../analysis/report.ts';
+import { detailOf, KIND_ORDER, levelAt, outputLevel, rowVector } from '../analysis/sweepColumns.ts';
 import type { InputValue, InputVector } from '../model/design.ts';
 import { LEVEL_0, LEVEL_1, LEVEL_Z } from '../solver/levels.ts';
 
