@@ -7,12 +7,11 @@ import { packedForTransfer } from '../core/analysis/sweepColumns.ts';
 import { analyseCell } from '../core/power/cellAnalysis.ts';
 import { sizingReport } from '../core/sizing/sizingReport.ts';
 import { checkLibraryCell } from '../core/analysis/libraryCheck.ts';
-import { usableExpectations as usableExpectationsOf } from '../core/expect/problems.ts';
+import { usableExpectations } from '../core/expect/problems.ts';
 import { StepLevelRecorder } from '../core/view/sequenceLevels.ts';
 import { transfer, vectorDc } from './dcJobs.ts';
 import { appSweepLimit } from './protocol.ts';
 import type {
-  CellInput,
   CheckJob,
   CheckResult,
   JobProgress,
@@ -28,14 +27,6 @@ import type {
 /** Progress messages cross a thread boundary: at most one per this many milliseconds. */
 const PROGRESS_INTERVAL_MS = 50;
 
-/** The cell's expected functions a check can use, and notes for the rest (core/view/expectation.ts). */
-export function usableExpectations(cell: CellInput): {
-  expectations: Record<string, string>;
-  notes: string[];
-} {
-  return usableExpectationsOf(cell.netlist, cell.expectations);
-}
-
 export function throttled(onProgress: (p: JobProgress) => void): (done: number, total: number) => void {
   let last = -Infinity;
   return (done, total) => {
@@ -49,7 +40,7 @@ export function throttled(onProgress: (p: JobProgress) => void): (done: number, 
 type CheckPart = Pick<CheckResult, 'report' | 'power' | 'stepLevels'>;
 
 function sweep(job: SweepJob, onProgress: (p: JobProgress) => void): CheckPart {
-  const { expectations, notes } = usableExpectations(job.cell);
+  const { expectations, notes } = usableExpectations(job.cell.netlist, job.cell.expectations);
   const undriven = job.undrivenInputs === true;
   const { report, power } = analyseCell(job.cell.netlist, {
     technology: job.cell.technology,
@@ -65,7 +56,7 @@ function sweep(job: SweepJob, onProgress: (p: JobProgress) => void): CheckPart {
 }
 
 function sequence(job: SequenceJob, onProgress: (p: JobProgress) => void): CheckPart {
-  const { expectations, notes } = usableExpectations(job.cell);
+  const { expectations, notes } = usableExpectations(job.cell.netlist, job.cell.expectations);
   const levels = new StepLevelRecorder();
   const { report, power } = analyseCell(job.cell.netlist, {
     technology: job.cell.technology,

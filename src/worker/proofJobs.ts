@@ -6,7 +6,8 @@
 import { cellsFromText } from '../core/netlist-io/cellFiles.ts';
 import { compareCells } from '../core/proof/compare.ts';
 import { proveCell } from '../core/proof/prove.ts';
-import { throttled, usableExpectations } from './jobs.ts';
+import { usableExpectations } from '../core/expect/problems.ts';
+import { throttled } from './jobs.ts';
 import type {
   CompareJob,
   CompareResult,
@@ -25,7 +26,7 @@ export function proof(
   job: ProofJob,
   onProgress: (done: number, total: number) => void,
 ): Pick<ProofResult, 'report' | 'error'> {
-  const { expectations, notes } = usableExpectations(job.cell);
+  const { expectations, notes } = usableExpectations(job.cell.netlist, job.cell.expectations);
   try {
     const report = proveCell(job.cell.netlist, {
       technology: job.cell.technology,

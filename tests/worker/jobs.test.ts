@@ -5,7 +5,8 @@ import type { SweepColumns } from '../../src/core/analysis/report.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import { levelAt, levelStrips } from '../../src/core/view/levelStrip.ts';
 import { vectorRows } from '../../src/core/view/vectorTable.ts';
-import { forTransfer, usableExpectations } from '../../src/worker/jobs.ts';
+import { usableExpectations } from '../../src/core/expect/problems.ts';
+import { forTransfer } from '../../src/worker/jobs.ts';
 import { runJob as runAnyJob } from '../../src/worker/runJob.ts';
 import type { CheckResult, SequenceJob, SweepJob } from '../../src/worker/protocol.ts';
 import { APP_MAX_INPUTS, MAX_INPUTS_WITH_UNDRIVEN, jobSize } from '../../src/worker/protocol.ts';
@@ -99,7 +100,7 @@ describe('sweep job', () => {
 
 describe('expected functions in jobs', () => {
   it('keeps usable functions and turns the rest into notes', () => {
-    const { expectations, notes } = usableExpectations(design(nand2, { Y: '!(A & B)', Q: 'A' }));
+    const { expectations, notes } = usableExpectations(nand2, { Y: '!(A & B)', Q: 'A' });
     expect(expectations).toEqual({ Y: '!(A & B)' });
     expect(notes).toHaveLength(1);
     expect(notes[0]).toContain('Q');
