@@ -1,5 +1,7 @@
 // Our own storage format for long designs; gzip is RFC 1952 and base64 RFC 4648 (standards the
-// browser implements); the sizes below are measured, not published.
+// browser implements); the sizes below are measured, not published. Sources: RFC 1952 (GZIP file
+// format), RFC 4648 §4 (base64); that a cut gzip stream fails to inflate follows from RFC 1952 §2.3.1
+// (the CRC32 and ISIZE trailer).
 import { describe, expect, it } from 'vitest';
 import { isPacked, PACK_ABOVE, packForStorage, unpackFromStorage } from '../../src/app/storedText.ts';
 import { serializeDesign } from '../../src/core/format/designFile.ts';

@@ -2,6 +2,10 @@
  * `railwise check` on a hierarchical netlist: findings and current paths name devices inside
  * instances by their hierarchical names (docs/semantics.md §1, §5), and `--found` prints the
  * function each cell computes.
+ *
+ * Sources: the functions named (two inverters in a row give Y = A; a NAND2 gives ¬(A·B) = ¬A + ¬B by
+ * De Morgan's law) are common practice, no source; the resistor-load inverter's static path VDD → load →
+ * output → NMOS → GND is the usual ratioed-inverter current path (common practice, no source).
  */
 import { mkdtempSync, writeFileSync } from 'node:fs';
 import { tmpdir } from 'node:os';

@@ -1,4 +1,8 @@
-/** The piecewise JSON writer: the same text as JSON.stringify(value, null, 2), and always a document. */
+/** The piecewise JSON writer: the same text as JSON.stringify(value, null, 2), and always a document.
+ *
+ * Source: the text must equal what ECMA-262 (ECMAScript), JSON.stringify with an indent of 2, writes,
+ * and be valid JSON per RFC 8259; the comparison is against the engine's own JSON.stringify.
+ */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
 import { Later, Raw, Stream, writeJson } from '../../src/cli/jsonWriter.ts';

@@ -2,6 +2,10 @@
  * The command line on netlists written the way open kits publish them (our own made-up fixtures,
  * each reproducing a construct met in published libraries) and checked against a Liberty file's
  * published functions (docs/semantics.md §4–§6).
+ *
+ * Sources: the functions are Liberty `function` attributes in our own fixture library (the attribute's
+ * syntax as open libraries publish it); the verdicts follow from the gates' truth tables (AOI21 and OAI21
+ * differ on 2 of their 8 vectors; a tristate buffer is Z when its enable is off): common practice, no source.
  */
 import { describe, expect, it } from 'vitest';
 import { json, railwise } from './inProcess.ts';

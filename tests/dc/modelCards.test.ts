@@ -2,6 +2,10 @@
  * Model cards reach the DC answer (docs/semantics.md §1, "Model cards"; §2, "DC levels"): the
  * same inverter read with its own `.model` cards switches where the cards' k' ratio says, not where
  * the technology's defaults would put it.
+ *
+ * Sources: the closed-form VM is Weste & Harris, CMOS VLSI Design, 4th ed. (2011), eq. 2.50 form; the
+ * default technology's k'n = 115 µA/V², k'p = 30 µA/V², VTn = 0.43 V are Rabaey, Chandrakasan & Nikolić,
+ * Digital Integrated Circuits, 2nd ed. (2003), tables 3.2 and 3.3 (as src/core/model/technology.ts cites, from memory); that a stronger pull-up raises a pseudo-NMOS VOL is common practice, no source.
  */
 import { describe, expect, it } from 'vitest';
 import { transferCurves } from '../../src/core/dc/transfer.ts';
