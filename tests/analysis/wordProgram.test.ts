@@ -5,7 +5,8 @@
  */
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
-import { ONES, runWordProgram, WordProgram, ZERO } from '../../src/core/analysis/wordProgram.ts';
+import { ONES, WordProgram, ZERO } from '../../src/core/analysis/wordProgram.ts';
+import { runWordProgram } from '../../src/core/analysis/wordRun.ts';
 
 /** The word a reference names: a slot's, or its complement's (negative references). */
 function wordAt(mem: Int32Array, ref: number, words: number, w: number): number {
@@ -26,14 +27,12 @@ function evaluate(leaves: readonly number[], k: number): number[] {
   const words = 4;
   const program = new WordProgram();
   const controls = Int32Array.from({ length: k }, () => program.slot());
-  program.beginGroup();
-  const out = program.fromLeaves(Int32Array.from(leaves), controls);
-  program.keep(out);
-  program.endGroup();
-  const mem = new Int32Array(program.slotCount * words);
+  const built = program.compiled([program.fromLeaves(Int32Array.from(leaves), controls)]);
+  const out = built.physical(program.fromLeaves(Int32Array.from(leaves), controls));
+  const mem = new Int32Array(built.slotCount * words);
   mem.fill(-1, ONES * words, (ONES + 1) * words);
-  controls.forEach((slot, i) => mem.set(controlWords(i, words), slot * words));
-  runWordProgram(program.compiled(), mem, words);
+  controls.forEach((slot, i) => mem.set(controlWords(i, words), built.physical(slot) * words));
+  runWordProgram(built.ops, mem, words);
   return Array.from({ length: 32 * words }, (_, v) => (wordAt(mem, out, words, v >> 5) >>> (v & 31)) & 1);
 }
 
@@ -58,12 +57,11 @@ describe('word program', () => {
     const program = new WordProgram();
     const [a, b] = [program.slot(), program.slot()];
     const controls = Int32Array.of(a, b);
-    program.beginGroup();
     expect(program.fromLeaves(Int32Array.of(0, 0, 0, 0), controls)).toBe(ZERO);
     expect(program.fromLeaves(Int32Array.of(-1, -1, -1, -1), controls)).toBe(ONES);
     expect(program.fromLeaves(Int32Array.of(0, 0, -1, -1), controls)).toBe(b);
     expect(program.fromLeaves(Int32Array.of(-1, -1, 0, 0), controls)).toBe(~b);
-    expect(program.compiled()).toHaveLength(0);
+    expect(program.compiled().ops).toHaveLength(0);
   });
 
   it('equals the table on random functions of up to 7 controls', () => {
@@ -86,7 +84,6 @@ describe('word program', () => {
   it('expression operations fold constants and compute the rest word-wise', () => {
     const program = new WordProgram();
     const a = program.slot();
-    program.beginGroup();
     expect(program.and(a, ZERO)).toBe(ZERO);
     expect(program.or(a, ONES)).toBe(ONES);
     expect(program.xor(a, ZERO)).toBe(a);
@@ -94,13 +91,38 @@ describe('word program', () => {
     const b = program.slot();
     const nor = program.and(program.not(a), program.not(b));
     const x = program.xor(nor, b);
-    program.keep(x);
-    program.endGroup();
-    const mem = new Int32Array(program.slotCount);
+    const built = program.compiled([x]);
+    const mem = new Int32Array(built.slotCount);
     mem[ONES] = -1;
-    mem[a] = 0x0f0f0f0f;
-    mem[b] = 0x00ff00ff;
-    runWordProgram(program.compiled(), mem, 1);
-    expect(wordAt(mem, x, 1, 0)).toBe(~(0x0f0f0f0f | 0x00ff00ff) ^ 0x00ff00ff);
+    mem[built.physical(a)] = 0x0f0f0f0f;
+    mem[built.physical(b)] = 0x00ff00ff;
+    runWordProgram(built.ops, mem, 1);
+    expect(wordAt(mem, built.physical(x), 1, 0)).toBe(~(0x0f0f0f0f | 0x00ff00ff) ^ 0x00ff00ff);
+  });
+
+  it('shares identical nodes across the program, drops what nothing reads and reuses freed slots', () => {
+    const program = new WordProgram();
+    const [a, b, c] = [program.slot(), program.slot(), program.slot()];
+    const carry = leavesOf(3, (e) => bits(e) >= 2);
+    const first = program.fromLeaves(Int32Array.from(carry), Int32Array.of(a, b, c));
+    // The same function of the same controls built again (another group) is the same node.
+    expect(program.fromLeaves(Int32Array.from(carry), Int32Array.of(a, b, c))).toBe(first);
+    program.xor(a, c); // read by nothing: dropped
+    // A chain of four: each link is read once, by the next, so two slots serve the whole chain.
+    let chain = first;
+    for (let i = 0; i < 4; i++) chain = program.and(program.or(chain, a), b);
+    const built = program.compiled([chain]);
+    expect(built.ops.length / 5).toBe(3 + 8); // the carry's three, the chain's eight
+    expect(built.slotCount).toBeLessThan(2 + 3 + 1 + 3);
+    const mem = new Int32Array(built.slotCount);
+    mem[ONES] = -1;
+    const [wa, wb, wc] = [0x0f0f0f0f, 0x00ff00ff, 0x33333333];
+    mem[built.physical(a)] = wa;
+    mem[built.physical(b)] = wb;
+    mem[built.physical(c)] = wc;
+    runWordProgram(built.ops, mem, 1);
+    let expectedChain = (wa & wb) | (wa & wc) | (wb & wc);
+    for (let i = 0; i < 4; i++) expectedChain = (expectedChain | wa) & wb;
+    expect(wordAt(mem, built.physical(chain), 1, 0)).toBe(expectedChain);
   });
 });

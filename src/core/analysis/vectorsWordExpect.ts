@@ -30,10 +30,8 @@ export function wordExpectations(
   }
   return {
     mismatch(program, netSlots, fallback) {
-      program.beginGroup();
       for (const [net, e] of checks)
         program.orInto(fallback, program.xor(wordOf(e, c, program, netSlots), netSlots[net]!));
-      program.endGroup();
     },
   };
 }

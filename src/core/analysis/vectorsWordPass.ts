@@ -12,7 +12,8 @@ import type { PassProgress } from './pass.ts';
 import { SWEEP_BLOCK, sweepVector } from './vectors.ts';
 import { wordExpectations } from './vectorsWordExpect.ts';
 import { wordPlan, wordPlanRefusal, type WordPlan } from './vectorsWordPlan.ts';
-import { ONES, runWordProgram } from './wordProgram.ts';
+import { ONES, ZERO } from './wordProgram.ts';
+import { runWordProgram } from './wordRun.ts';
 
 /** Where the pass writes its rows, in order. */
 export interface WordRows {
@@ -39,6 +40,9 @@ export class WordSweep {
   private readonly mem: Int32Array;
   private readonly levels: Int32Array;
   private readonly fast: Int32Array;
+  /** Physical slots of the inputs (in `inputNets` order) and of the fallback accumulator. */
+  private readonly inputSlots: Int32Array;
+  private readonly fallback: number;
   /** Per reported net: the slots of its words and -1 where a word is the slot's complement. */
   private readonly highSlot: Int32Array;
   private readonly highFlip: Int32Array;
@@ -47,19 +51,24 @@ export class WordSweep {
 
   private constructor(
     private readonly simulator: Simulator,
-    private readonly plan: WordPlan,
+    plan: WordPlan,
     total: number,
   ) {
-    this.ops = plan.program.compiled();
+    const program = plan.program.compiled([...plan.high, ...plan.floating]);
+    this.ops = program.ops;
     this.words = Math.min(BLOCK_WORDS, total / 32);
-    this.mem = new Int32Array(plan.program.slotCount * this.words);
+    this.mem = new Int32Array(program.slotCount * this.words);
     this.mem.fill(-1, ONES * this.words, (ONES + 1) * this.words);
     this.levels = new Int32Array(2 * plan.high.length * this.words);
     this.fast = new Int32Array(this.words);
-    this.highSlot = plan.high.map(slotOf);
-    this.highFlip = plan.high.map(flipOf);
-    this.floatingSlot = plan.floating.map(slotOf);
-    this.floatingFlip = plan.floating.map(flipOf);
+    this.inputSlots = plan.inputSlots.map(program.physical);
+    this.fallback = program.physical(plan.fallback);
+    const high = plan.high.map(program.physical);
+    const floating = plan.floating.map(program.physical);
+    this.highSlot = high.map(slotOf);
+    this.highFlip = high.map(flipOf);
+    this.floatingSlot = floating.map(slotOf);
+    this.floatingFlip = floating.map(flipOf);
   }
 
   /**
@@ -88,11 +97,11 @@ export class WordSweep {
   run(rows: WordRows, onProgress?: PassProgress): number {
     const inputs = this.simulator.compiled.netlist.inputs;
     const total = 2 ** inputs.length;
-    const { words, mem, plan } = this;
+    const { words, mem, fallback } = this;
     const block = 32 * words;
     for (let first = 0; first < total; first += block) {
       this.loadInputs(first);
-      mem.fill(0, plan.fallback * words, (plan.fallback + 1) * words);
+      mem.fill(0, fallback * words, (fallback + 1) * words);
       runWordProgram(this.ops, mem, words);
       this.writeLevels(rows);
       for (let w = 0; w < words; w++) this.writeRows(rows, this.fast[w]!, first + 32 * w);
@@ -103,8 +112,7 @@ export class WordSweep {
 
   /** The inputs' words for the block from vector `first`: the low five change within a word. */
   private loadInputs(first: number): void {
-    const { words, mem } = this;
-    const { inputSlots } = this.plan;
+    const { words, mem, inputSlots } = this;
     const n = inputSlots.length;
     for (let i = 0; i < n; i++) {
       const p = n - 1 - i;
@@ -114,10 +122,14 @@ export class WordSweep {
     }
   }
 
-  /** The block's fast lanes and level words, handed to the rows. */
+  /**
+   * The block's fast lanes and level words, handed to the rows. A net that never floats (its
+   * floating word the constant zero) keeps its all-zero code-bit-1 run from the first block on, and
+   * a level word that is not a complement is copied as it is.
+   */
   private writeLevels(rows: WordRows): void {
     const { levels, mem, words, fast, highSlot, highFlip, floatingSlot, floatingFlip } = this;
-    const fallback = this.plan.fallback * words;
+    const fallback = this.fallback * words;
     for (let w = 0; w < words; w++) fast[w] = ~mem[fallback + w]!;
     for (let j = 0; j < highSlot.length; j++) {
       const [high, hf, z, zf] = [
@@ -127,10 +139,14 @@ export class WordSweep {
         floatingFlip[j]!,
       ];
       const [bit0, bit1] = [2 * j * words, (2 * j + 1) * words];
-      for (let w = 0; w < words; w++) {
-        const floats = mem[z + w]! ^ zf;
-        levels[bit0 + w] = (mem[high + w]! ^ hf) | floats; // 0 → 00, 1 → 01, Z → 11 (X never fast)
-        levels[bit1 + w] = floats;
+      if (z === ZERO && zf === 0 && hf === 0) levels.set(mem.subarray(high, high + words), bit0);
+      else if (z === ZERO && zf === 0) for (let w = 0; w < words; w++) levels[bit0 + w] = ~mem[high + w]!;
+      else {
+        for (let w = 0; w < words; w++) {
+          const floats = mem[z + w]! ^ zf;
+          levels[bit0 + w] = (mem[high + w]! ^ hf) | floats; // 0 → 00, 1 → 01, Z → 11 (X never fast)
+          levels[bit1 + w] = floats;
+        }
       }
     }
     rows.addWords(levels, words, fast);

@@ -63,31 +63,27 @@ export function wordPlan(c: CompiledNetlist, tables: ComponentTables, wanted: In
   const fallback = program.slot();
   const leaves = new LeafCache(c, reported);
   for (const shape of tables.shapes) {
-    if (shape.controls.some((n) => known[n] !== 1)) return null; // a gate no group or input drives
-    const controls = Int32Array.from(shape.controls, (n) => netSlots[n]!);
+    const controls = new Int32Array(shape.controls.length);
+    for (let i = 0; i < controls.length; i++) {
+      const n = shape.controls[i]!;
+      if (known[n] !== 1) return null; // a gate no group or input drives
+      controls[i] = netSlots[n]!;
+    }
     const table = tables.binary(shape.index);
     if (table.kind === 'none') return null;
-    program.beginGroup();
     program.orInto(fallback, program.fromLeaves(leaves.fallback(table), controls));
     for (let i = 0; i < shape.nets.length; i++) {
       const n = shape.nets[i]!;
       if (needed[n] !== 1) continue;
-      netSlots[n] = kept(program, program.fromLeaves(leaves.level(table, i, LEVEL_1), controls));
-      floating[n] = kept(program, program.fromLeaves(leaves.level(table, i, LEVEL_Z), controls));
+      netSlots[n] = program.fromLeaves(leaves.level(table, i, LEVEL_1), controls);
+      floating[n] = program.fromLeaves(leaves.level(table, i, LEVEL_Z), controls);
       known[n] = 1;
     }
-    program.endGroup();
   }
   if (wanted.some((n) => known[n] !== 1)) return null;
   const high = Int32Array.from(wanted, (n) => netSlots[n]!);
   const float = Int32Array.from(wanted, (n) => floating[n]!);
   return { program, inputSlots, high, floating: float, fallback, netSlots };
-}
-
-/** A function's reference kept past its group: a temporary becomes the net's own. */
-function kept(program: WordProgram, ref: number): number {
-  program.keep(ref);
-  return ref;
 }
 
 /**

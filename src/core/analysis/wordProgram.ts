@@ -1,13 +1,17 @@
-// Hot loop: slots and operands are in range by construction, so `!` marks them (no run-time cost).
+// Slots and operands are in range by construction, so `!` marks them (no run-time cost).
 /**
  * The bit-parallel sweep's word program (docs/semantics.md §2.10): a list of word operations over
  * slots, each slot a run of words of 32 vectors (bit j of word w: vector 32w + j). The program is
  * data, built once per compile from the component tables' leaves, and run over a block of words
- * per operation, so its cost per vector is a few machine operations. No code is generated.
+ * per operation (wordRun.ts), so its cost per vector is a few machine operations. No code is
+ * generated.
  *
  * A Boolean function of a group's controls is built as a reduced decision diagram from its table's
  * 2^k leaves (Shannon expansion, highest control first, equal halves merged, identical nodes
- * shared), and each node becomes one operation, simplified where a side is constant.
+ * shared across the whole program, so a later group reuses what an earlier one computed), and each
+ * node becomes one operation, simplified where a side is constant. Every operation writes a fresh
+ * virtual slot while the program is built; `compiled` then drops operations nothing reads and
+ * gives the virtual slots physical ones, reusing a slot once its last reader has run.
  */
 
 /**
@@ -17,65 +21,55 @@
 export const ZERO = 0;
 export const ONES = 1;
 
-const OP_NOT = 0;
-const OP_AND = 1;
+export const OP_NOT = 0;
+export const OP_AND = 1;
 /** a & ~b */
-const OP_AND_NOT = 2;
-const OP_OR = 3;
+export const OP_AND_NOT = 2;
+export const OP_OR = 3;
 /** a | ~b */
-const OP_OR_NOT = 4;
-const OP_XOR = 5;
+export const OP_OR_NOT = 4;
+export const OP_XOR = 5;
 /** c ? b : a */
-const OP_MUX = 6;
+export const OP_MUX = 6;
 /** d |= a */
-const OP_OR_INTO = 7;
+export const OP_OR_INTO = 7;
 
-/** Numbers per operation: code, destination, three operands. */
-const STRIDE = 5;
+/** Numbers per operation: code, destination, three operands (unused ones name slot ZERO). */
+export const STRIDE = 5;
+
+/** Bound on virtual slots, so that a pair of references fits one exact map key. */
+const MAX_SLOTS = 1 << 25;
 
 /** The reference to the complement of `ref`; constants stay slots 0 and 1. */
 export function complement(ref: number): number {
   return ref === ZERO ? ONES : ref === ONES ? ZERO : ~ref;
 }
 
+/** A program ready to run: its operations over physical slots, and where each reference lives. */
+export interface CompiledWordProgram {
+  readonly ops: Int32Array;
+  readonly slotCount: number;
+  /** The physical reference of a reference given to `compiled` as read after the run (or a kept slot). */
+  physical(ref: number): number;
+}
+
 export class WordProgram {
   private readonly ops: number[] = [];
-  /** Slots allocated so far, and the temporaries free for reuse. */
   private slots = 2;
-  private readonly free: number[] = [];
-  /** Nodes of the group being built, by (control, low, high): identical nodes computed once. */
-  private readonly nodes = new Map<string, number>();
-  private readonly temps: number[] = [];
+  /** Slots made by `slot()` (and the constants): written before the run or accumulated, never reused. */
+  private readonly kept: number[] = [ZERO, ONES];
+  /** Nodes by control, then by (low, high): identical nodes computed once in the whole program. */
+  private readonly nodes = new Map<number, Map<number, number>>();
 
-  get slotCount(): number {
-    return this.slots;
-  }
-
-  /** A slot kept for the whole program (a net, the inputs, an accumulator). */
+  /** A slot kept for the whole program (an input, an accumulator). */
   slot(): number {
+    this.kept.push(this.slots);
     return this.slots++;
-  }
-
-  /** Starts a group: its temporaries are freed when it ends, its identical nodes shared within it. */
-  beginGroup(): void {
-    this.nodes.clear();
-  }
-
-  /** Ends a group: temporaries not kept by `keep` become free for the next group. */
-  endGroup(): void {
-    this.free.push(...this.temps);
-    this.temps.length = 0;
-  }
-
-  /** Keeps the slot of a reference past its group (a net's word lives in it from now on). */
-  keep(ref: number): void {
-    const i = this.temps.indexOf(ref < 0 ? ~ref : ref);
-    if (i >= 0) this.temps.splice(i, 1);
   }
 
   /**
    * The function whose value at entry e is `leaves[e]` (0 or -1), entry bit i being control i, whose
-   * word `controls[i]` refers to: a reference to a constant, a control, or a temporary.
+   * word `controls[i]` refers to: a reference to a constant, a control, or an earlier function.
    */
   fromLeaves(leaves: Int32Array, controls: Int32Array): number {
     return this.build(leaves, 0, controls.length, controls);
@@ -94,11 +88,13 @@ export class WordProgram {
     if (c < 0) return this.mux(~c, high, low);
     if (c === ZERO || c === ONES) return c === ONES ? high : low;
     if (low === high) return low;
-    const key = `${c},${low},${high}`;
-    let ref = this.nodes.get(key);
+    let byControl = this.nodes.get(c);
+    if (byControl === undefined) this.nodes.set(c, (byControl = new Map()));
+    const key = (low + MAX_SLOTS) * 2 * MAX_SLOTS + (high + MAX_SLOTS);
+    let ref = byControl.get(key);
     if (ref === undefined) {
       ref = this.muxOf(c, low, high);
-      this.nodes.set(key, ref);
+      byControl.set(key, ref);
     }
     return ref;
   }
@@ -146,62 +142,81 @@ export class WordProgram {
     if (a !== ZERO) this.ops.push(OP_OR_INTO, into, this.positive(a), ZERO, ZERO);
   }
 
-  /** The slot holding the reference's word: a complement is computed into a temporary. */
+  /** The slot holding the reference's word: a complement is computed into a new slot. */
   private positive(ref: number): number {
     return ref >= 0 ? ref : this.emit(OP_NOT, ~ref, ZERO, ZERO);
   }
 
   private emit(code: number, a: number, b: number, c: number): number {
-    const d = this.free.pop() ?? this.slots++;
-    this.temps.push(d);
+    if (this.slots >= MAX_SLOTS) throw new RangeError(`a word program holds at most ${MAX_SLOTS} slots`);
+    const d = this.slots++;
     this.ops.push(code, d, a, b, c);
     return d;
   }
 
-  /** The operations, ready to run. */
-  compiled(): Int32Array {
-    return Int32Array.from(this.ops);
+  /**
+   * The program ready to run, for the references in `read` (read after the run) and the kept slots:
+   * operations that neither reaches are dropped, and a slot is reused once its last reader has run
+   * (an operation may write the slot of an operand it reads last: every operation works word by
+   * word, reading word w before writing word w).
+   */
+  compiled(read: ArrayLike<number> = []): CompiledWordProgram {
+    const pinned = new Uint8Array(this.slots);
+    for (const s of this.kept) pinned[s] = 1;
+    for (let i = 0; i < read.length; i++) pinned[slotOf(read[i]!)] = 1;
+    const place = new Int32Array(this.slots).fill(-1);
+    const { ops, slotCount } = allocate(this.ops, pinned, place);
+    return { ops, slotCount, physical: (ref) => (ref < 0 ? ~place[~ref]! : place[ref]!) };
   }
 }
 
+const slotOf = (ref: number): number => (ref < 0 ? ~ref : ref);
+
 /**
- * Runs the operations over `words` words per slot: slot s is `mem[s * words …]`. Slots 0 and 1 must
- * hold zeros and ones, and the inputs' slots their words.
+ * The operations that reach a pinned slot, over physical slots: pinned slots first, in order, then
+ * each result in a slot freed by an earlier operation's last read, or a new one. `place` receives
+ * each virtual slot's physical slot (-1 once freed, and for dropped results).
  */
-export function runWordProgram(ops: Int32Array, mem: Int32Array, words: number): void {
-  for (let p = 0; p < ops.length; p += STRIDE) {
-    const d = ops[p + 1]! * words;
-    const a = ops[p + 2]! * words;
-    const b = ops[p + 3]! * words;
-    const c = ops[p + 4]! * words;
-    switch (ops[p]) {
-      case OP_NOT:
-        for (let w = 0; w < words; w++) mem[d + w] = ~mem[a + w]!;
-        break;
-      case OP_AND:
-        for (let w = 0; w < words; w++) mem[d + w] = mem[a + w]! & mem[b + w]!;
-        break;
-      case OP_AND_NOT:
-        for (let w = 0; w < words; w++) mem[d + w] = mem[a + w]! & ~mem[b + w]!;
-        break;
-      case OP_OR:
-        for (let w = 0; w < words; w++) mem[d + w] = mem[a + w]! | mem[b + w]!;
-        break;
-      case OP_OR_NOT:
-        for (let w = 0; w < words; w++) mem[d + w] = mem[a + w]! | ~mem[b + w]!;
-        break;
-      case OP_XOR:
-        for (let w = 0; w < words; w++) mem[d + w] = mem[a + w]! ^ mem[b + w]!;
-        break;
-      case OP_MUX:
-        for (let w = 0; w < words; w++) {
-          const s = mem[c + w]!;
-          mem[d + w] = (mem[a + w]! & ~s) | (mem[b + w]! & s);
-        }
-        break;
-      case OP_OR_INTO:
-        for (let w = 0; w < words; w++) mem[d + w]! |= mem[a + w]!;
-        break;
+function allocate(
+  ops: readonly number[],
+  pinned: Uint8Array,
+  place: Int32Array,
+): { ops: Int32Array; slotCount: number } {
+  const count = ops.length / STRIDE;
+  const used = neededOps(ops, count, pinned);
+  const lastRead = new Int32Array(pinned.length).fill(-1);
+  for (let i = 0; i < count; i++)
+    if (used[i] === 1) for (let k = 2; k < STRIDE; k++) lastRead[ops[i * STRIDE + k]!] = i;
+  let next = 0;
+  for (let s = 0; s < pinned.length; s++) if (pinned[s] === 1) place[s] = next++;
+  const free: number[] = [];
+  const out: number[] = [];
+  for (let i = 0; i < count; i++) {
+    if (used[i] === 0) continue;
+    const at = i * STRIDE;
+    out.push(ops[at]!, 0, place[ops[at + 2]!]!, place[ops[at + 3]!]!, place[ops[at + 4]!]!);
+    for (let k = 2; k < STRIDE; k++) {
+      const s = ops[at + k]!;
+      if (pinned[s] === 1 || lastRead[s] !== i || place[s]! < 0) continue;
+      free.push(place[s]!);
+      place[s] = -1;
     }
+    const d = ops[at + 1]!;
+    if (place[d] === -1) place[d] = free.pop() ?? next++;
+    out[out.length - 4] = place[d]!;
   }
+  return { ops: Int32Array.from(out), slotCount: next };
+}
+
+/** Per operation, 1 when its result reaches a pinned slot (walked backwards from the end). */
+function neededOps(ops: readonly number[], count: number, pinned: Uint8Array): Uint8Array {
+  const live = pinned.slice();
+  const used = new Uint8Array(count);
+  for (let i = count - 1; i >= 0; i--) {
+    const at = i * STRIDE;
+    if (live[ops[at + 1]!] === 0) continue;
+    used[i] = 1;
+    for (let k = 2; k < STRIDE; k++) live[ops[at + k]!] = 1;
+  }
+  return used;
 }

@@ -75,18 +75,24 @@ export class Frame {
     this.labelRank = new Int32Array(maxNets);
   }
 
-  /** Per global element: its position when elements are sorted by device name (built on first use). */
+  /** Per global element: its position when elements are sorted by device name, equal names in element order (built on first use). */
   nameRanks(): Int32Array {
     if (this.ranks === null) {
       const { c } = this;
-      const names = Array.from({ length: c.chCount }, (_, e) => c.netlist.devices[c.chDevice[e]!]!.name);
-      const order = Array.from({ length: c.chCount }, (_, e) => e);
-      order.sort((x, y) => {
-        const [a, b] = [names[x]!, names[y]!];
-        return a < b ? -1 : a > b ? 1 : x - y;
-      });
-      this.ranks = new Int32Array(c.chCount);
-      order.forEach((e, r) => (this.ranks![e] = r));
+      const names: string[] = [];
+      for (let e = 0; e < c.chCount; e++) names.push(c.netlist.devices[c.chDevice[e]!]!.name);
+      // The default sort orders strings by UTF-16 code units, as `<` does; equal names take
+      // consecutive ranks in element order.
+      const sorted = names.slice().sort();
+      const nextRank = new Map<string, number>();
+      for (let r = sorted.length - 1; r >= 0; r--) nextRank.set(sorted[r]!, r);
+      const ranks = new Int32Array(c.chCount);
+      for (let e = 0; e < c.chCount; e++) {
+        const r = nextRank.get(names[e]!)!;
+        ranks[e] = r;
+        nextRank.set(names[e]!, r + 1);
+      }
+      this.ranks = ranks;
     }
     return this.ranks;
   }

@@ -1,6 +1,6 @@
 // Hot loop: indexes here are in range by construction, so `!` marks them (no run-time cost).
 import type { CompiledNetlist } from '../compile/compile.ts';
-import { csr, csrFrom, type Csr } from '../compile/csr.ts';
+import { csrFrom, type Csr } from '../compile/csr.ts';
 import { GATE_NOT_TIED, selfGateEnds } from './selfGated.ts';
 
 /**
@@ -47,7 +47,8 @@ function find(parent: Int32Array, x: number): number {
 }
 
 function channelComponents(c: CompiledNetlist, isSource: Uint8Array): Int32Array {
-  const parent = Int32Array.from({ length: c.netCount }, (_, i) => i);
+  const parent = new Int32Array(c.netCount);
+  for (let i = 0; i < parent.length; i++) parent[i] = i;
   for (let e = 0; e < c.chCount; e++) {
     const a = c.chA[e]!;
     const b = c.chB[e]!;
@@ -101,8 +102,12 @@ export function buildTopology(c: CompiledNetlist, undriven: ReadonlySet<number> 
     } else bridges.push(e);
   }
   const cccElements = csrFrom(cccCount, elementRows, elementItems);
-  const elemLocalA = Int32Array.from(c.chA, (n) => localIndex[n]!);
-  const elemLocalB = Int32Array.from(c.chB, (n) => localIndex[n]!);
+  const elemLocalA = new Int32Array(c.chCount);
+  const elemLocalB = new Int32Array(c.chCount);
+  for (let e = 0; e < c.chCount; e++) {
+    elemLocalA[e] = localIndex[c.chA[e]!]!;
+    elemLocalB[e] = localIndex[c.chB[e]!]!;
+  }
   const elemLocal = new Int32Array(c.chCount).fill(-1);
   for (let k = 0; k < cccCount; k++) {
     for (let i = cccElements.start[k]!; i < cccElements.start[k + 1]!; i++) {
@@ -216,8 +221,8 @@ export function stronglyConnectedOrder(count: number, edges: Csr): Csr {
   }
   // Tarjan emits groups in reverse topological order.
   groups.reverse();
-  return csr(
-    groups.length,
-    groups.flatMap((g, i) => g.map((k) => [i, k] as [number, number])),
-  );
+  const rows: number[] = [];
+  const items: number[] = [];
+  groups.forEach((g, i) => g.forEach((k) => (rows.push(i), items.push(k))));
+  return csrFrom(groups.length, rows, items);
 }

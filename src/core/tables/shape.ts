@@ -53,13 +53,14 @@ export function groupShapes(
       if (topology.isSource[c.chA[e]!]) add(c.chA[e]!);
       if (topology.isSource[c.chB[e]!]) add(c.chB[e]!);
     }
-    const observed = Uint8Array.from(nets, (n) => (feedsGate(c, n) || output[n] ? 1 : 0));
+    const observed = new Uint8Array(nets.length);
+    for (let i = 0; i < nets.length; i++) observed[i] = feedsGate(c, nets[i]!) || output[nets[i]!] ? 1 : 0;
     shapes.push({
       index: s,
       components,
       nets,
       elements,
-      controls: Int32Array.from(controls.sort((a, b) => a - b)),
+      controls: Int32Array.from(controls).sort(),
       observed,
       feedback: feedback(s),
     });
@@ -74,10 +75,15 @@ export function groupsOfNets(topology: Topology): Int32Array {
   for (let s = 0; s + 1 < sccOrder.start.length; s++) {
     for (let i = sccOrder.start[s]!; i < sccOrder.start[s + 1]!; i++) groupOfCcc[sccOrder.items[i]!] = s;
   }
-  return Int32Array.from(cccOfNet, (k) => (k < 0 ? -1 : groupOfCcc[k]!));
+  const groups = new Int32Array(cccOfNet.length);
+  for (let n = 0; n < groups.length; n++) groups[n] = cccOfNet[n]! < 0 ? -1 : groupOfCcc[cccOfNet[n]!]!;
+  return groups;
 }
 
 function collect(rows: { start: Int32Array; items: Int32Array }, components: Int32Array): Int32Array {
+  // Nearly every group is one component: its row is a copy of one slice.
+  if (components.length === 1)
+    return rows.items.slice(rows.start[components[0]!], rows.start[components[0]! + 1]);
   const out: number[] = [];
   for (const k of components)
     for (let i = rows.start[k]!; i < rows.start[k + 1]!; i++) out.push(rows.items[i]!);

@@ -104,10 +104,18 @@ export class SignatureMap<T> {
   }
 }
 
+/** Index of a value's high 32 bits within its two Int32 halves, for this machine's byte order. */
+const HIGH_HALF = new Int32Array(Float64Array.of(1).buffer)[1] !== 0 ? 1 : 0;
+
+/**
+ * FNV-1a over the high half of each value's bits (sign, exponent and the top of the mantissa: the
+ * whole of the small integers that most values are). Equal signatures hash equal; the full
+ * comparison in `get` decides.
+ */
 function hashOf(signature: Float64Array): number {
   const bits = new Int32Array(signature.buffer, signature.byteOffset, signature.length * 2);
   let h = 0x811c9dc5;
-  for (let i = 0; i < bits.length; i++) h = Math.imul(h ^ bits[i]!, 0x01000193);
+  for (let i = HIGH_HALF; i < bits.length; i += 2) h = Math.imul(h ^ bits[i]!, 0x01000193);
   return h;
 }
 
