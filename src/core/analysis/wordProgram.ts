@@ -14,28 +14,14 @@
  * gives the virtual slots physical ones, reusing a slot once its last reader has run.
  */
 
+import { OP_AND, OP_AND_NOT, OP_MUX, OP_NOT, OP_OR, OP_OR_INTO, OP_XOR, STRIDE } from './wordRun.ts';
+
 /**
  * A function's word is named by a reference: a slot s (s >= 0), or its complement ~s (negative), so
  * an inverter costs no operation. Slot 0 holds zeros, slot 1 ones.
  */
 export const ZERO = 0;
 export const ONES = 1;
-
-export const OP_NOT = 0;
-export const OP_AND = 1;
-/** a & ~b */
-export const OP_AND_NOT = 2;
-export const OP_OR = 3;
-/** a | ~b */
-export const OP_OR_NOT = 4;
-export const OP_XOR = 5;
-/** c ? b : a */
-export const OP_MUX = 6;
-/** d |= a */
-export const OP_OR_INTO = 7;
-
-/** Numbers per operation: code, destination, three operands (unused ones name slot ZERO). */
-export const STRIDE = 5;
 
 /** Bound on virtual slots, so that a pair of references fits one exact map key. */
 const MAX_SLOTS = 1 << 25;

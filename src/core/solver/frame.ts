@@ -38,6 +38,8 @@ export class Frame {
   /** Per local net: name rank of its limiter while the limiters are found (bottleneck.ts). */
   readonly labelRank: Int32Array;
   private ranks: Int32Array | null = null;
+  /** Per component: 1 once its elements are ranked. */
+  private ranked = new Uint8Array(0);
 
   k = 0;
   netStart = 0;
@@ -75,26 +77,33 @@ export class Frame {
     this.labelRank = new Int32Array(maxNets);
   }
 
-  /** Per global element: its position when elements are sorted by device name, equal names in element order (built on first use). */
+  /**
+   * Per global element: its position among the elements of its own channel-connected component
+   * sorted by device name, equal names in element order. Limiters compare ranks within the selected
+   * component only (bottleneck.ts), so a component is ranked the first time it asks, and a cell
+   * whose levels never drop ranks nothing.
+   */
   nameRanks(): Int32Array {
     if (this.ranks === null) {
-      const { c } = this;
-      const names: string[] = [];
-      for (let e = 0; e < c.chCount; e++) names.push(c.netlist.devices[c.chDevice[e]!]!.name);
-      // The default sort orders strings by UTF-16 code units, as `<` does; equal names take
-      // consecutive ranks in element order.
-      const sorted = names.slice().sort();
-      const nextRank = new Map<string, number>();
-      for (let r = sorted.length - 1; r >= 0; r--) nextRank.set(sorted[r]!, r);
-      const ranks = new Int32Array(c.chCount);
-      for (let e = 0; e < c.chCount; e++) {
-        const r = nextRank.get(names[e]!)!;
-        ranks[e] = r;
-        nextRank.set(names[e]!, r + 1);
-      }
-      this.ranks = ranks;
+      this.ranks = new Int32Array(this.c.chCount);
+      this.ranked = new Uint8Array(this.topo.cccCount);
+    }
+    if (this.ranked[this.k] === 0) {
+      this.ranked[this.k] = 1;
+      this.rankComponent(this.ranks, this.elemStart, this.elemCount);
     }
     return this.ranks;
+  }
+
+  private rankComponent(ranks: Int32Array, first: number, count: number): void {
+    const { c } = this;
+    const name = (e: number): string => c.netlist.devices[c.chDevice[e]!]!.name;
+    const order = Array.from(this.topo.cccElements.items.subarray(first, first + count));
+    order.sort((x, y) => {
+      const [a, b] = [name(x), name(y)];
+      return a < b ? -1 : a > b ? 1 : x - y;
+    });
+    order.forEach((e, r) => (ranks[e] = r));
   }
 
   select(k: number): void {
