@@ -44,9 +44,16 @@ const WARM_RUNS = 10;
 const TIMED_RUNS = 10;
 
 /**
- * The bit-parallel sweep alone: plan (tables included) and every word, levels written, each run on a
- * freshly compiled cell. Two rows: the first run, as a one-off sweep pays it (the optimiser has not
- * compiled anything yet), and the fastest of ten after ten warm runs, measured as the floor loop is.
+ * The bit-parallel sweep alone, each run on a freshly compiled cell (compile and simulator made
+ * before the clock starts). Inside the timing, on CPU time: `WordSweep.plan` (the driven schedule
+ * and topology, the group shapes and signatures, every component table, the word program built and
+ * compiled, its memory allocated) and `sweep.run` (for each block of 4,096 vectors: the inputs'
+ * words loaded, the program run, every output's level words and the fast lanes handed to the rows,
+ * the rows' plain runs counted; vectors that fall back would be solved by the engine, none does on
+ * the bank). The rows here keep one word of each block, so writing them into columns (the
+ * recorder's work) is in the check-sweep rows, not here. Two rows: the first run, as a one-off
+ * sweep pays it (the optimiser has compiled little yet), and the fastest of ten after ten warm
+ * runs, measured as the floor loop is.
  */
 export function measureWordSweep(name: string, netlist: Netlist): CpuRow[] {
   let sink = 0;

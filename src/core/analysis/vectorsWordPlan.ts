@@ -71,10 +71,12 @@ export function wordPlan(c: CompiledNetlist, tables: ComponentTables, wanted: In
     }
     const table = tables.binary(shape.index);
     if (table.kind === 'none') return null;
+    if (program.full) return null; // past MAX_WORD_SLOTS: the engine sweeps instead
     program.orInto(fallback, program.fromLeaves(leaves.fallback(table), controls));
     for (let i = 0; i < shape.nets.length; i++) {
       const n = shape.nets[i]!;
       if (needed[n] !== 1) continue;
+      if (program.full) return null;
       netSlots[n] = program.fromLeaves(leaves.level(table, i, LEVEL_1), controls);
       floating[n] = program.fromLeaves(leaves.level(table, i, LEVEL_Z), controls);
       known[n] = 1;

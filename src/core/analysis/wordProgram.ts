@@ -23,8 +23,14 @@ import { OP_AND, OP_AND_NOT, OP_MUX, OP_NOT, OP_OR, OP_OR_INTO, OP_XOR, STRIDE }
 export const ZERO = 0;
 export const ONES = 1;
 
-/** Bound on virtual slots, so that a pair of references fits one exact map key. */
-const MAX_SLOTS = 1 << 25;
+/**
+ * Virtual slots (one per operation) a plan may start a function with; past it the sweep takes the
+ * engine (vectorsWordPlan.ts). One function adds at most two operations per entry of its table
+ * (2^12 entries at most, MAX_TABLE_CONTROLS), so references stay below KEY_RANGE and a pair of
+ * them is one exact map key.
+ */
+export const MAX_WORD_SLOTS = 1 << 24;
+const KEY_RANGE = 2 * MAX_WORD_SLOTS;
 
 /** The reference to the complement of `ref`; constants stay slots 0 and 1. */
 export function complement(ref: number): number {
@@ -46,6 +52,11 @@ export class WordProgram {
   private readonly kept: number[] = [ZERO, ONES];
   /** Nodes by control, then by (low, high): identical nodes computed once in the whole program. */
   private readonly nodes = new Map<number, Map<number, number>>();
+
+  /** Past MAX_WORD_SLOTS: a plan builds no further function. */
+  get full(): boolean {
+    return this.slots >= MAX_WORD_SLOTS;
+  }
 
   /** A slot kept for the whole program (an input, an accumulator). */
   slot(): number {
@@ -76,7 +87,7 @@ export class WordProgram {
     if (low === high) return low;
     let byControl = this.nodes.get(c);
     if (byControl === undefined) this.nodes.set(c, (byControl = new Map()));
-    const key = (low + MAX_SLOTS) * 2 * MAX_SLOTS + (high + MAX_SLOTS);
+    const key = (low + KEY_RANGE) * 2 * KEY_RANGE + (high + KEY_RANGE);
     let ref = byControl.get(key);
     if (ref === undefined) {
       ref = this.muxOf(c, low, high);
@@ -134,7 +145,7 @@ export class WordProgram {
   }
 
   private emit(code: number, a: number, b: number, c: number): number {
-    if (this.slots >= MAX_SLOTS) throw new RangeError(`a word program holds at most ${MAX_SLOTS} slots`);
+    if (this.slots >= KEY_RANGE) throw new RangeError(`a word program holds at most ${KEY_RANGE} slots`);
     const d = this.slots++;
     this.ops.push(code, d, a, b, c);
     return d;
