@@ -12,7 +12,13 @@ import { floorFrame, floorLoop } from './floor.ts';
 import { measureToggleWithPaint } from './screen.ts';
 import { rippleAdder } from './generators/index.ts';
 import { wideAdderBank } from './generators/adderBank.ts';
-import { measureCheckCpu, measureCommand, measureWordSweep, type CpuRow } from './sweepWords.ts';
+import {
+  measureCheckCpu,
+  measureCommand,
+  measureWordSweep,
+  measureWordWidths,
+  type CpuRow,
+} from './sweepWords.ts';
 import { measureMemory, withSlopes, type MemoryResult } from './memory.ts';
 import {
   measureCheckSweep,
@@ -159,6 +165,7 @@ async function wordSweepRows(): Promise<CpuRow[]> {
   const bank = sweepCircuit();
   const rows = [
     ...measureWordSweep('words/adder-bank-16-inputs', bank),
+    ...measureWordWidths('words/adder-bank-16-inputs', bank),
     measureCheckCpu('check-sweep/adder-bank-16-inputs (words)', bank, true),
     measureCheckCpu('check-sweep/adder-bank-16-inputs (scalar)', bank, false),
   ];

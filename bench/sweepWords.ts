@@ -14,6 +14,7 @@ import type { WordRows } from '../src/core/analysis/vectorsWordPass.ts';
 import { WordSweep } from '../src/core/analysis/vectorsWordPass.ts';
 import type { Netlist } from '../src/core/model/netlist.ts';
 import { measureCheck, type CliResult } from './cliCheck.ts';
+import { measureLaneWidths } from './laneWidths.ts';
 import { prepare } from './measure.ts';
 import { cpuSeconds } from './timing.ts';
 
@@ -78,6 +79,15 @@ export function measureWordSweep(name: string, netlist: Netlist): CpuRow[] {
   return [
     row(`${name} (first run)`, netlist, first.vectors, first.cpu),
     row(`${name} (warm)`, netlist, first.vectors, best),
+  ];
+}
+
+/** The word program alone on 32-bit and on 64-bit words (laneWidths.ts): why the sweep runs 64. */
+export function measureWordWidths(name: string, netlist: Netlist): CpuRow[] {
+  const t = measureLaneWidths(netlist);
+  return [
+    row(`${name} program, 32-bit words`, netlist, t.vectors, t.int32Seconds),
+    row(`${name} program, 64-bit words`, netlist, t.vectors, t.bigUint64Seconds),
   ];
 }
 

@@ -13,7 +13,7 @@ import { SWEEP_BLOCK, sweepVector } from './vectors.ts';
 import { wordExpectations } from './vectorsWordExpect.ts';
 import { wordPlan, wordPlanRefusal, type WordPlan } from './vectorsWordPlan.ts';
 import { ONES, ZERO } from './wordProgram.ts';
-import { runWordProgram } from './wordRun.ts';
+import { WordMemory } from './wordRun.ts';
 
 /** Where the pass writes its rows, in order. */
 export interface WordRows {
@@ -37,6 +37,7 @@ const BLOCK_WORDS = SWEEP_BLOCK / 32;
 export class WordSweep {
   private readonly ops: Int32Array;
   private readonly words: number;
+  private readonly memory: WordMemory;
   private readonly mem: Int32Array;
   private readonly levels: Int32Array;
   private readonly fast: Int32Array;
@@ -57,7 +58,8 @@ export class WordSweep {
     const program = plan.program.compiled([...plan.high, ...plan.floating]);
     this.ops = program.ops;
     this.words = Math.min(BLOCK_WORDS, total / 32);
-    this.mem = new Int32Array(program.slotCount * this.words);
+    this.memory = new WordMemory(program.slotCount, this.words);
+    this.mem = this.memory.narrow;
     this.mem.fill(-1, ONES * this.words, (ONES + 1) * this.words);
     this.levels = new Int32Array(2 * plan.high.length * this.words);
     this.fast = new Int32Array(this.words);
@@ -102,7 +104,7 @@ export class WordSweep {
     for (let first = 0; first < total; first += block) {
       this.loadInputs(first);
       mem.fill(0, fallback * words, (fallback + 1) * words);
-      runWordProgram(this.ops, mem, words);
+      this.memory.run(this.ops);
       this.writeLevels(rows);
       for (let w = 0; w < words; w++) this.writeRows(rows, this.fast[w]!, first + 32 * w);
       if (onProgress?.(first + block, total) === false) return first + block;
