@@ -48,7 +48,8 @@ export function wordPlan(c: CompiledNetlist, tables: ComponentTables, wanted: In
   const reported = new Uint8Array(c.netCount);
   for (const n of wanted) reported[n] = 1;
   const needed = reported.slice();
-  for (const shape of tables.shapes) for (const n of shape.controls) needed[n] = 1;
+  for (const { controls } of tables.shapes)
+    for (let i = 0; i < controls.length; i++) needed[controls[i]!] = 1;
   const program = new WordProgram();
   const known = new Uint8Array(c.netCount);
   const netSlots = new Int32Array(c.netCount);
@@ -108,7 +109,8 @@ class LeafCache {
 
   fallback(table: GroupTable): Int32Array {
     let pattern = '';
-    for (const n of table.shape.nets) pattern += this.reported[n] === 1 ? '1' : '0';
+    const { nets } = table.shape;
+    for (let i = 0; i < nets.length; i++) pattern += this.reported[nets[i]!] === 1 ? '1' : '0';
     return remembered(this.fallbacks, table, pattern, () => fallbackLeaves(this.c, table, this.reported));
   }
 }

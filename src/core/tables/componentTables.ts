@@ -84,13 +84,20 @@ export class ComponentTables {
       const signature = this.signatures.of(shape);
       const twin = signature === null ? undefined : bySignature.get(signature);
       // A twin's entries are by position, so they read the same for this group's nets and controls.
-      found = twin === undefined ? make(this.bench, shape, ternary, bound) : { ...twin, shape };
+      found = twin === undefined ? make(this.bench, shape, ternary, bound) : withShape(twin, shape);
       if (twin?.kind === 'table') this.shared++;
       if (signature !== null && twin === undefined) bySignature.set(signature, found);
       cache.set(s, found);
     }
     return found;
   }
+}
+
+/** A twin's table or refusal, read for `shape` (written out: a spread copy was slow on first runs). */
+function withShape(twin: GroupTable | NoTable, shape: GroupShape): GroupTable | NoTable {
+  if (twin.kind === 'none') return { kind: 'none', shape, reason: twin.reason };
+  const { ternary, entries, states, flags, volts, current, clean, cleanObserved } = twin;
+  return { kind: 'table', shape, ternary, entries, states, flags, volts, current, clean, cleanObserved };
 }
 
 function make(bench: TableBench, shape: GroupShape, ternary: boolean, bound: number): GroupTable | NoTable {

@@ -48,7 +48,8 @@ export function groupShapes(
       seen[n] = s;
       controls.push(n);
     };
-    for (const e of elements) {
+    for (let i = 0; i < elements.length; i++) {
+      const e = elements[i]!;
       if (topology.selfGate[e] === GATE_NOT_TIED) add(c.chGate[e]!);
       if (topology.isSource[c.chA[e]!]) add(c.chA[e]!);
       if (topology.isSource[c.chB[e]!]) add(c.chB[e]!);

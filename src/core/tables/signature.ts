@@ -39,11 +39,11 @@ export class GroupSignatures {
     for (let i = 0; i < elements.length; i++) this.elementPos[elements[i]!] = i;
     this.length = 0;
     this.push(nets.length, controls.length, elements.length);
-    for (const e of elements) this.element(e);
+    for (let i = 0; i < elements.length; i++) this.element(elements[i]!);
     for (let i = 0; i < nets.length; i++) this.net(nets[i]!, shape.observed[i]!);
-    for (const n of nets) this.netPos[n] = -1;
-    for (const n of controls) this.controlPos[n] = -1;
-    for (const e of elements) this.elementPos[e] = -1;
+    for (let i = 0; i < nets.length; i++) this.netPos[nets[i]!] = -1;
+    for (let i = 0; i < controls.length; i++) this.controlPos[controls[i]!] = -1;
+    for (let i = 0; i < elements.length; i++) this.elementPos[elements[i]!] = -1;
     return this.scratch.subarray(0, this.length);
   }
 
