@@ -29,8 +29,13 @@ const corners = (b: Rect) => [
 ];
 
 describe('the layout filed by tiles', () => {
-  const span = fc.integer({ min: -10, max: 80 });
-  const area = fc.tuple(span, span, fc.integer({ min: 0, max: 30 }), fc.integer({ min: 0, max: 30 }));
+  // The placed 3-bit adder reaches about x = -10…216, y = -18…18.
+  const area = fc.tuple(
+    fc.integer({ min: -10, max: 220 }),
+    fc.integer({ min: -20, max: 20 }),
+    fc.integer({ min: 0, max: 30 }),
+    fc.integer({ min: 0, max: 30 }),
+  );
   it('finds every segment, mark and transistor mark whose box meets an area, each once, in order', () => {
     fc.assert(
       fc.property(area, ([x, y, w, h]) => {

@@ -45,7 +45,7 @@ export interface LevelScene {
 }
 
 /** The scene with the layout entries near the area being painted (all of them when it is large). */
-interface Near extends LevelScene {
+export interface Near extends LevelScene {
   readonly near: ShapesIn | null;
 }
 
@@ -148,8 +148,12 @@ export function paintOverlay(
   scene: LevelScene,
 ): void {
   // Only what lies near the area is visited: a toggle's repaint of a few tiles reads a few shapes.
-  const near = { ...scene, near: shapesIn(scene.layout, area) };
-  paintStrokes(ctx, area, scale, near);
-  if (scale >= DEVICES_FROM_PX) paintDevices(ctx, area, near);
-  if (scale >= MARKS_FROM_PX) paintMarks(ctx, area, near);
+  paintNear(ctx, area, scale, { ...scene, near: shapesIn(scene.layout, area) });
+}
+
+/** Paints the scene's shapes listed in `near` (every shape when it is null) that meet the area. */
+export function paintNear(ctx: CanvasRenderingContext2D, area: Rect, scale: number, scene: Near): void {
+  paintStrokes(ctx, area, scale, scene);
+  if (scale >= DEVICES_FROM_PX) paintDevices(ctx, area, scene);
+  if (scale >= MARKS_FROM_PX) paintMarks(ctx, area, scene);
 }
