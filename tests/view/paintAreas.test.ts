@@ -94,3 +94,13 @@ describe('the areas a toggle repaints', () => {
     );
   });
 });
+
+describe('a long wire', () => {
+  it('is found by any area its box meets, though it is filed in no tile', () => {
+    // A bus with a corner whose box spans 100 × 100 tiles: every query reads it.
+    const bus = { net: 0, points: [0, 0, 800, 0, 800, 800] };
+    const long = { ...layout, segments: [...layout.segments, bus] };
+    const found = shapesIn(long, { x0: 400, y0: 300, x1: 410, y1: 310 });
+    expect(found?.segments).toContain(layout.segments.length);
+  });
+});

@@ -9,6 +9,8 @@ import type { PaintLayout } from './overlayPaint.ts';
 
 /** A tile's side, in grid units: a few transistors across. */
 export const PAINT_TILE = 8;
+/** Beyond this many tiles a segment (a long bus with corners) is kept in a list every query reads. */
+export const MAX_TILES_PER_SEGMENT = 64;
 /** How far a level mark's text reaches from its anchor (bold, 0.55 units high; generous). */
 export const MARK_REACH = { x: 3, y: 1 };
 /** A transistor mark's radius, with its stroke. */
@@ -69,9 +71,15 @@ type Kind = keyof Tile;
 
 class TileIndex {
   readonly tiles = new Map<number, Tile>();
+  /** Segments spanning more than MAX_TILES_PER_SEGMENT tiles. */
+  readonly long: number[] = [];
 
   file(kind: Kind, item: number, box: Rect): void {
     const { tx0, ty0, tx1, ty1 } = tileSpan(box);
+    if (kind === 'segments' && (tx1 - tx0 + 1) * (ty1 - ty0 + 1) > MAX_TILES_PER_SEGMENT) {
+      this.long.push(item);
+      return;
+    }
     for (let tx = tx0; tx <= tx1; tx++)
       for (let ty = ty0; ty <= ty1; ty++) {
         const key = tileKey(tx, ty);
@@ -103,7 +111,7 @@ export function shapesIn(layout: PaintLayout, area: Rect): ShapesIn | null {
   const index = indexOf(layout);
   const { tx0, ty0, tx1, ty1 } = tileSpan(area);
   if ((tx1 - tx0 + 1) * (ty1 - ty0 + 1) > index.tiles.size) return null;
-  const found = { segments: new Set<number>(), marks: new Set<number>(), devices: new Set<number>() };
+  const found = { segments: new Set(index.long), marks: new Set<number>(), devices: new Set<number>() };
   for (let tx = tx0; tx <= tx1; tx++)
     for (let ty = ty0; ty <= ty1; ty++) {
       const tile = index.tiles.get(tileKey(tx, ty));
