@@ -1,6 +1,7 @@
 // What the overlay draws into an area: behaviour of our own drawing; no source applies.
 import fc from 'fast-check';
 import { describe, expect, it } from 'vitest';
+import type { InputVector } from '../../src/core/model/design.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import { autoPlace } from '../../src/core/sheet/autoPlace.ts';
 import { sheetToNetlist } from '../../src/core/sheet/toNetlist.ts';
@@ -31,7 +32,9 @@ const sheet = autoPlace(netlist);
 const derived = sheetToNetlist(sheet, netlist.name);
 const layout = paintLayout(sheet, derived);
 const session = new LiveSession(derived.netlist, DEFAULT_TECHNOLOGY);
-const vector = Object.fromEntries(derived.netlist.inputs.map((n, i) => [n, i % 3 === 0 ? '1' : '0']));
+const vector: InputVector = Object.fromEntries(
+  derived.netlist.inputs.map((n, i) => [n, i % 3 === 0 ? '1' : '0']),
+);
 const scene: LevelScene = {
   layout,
   paint: paintSolved(bindPaint(layout, session.compiled), session.solve(vector)),

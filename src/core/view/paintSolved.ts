@@ -71,6 +71,23 @@ export function paintSolved(binding: PaintBinding, result: SolvedArrays): Overla
   };
 }
 
+/** `before` with entry i, for i below `count`, made `now(i)` where they differ: copied only then. */
+function patched<T>(
+  before: readonly T[],
+  count: number,
+  now: (i: number) => T,
+): { list: readonly T[]; changed: number[] } {
+  let list: T[] | null = null;
+  const changed: number[] = [];
+  for (let i = 0; i < count; i++) {
+    const value = now(i);
+    if (value === before[i]) continue;
+    (list ??= before.slice())[i] = value;
+    changed.push(i);
+  }
+  return { list: list ?? before, changed };
+}
+
 /**
  * The paint of `result` made from `before`, the paint of the vector shown until now on the same
  * binding: entries that did not change are kept, and the change lists name those that did.
@@ -81,25 +98,11 @@ export function repaintSolved(
   result: SolvedArrays,
 ): PaintChange {
   const { netOf, elementOf } = binding;
-  const changedNets: number[] = [];
-  let nets: (NetPaint | null)[] | null = null;
-  for (let i = 0; i < netOf.length; i++) {
-    const paint = paintOfNet(result, netOf[i]!);
-    if (paint === before.nets[i]) continue;
-    (nets ??= before.nets.slice())[i] = paint;
-    changedNets.push(i);
-  }
-  const changedDevices: number[] = [];
-  let conduction: (Conduction | undefined)[] | null = null;
-  for (let j = 0; j < elementOf.length; j++) {
-    const state = stateOfElement(result, elementOf[j]!);
-    if (state === before.conduction[j]) continue;
-    (conduction ??= before.conduction.slice())[j] = state;
-    changedDevices.push(j);
-  }
+  const nets = patched(before.nets, netOf.length, (i) => paintOfNet(result, netOf[i]!));
+  const devices = patched(before.conduction, elementOf.length, (j) => stateOfElement(result, elementOf[j]!));
   return {
-    paint: { nets: nets ?? before.nets, conduction: conduction ?? before.conduction },
-    nets: changedNets,
-    devices: changedDevices,
+    paint: { nets: nets.list, conduction: devices.list },
+    nets: nets.changed,
+    devices: devices.changed,
   };
 }
