@@ -6,7 +6,7 @@
  */
 import type { Rect } from '../sheet/geometry.ts';
 import type { PaintLayout } from './overlayPaint.ts';
-import { deviceBox, markBox, PAINT_TILE, segmentBox, tileSpan } from './paintTiles.ts';
+import { addTiles, deviceBox, markBox, segmentBox, tileRun } from './paintTiles.ts';
 
 /** The layout nets and devices whose paint changed (paintSolved.ts `PaintChange`). */
 export interface ChangedParts {
@@ -14,60 +14,39 @@ export interface ChangedParts {
   readonly devices: readonly number[];
 }
 
-/** Each layout net's boxes: its segments' and its marks', worked out once per layout. */
-const netBoxes = new WeakMap<PaintLayout, readonly Rect[][]>();
+/** Each layout net's tiles (those its segments and marks meet), worked out once per layout. */
+const netTiles = new WeakMap<PaintLayout, readonly (readonly number[])[]>();
 
-function boxesOfNets(layout: PaintLayout): readonly Rect[][] {
-  let boxes = netBoxes.get(layout);
-  if (boxes !== undefined) return boxes;
-  const made = layout.nets.map((): Rect[] => []);
-  for (const s of layout.segments) made[s.net]!.push(segmentBox(s.points));
-  for (const m of layout.marks) made[m.net]!.push(markBox(m));
-  netBoxes.set(layout, (boxes = made));
-  return boxes;
+function tilesOfNets(layout: PaintLayout): readonly (readonly number[])[] {
+  let tiles = netTiles.get(layout);
+  if (tiles !== undefined) return tiles;
+  const sets = layout.nets.map(() => new Set<number>());
+  for (const s of layout.segments) addTiles(segmentBox(s.points), sets[s.net]!);
+  for (const m of layout.marks) addTiles(markBox(m), sets[m.net]!);
+  netTiles.set(layout, (tiles = sets.map((set) => [...set])));
+  return tiles;
 }
 
-/** The tiles the boxes meet, by row, each column once. */
-function tilesOf(boxes: Iterable<Rect>): Map<number, Set<number>> {
-  const rows = new Map<number, Set<number>>();
-  for (const box of boxes) {
-    const { tx0, ty0, tx1, ty1 } = tileSpan(box);
-    for (let ty = ty0; ty <= ty1; ty++) {
-      let row = rows.get(ty);
-      if (row === undefined) rows.set(ty, (row = new Set()));
-      for (let tx = tx0; tx <= tx1; tx++) row.add(tx);
-    }
-  }
-  return rows;
-}
-
-/** Each row's runs of neighbouring tiles as one rectangle. */
-function runsOf(rows: Map<number, Set<number>>): Rect[] {
+/** Sorted tile numbers as rectangles, one per run of neighbours in a row. */
+function runsOf(sorted: readonly number[]): Rect[] {
   const areas: Rect[] = [];
-  for (const [ty, columns] of rows) {
-    const sorted = [...columns].sort((a, b) => a - b);
-    for (let i = 0; i < sorted.length;) {
-      let j = i;
-      while (j + 1 < sorted.length && sorted[j + 1] === sorted[j]! + 1) j++;
-      areas.push({
-        x0: sorted[i]! * PAINT_TILE,
-        y0: ty * PAINT_TILE,
-        x1: (sorted[j]! + 1) * PAINT_TILE,
-        y1: (ty + 1) * PAINT_TILE,
-      });
-      i = j + 1;
-    }
+  for (let i = 0; i < sorted.length;) {
+    let j = i;
+    while (j + 1 < sorted.length && sorted[j + 1] === sorted[j]! + 1) j++;
+    areas.push(tileRun(sorted[i]!, sorted[j]!));
+    i = j + 1;
   }
   return areas;
 }
 
 /** The areas to paint again after a change; every changed shape lies inside one of them. */
 export function changedAreas(layout: PaintLayout, changed: ChangedParts): Rect[] {
-  const boxes = boxesOfNets(layout);
-  const all: Rect[] = changed.nets.flatMap((i) => boxes[i] ?? []);
+  const tiles = tilesOfNets(layout);
+  const keys = new Set<number>();
+  for (const i of changed.nets) for (const key of tiles[i] ?? []) keys.add(key);
   for (const j of changed.devices) {
     const d = layout.devices[j];
-    if (d !== undefined) all.push(deviceBox(d));
+    if (d !== undefined) addTiles(deviceBox(d), keys);
   }
-  return runsOf(tilesOf(all));
+  return runsOf([...keys].sort((a, b) => a - b));
 }

@@ -55,7 +55,7 @@ export function deviceBox(d: { readonly x: number; readonly y: number }): Rect {
 }
 
 /** The tile rows and columns a box meets. */
-export function tileSpan(box: Rect): { tx0: number; ty0: number; tx1: number; ty1: number } {
+function tileSpan(box: Rect): { tx0: number; ty0: number; tx1: number; ty1: number } {
   return {
     tx0: Math.floor(box.x0 / PAINT_TILE),
     ty0: Math.floor(box.y0 / PAINT_TILE),
@@ -64,8 +64,32 @@ export function tileSpan(box: Rect): { tx0: number; ty0: number; tx1: number; ty
   };
 }
 
-/** A tile's number: columns and rows packed in one number (sheets stay far below 2^20 tiles a side). */
-export const tileKey = (tx: number, ty: number): number => tx * 2 ** 21 + ty;
+/** Tiles either side of the origin a tile number holds (sheets stay far below it). */
+const HALF = 2 ** 20;
+const ROW = 2 * HALF;
+
+/**
+ * A tile's number, row by row: sorted numbers list a row's tiles left to right, and neighbours in
+ * a row differ by one.
+ */
+const tileKey = (tx: number, ty: number): number => (ty + HALF) * ROW + tx + HALF;
+
+/** The tiles from `first` to `last`, two numbers of one row, as one rectangle (sheet units). */
+export function tileRun(first: number, last: number): Rect {
+  const ty = Math.floor(first / ROW) - HALF;
+  return {
+    x0: ((first % ROW) - HALF) * PAINT_TILE,
+    y0: ty * PAINT_TILE,
+    x1: ((last % ROW) - HALF + 1) * PAINT_TILE,
+    y1: (ty + 1) * PAINT_TILE,
+  };
+}
+
+/** Adds the numbers of the tiles a box meets. */
+export function addTiles(box: Rect, into: Set<number>): void {
+  const { tx0, ty0, tx1, ty1 } = tileSpan(box);
+  for (let ty = ty0; ty <= ty1; ty++) for (let tx = tx0; tx <= tx1; tx++) into.add(tileKey(tx, ty));
+}
 
 type Kind = keyof Tile;
 
