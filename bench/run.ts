@@ -26,6 +26,7 @@ import {
 } from './measure.ts';
 import { formatNumber, formatTable } from './table.ts';
 import { now, repeat, secondsSince } from './timing.ts';
+import { measureUndrivenSweep } from './undrivenSweep.ts';
 import { operand, toggleWalk } from './vectors.ts';
 
 function progress(message: string): void {
@@ -209,6 +210,8 @@ async function main(): Promise<void> {
   const sweep = measureSweep('sweep/adder-bank-16-inputs', prepare(sweepCircuit()));
   cases.push(sweep, ...analysisOverhead(), ...toggleCases());
   const words = await wordSweepRows();
+  progress('check sweep with undriven inputs, 6,561 vectors');
+  words.push(measureUndrivenSweep());
   const memory = memorySeries();
   progress('level-1 DC: transfer curve and every-vector pass');
   const dc = dcCases();

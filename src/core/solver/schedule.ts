@@ -4,6 +4,7 @@ import { evaluateCcc } from './evaluate.ts';
 import { FeedbackSearch } from './feedback.ts';
 import { Frame } from './frame.ts';
 import { FLAG_OSCILLATING } from './levels.ts';
+import type { OutcomeStore } from './memo.ts';
 import { OutcomeMemo } from './memo.ts';
 import type { NetState } from './netState.ts';
 import { buildTopology, type Topology } from './topology.ts';
@@ -32,9 +33,15 @@ export class Schedule {
   private readonly saved: Float64Array;
   private readonly savedDriven: Uint8Array;
 
+  /**
+   * `outcomes`: memo tables shared with the other schedules of the same simulator, `undriven` when
+   * this topology leaves some input undriven (solver/memo.ts, OutcomeStore).
+   */
   constructor(
     readonly c: CompiledNetlist,
     readonly topology: Topology,
+    outcomes: OutcomeStore | null = null,
+    undriven = false,
   ) {
     this.frame = new Frame(c, topology);
     const order = topology.sccOrder;
@@ -66,15 +73,15 @@ export class Schedule {
     for (let e = 0; e < c.chCount; e++)
       if (topology.isSource[c.chA[e]!] || topology.isSource[c.chB[e]!]) ties.push(e);
     this.sourceTies = Int32Array.from(ties);
-    this.memo = new OutcomeMemo(c, topology);
+    this.memo = new OutcomeMemo(c, topology, outcomes, undriven);
     // The search evaluates a guess into `next` and copies it out before the Jacobi rounds use it again.
     this.feedback = new FeedbackSearch(c, topology, this.frame, this.sccOf, this.next);
     this.saved = new Float64Array(c.netCount);
     this.savedDriven = new Uint8Array(c.netCount);
   }
 
-  static build(c: CompiledNetlist, undriven: ReadonlySet<number>): Schedule {
-    return new Schedule(c, buildTopology(c, undriven));
+  static build(c: CompiledNetlist, undriven: ReadonlySet<number>, outcomes?: OutcomeStore): Schedule {
+    return new Schedule(c, buildTopology(c, undriven), outcomes ?? null, undriven.size > 0);
   }
 
   /** Marks dirty the components whose elements a net gates or ties to (used for changed sources). */

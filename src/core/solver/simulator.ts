@@ -1,5 +1,6 @@
 // Hot loop: indexes here are in range by construction, so `!` marks them (no run-time cost).
 import type { CompiledNetlist } from '../compile/compile.ts';
+import { OutcomeStore } from './memo.ts';
 import type { InputVector } from '../model/design.ts';
 import { currentPaths, type PathIndices } from './currentPaths.ts';
 import { conductionOf } from './evaluate.ts';
@@ -48,6 +49,8 @@ export interface SolveResult {
  */
 export class Simulator {
   private readonly schedules = new Map<string, Schedule>();
+  /** Component outcomes, shared by the schedules of every choice of undriven inputs. */
+  private readonly outcomes = new OutcomeStore();
   private readonly supplyNets: number[];
   private lastFresh: SolveResult | null = null;
 
@@ -103,9 +106,12 @@ export class Simulator {
     const key = undriven.join('\u0000');
     let s = this.schedules.get(key);
     if (!s) {
+      // The all-driven schedule first: the others replay its memo tables (solver/memo.ts).
+      if (undriven.length > 0) this.scheduleFor([]);
       s = Schedule.build(
         this.compiled,
         new Set(undriven.map((u) => this.compiled.netIndex.get(u) as number)),
+        this.outcomes,
       );
       this.schedules.set(key, s);
     }
