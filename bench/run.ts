@@ -9,7 +9,7 @@ import { DEFAULT_TECHNOLOGY } from '../src/core/model/technology.ts';
 import { FAMILIES, MEMORY_SERIES, OVERHEAD_BITS, TOGGLE_BITS, familyNamed, sweepCircuit } from './cases.ts';
 import { dcCases, type DcCaseResult } from './dc.ts';
 import { floorFrame, floorLoop } from './floor.ts';
-import { measureToggleWithPaint } from './screen.ts';
+import { measureToggleWithFullPaint, measureToggleWithPaint } from './screen.ts';
 import { rippleAdder } from './generators/index.ts';
 import { wideAdderBank } from './generators/adderBank.ts';
 import {
@@ -93,7 +93,12 @@ function toggleCases(): CaseResult[] {
     measureToggle('toggle/ripple-adder-179/random-input', p, toggleWalk(p.netlist.inputs, 64)),
     measureToggle('toggle/ripple-adder-179/carry-through-all-bits', p, [ripple, { ...ripple, CI: '1' }]),
     measureToggleWithPaint(
-      'toggle+paint/ripple-adder-179/random-input',
+      'toggle+paint/ripple-adder-179/random-input (CPU)',
+      p.netlist,
+      toggleWalk(p.netlist.inputs, 64),
+    ),
+    measureToggleWithFullPaint(
+      'toggle+full-paint/ripple-adder-179/random-input (CPU)',
       p.netlist,
       toggleWalk(p.netlist.inputs, 64),
     ),
@@ -131,6 +136,7 @@ function printTables(floorNs: number, cases: readonly CaseResult[], memory: read
     '\nsettle, toggle and edit rows: ms for one vector; random rows: ms for a batch; both the fastest',
   );
   console.log('of repeated runs, the one least disturbed by other work (medians are in the JSON line);');
+  console.log('rows marked (CPU): CPU ms per toggle, solve and paint, in the fastest batch of one walk;');
   console.log('sweep rows: total ms of wall clock; on a shared machine CPU time is the steadier figure:');
   for (const c of cases.filter((x) => x.cpuSeconds !== undefined)) {
     console.log(`  ${c.name}: ${c.seconds.toFixed(2)} s wall, ${(c.cpuSeconds ?? 0).toFixed(2)} s CPU`);

@@ -65,4 +65,25 @@ describe('the bitmap of a view', () => {
     // The repaint covers the changed area with a pixel's margin, not the screen.
     expect(areas[1]!.x1 - areas[1]!.x0).toBeLessThan(2);
   });
+
+  it('repaints whole pixels of the bitmap, so no clip edge blends old and new', () => {
+    const { areas, cache, draw } = setUp();
+    const view = { x: 400.3, y: 300.7, scale: 17.3 };
+    draw(view);
+    cache.invalidate([{ x0: 1.01, y0: 1.37, x1: 2.21, y1: 2.9 }]);
+    draw(view);
+    // The bitmap starts at whole screen pixels, so whole pixels of it sit at whole screen pixels.
+    const { x0, y0, x1, y1 } = areas[1]!;
+    for (const [at, offset] of [
+      [x0, view.x],
+      [x1, view.x],
+      [y0, view.y],
+      [y1, view.y],
+    ] as const) {
+      const pixel = at * view.scale + offset;
+      expect(Math.abs(pixel - Math.round(pixel))).toBeLessThan(1e-6);
+    }
+    expect(x0).toBeLessThanOrEqual(1.01 - 1.5 / view.scale);
+    expect(x1).toBeGreaterThanOrEqual(2.21 + 1.5 / view.scale);
+  });
 });

@@ -4,7 +4,13 @@ import { sheetToNetlist } from '../../src/core/sheet/toNetlist.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import { LiveSession } from '../../src/core/view/liveSession.ts';
 import { solvedView } from '../../src/core/view/solvedView.ts';
-import { overlayPaint, paintLayout } from '../../src/core/view/overlayPaint.ts';
+import {
+  overlayPaint,
+  paintedDevices,
+  paintedMarks,
+  paintLayout,
+  strokesByLook,
+} from '../../src/core/view/overlayPaint.ts';
 import { inverter, nand2MissingPullUp } from '../cells.ts';
 import type { Netlist } from '../../src/core/model/netlist.ts';
 import type { InputVector } from '../../src/core/model/design.ts';
@@ -15,11 +21,17 @@ function painted(netlist: Netlist, vector: InputVector) {
   const derived = sheetToNetlist(sheet, netlist.name);
   const session = new LiveSession(derived.netlist, DEFAULT_TECHNOLOGY);
   const view = solvedView(session.compiled, session.solve(vector));
-  const paint = overlayPaint(
-    paintLayout(sheet, derived),
+  const layout = paintLayout(sheet, derived);
+  const solved = overlayPaint(
+    layout,
     (n) => view.net(n),
     (d) => view.device(d),
   );
+  const paint = {
+    strokes: strokesByLook(layout, solved),
+    marks: paintedMarks(layout, solved),
+    devices: paintedDevices(layout, solved),
+  };
   const pointsOf = (look: string) => (paint.strokes.get(look as never) ?? []).length;
   return { paint, pointsOf, derived, sheet };
 }

@@ -1,13 +1,14 @@
 /**
- * Everything the simulation overlay paints for one vector, as plain numbers grouped by look. The
- * canvas then draws each group in one pass (a few shapes, not one per wire), which keeps a
- * 2,000-device sheet smooth; and what is drawn can be tested without a canvas.
+ * Everything the simulation overlay paints for one vector, as plain data the canvas draws grouped
+ * by look (a few shapes, not one per wire), which keeps a 5,000-device sheet smooth; and what is
+ * drawn can be tested without a canvas.
  *
  * Two phases: the layout (which segment belongs to which net, where marks go) depends only on the
- * drawing and is built once per edit; painting a vector then only looks up each net's state.
+ * drawing and is built once per edit; painting a vector is then one look per drawn net and one
+ * state per transistor, and a toggle changes only the entries it moved (paintSolved.ts).
  */
 import type { Point, Sheet } from '../sheet/types.ts';
-import { toWorld, type Rect } from '../sheet/geometry.ts';
+import { toWorld } from '../sheet/geometry.ts';
 import { pinLeads } from './pinLeads.ts';
 import {
   lookOf,
@@ -54,17 +55,18 @@ export interface PaintedDevice {
   readonly conduction: Conduction;
 }
 
-/** A drawn net's look and mark text for one vector. */
+/** A drawn net's look and mark text for one vector; one shared object per look and text. */
 export interface NetPaint {
   readonly look: LookName;
   readonly text: string;
 }
 
+/**
+ * One vector's paint on a layout: each drawn net's look and each transistor's state, by position.
+ * What is drawn is the layout read through these two lists (`strokesByLook`, `paintedMarks`,
+ * `paintedDevices`), so a toggle that changes a few nets changes a few entries (paintSolved.ts).
+ */
 export interface OverlayPaint {
-  /** Polylines per look. */
-  readonly strokes: ReadonlyMap<LookName, readonly (readonly number[])[]>;
-  readonly marks: readonly PaintedMark[];
-  readonly devices: readonly PaintedDevice[];
   /** Each layout net's paint (null: not solved), by its position in `layout.nets`. */
   readonly nets: readonly (NetPaint | null)[];
   /** Each layout device's state, by its position in `layout.devices`. */
@@ -128,95 +130,83 @@ export function paintLayout(sheet: Sheet, geometry: PaintGeometry): PaintLayout 
   return { nets: b.nets, segments: b.segments, marks: b.marks, devices: b.devices };
 }
 
-function markText(state: NetState): string {
-  return [lookOf(state).mark, ...problemMarks(state).map((m) => PROBLEM_GLYPHS[m])].join(' ');
+const LEVEL_KEY: Readonly<Record<NetState['level'], number>> = { '0': 0, '1': 1, X: 2, Z: 3 };
+
+/** The facts a net's paint depends on, as a number below 128. */
+function paintKey(s: NetState): number {
+  const bit = (on: boolean, at: number): number => (on ? 1 << at : 0);
+  return (
+    LEVEL_KEY[s.level] |
+    bit(s.degraded, 2) |
+    bit(s.contention, 3) |
+    bit(s.chargeShared, 4) |
+    bit(s.oscillating, 5) |
+    bit(s.stored, 6)
+  );
 }
 
-/** One vector's paint: each segment filed under its net's look. Nets without a state are skipped. */
+/** Paint by key (paintKey); dense, so looking one up is fast. */
+const shared: (NetPaint | null)[] = new Array<NetPaint | null>(128).fill(null);
+
+/** A net state's look and mark text, the same object for the same look and text. */
+export function netPaint(state: NetState): NetPaint {
+  const key = paintKey(state);
+  let paint = shared[key];
+  if (paint === null || paint === undefined) {
+    const look = lookOf(state);
+    const text = [look.mark, ...problemMarks(state).map((m) => PROBLEM_GLYPHS[m])].join(' ');
+    shared[key] = paint = { look: look.name, text };
+  }
+  return paint;
+}
+
+/** One vector's paint, read by name. Nets without a state are not painted. */
 export function overlayPaint(
   layout: PaintLayout,
   net: (name: string) => NetState | undefined,
   device: (name: string) => Conduction | undefined,
 ): OverlayPaint {
-  // Each drawn net's look and mark, worked out once: a net has many segments.
-  const looks = layout.nets.map((name): NetPaint | null => {
-    const state = net(name);
-    return state === undefined ? null : { look: lookOf(state).name, text: markText(state) };
-  });
+  return {
+    nets: layout.nets.map((name) => {
+      const state = net(name);
+      return state === undefined ? null : netPaint(state);
+    }),
+    conduction: layout.devices.map((d) => device(d.name)),
+  };
+}
+
+/** The painted segments filed by look: one polyline list per look, drawn in one pass each. */
+export function strokesByLook(
+  layout: PaintLayout,
+  paint: OverlayPaint,
+): Map<LookName, (readonly number[])[]> {
   const strokes = new Map<LookName, (readonly number[])[]>();
   for (const segment of layout.segments) {
-    const entry = looks[segment.net];
-    if (entry === null || entry === undefined) continue;
+    const entry = paint.nets[segment.net];
+    if (entry == null) continue;
     let list = strokes.get(entry.look);
     if (list === undefined) strokes.set(entry.look, (list = []));
     list.push(segment.points);
   }
+  return strokes;
+}
+
+/** The level marks of the painted nets, in layout order. */
+export function paintedMarks(layout: PaintLayout, paint: OverlayPaint): PaintedMark[] {
   const marks: PaintedMark[] = [];
   for (const m of layout.marks) {
-    const entry = looks[m.net];
-    if (entry !== null && entry !== undefined)
-      marks.push({ x: m.x, y: m.y, text: entry.text, look: entry.look });
+    const entry = paint.nets[m.net];
+    if (entry != null) marks.push({ x: m.x, y: m.y, text: entry.text, look: entry.look });
   }
+  return marks;
+}
+
+/** The transistor marks of the solved devices, in layout order. */
+export function paintedDevices(layout: PaintLayout, paint: OverlayPaint): PaintedDevice[] {
   const devices: PaintedDevice[] = [];
-  const conduction = layout.devices.map((d) => device(d.name));
   layout.devices.forEach((d, i) => {
-    const c = conduction[i];
+    const c = paint.conduction[i];
     if (c !== undefined) devices.push({ x: d.x, y: d.y, conduction: c });
   });
-  return { strokes, marks, devices, nets: looks, conduction };
-}
-
-/** The box around a flat x, y list. */
-export function segmentBox(points: readonly number[]): Rect {
-  let x0 = Infinity;
-  let y0 = Infinity;
-  let x1 = -Infinity;
-  let y1 = -Infinity;
-  for (let i = 0; i + 1 < points.length; i += 2) {
-    const x = points[i]!;
-    const y = points[i + 1]!;
-    if (x < x0) x0 = x;
-    if (x > x1) x1 = x;
-    if (y < y0) y0 = y;
-    if (y > y1) y1 = y;
-  }
-  return { x0, y0, x1, y1 };
-}
-
-/** How far a level mark's text reaches from its anchor (bold, 0.55 units high; generous). */
-const MARK_REACH = { x: 3, y: 1 };
-/** A device mark's radius, with its stroke. */
-const DEVICE_REACH = 0.45;
-
-function sameNetPaint(a: NetPaint | null | undefined, b: NetPaint | null | undefined): boolean {
-  return a === b || (a != null && b != null && a.look === b.look && a.text === b.text);
-}
-
-/**
- * Where two paints of one layout differ: the segments and marks of every net whose look or mark
- * changed, and every device whose state changed (sheet units). A toggle that changes a few nets
- * repaints a few small areas.
- */
-export function changedPaintAreas(layout: PaintLayout, before: OverlayPaint, after: OverlayPaint): Rect[] {
-  const changed = layout.nets.map((_, i) => !sameNetPaint(before.nets[i], after.nets[i]));
-  const areas: Rect[] = [];
-  for (const segment of layout.segments) if (changed[segment.net]) areas.push(segmentBox(segment.points));
-  for (const m of layout.marks)
-    if (changed[m.net])
-      areas.push({
-        x0: m.x - 0.5,
-        y0: m.y - MARK_REACH.y / 2,
-        x1: m.x + MARK_REACH.x,
-        y1: m.y + MARK_REACH.y,
-      });
-  layout.devices.forEach((d, i) => {
-    if (before.conduction[i] !== after.conduction[i])
-      areas.push({
-        x0: d.x - DEVICE_REACH,
-        y0: d.y - DEVICE_REACH,
-        x1: d.x + DEVICE_REACH,
-        y1: d.y + DEVICE_REACH,
-      });
-  });
-  return areas;
+  return devices;
 }

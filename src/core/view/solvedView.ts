@@ -45,6 +45,9 @@ export interface CurrentTrace {
  * sheet pays only for the nets the overlay and panels actually read, each once.
  */
 export interface SolvedView {
+  /** What the view reads, for code that works by index (the overlay's paint, paintSolved.ts). */
+  readonly compiled: CompiledNetlist;
+  readonly result: SolvedArrays;
   readonly netNames: readonly string[];
   net(name: string): NetState | undefined;
   device(name: string): Conduction | undefined;
@@ -54,11 +57,15 @@ export interface SolvedView {
 }
 
 export function netState(result: SolvedArrays, net: number): NetState {
-  const flags = result.flags[net]!;
   const volts = result.volts[net]!;
+  return stateOfCodes(result.levels[net]!, result.flags[net]!, Number.isNaN(volts) ? null : volts);
+}
+
+/** A net's state from its solver codes: level (LEVEL_*) and flags (FLAG_* bits). */
+export function stateOfCodes(level: number, flags: number, volts: number | null): NetState {
   return {
-    level: levelName(result.levels[net]!),
-    volts: Number.isNaN(volts) ? null : volts,
+    level: levelName(level),
+    volts,
     degraded: (flags & FLAG_DEGRADED) !== 0,
     contention: (flags & FLAG_CONTENTION) !== 0,
     chargeShared: (flags & FLAG_CHARGE_SHARED) !== 0,
@@ -68,7 +75,7 @@ export function netState(result: SolvedArrays, net: number): NetState {
   };
 }
 
-function conductionName(code: number): Conduction {
+export function conductionName(code: number): Conduction {
   return code === ON ? 'on' : code === MAYBE ? 'maybe' : 'off';
 }
 
@@ -91,7 +98,7 @@ export function traceOf(compiled: CompiledNetlist, path: SolvedArrays['paths'][n
 /** Channel element of each device name, built once per compiled netlist (not per vector). */
 const elementIndex = new WeakMap<CompiledNetlist, Map<string, number>>();
 
-function elementsByName(compiled: CompiledNetlist): Map<string, number> {
+export function elementsByName(compiled: CompiledNetlist): Map<string, number> {
   let index = elementIndex.get(compiled);
   if (index === undefined) {
     index = new Map(Array.from({ length: compiled.chCount }, (_, e) => [deviceName(compiled, e), e]));
@@ -103,6 +110,8 @@ function elementsByName(compiled: CompiledNetlist): Map<string, number> {
 export function solvedView(compiled: CompiledNetlist, result: SolvedArrays): SolvedView {
   const cache = new Map<number, NetState>();
   return {
+    compiled,
+    result,
     netNames: compiled.netNames,
     net(name) {
       const n = compiled.netIndex.get(name);

@@ -180,15 +180,26 @@ export class ViewCache {
     this.pending = [];
     if (ctx === null || p === null) return;
     const pad = 1.5 / p.view.scale; // antialiased edges reach a pixel past a shape
+    // Each area grows to whole pixels of the bitmap, so the clip has no soft edge: a pixel is either
+    // drawn afresh or left alone, and a repaint leaves exactly what a full render would.
+    const k = p.ratio * p.view.scale;
+    const ox = p.ratio * (p.view.x - p.left);
+    const oy = p.ratio * (p.view.y - p.top);
+    const snapped = areas.map((a) => ({
+      x0: (Math.floor(k * (a.x0 - pad) + ox) - ox) / k,
+      y0: (Math.floor(k * (a.y0 - pad) + oy) - oy) / k,
+      x1: (Math.ceil(k * (a.x1 + pad) + ox) - ox) / k,
+      y1: (Math.ceil(k * (a.y1 + pad) + oy) - oy) / k,
+    }));
     ctx.save();
     ctx.beginPath();
-    for (const a of areas) ctx.rect(a.x0 - pad, a.y0 - pad, a.x1 - a.x0 + 2 * pad, a.y1 - a.y0 + 2 * pad);
+    for (const a of snapped) ctx.rect(a.x0, a.y0, a.x1 - a.x0, a.y1 - a.y0);
     ctx.clip();
-    const all = areas.reduce((u, a) => ({
-      x0: Math.min(u.x0, a.x0 - pad),
-      y0: Math.min(u.y0, a.y0 - pad),
-      x1: Math.max(u.x1, a.x1 + pad),
-      y1: Math.max(u.y1, a.y1 + pad),
+    const all = snapped.reduce((u, a) => ({
+      x0: Math.min(u.x0, a.x0),
+      y0: Math.min(u.y0, a.y0),
+      x1: Math.max(u.x1, a.x1),
+      y1: Math.max(u.y1, a.y1),
     }));
     ctx.clearRect(all.x0, all.y0, all.x1 - all.x0, all.y1 - all.y0);
     paint(ctx, all, p.view.scale);

@@ -2,10 +2,12 @@
  * The levels of one vector painted into an area (sheet units): every wire and pin lead in its
  * level's look, the level marks with their problem badges, each transistor's on/off/maybe shape.
  * One path and one stroke per look, so a big sheet costs a few canvas calls; what to paint comes
- * from the pure paint model (core/view/overlayPaint.ts), which tests read without a canvas.
+ * from the pure paint model (core/view/overlayPaint.ts), which tests read without a canvas, and
+ * only the shapes filed near the area (core/view/paintTiles.ts) are visited.
  */
 import type { Rect } from '../../core/sheet/geometry.ts';
 import type { OverlayPaint, PaintLayout } from '../../core/view/overlayPaint.ts';
+import { shapesIn, type ShapesIn } from '../../core/view/paintTiles.ts';
 import { LOOKS, type Conduction, type LookName } from '../../core/view/visualLanguage.ts';
 import { SHEET_THEME } from '../theme.ts';
 
@@ -42,20 +44,28 @@ export interface LevelScene {
   readonly paint: OverlayPaint;
 }
 
-function paintStrokes(
-  ctx: CanvasRenderingContext2D,
-  area: Rect,
-  scale: number,
-  { layout, paint }: LevelScene,
-): void {
+/** The scene with the layout entries near the area being painted (all of them when it is large). */
+export interface Near extends LevelScene {
+  readonly near: ShapesIn | null;
+}
+
+/** Calls `visit` on the listed positions, or on every position below `count` when there is no list. */
+function eachOf(list: readonly number[] | undefined, count: number, visit: (i: number) => void): void {
+  if (list !== undefined) for (const i of list) visit(i);
+  else for (let i = 0; i < count; i++) visit(i);
+}
+
+function paintStrokes(ctx: CanvasRenderingContext2D, area: Rect, scale: number, scene: Near): void {
+  const { layout, paint } = scene;
   const byLook = new Map<LookName, (readonly number[])[]>();
-  for (const segment of layout.segments) {
+  eachOf(scene.near?.segments, layout.segments.length, (s) => {
+    const segment = layout.segments[s]!;
     const entry = paint.nets[segment.net];
-    if (entry == null || !meets(segment.points, area)) continue;
+    if (entry == null || !meets(segment.points, area)) return;
     const list = byLook.get(entry.look);
     if (list) list.push(segment.points);
     else byLook.set(entry.look, [segment.points]);
-  }
+  });
   ctx.lineCap = 'butt';
   ctx.lineJoin = 'round';
   ctx.lineWidth = LEVEL_STROKE;
@@ -77,33 +87,43 @@ function paintStrokes(
 }
 
 /** Level marks and problem badges as text, haloed in the sheet colour so they read over ink. */
-function paintMarks(ctx: CanvasRenderingContext2D, area: Rect, paint: OverlayPaint): void {
+function paintMarks(ctx: CanvasRenderingContext2D, area: Rect, { layout, paint, near }: Near): void {
   ctx.font = `bold ${MARK_FONT}px sans-serif`;
   ctx.textBaseline = 'top';
   ctx.textAlign = 'left';
   ctx.lineWidth = 0.12;
   ctx.strokeStyle = SHEET_THEME.background;
-  for (const m of paint.marks) {
-    if (m.x > area.x1 || m.y > area.y1 || m.x + 3 < area.x0 || m.y + 1 < area.y0) continue;
-    ctx.strokeText(m.text, m.x, m.y);
-    ctx.fillStyle = LOOKS[m.look].colour;
-    ctx.fillText(m.text, m.x, m.y);
-  }
+  eachOf(near?.marks, layout.marks.length, (k) => {
+    const m = layout.marks[k]!;
+    const entry = paint.nets[m.net];
+    if (entry == null || m.x > area.x1 || m.y > area.y1 || m.x + 3 < area.x0 || m.y + 1 < area.y0) return;
+    ctx.strokeText(entry.text, m.x, m.y);
+    ctx.fillStyle = LOOKS[entry.look].colour;
+    ctx.fillText(entry.text, m.x, m.y);
+  });
 }
 
 /**
  * Transistor states as shapes: filled dot = conducting, hollow ring = off, ring with "?" = maybe
  * (its gate is unknown). Colour repeats the shape; it never carries the meaning alone.
  */
-function paintDevices(ctx: CanvasRenderingContext2D, area: Rect, paint: OverlayPaint): void {
+function paintDevices(ctx: CanvasRenderingContext2D, area: Rect, { layout, paint, near }: Near): void {
   ctx.lineWidth = 0.08;
   ctx.font = 'bold 0.42px sans-serif';
   ctx.textAlign = 'center';
   ctx.textBaseline = 'middle';
-  for (const d of paint.devices) {
-    if (d.x + RADIUS < area.x0 || d.x - RADIUS > area.x1 || d.y + RADIUS < area.y0 || d.y - RADIUS > area.y1)
-      continue;
-    const style = DEVICE_STYLE[d.conduction];
+  eachOf(near?.devices, layout.devices.length, (i) => {
+    const d = layout.devices[i]!;
+    const conduction = paint.conduction[i];
+    if (
+      conduction === undefined ||
+      d.x + RADIUS < area.x0 ||
+      d.x - RADIUS > area.x1 ||
+      d.y + RADIUS < area.y0 ||
+      d.y - RADIUS > area.y1
+    )
+      return;
+    const style = DEVICE_STYLE[conduction];
     ctx.beginPath();
     ctx.arc(d.x, d.y, RADIUS, 0, 2 * Math.PI, false);
     ctx.fillStyle = style.fill;
@@ -114,7 +134,7 @@ function paintDevices(ctx: CanvasRenderingContext2D, area: Rect, paint: OverlayP
       ctx.fillStyle = style.stroke;
       ctx.fillText(style.text, d.x, d.y + 0.02);
     }
-  }
+  });
 }
 
 /** Below these zooms (pixels per grid unit) device marks, then level marks, would be specks: left out. */
@@ -127,7 +147,13 @@ export function paintOverlay(
   scale: number,
   scene: LevelScene,
 ): void {
+  // Only what lies near the area is visited: a toggle's repaint of a few tiles reads a few shapes.
+  paintNear(ctx, area, scale, { ...scene, near: shapesIn(scene.layout, area) });
+}
+
+/** Paints the scene's shapes listed in `near` (every shape when it is null) that meet the area. */
+export function paintNear(ctx: CanvasRenderingContext2D, area: Rect, scale: number, scene: Near): void {
   paintStrokes(ctx, area, scale, scene);
-  if (scale >= DEVICES_FROM_PX) paintDevices(ctx, area, scene.paint);
-  if (scale >= MARKS_FROM_PX) paintMarks(ctx, area, scene.paint);
+  if (scale >= DEVICES_FROM_PX) paintDevices(ctx, area, scene);
+  if (scale >= MARKS_FROM_PX) paintMarks(ctx, area, scene);
 }
