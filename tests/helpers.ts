@@ -53,3 +53,22 @@ export function leading<T, N extends number>(list: readonly T[], count: N): Lead
   if (list.length < count) throw new Error(`expected at least ${count} items, got ${list.length}`);
   return list.slice(0, count) as Leading<T, N>;
 }
+
+/**
+ * Everything a solve reports that levels, findings and currents are built from, as plain data that
+ * `toEqual` compares (NaN written out, currents to 7 significant digits).
+ */
+export function solveSnapshot(r: SolveResult) {
+  const text = (a: Float64Array, digits: number) =>
+    Array.from(a, (v) => (Number.isNaN(v) ? 'nan' : v.toExponential(digits)));
+  return {
+    volts: text(r.volts, 9),
+    driven: Array.from(r.driven),
+    levels: Array.from(r.levels),
+    flags: Array.from(r.flags),
+    limiter: Array.from(r.limiter),
+    conduction: Array.from(r.conduction),
+    current: text(r.chCurrent, 6),
+    settled: r.settled,
+  };
+}

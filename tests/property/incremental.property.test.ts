@@ -5,21 +5,10 @@ import type { InputValue, InputVector } from '../../src/core/model/design.ts';
 import { DEFAULT_TECHNOLOGY } from '../../src/core/model/technology.ts';
 import { Simulator, type SolveResult } from '../../src/core/solver/simulator.ts';
 import { STARTERS } from '../../src/core/starters/index.ts';
+import { solveSnapshot } from '../helpers.ts';
 import { randomNetlist } from './generators.ts';
 import { inverterChain, rippleAdder } from '../../bench/generators/index.ts';
 import { toggleWalk } from '../../bench/vectors.ts';
-
-/** Everything a solve reports, as comparable plain data. */
-function snapshot(r: SolveResult) {
-  return {
-    volts: Array.from(r.volts, (v) => (Number.isNaN(v) ? 'nan' : v.toFixed(9))),
-    levels: Array.from(r.levels),
-    flags: Array.from(r.flags),
-    conduction: Array.from(r.conduction),
-    current: Array.from(r.chCurrent, (i) => i.toExponential(6)),
-    settled: r.settled,
-  };
-}
 
 const value = fc.constantFrom<InputValue>('0', '1', '0', '1', 'X', 'Z');
 
@@ -40,9 +29,9 @@ describe('incremental re-evaluation', () => {
             const v: InputVector = Object.fromEntries(
               netlist.inputs.map((n, i) => [n, row[i % row.length]!]),
             );
-            const expected = snapshot(new Simulator(compiled).solveFresh(v));
-            expect(snapshot(reused.solveFresh(v))).toEqual(expected);
-            expect(snapshot(recycling.solveFresh(v, { recycle: true }))).toEqual(expected);
+            const expected = solveSnapshot(new Simulator(compiled).solveFresh(v));
+            expect(solveSnapshot(reused.solveFresh(v))).toEqual(expected);
+            expect(solveSnapshot(recycling.solveFresh(v, { recycle: true }))).toEqual(expected);
           }
         },
       ),
@@ -66,7 +55,7 @@ describe('incremental re-evaluation', () => {
             );
             a = a ? fast.solveNext(v, a) : fast.solveFresh(v);
             b = b ? full.solveNext(v, b) : full.solveFresh(v);
-            expect(snapshot(a)).toEqual(snapshot(b));
+            expect(solveSnapshot(a)).toEqual(solveSnapshot(b));
           }
         },
       ),
@@ -89,9 +78,9 @@ describe('incremental re-evaluation', () => {
     for (const v of walk.slice(1)) {
       a = fast.solveNext(v, a);
       b = full.solveNext(v, b);
-      expect(snapshot(a)).toEqual(snapshot(b));
+      expect(solveSnapshot(a)).toEqual(solveSnapshot(b));
       const r = fast.solveFresh(v, { recycle: true });
-      expect(snapshot(r)).toEqual(snapshot(new Simulator(compiled).solveFresh(v)));
+      expect(solveSnapshot(r)).toEqual(solveSnapshot(new Simulator(compiled).solveFresh(v)));
     }
   });
 });

@@ -10,6 +10,7 @@ import { OutcomeStore } from '../../src/core/solver/memo.ts';
 import { Simulator, type SolveResult } from '../../src/core/solver/simulator.ts';
 import { buildTopology } from '../../src/core/solver/topology.ts';
 import { STARTERS } from '../../src/core/starters/index.ts';
+import { solveSnapshot } from '../helpers.ts';
 import { randomNetlist } from '../property/generators.ts';
 import { passGateCell } from '../property/passGateCells.ts';
 
@@ -27,22 +28,6 @@ function nand2(): Netlist {
     .nmos('NA', { g: 'A', d: 'Y', s: 'm', w: 2 })
     .nmos('NB', { g: 'B', d: 'm', s: 'GND', w: 2 })
     .build();
-}
-
-/** Everything a solve reports that findings are built from, as comparable plain data. */
-function snapshot(r: SolveResult) {
-  const text = (a: Float64Array, digits: number) =>
-    Array.from(a, (v) => (Number.isNaN(v) ? 'nan' : v.toExponential(digits)));
-  return {
-    volts: text(r.volts, 9),
-    driven: Array.from(r.driven),
-    levels: Array.from(r.levels),
-    flags: Array.from(r.flags),
-    limiter: Array.from(r.limiter),
-    conduction: Array.from(r.conduction),
-    current: text(r.chCurrent, 6),
-    settled: r.settled,
-  };
 }
 
 describe('outcome memo with unknown inputs', () => {
@@ -65,7 +50,7 @@ describe('outcome memo with unknown inputs', () => {
     const got = order.map((v) => y(warm.solveFresh(v)));
     expect(got).toEqual(['1', '0', '1', 'X', 'X', '1', 'X']);
     for (const v of order)
-      expect(snapshot(warm.solveFresh(v))).toEqual(snapshot(new Simulator(compiled).solveFresh(v)));
+      expect(solveSnapshot(warm.solveFresh(v))).toEqual(solveSnapshot(new Simulator(compiled).solveFresh(v)));
   });
 
   it('a component that an undriven input does not touch shares its table; one it joins does not', () => {
@@ -115,7 +100,9 @@ describe('outcome memo with unknown inputs', () => {
             const v: InputVector = Object.fromEntries(
               netlist.inputs.map((n, i) => [n, row[i % row.length]!]),
             );
-            expect(snapshot(reused.solveFresh(v))).toEqual(snapshot(new Simulator(compiled).solveFresh(v)));
+            expect(solveSnapshot(reused.solveFresh(v))).toEqual(
+              solveSnapshot(new Simulator(compiled).solveFresh(v)),
+            );
           }
         },
       ),
