@@ -30,6 +30,8 @@ interface Tables {
   /** Per component: states by hash of their key. */
   readonly states: (Map<number, Entry[]> | undefined)[];
   readonly stored: Int32Array;
+  /** Per component: the state it was last found in. */
+  readonly last: (Entry | undefined)[];
   /** Per component: the number of the vector that last touched it. */
   readonly seen: Int32Array;
   /** Scratch key, long enough for the largest component, and its 32-bit words for hashing. */
@@ -83,12 +85,15 @@ export class ComponentLeakageMemo {
     volts: Float64Array,
   ): void {
     const words = 2 * writeKey(result, k, tables.sourcesAround[k]!, tables.key);
-    const hash = hashWords(tables.words, words);
-    const states = (tables.states[k] ??= new Map<number, Entry[]>());
-    const bucket = states.get(hash);
-    for (const entry of bucket ?? []) {
-      if (!sameKey(entry.key, tables.words, words)) continue;
-      for (let i = 0; i < entry.nets.length; i++) volts[entry.nets[i]!] = entry.volts[i]!;
+    const last = tables.last[k];
+    // A component most often keeps its state from one vector to the next: try that before hashing.
+    const hit =
+      last && sameKey(last.key, tables.words, words)
+        ? last
+        : lookUp(tables, k, words, hashWords(tables.words, words));
+    if (hit) {
+      tables.last[k] = hit;
+      for (let i = 0; i < hit.nets.length; i++) volts[hit.nets[i]!] = hit.volts[i]!;
       return;
     }
     const { cccOfNet } = result.topology;
@@ -104,8 +109,12 @@ export class ComponentLeakageMemo {
       nets: Int32Array.from(free),
       volts: Float64Array.from(free, (n) => volts[n]!),
     };
+    const states = (tables.states[k] ??= new Map<number, Entry[]>());
+    const hash = hashWords(tables.words, words);
+    const bucket = states.get(hash);
     if (bucket) bucket.push(entry);
     else states.set(hash, [entry]);
+    tables.last[k] = entry;
   }
 
   private tablesOf(topology: Topology): Tables {
@@ -139,6 +148,7 @@ function newTables(topology: Topology, c: CompiledNetlist): Tables {
     sourcesAround,
     states: new Array<Map<number, Entry[]> | undefined>(cccCount),
     stored: new Int32Array(cccCount),
+    last: new Array<Entry | undefined>(cccCount),
     seen: new Int32Array(cccCount),
     key,
     words: new Uint32Array(key.buffer),
@@ -170,6 +180,14 @@ function writeKey(result: SolveResult, k: number, sourcesAround: Int32Array, key
   }
   if (count > 0) key[p++] = bits;
   return p;
+}
+
+/** The stored state of component k whose key is the scratch key's first `words` words. */
+function lookUp(tables: Tables, k: number, words: number, hash: number): Entry | undefined {
+  for (const entry of tables.states[k]?.get(hash) ?? []) {
+    if (sameKey(entry.key, tables.words, words)) return entry;
+  }
+  return undefined;
 }
 
 /** FNV-1a over 32-bit words. */
