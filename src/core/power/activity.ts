@@ -27,7 +27,9 @@ export class ActivityCounter {
   private readonly lowVolts: Float64Array;
   private readonly highVolts: Float64Array;
   private readonly indefinite: Uint8Array;
-  private previous: Int8Array | null = null;
+  /** Levels of the last result added (0, 1, −1 for neither), and the buffer the next one fills. */
+  private previous: Int8Array;
+  private levels: Int8Array;
   private results = 0;
 
   constructor(private readonly nets: number) {
@@ -37,11 +39,14 @@ export class ActivityCounter {
     this.lowVolts = new Float64Array(nets);
     this.highVolts = new Float64Array(nets);
     this.indefinite = new Uint8Array(nets);
+    this.previous = new Int8Array(nets);
+    this.levels = new Int8Array(nets);
   }
 
   add(result: SolveResult): void {
     const { vil, vih } = result.compiled.tech;
-    const levels = new Int8Array(this.nets);
+    const { levels, previous } = this;
+    const first = this.results === 0;
     for (let n = 0; n < this.nets; n++) {
       const v = result.volts[n]!;
       const level = classify(v, vil, vih);
@@ -53,9 +58,10 @@ export class ActivityCounter {
         this.ones[n]!++;
         this.highVolts[n]! += v;
       } else this.indefinite[n] = 1;
-      if (this.previous?.[n] === 0 && levels[n] === 1) this.rises[n]!++;
+      if (!first && previous[n] === 0 && levels[n] === 1) this.rises[n]!++;
     }
     this.previous = levels;
+    this.levels = previous;
     this.results++;
   }
 

@@ -1,11 +1,58 @@
 // Indexes here are in range by construction (compiled-netlist and per-net arrays), so `!` marks them (no run-time cost).
 import { LuDecomposition, Matrix } from 'ml-matrix';
+import type { CompiledNetlist } from '../compile/compile.ts';
+import { OFF } from '../solver/levels.ts';
+import type { SolveResult } from '../solver/simulator.ts';
 
 /** A conductance between two nets, siemens. */
 export interface Stamp {
   readonly a: number;
   readonly b: number;
   readonly g: number;
+}
+
+/** True where a net holds its solved voltage in the leakage network: driven, and not X. */
+export function isFixed(result: SolveResult, net: number): boolean {
+  return result.driven[net] === 1 && !Number.isNaN(result.volts[net]);
+}
+
+/**
+ * Solves the undriven nets that the off transistors `stamps` touch, writing their voltages into
+ * `volts` (a copy of the solved voltages) and returning them. The undriven nets are those at the ends
+ * of the stamps and every undriven net joined to them by a conducting device: a floating stack joint
+ * two conducting devices away still carries the leakage current through. `localOf` is −1 for every
+ * net on entry and on return.
+ */
+export function settleUndriven(
+  c: CompiledNetlist,
+  result: SolveResult,
+  stamps: readonly Stamp[],
+  volts: Float64Array,
+  localOf: Int32Array,
+): readonly number[] {
+  const free: number[] = [];
+  const mark = (n: number): void => {
+    if (localOf[n]! < 0 && !isFixed(result, n)) localOf[n] = free.push(n) - 1;
+  };
+  for (const s of stamps) {
+    mark(s.a);
+    mark(s.b);
+  }
+  const joins: [number, number][] = [];
+  // `free` grows while it is walked: a breadth-first search through conducting devices.
+  for (let i = 0; i < free.length; i++) {
+    const n = free[i]!;
+    for (let k = c.netChannels.start[n]!; k < c.netChannels.start[n + 1]!; k++) {
+      const e = c.netChannels.items[k]!;
+      const other = c.chA[e] === n ? c.chB[e]! : c.chA[e]!;
+      if (result.conduction[e] === OFF || isFixed(result, other)) continue;
+      mark(other);
+      joins.push([n, other]);
+    }
+  }
+  solveFreeNets(stamps, joins, volts, free, localOf);
+  for (const n of free) localOf[n] = -1;
+  return free;
 }
 
 /**

@@ -38,7 +38,7 @@ export interface PowerCounts {
 
 /** Random activity assumes every input driven to 0 or 1; a sweep that also tries Z skips those. */
 function drivesEveryInput(inputs: InputVector): boolean {
-  for (const value of Object.values(inputs)) if (value !== '0' && value !== '1') return false;
+  for (const name in inputs) if (inputs[name] !== '0' && inputs[name] !== '1') return false;
   return true;
 }
 
