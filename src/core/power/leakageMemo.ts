@@ -3,6 +3,7 @@ import type { CompiledNetlist } from '../compile/compile.ts';
 import { OFF } from '../solver/levels.ts';
 import type { SolveResult } from '../solver/simulator.ts';
 import type { Topology } from '../solver/topology.ts';
+import { sameValues, SignatureMap } from '../tables/signature.ts';
 import { isFixed } from './leakageNetwork.ts';
 
 /** Stored states per channel-connected component; further states are solved each time they occur. */
@@ -17,7 +18,7 @@ export type SettleUndriven = (
 
 /** One solved state of a component: its key, and the voltages its undriven nets settled at. */
 interface Entry {
-  readonly key: Uint32Array;
+  readonly key: Float64Array;
   readonly nets: Int32Array;
   readonly volts: Float64Array;
 }
@@ -27,16 +28,15 @@ interface Tables {
   readonly sources: Int32Array;
   /** Per component: the source nets at the ends of its elements. */
   readonly sourcesAround: readonly Int32Array[];
-  /** Per component: states by hash of their key. */
-  readonly states: (Map<number, Entry[]> | undefined)[];
+  /** Per component: its states by key. */
+  readonly states: (SignatureMap<Entry> | undefined)[];
   readonly stored: Int32Array;
   /** Per component: the state it was last found in. */
   readonly last: (Entry | undefined)[];
   /** Per component: the number of the vector that last touched it. */
   readonly seen: Int32Array;
-  /** Scratch key, long enough for the largest component, and its 32-bit words for hashing. */
+  /** Scratch key, long enough for the largest component. */
   readonly key: Float64Array;
-  readonly words: Uint32Array;
 }
 
 /**
@@ -84,13 +84,10 @@ export class ComponentLeakageMemo {
     pending: Int32Array,
     volts: Float64Array,
   ): void {
-    const words = 2 * writeKey(result, k, tables.sourcesAround[k]!, tables.key);
+    const key = tables.key.subarray(0, writeKey(result, k, tables.sourcesAround[k]!, tables.key));
     const last = tables.last[k];
     // A component most often keeps its state from one vector to the next: try that before hashing.
-    const hit =
-      last && sameKey(last.key, tables.words, words)
-        ? last
-        : lookUp(tables, k, words, hashWords(tables.words, words));
+    const hit = last && sameValues(last.key, key) ? last : tables.states[k]?.get(key);
     if (hit) {
       tables.last[k] = hit;
       for (let i = 0; i < hit.nets.length; i++) volts[hit.nets[i]!] = hit.volts[i]!;
@@ -105,15 +102,11 @@ export class ComponentLeakageMemo {
     if (tables.stored[k]! >= MAX_LEAKAGE_STATES) return;
     tables.stored[k]!++;
     const entry: Entry = {
-      key: tables.words.slice(0, words),
+      key: key.slice(),
       nets: Int32Array.from(free),
       volts: Float64Array.from(free, (n) => volts[n]!),
     };
-    const states = (tables.states[k] ??= new Map<number, Entry[]>());
-    const hash = hashWords(tables.words, words);
-    const bucket = states.get(hash);
-    if (bucket) bucket.push(entry);
-    else states.set(hash, [entry]);
+    (tables.states[k] ??= new SignatureMap<Entry>()).set(key, entry);
     tables.last[k] = entry;
   }
 
@@ -142,16 +135,14 @@ function newTables(topology: Topology, c: CompiledNetlist): Tables {
     const elements = cccElements.start[k + 1]! - cccElements.start[k]!;
     longest = Math.max(longest, nets + around.size + Math.ceil(elements / 32));
   }
-  const key = new Float64Array(longest);
   return {
     sources: Int32Array.from(isSource.keys()).filter((n) => isSource[n] === 1),
     sourcesAround,
-    states: new Array<Map<number, Entry[]> | undefined>(cccCount),
+    states: new Array<SignatureMap<Entry> | undefined>(cccCount),
     stored: new Int32Array(cccCount),
     last: new Array<Entry | undefined>(cccCount),
     seen: new Int32Array(cccCount),
-    key,
-    words: new Uint32Array(key.buffer),
+    key: new Float64Array(longest),
   };
 }
 
@@ -180,26 +171,4 @@ function writeKey(result: SolveResult, k: number, sourcesAround: Int32Array, key
   }
   if (count > 0) key[p++] = bits;
   return p;
-}
-
-/** The stored state of component k whose key is the scratch key's first `words` words. */
-function lookUp(tables: Tables, k: number, words: number, hash: number): Entry | undefined {
-  for (const entry of tables.states[k]?.get(hash) ?? []) {
-    if (sameKey(entry.key, tables.words, words)) return entry;
-  }
-  return undefined;
-}
-
-/** FNV-1a over 32-bit words. */
-function hashWords(words: Uint32Array, count: number): number {
-  let hash = 0x811c9dc5;
-  for (let i = 0; i < count; i++) hash = Math.imul(hash ^ words[i]!, 0x01000193);
-  return hash;
-}
-
-/** Bit for bit, so that NaN (not fixed) matches NaN; a −0 against a 0 only costs a second entry. */
-function sameKey(stored: Uint32Array, words: Uint32Array, count: number): boolean {
-  if (stored.length !== count) return false;
-  for (let i = 0; i < count; i++) if (stored[i] !== words[i]) return false;
-  return true;
 }

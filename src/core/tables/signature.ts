@@ -119,9 +119,12 @@ function hashOf(signature: Float64Array): number {
   return h;
 }
 
-/** Equal value for value (NaN never occurs: capacitances and resistances are numbers). */
-function sameValues(a: Float64Array, b: Float64Array): boolean {
+/**
+ * Equal value for value, as `Object.is` compares: NaN matches NaN (a key may mark "unknown" with it)
+ * and −0 does not match 0, so equal signatures are equal to the bit.
+ */
+export function sameValues(a: Float64Array, b: Float64Array): boolean {
   if (a.length !== b.length) return false;
-  for (let i = 0; i < a.length; i++) if (a[i] !== b[i]) return false;
+  for (let i = 0; i < a.length; i++) if (!Object.is(a[i], b[i])) return false;
   return true;
 }
