@@ -2,6 +2,9 @@
  * Transfer-curve points as CSV. The format rules are RFC 4180 (section 2): CRLF after every record
  * (2.1, 2.2), a header line (2.3), fields with a comma, quote or line break in double quotes with
  * quotes doubled (2.6, 2.7). The values are the curve's own, so they read back exactly.
+ *
+ * Sources: RFC 4180 §2 as above. That the NAND2 curve runs from 0 V to VDD (2.5 V, the default
+ * technology's supply) at its input is how a transfer curve is drawn: common practice, no source.
  */
 import { describe, expect, it } from 'vitest';
 import { transferCurves, type TransferReport } from '../../src/core/dc/transfer.ts';

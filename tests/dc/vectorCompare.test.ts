@@ -1,6 +1,11 @@
 /**
  * One vector's level-1 answer beside its switch-level estimate (docs/semantics.md §2, "DC levels",
  * 6), as the app's Vector view shows it.
+ *
+ * Sources: the two sides are the engine's own answers (checkSweep and the level-1 sweep), compared, not
+ * published. That a ratioed (pseudo-NMOS) NOR's low output sits above 0 V and draws static current is
+ * Weste & Harris, CMOS VLSI Design, 4th ed. (2011), §9.2.2 on pseudo-nMOS (from memory); that a set SR
+ * latch holds Q at VDD is its truth table: common practice, no source.
  */
 import { describe, expect, it } from 'vitest';
 import { checkSweep } from '../../src/core/analysis/check.ts';

@@ -1,3 +1,12 @@
+/**
+ * Per-vector level-1 DC beside the switch-level estimate (docs/semantics.md §2, "DC levels").
+ *
+ * Sources: the NAND2 levels are its truth table and an SR latch holds what it was set to (common
+ * practice, no source); a ratioed (pseudo-NMOS) NOR's low output above 0 V with static current is
+ * Weste & Harris, CMOS VLSI Design, 4th ed. (2011), §9.2.2 (from memory); a transmission gate passes
+ * both rails undegraded, W&H ch. 1 on pass transistors (common practice). 2.5 V is the default
+ * technology's VDD.
+ */
 import { describe, expect, it } from 'vitest';
 import { checkSweep } from '../../src/core/analysis/check.ts';
 import { dcSequence, dcSweep } from '../../src/core/dc/vectorDc.ts';

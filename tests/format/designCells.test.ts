@@ -2,6 +2,9 @@
  * Design files of several cells (version 2) and the migration from version 1: old files open as a
  * design of one cell, and every problem of the hierarchy is refused naming the field and the cells.
  * Behaviour of our own format (docs/semantics.md §1, hierarchy); no published values apply.
+ *
+ * Sources: none apply beyond the format's own rules; the example latch's function is its truth table
+ * (common practice, no source).
  */
 import { readFileSync } from 'node:fs';
 import { describe, expect, it } from 'vitest';

@@ -2,6 +2,9 @@
  * A Liberty file attached to an opened design (docs/semantics.md §4): each cell takes the published
  * functions of the library cell of its name; sequential and missing cells get notes. The library
  * text is made up; the NAND2's function ¬(A·B) is the textbook one.
+ *
+ * Sources: the `function` attribute syntax is the Liberty format's as open cell libraries publish it;
+ * the NAND2 and buffer truth tables are common practice, no source.
  */
 import { describe, expect, it } from 'vitest';
 import { checkLibraryCell } from '../../src/core/analysis/libraryCheck.ts';
